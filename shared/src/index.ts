@@ -1,0 +1,3 @@
+export * from './types/species.js';
+export * from './types/ecoregion.js';
+export * from './types/auth.js';

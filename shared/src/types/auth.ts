@@ -1,0 +1,87 @@
+import { z } from 'zod';
+
+export const GLOBAL_ROLES = ['member', 'curator', 'admin'] as const;
+export const globalRoleSchema = z.enum(GLOBAL_ROLES);
+export type GlobalRole = z.infer<typeof globalRoleSchema>;
+
+export const GROUP_ROLES = ['organiser', 'grower'] as const;
+export const groupRoleSchema = z.enum(GROUP_ROLES);
+export type GroupRole = z.infer<typeof groupRoleSchema>;
+
+/** Passwords: at least 10 characters (NIST SP 800-63B asks for 8 or more; we ask a little more). */
+export const PASSWORD_MIN_LENGTH = 10;
+export const PASSWORD_MAX_LENGTH = 200;
+
+export const registerRequestSchema = z.object({
+  email: z.string().trim().toLowerCase().email('must be an e-mail address').max(254),
+  password: z
+    .string()
+    .min(PASSWORD_MIN_LENGTH, `must be at least ${PASSWORD_MIN_LENGTH} characters`)
+    .max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
+  displayName: z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters'),
+});
+export type RegisterRequest = z.infer<typeof registerRequestSchema>;
+
+export const loginRequestSchema = z.object({
+  email: z.string().trim().toLowerCase().email('must be an e-mail address'),
+  password: z.string().min(1, 'must not be empty'),
+});
+export type LoginRequest = z.infer<typeof loginRequestSchema>;
+
+export interface GroupMembership {
+  groupId: string;
+  groupSlug: string;
+  groupName: string;
+  role: GroupRole;
+}
+
+export interface User {
+  id: string;
+  email: string;
+  displayName: string;
+  role: GlobalRole;
+  groups: GroupMembership[];
+  createdAt: string;
+}
+
+export interface AuthResponse {
+  /** A JWT to send as `Authorization: Bearer <token>`. */
+  accessToken: string;
+  /** Seconds until the token expires. */
+  expiresIn: number;
+  user: User;
+}
+
+/** The one error shape every API error uses. */
+export interface ApiError {
+  statusCode: number;
+  error: string;
+  message: string;
+  /** For 400s: each bad field with the reason. */
+  fields?: { field: string; message: string }[];
+}
+
+export interface HealthResponse {
+  status: 'ok' | 'degraded';
+  version: string;
+  database: { status: 'up' | 'down'; migrations: number };
+  uptimeSeconds: number;
+}
+
+/** Live counts for the home page. */
+export interface StatsResponse {
+  species: number;
+  groups: number;
+  ecoregions: number;
+  users: number;
+}
+
+export interface Group {
+  id: string;
+  slug: string;
+  name: string;
+  town: string;
+  state: string;
+  ecoregionCode: string | null;
+  members: number;
+}

@@ -1,0 +1,171 @@
+import { z } from 'zod';
+
+/**
+ * The species catalogue's record shape. One record per species lives in
+ * `species-data/species/<slug>.json`; the API stores the same shape in SQLite.
+ * Sizes are stored in SI (centimetres); the web shows US units beside them.
+ */
+
+/** USPS codes of the 48 conterminous states plus DC: the range Homeground covers. */
+export const US_STATE_CODES = [
+  'AL', 'AR', 'AZ', 'CA', 'CO', 'CT', 'DC', 'DE', 'FL', 'GA', 'IA', 'ID', 'IL', 'IN', 'KS', 'KY',
+  'LA', 'MA', 'MD', 'ME', 'MI', 'MN', 'MO', 'MS', 'MT', 'NC', 'ND', 'NE', 'NH', 'NJ', 'NM', 'NV',
+  'NY', 'OH', 'OK', 'OR', 'PA', 'RI', 'SC', 'SD', 'TN', 'TX', 'UT', 'VA', 'VT', 'WA', 'WI', 'WV', 'WY',
+] as const;
+export const stateCodeSchema = z.enum(US_STATE_CODES);
+export type StateCode = z.infer<typeof stateCodeSchema>;
+
+export const GROWTH_FORMS = ['forb', 'graminoid', 'fern', 'shrub', 'vine', 'tree'] as const;
+export const growthFormSchema = z.enum(GROWTH_FORMS);
+export type GrowthForm = z.infer<typeof growthFormSchema>;
+
+export const LIFESPANS = ['annual', 'biennial', 'short-lived-perennial', 'perennial'] as const;
+export const lifespanSchema = z.enum(LIFESPANS);
+
+export const SUN_LEVELS = ['full', 'part', 'shade'] as const;
+export const sunSchema = z.enum(SUN_LEVELS);
+export type Sun = z.infer<typeof sunSchema>;
+
+export const MOISTURE_LEVELS = ['dry', 'medium', 'wet'] as const;
+export const moistureSchema = z.enum(MOISTURE_LEVELS);
+export type Moisture = z.infer<typeof moistureSchema>;
+
+export const SOIL_TEXTURES = ['sand', 'loam', 'clay', 'rocky'] as const;
+export const soilTextureSchema = z.enum(SOIL_TEXTURES);
+export type SoilTexture = z.infer<typeof soilTextureSchema>;
+
+export const FLOWER_COLOURS = [
+  'white', 'cream', 'yellow', 'orange', 'red', 'pink', 'magenta', 'purple', 'lavender', 'blue',
+  'green', 'brown',
+] as const;
+export const flowerColourSchema = z.enum(FLOWER_COLOURS);
+export type FlowerColour = z.infer<typeof flowerColourSchema>;
+
+/**
+ * Natural plant communities. Ecoregions list the communities they hold with the same words,
+ * so a species' habitats can be matched to a region.
+ */
+export const HABITATS = [
+  'prairie', 'sand-prairie', 'wet-prairie', 'savanna', 'open-woodland', 'forest', 'floodplain-forest',
+  'wetland', 'marsh', 'fen-bog', 'streambank', 'glade', 'rock-outcrop', 'dune', 'coastal-plain',
+  'pine-barrens', 'old-field', 'shortgrass-prairie', 'mixed-grass-prairie',
+] as const;
+export const habitatSchema = z.enum(HABITATS);
+export type Habitat = z.infer<typeof habitatSchema>;
+
+export const SPREAD_HABITS = ['clumping', 'spreading', 'aggressive'] as const;
+export const spreadHabitSchema = z.enum(SPREAD_HABITS);
+
+export const DEER_RESISTANCE = ['low', 'medium', 'high'] as const;
+export const deerResistanceSchema = z.enum(DEER_RESISTANCE);
+
+/** The pre-sowing treatments the trade uses, in the order they are applied. */
+export const TREATMENT_KINDS = [
+  'none', 'cold-moist', 'warm-moist', 'scarification', 'hot-water', 'inoculant',
+] as const;
+export const treatmentStepSchema = z.object({
+  kind: z.enum(TREATMENT_KINDS),
+  /** Length of a moist stratification step, in days (cold-moist and warm-moist only). */
+  days: z.number().int().min(1).max(365).optional(),
+  /** Plain words for the grower, e.g. "nick the seed coat with a nail file". */
+  note: z.string().optional(),
+});
+export type TreatmentStep = z.infer<typeof treatmentStepSchema>;
+
+export const SOWING_METHODS = [
+  'outdoor-pot-winter', 'winter-sowing', 'indoor-lights', 'soil-blocks', 'direct-seed',
+] as const;
+export const sowingMethodSchema = z.enum(SOWING_METHODS);
+export type SowingMethod = z.infer<typeof sowingMethodSchema>;
+
+export const germinationSchema = z.object({
+  treatments: z.array(treatmentStepSchema).min(1),
+  /** True when seed needs light to germinate: surface sow, press in, do not cover. */
+  needsLight: z.boolean(),
+  /** Sowing depth in millimetres; 0 means surface sow. */
+  sowingDepthMm: z.number().min(0).max(100),
+  seedsPerPound: z.number().int().positive().nullable(),
+  /** Typical germination of a good seed lot after treatment, percent. */
+  germinationRatePct: z.number().min(1).max(100),
+  methods: z.array(sowingMethodSchema).min(1),
+});
+export type Germination = z.infer<typeof germinationSchema>;
+
+export const CAUTION_KINDS = [
+  'toxic-if-eaten', 'sap-irritant', 'skin-irritant', 'eye-irritant', 'pets', 'livestock',
+  'aggressive-spreader', 'look-alike', 'protected', 'thorns',
+] as const;
+export const cautionSchema = z.object({
+  kind: z.enum(CAUTION_KINDS),
+  /** Calm, specific words shown on cards and pages. */
+  text: z.string().min(10),
+  source: z.string(),
+});
+export type Caution = z.infer<typeof cautionSchema>;
+
+export const rangeCmSchema = z
+  .object({ min: z.number().positive(), max: z.number().positive() })
+  .refine((r) => r.min <= r.max, { message: 'min must not exceed max' });
+
+export const wildlifeSchema = z.object({
+  /** Lepidoptera species whose caterpillars use the genus (Tallamy & Shropshire 2009), or null when the genus is not listed. */
+  lepidopteraGenusCount: z.number().int().min(0).nullable(),
+  monarchHost: z.boolean(),
+  pollinators: z.string(),
+  birds: z.string().optional(),
+  specialistBees: z.array(z.string()).default([]),
+});
+
+/** Facts that must each name a source key (or `from-memory`). */
+export const SOURCED_FIELDS = [
+  'usdaSymbol', 'family', 'nativeStates', 'growthForm', 'lifespan', 'heightCm', 'bloomMonths',
+  'flowerColours', 'sun', 'moisture', 'soilTextures', 'habitats', 'wildlife.lepidopteraGenusCount',
+  'wildlife.monarchHost', 'spreadHabit', 'deerResistance', 'germination.treatments',
+  'germination.seedsPerPound', 'germination.germinationRatePct',
+] as const;
+export type SourcedField = (typeof SOURCED_FIELDS)[number];
+
+/** A note explaining where the record knowingly differs from a reference. */
+export const reconciliationSchema = z.object({
+  field: z.enum(['usdaSymbol', 'scientificName', 'family', 'nativeStates']),
+  note: z.string().min(10),
+});
+
+export const slugSchema = z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'lower-case words joined by hyphens');
+
+export const speciesSchema = z.object({
+  slug: slugSchema,
+  scientificName: z.string().regex(/^[A-Z][a-z]+ [a-z-]+( (var\.|subsp\.) [a-z-]+)?$/, 'Genus species [var./subsp. name]'),
+  usdaSymbol: z.string().regex(/^[A-Z0-9]{4,8}$/),
+  family: z.string().regex(/^[A-Z][a-z]+aceae$/),
+  commonNames: z.array(z.string().min(2)).min(1),
+  synonyms: z.array(z.string()).default([]),
+  growthForm: growthFormSchema,
+  lifespan: lifespanSchema,
+  heightCm: rangeCmSchema,
+  spreadCm: rangeCmSchema,
+  bloomMonths: z.array(z.number().int().min(1).max(12)),
+  flowerColours: z.array(flowerColourSchema),
+  sun: z.array(sunSchema).min(1),
+  moisture: z.array(moistureSchema).min(1),
+  soilTextures: z.array(soilTextureSchema).min(1),
+  nativeStates: z.array(stateCodeSchema).min(1),
+  habitats: z.array(habitatSchema).min(1),
+  wildlife: wildlifeSchema,
+  spreadHabit: spreadHabitSchema,
+  deerResistance: deerResistanceSchema,
+  germination: germinationSchema,
+  cautions: z.array(cautionSchema).default([]),
+  tags: z.array(z.enum(['spring-ephemeral', 'evergreen', 'nitrogen-fixer', 'keystone', 'rain-garden', 'groundcover'])).default([]),
+  sources: z.record(z.enum(SOURCED_FIELDS), z.string()),
+  reconciliations: z.array(reconciliationSchema).default([]),
+});
+export type Species = z.infer<typeof speciesSchema>;
+export type SpeciesInput = z.input<typeof speciesSchema>;
+
+export const sourceSchema = z.object({
+  key: z.string().regex(/^[a-z0-9-]+$/),
+  citation: z.string().min(10),
+  url: z.string().url().optional(),
+});
+export type Source = z.infer<typeof sourceSchema>;
