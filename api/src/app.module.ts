@@ -1,0 +1,37 @@
+import { existsSync } from 'node:fs';
+import { type DynamicModule, Module } from '@nestjs/common';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuthModule } from './auth/auth.module.js';
+import { APP_CONFIG, type AppConfig } from './config/app-config.js';
+import { AppConfigModule } from './config/config.module.js';
+import { databaseOptions } from './database/data-source.js';
+import { DemoModule } from './demo/demo.module.js';
+import { GroupsModule } from './groups/groups.module.js';
+import { HealthModule } from './health/health.module.js';
+import { UsersModule } from './users/users.module.js';
+
+/** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
+function webApp(): DynamicModule[] {
+  return [
+    ServeStaticModule.forRootAsync({
+      inject: [APP_CONFIG],
+      useFactory: (config: AppConfig) =>
+        existsSync(config.webDist) ? [{ rootPath: config.webDist, exclude: ['/api/{*path}'] }] : [],
+    }),
+  ];
+}
+
+@Module({
+  imports: [
+    AppConfigModule,
+    TypeOrmModule.forRootAsync({ inject: [APP_CONFIG], useFactory: (config: AppConfig) => databaseOptions(config) }),
+    ...webApp(),
+    AuthModule,
+    UsersModule,
+    GroupsModule,
+    HealthModule,
+    DemoModule,
+  ],
+})
+export class AppModule {}

@@ -1,0 +1,28 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { PassportStrategy } from '@nestjs/passport';
+import { ExtractJwt, Strategy } from 'passport-jwt';
+import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
+import { UsersService } from '../users/users.service.js';
+import type { AuthenticatedUser, JwtPayload } from './authenticated-user.js';
+
+/** Validates `Authorization: Bearer <jwt>` and reloads the user, so role changes and deletions apply at once. */
+@Injectable()
+export class JwtStrategy extends PassportStrategy(Strategy, 'jwt') {
+  constructor(
+    private readonly users: UsersService,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {
+    super({
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      ignoreExpiration: false,
+      secretOrKey: config.jwtSecret,
+      algorithms: ['HS256'],
+    });
+  }
+
+  async validate(payload: JwtPayload): Promise<AuthenticatedUser | null> {
+    const user = await this.users.findById(payload.sub);
+    if (!user || (user.isDemo && this.config.isProduction)) return null;
+    return { id: user.id, email: user.email, role: user.role };
+  }
+}

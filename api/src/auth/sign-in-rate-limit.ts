@@ -1,0 +1,26 @@
+import type { ApiError } from '@homeground/shared';
+import type { RequestHandler } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import type { AppConfig } from '../config/app-config.js';
+
+/**
+ * Limits sign-in and sign-up attempts per client address (fixed window, in memory).
+ * express-rate-limit rather than @nestjs/throttler: the latter is CommonJS-only and cannot load
+ * the ESM-only Nest 12 packages under jest on Node 20.
+ */
+export function signInRateLimit(config: Pick<AppConfig, 'loginThrottle'>, multiplier = 1): RequestHandler {
+  return rateLimit({
+    windowMs: config.loginThrottle.ttlMs,
+    limit: config.loginThrottle.limit * multiplier,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: (_req, res) => {
+      const body: ApiError = {
+        statusCode: 429,
+        error: 'Too Many Requests',
+        message: 'Too many attempts: wait a minute and try again.',
+      };
+      res.status(429).json(body);
+    },
+  });
+}

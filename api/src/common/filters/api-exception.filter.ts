@@ -1,0 +1,49 @@
+import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import type { ApiError } from '@homeground/shared';
+import type { Response } from 'express';
+
+const REASON: Record<number, string> = {
+  400: 'Bad Request', 401: 'Unauthorized', 403: 'Forbidden', 404: 'Not Found', 409: 'Conflict',
+  413: 'Payload Too Large', 415: 'Unsupported Media Type', 422: 'Unprocessable Entity',
+  429: 'Too Many Requests', 500: 'Internal Server Error', 503: 'Service Unavailable',
+};
+
+/**
+ * Turns every error into the one shape the web app reads: `{statusCode, error, message, fields?}`.
+ * Unexpected errors are logged and answered with a plain 500 that leaks nothing.
+ */
+@Catch()
+export class ApiExceptionFilter implements ExceptionFilter {
+  private readonly logger = new Logger('ApiExceptionFilter');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const res = host.switchToHttp().getResponse<Response>();
+    const body = this.toApiError(exception);
+    if (body.statusCode >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
+    if (res.headersSent) return;
+    res.status(body.statusCode).json(body);
+  }
+
+  private toApiError(exception: unknown): ApiError {
+    if (exception instanceof HttpException) {
+      const statusCode = exception.getStatus();
+      const response = exception.getResponse();
+      const base: ApiError = { statusCode, error: REASON[statusCode] ?? 'Error', message: exception.message };
+      if (typeof response === 'object' && response !== null) {
+        const r = response as { message?: unknown; fields?: ApiError['fields'] };
+        if (typeof r.message === 'string') base.message = r.message;
+        else if (Array.isArray(r.message)) base.message = r.message.join('; ');
+        if (r.fields) base.fields = r.fields;
+      }
+      // The Express adapter maps body-parser's SyntaxError to a 400 with the parser's words; say it plainly.
+      if (exception.cause instanceof SyntaxError) base.message = 'The request body is not valid JSON.';
+      if (statusCode === 413) base.message = 'The request body is too large.';
+      return base;
+    }
+    return {
+      statusCode: HttpStatus.INTERNAL_SERVER_ERROR,
+      error: REASON[500],
+      message: 'Something went wrong on our side. Please try again.',
+    };
+  }
+}

@@ -1,0 +1,81 @@
+import { randomBytes } from 'node:crypto';
+import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { ConfigService } from '@nestjs/config';
+import type { Env } from './env.validation.js';
+
+/** The project root: api/src/config or api/dist/config, three levels up. */
+export const PROJECT_ROOT = path.resolve(import.meta.dirname, '..', '..', '..');
+
+const API_PACKAGE = JSON.parse(readFileSync(path.resolve(import.meta.dirname, '..', '..', 'package.json'), 'utf8')) as {
+  version: string;
+};
+export const API_VERSION = API_PACKAGE.version;
+
+/** Typed, resolved settings. Features inject this, never `process.env`. */
+export interface AppConfig {
+  nodeEnv: Env['NODE_ENV'];
+  isProduction: boolean;
+  host: string;
+  port: number;
+  dataDir: string;
+  databasePath: string;
+  webDist: string;
+  jwtSecret: string;
+  jwtExpiresInSeconds: number;
+  demoData: boolean;
+  loginThrottle: { limit: number; ttlMs: number };
+  logLevel: Env['LOG_LEVEL'];
+}
+
+export const APP_CONFIG = Symbol('APP_CONFIG');
+
+function fromRoot(p: string): string {
+  return path.isAbsolute(p) ? p : path.resolve(PROJECT_ROOT, p);
+}
+
+/** Reads the JWT secret from the environment, or from DATA_DIR/jwt-secret, creating it on first start. */
+function resolveJwtSecret(env: Env, dataDir: string): string {
+  if (env.JWT_SECRET) return env.JWT_SECRET;
+  const file = path.join(dataDir, 'jwt-secret');
+  if (existsSync(file)) return readFileSync(file, 'utf8').trim();
+  mkdirSync(dataDir, { recursive: true });
+  const secret = randomBytes(48).toString('base64url');
+  writeFileSync(file, `${secret}\n`, { mode: 0o600 });
+  chmodSync(file, 0o600);
+  return secret;
+}
+
+export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
+  const env = {
+    NODE_ENV: config.get('NODE_ENV', { infer: true }),
+    HOST: config.get('HOST', { infer: true }),
+    PORT: config.get('PORT', { infer: true }),
+    DATA_DIR: config.get('DATA_DIR', { infer: true }),
+    DATABASE: config.get('DATABASE', { infer: true }),
+    JWT_SECRET: config.get('JWT_SECRET', { infer: true }),
+    JWT_EXPIRES_IN_SECONDS: config.get('JWT_EXPIRES_IN_SECONDS', { infer: true }),
+    DEMO_DATA: config.get('DEMO_DATA', { infer: true }),
+    WEB_DIST: config.get('WEB_DIST', { infer: true }),
+    LOGIN_THROTTLE_LIMIT: config.get('LOGIN_THROTTLE_LIMIT', { infer: true }),
+    LOGIN_THROTTLE_TTL_SECONDS: config.get('LOGIN_THROTTLE_TTL_SECONDS', { infer: true }),
+    LOG_LEVEL: config.get('LOG_LEVEL', { infer: true }),
+  } satisfies Env;
+  const isProduction = env.NODE_ENV === 'production';
+  const dataDir = fromRoot(env.DATA_DIR);
+  return {
+    nodeEnv: env.NODE_ENV,
+    isProduction,
+    host: env.HOST,
+    port: env.PORT,
+    dataDir,
+    databasePath: env.DATABASE === ':memory:' ? ':memory:' : fromRoot(env.DATABASE),
+    webDist: fromRoot(env.WEB_DIST),
+    jwtSecret: resolveJwtSecret(env, dataDir),
+    jwtExpiresInSeconds: env.JWT_EXPIRES_IN_SECONDS,
+    // Demo sign-ins must never exist in production, whatever the variable says.
+    demoData: !isProduction && (env.DEMO_DATA ?? true),
+    loginThrottle: { limit: env.LOGIN_THROTTLE_LIMIT, ttlMs: env.LOGIN_THROTTLE_TTL_SECONDS * 1000 },
+    logLevel: env.LOG_LEVEL,
+  };
+}

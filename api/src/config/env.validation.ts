@@ -1,0 +1,40 @@
+import { z } from 'zod';
+
+const booleanish = z
+  .enum(['true', 'false', '1', '0', 'yes', 'no'])
+  .transform((v) => v === 'true' || v === '1' || v === 'yes');
+
+/**
+ * The environment Homeground's API reads, with defaults that make `npm start` work on a fresh
+ * machine. `ConfigModule.forRoot({ validate })` runs this once at boot and refuses to start on a
+ * bad value, listing every bad variable.
+ */
+export const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().min(1).default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  /** Folder for the database, the generated JWT secret and uploaded photos. Relative paths are from the project root. */
+  DATA_DIR: z.string().min(1).default('data'),
+  /** SQLite file; relative paths are from the project root. */
+  DATABASE: z.string().min(1).default('data/homeground.sqlite'),
+  /** When unset, a random secret is generated into DATA_DIR on first start and reused after. */
+  JWT_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
+  JWT_EXPIRES_IN_SECONDS: z.coerce.number().int().min(60).max(2_592_000).default(43_200),
+  /** Load the invented Larkfield demo group and people. Never honoured in production. */
+  DEMO_DATA: booleanish.optional(),
+  /** The built web app to serve; relative paths are from the project root. */
+  WEB_DIST: z.string().min(1).default('web/dist'),
+  LOGIN_THROTTLE_LIMIT: z.coerce.number().int().min(1).default(5),
+  LOGIN_THROTTLE_TTL_SECONDS: z.coerce.number().int().min(1).default(60),
+  LOG_LEVEL: z.enum(['error', 'warn', 'log', 'debug', 'verbose']).default('warn'),
+});
+export type Env = z.infer<typeof envSchema>;
+
+export function validateEnv(raw: Record<string, unknown>): Env {
+  const result = envSchema.safeParse(raw);
+  if (!result.success) {
+    const lines = result.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Homeground cannot start: bad environment variables\n${lines.join('\n')}`);
+  }
+  return result.data;
+}

@@ -1,0 +1,31 @@
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import type { DataSourceOptions } from 'typeorm';
+import type { AppConfig } from '../config/app-config.js';
+import { GroupMembership } from '../groups/group-membership.entity.js';
+import { Group } from '../groups/group.entity.js';
+import { User } from '../users/user.entity.js';
+import { CreateUsersAndGroups1764633600000 } from './migrations/1764633600000-create-users-and-groups.js';
+
+export const ENTITIES = [User, Group, GroupMembership];
+export const MIGRATIONS = [CreateUsersAndGroups1764633600000];
+
+/** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */
+export function databaseOptions(config: Pick<AppConfig, 'databasePath'>): DataSourceOptions {
+  if (config.databasePath !== ':memory:') mkdirSync(path.dirname(config.databasePath), { recursive: true });
+  return {
+    type: 'better-sqlite3',
+    database: config.databasePath,
+    enableWAL: true,
+    prepareDatabase: (db: { pragma: (s: string) => unknown }) => {
+      db.pragma('foreign_keys = ON');
+      db.pragma('busy_timeout = 5000');
+    },
+    entities: ENTITIES,
+    migrations: MIGRATIONS,
+    migrationsRun: true,
+    migrationsTransactionMode: 'each',
+    synchronize: false,
+    logging: ['error'],
+  };
+}

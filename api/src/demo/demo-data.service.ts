@@ -1,0 +1,46 @@
+import { Inject, Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
+import { hashPassword } from '../auth/password.js';
+import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
+import { GroupMembership } from '../groups/group-membership.entity.js';
+import { Group } from '../groups/group.entity.js';
+import { User } from '../users/user.entity.js';
+import { DEMO_GROUP, DEMO_PEOPLE } from './demo-people.js';
+
+/** Loads the invented Larkfield group and people at start (idempotent); never in production. */
+@Injectable()
+export class DemoDataService implements OnApplicationBootstrap {
+  private readonly logger = new Logger('DemoData');
+
+  constructor(
+    @InjectDataSource() private readonly db: DataSource,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {}
+
+  async onApplicationBootstrap(): Promise<void> {
+    if (!this.config.demoData) return;
+    const created = await this.load();
+    if (created > 0) this.logger.log(`Loaded ${created} demo people into ${DEMO_GROUP.name}`);
+  }
+
+  /** Returns how many demo people were created (0 when they were there already). */
+  async load(): Promise<number> {
+    // Hash outside the transaction: scrypt is slow by design and SQLite allows one writer.
+    const users = this.db.getRepository(User);
+    const missing: typeof DEMO_PEOPLE = [];
+    for (const p of DEMO_PEOPLE) if (!(await users.exists({ where: { email: p.email } }))) missing.push(p);
+    const hashes = await Promise.all(missing.map((p) => hashPassword(p.password)));
+    return this.db.transaction(async (tx) => {
+      let group = await tx.findOne(Group, { where: { slug: DEMO_GROUP.slug } });
+      group ??= await tx.save(Group, tx.create(Group, DEMO_GROUP));
+      for (const [i, p] of missing.entries()) {
+        const user = await tx.save(User, tx.create(User, {
+          email: p.email, displayName: p.displayName, passwordHash: hashes[i], role: p.role, isDemo: true,
+        }));
+        if (p.groupRole) await tx.save(GroupMembership, tx.create(GroupMembership, { userId: user.id, groupId: group.id, role: p.groupRole }));
+      }
+      return missing.length;
+    });
+  }
+}

@@ -1,0 +1,14 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { GroupMembership } from './group-membership.entity.js';
+import { Group } from './group.entity.js';
+import { GroupsController } from './groups.controller.js';
+import { GroupsService } from './groups.service.js';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([Group, GroupMembership])],
+  controllers: [GroupsController],
+  providers: [GroupsService],
+  exports: [GroupsService],
+})
+export class GroupsModule {}

@@ -1,0 +1,86 @@
+import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import type { Group as GroupDto, GroupRole } from '@homeground/shared';
+import { DataSource, Repository } from 'typeorm';
+import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { User } from '../users/user.entity.js';
+import { GroupMembership } from './group-membership.entity.js';
+import { Group } from './group.entity.js';
+
+export interface GroupMemberDto {
+  userId: string;
+  displayName: string;
+  email: string;
+  role: GroupRole;
+}
+
+@Injectable()
+export class GroupsService {
+  constructor(
+    @InjectRepository(Group) private readonly groups: Repository<Group>,
+    @InjectRepository(GroupMembership) private readonly memberships: Repository<GroupMembership>,
+    @InjectDataSource() private readonly db: DataSource,
+  ) {}
+
+  async list(): Promise<GroupDto[]> {
+    const [rows, counts] = await Promise.all([
+      this.groups.find({ order: { name: 'ASC' } }),
+      this.memberships
+        .createQueryBuilder('m')
+        .select('m.group_id', 'groupId')
+        .addSelect('COUNT(*)', 'n')
+        .groupBy('m.group_id')
+        .getRawMany<{ groupId: string; n: number }>(),
+    ]);
+    const byGroup = new Map(counts.map((c) => [c.groupId, Number(c.n)]));
+    return rows.map((g) => this.toDto(g, byGroup.get(g.id) ?? 0));
+  }
+
+  async get(slug: string): Promise<Group> {
+    const group = await this.groups.findOne({ where: { slug } });
+    if (!group) throw new NotFoundException(`No group called "${slug}".`);
+    return group;
+  }
+
+  async getDto(slug: string): Promise<GroupDto> {
+    const group = await this.get(slug);
+    return this.toDto(group, await this.memberships.count({ where: { groupId: group.id } }));
+  }
+
+  /** The caller's role in a group, or null. Admins act as organisers everywhere. */
+  async roleOf(user: AuthenticatedUser, groupId: string): Promise<GroupRole | null> {
+    if (user.role === 'admin') return 'organiser';
+    const m = await this.memberships.findOne({ where: { groupId, userId: user.id } });
+    return m?.role ?? null;
+  }
+
+  async members(slug: string, caller: AuthenticatedUser): Promise<GroupMemberDto[]> {
+    const group = await this.get(slug);
+    if (!(await this.roleOf(caller, group.id))) throw new ForbiddenException('Only members of this group can see who is in it.');
+    const rows = await this.memberships.find({ where: { groupId: group.id }, relations: { user: true }, order: { createdAt: 'ASC' } });
+    return rows.map((m) => ({ userId: m.userId, displayName: m.user.displayName, email: m.user.email, role: m.role }));
+  }
+
+  /** Adds or changes a person's role in the group; organisers of that group (or admins) only. */
+  async setMember(slug: string, caller: AuthenticatedUser, email: string, role: GroupRole): Promise<GroupMemberDto> {
+    const group = await this.get(slug);
+    if ((await this.roleOf(caller, group.id)) !== 'organiser') {
+      throw new ForbiddenException('Only an organiser of this group can add people to it.');
+    }
+    return this.db.transaction(async (tx) => {
+      const user = await tx.findOne(User, { where: { email: email.toLowerCase() } });
+      if (!user) throw new NotFoundException(`No account uses ${email}: ask them to register first.`);
+      const existing = await tx.findOne(GroupMembership, { where: { groupId: group.id, userId: user.id } });
+      await tx.save(GroupMembership, existing ? { ...existing, role } : tx.create(GroupMembership, { groupId: group.id, userId: user.id, role }));
+      return { userId: user.id, displayName: user.displayName, email: user.email, role };
+    });
+  }
+
+  count(): Promise<number> {
+    return this.groups.count();
+  }
+
+  private toDto(g: Group, members: number): GroupDto {
+    return { id: g.id, slug: g.slug, name: g.name, town: g.town, state: g.state, ecoregionCode: g.ecoregionCode, members };
+  }
+}

@@ -1,0 +1,33 @@
+import { Column, CreateDateColumn, Entity, OneToMany, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import type { GlobalRole } from '@homeground/shared';
+import { GroupMembership } from '../groups/group-membership.entity.js';
+
+@Entity({ name: 'users' })
+export class User {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  /** Stored lower-cased; unique. */
+  @Column({ type: 'text', unique: true })
+  email: string;
+
+  @Column({ type: 'text', name: 'display_name' })
+  displayName: string;
+
+  /** `scrypt$N$r$p$salt$hash`, see auth/password.ts. */
+  @Column({ type: 'text', name: 'password_hash' })
+  passwordHash: string;
+
+  @Column({ type: 'text', default: 'member' })
+  role: GlobalRole;
+
+  /** Demo people from the invented scenario; they can never sign in when NODE_ENV=production. */
+  @Column({ type: 'boolean', name: 'is_demo', default: false })
+  isDemo: boolean;
+
+  @CreateDateColumn({ name: 'created_at' })
+  createdAt: Date;
+
+  @OneToMany(() => GroupMembership, (m) => m.user)
+  memberships: Relation<GroupMembership[]>;
+}

@@ -1,0 +1,19 @@
+import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import { createTestApp, type TestApp } from './support/test-app.js';
+
+// Its own file: the config module reads the environment once per module registry (one per test file).
+describe('sign-in throttling (e2e)', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp({ LOGIN_THROTTLE_LIMIT: '3', LOGIN_THROTTLE_TTL_SECONDS: '60' });
+  });
+  afterAll(() => t.close());
+
+  it('answers 429 in the API error shape once an address passes the sign-in limit', async () => {
+    const attempt = () => t.http.post('/api/auth/login').send({ email: 'mara.ellsworth@example.org', password: 'guess-guess' });
+    for (let i = 0; i < 3; i++) expect((await attempt()).status).toBe(401);
+    const blocked = await attempt();
+    expect(blocked.status).toBe(429);
+    expect(blocked.body).toMatchObject({ statusCode: 429, error: 'Too Many Requests', message: expect.stringMatching(/wait a minute/) });
+  });
+});

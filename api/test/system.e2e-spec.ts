@@ -1,0 +1,43 @@
+import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import { createTestApp, type TestApp } from './support/test-app.js';
+
+describe('health, stats and docs (e2e)', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp({ DEMO_DATA: 'true' });
+  });
+  afterAll(() => t.close());
+
+  it('reports version and a live database with its migrations applied', async () => {
+    const res = await t.http.get('/api/health').expect(200).expect('Content-Type', /json/);
+    expect(res.body).toMatchObject({ status: 'ok', version: expect.stringMatching(/^\d+\.\d+\.\d+/), database: { status: 'up' } });
+    expect(res.body.database.migrations).toBeGreaterThanOrEqual(1);
+  });
+
+  it('counts the demo group and people', async () => {
+    const res = await t.http.get('/api/stats').expect(200);
+    expect(res.body.groups).toBe(1);
+    expect(res.body.users).toBe(8);
+    const groups = await t.http.get('/api/groups').expect(200);
+    expect(groups.body).toEqual([expect.objectContaining({ slug: 'larkfield-commons-growers', state: 'WI', ecoregionCode: '52', members: 4 })]);
+  });
+
+  it('serves OpenAPI docs from packaged assets, with no CDN in the page', async () => {
+    const page = await t.http.get('/api/docs').redirects(1).expect(200);
+    expect(page.text).toContain('swagger-ui');
+    const loaded = [...page.text.matchAll(/(?:src|href)=["']([^"']+)["']/g)].map((m) => m[1]);
+    expect(loaded.length).toBeGreaterThan(2);
+    expect(loaded.filter((u) => /^(https?:)?\/\//.test(u))).toEqual([]);
+    const init = await t.http.get('/api/docs/swagger-ui-init.js').expect(200);
+    expect(init.text).toContain('"/api/auth/login"');
+    const spec = await t.http.get('/api/docs/openapi.json').expect(200);
+    expect(Object.keys(spec.body.paths)).toEqual(expect.arrayContaining(['/api/auth/login', '/api/me', '/api/health']));
+  });
+
+  it('answers unknown API routes with a JSON 404 and sets security headers', async () => {
+    const res = await t.http.get('/api/no-such-thing').expect(404);
+    expect(res.body).toMatchObject({ statusCode: 404, error: 'Not Found' });
+    expect(res.headers['x-content-type-options']).toBe('nosniff');
+    expect(res.headers['content-security-policy']).toContain("default-src 'self'");
+  });
+});
