@@ -1,10 +1,13 @@
 import 'reflect-metadata';
+import type { AddressInfo } from 'node:net';
 import { createApp } from './app.factory.js';
 import { DEMO_PEOPLE } from './demo/demo-people.js';
 
 const { app, config } = await createApp();
 await app.listen(config.port, config.host);
-const url = `http://${config.host === '127.0.0.1' || config.host === '0.0.0.0' ? 'localhost' : config.host}:${config.port}`;
+// PORT=0 picks a free port (the browser tests use it), so print the one really bound.
+const { port } = app.getHttpServer().address() as AddressInfo;
+const url = `http://${config.host === '127.0.0.1' || config.host === '0.0.0.0' ? 'localhost' : config.host}:${port}`;
 const lines = [
   `Homeground is running at ${url}  (API docs: ${url}/api/docs)`,
   `Database: ${config.databasePath}`,

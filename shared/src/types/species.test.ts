@@ -1,0 +1,55 @@
+import { describe, expect, it } from 'vitest';
+import { SOURCED_FIELDS, speciesSchema } from './species.js';
+
+const valid = {
+  slug: 'zizia-aurea',
+  scientificName: 'Zizia aurea',
+  usdaSymbol: 'ZIAU',
+  family: 'Apiaceae',
+  commonNames: ['golden alexanders'],
+  growthForm: 'forb',
+  lifespan: 'perennial',
+  heightCm: { min: 30, max: 75 },
+  spreadCm: { min: 30, max: 45 },
+  bloomMonths: [5, 6],
+  flowerColours: ['yellow'],
+  sun: ['full', 'part'],
+  moisture: ['medium', 'wet'],
+  soilTextures: ['loam', 'clay'],
+  nativeStates: ['WI', 'MN'],
+  habitats: ['prairie', 'open-woodland'],
+  wildlife: { lepidopteraGenusCount: null, monarchHost: false, pollinators: 'Early nectar for short-tongued bees.' },
+  spreadHabit: 'clumping',
+  deerResistance: 'medium',
+  germination: {
+    treatments: [{ kind: 'cold-moist', days: 60 }],
+    needsLight: false,
+    sowingDepthMm: 3,
+    seedsPerPound: null,
+    germinationRatePct: 50,
+    methods: ['winter-sowing'],
+  },
+  sources: Object.fromEntries(SOURCED_FIELDS.map((f) => [f, 'from-memory'])),
+};
+
+describe('speciesSchema (the catalogue record shape)', () => {
+  it('accepts a complete record and fills the optional lists', () => {
+    const parsed = speciesSchema.parse(valid);
+    expect(parsed.synonyms).toEqual([]);
+    expect(parsed.cautions).toEqual([]);
+  });
+
+  it.each([
+    ['a state outside the conterminous US', { nativeStates: ['HI'] }, 'nativeStates'],
+    ['a thirteenth month', { bloomMonths: [13] }, 'bloomMonths'],
+    ['a height range upside down', { heightCm: { min: 90, max: 30 } }, 'heightCm'],
+    ['a family that is not a family name', { family: 'Umbellifers' }, 'family'],
+    ['an author in the scientific name', { scientificName: 'Zizia aurea (L.) W.D.J. Koch' }, 'scientificName'],
+    ['a fact without its source', { sources: { usdaSymbol: 'usda-plants' } }, 'sources'],
+    ['no sowing method', { germination: { ...valid.germination, methods: [] } }, 'germination'],
+  ])('rejects %s, naming the field', (_what, change, field) => {
+    const result = speciesSchema.safeParse({ ...valid, ...change });
+    expect(result.success).toBe(false);
+    expect(result.error!.issues.map((i) => String(i.path[0]))).toContain(field);
+  });
+});
