@@ -9,6 +9,7 @@ import { databaseOptions } from './database/data-source.js';
 import { DemoModule } from './demo/demo.module.js';
 import { GroupsModule } from './groups/groups.module.js';
 import { HealthModule } from './health/health.module.js';
+import { SpeciesModule } from './species/species.module.js';
 import { UsersModule } from './users/users.module.js';
 
 /** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
@@ -31,6 +32,7 @@ function webApp(): DynamicModule[] {
     UsersModule,
     GroupsModule,
     HealthModule,
+    SpeciesModule,
     DemoModule,
   ],
 })

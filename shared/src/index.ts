@@ -1,3 +1,6 @@
 export * from './types/species.js';
 export * from './types/ecoregion.js';
 export * from './types/auth.js';
+export * from './types/species-query.js';
+export * from './catalogue/region-match.js';
+export * from './catalogue/species-csv.js';

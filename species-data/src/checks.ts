@@ -22,9 +22,6 @@ function checkSpecies(s: Species, sourceKeys: Set<string>): string[] {
   const isFlowering = s.growthForm !== 'fern' && s.growthForm !== 'graminoid';
   if (isFlowering && s.bloomMonths.length === 0) out.push('a flowering plant needs bloomMonths');
   if (new Set(s.bloomMonths).size !== s.bloomMonths.length) out.push('bloomMonths repeats a month');
-  if (s.germination.treatments.some((t) => (t.kind === 'cold-moist' || t.kind === 'warm-moist') && !t.days)) {
-    out.push('a moist stratification step needs days');
-  }
   if (s.germination.treatments.length > 1 && s.germination.treatments.some((t) => t.kind === 'none')) {
     out.push('treatment "none" cannot be combined with other steps');
   }

@@ -59,6 +59,8 @@ export interface ApiError {
   message: string;
   /** For 400s: each bad field with the reason. */
   fields?: { field: string; message: string }[];
+  /** For CSV imports: each bad row with its line number (header = line 1), field and reason. */
+  rows?: { row: number; field: string; message: string }[];
 }
 
 export interface HealthResponse {

@@ -1,36 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { SOURCED_FIELDS, speciesSchema } from './species.js';
+import { ziziaAurea as valid } from '../testing/species-fixtures.js';
+import { speciesSchema } from './species.js';
 
-const valid = {
-  slug: 'zizia-aurea',
-  scientificName: 'Zizia aurea',
-  usdaSymbol: 'ZIAU',
-  family: 'Apiaceae',
-  commonNames: ['golden alexanders'],
-  growthForm: 'forb',
-  lifespan: 'perennial',
-  heightCm: { min: 30, max: 75 },
-  spreadCm: { min: 30, max: 45 },
-  bloomMonths: [5, 6],
-  flowerColours: ['yellow'],
-  sun: ['full', 'part'],
-  moisture: ['medium', 'wet'],
-  soilTextures: ['loam', 'clay'],
-  nativeStates: ['WI', 'MN'],
-  habitats: ['prairie', 'open-woodland'],
-  wildlife: { lepidopteraGenusCount: null, monarchHost: false, pollinators: 'Early nectar for short-tongued bees.' },
-  spreadHabit: 'clumping',
-  deerResistance: 'medium',
-  germination: {
-    treatments: [{ kind: 'cold-moist', days: 60 }],
-    needsLight: false,
-    sowingDepthMm: 3,
-    seedsPerPound: null,
-    germinationRatePct: 50,
-    methods: ['winter-sowing'],
-  },
-  sources: Object.fromEntries(SOURCED_FIELDS.map((f) => [f, 'from-memory'])),
-};
 
 describe('speciesSchema (the catalogue record shape)', () => {
   it('accepts a complete record and fills the optional lists', () => {

@@ -69,6 +69,9 @@ export const treatmentStepSchema = z.object({
   days: z.number().int().min(1).max(365).optional(),
   /** Plain words for the grower, e.g. "nick the seed coat with a nail file". */
   note: z.string().optional(),
+}).refine((t) => (t.kind !== 'cold-moist' && t.kind !== 'warm-moist') || t.days !== undefined, {
+  message: 'a moist stratification step needs its length in days (e.g. cold-moist:60)',
+  path: ['days'],
 });
 export type TreatmentStep = z.infer<typeof treatmentStepSchema>;
 

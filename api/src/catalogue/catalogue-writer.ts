@@ -1,0 +1,59 @@
+import { createHash } from 'node:crypto';
+import type { CountyEcoregions, Ecoregion, Species } from '@homeground/shared';
+import type { EntityManager } from 'typeorm';
+
+/** A stable hash of a record, to tell whether a species-data file changed since it was loaded. */
+export function recordHash(value: unknown): string {
+  return createHash('sha256').update(JSON.stringify(value)).digest('hex').slice(0, 32);
+}
+
+/**
+ * Writes one species with its names and native states, inside the caller's transaction.
+ * `previousSlug` renames a record in place (names, states and photo follow by ON UPDATE CASCADE).
+ */
+export async function writeSpecies(
+  tx: EntityManager,
+  s: Species,
+  meta: { seedHash: string | null; editedBy: string | null; previousSlug?: string },
+): Promise<void> {
+  const values = [s.slug, s.scientificName, s.usdaSymbol, s.family, s.growthForm, s.heightCm.max, s.wildlife.monarchHost ? 1 : 0, JSON.stringify(s), meta.seedHash, meta.editedBy];
+  const old = meta.previousSlug ?? s.slug;
+  const existing = await tx.query(`SELECT 1 FROM species WHERE slug = ?`, [old]);
+  if (existing.length > 0) {
+    await tx.query(
+      `UPDATE species SET slug = ?, scientific_name = ?, usda_symbol = ?, family = ?, growth_form = ?, height_max_cm = ?,
+         monarch_host = ?, record = ?, seed_hash = ?, edited_by = ?, updated_at = datetime('now') WHERE slug = ?`,
+      [...values, old],
+    );
+  } else {
+    await tx.query(
+      `INSERT INTO species (slug, scientific_name, usda_symbol, family, growth_form, height_max_cm, monarch_host, record, seed_hash, edited_by)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+      values,
+    );
+  }
+  await tx.query(`DELETE FROM species_names WHERE slug = ?`, [s.slug]);
+  await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'scientific')`, [s.slug, s.scientificName]);
+  for (const n of new Set(s.commonNames)) await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'common')`, [s.slug, n]);
+  for (const n of new Set(s.synonyms)) await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'synonym')`, [s.slug, n]);
+  await tx.query(`DELETE FROM species_states WHERE slug = ?`, [s.slug]);
+  for (const st of new Set(s.nativeStates)) await tx.query(`INSERT INTO species_states (slug, state) VALUES (?, ?)`, [s.slug, st]);
+}
+
+/** Replaces the ecoregion table, counties and the crosswalk, inside the caller's transaction. */
+export async function writeEcoregions(tx: EntityManager, ecoregions: Ecoregion[], counties: CountyEcoregions[]): Promise<void> {
+  await tx.query(`DELETE FROM county_ecoregions`);
+  await tx.query(`DELETE FROM counties`);
+  await tx.query(`DELETE FROM ecoregions`);
+  for (const e of ecoregions) {
+    await tx.query(`INSERT INTO ecoregions (code, name, level2_code, level1_code, record) VALUES (?, ?, ?, ?, ?)`, [
+      e.code, e.name, e.level2.code, e.level1.code, JSON.stringify(e),
+    ]);
+  }
+  for (const c of counties) {
+    await tx.query(`INSERT INTO counties (fips, name, state) VALUES (?, ?, ?)`, [c.fips, c.name, c.state]);
+    for (const e of c.ecoregions) {
+      await tx.query(`INSERT INTO county_ecoregions (fips, code, share) VALUES (?, ?, ?)`, [c.fips, e.code, e.share]);
+    }
+  }
+}

@@ -1,0 +1,87 @@
+import { existsSync, mkdirSync } from 'node:fs';
+import { rename, rm, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import { BadRequestException, Inject, Injectable, NotFoundException, UnsupportedMediaTypeException } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { fileTypeFromBuffer } from 'file-type';
+import sharp, { type Metadata } from 'sharp';
+import { DataSource } from 'typeorm';
+import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
+import { SpeciesPhoto } from './species-photo.entity.js';
+import { SpeciesStore } from './species-store.service.js';
+
+export const MAX_PHOTO_BYTES = 5 * 1024 * 1024;
+/** Widths served resized; anything else gets the original. A fixed list keeps the disk cache bounded. */
+export const PHOTO_WIDTHS = [160, 400, 800] as const;
+const ACCEPTED = new Map([
+  ['image/jpeg', 'jpg'],
+  ['image/png', 'png'],
+  ['image/webp', 'webp'],
+]);
+
+export interface PhotoFile {
+  path: string;
+  mime: string;
+}
+
+@Injectable()
+export class SpeciesPhotosService {
+  private readonly dir: string;
+
+  constructor(
+    @InjectDataSource() private readonly db: DataSource,
+    private readonly store: SpeciesStore,
+    @Inject(APP_CONFIG) config: AppConfig,
+  ) {
+    this.dir = path.join(config.dataDir, 'photos');
+  }
+
+  /** Stores a photo after checking its real type from its bytes (the name and the browser's word are not trusted). */
+  async save(slug: string, bytes: Buffer | undefined, userId: string): Promise<SpeciesPhoto> {
+    if (!this.store.get(slug)) throw new NotFoundException(`No species "${slug}" in the catalogue.`);
+    if (!bytes || bytes.length === 0) throw new BadRequestException({ message: 'Attach a photo in the "photo" field.', fields: [{ field: 'photo', message: 'is required' }] });
+    const type = await fileTypeFromBuffer(bytes);
+    const ext = type && ACCEPTED.get(type.mime);
+    if (!type || !ext) {
+      throw new UnsupportedMediaTypeException(`Photos must be JPEG, PNG or WebP; this file is ${type ? type.mime : 'not an image we recognise'}.`);
+    }
+    let meta: Metadata;
+    try {
+      meta = await sharp(bytes).metadata();
+    } catch {
+      throw new UnsupportedMediaTypeException('The photo could not be read: the file may be damaged.');
+    }
+    mkdirSync(this.dir, { recursive: true });
+    const file = `${slug}.${ext}`;
+    const tmp = path.join(this.dir, `.${file}.${process.pid}.tmp`);
+    await writeFile(tmp, bytes);
+    const photo = await this.db.transaction(async (tx) => {
+      const old = await tx.findOne(SpeciesPhoto, { where: { slug } });
+      const saved = await tx.save(SpeciesPhoto, tx.create(SpeciesPhoto, {
+        slug, file, mime: type.mime, bytes: bytes.length, width: meta.width ?? 0, height: meta.height ?? 0, uploadedBy: userId,
+      }));
+      await rename(tmp, path.join(this.dir, file));
+      await this.removeVariants(slug, old && old.file !== file ? old.file : null);
+      return saved;
+    });
+    await this.store.reload();
+    return photo;
+  }
+
+  /** The photo file to send, resized to one of PHOTO_WIDTHS (cached on disk) or as stored. */
+  async file(slug: string, width?: number): Promise<PhotoFile> {
+    const photo = await this.db.getRepository(SpeciesPhoto).findOne({ where: { slug } });
+    if (!photo) throw new NotFoundException(`No photo for "${slug}" yet.`);
+    const original = path.join(this.dir, photo.file);
+    if (!width || width >= photo.width) return { path: original, mime: photo.mime };
+    const resized = path.join(this.dir, `${slug}-w${width}.webp`);
+    if (!existsSync(resized)) await sharp(original).resize({ width }).webp({ quality: 80 }).toFile(resized);
+    return { path: resized, mime: 'image/webp' };
+  }
+
+  private async removeVariants(slug: string, oldFile: string | null): Promise<void> {
+    const doomed = PHOTO_WIDTHS.map((w) => path.join(this.dir, `${slug}-w${w}.webp`));
+    if (oldFile) doomed.push(path.join(this.dir, oldFile));
+    await Promise.all(doomed.map((f) => rm(f, { force: true })));
+  }
+}

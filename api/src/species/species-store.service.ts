@@ -1,0 +1,102 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { Ecoregion, Species, SpeciesPage, SpeciesQuery } from '@homeground/shared';
+import { DataSource } from 'typeorm';
+import { SpeciesSearchIndex, type NameEntry } from './search/species-search-index.js';
+import { matchesFilters, sortSpecies } from './species-filter.js';
+import { toSpeciesSummary } from './species-summary.mapper.js';
+
+const MAX_CACHED_PAGES = 1000;
+
+/**
+ * The catalogue's read model: every species record in memory with a search index, rebuilt from
+ * SQLite at start and after each curator edit. List answers are cached as ready-to-send JSON; any
+ * edit clears the cache, so readers never see stale data.
+ */
+@Injectable()
+export class SpeciesStore {
+  private species: Species[] = [];
+  private bySlug = new Map<string, Species>();
+  private photos = new Set<string>();
+  private ecoregions = new Map<string, Ecoregion>();
+  private index = new SpeciesSearchIndex([]);
+  private readonly pages = new Map<string, string>();
+
+  constructor(@InjectDataSource() private readonly db: DataSource) {}
+
+  async reload(): Promise<void> {
+    const [rows, photoRows, ecoRows] = await Promise.all([
+      this.db.query(`SELECT record FROM species ORDER BY slug`),
+      this.db.query(`SELECT slug FROM species_photos`),
+      this.db.query(`SELECT record FROM ecoregions`),
+    ]);
+    this.replace(
+      rows.map((r: { record: string }) => JSON.parse(r.record) as Species),
+      photoRows.map((r: { slug: string }) => r.slug),
+      ecoRows.map((r: { record: string }) => JSON.parse(r.record) as Ecoregion),
+    );
+  }
+
+  /** Swaps in a new set of records (also used by benchmarks with synthetic species). */
+  replace(species: Species[], photoSlugs: string[], ecoregions: Ecoregion[]): void {
+    this.species = species;
+    this.bySlug = new Map(species.map((s) => [s.slug, s]));
+    this.photos = new Set(photoSlugs);
+    this.ecoregions = new Map(ecoregions.map((e) => [e.code, e]));
+    const names: NameEntry[] = species.flatMap((s) => [
+      { slug: s.slug, name: s.scientificName, kind: 'scientific' as const },
+      ...s.commonNames.map((name) => ({ slug: s.slug, name, kind: 'common' as const })),
+      ...s.synonyms.map((name) => ({ slug: s.slug, name, kind: 'synonym' as const })),
+    ]);
+    this.index = new SpeciesSearchIndex(names);
+    this.pages.clear();
+  }
+
+  get count(): number {
+    return this.species.length;
+  }
+
+  all(): readonly Species[] {
+    return this.species;
+  }
+
+  get(slug: string): Species | undefined {
+    return this.bySlug.get(slug);
+  }
+
+  hasPhoto(slug: string): boolean {
+    return this.photos.has(slug);
+  }
+
+  ecoregion(code: string): Ecoregion | undefined {
+    return this.ecoregions.get(code);
+  }
+
+  /** A page of species as JSON text, from the cache when the same query was answered before. */
+  listJson(query: SpeciesQuery, cacheKey: string): string {
+    const cached = this.pages.get(cacheKey);
+    if (cached !== undefined) return cached;
+    const body = JSON.stringify(this.list(query));
+    if (this.pages.size >= MAX_CACHED_PAGES) this.pages.delete(this.pages.keys().next().value!);
+    this.pages.set(cacheKey, body);
+    return body;
+  }
+
+  list(query: SpeciesQuery): SpeciesPage {
+    const ecoregion = query.ecoregion ? this.ecoregions.get(query.ecoregion) : undefined;
+    let pool: Species[];
+    if (query.q) {
+      pool = this.index.search(query.q, 200).map((h) => this.bySlug.get(h.slug)!);
+    } else {
+      pool = [...this.species];
+    }
+    const filtered = sortSpecies(pool.filter((s) => matchesFilters(s, query, ecoregion)), query.sort, query.order, Boolean(query.q));
+    const start = (query.page - 1) * query.pageSize;
+    return {
+      items: filtered.slice(start, start + query.pageSize).map((s) => toSpeciesSummary(s, this.photos.has(s.slug))),
+      total: filtered.length,
+      page: query.page,
+      pageSize: query.pageSize,
+    };
+  }
+}

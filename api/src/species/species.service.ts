@@ -1,0 +1,114 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import {
+  type CsvImportResult, type CsvRowError, csvRowToSpecies, SPECIES_CSV_COLUMNS, type Species, speciesToCsvRow,
+} from '@homeground/shared';
+import Papa from 'papaparse';
+import { DataSource } from 'typeorm';
+import { writeSpecies } from '../catalogue/catalogue-writer.js';
+import { SpeciesStore } from './species-store.service.js';
+
+/** At most this many bad rows are listed in one answer; the count says how many there were. */
+const MAX_REPORTED_ROW_ERRORS = 500;
+
+@Injectable()
+export class SpeciesService {
+  constructor(
+    @InjectDataSource() private readonly db: DataSource,
+    private readonly store: SpeciesStore,
+  ) {}
+
+  get(slug: string): Species {
+    const s = this.store.get(slug);
+    if (!s) throw new NotFoundException(`No species "${slug}" in the catalogue.`);
+    return s;
+  }
+
+  async create(record: Species, userId: string): Promise<Species> {
+    if (this.store.get(record.slug)) throw new ConflictException(`Species "${record.slug}" already exists: edit it instead.`);
+    await this.db.transaction(async (tx) => {
+      await this.assertUnique(tx, record, null);
+      await writeSpecies(tx, record, { seedHash: null, editedBy: userId });
+    });
+    await this.store.reload();
+    return this.get(record.slug);
+  }
+
+  /** Replaces a record; a curator's edit is kept over later catalogue-file changes (seed hash cleared). */
+  async replace(slug: string, record: Species, userId: string): Promise<Species> {
+    this.get(slug);
+    if (record.slug !== slug && this.store.get(record.slug)) throw new ConflictException(`Species "${record.slug}" already exists.`);
+    await this.db.transaction(async (tx) => {
+      await this.assertUnique(tx, record, slug);
+      await writeSpecies(tx, record, { seedHash: null, editedBy: userId, previousSlug: slug });
+    });
+    await this.store.reload();
+    return this.get(record.slug);
+  }
+
+  /**
+   * Imports a CSV of species (one row per species, the export's columns). Every row is checked first;
+   * if any row is bad, the answer lists each bad row with its line number and field and nothing is
+   * written. Otherwise all rows are written in one transaction (existing slugs are replaced).
+   */
+  async importCsv(text: string, userId: string): Promise<CsvImportResult> {
+    const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy' });
+    const errors: CsvRowError[] = parsed.errors.map((e) => ({ row: (e.row ?? 0) + 2, field: 'row', message: e.message }));
+    const missing = SPECIES_CSV_COLUMNS.filter((c) => !(parsed.meta.fields ?? []).includes(c));
+    if (missing.length) errors.push({ row: 1, field: missing.join(', '), message: 'column missing from the header' });
+    if (parsed.data.length === 0) errors.push({ row: 2, field: 'row', message: 'the file has no species rows' });
+    const records: Species[] = [];
+    const seen = new Map<string, number>();
+    parsed.data.forEach((row, i) => {
+      const line = i + 2;
+      const { species, errors: rowErrors } = csvRowToSpecies(row, line);
+      errors.push(...rowErrors);
+      if (!species) return;
+      const first = seen.get(species.slug);
+      if (first) errors.push({ row: line, field: 'slug', message: `repeats line ${first}` });
+      seen.set(species.slug, line);
+      records.push(species);
+    });
+    if (errors.length === 0) errors.push(...this.crossRowConflicts(records));
+    if (errors.length > 0) {
+      throw new BadRequestException({
+        message: `The file has ${errors.length} problem(s); nothing was imported.`,
+        rows: errors.slice(0, MAX_REPORTED_ROW_ERRORS),
+        fields: [...new Set(errors.map((e) => e.field))].map((field) => ({ field, message: 'see rows' })),
+      });
+    }
+    let created = 0;
+    await this.db.transaction(async (tx) => {
+      for (const r of records) {
+        if (!this.store.get(r.slug)) created++;
+        await writeSpecies(tx, r, { seedHash: null, editedBy: userId });
+      }
+    });
+    await this.store.reload();
+    return { created, updated: records.length - created };
+  }
+
+  exportCsv(): string {
+    return Papa.unparse({ fields: [...SPECIES_CSV_COLUMNS], data: this.store.all().map(speciesToCsvRow) }, { newline: '\r\n' });
+  }
+
+  /** A symbol or scientific name may belong to one species only (other than the one being replaced). */
+  private async assertUnique(tx: { query: DataSource['query'] }, r: Species, ownSlug: string | null): Promise<void> {
+    const clash = await tx.query(
+      `SELECT slug FROM species WHERE (usda_symbol = ? OR scientific_name = ?) AND slug <> ? AND slug <> ?`,
+      [r.usdaSymbol, r.scientificName, r.slug, ownSlug ?? r.slug],
+    );
+    if (clash.length) throw new ConflictException(`USDA symbol ${r.usdaSymbol} or name ${r.scientificName} is already used by "${clash[0].slug}".`);
+  }
+
+  /** Rows that would clash with another species in the catalogue (same symbol or name, other slug). */
+  private crossRowConflicts(records: Species[]): CsvRowError[] {
+    const bySymbol = new Map(this.store.all().map((s) => [s.usdaSymbol, s.slug]));
+    const out: CsvRowError[] = [];
+    records.forEach((r, i) => {
+      const owner = bySymbol.get(r.usdaSymbol);
+      if (owner && owner !== r.slug) out.push({ row: i + 2, field: 'usdaSymbol', message: `is already used by "${owner}"` });
+    });
+    return out;
+  }
+}
