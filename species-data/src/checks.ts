@@ -32,9 +32,29 @@ function checkSpecies(s: Species, sourceKeys: Set<string>): string[] {
   return out;
 }
 
+/**
+ * What a community growing programme's catalogue must hold: 300+ species, mostly forbs, grasses and
+ * sedges at least 15 %, and the milkweeds growers sow (10+ Asclepias), with woody plants too.
+ */
+export function checkComposition(species: Species[]): string[] {
+  if (species.length === 0) return [];
+  const count = (pred: (s: Species) => boolean) => species.filter(pred).length;
+  const forbs = count((s) => s.growthForm === 'forb');
+  const graminoids = count((s) => s.growthForm === 'graminoid');
+  const milkweeds = count((s) => s.scientificName.startsWith('Asclepias '));
+  const woody = count((s) => s.growthForm === 'shrub' || s.growthForm === 'vine' || s.growthForm === 'tree');
+  const out: string[] = [];
+  if (species.length < 300) out.push(`${species.length} species; the catalogue needs at least 300`);
+  if (forbs * 2 <= species.length) out.push(`forbs are ${forbs} of ${species.length}; they should be most`);
+  if (graminoids < 0.15 * species.length) out.push(`grasses and sedges are ${graminoids}; at least 15 % are needed`);
+  if (milkweeds < 10) out.push(`${milkweeds} Asclepias species; at least 10 are needed`);
+  if (woody === 0) out.push('no shrubs, vines or trees');
+  return out;
+}
+
 /** Cross-record checks the schema alone cannot make. */
 export function checkCatalogue(catalogue: Catalogue): DataProblem[] {
-  const problems: DataProblem[] = [];
+  const problems: DataProblem[] = checkComposition(catalogue.species).map((message) => ({ file: 'species/', message }));
   const sourceKeys = new Set(catalogue.sources.map((s) => s.key));
   const seenSymbols = new Map<string, string>();
   for (const s of catalogue.species) {
