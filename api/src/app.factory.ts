@@ -1,18 +1,23 @@
 import type { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
+import type { NextFunction, Request, Response } from 'express';
 import helmet from 'helmet';
 import { AppModule } from './app.module.js';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
 import { createValidationPipe } from './common/validation/validation-pipe.js';
 import { APP_CONFIG, type AppConfig } from './config/app-config.js';
 import { setUpOpenApi } from './docs/openapi.js';
+import { SpeciesListCacheMiddleware } from './species/species-list-cache.middleware.js';
 
 /** Everything main.ts and the e2e tests share: prefix, security headers, validation, errors, docs. */
 export function configureApp(app: NestExpressApplication): INestApplication {
   app.setGlobalPrefix('api');
   app.set('trust proxy', 'loopback');
   app.disable('x-powered-by');
+  // First in the chain: repeated catalogue list pages are answered from memory before any other work.
+  const listCache = app.get(SpeciesListCacheMiddleware);
+  app.use('/api/species', (req: Request, res: Response, next: NextFunction) => listCache.use(req, res, next));
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -21,6 +21,8 @@ export class SpeciesStore {
   private ecoregions = new Map<string, Ecoregion>();
   private index = new SpeciesSearchIndex([]);
   private readonly pages = new Map<string, string>();
+  /** The same answers keyed by the raw request URL, as bytes, for the fast path in species-list-cache.middleware. */
+  private readonly rawPages = new Map<string, Buffer>();
 
   constructor(@InjectDataSource() private readonly db: DataSource) {}
 
@@ -50,6 +52,7 @@ export class SpeciesStore {
     ]);
     this.index = new SpeciesSearchIndex(names);
     this.pages.clear();
+    this.rawPages.clear();
   }
 
   get count(): number {
@@ -80,6 +83,15 @@ export class SpeciesStore {
     if (this.pages.size >= MAX_CACHED_PAGES) this.pages.delete(this.pages.keys().next().value!);
     this.pages.set(cacheKey, body);
     return body;
+  }
+
+  cachedForUrl(url: string): Buffer | undefined {
+    return this.rawPages.get(url);
+  }
+
+  rememberForUrl(url: string, body: string): void {
+    if (this.rawPages.size >= MAX_CACHED_PAGES) this.rawPages.delete(this.rawPages.keys().next().value!);
+    this.rawPages.set(url, Buffer.from(body));
   }
 
   list(query: SpeciesQuery): SpeciesPage {

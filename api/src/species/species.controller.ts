@@ -1,12 +1,12 @@
 import {
-  Body, Controller, Get, Header, HttpCode, Param, Post, Put, Query, Res, StreamableFile, UploadedFile, UseInterceptors,
+  Body, Controller, Get, Header, HttpCode, Param, Post, Put, Query, Req, Res, StreamableFile, UploadedFile, UseInterceptors,
 } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import { ApiBody, ApiConsumes, ApiOkResponse, ApiQuery, ApiTags } from '@nestjs/swagger';
 import {
   type CsvImportResult, SPECIES_SORTS, type Species, type SpeciesQuery, speciesQuerySchema, speciesSchema,
 } from '@homeground/shared';
-import type { Response } from 'express';
+import type { Request, Response } from 'express';
 import { createReadStream } from 'node:fs';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
@@ -37,9 +37,11 @@ export class SpeciesController {
   @Get()
   @ApiOkResponse({ description: '{items: SpeciesSummary[], total, page, pageSize}' })
   @ApiQuery({ name: 'sort', required: false, enum: SPECIES_SORTS })
-  list(@Query(new ZodValidationPipe(speciesQuerySchema)) query: SpeciesQuery, @Res() res: Response): void {
+  list(@Query(new ZodValidationPipe(speciesQuerySchema)) query: SpeciesQuery, @Req() req: Request, @Res() res: Response): void {
     // Sent as ready-made JSON from the store's cache: the list is read far more often than edited.
-    res.type('application/json').send(this.store.listJson(query, JSON.stringify(query)));
+    const body = this.store.listJson(query, JSON.stringify(query));
+    this.store.rememberForUrl(req.originalUrl, body);
+    res.type('application/json').send(body);
   }
 
   @Get('export.csv')

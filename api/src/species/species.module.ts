@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { loadCatalogue } from '@homeground/species-data';
 import { DataSource } from 'typeorm';
 import { loadCatalogueIntoDatabase } from '../catalogue/catalogue-loader.js';
+import { SpeciesListCacheMiddleware } from './species-list-cache.middleware.js';
 import { SpeciesPhotosService } from './species-photos.service.js';
 import { SpeciesStore } from './species-store.service.js';
 import { SpeciesController } from './species.controller.js';
@@ -10,8 +11,8 @@ import { SpeciesService } from './species.service.js';
 
 @Module({
   controllers: [SpeciesController],
-  providers: [SpeciesService, SpeciesStore, SpeciesPhotosService],
-  exports: [SpeciesStore],
+  providers: [SpeciesService, SpeciesStore, SpeciesPhotosService, SpeciesListCacheMiddleware],
+  exports: [SpeciesStore, SpeciesListCacheMiddleware],
 })
 export class SpeciesModule implements OnModuleInit {
   constructor(
