@@ -10,6 +10,8 @@ import { DemoModule } from './demo/demo.module.js';
 import { GroupsModule } from './groups/groups.module.js';
 import { HealthModule } from './health/health.module.js';
 import { SpeciesModule } from './species/species.module.js';
+import { EcoregionsModule } from './ecoregions/ecoregions.module.js';
+import { PlacesModule } from './places/places.module.js';
 import { UsersModule } from './users/users.module.js';
 
 /** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
@@ -33,6 +35,8 @@ function webApp(): DynamicModule[] {
     GroupsModule,
     HealthModule,
     SpeciesModule,
+    EcoregionsModule,
+    PlacesModule,
     DemoModule,
   ],
 })

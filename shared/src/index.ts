@@ -4,3 +4,4 @@ export * from './types/auth.js';
 export * from './types/species-query.js';
 export * from './catalogue/region-match.js';
 export * from './catalogue/species-csv.js';
+export * from './types/place.js';

@@ -1,8 +1,5 @@
-import { Module, type OnModuleInit } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import { loadCatalogue } from '@homeground/species-data';
-import { DataSource } from 'typeorm';
-import { loadCatalogueIntoDatabase } from '../catalogue/catalogue-loader.js';
+import { Inject, Module, type OnModuleInit } from '@nestjs/common';
+import { CATALOGUE_LOADED, CatalogueModule } from '../catalogue/catalogue.module.js';
 import { SpeciesListCacheMiddleware } from './species-list-cache.middleware.js';
 import { SpeciesPhotosService } from './species-photos.service.js';
 import { SpeciesStore } from './species-store.service.js';
@@ -10,19 +7,19 @@ import { SpeciesController } from './species.controller.js';
 import { SpeciesService } from './species.service.js';
 
 @Module({
+  imports: [CatalogueModule],
   controllers: [SpeciesController],
   providers: [SpeciesService, SpeciesStore, SpeciesPhotosService, SpeciesListCacheMiddleware],
   exports: [SpeciesStore, SpeciesListCacheMiddleware],
 })
 export class SpeciesModule implements OnModuleInit {
   constructor(
-    @InjectDataSource() private readonly db: DataSource,
+    @Inject(CATALOGUE_LOADED) _loaded: unknown,
     private readonly store: SpeciesStore,
   ) {}
 
-  /** Migrations have run by now; load the curated catalogue (idempotent) and build the read model. */
-  async onModuleInit(): Promise<void> {
-    await loadCatalogueIntoDatabase(this.db, loadCatalogue());
-    await this.store.reload();
+  /** The catalogue is in SQLite by now (CATALOGUE_LOADED); build the read model. */
+  onModuleInit(): Promise<void> {
+    return this.store.reload();
   }
 }

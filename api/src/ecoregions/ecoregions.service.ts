@@ -1,0 +1,93 @@
+import { Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { Ecoregion } from '@homeground/shared';
+import { DataSource } from 'typeorm';
+import { type AreaFeature, PolygonIndex } from '../places/polygon-index.js';
+import { parseBoundaryUpload } from './boundary-upload.js';
+
+export interface CountyRegions {
+  fips: string;
+  name: string;
+  state: string;
+  /** Level III regions the county overlaps, largest share first. */
+  ecoregions: { code: string; share: number }[];
+}
+
+export interface BoundaryImportResult {
+  regions: number;
+  vertices: number;
+}
+
+/** Ecoregions, the county crosswalk and any imported boundary polygons, held in memory for lookups. */
+@Injectable()
+export class EcoregionsService {
+  private regions = new Map<string, Ecoregion>();
+  private counties = new Map<string, CountyRegions>();
+  private boundaries = new PolygonIndex<{ code: string }>([]);
+
+  constructor(@InjectDataSource() private readonly db: DataSource) {}
+
+  async reload(): Promise<void> {
+    const [regions, counties, shares, boundaries] = await Promise.all([
+      this.db.query(`SELECT record FROM ecoregions ORDER BY CAST(code AS integer)`),
+      this.db.query(`SELECT fips, name, state FROM counties`),
+      this.db.query(`SELECT fips, code, share FROM county_ecoregions ORDER BY fips, share DESC`),
+      this.db.query(`SELECT code, geometry FROM ecoregion_boundaries`),
+    ]);
+    this.regions = new Map(regions.map((r: { record: string }) => {
+      const e = JSON.parse(r.record) as Ecoregion;
+      return [e.code, e];
+    }));
+    this.counties = new Map(counties.map((c: Omit<CountyRegions, 'ecoregions'>) => [c.fips, { ...c, ecoregions: [] }]));
+    for (const s of shares as { fips: string; code: string; share: number }[]) this.counties.get(s.fips)?.ecoregions.push({ code: s.code, share: s.share });
+    this.boundaries = new PolygonIndex(
+      boundaries.map((b: { code: string; geometry: string }): AreaFeature<{ code: string }> => ({
+        type: 'Feature', properties: { code: b.code }, geometry: JSON.parse(b.geometry),
+      })),
+    );
+  }
+
+  list(state?: string): Ecoregion[] {
+    const all = [...this.regions.values()];
+    return state ? all.filter((e) => (e.states as string[]).includes(state)) : all;
+  }
+
+  get(code: string): Ecoregion {
+    const e = this.regions.get(code);
+    if (!e) throw new NotFoundException(`No EPA Level III ecoregion "${code}".`);
+    return e;
+  }
+
+  county(fips: string): CountyRegions | undefined {
+    return this.counties.get(fips);
+  }
+
+  get hasBoundaries(): boolean {
+    return this.boundaries.size > 0;
+  }
+
+  /** The imported polygon holding the point, when boundaries have been imported. */
+  boundaryAt(lon: number, lat: number): string | undefined {
+    return this.boundaries.containing(lon, lat)?.properties.code;
+  }
+
+  /** Replaces all boundary polygons in one transaction; a bad file changes nothing. */
+  async importBoundaries(text: string, userId: string): Promise<BoundaryImportResult> {
+    const features = parseBoundaryUpload(text, new Map([...this.regions].map(([code, e]) => [code, e.name])));
+    await this.db.transaction(async (tx) => {
+      await tx.query(`DELETE FROM ecoregion_boundaries`);
+      for (const f of features) {
+        await tx.query(`INSERT INTO ecoregion_boundaries (code, name, geometry, vertices, imported_by) VALUES (?, ?, ?, ?, ?)`, [
+          f.code, f.name, JSON.stringify(f.geometry), f.vertices, userId,
+        ]);
+      }
+    });
+    await this.reload();
+    return { regions: features.length, vertices: features.reduce((n, f) => n + f.vertices, 0) };
+  }
+
+  async clearBoundaries(): Promise<void> {
+    await this.db.query(`DELETE FROM ecoregion_boundaries`);
+    await this.reload();
+  }
+}
