@@ -36,7 +36,20 @@ export class SpeciesController {
   /** Filtered, sorted, paged catalogue; `q` is typo-tolerant over common and scientific names and synonyms. */
   @Get()
   @ApiOkResponse({ description: '{items: SpeciesSummary[], total, page, pageSize}' })
+  @ApiQuery({ name: 'q', required: false, description: 'typo-tolerant search over common and scientific names and synonyms', example: 'buterfly weed' })
+  @ApiQuery({ name: 'state', required: false, description: 'USPS code: native to this state (USDA PLANTS)', example: 'WI' })
+  @ApiQuery({ name: 'ecoregion', required: false, description: 'EPA Level III code: native to a state it spans and at home in its plant communities', example: '52' })
+  @ApiQuery({ name: 'sun', required: false, enum: ['full', 'part', 'shade'] })
+  @ApiQuery({ name: 'moisture', required: false, enum: ['dry', 'medium', 'wet'] })
+  @ApiQuery({ name: 'bloomMonth', required: false, description: '1–12' })
+  @ApiQuery({ name: 'growthForm', required: false, enum: ['forb', 'graminoid', 'fern', 'shrub', 'vine', 'tree'] })
+  @ApiQuery({ name: 'minHeightCm', required: false })
+  @ApiQuery({ name: 'maxHeightCm', required: false })
+  @ApiQuery({ name: 'monarchHost', required: false, enum: ['true', 'false'] })
+  @ApiQuery({ name: 'page', required: false, example: 1 })
+  @ApiQuery({ name: 'pageSize', required: false, example: 24, description: '1–200' })
   @ApiQuery({ name: 'sort', required: false, enum: SPECIES_SORTS })
+  @ApiQuery({ name: 'order', required: false, enum: ['asc', 'desc'] })
   list(@Query(new ZodValidationPipe(speciesQuerySchema)) query: SpeciesQuery, @Req() req: Request, @Res() res: Response): void {
     // Sent as ready-made JSON from the store's cache: the list is read far more often than edited.
     const body = this.store.listJson(query, JSON.stringify(query));
