@@ -1,12 +1,11 @@
-import { mkdirSync, mkdtempSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
 
 const ROOT = path.resolve(import.meta.dirname, '..', '..', '..');
 export const RESULTS_DIR = path.join(ROOT, 'test-results');
 
-/** Debian's Chromium, never a downloaded browser; flags keep it off the network. */
+/** Debian's Chromium, never a downloaded browser; flags keep it off the network (Playwright gives it a fresh profile). */
 export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -14,7 +13,6 @@ export async function launchBrowser(): Promise<Browser> {
     args: [
       '--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--disable-background-networking',
       '--disable-component-update', '--disable-sync', '--no-first-run',
-      `--user-data-dir=${mkdtempSync(path.join(tmpdir(), 'homeground-chromium-'))}`,
     ],
   });
 }

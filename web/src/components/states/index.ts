@@ -1,0 +1,3 @@
+export { LoadingState } from './loading-state.js';
+export { ErrorState } from './error-state.js';
+export { EmptyState } from './empty-state.js';

@@ -1,0 +1,77 @@
+import { makeStyles, tokens } from '@fluentui/react-components';
+import type { GlobalRole, GroupRole, User } from '@homeground/shared';
+import { ContentCard } from '../../../components/page/content-card.js';
+import { Heading } from '../../../components/page/page-heading.js';
+import { EmptyState } from '../../../components/states/index.js';
+import { hgTokens } from '../../../theme/index.js';
+
+const ROLE_WORDS: Record<GlobalRole, string> = {
+  member: 'Member',
+  curator: 'Curator: looks after the species catalogue',
+  admin: 'Admin: looks after people and roles',
+};
+
+const GROUP_ROLE_WORDS: Record<GroupRole, string> = {
+  organiser: 'Organiser',
+  grower: 'Grower',
+};
+
+const useStyles = makeStyles({
+  stack: { display: 'grid', gap: tokens.spacingVerticalXL, maxWidth: '720px' },
+  facts: {
+    display: 'grid',
+    gridTemplateColumns: 'max-content 1fr',
+    columnGap: tokens.spacingHorizontalXL,
+    rowGap: tokens.spacingVerticalS,
+    margin: 0,
+    '@media (max-width: 480px)': { gridTemplateColumns: '1fr', rowGap: tokens.spacingVerticalXS },
+  },
+  term: { color: hgTokens.hgColorLoam },
+  value: { margin: 0, overflowWrap: 'anywhere' },
+  groups: { listStyleType: 'none', margin: 0, padding: 0, display: 'grid', gap: tokens.spacingVerticalS },
+  groupName: { fontWeight: tokens.fontWeightSemibold },
+});
+
+const joined = new Intl.DateTimeFormat('en-US', { dateStyle: 'long' });
+
+/** The signed-in person as GET /api/me describes them. */
+export function AccountDetails({ user }: { user: User }) {
+  const styles = useStyles();
+  return (
+    <div className={styles.stack}>
+      <ContentCard aria-labelledby="account-you">
+        <Heading level="section" id="account-you">
+          You
+        </Heading>
+        <dl className={styles.facts}>
+          <dt className={styles.term}>Name</dt>
+          <dd className={styles.value}>{user.displayName}</dd>
+          <dt className={styles.term}>E-mail</dt>
+          <dd className={styles.value}>{user.email}</dd>
+          <dt className={styles.term}>Role</dt>
+          <dd className={styles.value}>{ROLE_WORDS[user.role]}</dd>
+          <dt className={styles.term}>Joined</dt>
+          <dd className={styles.value}>{joined.format(new Date(user.createdAt))}</dd>
+        </dl>
+      </ContentCard>
+      <ContentCard aria-labelledby="account-groups">
+        <Heading level="section" id="account-groups">
+          Your groups
+        </Heading>
+        {user.groups.length === 0 ? (
+          <EmptyState title="You are not in a growing group yet.">
+            An organiser adds you to their group; then the group's season shows up here.
+          </EmptyState>
+        ) : (
+          <ul className={styles.groups}>
+            {user.groups.map((g) => (
+              <li key={g.groupId}>
+                <span className={styles.groupName}>{g.groupName}</span> · {GROUP_ROLE_WORDS[g.role]}
+              </li>
+            ))}
+          </ul>
+        )}
+      </ContentCard>
+    </div>
+  );
+}

@@ -1,0 +1,1 @@
+export { AccountDetails } from './components/account-details.js';

@@ -1,0 +1,39 @@
+import { loginRequestSchema } from '@homeground/shared';
+import { describe, expect, it } from 'vitest';
+import { ApiRequestError } from '../../../lib/api-request-error.js';
+import { describeAuthFailure, fieldErrorsFromZod } from './form-errors.js';
+
+// Expected words: the shared login schema (shared/src/types/auth.ts) and the task's API contract.
+describe('fieldErrorsFromZod', () => {
+  it('keeps the first message per field as a sentence', () => {
+    const parsed = loginRequestSchema.safeParse({ email: 'not-an-address', password: '' });
+    expect(parsed.success).toBe(false);
+    if (parsed.success) return;
+    expect(fieldErrorsFromZod(parsed.error)).toEqual({
+      email: 'Must be an e-mail address',
+      password: 'Must not be empty',
+    });
+  });
+});
+
+describe('describeAuthFailure', () => {
+  const fields = ['email', 'password', 'displayName'] as const;
+
+  it('puts a 409 on register beside the e-mail field', () => {
+    const error = new ApiRequestError({ statusCode: 409, error: 'Conflict', message: 'E-mail taken' });
+    expect(describeAuthFailure(error, 'register', fields).fields.email).toMatch(/already exists/);
+  });
+
+  it('shows server field messages beside known fields and the rest above the form', () => {
+    const error = new ApiRequestError({
+      statusCode: 400,
+      error: 'Bad Request',
+      message: 'Invalid input',
+      fields: [{ field: 'displayName', message: 'must not be empty' }, { field: 'captcha', message: 'is missing' }],
+    });
+    expect(describeAuthFailure(error, 'register', fields)).toEqual({
+      fields: { displayName: 'Must not be empty' },
+      message: 'captcha: is missing',
+    });
+  });
+});
