@@ -1,0 +1,76 @@
+import type { ChosenSpecies, PaletteConstraint, PaletteResult } from '../types/recommendation.js';
+import { compareScored } from '../scoring/score-species.js';
+import { isNativeMilkweed } from '../scoring/genus.js';
+import { roundTo } from '../units/conversions.js';
+import { bloomConstraints } from './bloom-constraints.js';
+import type { ConstraintInput } from './constraint-input.js';
+import { heightConstraint, grassConstraint, milkweedConstraint } from './mix-constraints.js';
+import { mixSizeForArea } from './mix-size.js';
+import { makeObjective, objectiveTerms } from './objective.js';
+import { optimiseSelection } from './optimiser.js';
+import { buildCandidates, type PaletteCandidates, type PaletteInput } from './palette-candidates.js';
+import { rolesOf } from './mix-roles.js';
+
+/** The mix size: as asked, else from the area; never fewer than the locks nor more than the candidates. */
+export function resolveSize(input: PaletteInput, c: PaletteCandidates): { size: number; reason: string; notices: string[] } {
+  const fromArea = mixSizeForArea(input.site.areaSqFt);
+  let size = input.options?.size ?? fromArea.size;
+  let reason = input.options?.size !== undefined ? `You asked for ${size} species.` : fromArea.reason;
+  const notices: string[] = [];
+  if (c.locked.length > size) {
+    size = c.locked.length;
+    reason = `You kept ${size} species, so the mix holds ${size}.`;
+  }
+  if (c.items.length < size) {
+    notices.push(`Only ${c.items.length} species suit your ground, so the mix has ${c.items.length} instead of ${size}.`);
+    size = c.items.length;
+  }
+  return { size, reason, notices };
+}
+
+export function reportConstraints(input: ConstraintInput): PaletteConstraint[] {
+  return [...bloomConstraints(input), milkweedConstraint(input), grassConstraint(input), heightConstraint(input)];
+}
+
+/**
+ * Builds a balanced mix for a site: the species that suit it, chosen to maximise the mix objective
+ * (objective.ts) with greedy selection and swaps, with "why it fits", each species' role in the
+ * mix, and a report on every design rule (met, or why not).
+ */
+export function balancePalette(input: PaletteInput): PaletteResult {
+  const c = buildCandidates(input);
+  const { size, reason, notices } = resolveSize(input, c);
+  const settings = { size, monarchsGoal: input.site.goals.includes('monarchs') };
+  const objective = makeObjective(settings);
+  const selection = optimiseSelection(c.items, size, objective, { locked: c.locked });
+  const chosen: ChosenSpecies[] = selection.chosen
+    .map((item) => {
+      const scored = c.scored.get(item.slug)!;
+      return {
+        slug: item.slug,
+        score: scored.score,
+        parts: scored.parts,
+        roles: rolesOf(item, selection.chosen, settings.monarchsGoal),
+        locked: c.locked.includes(item.slug),
+      };
+    })
+    .sort((a, b) => compareScored({ ...a, eligible: true, nearMiss: false }, { ...b, eligible: true, nearMiss: false }));
+
+  const milkweedNearMisses = c.recommendation.alsoConsider
+    .map((r) => c.species.get(r.slug)!)
+    .filter((s) => isNativeMilkweed(s) && s.nativeStates.includes(input.region.state))
+    .map((s) => ({ name: s.commonNames[0], reason: c.recommendation.alsoConsider.find((r) => r.slug === s.slug)!.ineligibleReason ?? '' }));
+
+  return {
+    size,
+    sizeReason: reason,
+    chosen,
+    objective: roundTo(selection.value, 4),
+    terms: objectiveTerms(selection.chosen, settings).map((t) => ({ ...t, value: roundTo(t.value, 4) })),
+    constraints: reportConstraints({
+      chosen: selection.chosen, candidates: c.items, size, site: input.site, region: input.region,
+      locked: c.locked, milkweedNearMisses,
+    }),
+    notices: [...c.notices, ...notices],
+  };
+}

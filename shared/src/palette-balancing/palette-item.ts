@@ -1,0 +1,58 @@
+import type { BloomPeriod, ScoredSpecies } from '../types/recommendation.js';
+import type { FlowerColour, Species } from '../types/species.js';
+import { cp42PeriodsOf, isFloweringSpecies } from '../scoring/bloom-periods.js';
+import { genusOf, isNativeMilkweed } from '../scoring/genus.js';
+
+/** Rows of a bed by mature height (Homeground's rule, on the middle of the record's height range). */
+export type HeightTier = 'front' | 'middle' | 'back';
+/** Under 2 ft (60 cm) goes in front; over 4 ft (120 cm) at the back. */
+export const FRONT_BELOW_CM = 60;
+export const BACK_ABOVE_CM = 120;
+
+export function heightTierOf(heightCm: { min: number; max: number }): HeightTier {
+  const middle = (heightCm.min + heightCm.max) / 2;
+  if (middle < FRONT_BELOW_CM) return 'front';
+  if (middle > BACK_ABOVE_CM) return 'back';
+  return 'middle';
+}
+
+/** What the mix objective needs to know about one candidate, worked out once. */
+export interface PaletteItem {
+  slug: string;
+  /** First common name, for reasons in words. */
+  name: string;
+  /**
+   * Fit score without its host-plant and monarch-host parts: the mix objective counts host value
+   * once per genus (every species of a genus shares its count) and milkweeds with diminishing
+   * returns, so neither is counted twice.
+   */
+  fit: number;
+  periods: BloomPeriod[];
+  flowering: boolean;
+  genus: string;
+  /** Lepidoptera species using the genus (0 when the genus is not listed). */
+  hostCount: number;
+  tier: HeightTier;
+  colours: FlowerColour[];
+  graminoid: boolean;
+  milkweed: boolean;
+}
+
+export function toPaletteItem(species: Species, scored: ScoredSpecies): PaletteItem {
+  const mixLevel = scored.parts.filter((p) => p.name === 'host-plant' || p.name === 'monarch-host');
+  const hostPoints = mixLevel.reduce((s, p) => s + p.points, 0);
+  const flowering = isFloweringSpecies(species);
+  return {
+    slug: species.slug,
+    name: species.commonNames[0],
+    fit: scored.score - hostPoints,
+    periods: cp42PeriodsOf(species),
+    flowering,
+    genus: genusOf(species),
+    hostCount: species.wildlife.lepidopteraGenusCount ?? 0,
+    tier: heightTierOf(species.heightCm),
+    colours: flowering ? [...species.flowerColours] : [],
+    graminoid: species.growthForm === 'graminoid',
+    milkweed: isNativeMilkweed(species),
+  };
+}

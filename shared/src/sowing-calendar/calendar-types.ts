@@ -1,0 +1,71 @@
+import { z } from 'zod';
+import { slugSchema, sowingMethodSchema, type SowingMethod, type Species } from '../types/species.js';
+import { isIsoDate, type IsoDate } from './calendar-date.js';
+
+export const isoDateSchema = z.string().refine(isIsoDate, { message: 'a calendar date, YYYY-MM-DD' });
+
+/** A calendar request as the API receives it; it resolves the slugs to catalogue records. */
+export const sowingCalendarRequestSchema = z.object({
+  /** Average last spring frost for the place, e.g. "2027-05-10". */
+  lastFrost: isoDateSchema,
+  /** The plant share (or any date plants must be ready by). */
+  targetDate: isoDateSchema.optional(),
+  /** Today, so past start dates can be flagged (the caller reads the clock, not us). */
+  today: isoDateSchema,
+  plans: z.array(z.object({ slug: slugSchema, method: sowingMethodSchema, sowDate: isoDateSchema.optional() })).min(1).max(200),
+});
+export type SowingCalendarRequest = z.infer<typeof sowingCalendarRequestSchema>;
+
+export interface SowingPlan {
+  species: Species;
+  method: SowingMethod;
+  /** A sowing date chosen by the grower; otherwise the calendar picks one for the method. */
+  sowDate?: IsoDate;
+}
+
+export interface SowingCalendarInput {
+  lastFrost: IsoDate;
+  targetDate?: IsoDate;
+  today: IsoDate;
+  plans: readonly SowingPlan[];
+}
+
+export type CalendarEventKind =
+  | 'winter-sowing-window' | 'warm-moist-start' | 'cms-start' | 'check-sprouts' | 'sow' | 'vent-containers'
+  | 'sprouts-expected' | 'pot-up' | 'harden-off' | 'plant-out' | 'frost-watch';
+
+export interface CalendarEvent {
+  date: IsoDate;
+  kind: CalendarEventKind;
+  title: string;
+  detail: string;
+  /** Null for events that concern the whole calendar (the frost date, the winter-sowing window). */
+  speciesSlug: string | null;
+}
+
+export type CalendarWarningKind =
+  | 'target-too-early' | 'start-in-past' | 'method-unusual' | 'cold-too-short' | 'outside-window' | 'not-for-share';
+
+export interface CalendarWarning {
+  kind: CalendarWarningKind;
+  speciesSlug: string;
+  /** The day count the message gives (days late, days past, days of cold missing). */
+  days?: number;
+  message: string;
+}
+
+/** One species' schedule: its events, the day plants are ready (null when sown in place). */
+export interface SpeciesSchedule {
+  speciesSlug: string;
+  method: SowingMethod;
+  sowDate: IsoDate;
+  readyDate: IsoDate | null;
+  events: CalendarEvent[];
+  warnings: CalendarWarning[];
+}
+
+export interface SowingCalendar {
+  events: CalendarEvent[];
+  warnings: CalendarWarning[];
+  schedules: SpeciesSchedule[];
+}

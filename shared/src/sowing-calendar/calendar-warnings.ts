@@ -1,0 +1,43 @@
+import { addDays, daysBetween, type IsoDate } from './calendar-date.js';
+import type { CalendarWarning, SowingPlan, SpeciesSchedule } from './calendar-types.js';
+import { nameOf } from './event-text.js';
+
+const METHOD_WORDS = {
+  'outdoor-pot-winter': 'outdoor pots over winter', 'winter-sowing': 'winter sowing', 'indoor-lights': 'sowing under lights',
+  'soil-blocks': 'soil blocks', 'direct-seed': 'direct seeding',
+} as const;
+
+/** Warnings that compare a schedule with the target date, today and the species record. */
+export function scheduleWarnings(plan: SowingPlan, schedule: SpeciesSchedule, today: IsoDate, target?: IsoDate): CalendarWarning[] {
+  const slug = plan.species.slug;
+  const name = nameOf(plan.species);
+  const warnings: CalendarWarning[] = [];
+
+  if (!plan.species.germination.methods.includes(plan.method)) {
+    warnings.push({ kind: 'method-unusual', speciesSlug: slug,
+      message: `${name} is not usually raised by ${METHOD_WORDS[plan.method]}; its record lists ` +
+        `${plan.species.germination.methods.map((m) => METHOD_WORDS[m]).join(', ')}.` });
+  }
+  if (target && schedule.readyDate === null) {
+    warnings.push({ kind: 'not-for-share', speciesSlug: slug,
+      message: `${name} is sown where it will grow, so there will be no pots of it for the plant share on ${target}.` });
+  } else if (target && schedule.readyDate && schedule.readyDate > target) {
+    const days = daysBetween(target, schedule.readyDate);
+    warnings.push({ kind: 'target-too-early', speciesSlug: slug, days,
+      message: `${name} will not be ready for the plant share on ${target}: plants by ${METHOD_WORDS[plan.method]} ` +
+        `are ready about ${schedule.readyDate}, ${days} days later.` });
+  }
+
+  const first = schedule.events.reduce<(typeof schedule.events)[number] | undefined>((a, e) => (a && a.date <= e.date ? a : e), undefined);
+  if (first && first.date < today) {
+    const days = daysBetween(first.date, today);
+    const ready = schedule.readyDate ? ` Plants would then be ready about ${addDays(schedule.readyDate, days)}.` : '';
+    const late = target && schedule.readyDate && addDays(schedule.readyDate, days) > target
+      ? ` That is ${daysBetween(target, addDays(schedule.readyDate, days))} days after the plant share.`
+      : '';
+    warnings.push({ kind: 'start-in-past', speciesSlug: slug, days,
+      message: `${name}: the first step (${first.title.replace(`${name}: `, '')}) was due on ${first.date}, ${days} days ago. ` +
+        `Start today and every later step moves about ${days} days.${ready}${late}` });
+  }
+  return warnings;
+}

@@ -1,0 +1,111 @@
+import { z } from 'zod';
+import { regionContextSchema, siteRequestSchema } from './site.js';
+import { slugSchema } from './species.js';
+
+/** CP42 bloom periods (CP42-IN): early Apr–15 Jun, mid 15 Jun–Jul, late Aug–Oct. */
+export const BLOOM_PERIODS = ['early', 'mid', 'late'] as const;
+export type BloomPeriod = (typeof BLOOM_PERIODS)[number];
+
+export type ScorePartName =
+  | 'native' | 'sun' | 'moisture' | 'soil' | 'habitat' | 'host-plant' | 'monarch-host' | 'pollinators'
+  | 'birds' | 'bloom-gap' | 'height' | 'room' | 'deer' | 'spread' | 'rain-garden' | 'shade-garden';
+
+/** One line of "why it fits": points and a sentence a homeowner understands. */
+export interface ScorePart {
+  name: ScorePartName;
+  points: number;
+  reason: string;
+}
+
+export interface ScoredSpecies {
+  slug: string;
+  /** Sum of the parts' points (higher fits better); comparable only within one site. */
+  score: number;
+  parts: ScorePart[];
+  eligible: boolean;
+  /** Why it cannot go in the mix, in plain words (only when not eligible). */
+  ineligibleReason?: string;
+  /** Not eligible, but missed by one step only (sun, moisture, height, room, or native next door). */
+  nearMiss: boolean;
+}
+
+export interface Recommendation {
+  /** Eligible species, best first (score descending, then slug). */
+  ranked: ScoredSpecies[];
+  /** Near misses with the reason, same order. */
+  alsoConsider: ScoredSpecies[];
+}
+
+export const MAX_MIX_SIZE = 40;
+
+export const paletteOptionsSchema = z.object({
+  /** Number of species in the mix; from the area when left out. */
+  size: z.number().int().min(1).max(MAX_MIX_SIZE).optional(),
+  /** Always in the mix. */
+  locked: z.array(slugSchema).default([]),
+  /** Never in the mix (wins over a lock on the same slug). */
+  excluded: z.array(slugSchema).default([]),
+});
+export type PaletteOptions = z.input<typeof paletteOptionsSchema>;
+
+export const recommendRequestSchema = z.object({ site: siteRequestSchema, region: regionContextSchema });
+export type RecommendRequest = z.input<typeof recommendRequestSchema>;
+
+export const paletteRequestSchema = recommendRequestSchema.extend({
+  options: paletteOptionsSchema.default({ locked: [], excluded: [] }),
+});
+export type PaletteRequest = z.input<typeof paletteRequestSchema>;
+
+export type PaletteConstraintId =
+  | 'cp42-early' | 'cp42-mid' | 'cp42-late' | 'cp42-flowering' | 'monarch-milkweed' | 'grass-share'
+  | 'height-spread';
+
+/** One design rule checked on the mix; an unmet rule always says why in words. */
+export interface PaletteConstraint {
+  id: PaletteConstraintId;
+  /** The rule itself, e.g. "At least 3 species in flower in each bloom period". */
+  rule: string;
+  /** False when the rule does not apply to this site (e.g. monarchs are not a goal). */
+  applies: boolean;
+  met: boolean;
+  /** What the mix has, and when unmet, why (e.g. "Only 1 late bloomer native to your region suits dry shade"). */
+  detail: string;
+  /** Source key of the rule (species-data/sources.json). */
+  source: string;
+}
+
+export interface ObjectiveTerm {
+  name:
+    | 'fit' | 'host-plants' | 'bloom-periods' | 'flowering-count' | 'milkweed' | 'grasses' | 'height-tiers' | 'colours'
+    | 'genus-variety';
+  value: number;
+}
+
+export interface ChosenSpecies {
+  slug: string;
+  score: number;
+  parts: ScorePart[];
+  /** What it does for the mix as a whole, e.g. "one of 3 late bloomers". */
+  roles: string[];
+  locked: boolean;
+}
+
+export interface PaletteResult {
+  size: number;
+  /** How the size was chosen, in words. */
+  sizeReason: string;
+  chosen: ChosenSpecies[];
+  objective: number;
+  terms: ObjectiveTerm[];
+  constraints: PaletteConstraint[];
+  /** Locks or exclusions that could not be honoured, and similar notes. */
+  notices: string[];
+}
+
+export interface PaletteAlternative {
+  slug: string;
+  /** Objective of the mix with this species in the slot, minus the objective of the current mix. */
+  objectiveChange: number;
+  score: number;
+  parts: ScorePart[];
+}
