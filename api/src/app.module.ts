@@ -12,6 +12,7 @@ import { HealthModule } from './health/health.module.js';
 import { SpeciesModule } from './species/species.module.js';
 import { EcoregionsModule } from './ecoregions/ecoregions.module.js';
 import { PlacesModule } from './places/places.module.js';
+import { MixesModule } from './mixes/mixes.module.js';
 import { UsersModule } from './users/users.module.js';
 
 /** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
@@ -37,6 +38,7 @@ function webApp(): DynamicModule[] {
     SpeciesModule,
     EcoregionsModule,
     PlacesModule,
+    MixesModule,
     DemoModule,
   ],
 })

@@ -8,11 +8,13 @@ import { User } from '../users/user.entity.js';
 import { CreateUsersAndGroups1764633600000 } from './migrations/1764633600000-create-users-and-groups.js';
 import { CreateCatalogue1764720000000 } from './migrations/1764720000000-create-catalogue.js';
 import { CreateEcoregionBoundaries1764806400000 } from './migrations/1764806400000-create-ecoregion-boundaries.js';
+import { CreateSavedMixes1764892800000 } from './migrations/1764892800000-create-saved-mixes.js';
+import { SavedMixRow } from '../mixes/saved-mix.entity.js';
 import { SpeciesPhoto } from '../species/species-photo.entity.js';
 import { SpeciesRow } from '../species/species.entity.js';
 
-export const ENTITIES = [User, Group, GroupMembership, SpeciesRow, SpeciesPhoto];
-export const MIGRATIONS = [CreateUsersAndGroups1764633600000, CreateCatalogue1764720000000, CreateEcoregionBoundaries1764806400000];
+export const ENTITIES = [User, Group, GroupMembership, SpeciesRow, SpeciesPhoto, SavedMixRow];
+export const MIGRATIONS = [CreateUsersAndGroups1764633600000, CreateCatalogue1764720000000, CreateEcoregionBoundaries1764806400000, CreateSavedMixes1764892800000];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */
 export function databaseOptions(config: Pick<AppConfig, 'databasePath'>): DataSourceOptions {

@@ -1,0 +1,49 @@
+import { BadRequestException, Injectable } from '@nestjs/common';
+import type { RegionContext, Species, SpeciesSummary } from '@homeground/shared';
+import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
+import { SpeciesStore } from '../species/species-store.service.js';
+import { toSpeciesSummary } from '../species/species-summary.mapper.js';
+
+/** What every mix computation needs from the catalogue: the species, and the region's plant communities. */
+@Injectable()
+export class MixContextService {
+  constructor(
+    private readonly store: SpeciesStore,
+    private readonly ecoregions: EcoregionsService,
+  ) {}
+
+  species(): readonly Species[] {
+    return this.store.all();
+  }
+
+  get(slug: string): Species | undefined {
+    return this.store.get(slug);
+  }
+
+  summary(slug: string): SpeciesSummary {
+    return toSpeciesSummary(this.store.get(slug)!, this.store.hasPhoto(slug));
+  }
+
+  summaries(slugs: Iterable<string>): Record<string, SpeciesSummary> {
+    return Object.fromEntries([...new Set(slugs)].map((slug) => [slug, this.summary(slug)]));
+  }
+
+  /** Fills the ecoregion's plant communities (clients send only the code) and checks the code exists. */
+  region(region: RegionContext): RegionContext {
+    if (!region.ecoregionCode || region.ecoregionPlantCommunities) return region;
+    const e = this.ecoregions.list().find((x) => x.code === region.ecoregionCode);
+    if (!e) throw new BadRequestException({ message: 'region.ecoregionCode is not in the catalogue', fields: [{ field: 'region.ecoregionCode', message: 'is not in the catalogue' }] });
+    return { ...region, ecoregionPlantCommunities: e.plantCommunities };
+  }
+
+  /** Slugs that are not in the catalogue, as 400 fields. */
+  assertKnown(slugs: { field: string; slug: string }[]): void {
+    const unknown = slugs.filter((s) => !this.store.get(s.slug));
+    if (unknown.length) {
+      throw new BadRequestException({
+        message: `Not in the catalogue: ${unknown.map((u) => u.slug).join(', ')}`,
+        fields: unknown.map((u) => ({ field: u.field, message: `"${u.slug}" is not in the catalogue` })),
+      });
+    }
+  }
+}

@@ -1,0 +1,30 @@
+import {
+  DEFAULT_LOSS_FACTOR, type MixQuantity, plantsPerSpecies, roundTo, seedWeight, seedsToSow, type Species,
+} from '@homeground/shared';
+
+/**
+ * Plants per species for the bed (shared/quantities: grasses a set share, spacing from the spread),
+ * then seeds to sow from each species' germination rate and the loss factor, and their weight.
+ */
+export function mixQuantities(
+  species: readonly Species[], areaSqFt: number,
+  options: { lossFactor?: number; spacingIn?: Record<string, number>; grassShare?: number } = {},
+): MixQuantity[] {
+  const lossFactor = options.lossFactor ?? DEFAULT_LOSS_FACTOR;
+  const plantings = plantsPerSpecies(species, areaSqFt, { spacingIn: options.spacingIn, grassShare: options.grassShare });
+  return plantings.map((p, i) => {
+    const s = species[i];
+    const seeds = seedsToSow(p.plants, s.germination.germinationRatePct, lossFactor);
+    const weight = s.germination.seedsPerPound ? seedWeight(seeds, s.germination.seedsPerPound) : null;
+    return {
+      slug: p.slug,
+      plants: p.plants,
+      spacingIn: p.spacingIn,
+      spacingCm: p.spacingCm,
+      areaSqFt: roundTo(p.areaSqFt, 1),
+      areaSqM: roundTo(p.areaSqM, 2),
+      seedsToSow: seeds,
+      seedWeight: weight && { grams: roundTo(weight.grams, 3), ounces: roundTo(weight.ounces, 4) },
+    };
+  });
+}

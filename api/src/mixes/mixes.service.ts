@@ -1,0 +1,43 @@
+import { Injectable } from '@nestjs/common';
+import {
+  type AlternativesResponse, alternativesFor, balancePalette, DEFAULT_LOSS_FACTOR, type MixResponse,
+  type PaletteOptions, recommend, type RecommendationsResponse, type RegionContext, type Site,
+} from '@homeground/shared';
+import { MixContextService } from './mix-context.service.js';
+import { mixQuantities } from './mix-quantities.js';
+
+const MAX_RANKED = 60;
+const MAX_ALSO_CONSIDER = 20;
+
+/** Recommendations, balanced mixes and swap suggestions: the shared engine over the live catalogue. */
+@Injectable()
+export class MixesService {
+  constructor(private readonly ctx: MixContextService) {}
+
+  recommend(site: Site, regionIn: RegionContext): RecommendationsResponse {
+    const region = this.ctx.region(regionIn);
+    const r = recommend(this.ctx.species(), site, region);
+    const withSpecies = <T extends { slug: string }>(list: T[]) => list.map((x) => ({ ...x, species: this.ctx.summary(x.slug) }));
+    return { site, ranked: withSpecies(r.ranked.slice(0, MAX_RANKED)), alsoConsider: withSpecies(r.alsoConsider.slice(0, MAX_ALSO_CONSIDER)) };
+  }
+
+  balance(site: Site, regionIn: RegionContext, options: PaletteOptions): MixResponse {
+    const region = this.ctx.region(regionIn);
+    const palette = balancePalette({ species: this.ctx.species(), site, region, options });
+    const chosen = palette.chosen.map((c) => this.ctx.get(c.slug)!);
+    return {
+      site,
+      palette,
+      species: this.ctx.summaries(palette.chosen.map((c) => c.slug)),
+      quantities: mixQuantities(chosen, site.areaSqFt),
+      lossFactor: DEFAULT_LOSS_FACTOR,
+    };
+  }
+
+  alternatives(site: Site, regionIn: RegionContext, options: PaletteOptions, chosen: string[], slot: string): AlternativesResponse {
+    this.ctx.assertKnown([...chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })), { field: 'slot', slug: slot }]);
+    const region = this.ctx.region(regionIn);
+    const list = alternativesFor({ species: this.ctx.species(), site, region, options }, chosen, slot);
+    return { alternatives: list.map((a) => ({ ...a, species: this.ctx.summary(a.slug) })) };
+  }
+}

@@ -1,0 +1,52 @@
+import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import type { SavedMix } from '@homeground/shared';
+import { Repository } from 'typeorm';
+import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { MixContextService } from './mix-context.service.js';
+import { SavedMixRow } from './saved-mix.entity.js';
+
+type SaveInput = Pick<SavedMix, 'name' | 'request' | 'chosen'>;
+
+@Injectable()
+export class SavedMixesService {
+  constructor(
+    @InjectRepository(SavedMixRow) private readonly mixes: Repository<SavedMixRow>,
+    private readonly ctx: MixContextService,
+  ) {}
+
+  async save(user: AuthenticatedUser, input: SaveInput): Promise<SavedMix> {
+    this.ctx.assertKnown(input.chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })));
+    const row = await this.mixes.save(this.mixes.create({ ownerId: user.id, name: input.name, request: input.request, chosen: input.chosen }));
+    return this.get(row.id);
+  }
+
+  async get(id: string): Promise<SavedMix> {
+    const row = await this.mixes.findOne({ where: { id }, relations: { owner: true } });
+    if (!row) throw new NotFoundException('No saved mix with that link: it may have been deleted.');
+    return toDto(row);
+  }
+
+  async mine(user: AuthenticatedUser): Promise<SavedMix[]> {
+    const rows = await this.mixes.find({ where: { ownerId: user.id }, relations: { owner: true }, order: { createdAt: 'DESC' } });
+    return rows.map(toDto);
+  }
+
+  async remove(user: AuthenticatedUser, id: string): Promise<void> {
+    const row = await this.mixes.findOne({ where: { id } });
+    if (!row) throw new NotFoundException('No saved mix with that id.');
+    if (row.ownerId !== user.id && user.role !== 'admin') throw new ForbiddenException('Only the person who saved a mix can delete it.');
+    await this.mixes.delete({ id });
+  }
+}
+
+function toDto(row: SavedMixRow): SavedMix {
+  return {
+    id: row.id,
+    name: row.name,
+    request: row.request as SavedMix['request'],
+    chosen: row.chosen,
+    ownerName: row.owner.displayName,
+    createdAt: row.createdAt.toISOString(),
+  };
+}
