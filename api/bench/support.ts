@@ -48,8 +48,11 @@ export async function startBareServer(body: Buffer, contentType: string): Promis
 }
 
 /** Requests per second on loopback, bounded in time; fails loudly if any request errored. */
-export async function measureThroughput(url: string, seconds = 5, connections = 20): Promise<{ rps: number; p50Ms: number; p99Ms: number }> {
-  const result = await autocannon({ url, connections, duration: seconds, pipelining: 1 });
+export async function measureThroughput(
+  url: string, seconds = 5, connections = 20,
+  request: { method?: 'GET' | 'POST'; headers?: Record<string, string>; body?: string } = {},
+): Promise<{ rps: number; p50Ms: number; p99Ms: number }> {
+  const result = await autocannon({ url, connections, duration: seconds, pipelining: 1, ...request });
   if (result.errors || result.non2xx) throw new Error(`${url}: ${result.errors} errors, ${result.non2xx} non-2xx answers`);
   return { rps: result.requests.average, p50Ms: result.latency.p50, p99Ms: result.latency.p99 };
 }

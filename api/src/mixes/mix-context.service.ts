@@ -12,6 +12,11 @@ export class MixContextService {
     private readonly ecoregions: EcoregionsService,
   ) {}
 
+  /** The catalogue version, for caches of computed answers. */
+  get version(): number {
+    return this.store.version;
+  }
+
   species(): readonly Species[] {
     return this.store.all();
   }

@@ -3,6 +3,7 @@ import {
   type AlternativesResponse, alternativesFor, balancePalette, DEFAULT_LOSS_FACTOR, type MixResponse,
   type PaletteOptions, recommend, type RecommendationsResponse, type RegionContext, type Site,
 } from '@homeground/shared';
+import { AnswerCache } from './answer-cache.js';
 import { MixContextService } from './mix-context.service.js';
 import { mixQuantities } from './mix-quantities.js';
 
@@ -12,6 +13,8 @@ const MAX_ALSO_CONSIDER = 20;
 /** Recommendations, balanced mixes and swap suggestions: the shared engine over the live catalogue. */
 @Injectable()
 export class MixesService {
+  private readonly mixes = new AnswerCache<MixResponse>();
+
   constructor(private readonly ctx: MixContextService) {}
 
   recommend(site: Site, regionIn: RegionContext): RecommendationsResponse {
@@ -22,6 +25,11 @@ export class MixesService {
   }
 
   balance(site: Site, regionIn: RegionContext, options: PaletteOptions): MixResponse {
+    const key = JSON.stringify([this.ctx.version, site, regionIn, options]);
+    return this.mixes.getOrCompute(key, () => this.computeBalance(site, regionIn, options));
+  }
+
+  private computeBalance(site: Site, regionIn: RegionContext, options: PaletteOptions): MixResponse {
     const region = this.ctx.region(regionIn);
     const palette = balancePalette({ species: this.ctx.species(), site, region, options });
     const chosen = palette.chosen.map((c) => this.ctx.get(c.slug)!);

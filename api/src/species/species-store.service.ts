@@ -21,6 +21,7 @@ export class SpeciesStore {
   private ecoregions = new Map<string, Ecoregion>();
   private index = new SpeciesSearchIndex([]);
   private readonly pages = new Map<string, string>();
+  private generation = 0;
   /** The same answers keyed by the raw request URL, as bytes, for the fast path in species-list-cache.middleware. */
   private readonly rawPages = new Map<string, Buffer>();
 
@@ -53,6 +54,12 @@ export class SpeciesStore {
     this.index = new SpeciesSearchIndex(names);
     this.pages.clear();
     this.rawPages.clear();
+    this.generation++;
+  }
+
+  /** Changes on every reload, so caches of answers computed from the catalogue know when to drop them. */
+  get version(): number {
+    return this.generation;
   }
 
   get count(): number {
