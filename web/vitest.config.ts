@@ -11,6 +11,7 @@ export default defineConfig({
     setupFiles: ['src/testing/setup.ts'],
     // Fluent's Griffel styles are plain JS; CSS files (fonts) are not needed to test behaviour.
     css: false,
+    testTimeout: 20_000,
     restoreMocks: true,
     unstubGlobals: true,
   },

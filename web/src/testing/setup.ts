@@ -1,6 +1,10 @@
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterEach, beforeEach } from 'vitest';
+
+// Lazy routes load their chunk on first render; on a busy 2-core CI machine that can take longer
+// than Testing Library's default 1 s for findBy* queries.
+configure({ asyncUtilTimeout: 5000 });
 
 // jsdom has no layout, so no ResizeObserver; Fluent's MessageBar and positioning construct one.
 class NoLayoutResizeObserver {
