@@ -38,7 +38,15 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             page(paths.register.path, async () => ({ Component: (await import('../routes/register.js')).RegisterRoute })),
             page(paths.account.path, async () => ({ Component: (await import('../routes/account.js')).AccountRoute })),
             page(paths.findPlants.path, async () => ({ Component: (await import('../routes/find-plants.js')).FindPlantsRoute })),
-            page(paths.species.path, async () => ({ Component: (await import('../routes/species.js')).SpeciesRoute })),
+            page(paths.savedMix.path, async () => ({ Component: (await import('../routes/mix-saved.js')).SavedMixRoute })),
+            page(paths.species.path, async () => {
+              const m = await import('../routes/species.js');
+              return { Component: m.SpeciesRoute, loader: m.speciesLoader(queryClient) };
+            }),
+            page(paths.speciesDetail.path, async () => {
+              const m = await import('../routes/species-detail.js');
+              return { Component: m.SpeciesDetailRoute, loader: m.speciesDetailLoader(queryClient) };
+            }),
             page(paths.cardsLabels.path, async () => ({ Component: (await import('../routes/cards-and-labels.js')).CardsLabelsRoute })),
             page(paths.season.path, async () => ({ Component: (await import('../routes/season.js')).SeasonRoute })),
             page(paths.myBatches.path, async () => ({ Component: (await import('../routes/my-batches.js')).MyBatchesRoute })),

@@ -11,7 +11,10 @@ export const paths = {
   register: { path: '/register', build: (next?: string) => withNext('/register', next) },
   account: { path: '/account', build: () => '/account' },
   findPlants: { path: '/find-plants', build: () => '/find-plants' },
+  /** A saved yard mix; anyone with the link can open it. */
+  savedMix: { path: '/mixes/:id', build: (id: string) => `/mixes/${encodeURIComponent(id)}` },
   species: { path: '/species', build: () => '/species' },
+  speciesDetail: { path: '/species/:slug', build: (slug: string) => `/species/${encodeURIComponent(slug)}` },
   cardsLabels: { path: '/cards-and-labels', build: () => '/cards-and-labels' },
   season: { path: '/season', build: () => '/season' },
   myBatches: { path: '/my-batches', build: () => '/my-batches' },

@@ -6,9 +6,6 @@ import { renderApp } from '../testing/render-app.js';
 // must say so instead of showing made-up data.
 describe('sections not built yet', () => {
   it.each([
-    ['/find-plants', 'Find plants'],
-    ['/species', 'Species'],
-    ['/cards-and-labels', 'Cards & labels'],
     ['/season', 'Season'],
     ['/my-batches', 'My batches'],
     ['/plant-share', 'Plant share'],

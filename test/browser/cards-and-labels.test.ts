@@ -1,0 +1,125 @@
+/**
+ * Fact cards and pot labels in Debian's Chromium: eight catalogue species open from a link, their
+ * cards print to a Letter PDF of exactly two pages (four cards a page), nothing is cut off, each QR
+ * code points at the species page on this server, the pot labels preview, and no request leaves
+ * localhost.
+ */
+import assert from 'node:assert/strict';
+import { spawnSync } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { after, before, test } from 'node:test';
+import type { Browser, Page } from 'playwright-core';
+import { launchBrowser, openGuardedPage, RESULTS_DIR, screenshot } from './support/browser.js';
+import { type RunningServer, startServer } from './support/server.js';
+
+// Eight records of the demo catalogue (species-data/species/*.json), picked for variety: long
+// cautions (Asclepias), warm-then-cold treatment (Actaea), a fern grown from spores (Adiantum).
+const SLUGS = [
+  'asclepias-tuberosa', 'monarda-fistulosa', 'zizia-aurea', 'andropogon-gerardii',
+  'aquilegia-canadensis', 'amorpha-canescens', 'actaea-racemosa', 'adiantum-pedatum',
+];
+
+let server: RunningServer;
+let browser: Browser;
+
+before(async () => {
+  server = await startServer();
+  browser = await launchBrowser();
+});
+after(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+/** Page objects in a PDF: `/Type /Page` but not the `/Type /Pages` tree node (PDF 32000-1 §7.7.3). */
+function pdfPageCount(pdf: Buffer): number {
+  return pdf.toString('latin1').match(/\/Type\s*\/Page(?!s)/g)?.length ?? 0;
+}
+
+async function waitForCards(page: Page, count: number) {
+  const preview = page.getByRole('region', { name: 'Fact cards as they will print' });
+  await preview.getByRole('article').nth(count - 1).waitFor();
+  await preview.locator('svg[data-url]').nth(count - 1).waitFor();
+  await page.evaluate(() => document.fonts.ready);
+  return preview;
+}
+
+test('eight species print as two Letter pages of fact cards, with working QR links and pot labels', async () => {
+  for (const slug of SLUGS) assert.equal((await fetch(`${server.baseUrl}/api/species/${slug}`)).status, 200, `${slug} is in the demo catalogue`);
+
+  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(browser);
+  try {
+    await page.goto(`${server.baseUrl}/cards-and-labels?species=${SLUGS.join(',')}`);
+    const preview = await waitForCards(page, SLUGS.length);
+    await page.getByText('8 fact cards on 2 pages').waitFor();
+    assert.equal(await preview.getByRole('group', { name: /^Page \d of 2$/ }).count(), 2);
+
+    const urls = await preview.locator('svg[data-url]').evaluateAll((svgs) => svgs.map((s) => s.getAttribute('data-url')));
+    assert.deepEqual(urls, SLUGS.map((s) => `${server.baseUrl}/species/${s}`));
+    await screenshot(page, 'cards-preview');
+
+    // On paper: nothing but the sheets, and no card's words cut off at its edge.
+    await page.emulateMedia({ media: 'print' });
+    const overflow = await preview.getByRole('article').evaluateAll((cards) =>
+      cards
+        .filter((c) => c.scrollHeight > c.clientHeight + 1)
+        .map((c) => `${c.querySelector('h3')?.textContent} (${c.scrollHeight} > ${c.clientHeight} px, shrink step ${c.getAttribute('data-fit')})`),
+    );
+    assert.deepEqual(overflow, [], 'every fact card fits its quarter page');
+    const shellHidden = await page.evaluate(() => getComputedStyle(document.querySelector('header')!).display);
+    assert.equal(shellHidden, 'none', 'the top bar does not print');
+    await page.locator('.hg-sheet').first().screenshot({ path: path.join(RESULTS_DIR, 'fact-cards-print-page-1.png') });
+    // Back to no emulation: page.pdf() prints with print media unless screen is forced.
+    await page.emulateMedia({ media: null });
+
+    const pdf = await page.pdf({ format: 'Letter', printBackground: true });
+    const pdfFile = path.join(RESULTS_DIR, 'fact-cards.pdf');
+    writeFileSync(pdfFile, pdf);
+    assert.equal(pdfPageCount(pdf), 2, 'eight cards at four a page make two pages');
+    // A picture of the PDF itself, when poppler-utils happens to be installed (the test does not need it).
+    spawnSync('pdftoppm', ['-png', '-r', '60', '-f', '1', '-l', '1', '-singlefile', pdfFile, path.join(RESULTS_DIR, 'fact-cards-page-1')]);
+
+    // A4 keeps four cards a page.
+    await page.getByRole('radio', { name: /A4/ }).check();
+    await waitForCards(page, SLUGS.length);
+    assert.equal(pdfPageCount(await page.pdf({ format: 'A4', printBackground: true })), 2, 'A4: two pages too');
+
+    await page.getByRole('tab', { name: 'Pot labels' }).click();
+    await page.getByRole('radio', { name: /US Letter/ }).check();
+    const labels = page.getByRole('region', { name: 'Pot labels as they will print' }).getByTestId('pot-label');
+    await labels.nth(SLUGS.length - 1).waitFor();
+    assert.match(await labels.first().innerText(), /Butterfly milkweed[\s\S]*Sown [A-Z][a-z]{2} \d{1,2}, \d{4}[\s\S]*CMS 30 d/);
+    await screenshot(page, 'pot-labels');
+    const labelPdf = await page.pdf({ format: 'Letter', printBackground: true });
+    writeFileSync(path.join(RESULTS_DIR, 'pot-labels.pdf'), labelPdf);
+    assert.equal(pdfPageCount(labelPdf), 1, 'eight labels fit one page of thirty');
+
+    // The print stylesheet stays loaded after leaving, but another page still prints as itself.
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Species' }).click();
+    await page.waitForURL(`${server.baseUrl}/species`);
+    await page.getByRole('heading', { level: 1 }).waitFor();
+    await page.emulateMedia({ media: 'print' });
+    assert.notEqual(await page.getByRole('heading', { level: 1 }).evaluate((h) => getComputedStyle(h).display), 'none', 'other pages still print');
+    await page.emulateMedia({ media: null });
+
+    assert.deepEqual(offHostRequests, [], 'no request may leave localhost');
+    assert.deepEqual(pageErrors, []);
+  } finally {
+    await context.close();
+  }
+});
+
+test('at phone width the preview shrinks to fit without sideways scrolling', async () => {
+  const { page, offHostRequests, context } = await openGuardedPage(browser, { width: 360, height: 780 });
+  try {
+    await page.goto(`${server.baseUrl}/cards-and-labels?species=${SLUGS.slice(0, 2).join(',')}`);
+    await waitForCards(page, 2);
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    assert.ok(overflow <= 1, `no sideways scrolling at 360 px (overflow ${overflow}px)`);
+    await screenshot(page, 'cards-phone');
+    assert.deepEqual(offHostRequests, []);
+  } finally {
+    await context.close();
+  }
+});

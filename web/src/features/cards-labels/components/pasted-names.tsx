@@ -1,0 +1,58 @@
+import { Button, Field, makeStyles, Textarea, tokens } from '@fluentui/react-components';
+import { useState } from 'react';
+import { ErrorState } from '../../../components/states/index.js';
+import { MAX_PASTED_NAMES, pastedNames, useNameResolver } from '../hooks/use-name-resolver.js';
+
+const useStyles = makeStyles({
+  actions: { marginTop: tokens.spacingVerticalS, display: 'flex', gap: tokens.spacingHorizontalM, alignItems: 'center', flexWrap: 'wrap' },
+  result: { margin: `${tokens.spacingVerticalS} 0 0`, paddingLeft: tokens.spacingHorizontalXL },
+  scientific: { fontStyle: 'italic' },
+  missing: { margin: `${tokens.spacingVerticalS} 0 0` },
+});
+
+/** A list typed or pasted, one name per line; each line is found by search and added. */
+export function PastedNames({ onAdd }: { onAdd: (slugs: string[]) => void }) {
+  const styles = useStyles();
+  const [text, setText] = useState('');
+  const { state, resolve } = useNameResolver();
+  const names = pastedNames(text);
+
+  const submit = async () => {
+    const results = await resolve(names);
+    if (!results) return;
+    onAdd(results.flatMap((r) => (r.match ? [r.match.slug] : [])));
+  };
+
+  const found = state.status === 'done' ? state.results.filter((r) => r.match) : [];
+  const notFound = state.status === 'done' ? state.results.filter((r) => !r.match) : [];
+
+  return (
+    <div>
+      <Field label="Or paste a list" hint={`One name per line, common or scientific; up to ${MAX_PASTED_NAMES} names.`}>
+        <Textarea value={text} onChange={(_, d) => setText(d.value)} rows={4} resize="vertical" placeholder={'wild bergamot\nbuterfly weed\nZizia aurea'} />
+      </Field>
+      <div className={styles.actions}>
+        <Button disabled={names.length === 0 || state.status === 'working'} onClick={() => void submit()}>
+          {state.status === 'working' ? `Finding ${state.total} names…` : 'Find and add these'}
+        </Button>
+      </div>
+      <div aria-live="polite">
+        {state.status === 'failed' ? <ErrorState title="The list could not be looked up." message={state.message} /> : null}
+        {found.length > 0 ? (
+          <ul className={styles.result} aria-label="Names found">
+            {found.map((r) => (
+              <li key={r.typed}>
+                “{r.typed}”: added {r.match!.commonName} (<span className={styles.scientific}>{r.match!.scientificName}</span>)
+              </li>
+            ))}
+          </ul>
+        ) : null}
+        {notFound.length > 0 ? (
+          <p className={styles.missing} role="status">
+            Not found in the catalogue, so not added: {notFound.map((r) => `“${r.typed}”`).join(', ')}. Check the spelling, or try the scientific name.
+          </p>
+        ) : null}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,53 @@
+import { makeStyles, tokens } from '@fluentui/react-components';
+import { Info20Regular } from '@fluentui/react-icons';
+import type { SpeciesDetail } from '../../../api/species/species.api.js';
+import { hgTokens } from '../../../theme/index.js';
+import { CAUTION_LABELS } from '../utils/card-words.js';
+
+const useStyles = makeStyles({
+  root: {
+    display: 'flex',
+    gap: tokens.spacingHorizontalM,
+    padding: tokens.spacingVerticalM,
+    borderRadius: tokens.borderRadiusXLarge,
+    border: `1px solid ${tokens.colorNeutralStroke2}`,
+    backgroundColor: tokens.colorNeutralBackground1,
+    color: hgTokens.hgColorLoam,
+  },
+  icon: { flexShrink: 0, marginTop: '2px' },
+  text: { margin: `0 0 ${tokens.spacingVerticalXS}` },
+  list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL },
+});
+
+/** Before-you-plant words: the rules that differ by place, and handling care for the chosen plants. */
+export function PrintReminder({ species }: { species: readonly SpeciesDetail[] }) {
+  const styles = useStyles();
+  const withCautions = species.filter((s) => s.cautions.length > 0);
+  const hasSap = species.some((s) => s.cautions.some((c) => c.kind === 'sap-irritant'));
+  return (
+    <aside className={styles.root} aria-label="Before you plant">
+      <Info20Regular className={styles.icon} aria-hidden />
+      <div>
+        <p className={styles.text}>
+          Before you plant or share, check your state&apos;s noxious-weed list and any local rules: a plant native to one
+          county can be restricted in the next.
+        </p>
+        <p className={styles.text}>
+          {hasSap
+            ? 'Milkweed and other plants with milky sap can sting eyes and skin: wear gloves when you clean seed or pot them up, and wash your hands after.'
+            : 'Wear gloves when cleaning seed of plants with sap or bristles, and wash your hands after.'}{' '}
+          Keep seed of plants marked toxic away from children, pets and livestock.
+        </p>
+        {withCautions.length > 0 ? (
+          <ul className={styles.list} aria-label="Cautions among your plants">
+            {withCautions.map((s) => (
+              <li key={s.slug}>
+                {s.commonNames[0]}: {s.cautions.map((c) => CAUTION_LABELS[c.kind].toLowerCase()).join(', ')}
+              </li>
+            ))}
+          </ul>
+        ) : null}
+      </div>
+    </aside>
+  );
+}

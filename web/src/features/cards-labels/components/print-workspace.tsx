@@ -1,0 +1,75 @@
+import { Button, makeStyles, Tab, TabList, tokens } from '@fluentui/react-components';
+import { Print20Regular } from '@fluentui/react-icons';
+import { countOf } from '@homeground/shared';
+import { useId, useState } from 'react';
+import type { SpeciesDetail } from '../../../api/species/species.api.js';
+import { ContentCard } from '../../../components/page/content-card.js';
+import { Heading } from '../../../components/page/page-heading.js';
+import { EmptyState, LoadingState } from '../../../components/states/index.js';
+import { useQrEncoder } from '../hooks/use-qr-encoder.js';
+import { sowDateWords, todayIso } from '../utils/card-words.js';
+import { intoSheets } from '../utils/paging.js';
+import { CARDS_PER_SHEET, labelsPerSheet, PAPERS } from '../utils/paper-sizes.js';
+import { FactCardSheets } from './fact-card-sheets.js';
+import { PotLabelSheets } from './pot-label-sheets.js';
+import { PrintOptions, type PrintKind, type PrintOptionsValue } from './print-options.js';
+import { PrintReminder } from './print-reminder.js';
+
+const useStyles = makeStyles({
+  controls: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL, marginBottom: tokens.spacingVerticalXL },
+  actions: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalM },
+  legend: { margin: 0, color: tokens.colorNeutralForeground2 },
+});
+
+/** Choose cards or labels and paper, preview the pages, print. */
+export function PrintWorkspace({ species, isLoading }: { species: readonly SpeciesDetail[]; isLoading: boolean }) {
+  const styles = useStyles();
+  const headingId = useId();
+  const tabsId = useId();
+  const qr = useQrEncoder();
+  const [kind, setKind] = useState<PrintKind>('cards');
+  const [options, setOptions] = useState<PrintOptionsValue>(() => ({ paper: 'letter', sowDate: todayIso(), copies: 1 }));
+  const paper = PAPERS[options.paper];
+  const geometry = kind === 'cards' ? paper.cards : paper.labels;
+  const pages = kind === 'cards' ? intoSheets(species, CARDS_PER_SHEET).length : intoSheets(species.flatMap((s) => Array(options.copies).fill(s)), labelsPerSheet(paper)).length;
+  const what = kind === 'cards' ? countOf(species.length, 'fact card') : countOf(species.length * options.copies, 'pot label');
+  const canPrint = species.length > 0 && !isLoading;
+
+  return (
+    <ContentCard aria-labelledby={headingId}>
+      {/* The page's paper size and margin for the browser's print dialog and PDF. */}
+      <style>{`@page { size: ${paper.cssSize}; margin: ${geometry.margin}; }`}</style>
+      <Heading level="section" id={headingId}>Print</Heading>
+      <div className={styles.controls}>
+        <TabList selectedValue={kind} onTabSelect={(_, d) => setKind(d.value as PrintKind)} aria-label="What to print">
+          <Tab id={`${tabsId}-cards`} value="cards">Fact cards</Tab>
+          <Tab id={`${tabsId}-labels`} value="labels">Pot labels</Tab>
+        </TabList>
+        <PrintOptions kind={kind} value={options} onChange={setOptions} />
+        {kind === 'labels' ? (
+          <p className={styles.legend}>
+            On labels, CMS means cold-moist stratification and WMS warm-moist stratification, each with its days (d).
+          </p>
+        ) : null}
+        <PrintReminder species={species} />
+        <div className={styles.actions}>
+          <Button appearance="primary" icon={<Print20Regular />} disabled={!canPrint} onClick={() => window.print()}>
+            {kind === 'cards' ? 'Print fact cards' : 'Print pot labels'}
+          </Button>
+          <span aria-live="polite">{canPrint ? `${what} on ${countOf(pages, 'page')}` : isLoading ? 'Getting the plant records…' : 'Choose at least one species to print.'}</span>
+        </div>
+      </div>
+      <div role="tabpanel" aria-labelledby={`${tabsId}-${kind}`}>
+        {isLoading && species.length === 0 ? (
+          <LoadingState label="Getting the plant records" />
+        ) : species.length === 0 ? (
+          <EmptyState title="Nothing to print yet">Search for a species or paste a list above, and its {kind === 'cards' ? 'fact card' : 'pot label'} appears here as it will print.</EmptyState>
+        ) : kind === 'cards' ? (
+          <FactCardSheets species={species} paper={paper} qr={qr} />
+        ) : (
+          <PotLabelSheets species={species} paper={paper} copies={options.copies} sowDate={sowDateWords(options.sowDate)} />
+        )}
+      </div>
+    </ContentCard>
+  );
+}

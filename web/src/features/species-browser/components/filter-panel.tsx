@@ -1,0 +1,123 @@
+import {
+  GROWTH_FORMS, type GrowthForm, MOISTURE_LEVELS, type Moisture, STATE_NAMES, type StateCode, SUN_LEVELS, type Sun,
+  US_STATE_CODES,
+} from '@homeground/shared';
+import { Button, Checkbox, Field, makeStyles, Select, tokens } from '@fluentui/react-components';
+import { Dismiss16Regular } from '@fluentui/react-icons';
+import { type BrowserState, countActiveFilters } from '../utils/browser-state.js';
+import { MONTH_NAMES } from '../utils/bloom-label.js';
+import { GROWTH_FORM_LABELS, MOISTURE_LABELS, SUN_LABELS } from '../utils/option-labels.js';
+import { EcoregionSelect } from './ecoregion-select.js';
+import { HeightFilter } from './height-filter.js';
+import { useSelectStyles } from './select-styles.js';
+
+const useStyles = makeStyles({
+  grid: {
+    display: 'grid',
+    gridTemplateColumns: 'repeat(auto-fill, minmax(200px, 1fr))',
+    gap: `${tokens.spacingVerticalM} ${tokens.spacingHorizontalL}`,
+    alignItems: 'start',
+    '& > *': { minWidth: 0 },
+  },
+  wide: { gridColumn: 'span 2', '@media (max-width: 480px)': { gridColumn: 'auto' } },
+  footer: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: tokens.spacingHorizontalM,
+    marginTop: tokens.spacingVerticalM,
+  },
+});
+
+/** States sorted by name, as people look for them, not by postal code. */
+const STATES_BY_NAME = [...US_STATE_CODES].sort((a, b) => STATE_NAMES[a].localeCompare(STATE_NAMES[b]));
+
+function OptionSelect<T extends string>({ label, anyLabel, value, options, labels, onChange }: {
+  label: string;
+  anyLabel: string;
+  value: T | undefined;
+  options: readonly T[];
+  labels: Record<T, string>;
+  onChange: (value: T | undefined) => void;
+}) {
+  const styles = useSelectStyles();
+  return (
+    <Field label={label}>
+      <Select className={styles.root} select={{ className: styles.select }} value={value ?? ''} onChange={(_, d) => onChange((d.value || undefined) as T | undefined)}>
+        <option value="">{anyLabel}</option>
+        {options.map((o) => (
+          <option key={o} value={o}>
+            {labels[o]}
+          </option>
+        ))}
+      </Select>
+    </Field>
+  );
+}
+
+const MONTH_VALUES = MONTH_NAMES.map((_, i) => String(i + 1));
+const MONTH_LABELS = Object.fromEntries(MONTH_NAMES.map((name, i) => [String(i + 1), name]));
+
+/** Every catalogue field the API filters on, each written to the URL as it changes. */
+export function FilterPanel({ state, onChange, onClear }: {
+  state: BrowserState;
+  onChange: (change: Partial<BrowserState>) => void;
+  onClear: () => void;
+}) {
+  const styles = useStyles();
+  const active = countActiveFilters(state);
+  return (
+    <>
+      <div className={styles.grid}>
+        <OptionSelect<StateCode>
+          label="Native to"
+          anyLabel="Any state"
+          value={state.state}
+          options={STATES_BY_NAME}
+          labels={STATE_NAMES}
+          onChange={(v) => onChange({ state: v })}
+        />
+        <EcoregionSelect state={state.state} value={state.ecoregion} onChange={(v) => onChange({ ecoregion: v })} />
+        <OptionSelect<Sun> label="Sun" anyLabel="Any light" value={state.sun} options={SUN_LEVELS} labels={SUN_LABELS} onChange={(v) => onChange({ sun: v })} />
+        <OptionSelect<Moisture>
+          label="Soil moisture"
+          anyLabel="Any moisture"
+          value={state.moisture}
+          options={MOISTURE_LEVELS}
+          labels={MOISTURE_LABELS}
+          onChange={(v) => onChange({ moisture: v })}
+        />
+        <OptionSelect<string>
+          label="Blooming in"
+          anyLabel="Any month"
+          value={state.bloomMonth === undefined ? undefined : String(state.bloomMonth)}
+          options={MONTH_VALUES}
+          labels={MONTH_LABELS}
+          onChange={(v) => onChange({ bloomMonth: v === undefined ? undefined : Number(v) })}
+        />
+        <OptionSelect<GrowthForm>
+          label="Growth form"
+          anyLabel="Any form"
+          value={state.growthForm}
+          options={GROWTH_FORMS}
+          labels={GROWTH_FORM_LABELS}
+          onChange={(v) => onChange({ growthForm: v })}
+        />
+        <div className={styles.wide}>
+          <HeightFilter minCm={state.minHeightCm} maxCm={state.maxHeightCm} onChange={onChange} />
+        </div>
+      </div>
+      <div className={styles.footer}>
+        <Checkbox
+          label="Monarch caterpillar host plants only"
+          checked={state.monarchHost}
+          onChange={(_, d) => onChange({ monarchHost: d.checked === true })}
+        />
+        <Button appearance="subtle" icon={<Dismiss16Regular />} disabled={active === 0} onClick={onClear}>
+          Clear filters
+        </Button>
+      </div>
+    </>
+  );
+}

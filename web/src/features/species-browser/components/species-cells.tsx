@@ -1,0 +1,98 @@
+import type { SpeciesSummary } from '@homeground/shared';
+import { Checkmark16Filled, Warning16Regular } from '@fluentui/react-icons';
+import type { ReactNode } from 'react';
+import { RouterLink } from '../../../components/links/router-link.js';
+import type { NameHighlights } from '../hooks/use-name-highlights.js';
+import type { OptionalColumn } from '../hooks/use-column-choice.js';
+import { bloomRange } from '../utils/bloom-label.js';
+import { heightRangeParts } from '../utils/height-words.js';
+import { CAUTION_SHORT_LABELS, listWords, MOISTURE_LABELS } from '../utils/option-labels.js';
+import { BloomStrip } from './bloom-strip.js';
+import { HighlightedText } from './highlighted-text.js';
+import { useTableStyles } from './species-table.styles.js';
+
+const SUN_SHORT = { full: 'Full', part: 'Part', shade: 'Shade' } as const;
+const count = new Intl.NumberFormat('en-US');
+
+function capitalise(word: string): string {
+  return word.charAt(0).toUpperCase() + word.slice(1);
+}
+
+/** A dash for an empty cell, with words for a screen reader instead of "dash". */
+function Nothing({ spoken }: { spoken: string }) {
+  const styles = useTableStyles();
+  return (
+    <span className={styles.muted} aria-label={spoken} role="img">
+      —
+    </span>
+  );
+}
+
+export function NameCell({ species, href, highlights }: { species: SpeciesSummary; href: string; highlights?: NameHighlights }) {
+  const styles = useTableStyles();
+  return (
+    <RouterLink to={href} className={styles.nameLink}>
+      <HighlightedText text={species.commonName} ranges={highlights?.commonName} />
+    </RouterLink>
+  );
+}
+
+/** The content of one optional cell; the table decides which columns show. */
+export function OptionalCell({ column, species, highlights }: { column: OptionalColumn; species: SpeciesSummary; highlights?: NameHighlights }): ReactNode {
+  const styles = useTableStyles();
+  switch (column) {
+    case 'scientificName':
+      return (
+        <i className={styles.scientific}>
+          <HighlightedText text={species.scientificName} ranges={highlights?.scientificName} />
+        </i>
+      );
+    case 'family':
+      return species.family;
+    case 'growthForm':
+      return capitalise(species.growthForm);
+    case 'height': {
+      const { feet, metric } = heightRangeParts(species.heightCm.min, species.heightCm.max);
+      return (
+        <span className={styles.nowrap}>
+          {feet}
+          <br />
+          <span className={styles.small}>{metric}</span>
+        </span>
+      );
+    }
+    case 'bloom':
+      return (
+        <span className={styles.bloomCell}>
+          <BloomStrip bloomMonths={species.bloomMonths} flowerColours={species.flowerColours} />
+          <span className={styles.small} aria-hidden>
+            {bloomRange(species.bloomMonths) || 'not recorded'}
+          </span>
+        </span>
+      );
+    case 'sun':
+      return species.sun.map((s) => SUN_SHORT[s]).join(', ');
+    case 'moisture':
+      return listWords(species.moisture, MOISTURE_LABELS);
+    case 'hostValue':
+      return species.lepidopteraGenusCount === null ? <Nothing spoken="Genus not in the host counts" /> : count.format(species.lepidopteraGenusCount);
+    case 'monarchHost':
+      return species.monarchHost ? (
+        <span className={styles.yes}>
+          <Checkmark16Filled className={styles.yesIcon} aria-hidden />
+          Yes
+        </span>
+      ) : (
+        <span className={styles.muted}>No</span>
+      );
+    case 'cautions':
+      return species.cautionKinds.length === 0 ? (
+        <Nothing spoken="No cautions recorded" />
+      ) : (
+        <span className={styles.caution}>
+          <Warning16Regular className={styles.cautionIcon} aria-label="Caution:" role="img" />
+          <span>{species.cautionKinds.map((k) => CAUTION_SHORT_LABELS[k]).join(', ')}</span>
+        </span>
+      );
+  }
+}

@@ -1,0 +1,55 @@
+import { useCallback, useState } from 'react';
+
+/** Columns a person may hide; the common name (the link to the detail page) always shows. */
+export const OPTIONAL_COLUMNS = [
+  'scientificName', 'family', 'growthForm', 'height', 'bloom', 'sun', 'moisture', 'hostValue', 'monarchHost', 'cautions',
+] as const;
+export type OptionalColumn = (typeof OPTIONAL_COLUMNS)[number];
+
+export const COLUMN_LABELS: Record<OptionalColumn, string> = {
+  scientificName: 'Scientific name',
+  family: 'Family',
+  growthForm: 'Growth form',
+  height: 'Height',
+  bloom: 'Bloom',
+  sun: 'Sun',
+  moisture: 'Moisture',
+  hostValue: 'Host value',
+  monarchHost: 'Monarch host',
+  cautions: 'Cautions',
+};
+
+export const COLUMNS_STORAGE_KEY = 'homeground.species-browser.hidden-columns';
+/** Family is one click away on the detail page; hiding it first keeps the table readable on a laptop. */
+const DEFAULT_HIDDEN: readonly OptionalColumn[] = ['family'];
+
+/** Stores the hidden columns, not the shown ones, so a column added later appears for everyone. */
+function readHidden(): OptionalColumn[] {
+  try {
+    const raw = window.localStorage.getItem(COLUMNS_STORAGE_KEY);
+    if (raw === null) return [...DEFAULT_HIDDEN];
+    const parsed: unknown = JSON.parse(raw);
+    return Array.isArray(parsed) ? OPTIONAL_COLUMNS.filter((c) => parsed.includes(c)) : [...DEFAULT_HIDDEN];
+  } catch {
+    // Storage can be unavailable (private windows, quotas): fall back to the defaults.
+    return [...DEFAULT_HIDDEN];
+  }
+}
+
+/** Which optional columns are shown, remembered in localStorage across visits. */
+export function useColumnChoice() {
+  const [hidden, setHidden] = useState<OptionalColumn[]>(readHidden);
+
+  const setShown = useCallback((shown: readonly OptionalColumn[]) => {
+    const nextHidden = OPTIONAL_COLUMNS.filter((c) => !shown.includes(c));
+    setHidden(nextHidden);
+    try {
+      window.localStorage.setItem(COLUMNS_STORAGE_KEY, JSON.stringify(nextHidden));
+    } catch {
+      // Not remembered this time; the choice still applies to this visit.
+    }
+  }, []);
+
+  const shown = OPTIONAL_COLUMNS.filter((c) => !hidden.includes(c));
+  return { shown, isShown: (c: OptionalColumn) => !hidden.includes(c), setShown };
+}

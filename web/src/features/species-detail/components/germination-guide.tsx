@@ -1,0 +1,80 @@
+import { GRAMS_PER_POUND, SOWING_METHODS, type SowingMethod } from '@homeground/shared';
+import { makeStyles, tokens } from '@fluentui/react-components';
+import { Beaker20Regular, Checkmark20Regular, Dismiss20Regular } from '@fluentui/react-icons';
+import type { SpeciesDetail } from '../../../api/species/species.api.js';
+import { Heading } from '../../../components/page/page-heading.js';
+import { hgTokens } from '../../../theme/index.js';
+import { METHOD_WORDS, sowingDepthWords, treatmentWords } from '../utils/germination-words.js';
+import { SECTION_FIELDS } from '../utils/source-labels.js';
+import { FactSection } from './fact-section.js';
+import { SourceNote } from './source-note.js';
+
+const useStyles = makeStyles({
+  steps: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalM },
+  stepTitle: { fontWeight: tokens.fontWeightSemibold },
+  stepBody: { margin: `${tokens.spacingVerticalXXS} 0 0` },
+  note: { margin: `${tokens.spacingVerticalXXS} 0 0`, color: hgTokens.hgColorLoam },
+  para: { margin: `${tokens.spacingVerticalM} 0 0` },
+  subheading: { marginTop: tokens.spacingVerticalL, marginBottom: tokens.spacingVerticalS },
+  methods: { listStyleType: 'none', margin: 0, padding: 0, display: 'grid', gap: tokens.spacingVerticalS },
+  method: { display: 'grid', gridTemplateColumns: '20px 1fr', columnGap: tokens.spacingHorizontalS, alignItems: 'start' },
+  suits: { color: tokens.colorBrandForeground1 },
+  notSuited: { color: tokens.colorNeutralForeground3 },
+  how: { display: 'block', fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground2 },
+});
+
+const count = new Intl.NumberFormat('en-US');
+
+/** Which of the five ways to raise it suit this species, suited ones first, each said in words. */
+function MethodList({ methods }: { methods: readonly SowingMethod[] }) {
+  const styles = useStyles();
+  const ordered = [...SOWING_METHODS].sort((a, b) => Number(methods.includes(b)) - Number(methods.includes(a)));
+  return (
+    <ul className={styles.methods}>
+      {ordered.map((m) => {
+        const suits = methods.includes(m);
+        return (
+          <li key={m} className={styles.method}>
+            {suits ? <Checkmark20Regular className={styles.suits} aria-hidden /> : <Dismiss20Regular className={styles.notSuited} aria-hidden />}
+            <span>
+              <strong>{METHOD_WORDS[m].name}</strong>: {suits ? 'suits it' : 'not the best way for this species'}
+              {suits ? <span className={styles.how}>{METHOD_WORDS[m].how}</span> : null}
+            </span>
+          </li>
+        );
+      })}
+    </ul>
+  );
+}
+
+/** Raising it from seed: treatments as steps in plain words, depth, expected germination, methods. */
+export function GerminationGuide({ species }: { species: SpeciesDetail }) {
+  const styles = useStyles();
+  const g = species.germination;
+  const steps = g.treatments.map(treatmentWords);
+  return (
+    <FactSection title="Growing from seed" icon={<Beaker20Regular />}>
+      <ol className={styles.steps} aria-label="Seed treatment, in order">
+        {steps.map((s, i) => (
+          <li key={i}>
+            <span className={styles.stepTitle}>{s.title}</span>
+            <p className={styles.stepBody}>{s.body}</p>
+            {s.note ? <p className={styles.note}>Curator&apos;s note: {s.note}</p> : null}
+          </li>
+        ))}
+      </ol>
+      <p className={styles.para}>{sowingDepthWords(g)}</p>
+      <p className={styles.para}>
+        A good seed lot usually germinates about {g.germinationRatePct}% after treatment
+        {g.seedsPerPound
+          ? `; there are about ${count.format(g.seedsPerPound)} seeds in a pound (${count.format(Math.round(g.seedsPerPound / GRAMS_PER_POUND))} per gram).`
+          : '.'}
+      </p>
+      <Heading level="card" className={styles.subheading}>
+        Ways to raise it
+      </Heading>
+      <MethodList methods={g.methods} />
+      <SourceNote sources={species.sources} fields={SECTION_FIELDS.germination} />
+    </FactSection>
+  );
+}

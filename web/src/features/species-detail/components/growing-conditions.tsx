@@ -1,0 +1,50 @@
+import { formatHeightRangeCm } from '@homeground/shared';
+import { Drop20Regular, Ruler20Regular } from '@fluentui/react-icons';
+import type { SpeciesDetail } from '../../../api/species/species.api.js';
+import {
+  DEER_WORDS, GROWTH_FORM_WORDS, HABITAT_WORDS, joinWords, LIFESPAN_WORDS, MOISTURE_WORDS, SOIL_WORDS, SPREAD_WORDS, SUN_WORDS,
+} from '../utils/detail-words.js';
+import { SECTION_FIELDS } from '../utils/source-labels.js';
+import { FactList } from './fact-list.js';
+import { FactSection } from './fact-section.js';
+import { SourceNote } from './source-note.js';
+
+function capitalise(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+/** Where it grows: light, moisture, soil and the plant communities it belongs to. */
+export function GrowingConditions({ species }: { species: SpeciesDetail }) {
+  return (
+    <FactSection title="Where it grows" icon={<Drop20Regular />}>
+      <FactList
+        facts={[
+          ['Sun', capitalise(joinWords(species.sun.map((s) => SUN_WORDS[s])))],
+          ['Moisture', capitalise(`${joinWords(species.moisture.map((m) => MOISTURE_WORDS[m]))} soil`)],
+          ['Soil', capitalise(joinWords(species.soilTextures.map((s) => SOIL_WORDS[s])))],
+          ['Habitats', capitalise(joinWords(species.habitats.map((h) => HABITAT_WORDS[h])))],
+        ]}
+      />
+      <SourceNote sources={species.sources} fields={SECTION_FIELDS.conditions} />
+    </FactSection>
+  );
+}
+
+/** Size and habit: height and spread in both unit systems, form, lifespan, spread and deer. */
+export function SizeAndHabit({ species }: { species: SpeciesDetail }) {
+  return (
+    <FactSection title="Size and habit" icon={<Ruler20Regular />}>
+      <FactList
+        facts={[
+          ['Height', formatHeightRangeCm(species.heightCm.min, species.heightCm.max)],
+          ['Spread', formatHeightRangeCm(species.spreadCm.min, species.spreadCm.max)],
+          ['Growth form', capitalise(GROWTH_FORM_WORDS[species.growthForm])],
+          ['Lifespan', capitalise(LIFESPAN_WORDS[species.lifespan])],
+          ['Spread habit', SPREAD_WORDS[species.spreadHabit]],
+          ['Deer resistance', DEER_WORDS[species.deerResistance]],
+        ]}
+      />
+      <SourceNote sources={species.sources} fields={SECTION_FIELDS.size} />
+    </FactSection>
+  );
+}

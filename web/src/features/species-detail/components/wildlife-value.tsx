@@ -1,0 +1,53 @@
+import { makeStyles, tokens } from '@fluentui/react-components';
+import { LeafOne20Regular } from '@fluentui/react-icons';
+import type { SpeciesDetail } from '../../../api/species/species.api.js';
+import { SECTION_FIELDS, shortCitation } from '../utils/source-labels.js';
+import { FactSection } from './fact-section.js';
+import { SourceNote } from './source-note.js';
+
+const useStyles = makeStyles({
+  list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalS },
+});
+
+const count = new Intl.NumberFormat('en-US');
+
+/** The caterpillar-host sentence with its citation, e.g. "… 115 moth and butterfly species in its genus — Tallamy & Shropshire 2009". */
+export function hostSentence(n: number | null, sourceKey: string | undefined): string {
+  const cite = sourceKey ? ` — ${shortCitation(sourceKey)}` : '';
+  if (n === null) return `Its genus is not listed in the caterpillar-host counts${cite}.`;
+  if (n === 0) return `No moth or butterfly caterpillars are recorded on its genus${cite}.`;
+  const kinds = n === 1 ? 'moth or butterfly species' : 'moth and butterfly species';
+  return `Hosts the caterpillars of ${count.format(n)} ${kinds} in its genus${cite}.`;
+}
+
+/** What the plant feeds: caterpillars, monarchs, pollinators, birds and specialist bees. */
+export function WildlifeValue({ species }: { species: SpeciesDetail }) {
+  const styles = useStyles();
+  const w = species.wildlife;
+  return (
+    <FactSection title="Wildlife value" icon={<LeafOne20Regular />}>
+      <ul className={styles.list}>
+        <li>{hostSentence(w.lepidopteraGenusCount, species.sources['wildlife.lepidopteraGenusCount'])}</li>
+        <li>
+          {w.monarchHost ? 'Monarch host plant: monarch caterpillars feed on its leaves.' : 'Not a monarch host plant.'}
+        </li>
+        {w.pollinators ? <li>{w.pollinators}</li> : null}
+        {w.birds ? <li>{w.birds}</li> : null}
+        {w.specialistBees.length > 0 ? (
+          <li>
+            Specialist bees that gather pollen only from this plant group:{' '}
+            {w.specialistBees.map((bee, i) => (
+              <span key={bee}>
+                {i > 0 ? (i === w.specialistBees.length - 1 ? ' and ' : ', ') : ''}
+                <i>{bee}</i>
+              </span>
+            ))}
+            .
+          </li>
+        ) : null}
+      </ul>
+      <SourceNote sources={species.sources} fields={SECTION_FIELDS.wildlife} />
+    </FactSection>
+  );
+}
+

@@ -1,0 +1,1 @@
+export { SpeciesDetail, type SpeciesDetailProps } from './components/species-detail.js';

@@ -1,0 +1,102 @@
+import { Button, makeStyles, tokens } from '@fluentui/react-components';
+import type { PlaceLookup, StateCode } from '@homeground/shared';
+import { STATE_NAMES } from '@homeground/shared';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { ecoregionListQueryOptions } from '../../../api/ecoregions/ecoregions.queries.js';
+import { ErrorState, LoadingState } from '../../../components/states/index.js';
+import { EcoregionChoice, type EcoregionOption } from './ecoregion-choice.js';
+
+const useStyles = makeStyles({
+  root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
+  place: { margin: 0, fontSize: tokens.fontSizeBase400, lineHeight: tokens.lineHeightBase400 },
+  eco: {
+    borderLeft: `4px solid ${tokens.colorBrandStroke1}`,
+    paddingLeft: tokens.spacingHorizontalM,
+    display: 'flex',
+    flexDirection: 'column',
+    gap: tokens.spacingVerticalXXS,
+  },
+  ecoName: { margin: 0, fontWeight: tokens.fontWeightSemibold },
+  muted: { margin: 0, color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200 },
+  text: { margin: 0, maxWidth: '68ch' },
+});
+
+export interface GroundResultProps {
+  state: StateCode;
+  lookup?: PlaceLookup;
+  ecoregionCode: string;
+  onEcoregionChange: (code: string) => void;
+}
+
+/** Your ground in words: state, county and ecoregion with its description, and the choice when there is one. */
+export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }: GroundResultProps) {
+  const styles = useStyles();
+  const stateName = STATE_NAMES[state];
+  const [showAll, setShowAll] = useState(!lookup);
+  const list = useQuery({ ...ecoregionListQueryOptions(state), enabled: showAll });
+
+  const lookupOptions: EcoregionOption[] = lookup ? [lookup.ecoregion, ...lookup.otherEcoregions] : [];
+  const stateOptions: EcoregionOption[] = (list.data ?? []).map((e) => ({ code: e.code, name: e.name, description: e.description }));
+  const selected = [...lookupOptions, ...stateOptions].find((o) => o.code === ecoregionCode);
+  const isSplit = lookup !== undefined && lookup.otherEcoregions.length > 0;
+
+  return (
+    <div className={styles.root}>
+      {lookup ? (
+        <p className={styles.place} role="status">
+          Your ground is in <strong>{lookup.county.name} County, {stateName}</strong>
+          {lookup.zip ? ` (ZIP ${lookup.zip.code}, ${lookup.zip.city})` : ''}.
+        </p>
+      ) : (
+        <p className={styles.place}>Your ground is in <strong>{stateName}</strong>.</p>
+      )}
+
+      {selected ? (
+        <div className={styles.eco}>
+          <p className={styles.ecoName}>Ecoregion: {selected.name} ({selected.code})</p>
+          <p className={styles.text}>{selected.description}</p>
+          {lookup && selected.code === lookup.ecoregion.code ? (
+            <p className={styles.muted}>
+              {lookup.ecoregion.level2} · {lookup.ecoregion.level1}.{' '}
+              {lookup.ecoregion.method === 'county-crosswalk'
+                ? 'Matched from the ecoregion that covers most of your county.'
+                : 'Matched from the ecoregion boundary at your point.'}
+            </p>
+          ) : null}
+        </div>
+      ) : null}
+
+      {isSplit && !showAll ? (
+        <EcoregionChoice
+          question="Your county reaches into more than one ecoregion. Which one is your ground in?"
+          options={lookupOptions}
+          value={ecoregionCode}
+          onChange={onEcoregionChange}
+        />
+      ) : null}
+
+      {showAll ? (
+        list.isPending ? (
+          <LoadingState label={`Loading the ecoregions of ${stateName}`} />
+        ) : list.isError ? (
+          <ErrorState title={`Homeground could not load the ecoregions of ${stateName}`} message={list.error.message} onRetry={() => void list.refetch()} />
+        ) : (
+          <EcoregionChoice
+            question={`Which ecoregion of ${stateName} is your ground in?`}
+            options={stateOptions}
+            value={ecoregionCode}
+            onChange={onEcoregionChange}
+            stateName={stateName}
+          />
+        )
+      ) : (
+        <div>
+          <Button appearance="subtle" onClick={() => setShowAll(true)}>
+            Choose another ecoregion of {stateName}
+          </Button>
+        </div>
+      )}
+    </div>
+  );
+}

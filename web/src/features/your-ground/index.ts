@@ -1,0 +1,1 @@
+export { GroundStep, type ChosenGround } from './components/ground-step.js';

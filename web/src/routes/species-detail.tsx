@@ -1,0 +1,27 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
+import { speciesDetailQueryOptions } from '../api/species/species.queries.js';
+import { BloomStrip, bloomLabel } from '../features/species-browser/index.js';
+import { SpeciesDetail } from '../features/species-detail/index.js';
+
+/** Starts the record's request while the page's code arrives; the page shows loading, 404 and errors itself. */
+export function speciesDetailLoader(queryClient: QueryClient) {
+  return ({ params }: LoaderFunctionArgs) => {
+    if (params.slug) void queryClient.prefetchQuery(speciesDetailQueryOptions(params.slug));
+    return null;
+  };
+}
+
+export function SpeciesDetailRoute() {
+  const { slug = '' } = useParams();
+  return (
+    <SpeciesDetail
+      // A new slug is a new page: start its state (photo fallback, open details) afresh.
+      key={slug}
+      slug={slug}
+      describeBloom={bloomLabel}
+      renderBloomStrip={(s) => <BloomStrip bloomMonths={s.bloomMonths} flowerColours={s.flowerColours} size="large" />}
+    />
+  );
+}
