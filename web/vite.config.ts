@@ -16,7 +16,8 @@ export default defineConfig({
   build: {
     outDir: 'dist',
     emptyOutDir: true,
-    sourcemap: true,
+    // No maps in the shipped build: they would be served to everyone beside the app (5 MB).
+    sourcemap: false,
     // Pages load through route-level lazy imports (src/app/router.tsx); this only keeps the
     // rarely-changing libraries in their own long-cached file, apart from our own code.
     rolldownOptions: {
