@@ -25,7 +25,7 @@ export function alternativesFor(input: PaletteInput, chosenSlugs: readonly strin
     .sort((a, b) => b.change - a.change || bySlug(a.item, b.item))
     .slice(0, limit)
     .map(({ item, change }) => {
-      const scored = c.scored.get(item.slug)!;
+      const scored = c.scoredOf(item.slug)!;
       return { slug: item.slug, objectiveChange: roundTo(change, 4), score: scored.score, parts: scored.parts };
     });
 }

@@ -3,6 +3,7 @@ import { compareScored } from '../scoring/score-species.js';
 import { isNativeMilkweed } from '../scoring/genus.js';
 import { roundTo } from '../units/conversions.js';
 import { bloomConstraints } from './bloom-constraints.js';
+import { narrowCandidates } from './candidate-pool.js';
 import type { ConstraintInput } from './constraint-input.js';
 import { heightConstraint, grassConstraint, milkweedConstraint } from './mix-constraints.js';
 import { mixSizeForArea } from './mix-size.js';
@@ -34,18 +35,23 @@ export function reportConstraints(input: ConstraintInput): PaletteConstraint[] {
 
 /**
  * Builds a balanced mix for a site: the species that suit it, chosen to maximise the mix objective
- * (objective.ts) with greedy selection and swaps, with "why it fits", each species' role in the
- * mix, and a report on every design rule (met, or why not).
+ * (objective.ts) with greedy selection and swaps over the candidates worth searching
+ * (candidate-pool.ts; a last pass tries every candidate), with "why it fits", each species' role in
+ * the mix, and a report on every design rule (met, or why not). Protected species are chosen only
+ * when the user keeps them (protected-species.ts).
  */
 export function balancePalette(input: PaletteInput): PaletteResult {
   const c = buildCandidates(input);
   const { size, reason, notices } = resolveSize(input, c);
   const settings = { size, monarchsGoal: input.site.goals.includes('monarchs') };
   const objective = makeObjective(settings);
-  const selection = optimiseSelection(c.items, size, objective, { locked: c.locked });
+  const selection = optimiseSelection(c.items, size, objective, {
+    locked: c.locked,
+    searchPool: (pool) => narrowCandidates(pool, settings),
+  });
   const chosen: ChosenSpecies[] = selection.chosen
     .map((item) => {
-      const scored = c.scored.get(item.slug)!;
+      const scored = c.scoredOf(item.slug)!;
       return {
         slug: item.slug,
         score: scored.score,
@@ -56,10 +62,7 @@ export function balancePalette(input: PaletteInput): PaletteResult {
     })
     .sort((a, b) => compareScored({ ...a, eligible: true, nearMiss: false }, { ...b, eligible: true, nearMiss: false }));
 
-  const milkweedNearMisses = c.recommendation.alsoConsider
-    .map((r) => c.species.get(r.slug)!)
-    .filter((s) => isNativeMilkweed(s) && s.nativeStates.includes(input.region.state))
-    .map((s) => ({ name: s.commonNames[0], reason: c.recommendation.alsoConsider.find((r) => r.slug === s.slug)!.ineligibleReason ?? '' }));
+  const milkweedNearMisses = c.milkweedNearMisses.map((r) => ({ name: c.species.get(r.slug)!.commonNames[0], reason: r.ineligibleReason ?? '' }));
 
   return {
     size,
@@ -70,6 +73,8 @@ export function balancePalette(input: PaletteInput): PaletteResult {
     constraints: reportConstraints({
       chosen: selection.chosen, candidates: c.items, size, site: input.site, region: input.region,
       locked: c.locked, milkweedNearMisses,
+      // Withheld species passed the checks, so they are native; the best three name the case.
+      protectedMilkweeds: c.withheld.filter(isNativeMilkweed).slice(0, 3).map((s) => s.commonNames[0]),
     }),
     notices: [...c.notices, ...notices],
   };

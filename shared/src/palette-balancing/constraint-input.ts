@@ -13,6 +13,8 @@ export interface ConstraintInput {
   locked: readonly string[];
   /** Native milkweeds that just miss the site, with the reason, for the monarch rule's words. */
   milkweedNearMisses: readonly { name: string; reason: string }[];
+  /** Names of native milkweeds that suit the site but are protected, so never chosen automatically. */
+  protectedMilkweeds?: readonly string[];
 }
 
 /** "dry shade" etc.: how reasons name the user's ground. */

@@ -17,8 +17,13 @@ export function milkweedConstraint(input: ConstraintInput): PaletteConstraint {
   }
   const available = input.candidates.filter((i) => i.milkweed).length;
   let detail: string;
+  const withheld = input.protectedMilkweeds ?? [];
   if (available > 0) {
     detail = lostOut(input, `${available} native milkweed${available === 1 ? '' : 's'} suit${available === 1 ? 's' : ''} your ground but`);
+  } else if (withheld.length > 0) {
+    const one = withheld.length === 1;
+    detail = `${joinWords(withheld)} ${one ? 'suits' : 'suit'} your ground but ${one ? 'is' : 'are'} protected in the wild, so not chosen for you; `
+      + 'keep one in the mix to meet this rule, bought from a nursery that propagates it.';
   } else {
     const nearest = input.milkweedNearMisses[0];
     const closest = nearest ? ` The closest is ${nearest.name}: ${nearest.reason}` : '';

@@ -1,53 +1,19 @@
 import { BLOOM_PERIODS, type ObjectiveTerm } from '../types/recommendation.js';
+import type { MixEvaluator } from './mix-evaluator.js';
+import { OBJECTIVE_WEIGHTS, grassTargets, type ObjectiveSettings } from './objective-weights.js';
+import { paletteEvaluator } from './palette-evaluator.js';
 import type { PaletteItem } from './palette-item.js';
+
+export { OBJECTIVE_WEIGHTS, grassTargets, type ObjectiveSettings } from './objective-weights.js';
 
 /**
  * The mix objective: what "balanced" means, as one number to maximise: the species' own fit plus
  * concave (diminishing-returns) terms of the mix's counts, so adding a species never helps a term
  * more than it would have helped a smaller mix. That makes it submodular, and monotone apart from
  * two small penalties (too many grasses, repeated genera): the case where greedy selection plus
- * swaps comes close to the optimum (see optimiser.test.ts). Weights are Homeground's own.
+ * swaps comes close to the optimum (see optimiser.test.ts). Weights are Homeground's own
+ * (objective-weights.ts). palette-evaluator.ts computes the same number incrementally.
  */
-export const OBJECTIVE_WEIGHTS = {
-  /** host = hostWeight × ln(1 + Σ over distinct genera of caterpillar species ÷ hostScale). */
-  hostWeight: 3,
-  hostScale: 50,
-  /** Per species in flower in a CP42 period, up to CP42's 3 per period (CP42-IN, R). */
-  perPeriodSpecies: 2,
-  periodTarget: 3,
-  /** Per flowering species up to CP42's 9 in a full mix (CP42-IN, R). */
-  perFloweringSpecies: 1,
-  floweringTarget: 9,
-  /** A native milkweed when monarchs are a goal (E327136Z2: ≥ 1 native Asclepias, R); a second adds a little. */
-  milkweed: 8,
-  secondMilkweed: 2,
-  /** Per grass or sedge up to the share's minimum; a penalty per species over its maximum. */
-  perGrass: 4,
-  perGrassOver: 2,
-  perHeightTier: 1.5,
-  /** Per distinct flower colour, up to colourTarget colours. */
-  perColour: 0.5,
-  colourTarget: 6,
-  /** Penalty per extra species of a genus already in the mix: variety of plants, not eight milkweeds. */
-  perRepeatedGenus: 1,
-} as const;
-
-export interface ObjectiveSettings {
-  size: number;
-  monarchsGoal: boolean;
-}
-
-/**
- * Grasses and sedges: about a fifth to two fifths of the species (Homeground's rule, common
- * practice in prairie-style plantings: enough to knit the soil between forbs, not so many that they
- * crowd out flowers). Mixes under 4 species do not need one.
- */
-export function grassTargets(size: number): { min: number; max: number } {
-  if (size < 4) return { min: 0, max: 1 };
-  const min = Math.max(1, Math.round(size * 0.2));
-  return { min, max: Math.max(min, Math.floor(size * 0.4)) };
-}
-
 export function objectiveTerms(items: readonly PaletteItem[], settings: ObjectiveSettings): ObjectiveTerm[] {
   const w = OBJECTIVE_WEIGHTS;
   let fit = 0;
@@ -88,8 +54,18 @@ export function objectiveTerms(items: readonly PaletteItem[], settings: Objectiv
   ];
 }
 
-export type Objective<T> = (items: readonly T[]) => number;
+/**
+ * A mix objective: items (in slug order) → value to maximise. `evaluator`, when present, gives the
+ * same value incrementally (add or remove one item in O(1)), which the optimiser uses for its
+ * millions of trial moves; without it the optimiser re-evaluates whole sets.
+ */
+export interface Objective<T> {
+  (items: readonly T[]): number;
+  evaluator?: (pool: readonly T[]) => MixEvaluator;
+}
 
 export function makeObjective(settings: ObjectiveSettings): Objective<PaletteItem> {
-  return (items) => objectiveTerms(items, settings).reduce((s, t) => s + t.value, 0);
+  const objective: Objective<PaletteItem> = (items) => objectiveTerms(items, settings).reduce((s, t) => s + t.value, 0);
+  objective.evaluator = (pool) => paletteEvaluator(pool, settings, objective);
+  return objective;
 }

@@ -1,6 +1,6 @@
 import type { BloomPeriod, ScoredSpecies } from '../types/recommendation.js';
 import type { FlowerColour, Species } from '../types/species.js';
-import { cp42PeriodsOf, isFloweringSpecies } from '../scoring/bloom-periods.js';
+import { bloomPeriodsOf, isFloweringSpecies } from '../scoring/bloom-periods.js';
 import { genusOf, isNativeMilkweed } from '../scoring/genus.js';
 
 /** Rows of a bed by mature height (Homeground's rule, on the middle of the record's height range). */
@@ -39,16 +39,18 @@ export interface PaletteItem {
 }
 
 export function toPaletteItem(species: Species, scored: ScoredSpecies): PaletteItem {
-  const mixLevel = scored.parts.filter((p) => p.name === 'host-plant' || p.name === 'monarch-host');
-  const hostPoints = mixLevel.reduce((s, p) => s + p.points, 0);
+  let hostPoints = 0;
+  for (const p of scored.parts) if (p.name === 'host-plant' || p.name === 'monarch-host') hostPoints += p.points;
+  // Each fact worked out once (this runs for every candidate of every mix).
   const flowering = isFloweringSpecies(species);
+  const genus = genusOf(species);
   return {
     slug: species.slug,
     name: species.commonNames[0],
     fit: scored.score - hostPoints,
-    periods: cp42PeriodsOf(species),
+    periods: flowering ? bloomPeriodsOf(species.bloomMonths) : [],
     flowering,
-    genus: genusOf(species),
+    genus,
     hostCount: species.wildlife.lepidopteraGenusCount ?? 0,
     tier: heightTierOf(species.heightCm),
     colours: flowering ? [...species.flowerColours] : [],

@@ -36,3 +36,25 @@ describe('isFloweringSpecies (CP42-IN: wildflowers, legumes, shrubs count; grass
     expect(cp42PeriodsOf({ growthForm: 'graminoid', bloomMonths: [8, 9] })).toEqual([]);
   });
 });
+
+// Homeground's rule for wind-pollinated trees (bloom-periods.ts): a tree is a CP42 flowering species
+// only when its record names a flower colour other than green or brown. Colours are the catalogue's:
+// river birch brown catkins (usda-plants-characteristics), eastern redbud pink and magenta (from-memory).
+describe('isFloweringSpecies: trees count only with showy flowers', () => {
+  it.each([
+    ['river birch: brown catkins', 'tree', ['brown'], false],
+    ['a tree with green flowers only', 'tree', ['green'], false],
+    ['green and brown only', 'tree', ['green', 'brown'], false],
+    ['a tree with no colours recorded', 'tree', [], false],
+    ['eastern redbud: pink and magenta', 'tree', ['pink', 'magenta'], true],
+    ['green and white (some white is showy)', 'tree', ['green', 'white'], true],
+    ['a shrub with green flowers: the rule is for trees only', 'shrub', ['green'], true],
+  ] as const)('%s', (_what, growthForm, flowerColours, expected) => {
+    expect(isFloweringSpecies({ growthForm, bloomMonths: [4, 5], flowerColours: [...flowerColours] })).toBe(expected);
+  });
+
+  it('a wind-pollinated tree counts for no CP42 period', () => {
+    expect(cp42PeriodsOf({ growthForm: 'tree', bloomMonths: [4, 5], flowerColours: ['brown'] })).toEqual([]);
+    expect(cp42PeriodsOf({ growthForm: 'tree', bloomMonths: [4, 5], flowerColours: ['pink'] })).toEqual(['early']);
+  });
+});

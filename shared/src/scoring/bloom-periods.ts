@@ -1,5 +1,5 @@
 import { BLOOM_PERIODS, type BloomPeriod } from '../types/recommendation.js';
-import type { GrowthForm, Species } from '../types/species.js';
+import type { FlowerColour, GrowthForm, Species } from '../types/species.js';
 
 /**
  * CP42 bloom periods (CP42-IN, CHECK-VALUES §3, R): early = April to 15 June, mid = 15 June to July,
@@ -16,7 +16,16 @@ const PERIOD_MONTHS: Record<BloomPeriod, readonly number[]> = {
 
 /** The periods a list of bloom months (1–12) touches, in early → late order. */
 export function bloomPeriodsOf(bloomMonths: readonly number[]): BloomPeriod[] {
-  return BLOOM_PERIODS.filter((p) => PERIOD_MONTHS[p].some((m) => bloomMonths.includes(m)));
+  // Plain loops: this runs for every candidate of every mix.
+  const periods: BloomPeriod[] = [];
+  for (const p of BLOOM_PERIODS) {
+    for (const m of PERIOD_MONTHS[p]) {
+      if (!bloomMonths.includes(m)) continue;
+      periods.push(p);
+      break;
+    }
+  }
+  return periods;
 }
 
 /** The months of one period that a species flowers in (e.g. late for [7, 8, 9] → [8, 9]). */
@@ -35,11 +44,26 @@ export function periodMonths(period: BloomPeriod): readonly number[] {
  */
 const FLOWERING_FORMS: ReadonlySet<GrowthForm> = new Set(['forb', 'shrub', 'vine', 'tree']);
 
-export function isFloweringSpecies(species: Pick<Species, 'growthForm' | 'bloomMonths'>): boolean {
-  return FLOWERING_FORMS.has(species.growthForm) && species.bloomMonths.length > 0;
+/**
+ * Flower colours of wind-pollinated trees (birches, hickories, walnuts: catkins and small
+ * petal-less flowers that bees barely visit). Homeground's rule: a tree counts as a flowering
+ * species only when its record names some other colour, i.e. it has flowers pollinators can find
+ * (a serviceberry's white, a redbud's pink). The record's colours are the only evidence we have, so
+ * a wind-pollinated tree recorded with, say, yellow catkins still counts; and a tree with no
+ * colours recorded does not. Forbs, shrubs and vines are not judged by colour: many bee flowers
+ * are green (e.g. some milkweeds).
+ */
+const WIND_POLLINATED_COLOURS: ReadonlySet<FlowerColour> = new Set(['green', 'brown']);
+
+type FloweringFacts = Pick<Species, 'growthForm' | 'bloomMonths'> & { flowerColours?: readonly FlowerColour[] };
+
+export function isFloweringSpecies(species: FloweringFacts): boolean {
+  if (!FLOWERING_FORMS.has(species.growthForm) || species.bloomMonths.length === 0) return false;
+  if (species.growthForm !== 'tree') return true;
+  return (species.flowerColours ?? []).some((c) => !WIND_POLLINATED_COLOURS.has(c));
 }
 
 /** CP42 periods a species counts for: none unless it is a flowering species. */
-export function cp42PeriodsOf(species: Pick<Species, 'growthForm' | 'bloomMonths'>): BloomPeriod[] {
+export function cp42PeriodsOf(species: FloweringFacts): BloomPeriod[] {
   return isFloweringSpecies(species) ? bloomPeriodsOf(species.bloomMonths) : [];
 }

@@ -1,9 +1,13 @@
 import { BLOOM_PERIODS, type BloomPeriod, type ScorePart } from '../types/recommendation.js';
 import type { RegionContext } from '../types/site.js';
-import type { Habitat, Species } from '../types/species.js';
+import { HABITATS, type Habitat, type Species } from '../types/species.js';
 import { cp42PeriodsOf, monthsInPeriod } from './bloom-periods.js';
 import { countOf, formatMonths, joinWords } from './plain-words.js';
 import { POINTS } from './score-weights.js';
+import { PartCache, wordListCode } from './word-cache.js';
+
+/** Keys: the shared habitats' code, or minus the record's habitats' code when none is shared. */
+const habitatParts = new PartCache<number>();
 
 /** Parts that depend on where the site is and on the mix so far. */
 
@@ -14,19 +18,29 @@ function habitatWords(h: Habitat): string {
 export function habitatPart(species: Species, region: RegionContext): ScorePart | null {
   const communities = region.ecoregionPlantCommunities;
   if (!communities || communities.length === 0) return null;
-  const shared = species.habitats.filter((h) => communities.includes(h));
-  if (shared.length > 0) {
-    return {
-      name: 'habitat',
-      points: POINTS.habitatMatch,
-      reason: `Belongs to the ${joinWords(shared.map(habitatWords))} plant communities of your ecoregion.`,
-    };
+  // The habitats shared with the region, in the record's order, as a number: no array per species.
+  let sharedCode = 0;
+  let sharedCount = 0;
+  for (const h of species.habitats) {
+    if (!communities.includes(h)) continue;
+    sharedCode = sharedCode * 32 + HABITATS.indexOf(h) + 1;
+    sharedCount++;
   }
-  return {
-    name: 'habitat',
-    points: 0,
-    reason: `Grows wild in ${joinWords(species.habitats.map(habitatWords), 'or')}, which are not typical of your ecoregion.`,
-  };
+  if (sharedCount > 0) {
+    const key = sharedCount <= 10 ? sharedCode : null;
+    const cached = key === null ? undefined : habitatParts.get(key);
+    if (cached !== undefined) return cached;
+    const shared = species.habitats.filter((h) => communities.includes(h));
+    const reason = `Belongs to the ${joinWords(shared.map(habitatWords))} plant communities of your ecoregion.`;
+    const part: ScorePart = { name: 'habitat', points: POINTS.habitatMatch, reason };
+    return key === null ? part : habitatParts.keep(key, part);
+  }
+  const code = wordListCode(HABITATS, species.habitats);
+  const cached = code === null ? undefined : habitatParts.get(-code);
+  if (cached !== undefined) return cached;
+  const reason = `Grows wild in ${joinWords(species.habitats.map(habitatWords), 'or')}, which are not typical of your ecoregion.`;
+  const part: ScorePart = { name: 'habitat', points: 0, reason };
+  return code === null ? part : habitatParts.keep(-code, part);
 }
 
 /** CP42 asks for at least 3 flowering species in each bloom period (CP42-IN, R). */

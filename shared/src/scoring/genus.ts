@@ -2,7 +2,10 @@ import type { Species } from '../types/species.js';
 
 /** The genus is the first word of the accepted name; caterpillar host counts are per genus. */
 export function genusOf(species: Pick<Species, 'scientificName'>): string {
-  return species.scientificName.split(' ')[0];
+  // indexOf + slice, not split: this runs for every candidate of every mix.
+  const name = species.scientificName;
+  const space = name.indexOf(' ');
+  return space < 0 ? name : name.slice(0, space);
 }
 
 /**

@@ -6,85 +6,121 @@ import { formatArea, formatHeightCm, formatHeightRangeCm } from '../units/format
 import { MOISTURE_WORDS, SUN_WORDS, joinWords, stateName } from './plain-words.js';
 import { HEIGHT_NEAR_MISS_FACTOR, POINTS, ROOM } from './score-weights.js';
 import { STATE_NEIGHBOURS } from './state-neighbours.js';
+import { Interned, WordCache, levelListCode } from './word-cache.js';
 
 /**
  * The checks that decide whether a species can go in the mix at all. Each returns either a part
  * for "why it fits" or a failure; a failure by one step only is a near miss ("also consider").
+ * hard-check-outcome.ts gives the same verdict without the words.
  */
 export type CheckResult = { part: ScorePart } | { failure: string; nearMiss: boolean } | null;
 
+/** Passing results are the same for every species with the same key, so each is made once (frozen). */
+const passes = new Interned<string | number, CheckResult>();
+const failures = new WordCache<string | number>();
+
+function passed(key: string | number, part: ScorePart): CheckResult {
+  return passes.keep(key, Object.freeze({ part: Object.freeze(part) }));
+}
+
 export function checkNative(species: Species, region: RegionContext): CheckResult {
-  const here = stateName(region.state);
-  if (species.nativeStates.includes(region.state)) {
-    return { part: { name: 'native', points: 0, reason: `Native to ${here}.` } };
+  const state = region.state;
+  if (species.nativeStates.includes(state)) {
+    return passes.get(state) ?? passed(state, { name: 'native', points: 0, reason: `Native to ${stateName(state)}.` });
   }
-  const nextDoor = STATE_NEIGHBOURS[region.state].filter((s) => species.nativeStates.includes(s));
+  const nextDoor = STATE_NEIGHBOURS[state].filter((s) => species.nativeStates.includes(s));
   if (nextDoor.length > 0) {
-    return {
-      failure: `Native next door in ${joinWords(nextDoor.map(stateName))}, but not recorded as native in ${here}.`,
-      nearMiss: true,
-    };
+    const key = `${state}<${nextDoor.join(',')}`;
+    const failure = failures.get(key)
+      ?? failures.keep(key, `Native next door in ${joinWords(nextDoor.map(stateName))}, but not recorded as native in ${stateName(state)}.`);
+    return { failure, nearMiss: true };
   }
-  return { failure: `Not native to ${here}.`, nearMiss: false };
+  const key = `!${state}`;
+  return { failure: failures.get(key) ?? failures.keep(key, `Not native to ${stateName(state)}.`), nearMiss: false };
 }
 
 /** Steps between the site's level and the nearest level the species takes (0 = it takes it). */
-function stepsAway<T extends string>(levels: readonly T[], wanted: readonly T[], site: T): number {
+export function stepsAway<T extends string>(levels: readonly T[], wanted: readonly T[], site: T): number {
   const at = levels.indexOf(site);
-  return Math.min(...wanted.map((w) => Math.abs(levels.indexOf(w) - at)));
+  let steps = Infinity;
+  for (const w of wanted) steps = Math.min(steps, Math.abs(levels.indexOf(w) - at));
+  return steps;
 }
 
+function sunWanted(species: Species): string {
+  return joinWords(species.sun.map((s) => SUN_WORDS[s]), 'or');
+}
+
+// Numeric keys: sun codes are multiples of 4, moisture codes 4k + 2; a pass is the code + 1.
 export function checkSun(species: Species, site: Site): CheckResult {
-  const wants = joinWords(species.sun.map((s) => SUN_WORDS[s]), 'or');
   const steps = stepsAway(SUN_LEVELS, species.sun, site.sun);
+  const code = levelListCode(SUN_LEVELS, species.sun, site.sun) * 4;
+  const ground = SUN_WORDS[site.sun];
   if (steps === 0) {
-    return { part: { name: 'sun', points: POINTS.sunMatch, reason: `Grows in ${wants}; your ground has ${SUN_WORDS[site.sun]}.` } };
+    return passes.get(code + 1)
+      ?? passed(code + 1, { name: 'sun', points: POINTS.sunMatch, reason: `Grows in ${sunWanted(species)}; your ground has ${ground}.` });
   }
-  return { failure: `Needs ${wants}; your ground has ${SUN_WORDS[site.sun]}.`, nearMiss: steps === 1 };
+  const failure = failures.get(code) ?? failures.keep(code, `Needs ${sunWanted(species)}; your ground has ${ground}.`);
+  return { failure, nearMiss: steps === 1 };
+}
+
+function moistureWanted(species: Species): string {
+  return joinWords(species.moisture.map((m) => MOISTURE_WORDS[m]), 'or');
 }
 
 export function checkMoisture(species: Species, site: Site): CheckResult {
-  const wants = joinWords(species.moisture.map((m) => MOISTURE_WORDS[m]), 'or');
   const steps = stepsAway(MOISTURE_LEVELS, species.moisture, site.moisture);
-  const yours = `your soil is ${MOISTURE_WORDS[site.moisture]}`;
+  const code = levelListCode(MOISTURE_LEVELS, species.moisture, site.moisture) * 4 + 2;
+  const yours = MOISTURE_WORDS[site.moisture];
   if (steps === 0) {
-    return { part: { name: 'moisture', points: POINTS.moistureMatch, reason: `Takes ${wants} soil; ${yours}.` } };
+    return passes.get(code + 1)
+      ?? passed(code + 1, { name: 'moisture', points: POINTS.moistureMatch, reason: `Takes ${moistureWanted(species)} soil; your soil is ${yours}.` });
   }
-  return { failure: `Needs ${wants} soil; ${yours}.`, nearMiss: steps === 1 };
+  const failure = failures.get(code) ?? failures.keep(code, `Needs ${moistureWanted(species)} soil; your soil is ${yours}.`);
+  return { failure, nearMiss: steps === 1 };
+}
+
+function heightWords(min: number, max: number, limit: number): string {
+  return `grows ${formatHeightRangeCm(min, max)}; your limit is ${formatHeightCm(limit)}`;
 }
 
 export function checkHeight(species: Species, site: Site): CheckResult {
   const limit = site.maxHeightCm;
   if (limit === undefined) return null;
   const { min, max } = species.heightCm;
-  const grows = `grows ${formatHeightRangeCm(min, max)}`;
-  const yours = `your limit is ${formatHeightCm(limit)}`;
   if (max <= limit) {
-    return { part: { name: 'height', points: POINTS.heightWithin, reason: `Stays low enough: ${grows}; ${yours}.` } };
+    // Height words name the species' own range, so they are rarely shared: no cache.
+    return { part: { name: 'height', points: POINTS.heightWithin, reason: `Stays low enough: ${heightWords(min, max, limit)}.` } };
   }
   if (min <= limit) {
-    return {
-      part: { name: 'height', points: POINTS.heightPartlyOver, reason: `Can grow taller than you want: ${grows}; ${yours}.` },
-    };
+    const reason = `Can grow taller than you want: ${heightWords(min, max, limit)}.`;
+    return { part: { name: 'height', points: POINTS.heightPartlyOver, reason } };
   }
-  return { failure: `Too tall: ${grows}; ${yours}.`, nearMiss: min <= limit * HEIGHT_NEAR_MISS_FACTOR };
+  return { failure: `Too tall: ${heightWords(min, max, limit)}.`, nearMiss: min <= limit * HEIGHT_NEAR_MISS_FACTOR };
+}
+
+/** The mature footprint in ft²: a circle as wide as the narrow end of the spread. */
+export function footprintSqFtOf(species: Species): number {
+  return squareMetresToSquareFeet(Math.PI * (species.spreadCm.min / 200) ** 2);
 }
 
 /**
- * Room: a plant's mature footprint (a circle as wide as the narrow end of its spread) against the
- * planting area. A tree wider than the whole bed is out (a near miss if the bed is at least half
- * its footprint); one that would shade a good part of it costs points.
+ * Room: a plant's mature footprint against the planting area. A tree wider than the whole bed is
+ * out (a near miss if the bed is at least half its footprint); one that would shade a good part of
+ * it costs points. Words only for those few: most plants fit and need none.
  */
 export function checkRoom(species: Species, site: Site): CheckResult {
   const widthCm = species.spreadCm.min;
-  const footprintSqFt = squareMetresToSquareFeet(Math.PI * (widthCm / 200) ** 2);
-  const across = `grows about ${formatHeightCm(widthCm)} across`;
-  const bed = `your ${formatArea(site.areaSqFt)} bed`;
+  const footprintSqFt = footprintSqFtOf(species);
   if (footprintSqFt > site.areaSqFt) {
-    return { failure: `Too big: it ${across}, more than ${bed} can hold.`, nearMiss: footprintSqFt <= ROOM.nearMissFactor * site.areaSqFt };
+    return {
+      failure: `Too big: it grows about ${formatHeightCm(widthCm)} across, more than your ${formatArea(site.areaSqFt)} bed can hold.`,
+      nearMiss: footprintSqFt <= ROOM.nearMissFactor * site.areaSqFt,
+    };
   }
   if (footprintSqFt > ROOM.crowdsShare * site.areaSqFt) {
-    return { part: { name: 'room', points: POINTS.crowds, reason: `Big for the space: it ${across} and will shade part of ${bed}.` } };
+    const reason = `Big for the space: it grows about ${formatHeightCm(widthCm)} across and will shade part of your ${formatArea(site.areaSqFt)} bed.`;
+    return { part: { name: 'room', points: POINTS.crowds, reason } };
   }
   return null;
 }

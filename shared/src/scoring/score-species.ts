@@ -4,6 +4,7 @@ import type { Species } from '../types/species.js';
 import { roundTo } from '../units/conversions.js';
 import { bloomGapPart, habitatPart } from './context-parts.js';
 import { deerPart, rainGardenPart, shadeGardenPart, soilPart, spreadPart } from './garden-parts.js';
+import { hardCheckOutcome } from './hard-check-outcome.js';
 import { checkHeight, checkMoisture, checkNative, checkRoom, checkSun, type CheckResult } from './hard-checks.js';
 import { birdsPart, hostPlantPart, monarchPart, pollinatorPart } from './wildlife-parts.js';
 
@@ -18,46 +19,58 @@ export interface ScoringContext {
  * (see hard-checks) it is a near miss the caller may show as "also consider".
  */
 export function scoreSpecies(species: Species, site: Site, region: RegionContext, context: ScoringContext = {}): ScoredSpecies {
-  const checks: CheckResult[] = [
-    checkNative(species, region),
-    checkSun(species, site),
-    checkMoisture(species, site),
-    checkHeight(species, site),
-    checkRoom(species, site),
-  ];
+  // Parts and failures are collected in place, without closures or intermediate arrays: this runs
+  // once per catalogue species on every request, and garbage was most of its cost at 30,000.
   const parts: ScorePart[] = [];
-  const failures: { failure: string; nearMiss: boolean }[] = [];
-  for (const c of checks) {
-    if (c === null) continue;
-    if ('part' in c) parts.push(c.part);
-    else failures.push(c);
-  }
-  const soft = [
-    soilPart(species, site),
-    habitatPart(species, region),
-    hostPlantPart(species),
-    monarchPart(species, site),
-    pollinatorPart(species, site),
-    birdsPart(species, site),
-    bloomGapPart(species, context.currentMix),
-    deerPart(species, site),
-    spreadPart(species, site),
-    rainGardenPart(species, site),
-    shadeGardenPart(species, site),
-  ];
-  for (const p of soft) if (p) parts.push(p);
+  const verdict: Verdict = { failure: undefined, failures: 0, nearMiss: false };
+  takeCheck(checkNative(species, region), parts, verdict);
+  takeCheck(checkSun(species, site), parts, verdict);
+  takeCheck(checkMoisture(species, site), parts, verdict);
+  takeCheck(checkHeight(species, site), parts, verdict);
+  takeCheck(checkRoom(species, site), parts, verdict);
+  addPart(soilPart(species, site), parts);
+  addPart(habitatPart(species, region), parts);
+  addPart(hostPlantPart(species), parts);
+  addPart(monarchPart(species, site), parts);
+  addPart(pollinatorPart(species, site), parts);
+  addPart(birdsPart(species, site), parts);
+  addPart(bloomGapPart(species, context.currentMix), parts);
+  addPart(deerPart(species, site), parts);
+  addPart(spreadPart(species, site), parts);
+  addPart(rainGardenPart(species, site), parts);
+  addPart(shadeGardenPart(species, site), parts);
 
-  const score = roundTo(parts.reduce((sum, p) => sum + p.points, 0), 2);
-  const eligible = failures.length === 0;
-  return {
-    slug: species.slug,
-    score,
-    parts,
-    eligible,
-    ...(eligible ? {} : { ineligibleReason: failures.map((f) => f.failure).join(' ') }),
-    // Only a single one-step miss is worth suggesting; two misses is the wrong plant for the spot.
-    nearMiss: failures.length === 1 && failures[0].nearMiss,
-  };
+  let sum = 0;
+  for (const p of parts) sum += p.points;
+  const score = roundTo(sum, 2);
+  const slug = species.slug;
+  if (verdict.failure === undefined) return { slug, score, parts, eligible: true, nearMiss: false };
+  // Only a single one-step miss is worth suggesting; two misses is the wrong plant for the spot.
+  const nearMiss = verdict.failures === 1 && verdict.nearMiss;
+  return { slug, score, parts, eligible: false, ineligibleReason: verdict.failure, nearMiss };
+}
+
+interface Verdict {
+  /** The failures so far, joined by spaces. */
+  failure: string | undefined;
+  failures: number;
+  /** Whether the last failure was by one step only. */
+  nearMiss: boolean;
+}
+
+function takeCheck(c: CheckResult, parts: ScorePart[], verdict: Verdict): void {
+  if (c === null) return;
+  if ('part' in c) {
+    parts.push(c.part);
+    return;
+  }
+  verdict.failure = verdict.failure === undefined ? c.failure : `${verdict.failure} ${c.failure}`;
+  verdict.failures++;
+  verdict.nearMiss = c.nearMiss;
+}
+
+function addPart(p: ScorePart | null, parts: ScorePart[]): void {
+  if (p) parts.push(p);
 }
 
 /** Score descending, then slug: the same input always gives the same order. */
@@ -67,9 +80,14 @@ export function compareScored(a: ScoredSpecies, b: ScoredSpecies): number {
 
 /** Ranks a species list for a site: eligible species, and near misses to "also consider". */
 export function recommend(speciesList: readonly Species[], site: Site, region: RegionContext, context: ScoringContext = {}): Recommendation {
-  const scored = speciesList.map((s) => scoreSpecies(s, site, region, context));
-  return {
-    ranked: scored.filter((s) => s.eligible).sort(compareScored),
-    alsoConsider: scored.filter((s) => !s.eligible && s.nearMiss).sort(compareScored),
-  };
+  const ranked: ScoredSpecies[] = [];
+  const alsoConsider: ScoredSpecies[] = [];
+  for (const s of speciesList) {
+    // Species out by more than a step are dropped unseen: no reasons to build for them.
+    if (hardCheckOutcome(s, site, region) === 'out') continue;
+    const r = scoreSpecies(s, site, region, context);
+    if (r.eligible) ranked.push(r);
+    else if (r.nearMiss) alsoConsider.push(r);
+  }
+  return { ranked: ranked.sort(compareScored), alsoConsider: alsoConsider.sort(compareScored) };
 }
