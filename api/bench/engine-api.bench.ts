@@ -2,11 +2,12 @@
  * Region lookup (ZIP → county by point-in-polygon → ecoregion) in process, and the throughput of
  * POST /api/mixes/balance against a bare node:http server returning the same precomputed JSON.
  */
+import { seededRandom } from '@homeground/shared';
 import { performance } from 'node:perf_hooks';
 import zipcodes from 'zipcodes';
 import { PolygonIndex } from '../dist/places/polygon-index.js';
 import { loadCountyOutlines } from '../dist/places/us-counties.js';
-import { measureThroughput, percentile, seededRandom, startBareServer, startBuiltApi } from './support.js';
+import { measureThroughput, percentile, startBareServer, startBuiltApi } from './support.js';
 
 // Region lookup: the county index is the work per request (the crosswalk is a map lookup after it).
 const t0 = performance.now();

@@ -2,11 +2,12 @@
  * Species search: p50/p95 latency and recall (the intended species in the top 10) for typo'd
  * queries, at the real catalogue's size and at 30,000 species, against fuse.js alone.
  */
+import { seededRandom } from '@homeground/shared';
 import { performance } from 'node:perf_hooks';
 import { loadCatalogue } from '@homeground/species-data';
 import Fuse from 'fuse.js';
 import { type NameEntry, SpeciesSearchIndex } from '../dist/species/search/species-search-index.js';
-import { percentile, seededRandom } from './support.js';
+import { percentile } from './support.js';
 import { syntheticNames, withTypos } from './synthetic-species.js';
 
 const species = loadCatalogue().species;

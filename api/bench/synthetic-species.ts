@@ -1,5 +1,5 @@
+import { seededRandom } from '@homeground/shared';
 import type { NameEntry } from '../dist/species/search/species-search-index.js';
-import { seededRandom } from './support.js';
 
 const SYLLABLES = ['ra', 'mo', 'lin', 've', 'cor', 'ta', 'su', 'bel', 'ni', 'dor', 'pha', 'ul', 'mer', 'go', 'sil', 'ka', 'tre', 'mi', 'on', 'zu'];
 const ADJECTIVES = ['marsh', 'prairie', 'hill', 'river', 'sand', 'shade', 'early', 'late', 'tall', 'dwarf', 'woolly', 'smooth', 'hairy', 'northern', 'southern', 'bluff', 'glade', 'meadow'];

@@ -8,10 +8,10 @@ import assert from 'node:assert/strict';
 import { spawnSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { after, before, test } from 'node:test';
+import { test } from 'node:test';
 import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, openGuardedPage, RESULTS_DIR, screenshot } from './support/browser.js';
-import { type RunningServer, startServer } from './support/server.js';
+import { openGuardedPage, RESULTS_DIR, screenshot } from './support/browser.js';
+import { useAppInBrowser } from './support/app-in-browser.js';
 
 // Eight records of the demo catalogue (species-data/species/*.json), picked for variety: long
 // cautions (Asclepias), warm-then-cold treatment (Actaea), a fern grown from spores (Adiantum).
@@ -20,17 +20,7 @@ const SLUGS = [
   'aquilegia-canadensis', 'amorpha-canescens', 'actaea-racemosa', 'adiantum-pedatum',
 ];
 
-let server: RunningServer;
-let browser: Browser;
-
-before(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-after(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const app = useAppInBrowser();
 
 /** Page objects in a PDF: `/Type /Page` but not the `/Type /Pages` tree node (PDF 32000-1 §7.7.3). */
 function pdfPageCount(pdf: Buffer): number {
@@ -46,17 +36,17 @@ async function waitForCards(page: Page, count: number) {
 }
 
 test('eight species print as two Letter pages of fact cards, with working QR links and pot labels', async () => {
-  for (const slug of SLUGS) assert.equal((await fetch(`${server.baseUrl}/api/species/${slug}`)).status, 200, `${slug} is in the demo catalogue`);
+  for (const slug of SLUGS) assert.equal((await fetch(`${app.server.baseUrl}/api/species/${slug}`)).status, 200, `${slug} is in the demo catalogue`);
 
-  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(browser);
+  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(app.browser);
   try {
-    await page.goto(`${server.baseUrl}/cards-and-labels?species=${SLUGS.join(',')}`);
+    await page.goto(`${app.server.baseUrl}/cards-and-labels?species=${SLUGS.join(',')}`);
     const preview = await waitForCards(page, SLUGS.length);
     await page.getByText('8 fact cards on 2 pages').waitFor();
     assert.equal(await preview.getByRole('group', { name: /^Page \d of 2$/ }).count(), 2);
 
     const urls = await preview.locator('svg[data-url]').evaluateAll((svgs) => svgs.map((s) => s.getAttribute('data-url')));
-    assert.deepEqual(urls, SLUGS.map((s) => `${server.baseUrl}/species/${s}`));
+    assert.deepEqual(urls, SLUGS.map((s) => `${app.server.baseUrl}/species/${s}`));
     await screenshot(page, 'cards-preview');
 
     // On paper: nothing but the sheets, and no card's words cut off at its edge.
@@ -97,7 +87,7 @@ test('eight species print as two Letter pages of fact cards, with working QR lin
 
     // The print stylesheet stays loaded after leaving, but another page still prints as itself.
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Species' }).click();
-    await page.waitForURL(`${server.baseUrl}/species`);
+    await page.waitForURL(`${app.server.baseUrl}/species`);
     await page.getByRole('heading', { level: 1 }).waitFor();
     await page.emulateMedia({ media: 'print' });
     assert.notEqual(await page.getByRole('heading', { level: 1 }).evaluate((h) => getComputedStyle(h).display), 'none', 'other pages still print');
@@ -111,9 +101,9 @@ test('eight species print as two Letter pages of fact cards, with working QR lin
 });
 
 test('at phone width the preview shrinks to fit without sideways scrolling', async () => {
-  const { page, offHostRequests, context } = await openGuardedPage(browser, { width: 360, height: 780 });
+  const { page, offHostRequests, context } = await openGuardedPage(app.browser, { width: 360, height: 780 });
   try {
-    await page.goto(`${server.baseUrl}/cards-and-labels?species=${SLUGS.slice(0, 2).join(',')}`);
+    await page.goto(`${app.server.baseUrl}/cards-and-labels?species=${SLUGS.slice(0, 2).join(',')}`);
     await waitForCards(page, 2);
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     assert.ok(overflow <= 1, `no sideways scrolling at 360 px (overflow ${overflow}px)`);

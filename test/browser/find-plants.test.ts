@@ -7,22 +7,12 @@
  * Also prints the home page's first contentful paint. No request may leave localhost.
  */
 import assert from 'node:assert/strict';
-import { after, before, test } from 'node:test';
+import { test } from 'node:test';
 import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, openGuardedPage, screenshot } from './support/browser.js';
-import { type RunningServer, startServer } from './support/server.js';
+import { openGuardedPage, screenshot } from './support/browser.js';
+import { useAppInBrowser } from './support/app-in-browser.js';
 
-let server: RunningServer;
-let browser: Browser;
-
-before(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-after(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const app = useAppInBrowser();
 
 const CP42_PERIODS = ['cp42-early', 'cp42-mid', 'cp42-late'];
 
@@ -61,9 +51,9 @@ function assertBloomRules(cp42: { id: string; status: string; text: string }[], 
 }
 
 test('home page first contentful paint', async () => {
-  const { page, offHostRequests, context } = await openGuardedPage(browser);
+  const { page, offHostRequests, context } = await openGuardedPage(app.browser);
   try {
-    await page.goto(`${server.baseUrl}/`);
+    await page.goto(`${app.server.baseUrl}/`);
     await page.getByRole('heading', { level: 1 }).waitFor();
     const fcp = await page.evaluate(() => performance.getEntriesByType('paint').find((e) => e.name === 'first-contentful-paint')?.startTime ?? -1);
     console.log(`home page first-contentful-paint: ${fcp.toFixed(0)} ms`);
@@ -75,9 +65,9 @@ test('home page first contentful paint', async () => {
 });
 
 test('a new visitor finds their ground by ZIP and gets a different mix for a shady wet yard and a sunny dry one', async () => {
-  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(browser);
+  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(app.browser);
   try {
-    await page.goto(`${server.baseUrl}/find-plants`);
+    await page.goto(`${app.server.baseUrl}/find-plants`);
     await page.getByRole('textbox', { name: 'ZIP code' }).fill('54665');
     await page.getByRole('button', { name: 'Find my ground' }).click();
     await page.getByText(/Vernon County, Wisconsin/).waitFor();
@@ -125,7 +115,7 @@ test('a new visitor finds their ground by ZIP and gets a different mix for a sha
 
     // The page's own URL is its share link: at phone width it reopens the same mix.
     const shareUrl = page.url();
-    const phone = await openGuardedPage(browser, { width: 360, height: 780 });
+    const phone = await openGuardedPage(app.browser, { width: 360, height: 780 });
     try {
       await phone.page.goto(shareUrl);
       await phone.page.getByRole('list', { name: /one card a species/ }).waitFor();

@@ -4,37 +4,27 @@
  * request to any host but localhost.
  */
 import assert from 'node:assert/strict';
-import { after, before, test } from 'node:test';
+import { test } from 'node:test';
 import type { Browser } from 'playwright-core';
-import { launchBrowser, openGuardedPage, screenshot } from './support/browser.js';
-import { type RunningServer, startServer } from './support/server.js';
+import { openGuardedPage, screenshot } from './support/browser.js';
+import { useAppInBrowser } from './support/app-in-browser.js';
 
-let server: RunningServer;
-let browser: Browser;
-
-before(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-after(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const app = useAppInBrowser();
 
 test('a demo organiser signs in and sees the Homeground shell with live figures and its own fonts', async () => {
-  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(browser);
+  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(app.browser);
   try {
-    await page.goto(`${server.baseUrl}/sign-in`);
+    await page.goto(`${app.server.baseUrl}/sign-in`);
     await page.getByLabel('E-mail').fill('mara.ellsworth@example.org');
     await page.getByLabel('Password').fill('larkfield-mara');
     await page.getByRole('button', { name: 'Sign in' }).click();
 
-    await page.waitForURL(`${server.baseUrl}/`);
+    await page.waitForURL(`${app.server.baseUrl}/`);
     await page.getByRole('button', { name: /Your account: Mara Ellsworth/ }).waitFor();
     // Organisers see the Season section in the navigation.
     await page.getByRole('link', { name: 'Season' }).first().waitFor({ state: 'attached' });
 
-    const stats = (await (await fetch(`${server.baseUrl}/api/stats`)).json()) as { species: number };
+    const stats = (await (await fetch(`${app.server.baseUrl}/api/stats`)).json()) as { species: number };
     await page.getByText(String(stats.species), { exact: true }).first().waitFor();
 
     const fonts = await page.evaluate(async () => {
@@ -59,16 +49,16 @@ test('a demo organiser signs in and sees the Homeground shell with live figures 
 });
 
 test('the shell works at phone width and deep links fall back to the app', async () => {
-  const { page, offHostRequests, context } = await openGuardedPage(browser, { width: 360, height: 780 });
+  const { page, offHostRequests, context } = await openGuardedPage(app.browser, { width: 360, height: 780 });
   try {
-    await page.goto(`${server.baseUrl}/species`);
+    await page.goto(`${app.server.baseUrl}/species`);
     await page.getByRole('button', { name: 'Main menu' }).click();
     await page.getByRole('menuitem', { name: 'Find plants' }).or(page.getByRole('link', { name: 'Find plants' })).first().waitFor();
     await page.waitForTimeout(400); // let the menu's fade-in finish before the screenshot
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     assert.ok(overflow <= 1, `no sideways scrolling at 360 px (overflow ${overflow}px)`);
     await screenshot(page, 'foundation-phone-menu');
-    const api404 = await fetch(`${server.baseUrl}/api/no-such-route`);
+    const api404 = await fetch(`${app.server.baseUrl}/api/no-such-route`);
     assert.equal(api404.status, 404);
     assert.match(api404.headers.get('content-type') ?? '', /json/);
     assert.deepEqual(offHostRequests, []);

@@ -4,29 +4,19 @@
  * the back button keeping the search, the phone layout, and no request to any host but localhost.
  */
 import assert from 'node:assert/strict';
-import { after, before, test } from 'node:test';
+import { test } from 'node:test';
 import type { Browser } from 'playwright-core';
-import { launchBrowser, openGuardedPage, screenshot } from './support/browser.js';
-import { type RunningServer, startServer } from './support/server.js';
+import { openGuardedPage, screenshot } from './support/browser.js';
+import { useAppInBrowser } from './support/app-in-browser.js';
 
-let server: RunningServer;
-let browser: Browser;
-
-before(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-after(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const app = useAppInBrowser();
 
 // "buterfly weed" (one t) must find butterfly milkweed, Asclepias tuberosa: its record lists
 // "butterfly weed" among its common names (species-data/species/asclepias-tuberosa.json).
 test('a misspelt search finds butterfly milkweed, and its page shows cautions and germination', async () => {
-  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(browser);
+  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(app.browser);
   try {
-    await page.goto(`${server.baseUrl}/species`);
+    await page.goto(`${app.server.baseUrl}/species`);
     await page.getByRole('table').waitFor();
     await page.getByRole('searchbox', { name: 'Search by name' }).fill('buterfly weed');
     await page.waitForURL(/\?q=buterfly\+weed$/);
@@ -37,7 +27,7 @@ test('a misspelt search finds butterfly milkweed, and its page shows cautions an
     await screenshot(page, 'species-browser-search');
 
     await row.getByRole('link', { name: 'butterfly milkweed' }).click();
-    await page.waitForURL(`${server.baseUrl}/species/asclepias-tuberosa`);
+    await page.waitForURL(`${app.server.baseUrl}/species/asclepias-tuberosa`);
     await page.getByRole('heading', { level: 1, name: 'Butterfly milkweed' }).waitFor();
     const cautions = page.getByRole('region', { name: 'Cautions' });
     await cautions.getByText(/Milky sap/).waitFor();
@@ -62,9 +52,9 @@ test('a misspelt search finds butterfly milkweed, and its page shows cautions an
 });
 
 test('a shared filtered link applies its filters, and an unknown species says so', async () => {
-  const { page, offHostRequests, context } = await openGuardedPage(browser);
+  const { page, offHostRequests, context } = await openGuardedPage(app.browser);
   try {
-    await page.goto(`${server.baseUrl}/species?state=WI&ecoregion=52&monarchHost=true`);
+    await page.goto(`${app.server.baseUrl}/species?state=WI&ecoregion=52&monarchHost=true`);
     await page.getByRole('table').waitFor();
     assert.equal(await page.getByRole('combobox', { name: 'Native to' }).inputValue(), 'WI');
     assert.equal(await page.getByRole('checkbox', { name: 'Monarch caterpillar host plants only' }).isChecked(), true);
@@ -77,7 +67,7 @@ test('a shared filtered link applies its filters, and an unknown species says so
     assert.ok(monarch.length > 0, 'some Wisconsin monarch hosts are listed');
     assert.ok(monarch.every((cell) => cell === 'Yes'), `every row is a monarch host: ${monarch.join(', ')}`);
 
-    await page.goto(`${server.baseUrl}/species/no-such-plant`);
+    await page.goto(`${app.server.baseUrl}/species/no-such-plant`);
     await page.getByRole('heading', { level: 1, name: 'Species not found' }).waitFor();
     assert.deepEqual(offHostRequests, []);
   } finally {
@@ -86,9 +76,9 @@ test('a shared filtered link applies its filters, and an unknown species says so
 });
 
 test('the browser fits a 360 px phone: filters fold away and only the table scrolls sideways', async () => {
-  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(browser, { width: 360, height: 780 });
+  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(app.browser, { width: 360, height: 780 });
   try {
-    await page.goto(`${server.baseUrl}/species`);
+    await page.goto(`${app.server.baseUrl}/species`);
     await page.getByRole('table').waitFor();
     const filters = page.getByRole('button', { name: /^Filters/ });
     await filters.waitFor();
@@ -100,7 +90,7 @@ test('the browser fits a 360 px phone: filters fold away and only the table scro
     assert.ok(overflow <= 1, `no sideways page scrolling at 360 px (overflow ${overflow}px)`);
     await screenshot(page, 'species-browser-phone');
 
-    await page.goto(`${server.baseUrl}/species/asclepias-tuberosa`);
+    await page.goto(`${app.server.baseUrl}/species/asclepias-tuberosa`);
     await page.getByRole('heading', { level: 1, name: 'Butterfly milkweed' }).waitFor();
     const detailOverflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     assert.ok(detailOverflow <= 1, `species page fits 360 px (overflow ${detailOverflow}px)`);
