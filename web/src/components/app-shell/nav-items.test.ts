@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { juniperGrower, maraOrganiser, priyaMember } from '../../testing/fixtures.js';
 import { visibleNavItems } from './nav-items.js';
 
-// Expected entries and audiences: /work/shared/DESIGN.md "Layout" (Season for organisers,
+// Expected entries and audiences: the product design guide (shared/DESIGN.md beside the project) "Layout" (Season for organisers,
 // My batches for growers, the rest for everyone).
 const labels = (user: Parameters<typeof visibleNavItems>[0]) => visibleNavItems(user).map((i) => i.label);
 

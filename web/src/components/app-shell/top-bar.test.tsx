@@ -5,7 +5,7 @@ import { juniperGrower, maraOrganiser, priyaMember } from '../../testing/fixture
 import { renderApp } from '../../testing/render-app.js';
 import type { User } from '@homeground/shared';
 
-// Who sees which entry: /work/shared/DESIGN.md "Layout"; the groups come from GET /api/me.
+// Who sees which entry: the product design guide (shared/DESIGN.md beside the project) "Layout"; the groups come from GET /api/me.
 function signedInAs(user: User) {
   return renderApp({ token: 'stored-token', api: { 'GET /api/me': { body: user } } });
 }

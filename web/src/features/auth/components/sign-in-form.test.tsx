@@ -5,7 +5,7 @@ import { authFor, maraOrganiser } from '../../../testing/fixtures.js';
 import { renderApp } from '../../../testing/render-app.js';
 
 // Field messages: the shared loginRequestSchema (shared/src/types/auth.ts). Server messages for
-// 401 and 429: the web task's API contract. People: /work/shared/DESIGN.md demo scenario.
+// 401 and 429: the API's sign-in answers (api/src/auth). People: the product design guide (shared/DESIGN.md beside the project) demo scenario.
 async function openSignIn(api = {}, path = '/sign-in') {
   const view = renderApp({ path, api });
   await screen.findByRole('heading', { level: 1, name: 'Sign in' });
