@@ -4,7 +4,7 @@ import { maraOrganiser } from '../testing/fixtures.js';
 import { renderApp } from '../testing/render-app.js';
 
 // Account facts: the GET /api/me answer in src/testing/fixtures.ts (Mara Ellsworth, organiser
-// of the Larkfield Commons Growers, from /work/shared/DESIGN.md's demo scenario).
+// of the Larkfield Commons Growers, from the product design guide (shared/DESIGN.md beside the project)'s demo scenario).
 describe('account page', () => {
   it('sends a signed-out visitor to sign in, and remembers where they were going', async () => {
     const { router } = renderApp({ path: '/account' });

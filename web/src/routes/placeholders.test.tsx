@@ -2,7 +2,7 @@ import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { renderApp } from '../testing/render-app.js';
 
-// Section names: /work/shared/DESIGN.md "Layout"; the sections are not built yet, so each page
+// Section names: the product design guide (shared/DESIGN.md beside the project) "Layout"; the sections are not built yet, so each page
 // must say so instead of showing made-up data.
 describe('sections not built yet', () => {
   it.each([

@@ -1,6 +1,6 @@
 import type { AuthResponse, Group, HealthResponse, StatsResponse, User } from '@homeground/shared';
 
-// Demo data from the invented scenario in /work/shared/DESIGN.md ("Demo scenario"): the
+// Demo data from the invented scenario in the product design guide (shared/DESIGN.md beside the project) ("Demo scenario"): the
 // Larkfield Commons Growers of Larkfield, Wisconsin (EPA Level III ecoregion 52). Counts are
 // made up for the tests; the screens must show whatever the API answers.
 
