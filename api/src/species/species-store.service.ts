@@ -20,9 +20,8 @@ export class SpeciesStore {
   private photos = new Set<string>();
   private ecoregions = new Map<string, Ecoregion>();
   private index = new SpeciesSearchIndex([]);
-  private readonly pages = new Map<string, string>();
   private generation = 0;
-  /** The same answers keyed by the raw request URL, as bytes, for the fast path in species-list-cache.middleware. */
+  /** List answers keyed by the raw request URL, as bytes, for the fast path in species-list-cache.middleware. */
   private readonly rawPages = new Map<string, Buffer>();
 
   constructor(@InjectDataSource() private readonly db: DataSource) {}
@@ -52,7 +51,6 @@ export class SpeciesStore {
       ...s.synonyms.map((name) => ({ slug: s.slug, name, kind: 'synonym' as const })),
     ]);
     this.index = new SpeciesSearchIndex(names);
-    this.pages.clear();
     this.rawPages.clear();
     this.generation++;
   }
@@ -80,16 +78,6 @@ export class SpeciesStore {
 
   ecoregion(code: string): Ecoregion | undefined {
     return this.ecoregions.get(code);
-  }
-
-  /** A page of species as JSON text, from the cache when the same query was answered before. */
-  listJson(query: SpeciesQuery, cacheKey: string): string {
-    const cached = this.pages.get(cacheKey);
-    if (cached !== undefined) return cached;
-    const body = JSON.stringify(this.list(query));
-    if (this.pages.size >= MAX_CACHED_PAGES) this.pages.delete(this.pages.keys().next().value!);
-    this.pages.set(cacheKey, body);
-    return body;
   }
 
   cachedForUrl(url: string): Buffer | undefined {

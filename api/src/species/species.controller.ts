@@ -51,8 +51,9 @@ export class SpeciesController {
   @ApiQuery({ name: 'sort', required: false, enum: SPECIES_SORTS })
   @ApiQuery({ name: 'order', required: false, enum: ['asc', 'desc'] })
   list(@Query(new ZodValidationPipe(speciesQuerySchema)) query: SpeciesQuery, @Req() req: Request, @Res() res: Response): void {
-    // Sent as ready-made JSON from the store's cache: the list is read far more often than edited.
-    const body = this.store.listJson(query, JSON.stringify(query));
+    // Remembered as bytes under this URL: repeats are answered by species-list-cache.middleware,
+    // since the list is read far more often than edited.
+    const body = JSON.stringify(this.store.list(query));
     this.store.rememberForUrl(req.originalUrl, body);
     res.type('application/json').send(body);
   }
