@@ -81,6 +81,20 @@ describe.skipIf(!available || !referenceAvailable(['usda_plants_characteristics.
     expect(bad).toEqual([]);
   });
 
+  it('gives a poison caution to every species USDA rates toxic (toxicity Slight, Moderate or Severe)', () => {
+    const characteristics = loadUsdaCharacteristics();
+    const missing: string[] = [];
+    let rated = 0;
+    for (const s of loadCatalogue().species) {
+      const toxicity = characteristics.get(s.usdaSymbol)?.toxicity ?? '';
+      if (!['Slight', 'Moderate', 'Severe'].includes(toxicity)) continue;
+      rated++;
+      if (!s.cautions.some((c) => c.kind === 'toxic-if-eaten' || c.kind === 'livestock' || c.kind === 'pets')) missing.push(`${s.slug} (${toxicity})`);
+    }
+    expect(rated).toBeGreaterThan(5);
+    expect(missing).toEqual([]);
+  });
+
   /** A record differs when USDA's mature height lies outside its range widened by a fifth each way. */
   it('agrees with USDA mature height (height_mature_feet), or the record explains why USDA is wrong', () => {
     const characteristics = loadUsdaCharacteristics();
@@ -175,6 +189,12 @@ describe.skipIf(!available)('catalogue vs Tallamy & Shropshire 2009 (Lepidoptera
       if (expected.size === 0) expected.add(null);
       if (!expected.has(s.wildlife.lepidopteraGenusCount)) {
         bad.push(`${s.slug}: ${s.wildlife.lepidopteraGenusCount}, table says ${[...expected].join(' or ')}`);
+      }
+      // A genus with its own row that the record overrides with its older name's count must say why.
+      const own = listed(genus);
+      const explained = s.reconciliations.some((r) => r.field === 'wildlife.lepidopteraGenusCount');
+      if (own !== undefined && s.wildlife.lepidopteraGenusCount !== own && !explained) {
+        bad.push(`${s.slug}: takes ${s.wildlife.lepidopteraGenusCount} over its own genus row (${own}) without a reconciliation note`);
       }
     }
     expect(bad).toEqual([]);

@@ -104,7 +104,7 @@ export type Germination = z.infer<typeof germinationSchema>;
 
 export const CAUTION_KINDS = [
   'toxic-if-eaten', 'sap-irritant', 'skin-irritant', 'eye-irritant', 'pets', 'livestock',
-  'aggressive-spreader', 'look-alike', 'protected', 'thorns',
+  'aggressive-spreader', 'look-alike', 'protected', 'thorns', 'regulated',
 ] as const;
 export const cautionSchema = z.object({
   kind: z.enum(CAUTION_KINDS),
