@@ -19,6 +19,10 @@ function checkSpecies(s: Species, sourceKeys: Set<string>): string[] {
     else if (!sourceKeys.has(key)) out.push(`sources.${field}: unknown source key "${key}"`);
   }
   for (const c of s.cautions) if (!sourceKeys.has(c.source)) out.push(`caution source "${c.source}" is not in sources.json`);
+  const kinds = s.cautions.map((c) => c.kind);
+  for (const kind of new Set(kinds)) {
+    if (kinds.filter((k) => k === kind).length > 1) out.push(`two "${kind}" cautions: merge them into one`);
+  }
   const isFlowering = s.growthForm !== 'fern' && s.growthForm !== 'graminoid';
   if (isFlowering && s.bloomMonths.length === 0) out.push('a flowering plant needs bloomMonths');
   if (new Set(s.bloomMonths).size !== s.bloomMonths.length) out.push('bloomMonths repeats a month');

@@ -56,6 +56,14 @@ export type Habitat = z.infer<typeof habitatSchema>;
 export const SPREAD_HABITS = ['clumping', 'spreading', 'aggressive'] as const;
 export const spreadHabitSchema = z.enum(SPREAD_HABITS);
 
+/** National Wetland Plant List indicator classes, wettest first. */
+export const WETLAND_INDICATORS = ['OBL', 'FACW', 'FAC', 'FACU', 'UPL'] as const;
+export type WetlandIndicator = (typeof WETLAND_INDICATORS)[number];
+
+/** USDA PLANTS `commercial_availability` values, in Homeground's spelling. */
+export const COMMERCIAL_AVAILABILITY = ['routine', 'contract-only', 'field-collection-only', 'none-known'] as const;
+export type CommercialAvailability = (typeof COMMERCIAL_AVAILABILITY)[number];
+
 export const DEER_RESISTANCE = ['low', 'medium', 'high'] as const;
 export const deerResistanceSchema = z.enum(DEER_RESISTANCE);
 
@@ -96,7 +104,7 @@ export type Germination = z.infer<typeof germinationSchema>;
 
 export const CAUTION_KINDS = [
   'toxic-if-eaten', 'sap-irritant', 'skin-irritant', 'eye-irritant', 'pets', 'livestock',
-  'aggressive-spreader', 'look-alike', 'protected', 'thorns',
+  'aggressive-spreader', 'look-alike', 'protected', 'thorns', 'regulated',
 ] as const;
 export const cautionSchema = z.object({
   kind: z.enum(CAUTION_KINDS),
@@ -124,13 +132,17 @@ export const SOURCED_FIELDS = [
   'usdaSymbol', 'family', 'nativeStates', 'growthForm', 'lifespan', 'heightCm', 'bloomMonths',
   'flowerColours', 'sun', 'moisture', 'soilTextures', 'habitats', 'wildlife.lepidopteraGenusCount',
   'wildlife.monarchHost', 'spreadHabit', 'deerResistance', 'germination.treatments',
-  'germination.seedsPerPound', 'germination.germinationRatePct',
+  'germination.seedsPerPound', 'germination.germinationRatePct', 'ecoregions', 'sunOptimum',
+  'moistureOptimum', 'wetlandIndicator', 'commercialAvailability', 'protectedIn',
 ] as const;
 export type SourcedField = (typeof SOURCED_FIELDS)[number];
 
 /** A note explaining where the record knowingly differs from a reference. */
 export const reconciliationSchema = z.object({
-  field: z.enum(['usdaSymbol', 'scientificName', 'family', 'nativeStates']),
+  field: z.enum([
+    'usdaSymbol', 'scientificName', 'family', 'nativeStates', 'ecoregions', 'heightCm', 'bloomMonths',
+    'germination.germinationRatePct', 'wildlife.lepidopteraGenusCount', 'cautions', 'spreadHabit',
+  ]),
   note: z.string().min(10),
 });
 
@@ -151,11 +163,26 @@ export const speciesSchema = z.object({
   flowerColours: z.array(flowerColourSchema),
   sun: z.array(sunSchema).min(1),
   moisture: z.array(moistureSchema).min(1),
+  /** Where it thrives: subsets of sun / moisture (which list what it tolerates). */
+  sunOptimum: z.array(sunSchema).min(1),
+  moistureOptimum: z.array(moistureSchema).min(1),
+  /** National Wetland Plant List indicator (a published federal standard); null where unknown. */
+  wetlandIndicator: z.enum(WETLAND_INDICATORS).nullable(),
+  /** Needs acid soil (e.g. blueberries, many ericads). */
+  needsAcidSoil: z.boolean(),
   soilTextures: z.array(soilTextureSchema).min(1),
   nativeStates: z.array(stateCodeSchema).min(1),
+  /** EPA Level III ecoregion codes ("1"–"85") where the species is native; sourced field 'ecoregions'. */
+  ecoregions: z.array(z.string().regex(/^[1-9][0-9]?$/)).min(1),
   habitats: z.array(habitatSchema).min(1),
   wildlife: wildlifeSchema,
   spreadHabit: spreadHabitSchema,
+  /** Heavy self-sower (seeds itself around a bed; evening primrose, some asters). */
+  selfSows: z.boolean(),
+  /** USDA PLANTS `commercial_availability` where it has a value, else null. */
+  commercialAvailability: z.enum(COMMERCIAL_AVAILABILITY).nullable(),
+  /** States where the species is legally protected (listed); empty when none. Used instead of a blanket 'protected'. */
+  protectedIn: z.array(stateCodeSchema),
   deerResistance: deerResistanceSchema,
   germination: germinationSchema,
   cautions: z.array(cautionSchema).default([]),
