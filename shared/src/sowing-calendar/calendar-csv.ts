@@ -1,0 +1,33 @@
+import type { SowingCalendar } from './calendar-types.js';
+
+/** Names shown in the CSV for a species slug. */
+export interface CsvNames {
+  commonName: string;
+  scientificName: string;
+}
+
+const CSV_FIELDS = ['date', 'species', 'scientificName', 'kind', 'title', 'detail', 'method'] as const;
+
+/** RFC 4180 field: quoted when it holds a comma, quote or line break; quotes doubled. */
+export function csvField(value: string): string {
+  return /[",\r\n]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
+}
+
+/**
+ * The calendar as CSV (RFC 4180, CRLF): one row per event in date order, then one row per warning
+ * (kind "warning:<kind>", dated on its schedule's sowing day), so a spreadsheet keeps every caution.
+ * `names` maps a species slug to the names to show; an unknown slug shows the slug.
+ */
+export function calendarToCsv(calendar: SowingCalendar, names: (slug: string) => CsvNames | undefined): string {
+  const nameCells = (slug: string | null) => {
+    if (!slug) return ['', ''];
+    const n = names(slug);
+    return [n?.commonName ?? slug, n?.scientificName ?? ''];
+  };
+  const rows: string[][] = calendar.events.map((e) => [e.date, ...nameCells(e.speciesSlug), e.kind, e.title, e.detail, e.method ?? '']);
+  for (const w of calendar.warnings) {
+    const schedule = calendar.schedules.find((s) => s.speciesSlug === w.speciesSlug && (!w.method || s.method === w.method));
+    rows.push([schedule?.sowDate ?? '', ...nameCells(w.speciesSlug), `warning:${w.kind}`, 'Please note', w.message, w.method ?? '']);
+  }
+  return [CSV_FIELDS as readonly string[], ...rows].map((r) => r.map(csvField).join(',')).join('\r\n');
+}
