@@ -14,8 +14,11 @@ export const DURATIONS = {
   soilBlockDaysSaved: 7,
   /** Indoor sowing is past for the season when plants would be ready after this many days past the frost date (M). */
   indoorLatestReadyAfterFrostDays: 120,
-  /** Hold and pot on plants whose roots fill the pot when the share is this many days or more after they are ready (CP). */
-  potOnWhenHeldDays: 21,
+  /**
+   * Plants ready a week or more before the share are held outdoors and potted on if roots fill the
+   * pot (CP, common-practice); a shorter wait needs no step.
+   */
+  potOnWhenHeldDays: 7,
   /** Collect pots and trays this many days before the share (CP). */
   collectPotsBeforeShareDays: 14,
   /** Write and set pot labels this many days before the share (CP). */
