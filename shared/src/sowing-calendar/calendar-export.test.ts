@@ -74,7 +74,7 @@ describe('CSV export (RFC 4180)', () => {
     const c = build(base);
     const csv = calendarToCsv(c, names);
     const lines = csv.split('\r\n');
-    expect(lines[0]).toBe('date,species,scientificName,kind,title,detail,method');
+    expect(lines[0]).toBe('date,species,scientificName,kind,title,detail');
     const warningRows = lines.filter((l) => l.includes(',warning:'));
     expect(warningRows).toHaveLength(c.warnings.length);
     for (const w of c.warnings) expect(csv).toContain(csvField(w.message));
