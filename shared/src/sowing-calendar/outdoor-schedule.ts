@@ -102,9 +102,11 @@ export function outdoorSchedule(plan: SowingPlan, season: Season): ScheduleOutco
   if (r.needsWarmSoil) sprouts = later(sprouts, addDays(inYearOf(season.lastFrost, yearOf(sprouts)), DURATIONS.warmSoilAfterFrostDays));
 
   if (isLate) {
+    const still = s.warmDays > 0
+      ? 'sown today, the warm step comes next summer'
+      : `${method === 'winter-sowing' ? 'winter sowing' : 'frost-seeding pots outdoors'} still works until ${closes}`;
     warnings.push({ kind: 'late-start', speciesSlug: slug, method,
-      message: `${name}: the usual sowing day (${usual}) is past, but ${method === 'winter-sowing' ? 'winter sowing' : 'frost-seeding pots outdoors'} ` +
-        `still works until ${closes}. Sow today; seedlings are expected about ${sprouts}.` });
+      message: `${name}: the usual sowing day (${usual}) is past, but ${still}. Sow today; seedlings are expected about ${sprouts}.` });
   }
 
   const before = [...s.before, ...s.atSowing].join(' ');

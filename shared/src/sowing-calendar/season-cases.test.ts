@@ -85,6 +85,11 @@ describe('a late start in January, three methods (golden alexanders, 90 d CMS)',
     expect(c.events.find((e) => e.kind === 'winter-sowing-window')!.date).toBe('2027-12-01');
   });
 
+  it('a frost date years before today still gives a plan in a future season', () => {
+    const c = cal(F.wildBergamot, 'winter-sowing', { today: '2027-06-01', lastFrost: '2024-05-10' });
+    expect(on(c, 'sow')).toBe('2028-01-15');
+  });
+
   it('wild bergamot (no pretreatment) under lights from Oct 1 is sown Mar 15 and ready when the frost watch ends', () => {
     const c = cal(F.wildBergamot, 'indoor-lights', { today: '2026-10-01', targetDate: '2027-06-12' });
     expect(on(c, 'sow')).toBe('2027-03-15');

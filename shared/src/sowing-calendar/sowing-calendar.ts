@@ -40,9 +40,13 @@ function scheduleFor(plan: SowingPlan, season: Season): ScheduleOutcome {
 function scheduleThisOrNext(plan: SowingPlan, season: Season): { schedule: SpeciesSchedule; lastFrost: string } {
   const outcome = scheduleFor(plan, season);
   if (!isSeasonPast(outcome)) return { schedule: outcome, lastFrost: season.lastFrost };
-  const next = nextSeason(season);
-  const later = scheduleFor(plan, next);
-  if (isSeasonPast(later)) throw new Error(`no season for ${plan.species.slug} by ${plan.method}`); // cannot happen: next season starts in the future
+  // Step a season at a time: a frost date given years before today still ends in a future season.
+  let next = nextSeason(season);
+  let later = scheduleFor(plan, next);
+  while (isSeasonPast(later)) {
+    next = nextSeason(next);
+    later = scheduleFor(plan, next);
+  }
   const warning: CalendarWarning = {
     kind: 'next-season', speciesSlug: plan.species.slug, method: plan.method,
     message: `${nameOf(plan.species)}: too late this season (${outcome.reason}). These dates are for next season, ` +
