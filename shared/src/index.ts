@@ -33,4 +33,8 @@ export * from './sowing-calendar/calendar-date.js';
 export * from './sowing-calendar/calendar-types.js';
 export * from './sowing-calendar/durations.js';
 export * from './sowing-calendar/sowing-calendar.js';
+export * from './sowing-calendar/calendar-csv.js';
+export * from './sowing-calendar/calendar-ics.js';
+export * from './sowing-calendar/event-uid.js';
+export * from './sowing-calendar/readiness.js';
 export * from './types/mix-api.js';

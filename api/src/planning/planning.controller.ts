@@ -43,6 +43,6 @@ export class PlanningController {
   @Header('Content-Type', 'text/calendar; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-sowing-calendar.ics"')
   ics(@Body(new ZodValidationPipe(calendarRequestSchema)) body: CalendarRequest): string {
-    return this.calendar.toIcs(this.calendar.build(body));
+    return this.calendar.toIcs(this.calendar.build(body), body);
   }
 }

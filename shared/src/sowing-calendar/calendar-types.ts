@@ -2,6 +2,9 @@ import { z } from 'zod';
 import { slugSchema, sowingMethodSchema, type SowingMethod, type Species } from '../types/species.js';
 import { isIsoDate, type IsoDate } from './calendar-date.js';
 
+/** Letters, digits, dot, dash and underscore, 1–64 characters: safe inside an iCalendar UID. */
+export const planIdSchema = z.string().regex(/^[A-Za-z0-9._-]{1,64}$/, { message: 'letters, digits, dot, dash or underscore, 1–64 characters' });
+
 export const isoDateSchema = z.string().refine(isIsoDate, { message: 'a calendar date, YYYY-MM-DD' });
 
 /** A calendar request as the API receives it; it resolves the slugs to catalogue records. */
@@ -13,6 +16,11 @@ export const sowingCalendarRequestSchema = z.object({
   /** Today, so past start dates can be flagged (the caller reads the clock, not us). */
   today: isoDateSchema,
   plans: z.array(z.object({ slug: slugSchema, method: sowingMethodSchema, sowDate: isoDateSchema.optional() })).min(1).max(200),
+  /**
+   * A stable name for this plan (a mix, a season plan, a batch): it goes into every iCalendar UID so
+   * a re-imported, updated calendar replaces its events instead of duplicating them.
+   */
+  planId: planIdSchema.optional(),
 });
 export type SowingCalendarRequest = z.infer<typeof sowingCalendarRequestSchema>;
 
@@ -32,7 +40,9 @@ export interface SowingCalendarInput {
 
 export type CalendarEventKind =
   | 'winter-sowing-window' | 'warm-moist-start' | 'cms-start' | 'check-sprouts' | 'sow' | 'vent-containers'
-  | 'sprouts-expected' | 'pot-up' | 'harden-off' | 'plant-out' | 'frost-watch';
+  | 'sprouts-expected' | 'pot-up' | 'harden-off' | 'plant-out' | 'frost-watch'
+  // Added for issue 11: window and frost-watch ends, holding before the share, the share itself.
+  | 'winter-sowing-window-ends' | 'frost-watch-end' | 'pot-on' | 'collect-pots' | 'label-pots' | 'plant-share';
 
 export interface CalendarEvent {
   date: IsoDate;
@@ -41,14 +51,19 @@ export interface CalendarEvent {
   detail: string;
   /** Null for events that concern the whole calendar (the frost date, the winter-sowing window). */
   speciesSlug: string | null;
+  /** The plan's method, on species events (absent on whole-calendar events). */
+  method?: SowingMethod;
 }
 
 export type CalendarWarningKind =
-  | 'target-too-early' | 'start-in-past' | 'method-unusual' | 'cold-too-short' | 'outside-window' | 'not-for-share';
+  | 'target-too-early' | 'start-in-past' | 'method-unusual' | 'cold-too-short' | 'outside-window' | 'not-for-share'
+  | 'late-start' | 'next-season' | 'second-season';
 
 export interface CalendarWarning {
   kind: CalendarWarningKind;
   speciesSlug: string;
+  /** The plan's method (absent only on warnings made before a method applies). */
+  method?: SowingMethod;
   /** The day count the message gives (days late, days past, days of cold missing). */
   days?: number;
   message: string;

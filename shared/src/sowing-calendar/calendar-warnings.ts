@@ -1,4 +1,4 @@
-import { addDays, daysBetween, type IsoDate } from './calendar-date.js';
+import { daysBetween, type IsoDate } from './calendar-date.js';
 import type { CalendarWarning, SowingPlan, SpeciesSchedule } from './calendar-types.js';
 import { nameOf } from './event-text.js';
 
@@ -28,16 +28,14 @@ export function scheduleWarnings(plan: SowingPlan, schedule: SpeciesSchedule, to
         `are ready about ${schedule.readyDate}, ${days} days later.` });
   }
 
+  // Only a date the grower chose can put a step in the past: default dates start today at the
+  // earliest (late starts are worked out from today by each method's schedule).
   const first = schedule.events.reduce<(typeof schedule.events)[number] | undefined>((a, e) => (a && a.date <= e.date ? a : e), undefined);
-  if (first && first.date < today) {
+  if (plan.sowDate && first && first.date < today) {
     const days = daysBetween(first.date, today);
-    const ready = schedule.readyDate ? ` Plants would then be ready about ${addDays(schedule.readyDate, days)}.` : '';
-    const late = target && schedule.readyDate && addDays(schedule.readyDate, days) > target
-      ? ` That is ${daysBetween(target, addDays(schedule.readyDate, days))} days after the plant share.`
-      : '';
-    warnings.push({ kind: 'start-in-past', speciesSlug: slug, days,
+    warnings.push({ kind: 'start-in-past', speciesSlug: slug, method: plan.method, days,
       message: `${name}: the first step (${first.title.replace(`${name}: `, '')}) was due on ${first.date}, ${days} days ago. ` +
-        `Start today and every later step moves about ${days} days.${ready}${late}` });
+        'If it is done, carry on; if not, leave the sowing date empty and the calendar plans from today.' });
   }
-  return warnings;
+  return warnings.map((w) => ({ ...w, method: plan.method }));
 }

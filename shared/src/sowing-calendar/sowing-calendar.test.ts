@@ -14,7 +14,8 @@ const cal = (species: Species, method: SowingMethod, extra: { lastFrost?: string
 const on = (c: SowingCalendar, kind: string) => c.events.find((e) => e.kind === kind && e.speciesSlug !== null)?.date;
 
 // Worked by hand. Rules: indoor sowing 8 weeks before last frost (M, CHECK-VALUES §4);
-// CMS start = sowing date − CMS days (IPN, D); hardening off 7–14 d before planting out (UF-HO R / M).
+// CMS start = sowing date − CMS days (IPN, D); hardening off 7–14 d before planting out (UF-HO R / M);
+// plants go out after the 2-week frost watch that follows the average last frost (M, from memory).
 describe('indoor sowing under lights', () => {
   const c = cal(withCms(60), 'indoor-lights');
 
@@ -23,8 +24,8 @@ describe('indoor sowing under lights', () => {
     ['check-sprouts', '2027-02-11'], // CMS start + 28 d (IPN: start checking at 28–35 d, R)
     ['sow', '2027-03-15'], // 2027-05-10 − 8 weeks
     ['pot-up', '2027-04-12'],
-    ['harden-off', '2027-04-30'],
-    ['plant-out', '2027-05-10'],
+    ['harden-off', '2027-05-14'], // plant-out − 10 d
+    ['plant-out', '2027-05-24'], // 2027-05-10 + 14 d frost watch (sow + 7 d to sprout + 7 weeks = 2027-05-10 is earlier)
   ])('%s on %s', (kind, date) => {
     expect(on(c, kind)).toBe(date);
   });
@@ -93,21 +94,20 @@ describe("the species' own stratification length", () => {
 
 describe('warnings', () => {
   it('a plant share before plants can be ready, with the day count', () => {
-    const c = cal(withCms(60), 'indoor-lights', { targetDate: '2027-05-01' });
-    expect(c.warnings).toContainEqual(expect.objectContaining({ kind: 'target-too-early', days: 9 }));
-    expect(c.warnings[0].message).toContain('ready about 2027-05-10, 9 days later');
+    const c = cal(withCms(60), 'indoor-lights', { targetDate: '2027-05-10' });
+    expect(c.warnings).toContainEqual(expect.objectContaining({ kind: 'target-too-early', days: 14 }));
+    expect(c.warnings[0].message).toContain('ready about 2027-05-24, 14 days later');
   });
 
   it('no warning when the plant share is after the ready date (second Saturday of June)', () => {
     expect(cal(withCms(60), 'indoor-lights', { targetDate: '2027-06-12' }).warnings).toEqual([]);
   });
 
-  it('a start date already past, with the days and the knock-on ready date', () => {
-    const c = cal(withCms(60), 'indoor-lights', { today: '2027-02-03', targetDate: '2027-05-20' });
+  it('a sowing date the grower chose, with a step already past: the days, and no made-up knock-on date', () => {
+    const c = cal(withCms(60), 'indoor-lights', { today: '2027-02-03', sowDate: '2027-03-15' });
     const w = c.warnings.find((x) => x.kind === 'start-in-past')!;
-    expect(w.days).toBe(20); // 2027-01-14 → 2027-02-03
-    expect(w.message).toContain('ready about 2027-05-30');
-    expect(w.message).toContain('10 days after the plant share');
+    expect(w.days).toBe(20); // CMS start 2027-01-14 → 2027-02-03
+    expect(w.message).toContain('leave the sowing date empty');
   });
 
   it('a method the record does not list', () => {
