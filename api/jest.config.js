@@ -9,6 +9,7 @@ export default {
   transform: {
     '^.+\\.ts$': ['ts-jest', { useESM: true, isolatedModules: true, tsconfig: '<rootDir>/tsconfig.json' }],
   },
-  testTimeout: 30000,
+  // Demo-data suites hash eight passwords with scrypt at start; on a busy two-core machine that alone can take 30 s.
+  testTimeout: 90000,
   maxWorkers: 2,
 };

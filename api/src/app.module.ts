@@ -16,6 +16,8 @@ import { PlanningModule } from './planning/planning.module.js';
 import { RecommendationsModule } from './recommendations/recommendations.module.js';
 import { SavedMixesModule } from './saved-mixes/saved-mixes.module.js';
 import { UsersModule } from './users/users.module.js';
+import { MailModule } from './mail/mail.module.js';
+import { InvitationsModule } from './invitations/invitations.module.js';
 
 /** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
 function webApp(): DynamicModule[] {
@@ -33,9 +35,11 @@ function webApp(): DynamicModule[] {
     AppConfigModule,
     TypeOrmModule.forRootAsync({ inject: [APP_CONFIG], useFactory: (config: AppConfig) => databaseOptions(config) }),
     ...webApp(),
+    MailModule,
     AuthModule,
     UsersModule,
     GroupsModule,
+    InvitationsModule,
     HealthModule,
     SpeciesModule,
     EcoregionsModule,

@@ -38,3 +38,5 @@ export * from './sowing-calendar/calendar-ics.js';
 export * from './sowing-calendar/event-uid.js';
 export * from './sowing-calendar/readiness.js';
 export * from './types/mix-api.js';
+export * from './types/mail.js';
+export * from './types/invitation.js';

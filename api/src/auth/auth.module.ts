@@ -22,6 +22,7 @@ import { signInRateLimit } from './sign-in-rate-limit.js';
   ],
   controllers: [AuthController],
   providers: [AuthService, JwtStrategy],
+  exports: [AuthService],
 })
 export class AuthModule implements NestModule {
   constructor(@Inject(APP_CONFIG) private readonly config: AppConfig) {}

@@ -35,7 +35,12 @@ export class AuthService {
     return this.issueToken(user);
   }
 
-  private async issueToken(user: User): Promise<AuthResponse> {
+  /** A fresh sign-in for someone who just proved who they are another way (an accepted invitation). */
+  async tokenFor(userId: string): Promise<AuthResponse> {
+    return this.issueToken({ id: userId } as Pick<User, 'id'>);
+  }
+
+  private async issueToken(user: Pick<User, 'id'>): Promise<AuthResponse> {
     const payload: JwtPayload = { sub: user.id };
     const accessToken = await this.jwt.signAsync(payload);
     return { accessToken, expiresIn: this.config.jwtExpiresInSeconds, user: await this.users.getDto(user.id) };

@@ -26,6 +26,11 @@ export interface AppConfig {
   demoData: boolean;
   loginThrottle: { limit: number; ttlMs: number };
   logLevel: Env['LOG_LEVEL'];
+  /** Outgoing mail: a real SMTP server, or null to keep mail in the local outbox. */
+  smtpUrl: string | null;
+  mailFrom: string;
+  /** Public address of the web app, without a trailing slash. */
+  publicUrl: string;
 }
 
 export const APP_CONFIG = Symbol('APP_CONFIG');
@@ -60,6 +65,9 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     LOGIN_THROTTLE_LIMIT: config.get('LOGIN_THROTTLE_LIMIT', { infer: true }),
     LOGIN_THROTTLE_TTL_SECONDS: config.get('LOGIN_THROTTLE_TTL_SECONDS', { infer: true }),
     LOG_LEVEL: config.get('LOG_LEVEL', { infer: true }),
+    SMTP_URL: config.get('SMTP_URL', { infer: true }),
+    MAIL_FROM: config.get('MAIL_FROM', { infer: true }),
+    PUBLIC_URL: config.get('PUBLIC_URL', { infer: true }),
   } satisfies Env;
   const isProduction = env.NODE_ENV === 'production';
   const dataDir = fromRoot(env.DATA_DIR);
@@ -77,5 +85,8 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     demoData: !isProduction && (env.DEMO_DATA ?? true),
     loginThrottle: { limit: env.LOGIN_THROTTLE_LIMIT, ttlMs: env.LOGIN_THROTTLE_TTL_SECONDS * 1000 },
     logLevel: env.LOG_LEVEL,
+    smtpUrl: env.SMTP_URL ?? null,
+    mailFrom: env.MAIL_FROM,
+    publicUrl: env.PUBLIC_URL.replace(/\/+$/, ''),
   };
 }

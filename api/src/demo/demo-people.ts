@@ -29,6 +29,6 @@ export const DEMO_PEOPLE: DemoPerson[] = [
   { displayName: 'Juniper Okafor', email: 'juniper.okafor@example.org', password: 'larkfield-juniper', role: 'member', groupRole: 'grower', note: 'grower: winter sowing in covered containers' },
   { displayName: 'Theo Lindqvist', email: 'theo.lindqvist@example.org', password: 'larkfield-theo', role: 'member', groupRole: 'grower', note: 'grower: indoor under lights, soil blocks' },
   { displayName: 'Amara Reyes', email: 'amara.reyes@example.org', password: 'larkfield-amara', role: 'member', groupRole: 'grower', note: 'grower: outdoor pots over winter' },
-  { displayName: 'Priya Vantongeren', email: 'priya.vantongeren@example.org', password: 'larkfield-priya', role: 'member', note: 'member (reserves plants)' },
-  { displayName: 'Sol Marchetti', email: 'sol.marchetti@example.org', password: 'larkfield-sol', role: 'member', note: 'member (reserves plants)' },
+  { displayName: 'Priya Vantongeren', email: 'priya.vantongeren@example.org', password: 'larkfield-priya', role: 'member', groupRole: 'member', note: 'member of the group (reserves plants)' },
+  { displayName: 'Sol Marchetti', email: 'sol.marchetti@example.org', password: 'larkfield-sol', role: 'member', note: 'neighbour, not in the group (reserves plants)' },
 ];

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, Put } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Put } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { Group } from '@homeground/shared';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
@@ -32,5 +32,16 @@ export class GroupsController {
   @Auth()
   setMember(@Param('slug') slug: string, @CurrentUser() user: AuthenticatedUser, @Body() dto: SetMemberDto): Promise<GroupMemberDto> {
     return this.groups.setMember(slug, user, dto.email, dto.role);
+  }
+
+  @Delete(':slug/members/:userId')
+  @HttpCode(204)
+  @Auth()
+  removeMember(
+    @Param('slug') slug: string,
+    @Param('userId', new ParseUUIDPipe({ version: '4' })) userId: string,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<void> {
+    return this.groups.removeMember(slug, user, userId);
   }
 }

@@ -1,4 +1,4 @@
-import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import type { Group as GroupDto, GroupRole } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
@@ -10,7 +10,8 @@ import { Group } from './group.entity.js';
 export interface GroupMemberDto {
   userId: string;
   displayName: string;
-  email: string;
+  /** Only organisers (and admins) see the addresses; everyone else gets null. */
+  email: string | null;
   role: GroupRole;
 }
 
@@ -56,9 +57,12 @@ export class GroupsService {
 
   async members(slug: string, caller: AuthenticatedUser): Promise<GroupMemberDto[]> {
     const group = await this.get(slug);
-    if (!(await this.roleOf(caller, group.id))) throw new ForbiddenException('Only members of this group can see who is in it.');
+    const role = await this.roleOf(caller, group.id);
+    if (!role) throw new ForbiddenException('Only members of this group can see who is in it.');
     const rows = await this.memberships.find({ where: { groupId: group.id }, relations: { user: true }, order: { createdAt: 'ASC' } });
-    return rows.map((m) => ({ userId: m.userId, displayName: m.user.displayName, email: m.user.email, role: m.role }));
+    // E-mail addresses are personal data: the organisers who invite and contact people see them, no one else.
+    const showEmail = role === 'organiser';
+    return rows.map((m) => ({ userId: m.userId, displayName: m.user.displayName, email: showEmail ? m.user.email : null, role: m.role }));
   }
 
   /** Adds or changes a person's role in the group; organisers of that group (or admins) only. */
@@ -73,6 +77,22 @@ export class GroupsService {
       const existing = await tx.findOne(GroupMembership, { where: { groupId: group.id, userId: user.id } });
       await tx.save(GroupMembership, existing ? { ...existing, role } : tx.create(GroupMembership, { groupId: group.id, userId: user.id, role }));
       return { userId: user.id, displayName: user.displayName, email: user.email, role };
+    });
+  }
+
+  /** Takes a person out of the group; organisers only, and never the group's last organiser. */
+  async removeMember(slug: string, caller: AuthenticatedUser, userId: string): Promise<void> {
+    const group = await this.get(slug);
+    if ((await this.roleOf(caller, group.id)) !== 'organiser') {
+      throw new ForbiddenException('Only an organiser of this group can remove people from it.');
+    }
+    await this.db.transaction(async (tx) => {
+      const m = await tx.findOne(GroupMembership, { where: { groupId: group.id, userId } });
+      if (!m) throw new NotFoundException('That person is not in this group.');
+      if (m.role === 'organiser' && (await tx.count(GroupMembership, { where: { groupId: group.id, role: 'organiser' } })) === 1) {
+        throw new ConflictException('This is the group\'s only organiser: make someone else an organiser first.');
+      }
+      await tx.delete(GroupMembership, { id: m.id });
     });
   }
 

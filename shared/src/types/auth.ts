@@ -4,7 +4,8 @@ export const GLOBAL_ROLES = ['member', 'curator', 'admin'] as const;
 export const globalRoleSchema = z.enum(GLOBAL_ROLES);
 export type GlobalRole = z.infer<typeof globalRoleSchema>;
 
-export const GROUP_ROLES = ['organiser', 'grower'] as const;
+/** A group's people: members reserve plants, growers raise batches, organisers run the season. */
+export const GROUP_ROLES = ['member', 'grower', 'organiser'] as const;
 export const groupRoleSchema = z.enum(GROUP_ROLES);
 export type GroupRole = z.infer<typeof groupRoleSchema>;
 

@@ -4,7 +4,7 @@ import type { Response } from 'express';
 
 const REASON: Record<number, string> = {
   400: 'Bad Request', 401: 'Unauthorized', 403: 'Forbidden', 404: 'Not Found', 409: 'Conflict',
-  413: 'Payload Too Large', 415: 'Unsupported Media Type', 422: 'Unprocessable Entity',
+  410: 'Gone', 413: 'Payload Too Large', 415: 'Unsupported Media Type', 422: 'Unprocessable Entity',
   429: 'Too Many Requests', 500: 'Internal Server Error', 503: 'Service Unavailable',
 };
 

@@ -1,0 +1,26 @@
+import type { MigrationInterface, QueryRunner } from 'typeorm';
+
+/** The local outbox: messages the built-in SMTP server received when no real mail server is set. */
+export class CreateOutbox1764979200000 implements MigrationInterface {
+  name = 'CreateOutbox1764979200000';
+
+  async up(q: QueryRunner): Promise<void> {
+    await q.query(`CREATE TABLE "outbox_messages" (
+      "id" varchar PRIMARY KEY NOT NULL,
+      "message_id" text,
+      "from" text NOT NULL,
+      "to" text NOT NULL,
+      "subject" text NOT NULL,
+      "text" text NOT NULL,
+      "html" text,
+      "kind" text NOT NULL,
+      "group_id" text,
+      "received_at" datetime NOT NULL DEFAULT (datetime('now'))
+    )`);
+    await q.query(`CREATE INDEX "ix_outbox_messages_group" ON "outbox_messages" ("group_id")`);
+  }
+
+  async down(q: QueryRunner): Promise<void> {
+    await q.query(`DROP TABLE "outbox_messages"`);
+  }
+}

@@ -1,0 +1,145 @@
+import { createHash, randomBytes } from 'node:crypto';
+import {
+  BadRequestException, ConflictException, ForbiddenException, GoneException, Inject, Injectable, NotFoundException,
+} from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import {
+  type AcceptInvitationRequest, type AuthResponse, type Invitation, INVITATION_DAYS, type InvitationPreview,
+  type InviteRequest,
+} from '@homeground/shared';
+import { DataSource, IsNull, Repository } from 'typeorm';
+import { AuthService } from '../auth/auth.service.js';
+import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { hashPassword } from '../auth/password.js';
+import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
+import { GroupMembership } from '../groups/group-membership.entity.js';
+import { Group } from '../groups/group.entity.js';
+import { GroupsService } from '../groups/groups.service.js';
+import { MailService } from '../mail/mail.service.js';
+import { User } from '../users/user.entity.js';
+import { invitationEmail } from './invitation-email.js';
+import { InvitationRow } from './invitation.entity.js';
+
+const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
+
+@Injectable()
+export class InvitationsService {
+  constructor(
+    @InjectRepository(InvitationRow) private readonly invitations: Repository<InvitationRow>,
+    @InjectRepository(User) private readonly users: Repository<User>,
+    @InjectDataSource() private readonly db: DataSource,
+    private readonly groups: GroupsService,
+    private readonly mail: MailService,
+    private readonly auth: AuthService,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {}
+
+  /** An organiser invites someone by e-mail; a newer invitation to the same address replaces the older one. */
+  async invite(slug: string, caller: AuthenticatedUser, req: InviteRequest, now = new Date()): Promise<Invitation> {
+    const group = await this.groups.get(slug);
+    if ((await this.groups.roleOf(caller, group.id)) !== 'organiser') {
+      throw new ForbiddenException('Only an organiser of this group can invite people to it.');
+    }
+    const existingUser = await this.users.findOne({ where: { email: req.email } });
+    if (existingUser && (await this.db.getRepository(GroupMembership).exists({ where: { groupId: group.id, userId: existingUser.id } }))) {
+      throw new ConflictException(`${req.email} is already in ${group.name}: change their role in the member list instead.`);
+    }
+    const inviter = await this.users.findOneOrFail({ where: { id: caller.id } });
+    const token = randomBytes(32).toString('base64url');
+    const expiresAt = new Date(now.getTime() + INVITATION_DAYS * 86_400_000);
+    const row = await this.db.transaction(async (tx) => {
+      await tx.delete(InvitationRow, { groupId: group.id, email: req.email, acceptedAt: IsNull() });
+      return tx.save(InvitationRow, tx.create(InvitationRow, {
+        groupId: group.id, email: req.email, role: req.role, tokenHash: hashToken(token), invitedBy: caller.id, expiresAt,
+      }));
+    });
+    const message = invitationEmail({
+      inviterName: inviter.displayName, groupName: group.name, town: group.town, state: group.state, role: req.role,
+      link: `${this.config.publicUrl}/invitations/${token}`, days: INVITATION_DAYS,
+    });
+    await this.mail.send({ to: req.email, ...message, kind: 'invitation', groupId: group.id });
+    return toInvitation(row);
+  }
+
+  /** Pending and accepted invitations of a group, newest first, for its organisers. */
+  async list(slug: string, caller: AuthenticatedUser): Promise<Invitation[]> {
+    const group = await this.groups.get(slug);
+    if ((await this.groups.roleOf(caller, group.id)) !== 'organiser') {
+      throw new ForbiddenException('Only an organiser of this group can see its invitations.');
+    }
+    const rows = await this.invitations.find({ where: { groupId: group.id }, order: { createdAt: 'DESC' } });
+    return rows.map(toInvitation);
+  }
+
+  async preview(token: string, now = new Date()): Promise<InvitationPreview> {
+    const { row, group } = await this.open(token, now);
+    const accountExists = await this.users.exists({ where: { email: row.email } });
+    return {
+      groupSlug: group.slug, groupName: group.name, town: group.town, state: group.state, role: row.role,
+      email: row.email, accountExists, expiresAt: row.expiresAt.toISOString(),
+    };
+  }
+
+  /**
+   * Joins the group: a signed-in person whose address the invitation names, or a new account made from
+   * the invitation's address with the name and password given. One transaction: no account without its
+   * membership, no membership from a used link.
+   */
+  async accept(token: string, caller: AuthenticatedUser | null, req: AcceptInvitationRequest, now = new Date()): Promise<AuthResponse> {
+    const { row } = await this.open(token, now);
+    let userId: string;
+    if (caller) {
+      if (caller.email.toLowerCase() !== row.email) {
+        throw new ForbiddenException(`This invitation was sent to ${row.email}: sign in with that address to accept it.`);
+      }
+      userId = caller.id;
+    } else {
+      if (await this.users.exists({ where: { email: row.email } })) {
+        throw new ConflictException(`An account already uses ${row.email}: sign in first, then open the link again.`);
+      }
+      const missing = (['displayName', 'password'] as const).filter((f) => !req[f]);
+      if (missing.length) {
+        throw new BadRequestException({
+          message: 'To join, give your name and choose a password.',
+          fields: missing.map((field) => ({ field, message: 'is required to make your account' })),
+        });
+      }
+      userId = '';
+    }
+    const passwordHash = caller ? null : await hashPassword(req.password!);
+    const joinedId = await this.db.transaction(async (tx) => {
+      // Claim the link first: a second accept racing this one finds it used and writes nothing.
+      const claimed = await tx.update(InvitationRow, { id: row.id, acceptedAt: IsNull() }, { acceptedAt: now });
+      if (!claimed.affected) throw new GoneException('This invitation has already been used.');
+      let id = userId;
+      if (!caller) {
+        const user = await tx.save(User, tx.create(User, {
+          email: row.email, displayName: req.displayName!, passwordHash: passwordHash!, role: 'member', isDemo: false,
+        }));
+        id = user.id;
+      }
+      const existing = await tx.findOne(GroupMembership, { where: { groupId: row.groupId, userId: id } });
+      await tx.save(GroupMembership, existing ? { ...existing, role: row.role } : tx.create(GroupMembership, { groupId: row.groupId, userId: id, role: row.role }));
+      return id;
+    });
+    return this.auth.tokenFor(joinedId);
+  }
+
+  private async open(token: string, now: Date): Promise<{ row: InvitationRow; group: Group }> {
+    const row = await this.invitations.findOne({ where: { tokenHash: hashToken(token) } });
+    if (!row) throw new NotFoundException('This invitation link is not one we sent, or it was replaced by a newer one.');
+    if (row.acceptedAt) throw new GoneException('This invitation has already been used.');
+    if (row.expiresAt.getTime() < now.getTime()) {
+      throw new GoneException('This invitation has expired: ask the organiser to send a new one.');
+    }
+    const group = await this.db.getRepository(Group).findOneByOrFail({ id: row.groupId });
+    return { row, group };
+  }
+}
+
+function toInvitation(r: InvitationRow): Invitation {
+  return {
+    id: r.id, email: r.email, role: r.role, expiresAt: r.expiresAt.toISOString(),
+    acceptedAt: r.acceptedAt ? r.acceptedAt.toISOString() : null,
+  };
+}
