@@ -12,6 +12,7 @@ const ROLE_WORDS: Record<GlobalRole, string> = {
 };
 
 const GROUP_ROLE_WORDS: Record<GroupRole, string> = {
+  member: 'Member',
   organiser: 'Organiser',
   grower: 'Grower',
 };
