@@ -47,7 +47,7 @@ describe('species page', () => {
     expect(within(seed).getByText(/Chill damp, never dry/)).toBeInTheDocument();
     expect(within(seed).getByText('Sow 6 mm (¼ in) deep.')).toBeInTheDocument();
     expect(within(seed).getByText(/about 60% after treatment; there are about 70,000 seeds in a pound \(154 per gram\)/)).toBeInTheDocument();
-    expect(within(seed).getByText('Covered-container winter sowing').parentElement).toHaveTextContent('suits it');
+    expect(within(seed).getByText('Winter sowing in covered containers').parentElement).toHaveTextContent('suits it');
     expect(within(seed).getByText('Soil blocks').parentElement).toHaveTextContent('not the best way');
     expect(within(seed).getByText(/Borders & Lee-Mäder 2014 \(Xerces Society\) \(seed treatment\)/)).toBeInTheDocument();
   });
