@@ -4,7 +4,8 @@ import { useCallback, useEffect } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { savedMixQueryOptions } from '../api/mixes/mixes.queries.js';
 import { PageIntro } from '../components/page/page-intro.js';
-import { ChooseSpecies, parseSpeciesParam, PrintWorkspace, useChosenSpecies } from '../features/cards-labels/index.js';
+import { paths } from '../config/paths.js';
+import { ChooseSpecies, PrintWorkspace, useChosenSpecies } from '../features/cards-labels/index.js';
 import { useDocumentTitle } from '../lib/use-document-title.js';
 
 const useStyles = makeStyles({
@@ -19,20 +20,14 @@ export function CardsLabelsRoute() {
   useDocumentTitle('Cards & labels');
   const styles = useStyles();
   const [params, setParams] = useSearchParams();
-  const slugs = parseSpeciesParam(params.get('species'));
-  const mixId = params.get('mix');
+  const { species: slugs, mix: mixId } = paths.cardsLabels.parse(params);
   const chosen = useChosenSpecies(slugs);
 
   const setSlugs = useCallback(
     (next: string[]) =>
       setParams(
-        (current) => {
-          const out = new URLSearchParams(current);
-          if (next.length > 0) out.set('species', next.join(','));
-          else out.delete('species');
-          out.delete('mix');
-          return out;
-        },
+        // The mix's species are now named one by one, so the link drops the mix.
+        () => paths.cardsLabels.search({ species: next }),
         { replace: true },
       ),
     [setParams],

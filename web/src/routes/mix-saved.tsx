@@ -6,7 +6,7 @@ import { PageIntro } from '../components/page/page-intro.js';
 import { ErrorState, LoadingState } from '../components/states/index.js';
 import { paths } from '../config/paths.js';
 import { useSession } from '../features/auth/index.js';
-import { type MixPlan, type PlanChange, planFromSavedMix, planToSearchParams, YardMixView } from '../features/yard-mix/index.js';
+import { type MixPlan, type PlanChange, planFromSavedMix, YardMixView } from '../features/yard-mix/index.js';
 import { isApiRequestError } from '../lib/api-request-error.js';
 import { useDocumentTitle } from '../lib/use-document-title.js';
 
@@ -21,7 +21,7 @@ export function SavedMixRoute() {
   useDocumentTitle(saved.data ? saved.data.name : 'Saved mix');
 
   const toFindPlants = useCallback<PlanChange>(
-    (next: MixPlan, options) => navigate(`${paths.findPlants.build()}?${planToSearchParams(next).toString()}`, { replace: options?.replace ?? false }),
+    (next: MixPlan, options) => navigate(paths.findPlants.build({ plan: next }), { replace: options?.replace ?? false }),
     [navigate],
   );
 

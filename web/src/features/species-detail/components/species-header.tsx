@@ -71,7 +71,7 @@ export function SpeciesHeader({ species, bloomStrip, bloomWords }: { species: Sp
           <SourceNote sources={species.sources} fields={SECTION_FIELDS.bloom} />
         </div>
         <RouterButton
-          to={`${paths.cardsLabels.build()}?species=${encodeURIComponent(species.slug)}`}
+          to={paths.cardsLabels.build({ species: [species.slug] })}
           appearance="primary"
           icon={<DocumentText20Regular />}
           className={styles.action}
