@@ -2,12 +2,13 @@ import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { FluentProvider } from '@fluentui/react-components';
+import { homegroundTheme } from '../../theme/index.js';
 import { QueryState, type QueryLike } from './query-state.js';
 
 const base = { isPending: false, isError: false, error: null, data: undefined, refetch: () => undefined };
 const show = (query: QueryLike<string[]>, keepDataOnError = false) =>
   render(
-    <FluentProvider>
+    <FluentProvider theme={homegroundTheme}>
       <QueryState
         query={query}
         loading="Loading the groups"

@@ -3,6 +3,7 @@ import { loginRequestSchema, type LoginRequest } from '@homeground/shared';
 import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
+import { homegroundTheme } from '../../theme/index.js';
 import { ApiRequestError } from '../api-request-error.js';
 import { failureFromApi } from './field-errors.js';
 import { useSchemaForm } from './use-schema-form.js';
@@ -14,7 +15,7 @@ function LoginForm({ onValid, apiError }: { onValid: (body: LoginRequest) => voi
   const form = useSchemaForm({ schema: loginRequestSchema, initial: { email: '', password: '' } });
   const submit = form.handleSubmit((body) => (apiError ? form.fail(apiError) : onValid(body)));
   return (
-    <FluentProvider>
+    <FluentProvider theme={homegroundTheme}>
       <form ref={form.formRef} onSubmit={submit} noValidate aria-label="Sign in">
         {form.failure ? <p role="alert">{form.failure}</p> : null}
         <Field label="E-mail" {...form.validation('email')}>
