@@ -1,3 +1,4 @@
+import { DURATIONS } from '../sowing-calendar/durations.js';
 import type { SowingMethod, TREATMENT_KINDS, TreatmentStep } from '../types/species.js';
 import { joinWords } from './join-words.js';
 
@@ -20,8 +21,8 @@ export interface TreatmentWords {
   how: string;
 }
 
-/** Length assumed when a moist step gives none: ~60 days suits many prairie species (common practice). */
-export const DEFAULT_MOIST_DAYS = 60;
+/** Length assumed when a moist step gives none: the sowing calendar's (~60 d, iowa-prairie-network-stratification). */
+export const DEFAULT_MOIST_DAYS = DURATIONS.defaultColdMoistDays;
 
 export const TREATMENT_WORDS = {
   none: {
