@@ -40,3 +40,4 @@ export * from './sowing-calendar/readiness.js';
 export * from './types/mix-api.js';
 export * from './types/mail.js';
 export * from './types/invitation.js';
+export * from './vocabulary/index.js';

@@ -1,5 +1,5 @@
 import { BLOOM_PERIODS, type BloomPeriod, type PaletteConstraint } from '../types/recommendation.js';
-import { joinWords } from '../scoring/plain-words.js';
+import { joinWords } from '../vocabulary/join-words.js';
 import { groundWords, lostOut, names, onlyAvailable, type ConstraintInput } from './constraint-input.js';
 import { OBJECTIVE_WEIGHTS, grassTargets } from './objective.js';
 

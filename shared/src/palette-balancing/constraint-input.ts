@@ -1,5 +1,5 @@
 import type { RegionContext, Site } from '../types/site.js';
-import { describeGround } from '../scoring/plain-words.js';
+import { describeGround } from '../vocabulary/site-words.js';
 import type { PaletteItem } from './palette-item.js';
 
 /** What the constraint report looks at: the mix, and everything it could have been chosen from. */

@@ -1,5 +1,6 @@
 import type { PaletteConstraint } from '../types/recommendation.js';
-import { joinWords, stateName } from '../scoring/plain-words.js';
+import { stateName } from '../scoring/plain-words.js';
+import { joinWords } from '../vocabulary/join-words.js';
 import { groundWords, lostOut, names, onlyAvailable, type ConstraintInput } from './constraint-input.js';
 import { grassTargets } from './objective.js';
 import type { HeightTier } from './palette-item.js';

@@ -1,5 +1,6 @@
 import type { Species } from '../types/species.js';
-import { countOf, joinWords } from '../scoring/plain-words.js';
+import { countOf } from '../scoring/plain-words.js';
+import { joinWords } from '../vocabulary/join-words.js';
 
 /**
  * A species whose record carries a `protected` caution (federally or state listed, or dug from the

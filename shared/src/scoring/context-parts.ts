@@ -2,7 +2,10 @@ import { BLOOM_PERIODS, type BloomPeriod, type ScorePart } from '../types/recomm
 import type { RegionContext } from '../types/site.js';
 import { HABITATS, type Habitat, type Species } from '../types/species.js';
 import { cp42PeriodsOf, monthsInPeriod } from './bloom-periods.js';
-import { countOf, formatMonths, joinWords } from './plain-words.js';
+import { countOf } from './plain-words.js';
+import { joinWords } from '../vocabulary/join-words.js';
+import { formatMonths } from '../vocabulary/months.js';
+import { HABITAT_WORDS } from '../vocabulary/site-words.js';
 import { POINTS } from './score-weights.js';
 import { PartCache, wordListCode } from './word-cache.js';
 
@@ -12,7 +15,7 @@ const habitatParts = new PartCache<number>();
 /** Parts that depend on where the site is and on the mix so far. */
 
 function habitatWords(h: Habitat): string {
-  return h === 'fen-bog' ? 'fen and bog' : h.replace(/-/g, ' ');
+  return HABITAT_WORDS[h];
 }
 
 export function habitatPart(species: Species, region: RegionContext): ScorePart | null {

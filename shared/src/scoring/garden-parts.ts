@@ -1,7 +1,7 @@
 import type { ScorePart } from '../types/recommendation.js';
 import type { Site } from '../types/site.js';
 import type { Species } from '../types/species.js';
-import { joinWords } from './plain-words.js';
+import { joinWords } from '../vocabulary/join-words.js';
 import { POINTS } from './score-weights.js';
 import { sharedPart } from './word-cache.js';
 

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { US_STATE_CODES } from '../types/species.js';
 import { STATE_NAMES } from './state-names.js';
 import { STATE_NEIGHBOURS } from './state-neighbours.js';
-import { formatMonths, describeGround } from './plain-words.js';
+import { formatMonths } from '../vocabulary/months.js';
+import { describeGround } from '../vocabulary/site-words.js';
 
 describe('state tables (from-memory geography; checked for consistency)', () => {
   it('every neighbour relation runs both ways', () => {

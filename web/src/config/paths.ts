@@ -1,5 +1,14 @@
+import { type CardsSelection, cardsSelectionToSearchParams, parseCardsSelection } from './search/cards-search.js';
+import {
+  type FindPlantsSearch, type FindPlantsStep, findPlantsSearchParams, type MixPlan, type MixRegion, parseFindPlantsSearch,
+} from './search/find-plants-search.js';
+import { withQuery } from './search/query-values.js';
+import { type BrowserState, browserStateToSearchParams, EMPTY_STATE, parseBrowserState } from './search/species-search.js';
+
 /**
- * Every URL in the web app. Routes use `path`; links call `build()` so a changed URL has one home.
+ * Every URL in the web app, built and parsed here and nowhere else. Routes use `path`; links call
+ * `build()`; pages that keep their state in the query string read it with `parse()` and write it
+ * with `search()`, so a changed key or default has one home.
  */
 export const paths = {
   home: { path: '/', build: () => '/' },
@@ -7,15 +16,35 @@ export const paths = {
     path: '/sign-in',
     /** `next` is where to go after signing in; only same-site paths are kept. */
     build: (next?: string) => withNext('/sign-in', next),
+    parse: parseNext,
   },
-  register: { path: '/register', build: (next?: string) => withNext('/register', next) },
+  register: { path: '/register', build: (next?: string) => withNext('/register', next), parse: parseNext },
   account: { path: '/account', build: () => '/account' },
-  findPlants: { path: '/find-plants', build: () => '/find-plants' },
+  findPlants: {
+    path: '/find-plants',
+    /** Find plants at a step, for your ground, or a whole plan (the mix's share link). */
+    build: (target?: { plan?: MixPlan; region?: MixRegion; step?: FindPlantsStep }) =>
+      withQuery('/find-plants', findPlantsSearchParams(target)),
+    parse: (params: URLSearchParams): FindPlantsSearch => parseFindPlantsSearch(params),
+    search: findPlantsSearchParams,
+  },
   /** A saved yard mix; anyone with the link can open it. */
   savedMix: { path: '/mixes/:id', build: (id: string) => `/mixes/${encodeURIComponent(id)}` },
-  species: { path: '/species', build: () => '/species' },
+  species: {
+    path: '/species',
+    /** The browser with some filters set, e.g. `build({ state: 'WI', monarchHost: true })`. */
+    build: (filters: Partial<BrowserState> = {}) => withQuery('/species', browserStateToSearchParams({ ...EMPTY_STATE, ...filters })),
+    parse: parseBrowserState,
+    search: browserStateToSearchParams,
+  },
   speciesDetail: { path: '/species/:slug', build: (slug: string) => `/species/${encodeURIComponent(slug)}` },
-  cardsLabels: { path: '/cards-and-labels', build: () => '/cards-and-labels' },
+  cardsLabels: {
+    path: '/cards-and-labels',
+    /** Cards for these species (`?species=a,b`) and/or a saved mix's (`?mix=id`). */
+    build: (selection: Partial<CardsSelection> = {}) => withQuery('/cards-and-labels', cardsSelectionToSearchParams(selection)),
+    parse: parseCardsSelection,
+    search: cardsSelectionToSearchParams,
+  },
   season: { path: '/season', build: () => '/season' },
   myBatches: { path: '/my-batches', build: () => '/my-batches' },
   plantShare: { path: '/plant-share', build: () => '/plant-share' },
@@ -34,3 +63,15 @@ function withNext(base: string, next?: string): string {
   const safe = safeNextPath(next);
   return safe && safe !== '/' ? `${base}?next=${encodeURIComponent(safe)}` : base;
 }
+
+/** The sign-in and register pages' `next`, when it is a path on this site. */
+function parseNext(params: URLSearchParams): { next?: string } {
+  const next = safeNextPath(params.get('next'));
+  return next ? { next } : {};
+}
+
+export type { BrowserState, SortOrder, SpeciesSort } from './search/species-search.js';
+export { DEFAULT_PAGE_SIZE, EMPTY_STATE, PAGE_SIZES } from './search/species-search.js';
+export type { CardsSelection } from './search/cards-search.js';
+export type { AreaUnit, FindPlantsSearch, FindPlantsStep, MixPlan, MixRegion, PlanFromUrl } from './search/find-plants-search.js';
+export { stepOf, withGround, withStep } from './search/find-plants-search.js';

@@ -1,69 +1,17 @@
-import { useCallback, useEffect, useMemo, useRef } from 'react';
-import { useLocation, useSearchParams } from 'react-router-dom';
-import { MAIN_CONTENT_ID } from '../components/app-shell/app-shell.js';
+import { useLocation } from 'react-router-dom';
 import { PageIntro } from '../components/page/page-intro.js';
 import { ErrorState } from '../components/states/index.js';
 import { paths } from '../config/paths.js';
 import { useSession } from '../features/auth/index.js';
-import { type ChosenGround, GroundStep } from '../features/your-ground/index.js';
-import {
-  EMPTY_YARD, type MixPlan, type PlanChange, planFromSearchParams, planToSearchParams, regionFromSearchParams, valuesFromSite,
-  YardMixView, YardStep,
-} from '../features/yard-mix/index.js';
-import { useDocumentTitle } from '../lib/use-document-title.js';
+import { useFindPlantsSteps } from '../features/find-plants/index.js';
+import { EMPTY_YARD, valuesFromSite, YardMixView, YardStep } from '../features/yard-mix/index.js';
+import { GroundStep } from '../features/your-ground/index.js';
 
-type Step = 'ground' | 'yard' | 'mix';
-
-const STEP_TITLES: Record<Step, string> = { ground: 'Find plants: your ground', yard: 'Find plants: your yard', mix: 'Your yard mix' };
-
-/** Keys that belong to a finished mix; a new ground or new yard answers make them stale. */
-const MIX_KEYS = ['chosen', 'locked', 'excluded', 'size'];
-
-/**
- * Find plants: your ground → your yard → your yard mix. The step and every answer live in the URL,
- * so the back button walks the steps and the mix's own URL is its share link.
- */
+/** Find plants: your ground → your yard → your yard mix, one step at a time (see `useFindPlantsSteps`). */
 export function FindPlantsRoute() {
-  const [params, setParams] = useSearchParams();
   const location = useLocation();
   const session = useSession();
-  const parsed = useMemo(() => planFromSearchParams(params), [params]);
-  const region = regionFromSearchParams(params);
-  const requested = params.get('step');
-  const step: Step = requested === 'ground' || !region ? 'ground' : requested === 'yard' || parsed.kind === 'none' ? 'yard' : 'mix';
-  useDocumentTitle(STEP_TITLES[step]);
-
-  // A new step replaces the screen: move focus (and the view) to the top of the page content, so
-  // keyboard and screen-reader users start the step at its beginning. Not on the first visit.
-  const shownStep = useRef(step);
-  useEffect(() => {
-    if (shownStep.current === step) return;
-    shownStep.current = step;
-    const main = document.getElementById(MAIN_CONTENT_ID);
-    main?.focus({ preventScroll: true });
-    main?.scrollIntoView?.({ block: 'start' });
-  }, [step]);
-
-  const goTo = (next: Step, change: (p: URLSearchParams) => void = () => {}) => {
-    const p = new URLSearchParams(params);
-    change(p);
-    if (next === 'mix') p.delete('step');
-    else p.set('step', next);
-    setParams(p);
-  };
-
-  const confirmGround = (ground: ChosenGround) =>
-    goTo('yard', (p) => {
-      p.set('state', ground.state);
-      if (ground.ecoregionCode) p.set('eco', ground.ecoregionCode);
-      else p.delete('eco');
-      MIX_KEYS.forEach((k) => p.delete(k));
-    });
-
-  const onPlanChange = useCallback<PlanChange>(
-    (plan: MixPlan, options) => setParams(planToSearchParams(plan), { replace: options?.replace ?? false }),
-    [setParams],
-  );
+  const { step, region, plan, goTo, confirmGround, changePlan } = useFindPlantsSteps();
 
   return (
     <>
@@ -75,22 +23,22 @@ export function FindPlantsRoute() {
       {step === 'yard' && region ? (
         <YardStep
           region={region}
-          initial={parsed.kind === 'plan' ? valuesFromSite(parsed.plan.site, parsed.plan.areaUnit) : EMPTY_YARD}
+          initial={plan.kind === 'plan' ? valuesFromSite(plan.plan.site, plan.plan.areaUnit) : EMPTY_YARD}
           onChangeGround={() => goTo('ground')}
-          onSubmit={(site, areaUnit) => onPlanChange({ region, site, areaUnit, locked: [], excluded: [] })}
+          onSubmit={(site, areaUnit) => changePlan({ region, site, areaUnit, locked: [], excluded: [] })}
         />
       ) : null}
-      {step === 'mix' && parsed.kind === 'invalid' ? (
+      {step === 'mix' && plan.kind === 'invalid' ? (
         <ErrorState
           title="This link's yard answers are incomplete"
-          message={`Answer the yard questions again to see a mix. (${parsed.problems.join('; ')})`}
+          message={`Answer the yard questions again to see a mix. (${plan.problems.join('; ')})`}
           onRetry={() => goTo('yard')}
         />
       ) : null}
-      {step === 'mix' && parsed.kind === 'plan' ? (
+      {step === 'mix' && plan.kind === 'plan' ? (
         <YardMixView
-          plan={parsed.plan}
-          onPlanChange={onPlanChange}
+          plan={plan.plan}
+          onPlanChange={changePlan}
           isSignedIn={session.status === 'signed-in'}
           signInHref={paths.signIn.build(`${location.pathname}${location.search}`)}
           onChangeYard={() => goTo('yard')}

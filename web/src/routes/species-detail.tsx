@@ -2,7 +2,8 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { useParams } from 'react-router-dom';
 import { speciesDetailQueryOptions } from '../api/species/species.queries.js';
-import { BloomStrip, bloomLabel } from '../features/species-browser/index.js';
+import { bloomWords } from '@homeground/shared';
+import { BloomStrip } from '../features/species-browser/index.js';
 import { SpeciesDetail } from '../features/species-detail/index.js';
 
 /** Starts the record's request while the page's code arrives; the page shows loading, 404 and errors itself. */
@@ -20,7 +21,7 @@ export function SpeciesDetailRoute() {
       // A new slug is a new page: start its state (photo fallback, open details) afresh.
       key={slug}
       slug={slug}
-      describeBloom={bloomLabel}
+      describeBloom={bloomWords}
       renderBloomStrip={(s) => <BloomStrip bloomMonths={s.bloomMonths} flowerColours={s.flowerColours} size="large" />}
     />
   );

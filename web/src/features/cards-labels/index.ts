@@ -1,4 +1,4 @@
 export { ChooseSpecies } from './components/choose-species.js';
 export { PrintWorkspace } from './components/print-workspace.js';
 export { useChosenSpecies } from './hooks/use-chosen-species.js';
-export { parseSpeciesParam } from './utils/species-url.js';
+export { useCardSelection } from './hooks/use-card-selection.js';

@@ -1,5 +1,4 @@
 export { SpeciesBrowser } from './components/species-browser.js';
 /** The bloom strip is also drawn on the species page; routes hand it to the detail feature. */
 export { BloomStrip, type BloomStripProps } from './components/bloom-strip.js';
-export { bloomLabel } from './utils/bloom-label.js';
 export { speciesBrowserLoader } from './utils/browser-loader.js';

@@ -1,7 +1,8 @@
 import { loginRequestSchema } from '@homeground/shared';
 import { describe, expect, it } from 'vitest';
 import { ApiRequestError } from '../../../lib/api-request-error.js';
-import { describeAuthFailure, fieldErrorsFromZod } from './form-errors.js';
+import { fieldErrorsFromZod } from '../../../lib/forms/field-errors.js';
+import { describeAuthFailure } from './form-errors.js';
 
 // Expected words: the shared login schema (shared/src/types/auth.ts) and the task's API contract.
 describe('fieldErrorsFromZod', () => {

@@ -1,7 +1,6 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
+import { MONTH_NUMBERS, MONTH_WORDS } from '@homeground/shared';
 import type { FlowerSwatch } from '../../../theme/flower-colours.js';
-
-const MONTH_LETTERS = ['J', 'F', 'M', 'A', 'M', 'J', 'J', 'A', 'S', 'O', 'N', 'D'];
 
 const useStyles = makeStyles({
   strip: { display: 'grid', gridTemplateColumns: 'repeat(12, 1fr)', gap: '2px' },
@@ -20,11 +19,11 @@ export function BloomStrip({ months, swatch }: { months: readonly number[]; swat
   const styles = useStyles();
   return (
     <div className={styles.strip} aria-hidden data-testid="bloom-strip">
-      {MONTH_LETTERS.map((letter, i) => {
-        const inBloom = months.includes(i + 1);
+      {MONTH_NUMBERS.map((month) => {
+        const inBloom = months.includes(month);
         return (
-          <div key={i} className={inBloom ? `${styles.month} ${styles.inBloom}` : styles.month}>
-            {letter}
+          <div key={month} className={inBloom ? `${styles.month} ${styles.inBloom}` : styles.month}>
+            {MONTH_WORDS[month].initial}
             <div className={inBloom ? `${styles.bar} ${styles.barInBloom}` : styles.bar} style={inBloom ? { backgroundColor: swatch.fill } : undefined} />
           </div>
         );

@@ -37,8 +37,8 @@ describe('fact card', () => {
     expect(c.getByText('12–30 in (30–75 cm)')).toBeInTheDocument();
     expect(c.getByText(/Asclepias hosts the caterpillars of 12 moth and butterfly species \(Tallamy & Shropshire 2009\)/)).toBeInTheDocument();
     expect(c.getByText(/Monarch host plant/)).toBeInTheDocument();
-    expect(c.getByText(/^Cold-moist stratify 30 days: mix seed with damp sand in a bag in the refrigerator\./)).toBeInTheDocument();
-    expect(c.getByText('Sow 6 mm (1/4 in) deep.')).toBeInTheDocument();
+    expect(c.getByText(/^Cold-moist stratification, 30 days: mix the seed with damp sand in a sealed bag in the refrigerator\./)).toBeInTheDocument();
+    expect(c.getByText('Sow 6 mm (¼ in) deep.')).toBeInTheDocument();
     expect(c.getByText(/Works with winter sowing in covered containers/)).toBeInTheDocument();
   });
 
@@ -65,7 +65,7 @@ describe('fact card', () => {
     await renderCard(wildBergamot);
     const card = within(screen.getByRole('article', { name: 'Wild bergamot' }));
     expect(card.getByText('Flowers lavender and pink')).toBeInTheDocument();
-    expect(card.getByText(/^Needs light to sprout/)).toBeInTheDocument();
+    expect(card.getByText(/^Needs light to germinate/)).toBeInTheDocument();
     expect(card.getByText(/No pretreatment needed/)).toBeInTheDocument();
     expect(card.queryByRole('heading', { name: 'Cautions' })).toBeNull();
     expect(card.queryByText(/Monarch host plant/)).toBeNull();

@@ -1,23 +1,21 @@
 import { mergeClasses } from '@fluentui/react-components';
 import { ArrowAutofitHeight20Regular, Drop16Regular, LeafTwo16Regular, Warning16Regular, WeatherSunny16Regular } from '@fluentui/react-icons';
-import { formatHeightRangeCm, genusOf } from '@homeground/shared';
+import {
+  bloomWords, capitalise, CAUTION_WORDS, formatHeightRangeCm, genusOf, moisturePhrase, sowingDepthSentence, sowingMethodsPhrase, sunPhrase,
+} from '@homeground/shared';
 import { useId, useRef } from 'react';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { flowerSwatch } from '../../../theme/flower-colours.js';
 import { useFitLevel } from '../hooks/use-fit-level.js';
 import type { QrEncoderState } from '../hooks/use-qr-encoder.js';
-import { bloomWords, CAUTION_LABELS, flowerColourWords, hostWords, moistureWords, sunWords } from '../utils/card-words.js';
+import { flowerColourWords, hostWords } from '../utils/card-words.js';
 import { speciesPageUrl } from '../utils/species-url.js';
-import { methodsWords, sowingDepthWords, treatmentSentences } from '../utils/treatment-words.js';
+import { treatmentSentences } from '../utils/treatment-words.js';
 import { BloomStrip } from './bloom-strip.js';
 import { useFactCardStyles } from './fact-card.styles.js';
 import { QrCode } from './qr-code.js';
 
 const FIT_CLASSES = ['fit0', 'fit1', 'fit2', 'fit3', 'fit4'] as const;
-
-function capitalised(name: string): string {
-  return name.charAt(0).toUpperCase() + name.slice(1);
-}
 
 /** One species on a quarter page: what it is, where it grows, what it feeds, how to sow it, what to mind. */
 export function FactCard({ species, qr, layoutKey }: { species: SpeciesDetail; qr: QrEncoderState; layoutKey: string }) {
@@ -40,7 +38,7 @@ export function FactCard({ species, qr, layoutKey }: { species: SpeciesDetail; q
 
       <div className={styles.header}>
         <div className={styles.names}>
-          <h3 id={titleId} className={styles.commonName}>{capitalised(species.commonNames[0])}</h3>
+          <h3 id={titleId} className={styles.commonName}>{capitalise(species.commonNames[0])}</h3>
           <p className={styles.scientific}>{species.scientificName}</p>
           <p className={styles.family}>{species.family}</p>
           <div className={styles.bloom}>
@@ -57,11 +55,11 @@ export function FactCard({ species, qr, layoutKey }: { species: SpeciesDetail; q
       <dl className={styles.facts}>
         <div className={styles.fact}>
           <dt className={styles.term}><WeatherSunny16Regular aria-hidden /> Light</dt>
-          <dd className={styles.detail}>{sunWords(species.sun)}</dd>
+          <dd className={styles.detail}>{sunPhrase(species.sun)}</dd>
         </div>
         <div className={styles.fact}>
           <dt className={styles.term}><Drop16Regular aria-hidden /> Soil</dt>
-          <dd className={styles.detail}>{moistureWords(species.moisture)}</dd>
+          <dd className={styles.detail}>{moisturePhrase(species.moisture)}</dd>
         </div>
         <div className={styles.fact}>
           <dt className={styles.term}><ArrowAutofitHeight20Regular aria-hidden /> Height</dt>
@@ -82,9 +80,9 @@ export function FactCard({ species, qr, layoutKey }: { species: SpeciesDetail; q
           {treatmentSentences(germination).map((sentence, i) => (
             <li key={i}>{sentence}</li>
           ))}
-          <li>{sowingDepthWords(germination)}</li>
+          <li>{sowingDepthSentence(germination)}</li>
         </ol>
-        <p className={styles.text}>Works with {methodsWords(germination.methods)}.</p>
+        <p className={styles.text}>Works with {sowingMethodsPhrase(germination.methods)}.</p>
       </section>
 
       {species.cautions.length > 0 ? (
@@ -93,7 +91,7 @@ export function FactCard({ species, qr, layoutKey }: { species: SpeciesDetail; q
           {species.cautions.map((c) => (
             <p key={c.kind} className={styles.caution}>
               <Warning16Regular className={styles.cautionIcon} aria-hidden />
-              <span><strong>{CAUTION_LABELS[c.kind]}:</strong> {c.text}</span>
+              <span><strong>{CAUTION_WORDS[c.kind].title}:</strong> {c.text}</span>
             </p>
           ))}
         </section>

@@ -2,7 +2,7 @@ import { makeStyles, tokens } from '@fluentui/react-components';
 import { Info20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { hgTokens } from '../../../theme/index.js';
-import { CAUTION_LABELS } from '../utils/card-words.js';
+import { cautionList } from '@homeground/shared';
 
 const useStyles = makeStyles({
   root: {
@@ -42,7 +42,7 @@ export function PrintReminder({ species }: { species: readonly SpeciesDetail[] }
           <ul className={styles.list} aria-label="Cautions among your plants">
             {withCautions.map((s) => (
               <li key={s.slug}>
-                {s.commonNames[0]}: {s.cautions.map((c) => CAUTION_LABELS[c.kind].toLowerCase()).join(', ')}
+                {s.commonNames[0]}: {cautionList(s.cautions.map((c) => c.kind))}
               </li>
             ))}
           </ul>

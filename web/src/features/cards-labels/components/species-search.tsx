@@ -6,7 +6,7 @@ import { useState } from 'react';
 import { speciesListQueryOptions } from '../../../api/species/species.queries.js';
 import { ErrorState } from '../../../components/states/index.js';
 import { useDebouncedValue } from '../hooks/use-debounced-value.js';
-import { CAUTION_LABELS } from '../utils/card-words.js';
+import { cautionList } from '@homeground/shared';
 
 const useStyles = makeStyles({
   list: { listStyle: 'none', margin: `${tokens.spacingVerticalS} 0 0`, padding: 0 },
@@ -48,7 +48,7 @@ export function SpeciesSearch({ chosen, onAdd }: { chosen: readonly string[]; on
                 <span className={styles.names}>
                   {s.commonName} <span className={styles.scientific}>{s.scientificName}</span>
                   {s.cautionKinds.length > 0 ? (
-                    <span className={styles.caution}>Cautions: {s.cautionKinds.map((k) => CAUTION_LABELS[k].toLowerCase()).join(', ')}</span>
+                    <span className={styles.caution}>Cautions: {cautionList(s.cautionKinds)}</span>
                   ) : null}
                 </span>
                 <Button

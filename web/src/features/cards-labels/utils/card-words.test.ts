@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { bloomWords, hostWords, moistureWords, sowDateWords, sunWords, todayIso } from './card-words.js';
+import { bloomWords, moisturePhrase, sunPhrase } from '@homeground/shared';
+import { hostWords, sowDateWords, todayIso } from './card-words.js';
 
 // Host counts are per genus from Tallamy & Shropshire 2009 (the records' tallamy-shropshire-2009
 // key): Asclepias 12; a fern genus 0; a genus missing from the table is null.
@@ -13,10 +14,10 @@ describe('card words', () => {
   });
 
   it('names light and soil in the order a grower reads them', () => {
-    expect(sunWords(['shade', 'full'])).toBe('Full sun or shade');
-    expect(moistureWords(['wet', 'medium'])).toBe('Medium-moist or wet soil');
+    expect(sunPhrase(['shade', 'full'])).toBe('Full sun or shade');
+    expect(moisturePhrase(['wet', 'medium'])).toBe('Medium-moist or wet soil');
     expect(bloomWords([6, 7, 8])).toBe('Blooms Jun–Aug');
-    expect(bloomWords([])).toBe('No showy bloom');
+    expect(bloomWords([])).toBe('No bloom months recorded');
   });
 
   it('prints a sow date in words, or a line to write on when there is none', () => {

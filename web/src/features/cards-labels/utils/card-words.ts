@@ -1,40 +1,6 @@
-import { type Caution, formatMonths, joinWords, MOISTURE_WORDS, type Moisture, SUN_WORDS, type Sun } from '@homeground/shared';
+import { joinWords } from '@homeground/shared';
 
-/** Short headings for each caution kind; the record's own sentence follows them. */
-export const CAUTION_LABELS: Record<Caution['kind'], string> = {
-  'toxic-if-eaten': 'Toxic if eaten',
-  'sap-irritant': 'Irritating sap',
-  'skin-irritant': 'Irritates skin',
-  'eye-irritant': 'Irritates eyes',
-  pets: 'Harmful to pets',
-  livestock: 'Harmful to livestock',
-  'aggressive-spreader': 'Spreads fast',
-  'look-alike': 'Has a look-alike',
-  protected: 'Protected species',
-  thorns: 'Thorns',
-  regulated: 'Restricted in some states',
-};
-
-const SUN_ORDER: Sun[] = ['full', 'part', 'shade'];
-const MOISTURE_ORDER: Moisture[] = ['dry', 'medium', 'wet'];
-
-/** "Full sun or part shade". */
-export function sunWords(sun: readonly Sun[]): string {
-  const words = SUN_ORDER.filter((s) => sun.includes(s)).map((s) => SUN_WORDS[s]);
-  const text = joinWords(words, 'or');
-  return text.charAt(0).toUpperCase() + text.slice(1);
-}
-
-/** "Dry or medium-moist soil". */
-export function moistureWords(moisture: readonly Moisture[]): string {
-  const text = `${joinWords(MOISTURE_ORDER.filter((m) => moisture.includes(m)).map((m) => MOISTURE_WORDS[m]), 'or')} soil`;
-  return text.charAt(0).toUpperCase() + text.slice(1);
-}
-
-/** "Blooms Jun–Aug", or a plain word when the record gives no months (ferns, some grasses). */
-export function bloomWords(bloomMonths: readonly number[]): string {
-  return bloomMonths.length === 0 ? 'No showy bloom' : `Blooms ${formatMonths(bloomMonths)}`;
-}
+/** Sun, moisture, bloom and caution words come from the shared vocabulary (`sunPhrase`, `bloomWords` …). */
 
 /** Caterpillar host value of the genus, always with its source (Tallamy & Shropshire 2009). */
 export function hostWords(genus: string, count: number | null): string {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { methodsWords, sowingDepthWords, treatmentSentences, treatmentShort } from './treatment-words.js';
+import { treatmentSentences, treatmentShort } from './treatment-words.js';
 
 // Inputs mirror species-data records (Asclepias tuberosa: cold-moist 30 d, 6 mm deep;
 // a Baptisia-style scarification + inoculant). The abbreviations CMS/WMS are the trade's
@@ -7,18 +7,21 @@ import { methodsWords, sowingDepthWords, treatmentSentences, treatmentShort } fr
 describe('treatment words', () => {
   it('says how to cold-moist stratify in plain words, then adds the record note', () => {
     const [sentence] = treatmentSentences({ treatments: [{ kind: 'cold-moist', days: 30, note: 'Chill damp, never dry.' }] });
-    expect(sentence).toBe('Cold-moist stratify 30 days: mix seed with damp sand in a bag in the refrigerator. Chill damp, never dry.');
+    expect(sentence).toBe(
+      'Cold-moist stratification, 30 days: mix the seed with damp sand in a sealed bag in the refrigerator. Chill damp, never dry.',
+    );
   });
 
   it('keeps the order of a warm-then-cold treatment', () => {
     const sentences = treatmentSentences({ treatments: [{ kind: 'warm-moist', days: 90 }, { kind: 'cold-moist', days: 90 }] });
-    expect(sentences[0]).toMatch(/^Warm-moist stratify 90 days/);
-    expect(sentences[1]).toMatch(/^Cold-moist stratify 90 days/);
+    expect(sentences[0]).toMatch(/^Warm-moist stratification, 90 days/);
+    expect(sentences[1]).toMatch(/^Cold-moist stratification, 90 days/);
   });
 
   it('falls back to default words for scarification and says when nothing is needed', () => {
     expect(treatmentSentences({ treatments: [{ kind: 'scarification' }] })[0]).toMatch(/Nick or sand the seed coat/);
     expect(treatmentSentences({ treatments: [{ kind: 'none' }] })[0]).toBe('No treatment needed: sow the seed as it comes.');
+    expect(treatmentSentences({ treatments: [{ kind: 'scarification', note: 'Rub on sandpaper.' }] })[0]).toBe('Rub on sandpaper.');
   });
 
   it.each([
@@ -28,17 +31,5 @@ describe('treatment words', () => {
     [{ treatments: [{ kind: 'none' as const }], needsLight: true, sowingDepthMm: 0 }, 'no treatment · surface sow'],
   ])('labels %j as "%s"', (germination, expected) => {
     expect(treatmentShort(germination)).toBe(expected);
-  });
-
-  it('gives depth in mm and the nearest inch fraction (25.4 mm = 1 in)', () => {
-    expect(sowingDepthWords({ needsLight: false, sowingDepthMm: 6 })).toBe('Sow 6 mm (1/4 in) deep.');
-    expect(sowingDepthWords({ needsLight: false, sowingDepthMm: 3 })).toBe('Sow 3 mm (1/8 in) deep.');
-    expect(sowingDepthWords({ needsLight: true, sowingDepthMm: 0 })).toMatch(/^Needs light to sprout/);
-  });
-
-  it('lists sowing methods in words', () => {
-    expect(methodsWords(['winter-sowing', 'indoor-lights', 'direct-seed'])).toBe(
-      'winter sowing in covered containers, indoors under lights or direct seeding',
-    );
   });
 });

@@ -3,7 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { statsQueryOptions } from '../../../api/system/system.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
-import { ErrorState } from '../../../components/states/index.js';
+import { QueryState } from '../../../components/states/index.js';
 import { hgTokens } from '../../../theme/index.js';
 import { ApiStatusLine } from './api-status-line.js';
 
@@ -34,45 +34,35 @@ export function CatalogueFigures() {
   const styles = useStyles();
   const stats = useQuery(statsQueryOptions());
 
-  let body;
-  if (stats.isPending) {
-    body = (
-      <Skeleton aria-label="Loading the catalogue figures">
-        <SkeletonItem size={48} />
-      </Skeleton>
-    );
-  } else if (stats.isError) {
-    body = (
-      <ErrorState
-        title="The catalogue figures did not load."
-        message={stats.error.message}
-        onRetry={() => void stats.refetch()}
-      />
-    );
-  } else {
-    const figures = [
-      { label: 'native species in the catalogue', value: stats.data.species },
-      { label: 'growing groups', value: stats.data.groups },
-      { label: 'ecoregions covered', value: stats.data.ecoregions },
-    ];
-    body = (
-      <dl className={styles.list}>
-        {figures.map((f) => (
-          <div key={f.label} className={styles.figure}>
-            <dt className={styles.label}>{f.label}</dt>
-            <dd className={styles.value}>{count.format(f.value)}</dd>
-          </div>
-        ))}
-      </dl>
-    );
-  }
-
   return (
     <ContentCard aria-labelledby="catalogue-today">
       <Heading level="section" id="catalogue-today">
         In the catalogue today
       </Heading>
-      {body}
+      <QueryState
+        query={stats}
+        loading={
+          <Skeleton aria-label="Loading the catalogue figures">
+            <SkeletonItem size={48} />
+          </Skeleton>
+        }
+        error="The catalogue figures did not load."
+      >
+        {(data) => (
+          <dl className={styles.list}>
+            {[
+              { label: 'native species in the catalogue', value: data.species },
+              { label: 'growing groups', value: data.groups },
+              { label: 'ecoregions covered', value: data.ecoregions },
+            ].map((f) => (
+              <div key={f.label} className={styles.figure}>
+                <dt className={styles.label}>{f.label}</dt>
+                <dd className={styles.value}>{count.format(f.value)}</dd>
+              </div>
+            ))}
+          </dl>
+        )}
+      </QueryState>
       <ApiStatusLine />
     </ContentCard>
   );

@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { groupsQueryOptions } from '../../../api/groups/groups.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
-import { EmptyState, ErrorState } from '../../../components/states/index.js';
+import { EmptyState, QueryState } from '../../../components/states/index.js';
 import { hgTokens } from '../../../theme/index.js';
 
 const useStyles = makeStyles({
@@ -25,30 +25,29 @@ export function GrowingGroups() {
   const styles = useStyles();
   const groups = useQuery(groupsQueryOptions());
 
-  let body;
-  if (groups.isPending) body = <Spinner size="small" label="Loading the groups" />;
-  else if (groups.isError)
-    body = <ErrorState title="The list of groups did not load." message={groups.error.message} onRetry={() => void groups.refetch()} />;
-  else if (groups.data.length === 0)
-    body = <EmptyState title="No growing groups have joined yet.">When a group starts its first season, it shows here.</EmptyState>;
-  else
-    body = (
-      <ul className={styles.list}>
-        {groups.data.map((g) => (
-          <li key={g.id}>
-            <div className={styles.name}>{g.name}</div>
-            <div className={styles.meta}>{describeGroup(g)}</div>
-          </li>
-        ))}
-      </ul>
-    );
-
   return (
     <ContentCard aria-labelledby="growing-groups">
       <Heading level="section" id="growing-groups">
         Groups growing with Homeground
       </Heading>
-      {body}
+      <QueryState
+        query={groups}
+        loading={<Spinner size="small" label="Loading the groups" />}
+        error="The list of groups did not load."
+        isEmpty={(data) => data.length === 0}
+        empty={() => <EmptyState title="No growing groups have joined yet.">When a group starts its first season, it shows here.</EmptyState>}
+      >
+        {(data) => (
+          <ul className={styles.list}>
+            {data.map((g) => (
+              <li key={g.id}>
+                <div className={styles.name}>{g.name}</div>
+                <div className={styles.meta}>{describeGroup(g)}</div>
+              </li>
+            ))}
+          </ul>
+        )}
+      </QueryState>
     </ContentCard>
   );
 }

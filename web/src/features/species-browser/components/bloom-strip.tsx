@@ -1,7 +1,6 @@
-import type { FlowerColour } from '@homeground/shared';
+import { bloomWords, type FlowerColour, MONTH_NUMBERS, MONTH_WORDS } from '@homeground/shared';
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import { flowerSwatch } from '../../../theme/flower-colours.js';
-import { bloomLabel, MONTH_INITIALS, MONTH_NAMES } from '../utils/bloom-label.js';
 
 const useStyles = makeStyles({
   root: { display: 'inline-flex', flexDirection: 'column', gap: tokens.spacingVerticalXXS },
@@ -45,21 +44,21 @@ export interface BloomStripProps {
 export function BloomStrip({ bloomMonths, flowerColours, size = 'compact', className }: BloomStripProps) {
   const styles = useStyles();
   const swatch = flowerSwatch(flowerColours[0]);
-  const label = bloomLabel(bloomMonths);
+  const label = bloomWords(bloomMonths);
   const colours = flowerColours.map((c) => flowerSwatch(c).name).join(' and ');
   const spoken = bloomMonths.length > 0 && colours ? `${label}; ${colours} flowers` : label;
   const isLarge = size === 'large';
   return (
     <span role="img" aria-label={spoken} title={spoken} className={mergeClasses(styles.root, className)}>
       <span className={styles.cells} aria-hidden>
-        {MONTH_NAMES.map((name, i) => {
-          const isBlooming = bloomMonths.includes(i + 1);
+        {MONTH_NUMBERS.map((month) => {
+          const isBlooming = bloomMonths.includes(month);
           return (
             <span
-              key={name}
+              key={month}
               className={mergeClasses(styles.cell, isLarge ? styles.large : styles.compact, isBlooming && styles.blooming)}
               style={isBlooming ? { backgroundColor: swatch.fill, color: swatch.ink } : undefined}
-              data-month={i + 1}
+              data-month={month}
               data-blooming={isBlooming || undefined}
             />
           );
@@ -67,9 +66,9 @@ export function BloomStrip({ bloomMonths, flowerColours, size = 'compact', class
       </span>
       {isLarge ? (
         <span className={styles.initials} aria-hidden>
-          {MONTH_INITIALS.map((m, i) => (
-            <span key={i} className={styles.initial}>
-              {m}
+          {MONTH_NUMBERS.map((month) => (
+            <span key={month} className={styles.initial}>
+              {MONTH_WORDS[month].initial}
             </span>
           ))}
         </span>

@@ -1,12 +1,10 @@
 import {
-  GROWTH_FORMS, type GrowthForm, MOISTURE_LEVELS, type Moisture, STATE_NAMES, type StateCode, SUN_LEVELS, type Sun,
-  US_STATE_CODES,
+  capitaliseAll, GROWTH_FORM_WORDS, GROWTH_FORMS, type GrowthForm, MOISTURE_LEVELS, MOISTURE_WORDS, type Moisture, MONTH_NUMBERS,
+  MONTH_WORDS, STATE_NAMES, type StateCode, SUN_LEVELS, SUN_WORDS, type Sun, US_STATE_CODES,
 } from '@homeground/shared';
 import { Button, Checkbox, Field, makeStyles, Select, tokens } from '@fluentui/react-components';
 import { Dismiss16Regular } from '@fluentui/react-icons';
 import { type BrowserState, countActiveFilters } from '../utils/browser-state.js';
-import { MONTH_NAMES } from '../utils/bloom-label.js';
-import { GROWTH_FORM_LABELS, MOISTURE_LABELS, SUN_LABELS } from '../utils/option-labels.js';
 import { EcoregionSelect } from './ecoregion-select.js';
 import { HeightFilter } from './height-filter.js';
 import { useSelectStyles } from './select-styles.js';
@@ -56,8 +54,11 @@ function OptionSelect<T extends string>({ label, anyLabel, value, options, label
   );
 }
 
-const MONTH_VALUES = MONTH_NAMES.map((_, i) => String(i + 1));
-const MONTH_LABELS = Object.fromEntries(MONTH_NAMES.map((name, i) => [String(i + 1), name]));
+const SUN_LABELS = capitaliseAll(SUN_WORDS);
+const MOISTURE_LABELS = capitaliseAll(MOISTURE_WORDS);
+const GROWTH_FORM_LABELS = capitaliseAll(GROWTH_FORM_WORDS);
+const MONTH_VALUES = MONTH_NUMBERS.map(String);
+const MONTH_LABELS = Object.fromEntries(MONTH_NUMBERS.map((m) => [String(m), MONTH_WORDS[m].long]));
 
 /** Every catalogue field the API filters on, each written to the URL as it changes. */
 export function FilterPanel({ state, onChange, onClear }: {

@@ -42,7 +42,7 @@ describe('species browser', () => {
     expect(within(row).getByText('1–2.5 ft')).toBeInTheDocument();
     expect(within(row).getByText('30–75 cm')).toBeInTheDocument();
     expect(within(row).getByRole('img', { name: 'Blooms Jun–Aug; orange flowers' })).toBeInTheDocument();
-    expect(within(row).getByText('Irritating sap, Toxic if eaten, Has look-alikes, Harmful to livestock')).toBeInTheDocument();
+    expect(within(row).getByText('Irritating sap, Toxic if eaten, Has a look-alike, Harmful to livestock')).toBeInTheDocument();
     expect(within(row).getByText('12')).toBeInTheDocument();
   });
 

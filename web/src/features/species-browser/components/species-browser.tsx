@@ -5,7 +5,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useId, useMemo, useRef, useState } from 'react';
 import { speciesListQueryOptions } from '../../../api/species/species.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
-import { EmptyState, ErrorState } from '../../../components/states/index.js';
+import { EmptyState, ErrorState, QueryState } from '../../../components/states/index.js';
 import { useBrowserState } from '../hooks/use-browser-state.js';
 import { useColumnChoice } from '../hooks/use-column-choice.js';
 import { useNameHighlights } from '../hooks/use-name-highlights.js';
@@ -58,48 +58,50 @@ export function SpeciesBrowser() {
   const first = data && data.items.length > 0 ? (data.page - 1) * data.pageSize + 1 : 0;
   const last = data ? first + data.items.length - 1 : 0;
 
-  let body;
-  if (list.isPending) {
-    body = (
-      <ContentCard>
-        <Skeleton aria-label="Loading the species">
-          {Array.from({ length: 6 }, (_, i) => (
-            <SkeletonItem key={i} size={24} className={styles.skeletonRow} />
-          ))}
-        </Skeleton>
-      </ContentCard>
-    );
-  } else if (list.isError && !data) {
-    body = <ErrorState title="The species list did not load." message={list.error.message} onRetry={() => void list.refetch()} />;
-  } else if (data && data.items.length === 0 && data.total > 0) {
-    body = (
-      <EmptyState title={`There is no page ${state.page} for this search.`}>
-        <Button className={styles.emptyAction} onClick={() => goToPage(pageCount)}>
-          Go to the last page ({pageCount})
-        </Button>
-      </EmptyState>
-    );
-  } else if (data && data.total === 0) {
-    body = (
-      <EmptyState title="No species match: try fewer filters">
-        {activeFilters > 0 ? 'Each filter narrows the list; clearing one or two usually brings species back.' : 'Check the spelling, or search by a shorter part of the name.'}
-        {activeFilters > 0 ? (
-          <>
-            <br />
-            <Button className={styles.emptyAction} onClick={() => update(CLEARED)}>
-              Clear filters
+  const body = (
+    <QueryState
+      query={list}
+      keepDataOnError
+      loading={
+        <ContentCard>
+          <Skeleton aria-label="Loading the species">
+            {Array.from({ length: 6 }, (_, i) => (
+              <SkeletonItem key={i} size={24} className={styles.skeletonRow} />
+            ))}
+          </Skeleton>
+        </ContentCard>
+      }
+      error="The species list did not load."
+      isEmpty={(d) => d.items.length === 0}
+      empty={(d) =>
+        d.total > 0 ? (
+          <EmptyState title={`There is no page ${state.page} for this search.`}>
+            <Button className={styles.emptyAction} onClick={() => goToPage(pageCount)}>
+              Go to the last page ({pageCount})
             </Button>
-          </>
-        ) : null}
-      </EmptyState>
-    );
-  } else {
-    body = (
-      <div className={mergeClasses(list.isPlaceholderData && styles.stale)}>
-        <SpeciesTable items={items} columns={columns.shown} highlights={highlights} sort={sort} order={state.order} onSort={onSort} captionId={headingId} />
-      </div>
-    );
-  }
+          </EmptyState>
+        ) : (
+          <EmptyState title="No species match: try fewer filters">
+            {activeFilters > 0 ? 'Each filter narrows the list; clearing one or two usually brings species back.' : 'Check the spelling, or search by a shorter part of the name.'}
+            {activeFilters > 0 ? (
+              <>
+                <br />
+                <Button className={styles.emptyAction} onClick={() => update(CLEARED)}>
+                  Clear filters
+                </Button>
+              </>
+            ) : null}
+          </EmptyState>
+        )
+      }
+    >
+      {() => (
+        <div className={mergeClasses(list.isPlaceholderData && styles.stale)}>
+          <SpeciesTable items={items} columns={columns.shown} highlights={highlights} sort={sort} order={state.order} onSort={onSort} captionId={headingId} />
+        </div>
+      )}
+    </QueryState>
+  );
 
   return (
     <>

@@ -1,22 +1,17 @@
-import type { SpeciesSummary } from '@homeground/shared';
+import {
+  capitalise, CAUTION_WORDS, formatMonths, MOISTURE_WORDS, type SpeciesSummary, SUN_LEVELS, SUN_WORDS,
+} from '@homeground/shared';
 import { Checkmark16Filled, Warning16Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
 import { RouterLink } from '../../../components/links/router-link.js';
 import type { NameHighlights } from '../hooks/use-name-highlights.js';
 import type { OptionalColumn } from '../hooks/use-column-choice.js';
-import { bloomRange } from '../utils/bloom-label.js';
 import { heightRangeParts } from '../utils/height-words.js';
-import { CAUTION_SHORT_LABELS, listWords, MOISTURE_LABELS } from '../utils/option-labels.js';
 import { BloomStrip } from './bloom-strip.js';
 import { HighlightedText } from './highlighted-text.js';
 import { useTableStyles } from './species-table.styles.js';
 
-const SUN_SHORT = { full: 'Full', part: 'Part', shade: 'Shade' } as const;
 const count = new Intl.NumberFormat('en-US');
-
-function capitalise(word: string): string {
-  return word.charAt(0).toUpperCase() + word.slice(1);
-}
 
 /** A dash for an empty cell, with words for a screen reader instead of "dash". */
 function Nothing({ spoken }: { spoken: string }) {
@@ -66,14 +61,14 @@ export function OptionalCell({ column, species, highlights }: { column: Optional
         <span className={styles.bloomCell}>
           <BloomStrip bloomMonths={species.bloomMonths} flowerColours={species.flowerColours} />
           <span className={styles.small} aria-hidden>
-            {bloomRange(species.bloomMonths) || 'not recorded'}
+            {formatMonths(species.bloomMonths) || 'not recorded'}
           </span>
         </span>
       );
     case 'sun':
-      return species.sun.map((s) => SUN_SHORT[s]).join(', ');
+      return SUN_LEVELS.filter((s) => species.sun.includes(s)).map((s) => capitalise(SUN_WORDS[s])).join(', ');
     case 'moisture':
-      return listWords(species.moisture, MOISTURE_LABELS);
+      return species.moisture.map((m) => capitalise(MOISTURE_WORDS[m])).join(', ');
     case 'hostValue':
       return species.lepidopteraGenusCount === null ? <Nothing spoken="Genus not in the host counts" /> : count.format(species.lepidopteraGenusCount);
     case 'monarchHost':
@@ -91,7 +86,7 @@ export function OptionalCell({ column, species, highlights }: { column: Optional
       ) : (
         <span className={styles.caution}>
           <Warning16Regular className={styles.cautionIcon} aria-label="Caution:" role="img" />
-          <span>{species.cautionKinds.map((k) => CAUTION_SHORT_LABELS[k]).join(', ')}</span>
+          <span>{species.cautionKinds.map((k) => CAUTION_WORDS[k].title).join(', ')}</span>
         </span>
       );
   }

@@ -1,3 +1,4 @@
+import { CAUTION_WORDS } from '@homeground/shared';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { Warning24Regular } from '@fluentui/react-icons';
 import { useId } from 'react';
@@ -5,7 +6,6 @@ import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { hgTokens } from '../../../theme/index.js';
-import { CAUTION_TITLES } from '../utils/detail-words.js';
 import { shortCitation } from '../utils/source-labels.js';
 
 const useStyles = makeStyles({
@@ -35,7 +35,7 @@ export function CautionPanel({ species }: { species: SpeciesDetail }) {
         <ul className={styles.list}>
           {cautions.map((c) => (
             <li key={`${c.kind}-${c.text}`}>
-              <strong>{CAUTION_TITLES[c.kind]}.</strong> {c.text}
+              <strong>{CAUTION_WORDS[c.kind].title}.</strong> {c.text}
               <span className={styles.source}>Source: {shortCitation(c.source)}</span>
             </li>
           ))}

@@ -1,10 +1,12 @@
-import { GRAMS_PER_POUND, SOWING_METHODS, type SowingMethod } from '@homeground/shared';
+import {
+  capitalise, GRAMS_PER_POUND, SOWING_METHOD_WORDS, SOWING_METHODS, type SowingMethod, sowingDepthSentence,
+} from '@homeground/shared';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { Beaker20Regular, Checkmark20Regular, Dismiss20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { hgTokens } from '../../../theme/index.js';
-import { METHOD_WORDS, sowingDepthWords, treatmentWords } from '../utils/germination-words.js';
+import { treatmentWords } from '../utils/germination-words.js';
 import { SECTION_FIELDS } from '../utils/source-labels.js';
 import { FactSection } from './fact-section.js';
 import { SourceNote } from './source-note.js';
@@ -37,8 +39,8 @@ function MethodList({ methods }: { methods: readonly SowingMethod[] }) {
           <li key={m} className={styles.method}>
             {suits ? <Checkmark20Regular className={styles.suits} aria-hidden /> : <Dismiss20Regular className={styles.notSuited} aria-hidden />}
             <span>
-              <strong>{METHOD_WORDS[m].name}</strong>: {suits ? 'suits it' : 'not the best way for this species'}
-              {suits ? <span className={styles.how}>{METHOD_WORDS[m].how}</span> : null}
+              <strong>{capitalise(SOWING_METHOD_WORDS[m].phrase)}</strong>: {suits ? 'suits it' : 'not the best way for this species'}
+              {suits ? <span className={styles.how}>{SOWING_METHOD_WORDS[m].how}</span> : null}
             </span>
           </li>
         );
@@ -63,7 +65,7 @@ export function GerminationGuide({ species }: { species: SpeciesDetail }) {
           </li>
         ))}
       </ol>
-      <p className={styles.para}>{sowingDepthWords(g)}</p>
+      <p className={styles.para}>{sowingDepthSentence(g)}</p>
       <p className={styles.para}>
         A good seed lot usually germinates about {g.germinationRatePct}% after treatment
         {g.seedsPerPound

@@ -1,17 +1,13 @@
-import { formatHeightRangeCm } from '@homeground/shared';
+import {
+  capitalise, DEER_RESISTANCE_WORDS, formatHeightRangeCm, GROWTH_FORM_WORDS, HABITAT_WORDS, habitLine, joinWords,
+  LIFESPAN_WORDS, moisturePhrase, soilPhrase, SPREAD_HABIT_WORDS, sunPhrase,
+} from '@homeground/shared';
 import { Drop20Regular, Ruler20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
-import {
-  DEER_WORDS, GROWTH_FORM_WORDS, HABITAT_WORDS, joinWords, LIFESPAN_WORDS, MOISTURE_WORDS, SOIL_WORDS, SPREAD_WORDS, SUN_WORDS,
-} from '../utils/detail-words.js';
 import { SECTION_FIELDS } from '../utils/source-labels.js';
 import { FactList } from './fact-list.js';
 import { FactSection } from './fact-section.js';
 import { SourceNote } from './source-note.js';
-
-function capitalise(text: string): string {
-  return text.charAt(0).toUpperCase() + text.slice(1);
-}
 
 /** Where it grows: light, moisture, soil and the plant communities it belongs to. */
 export function GrowingConditions({ species }: { species: SpeciesDetail }) {
@@ -19,9 +15,9 @@ export function GrowingConditions({ species }: { species: SpeciesDetail }) {
     <FactSection title="Where it grows" icon={<Drop20Regular />}>
       <FactList
         facts={[
-          ['Sun', capitalise(joinWords(species.sun.map((s) => SUN_WORDS[s])))],
-          ['Moisture', capitalise(`${joinWords(species.moisture.map((m) => MOISTURE_WORDS[m]))} soil`)],
-          ['Soil', capitalise(joinWords(species.soilTextures.map((s) => SOIL_WORDS[s])))],
+          ['Sun', sunPhrase(species.sun)],
+          ['Moisture', moisturePhrase(species.moisture)],
+          ['Soil', soilPhrase(species.soilTextures)],
           ['Habitats', capitalise(joinWords(species.habitats.map((h) => HABITAT_WORDS[h])))],
         ]}
       />
@@ -40,8 +36,8 @@ export function SizeAndHabit({ species }: { species: SpeciesDetail }) {
           ['Spread', formatHeightRangeCm(species.spreadCm.min, species.spreadCm.max)],
           ['Growth form', capitalise(GROWTH_FORM_WORDS[species.growthForm])],
           ['Lifespan', capitalise(LIFESPAN_WORDS[species.lifespan])],
-          ['Spread habit', SPREAD_WORDS[species.spreadHabit]],
-          ['Deer resistance', DEER_WORDS[species.deerResistance]],
+          ['Spread habit', habitLine(SPREAD_HABIT_WORDS[species.spreadHabit])],
+          ['Deer resistance', habitLine(DEER_RESISTANCE_WORDS[species.deerResistance])],
         ]}
       />
       <SourceNote sources={species.sources} fields={SECTION_FIELDS.size} />

@@ -1,4 +1,4 @@
-import { screen, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { apiError } from '../../../testing/fake-api.js';
 import { renderApp } from '../../../testing/render-app.js';
@@ -25,7 +25,8 @@ describe('species page', () => {
     expect(screen.getByRole('img', { name: 'Drawing of a flowering plant with orange flowers' })).toBeInTheDocument();
     expect(screen.getByRole('img', { name: 'Blooms Jun–Aug; orange flowers' })).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Make fact card' })).toHaveAttribute('href', '/cards-and-labels?species=asclepias-tuberosa');
-    expect(document.title).toBe('Butterfly milkweed · Homeground');
+    // The title is set in an effect after the heading paints; on a busy machine that is a tick later.
+    await waitFor(() => expect(document.title).toBe('Butterfly milkweed · Homeground'));
   });
 
   it('puts the cautions up front with their sources and the noxious-weed reminder', async () => {
@@ -47,7 +48,7 @@ describe('species page', () => {
     expect(within(seed).getByText(/Chill damp, never dry/)).toBeInTheDocument();
     expect(within(seed).getByText('Sow 6 mm (¼ in) deep.')).toBeInTheDocument();
     expect(within(seed).getByText(/about 60% after treatment; there are about 70,000 seeds in a pound \(154 per gram\)/)).toBeInTheDocument();
-    expect(within(seed).getByText('Covered-container winter sowing').parentElement).toHaveTextContent('suits it');
+    expect(within(seed).getByText('Winter sowing in covered containers').parentElement).toHaveTextContent('suits it');
     expect(within(seed).getByText('Soil blocks').parentElement).toHaveTextContent('not the best way');
     expect(within(seed).getByText(/Borders & Lee-Mäder 2014 \(Xerces Society\) \(seed treatment\)/)).toBeInTheDocument();
   });

@@ -5,7 +5,7 @@ import type { ReactNode } from 'react';
 import type { SpeciesDetail as SpeciesRecord } from '../../../api/species/species.api.js';
 import { speciesDetailQueryOptions } from '../../../api/species/species.queries.js';
 import { RouterLink } from '../../../components/links/router-link.js';
-import { ErrorState, LoadingState } from '../../../components/states/index.js';
+import { ErrorState, QueryState } from '../../../components/states/index.js';
 import { paths } from '../../../config/paths.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
 import { useDocumentTitle } from '../../../lib/use-document-title.js';
@@ -50,36 +50,38 @@ export function SpeciesDetail({ slug, renderBloomStrip, describeBloom }: Species
     </RouterLink>
   );
 
-  if (detail.isPending) return <LoadingState label="Loading the species" />;
-  if (detail.isError) {
-    if (isApiRequestError(detail.error) && detail.error.statusCode === 404) return <SpeciesNotFound slug={slug} />;
-    return (
+  const failed = (error: Error, retry: () => void) =>
+    isApiRequestError(error) && error.statusCode === 404 ? (
+      <SpeciesNotFound slug={slug} />
+    ) : (
       <>
         {back}
-        <ErrorState title="This species did not load." message={detail.error.message} onRetry={() => void detail.refetch()} />
+        <ErrorState title="This species did not load." message={error.message} onRetry={retry} />
       </>
     );
-  }
 
-  const species = detail.data;
   return (
-    <>
-      {back}
-      <div className={styles.stack}>
-        <SpeciesHeader species={species} bloomStrip={renderBloomStrip(species)} bloomWords={describeBloom(species.bloomMonths)} />
-        <CautionPanel species={species} />
-        <div className={styles.columns}>
+    <QueryState query={detail} loading="Loading the species" error={failed}>
+      {(species) => (
+        <>
+          {back}
           <div className={styles.stack}>
-            <GerminationGuide species={species} />
-            <WildlifeValue species={species} />
+            <SpeciesHeader species={species} bloomStrip={renderBloomStrip(species)} bloomWords={describeBloom(species.bloomMonths)} />
+            <CautionPanel species={species} />
+            <div className={styles.columns}>
+              <div className={styles.stack}>
+                <GerminationGuide species={species} />
+                <WildlifeValue species={species} />
+              </div>
+              <div className={styles.stack}>
+                <GrowingConditions species={species} />
+                <SizeAndHabit species={species} />
+                <NativeRange species={species} />
+              </div>
+            </div>
           </div>
-          <div className={styles.stack}>
-            <GrowingConditions species={species} />
-            <SizeAndHabit species={species} />
-            <NativeRange species={species} />
-          </div>
-        </div>
-      </div>
-    </>
+        </>
+      )}
+    </QueryState>
   );
 }

@@ -1,3 +1,4 @@
+import { capitalise, SPECIES_TAG_WORDS } from '@homeground/shared';
 import { Badge, makeStyles, tokens } from '@fluentui/react-components';
 import { DocumentText20Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
@@ -28,19 +29,6 @@ const useStyles = makeStyles({
   action: { marginTop: tokens.spacingVerticalL },
 });
 
-const TAG_WORDS: Record<SpeciesDetail['tags'][number], string> = {
-  'spring-ephemeral': 'Spring ephemeral',
-  evergreen: 'Evergreen',
-  'nitrogen-fixer': 'Nitrogen fixer',
-  keystone: 'Keystone genus',
-  'rain-garden': 'Rain garden',
-  groundcover: 'Groundcover',
-};
-
-function capitalise(text: string): string {
-  return text.charAt(0).toUpperCase() + text.slice(1);
-}
-
 /** Photo, names, bloom strip and the page's one primary action: making its fact card. */
 export function SpeciesHeader({ species, bloomStrip, bloomWords }: { species: SpeciesDetail; bloomStrip: ReactNode; bloomWords: string }) {
   const styles = useStyles();
@@ -67,7 +55,7 @@ export function SpeciesHeader({ species, bloomStrip, bloomWords }: { species: Sp
           <div className={styles.tags}>
             {species.tags.map((t) => (
               <Badge key={t} appearance="tint" color="brand" shape="rounded">
-                {TAG_WORDS[t]}
+                {SPECIES_TAG_WORDS[t]}
               </Badge>
             ))}
           </div>
@@ -83,7 +71,7 @@ export function SpeciesHeader({ species, bloomStrip, bloomWords }: { species: Sp
           <SourceNote sources={species.sources} fields={SECTION_FIELDS.bloom} />
         </div>
         <RouterButton
-          to={`${paths.cardsLabels.build()}?species=${encodeURIComponent(species.slug)}`}
+          to={paths.cardsLabels.build({ species: [species.slug] })}
           appearance="primary"
           icon={<DocumentText20Regular />}
           className={styles.action}

@@ -1,4 +1,4 @@
-import type { Species } from '@homeground/shared';
+import { SOURCED_FIELD_WORDS, type Species } from '@homeground/shared';
 
 /**
  * Short citations for the catalogue's source keys; the full references are in
@@ -43,35 +43,6 @@ export function shortCitation(key: string): string {
 
 type SourcedField = keyof Species['sources'];
 
-/** Words for each sourced field, as a source line lists them ("height, deer resistance"). */
-const FIELD_WORDS: Record<SourcedField, string> = {
-  usdaSymbol: 'USDA symbol',
-  family: 'family',
-  nativeStates: 'native states',
-  growthForm: 'growth form',
-  lifespan: 'lifespan',
-  heightCm: 'height',
-  bloomMonths: 'bloom months',
-  flowerColours: 'flower colour',
-  sun: 'sun',
-  moisture: 'moisture',
-  soilTextures: 'soil',
-  habitats: 'habitats',
-  'wildlife.lepidopteraGenusCount': 'caterpillar hosts',
-  'wildlife.monarchHost': 'monarch host',
-  spreadHabit: 'spread habit',
-  deerResistance: 'deer resistance',
-  'germination.treatments': 'seed treatment',
-  'germination.seedsPerPound': 'seeds per pound',
-  'germination.germinationRatePct': 'germination rate',
-  ecoregions: 'ecoregions',
-  sunOptimum: 'best light',
-  moistureOptimum: 'best moisture',
-  wetlandIndicator: 'wetland indicator',
-  commercialAvailability: 'seed or plants for sale',
-  protectedIn: 'protected in',
-};
-
 /** The facts each section of the species page shows, so its source line names exactly those. */
 export const SECTION_FIELDS = {
   names: ['usdaSymbol', 'family'],
@@ -96,7 +67,7 @@ export function sectionSources(sources: Species['sources'], fields: readonly Sou
   for (const field of fields) {
     const key = sources[field] ?? 'unrecorded';
     const line = byKey.get(key) ?? { key, citation: key === 'unrecorded' ? 'no source recorded' : shortCitation(key), fields: [] };
-    line.fields.push(FIELD_WORDS[field]);
+    line.fields.push(SOURCED_FIELD_WORDS[field]);
     byKey.set(key, line);
   }
   return [...byKey.values()];

@@ -4,7 +4,7 @@ import { STATE_NAMES } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { ecoregionListQueryOptions } from '../../../api/ecoregions/ecoregions.queries.js';
-import { ErrorState, LoadingState } from '../../../components/states/index.js';
+import { QueryState } from '../../../components/states/index.js';
 import { EcoregionChoice, type EcoregionOption } from './ecoregion-choice.js';
 
 const useStyles = makeStyles({
@@ -77,19 +77,17 @@ export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }
       ) : null}
 
       {showAll ? (
-        list.isPending ? (
-          <LoadingState label={`Loading the ecoregions of ${stateName}`} />
-        ) : list.isError ? (
-          <ErrorState title={`Homeground could not load the ecoregions of ${stateName}`} message={list.error.message} onRetry={() => void list.refetch()} />
-        ) : (
-          <EcoregionChoice
-            question={`Which ecoregion of ${stateName} is your ground in?`}
-            options={stateOptions}
-            value={ecoregionCode}
-            onChange={onEcoregionChange}
-            stateName={stateName}
-          />
-        )
+        <QueryState query={list} loading={`Loading the ecoregions of ${stateName}`} error={`Homeground could not load the ecoregions of ${stateName}`}>
+          {() => (
+            <EcoregionChoice
+              question={`Which ecoregion of ${stateName} is your ground in?`}
+              options={stateOptions}
+              value={ecoregionCode}
+              onChange={onEcoregionChange}
+              stateName={stateName}
+            />
+          )}
+        </QueryState>
       ) : (
         <div>
           <Button appearance="subtle" onClick={() => setShowAll(true)}>

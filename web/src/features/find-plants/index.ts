@@ -1,0 +1,1 @@
+export { useFindPlantsSteps } from './hooks/use-find-plants-steps.js';
