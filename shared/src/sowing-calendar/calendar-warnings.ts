@@ -1,11 +1,12 @@
+import type { SowingMethod } from '../types/species.js';
+import { SOWING_METHOD_WORDS } from '../vocabulary/seed-words.js';
 import { daysBetween, type IsoDate } from './calendar-date.js';
 import type { CalendarWarning, SowingPlan, SpeciesSchedule } from './calendar-types.js';
 import { nameOf } from './event-text.js';
 
-const METHOD_WORDS = {
-  'outdoor-pot-winter': 'outdoor pots over winter', 'winter-sowing': 'winter sowing', 'indoor-lights': 'sowing under lights',
-  'soil-blocks': 'soil blocks', 'direct-seed': 'direct seeding',
-} as const;
+const METHOD_WORDS = Object.fromEntries(
+  Object.entries(SOWING_METHOD_WORDS).map(([m, w]) => [m, w.phrase]),
+) as Record<SowingMethod, string>;
 
 /** Warnings that compare a schedule with the target date, today and the species record. */
 export function scheduleWarnings(plan: SowingPlan, schedule: SpeciesSchedule, today: IsoDate, target?: IsoDate): CalendarWarning[] {

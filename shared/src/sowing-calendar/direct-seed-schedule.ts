@@ -1,7 +1,6 @@
 import { addDays, isoDate, yearOf, type IsoDate } from './calendar-date.js';
-import type { CalendarWarning } from './calendar-types.js';
+import { type CalendarWarning, type CalendarEvent, type SowingPlan } from './calendar-types.js';
 import type { ScheduleOutcome, Season } from './season.js';
-import type { CalendarEvent, SowingPlan } from './calendar-types.js';
 import { DURATIONS, WINDOWS } from './durations.js';
 import { cmsDetail, nameOf, sowingDepthWords } from './event-text.js';
 import { stratificationOf } from './treatments.js';

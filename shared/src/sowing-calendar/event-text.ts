@@ -1,3 +1,4 @@
+import { sowingDepthSentence } from '../vocabulary/sowing-depth.js';
 import type { Species } from '../types/species.js';
 import { cmToInches, roundTo } from '../units/conversions.js';
 import { DURATIONS } from './durations.js';
@@ -32,11 +33,9 @@ export function checkSproutsDetail(): string {
   return 'Look every few days from now on, and sow at once any seed that has sprouted.';
 }
 
+/** Where the seed goes, in the vocabulary's one wording (also on fact cards and species pages). */
 export function sowingDepthWords(species: Species): string {
-  const g = species.germination;
-  if (g.needsLight || g.sowingDepthMm === 0) return 'Press the seed onto the surface and do not cover it: it needs light to germinate.';
-  const inches = roundTo(cmToInches(g.sowingDepthMm / 10), 2);
-  return `Cover it ${g.sowingDepthMm} mm (${inches} in) deep.`;
+  return sowingDepthSentence(species.germination);
 }
 
 /** UF-HO (R): begin 1–2 h a day in shade, add about 1 h a day, then full sun; 7–14 days in all (M). */

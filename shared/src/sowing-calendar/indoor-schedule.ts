@@ -3,8 +3,7 @@ import type { CalendarEvent, CalendarWarning, SowingPlan } from './calendar-type
 import { DURATIONS } from './durations.js';
 import { checkSproutsDetail, cmsDetail, hardenOffDetail, nameOf, readyDetail, secondSeasonDetail, sowingDepthWords } from './event-text.js';
 import { readinessOf } from './readiness.js';
-import type { ScheduleOutcome, Season } from './season.js';
-import { sameDayNextYear } from './season.js';
+import { type ScheduleOutcome, type Season, sameDayNextYear } from './season.js';
 import { stratificationOf } from './treatments.js';
 
 /** Days from sowing indoors to a plant fit to give: sprouting, then the species' weeks (soil blocks save one). */

@@ -75,7 +75,9 @@ describe("the species' own stratification length", () => {
   it('no CMS step (wild bergamot): no stratification events', () => {
     const c = cal(F.wildBergamot, 'indoor-lights');
     expect(on(c, 'cms-start')).toBeUndefined();
-    expect(c.events.find((e) => e.kind === 'sow')!.detail).toContain('do not cover it: it needs light');
+    const sow = c.events.find((e) => e.kind === 'sow')!.detail;
+    expect(sow).toContain('Needs light to germinate');
+    expect(sow).toContain('do not cover it');
   });
 
   it('scarify first, inoculate at sowing (wild lupine, JEH96)', () => {
