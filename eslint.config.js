@@ -76,7 +76,9 @@ export default tseslint.config(
     languageOptions: { globals: { ...globals.browser } },
     plugins: { 'react-hooks': reactHooks },
     rules: {
-      ...reactHooks.configs.recommended.rules,
+      // The two classic hook rules; the React Compiler's rules (refs, set-state-in-effect…) assume a compiler we do not use.
+      'react-hooks/rules-of-hooks': 'error',
+      'react-hooks/exhaustive-deps': 'error',
       'import-x/no-restricted-paths': [
         'error',
         {

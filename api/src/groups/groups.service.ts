@@ -1,19 +1,14 @@
 import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import type { Group as GroupDto, GroupRole } from '@homeground/shared';
+import type { Group as GroupDto, GroupMember, GroupRole } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { User } from '../users/user.entity.js';
 import { GroupMembership } from './group-membership.entity.js';
 import { Group } from './group.entity.js';
 
-export interface GroupMemberDto {
-  userId: string;
-  displayName: string;
-  /** Only organisers (and admins) see the addresses; everyone else gets null. */
-  email: string | null;
-  role: GroupRole;
-}
+/** The shared shape of a member-list row. */
+export type GroupMemberDto = GroupMember;
 
 @Injectable()
 export class GroupsService {

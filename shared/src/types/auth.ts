@@ -88,3 +88,12 @@ export interface Group {
   ecoregionCode: string | null;
   members: number;
 }
+
+/** One person in a group's member list. */
+export interface GroupMember {
+  userId: string;
+  displayName: string;
+  /** Only organisers (and admins) see the addresses; everyone else gets null. */
+  email: string | null;
+  role: GroupRole;
+}

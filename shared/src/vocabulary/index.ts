@@ -6,3 +6,4 @@ export * from './caution-words.js';
 export * from './seed-words.js';
 export * from './record-words.js';
 export * from './sowing-depth.js';
+export * from './people-words.js';

@@ -48,6 +48,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               return { Component: m.SpeciesDetailRoute, loader: m.speciesDetailLoader(queryClient) };
             }),
             page(paths.cardsLabels.path, async () => ({ Component: (await import('../routes/cards-and-labels.js')).CardsLabelsRoute })),
+            page(paths.group.path, async () => ({ Component: (await import('../routes/group.js')).GroupRoute })),
+            page(paths.invitation.path, async () => ({ Component: (await import('../routes/invitation.js')).InvitationRoute })),
             page(paths.season.path, async () => ({ Component: (await import('../routes/season.js')).SeasonRoute })),
             page(paths.myBatches.path, async () => ({ Component: (await import('../routes/my-batches.js')).MyBatchesRoute })),
             page(paths.plantShare.path, async () => ({ Component: (await import('../routes/plant-share.js')).PlantShareRoute })),

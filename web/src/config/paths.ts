@@ -45,6 +45,10 @@ export const paths = {
     parse: parseCardsSelection,
     search: cardsSelectionToSearchParams,
   },
+  /** A growing group: its place, frost date and people. */
+  group: { path: '/groups/:slug', build: (slug: string) => `/groups/${encodeURIComponent(slug)}` },
+  /** The link in an invitation e-mail. */
+  invitation: { path: '/invitations/:token', build: (token: string) => `/invitations/${encodeURIComponent(token)}` },
   season: { path: '/season', build: () => '/season' },
   myBatches: { path: '/my-batches', build: () => '/my-batches' },
   plantShare: { path: '/plant-share', build: () => '/plant-share' },

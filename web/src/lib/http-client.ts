@@ -71,6 +71,8 @@ export function createHttpClient(config: HttpClientConfig) {
     get: <T>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) => request<T>(path, { ...options, method: 'GET' }),
     post: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
       request<T>(path, { ...options, method: 'POST', body }),
+    delete: <T = void>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+      request<T>(path, { ...options, method: 'DELETE' }),
   };
 }
 

@@ -1,21 +1,12 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import type { GlobalRole, GroupRole, User } from '@homeground/shared';
+import { GLOBAL_ROLE_WORDS, GROUP_ROLE_WORDS, type User } from '@homeground/shared';
+import { RouterLink } from '../../../components/links/router-link.js';
+import { paths } from '../../../config/paths.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { EmptyState } from '../../../components/states/index.js';
 import { hgTokens } from '../../../theme/index.js';
 
-const ROLE_WORDS: Record<GlobalRole, string> = {
-  member: 'Member',
-  curator: 'Curator: looks after the species catalogue',
-  admin: 'Admin: looks after people and roles',
-};
-
-const GROUP_ROLE_WORDS: Record<GroupRole, string> = {
-  member: 'Member',
-  organiser: 'Organiser',
-  grower: 'Grower',
-};
 
 const useStyles = makeStyles({
   stack: { display: 'grid', gap: tokens.spacingVerticalXL, maxWidth: '720px' },
@@ -50,7 +41,9 @@ export function AccountDetails({ user }: { user: User }) {
           <dt className={styles.term}>E-mail</dt>
           <dd className={styles.value}>{user.email}</dd>
           <dt className={styles.term}>Role</dt>
-          <dd className={styles.value}>{ROLE_WORDS[user.role]}</dd>
+          <dd className={styles.value}>
+            {GLOBAL_ROLE_WORDS[user.role].title}: {GLOBAL_ROLE_WORDS[user.role].does.toLowerCase()}
+          </dd>
           <dt className={styles.term}>Joined</dt>
           <dd className={styles.value}>{joined.format(new Date(user.createdAt))}</dd>
         </dl>
@@ -61,13 +54,16 @@ export function AccountDetails({ user }: { user: User }) {
         </Heading>
         {user.groups.length === 0 ? (
           <EmptyState title="You are not in a growing group yet.">
-            An organiser adds you to their group; then the group's season shows up here.
+            An organiser invites you to their group by e-mail; then the group shows up here.
           </EmptyState>
         ) : (
           <ul className={styles.groups}>
             {user.groups.map((g) => (
               <li key={g.groupId}>
-                <span className={styles.groupName}>{g.groupName}</span> · {GROUP_ROLE_WORDS[g.role]}
+                <RouterLink className={styles.groupName} to={paths.group.build(g.groupSlug)}>
+                  {g.groupName}
+                </RouterLink>{' '}
+                · {GROUP_ROLE_WORDS[g.role].title}
               </li>
             ))}
           </ul>

@@ -1,0 +1,72 @@
+import {
+  Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, Table, TableBody,
+  TableCell, TableHeader, TableHeaderCell, TableRow, tokens,
+} from '@fluentui/react-components';
+import { GROUP_ROLE_WORDS, type GroupMember } from '@homeground/shared';
+import { useState } from 'react';
+import { useRemoveMemberMutation } from '../../../api/groups/groups.mutations.js';
+
+const useStyles = makeStyles({
+  scroll: { overflowX: 'auto' },
+  email: { overflowWrap: 'anywhere' },
+  failure: { color: tokens.colorPaletteRedForeground1 },
+});
+
+/** The group's people. Organisers see addresses and can take someone out of the group. */
+export function MemberList({ slug, members, canManage }: { slug: string; members: GroupMember[]; canManage: boolean }) {
+  const styles = useStyles();
+  const remove = useRemoveMemberMutation(slug);
+  const [leaving, setLeaving] = useState<GroupMember | null>(null);
+  const showEmail = members.some((m) => m.email !== null);
+
+  return (
+    <div className={styles.scroll}>
+      <Table aria-label="People in the group" size="small">
+        <TableHeader>
+          <TableRow>
+            <TableHeaderCell>Name</TableHeaderCell>
+            <TableHeaderCell>Role</TableHeaderCell>
+            {showEmail ? <TableHeaderCell>E-mail</TableHeaderCell> : null}
+            {canManage ? <TableHeaderCell>Take out</TableHeaderCell> : null}
+          </TableRow>
+        </TableHeader>
+        <TableBody>
+          {members.map((m) => (
+            <TableRow key={m.userId}>
+              <TableCell>{m.displayName}</TableCell>
+              <TableCell>{GROUP_ROLE_WORDS[m.role].title}</TableCell>
+              {showEmail ? <TableCell className={styles.email}>{m.email}</TableCell> : null}
+              {canManage ? (
+                <TableCell>
+                  <Button size="small" onClick={() => setLeaving(m)} aria-label={`Remove ${m.displayName} from the group`}>
+                    Remove
+                  </Button>
+                </TableCell>
+              ) : null}
+            </TableRow>
+          ))}
+        </TableBody>
+      </Table>
+      {remove.isError ? <p className={styles.failure} role="alert">{remove.error.message}</p> : null}
+      <Dialog open={leaving !== null} onOpenChange={(_, d) => !d.open && setLeaving(null)}>
+        <DialogSurface>
+          <DialogBody>
+            <DialogTitle>Remove {leaving?.displayName}?</DialogTitle>
+            <DialogContent>
+              They leave the group and its season; their account stays. You can invite them again later.
+            </DialogContent>
+            <DialogActions>
+              <Button onClick={() => setLeaving(null)}>Keep them</Button>
+              <Button
+                appearance="primary"
+                onClick={() => leaving && remove.mutate(leaving.userId, { onSettled: () => setLeaving(null) })}
+              >
+                Remove
+              </Button>
+            </DialogActions>
+          </DialogBody>
+        </DialogSurface>
+      </Dialog>
+    </div>
+  );
+}

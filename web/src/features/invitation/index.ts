@@ -1,0 +1,1 @@
+export { AcceptInvitation } from './components/accept-invitation.js';

@@ -1,0 +1,26 @@
+import { useNavigate, useParams } from 'react-router-dom';
+import { LoadingState } from '../components/states/index.js';
+import { paths } from '../config/paths.js';
+import { useSession } from '../features/auth/index.js';
+import { AcceptInvitation } from '../features/invitation/index.js';
+import { useDocumentTitle } from '../lib/use-document-title.js';
+
+/** The link in an invitation e-mail: accept, then land on the group's page signed in. */
+export function InvitationRoute() {
+  const { token = '' } = useParams();
+  const session = useSession();
+  const navigate = useNavigate();
+  useDocumentTitle('Your invitation');
+  if (session.status === 'loading') return <LoadingState label="Checking who is signed in" />;
+  return (
+    <AcceptInvitation
+      token={token}
+      user={session.user}
+      onJoined={(auth) => {
+        session.signIn(auth);
+        const joined = auth.user.groups.at(-1);
+        navigate(joined ? paths.group.build(joined.groupSlug) : paths.account.build());
+      }}
+    />
+  );
+}
