@@ -5,6 +5,7 @@ export * from './types/species-query.js';
 export * from './catalogue/region-match.js';
 export * from './catalogue/species-csv.js';
 export * from './types/place.js';
+export * from './types/request-params.js';
 export * from './types/site.js';
 export * from './types/recommendation.js';
 export * from './units/conversions.js';

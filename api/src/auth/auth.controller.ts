@@ -1,13 +1,12 @@
-import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
+import { Controller, Get, HttpCode, Post } from '@nestjs/common';
 import { ApiConflictResponse, ApiOkResponse, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
-import type { AuthResponse, User } from '@homeground/shared';
+import { type AuthResponse, type LoginRequest, loginRequestSchema, type RegisterRequest, registerRequestSchema, type User } from '@homeground/shared';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { ZodBody } from '../common/decorators/zod.decorators.js';
 import { UsersService } from '../users/users.service.js';
 import { AuthService } from './auth.service.js';
 import type { AuthenticatedUser } from './authenticated-user.js';
-import { LoginDto } from './dto/login.dto.js';
-import { RegisterDto } from './dto/register.dto.js';
 
 @ApiTags('auth')
 @Controller()
@@ -19,14 +18,14 @@ export class AuthController {
 
   @Post('auth/register')
   @ApiConflictResponse({ description: 'E-mail already registered' })
-  register(@Body() dto: RegisterDto): Promise<AuthResponse> {
+  register(@ZodBody(registerRequestSchema) dto: RegisterRequest): Promise<AuthResponse> {
     return this.auth.register(dto);
   }
 
   @Post('auth/login')
   @HttpCode(200)
   @ApiTooManyRequestsResponse({ description: 'Too many sign-in attempts from this address' })
-  login(@Body() dto: LoginDto): Promise<AuthResponse> {
+  login(@ZodBody(loginRequestSchema) dto: LoginRequest): Promise<AuthResponse> {
     return this.auth.login(dto);
   }
 

@@ -1,12 +1,10 @@
 import { Inject, Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import type { AuthResponse } from '@homeground/shared';
+import type { AuthResponse, LoginRequest, RegisterRequest } from '@homeground/shared';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { UsersService } from '../users/users.service.js';
 import type { User } from '../users/user.entity.js';
 import type { JwtPayload } from './authenticated-user.js';
-import type { LoginDto } from './dto/login.dto.js';
-import type { RegisterDto } from './dto/register.dto.js';
 import { DUMMY_HASH_PROMISE, hashPassword, verifyPassword } from './password.js';
 
 @Injectable()
@@ -17,7 +15,7 @@ export class AuthService {
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
-  async register(dto: RegisterDto): Promise<AuthResponse> {
+  async register(dto: RegisterRequest): Promise<AuthResponse> {
     const user = await this.users.create({
       email: dto.email,
       displayName: dto.displayName,
@@ -26,7 +24,7 @@ export class AuthService {
     return this.issueToken(user);
   }
 
-  async login(dto: LoginDto): Promise<AuthResponse> {
+  async login(dto: LoginRequest): Promise<AuthResponse> {
     const user = await this.users.findByEmail(dto.email);
     // Verify against a dummy hash for unknown e-mails so timing does not reveal who has an account.
     const ok = await verifyPassword(dto.password, user?.passwordHash ?? (await DUMMY_HASH_PROMISE));

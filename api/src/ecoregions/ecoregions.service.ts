@@ -2,8 +2,8 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { Ecoregion } from '@homeground/shared';
 import { DataSource } from 'typeorm';
-import { type AreaFeature, PolygonIndex } from '../places/polygon-index.js';
-import { parseBoundaryUpload } from './boundary-upload.js';
+import { parseBoundaryUpload } from '../geometry/boundary-upload.js';
+import { type AreaFeature, PolygonIndex } from '../geometry/polygon-index.js';
 
 export interface CountyRegions {
   fips: string;

@@ -1,10 +1,10 @@
-import { Body, Controller, Get, Param, Put } from '@nestjs/common';
+import { Controller, Get, Put } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import type { Group } from '@homeground/shared';
+import { type Group, type SetMemberRequest, setMemberRequestSchema, slugParamSchema } from '@homeground/shared';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { SetMemberDto } from './dto/set-member.dto.js';
+import { ZodBody, ZodParam } from '../common/decorators/zod.decorators.js';
 import { GroupsService, type GroupMemberDto } from './groups.service.js';
 
 @ApiTags('groups')
@@ -18,19 +18,23 @@ export class GroupsController {
   }
 
   @Get(':slug')
-  get(@Param('slug') slug: string): Promise<Group> {
+  get(@ZodParam('slug', slugParamSchema) slug: string): Promise<Group> {
     return this.groups.getDto(slug);
   }
 
   @Get(':slug/members')
   @Auth()
-  members(@Param('slug') slug: string, @CurrentUser() user: AuthenticatedUser): Promise<GroupMemberDto[]> {
+  members(@ZodParam('slug', slugParamSchema) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<GroupMemberDto[]> {
     return this.groups.members(slug, user);
   }
 
   @Put(':slug/members')
   @Auth()
-  setMember(@Param('slug') slug: string, @CurrentUser() user: AuthenticatedUser, @Body() dto: SetMemberDto): Promise<GroupMemberDto> {
+  setMember(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @CurrentUser() user: AuthenticatedUser,
+    @ZodBody(setMemberRequestSchema) dto: SetMemberRequest,
+  ): Promise<GroupMemberDto> {
     return this.groups.setMember(slug, user, dto.email, dto.role);
   }
 }

@@ -1,11 +1,11 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { Controller, Delete, Get, HttpCode, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { type SavedMix, saveMixRequestSchema } from '@homeground/shared';
+import { type SavedMix, saveMixRequestSchema, uuidParamSchema } from '@homeground/shared';
 import type { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
+import { ZodBody, ZodParam } from '../common/decorators/zod.decorators.js';
 import { SavedMixesService } from './saved-mixes.service.js';
 
 type Parsed<S extends z.ZodType> = z.infer<S>;
@@ -17,7 +17,7 @@ export class SavedMixesController {
 
   @Post('mixes')
   @Auth()
-  save(@Body(new ZodValidationPipe(saveMixRequestSchema)) body: Parsed<typeof saveMixRequestSchema>, @CurrentUser() user: AuthenticatedUser): Promise<SavedMix> {
+  save(@ZodBody(saveMixRequestSchema) body: Parsed<typeof saveMixRequestSchema>, @CurrentUser() user: AuthenticatedUser): Promise<SavedMix> {
     return this.saved.save(user, { ...body, request: body.request as unknown as SavedMix['request'] });
   }
 
@@ -29,14 +29,14 @@ export class SavedMixesController {
 
   /** A saved mix, for anyone who has its link. */
   @Get('mixes/:id')
-  get(@Param('id', new ParseUUIDPipe({ version: '4' })) id: string): Promise<SavedMix> {
+  get(@ZodParam('id', uuidParamSchema) id: string): Promise<SavedMix> {
     return this.saved.get(id);
   }
 
   @Delete('mixes/:id')
   @HttpCode(204)
   @Auth()
-  remove(@Param('id', new ParseUUIDPipe({ version: '4' })) id: string, @CurrentUser() user: AuthenticatedUser): Promise<void> {
+  remove(@ZodParam('id', uuidParamSchema) id: string, @CurrentUser() user: AuthenticatedUser): Promise<void> {
     return this.saved.remove(user, id);
   }
 }

@@ -1,8 +1,8 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Patch } from '@nestjs/common';
+import { Controller, Get, Patch } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import type { User } from '@homeground/shared';
+import { type SetRoleRequest, setRoleRequestSchema, type User, uuidParamSchema } from '@homeground/shared';
 import { Auth } from '../common/decorators/auth.decorator.js';
-import { SetRoleDto } from './dto/set-role.dto.js';
+import { ZodBody, ZodParam } from '../common/decorators/zod.decorators.js';
 import { UsersService } from './users.service.js';
 
 /** Admins manage people and their global roles. */
@@ -18,7 +18,7 @@ export class UsersController {
   }
 
   @Patch(':id/role')
-  setRole(@Param('id', new ParseUUIDPipe({ version: '4' })) id: string, @Body() dto: SetRoleDto): Promise<User> {
+  setRole(@ZodParam('id', uuidParamSchema) id: string, @ZodBody(setRoleRequestSchema) dto: SetRoleRequest): Promise<User> {
     return this.users.setRole(id, dto.role);
   }
 }

@@ -2,7 +2,18 @@ import { z } from 'zod';
 import { slugSchema, sowingMethodSchema, type SowingMethod, type Species } from '../types/species.js';
 import { isIsoDate, type IsoDate } from './calendar-date.js';
 
-export const isoDateSchema = z.string().refine(isIsoDate, { message: 'a calendar date, YYYY-MM-DD' });
+/** Years a calendar may use: wider than any planting plan, narrow enough for every calendar format. */
+export const MIN_CALENDAR_YEAR = 1900;
+export const MAX_CALENDAR_YEAR = 2200;
+
+export const isoDateSchema = z
+  .string()
+  .max(10, 'a calendar date, YYYY-MM-DD')
+  .refine(isIsoDate, { message: 'a calendar date, YYYY-MM-DD', abort: true })
+  .refine((d) => {
+    const year = Number(d.slice(0, 4));
+    return year >= MIN_CALENDAR_YEAR && year <= MAX_CALENDAR_YEAR;
+  }, { message: `a year from ${MIN_CALENDAR_YEAR} to ${MAX_CALENDAR_YEAR}` });
 
 /** A calendar request as the API receives it; it resolves the slugs to catalogue records. */
 export const sowingCalendarRequestSchema = z.object({
@@ -12,8 +23,8 @@ export const sowingCalendarRequestSchema = z.object({
   targetDate: isoDateSchema.optional(),
   /** Today, so past start dates can be flagged (the caller reads the clock, not us). */
   today: isoDateSchema,
-  plans: z.array(z.object({ slug: slugSchema, method: sowingMethodSchema, sowDate: isoDateSchema.optional() })).min(1).max(200),
-});
+  plans: z.array(z.object({ slug: slugSchema, method: sowingMethodSchema, sowDate: isoDateSchema.optional() }).strict()).min(1).max(200),
+}).strict();
 export type SowingCalendarRequest = z.infer<typeof sowingCalendarRequestSchema>;
 
 export interface SowingPlan {
