@@ -22,10 +22,16 @@ export class ApiExceptionFilter implements ExceptionFilter {
     const body = this.toApiError(exception);
     if (body.statusCode >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
     if (res.headersSent) return;
-    res.status(body.statusCode).json(body);
+    // A route may have set a file's headers (CSV, iCalendar) before it failed: the error is JSON, not a download.
+    res.removeHeader('Content-Disposition');
+    res.status(body.statusCode).type('application/json').send(JSON.stringify(body));
   }
 
   private toApiError(exception: unknown): ApiError {
+    // Raised by the depth check on an uploaded file, outside body-parser.
+    if (exception instanceof JsonTooDeepError) {
+      return { statusCode: 400, error: REASON[400], message: exception.message, fields: exception.fields };
+    }
     if (exception instanceof HttpException) {
       const statusCode = exception.getStatus();
       const response = exception.getResponse();
