@@ -3,7 +3,6 @@ import { JwtService } from '@nestjs/jwt';
 import type { AuthResponse, LoginRequest, RegisterRequest } from '@homeground/shared';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { UsersService } from '../users/users.service.js';
-import type { User } from '../users/user.entity.js';
 import type { JwtPayload } from './authenticated-user.js';
 import { DUMMY_HASH_PROMISE, hashPassword, verifyPassword } from './password.js';
 
@@ -21,7 +20,7 @@ export class AuthService {
       displayName: dto.displayName,
       passwordHash: await hashPassword(dto.password),
     });
-    return this.issueToken(user);
+    return this.issueToken(user.id);
   }
 
   async login(dto: LoginRequest): Promise<AuthResponse> {
@@ -30,12 +29,12 @@ export class AuthService {
     const ok = await verifyPassword(dto.password, user?.passwordHash ?? (await DUMMY_HASH_PROMISE));
     const demoBlocked = user?.isDemo && this.config.isProduction;
     if (!user || !ok || demoBlocked) throw new UnauthorizedException('E-mail or password is wrong.');
-    return this.issueToken(user);
+    return this.issueToken(user.id);
   }
 
-  private async issueToken(user: User): Promise<AuthResponse> {
-    const payload: JwtPayload = { sub: user.id };
+  private async issueToken(userId: string): Promise<AuthResponse> {
+    const payload: JwtPayload = { sub: userId };
     const accessToken = await this.jwt.signAsync(payload);
-    return { accessToken, expiresIn: this.config.jwtExpiresInSeconds, user: await this.users.getDto(user.id) };
+    return { accessToken, expiresIn: this.config.jwtExpiresInSeconds, user: await this.users.getDto(userId) };
   }
 }

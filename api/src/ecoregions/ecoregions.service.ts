@@ -18,7 +18,10 @@ export interface BoundaryImportResult {
   vertices: number;
 }
 
-/** Ecoregions, the county crosswalk and any imported boundary polygons, held in memory for lookups. */
+/**
+ * The one in-memory read model of ecoregions, the county crosswalk and any imported boundary
+ * polygons; the catalogue, places and the engine all read regions from here.
+ */
 @Injectable()
 export class EcoregionsService {
   private regions = new Map<string, Ecoregion>();
@@ -50,6 +53,11 @@ export class EcoregionsService {
   list(state?: string): Ecoregion[] {
     const all = [...this.regions.values()];
     return state ? all.filter((e) => (e.states as string[]).includes(state)) : all;
+  }
+
+  /** The region with this code, or undefined (for callers that answer a missing region their own way). */
+  find(code: string): Ecoregion | undefined {
+    return this.regions.get(code);
   }
 
   get(code: string): Ecoregion {

@@ -1,5 +1,6 @@
 import { Inject, type MiddlewareConsumer, Module, type NestModule, type OnModuleInit, RequestMethod } from '@nestjs/common';
 import { CATALOGUE_LOADED, CatalogueModule } from '../catalogue/catalogue.module.js';
+import { EcoregionsModule } from '../ecoregions/ecoregions.module.js';
 import { SpeciesListCacheMiddleware } from './species-list-cache.middleware.js';
 import { SpeciesPhotosService } from './species-photos.service.js';
 import { SpeciesStore } from './species-store.service.js';
@@ -7,7 +8,7 @@ import { SpeciesController } from './species.controller.js';
 import { SpeciesService } from './species.service.js';
 
 @Module({
-  imports: [CatalogueModule],
+  imports: [CatalogueModule, EcoregionsModule],
   controllers: [SpeciesController],
   providers: [SpeciesService, SpeciesStore, SpeciesPhotosService, SpeciesListCacheMiddleware],
   exports: [SpeciesStore],
