@@ -35,3 +35,4 @@ export * from './sowing-calendar/calendar-types.js';
 export * from './sowing-calendar/durations.js';
 export * from './sowing-calendar/sowing-calendar.js';
 export * from './types/mix-api.js';
+export * from './types/response-schemas.js';

@@ -1,10 +1,13 @@
 import { Controller, Delete, Get, HttpCode, Post } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
-import { type Ecoregion, ecoregionCodeParamSchema, type EcoregionListQuery, ecoregionListQuerySchema } from '@homeground/shared';
+import { ApiNoContentResponse, ApiTags } from '@nestjs/swagger';
+import {
+  boundaryImportResultSchema, type Ecoregion, ecoregionCodeParamSchema, type EcoregionListQuery,
+  ecoregionListQuerySchema, ecoregionListSchema, ecoregionSchema,
+} from '@homeground/shared';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { type UploadedBlob, ZodFile, ZodParam, ZodQuery } from '../common/decorators/zod.decorators.js';
+import { type UploadedBlob, ZodFile, ZodParam, ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { EcoregionsService, type BoundaryImportResult } from './ecoregions.service.js';
 
 /** The EPA's own file is about 4.5 MB simplified and 25 MB at full resolution. */
@@ -16,17 +19,22 @@ export class EcoregionsController {
   constructor(private readonly ecoregions: EcoregionsService) {}
 
   @Get()
+
+  @ZodResponse(ecoregionListSchema)
   list(@ZodQuery(ecoregionListQuerySchema) query: EcoregionListQuery): Ecoregion[] {
     return this.ecoregions.list(query.state);
   }
 
   @Get(':code')
+
+  @ZodResponse(ecoregionSchema)
   get(@ZodParam('code', ecoregionCodeParamSchema) code: string): Ecoregion {
     return this.ecoregions.get(code);
   }
 
   /** Admins import EPA Level III polygons (GeoJSON FeatureCollection with US_L3CODE / US_L3NAME) for exact lookups. */
   @Post('boundaries')
+  @ZodResponse(boundaryImportResultSchema)
   @HttpCode(200)
   @Auth('admin')
   importBoundaries(
@@ -37,6 +45,8 @@ export class EcoregionsController {
   }
 
   @Delete('boundaries')
+
+  @ApiNoContentResponse({ description: 'All boundary polygons removed' })
   @HttpCode(204)
   @Auth('admin')
   clearBoundaries(): Promise<void> {

@@ -1,10 +1,14 @@
 import { Controller, Get, Put } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { type Group, type SetMemberRequest, setMemberRequestSchema, slugParamSchema } from '@homeground/shared';
+import {
+  type Group, groupMemberResponseSchema, groupResponseSchema, type SetMemberRequest, setMemberRequestSchema,
+  slugParamSchema,
+} from '@homeground/shared';
+import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { ZodBody, ZodParam } from '../common/decorators/zod.decorators.js';
+import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { GroupsService, type GroupMemberDto } from './groups.service.js';
 
 @ApiTags('groups')
@@ -13,22 +17,30 @@ export class GroupsController {
   constructor(private readonly groups: GroupsService) {}
 
   @Get()
+
+  @ZodResponse(z.array(groupResponseSchema))
   list(): Promise<Group[]> {
     return this.groups.list();
   }
 
   @Get(':slug')
+
+  @ZodResponse(groupResponseSchema)
   get(@ZodParam('slug', slugParamSchema) slug: string): Promise<Group> {
     return this.groups.getDto(slug);
   }
 
   @Get(':slug/members')
+
+  @ZodResponse(z.array(groupMemberResponseSchema))
   @Auth()
   members(@ZodParam('slug', slugParamSchema) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<GroupMemberDto[]> {
     return this.groups.members(slug, user);
   }
 
   @Put(':slug/members')
+
+  @ZodResponse(groupMemberResponseSchema)
   @Auth()
   setMember(
     @ZodParam('slug', slugParamSchema) slug: string,

@@ -1,18 +1,14 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import type { Group as GroupDto, GroupRole } from '@homeground/shared';
+import type { Group as GroupDto, GroupMemberResponse, GroupRole } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { UsersService } from '../users/users.service.js';
 import { GroupMembership } from './group-membership.entity.js';
 import { Group } from './group.entity.js';
 
-export interface GroupMemberDto {
-  userId: string;
-  displayName: string;
-  email: string;
-  role: GroupRole;
-}
+/** A member as the group's members see them (the shared answer shape). */
+export type GroupMemberDto = GroupMemberResponse;
 
 @Injectable()
 export class GroupsService {

@@ -1,7 +1,7 @@
 import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { type PlaceLookup, type PlaceQuery, placeQuerySchema } from '@homeground/shared';
-import { ZodQuery } from '../common/decorators/zod.decorators.js';
+import { type PlaceLookup, placeLookupSchema, type PlaceQuery, placeQuerySchema } from '@homeground/shared';
+import { ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { PlacesService } from './places.service.js';
 
 @ApiTags('places')
@@ -11,6 +11,7 @@ export class PlacesController {
 
   /** Your ground: state, county and EPA Level III ecoregion for a ZIP or a point. */
   @Get('lookup')
+  @ZodResponse(placeLookupSchema)
   lookup(@ZodQuery(placeQuerySchema) q: PlaceQuery): PlaceLookup {
     return this.places.lookup(q);
   }

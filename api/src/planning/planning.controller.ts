@@ -1,10 +1,11 @@
 import { Controller, Header, HttpCode, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
-  type CalendarRequest, calendarRequestSchema, type CalendarResponse, type MixQuantity, mixQuantities, type QuantitiesRequest,
-  quantitiesRequestSchema,
+  type CalendarRequest, calendarRequestSchema, type CalendarResponse, mixQuantities, type MixQuantity,
+  mixQuantitySchema, type QuantitiesRequest, quantitiesRequestSchema, sowingCalendarSchema,
 } from '@homeground/shared';
-import { ZodBody } from '../common/decorators/zod.decorators.js';
+import { z } from 'zod';
+import { FileResponse, ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { CalendarService } from './calendar.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 
@@ -18,6 +19,8 @@ export class PlanningController {
   ) {}
 
   @Post('quantities')
+
+  @ZodResponse(z.array(mixQuantitySchema))
   @HttpCode(200)
   quantities(@ZodBody(quantitiesRequestSchema) body: QuantitiesRequest): MixQuantity[] {
     this.ctx.assertKnown(body.species.map((s, i) => ({ field: `species.${i}.slug`, slug: s.slug })));
@@ -26,12 +29,16 @@ export class PlanningController {
   }
 
   @Post('calendar')
+
+  @ZodResponse(sowingCalendarSchema)
   @HttpCode(200)
   json(@ZodBody(calendarRequestSchema) body: CalendarRequest): CalendarResponse {
     return this.calendar.build(body);
   }
 
   @Post('calendar.csv')
+
+  @FileResponse('text/csv', 'The calendar as CSV, one row per event')
   @HttpCode(200)
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-sowing-calendar.csv"')
@@ -40,6 +47,8 @@ export class PlanningController {
   }
 
   @Post('calendar.ics')
+
+  @FileResponse('text/calendar', 'The calendar as iCalendar (RFC 5545) all-day events')
   @HttpCode(200)
   @Header('Content-Type', 'text/calendar; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-sowing-calendar.ics"')

@@ -1,11 +1,11 @@
 import { Controller, Delete, Get, HttpCode, Post } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
-import { type SavedMix, saveMixRequestSchema, uuidParamSchema } from '@homeground/shared';
-import type { z } from 'zod';
+import { ApiNoContentResponse, ApiTags } from '@nestjs/swagger';
+import { type SavedMix, savedMixSchema, saveMixRequestSchema, uuidParamSchema } from '@homeground/shared';
+import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { ZodBody, ZodParam } from '../common/decorators/zod.decorators.js';
+import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { SavedMixesService } from './saved-mixes.service.js';
 
 type Parsed<S extends z.ZodType> = z.infer<S>;
@@ -16,12 +16,16 @@ export class SavedMixesController {
   constructor(private readonly saved: SavedMixesService) {}
 
   @Post('mixes')
+
+  @ZodResponse(savedMixSchema, 201)
   @Auth()
   save(@ZodBody(saveMixRequestSchema) body: Parsed<typeof saveMixRequestSchema>, @CurrentUser() user: AuthenticatedUser): Promise<SavedMix> {
     return this.saved.save(user, { ...body, request: body.request as unknown as SavedMix['request'] });
   }
 
   @Get('mixes')
+
+  @ZodResponse(z.array(savedMixSchema))
   @Auth()
   mine(@CurrentUser() user: AuthenticatedUser): Promise<SavedMix[]> {
     return this.saved.mine(user);
@@ -29,11 +33,14 @@ export class SavedMixesController {
 
   /** A saved mix, for anyone who has its link. */
   @Get('mixes/:id')
+  @ZodResponse(savedMixSchema)
   get(@ZodParam('id', uuidParamSchema) id: string): Promise<SavedMix> {
     return this.saved.get(id);
   }
 
   @Delete('mixes/:id')
+
+  @ApiNoContentResponse({ description: 'Deleted' })
   @HttpCode(204)
   @Auth()
   remove(@ZodParam('id', uuidParamSchema) id: string, @CurrentUser() user: AuthenticatedUser): Promise<void> {

@@ -1,7 +1,8 @@
 import { Controller, Get, Header, HttpCode, Post, Put, Req, Res, StreamableFile } from '@nestjs/common';
-import { ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import {
-  type CsvImportResult, type PhotoQuery, photoQuerySchema, slugParamSchema, type Species, type SpeciesQuery, speciesQuerySchema,
+  type CsvImportResult, csvImportResultSchema, type PhotoQuery, photoQuerySchema, photoUploadResultSchema,
+  slugParamSchema, type Species, speciesDetailSchema, speciesPageSchema, type SpeciesQuery, speciesQuerySchema,
   speciesSchema,
 } from '@homeground/shared';
 import type { Request, Response } from 'express';
@@ -9,7 +10,7 @@ import { createReadStream } from 'node:fs';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { type UploadedBlob, ZodBody, ZodFile, ZodParam, ZodQuery } from '../common/decorators/zod.decorators.js';
+import { FileResponse, type UploadedBlob, ZodBody, ZodFile, ZodParam, ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { MAX_PHOTO_BYTES, SpeciesPhotosService } from './species-photos.service.js';
 import { SpeciesStore } from './species-store.service.js';
 import { SpeciesService } from './species.service.js';
@@ -27,7 +28,7 @@ export class SpeciesController {
 
   /** Filtered, sorted, paged catalogue; `q` is typo-tolerant over common and scientific names and synonyms. */
   @Get()
-  @ApiOkResponse({ description: '{items: SpeciesSummary[], total, page, pageSize}' })
+  @ZodResponse(speciesPageSchema)
   list(@ZodQuery(speciesQuerySchema) query: SpeciesQuery, @Req() req: Request, @Res() res: Response): void {
     // Remembered as bytes under this URL: repeats are answered by species-list-cache.middleware,
     // since the list is read far more often than edited.
@@ -37,6 +38,8 @@ export class SpeciesController {
   }
 
   @Get('export.csv')
+
+  @FileResponse('text/csv', 'The whole catalogue as CSV (the import\'s columns)')
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-species.csv"')
   exportCsv(): string {
@@ -44,17 +47,23 @@ export class SpeciesController {
   }
 
   @Get(':slug')
+
+  @ZodResponse(speciesDetailSchema)
   get(@ZodParam('slug', slugParamSchema) slug: string): Species & { hasPhoto: boolean } {
     return { ...this.species.get(slug), hasPhoto: this.store.hasPhoto(slug) };
   }
 
   @Post()
+
+  @ZodResponse(speciesSchema, 201)
   @Auth('curator')
   create(@ZodBody(speciesSchema) record: Species, @CurrentUser() user: AuthenticatedUser): Promise<Species> {
     return this.species.create(record, user.id);
   }
 
   @Put(':slug')
+
+  @ZodResponse(speciesSchema)
   @Auth('curator')
   replace(
     @ZodParam('slug', slugParamSchema) slug: string,
@@ -66,6 +75,7 @@ export class SpeciesController {
 
   /** CSV with the export's columns; all-or-nothing, bad rows listed with line numbers. */
   @Post('import')
+  @ZodResponse(csvImportResultSchema)
   @HttpCode(200)
   @Auth('curator')
   importCsv(@ZodFile('file', MAX_CSV_BYTES, 'CSV with the export\'s columns') file: UploadedBlob, @CurrentUser() user: AuthenticatedUser): Promise<CsvImportResult> {
@@ -73,6 +83,8 @@ export class SpeciesController {
   }
 
   @Post(':slug/photo')
+
+  @ZodResponse(photoUploadResultSchema, 201)
   @Auth('curator')
   async uploadPhoto(
     @ZodParam('slug', slugParamSchema) slug: string,
@@ -84,6 +96,8 @@ export class SpeciesController {
   }
 
   @Get(':slug/photo')
+
+  @FileResponse('image/*', 'The photo, resized to WebP when w is given')
   async photo(
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodQuery(photoQuerySchema) query: PhotoQuery,

@@ -1,6 +1,7 @@
 import { Body, Param, Query, UploadedFile, UseInterceptors, type PipeTransform } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
-import { ApiBody, ApiConsumes, ApiParam, ApiQuery } from '@nestjs/swagger';
+import { apiErrorSchema } from '@homeground/shared';
+import { ApiBadRequestResponse, ApiBody, ApiConsumes, ApiParam, ApiQuery, ApiResponse } from '@nestjs/swagger';
 import type { z } from 'zod';
 import { badRequest } from '../validation/bad-request.js';
 import { openApiProperties, openApiSchema } from '../validation/openapi-schema.js';
@@ -12,10 +13,16 @@ import { ZodValidationPipe } from '../validation/zod-validation.pipe.js';
  * `/api/docs` cannot drift from what is checked.
  */
 
-type MethodDecorator = (target: object, key: string | symbol, descriptor: PropertyDescriptor) => unknown;
+type HandlerDecorator = (target: object, key: string | symbol, descriptor: PropertyDescriptor) => unknown;
+
+/** Every validated route may answer 400 with the bad fields. */
+const badRequestDoc = ApiBadRequestResponse({
+  description: 'Bad input: each bad field with its reason',
+  schema: openApiSchema(apiErrorSchema, 'output'),
+}) as HandlerDecorator;
 
 /** Applies method decorators from a parameter decorator (they share the handler function's metadata). */
-function onMethod(target: object, key: string | symbol | undefined, ...decorators: MethodDecorator[]): void {
+function onMethod(target: object, key: string | symbol | undefined, ...decorators: HandlerDecorator[]): void {
   if (key === undefined) throw new Error('Zod parameter decorators belong on a route handler');
   const descriptor = Object.getOwnPropertyDescriptor(target, key);
   if (!descriptor) throw new Error(`No handler ${String(key)} to describe`);
@@ -26,7 +33,7 @@ function onMethod(target: object, key: string | symbol | undefined, ...decorator
 export function ZodBody(schema: z.ZodType, description?: string): ParameterDecorator {
   return (target, key, index) => {
     Body(new ZodValidationPipe(schema))(target, key!, index);
-    onMethod(target, key, ApiBody({ schema: openApiSchema(schema), description, required: true }));
+    onMethod(target, key, ApiBody({ schema: openApiSchema(schema), description, required: true }), badRequestDoc);
   };
 }
 
@@ -34,7 +41,7 @@ export function ZodBody(schema: z.ZodType, description?: string): ParameterDecor
 export function ZodQuery(schema: z.ZodType): ParameterDecorator {
   return (target, key, index) => {
     Query(new ZodValidationPipe(schema))(target, key!, index);
-    onMethod(target, key, ...openApiProperties(schema).map((p) => ApiQuery({ name: p.name, required: p.required, schema: p.schema })));
+    onMethod(target, key, ...openApiProperties(schema).map((p) => ApiQuery({ name: p.name, required: p.required, schema: p.schema })), badRequestDoc);
   };
 }
 
@@ -42,7 +49,7 @@ export function ZodQuery(schema: z.ZodType): ParameterDecorator {
 export function ZodParam(name: string, schema: z.ZodType): ParameterDecorator {
   return (target, key, index) => {
     Param(name, new ZodValidationPipe(schema, name))(target, key!, index);
-    onMethod(target, key, ApiParam({ name, required: true, schema: openApiSchema(schema) }));
+    onMethod(target, key, ApiParam({ name, required: true, schema: openApiSchema(schema) }), badRequestDoc);
   };
 }
 
@@ -79,6 +86,22 @@ export function ZodFile(name: string, maxBytes: number, description?: string): P
         description,
         schema: { type: 'object', required: [name], additionalProperties: false, properties: { [name]: { type: 'string', format: 'binary' } } },
       }),
+      badRequestDoc,
     );
   };
+}
+
+/**
+ * The answer's schema in OpenAPI, from the shared zod response schema (`status` as the route
+ * answers: 200, or 201 for a POST that creates).
+ */
+export function ZodResponse(schema: z.ZodType, status: 200 | 201 = 200, description = 'OK'): ReturnType<typeof ApiResponse> {
+  return ApiResponse({ status, description, schema: openApiSchema(schema, 'output') });
+}
+
+/** A file answer (CSV, iCalendar, image) in OpenAPI, with its media type. */
+export function FileResponse(mediaType: string, description: string): ReturnType<typeof ApiResponse> {
+  return ApiResponse({
+    status: 200, description, content: { [mediaType]: { schema: { type: 'string', format: 'binary' } } },
+  });
 }
