@@ -5,6 +5,7 @@ import helmet from 'helmet';
 import { AppModule } from './app.module.js';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
 import { verifyJsonDepth } from './common/http/json-depth.js';
+import { UnexpectedInputInterceptor } from './common/validation/unexpected-input.interceptor.js';
 import { APP_CONFIG, type AppConfig } from './config/app-config.js';
 import { setUpOpenApi } from './docs/openapi.js';
 
@@ -39,6 +40,7 @@ export function configureApp(app: NestExpressApplication): INestApplication {
   // turns on, so ours is the only one and is passed through to body-parser.
   const jsonOptions = { limit: '1mb', verify: verifyJsonDepth };
   app.useBodyParser('json', jsonOptions as NestExpressBodyParserOptionsFor<'json'>);
+  app.useGlobalInterceptors(new UnexpectedInputInterceptor());
   app.useGlobalFilters(new ApiExceptionFilter());
   app.enableShutdownHooks();
   setUpOpenApi(app);

@@ -9,7 +9,7 @@ import { createTestApp, registerUser, type TestApp } from './support/test-app.js
  * huge strings and arrays, wrong types, unknown and prototype keys, broken geometry.
  */
 
-type Method = 'get' | 'post' | 'put' | 'patch';
+type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 interface Case {
   what: string;
   method: Method;
@@ -107,6 +107,8 @@ const cases: Case[] = [
   { what: 'a repeated ZIP', method: 'get', url: '/api/places/lookup?zip=54665&zip=53703', field: 'zip' },
   { what: 'a photo width not offered', method: 'get', url: `/api/species/${record.slug}/photo?w=123`, field: 'w' },
   { what: 'a saved mix link that is not a UUID', method: 'get', url: '/api/mixes/not-a-uuid', field: 'id' },
+  { what: 'a query on a route that reads none', method: 'get', url: '/api/groups?admin=true', field: 'admin' },
+  { what: 'a body on a route that reads none', method: 'delete', url: '/api/ecoregions/boundaries', body: { keep: '52' }, field: 'keep' },
 ];
 
 describe('malformed input on every writing route (e2e)', () => {
@@ -139,6 +141,7 @@ describe('malformed input on every writing route (e2e)', () => {
     expect(cases.length).toBeGreaterThanOrEqual(30);
     const routes = new Set(cases.filter((c) => c.method !== 'get').map((c) => `${c.method} ${c.url.split('?')[0].replace(/\/species\/(?!import)[^/]+/, '/species/:slug').replace(/\/users\/[^/]+/, '/users/:id').replace(/\/groups\/[^/]+/, '/groups/:slug')}`));
     expect([...routes].sort()).toEqual([
+      'delete /api/ecoregions/boundaries',
       'patch /api/users/:id/role',
       'post /api/auth/login',
       'post /api/auth/register',

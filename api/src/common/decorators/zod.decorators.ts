@@ -21,6 +21,18 @@ const badRequestDoc = ApiBadRequestResponse({
   schema: openApiSchema(apiErrorSchema, 'output'),
 }) as HandlerDecorator;
 
+/** Metadata on a handler: which parts of the request it reads ('body', 'query'); see UnexpectedInputInterceptor. */
+export const READS_METADATA = 'homeground:reads';
+
+/** Records that the handler reads `part`, so input there is expected rather than refused. */
+function markReads(target: object, key: string | symbol | undefined, part: 'body' | 'query'): void {
+  const handler = key === undefined ? undefined : (Object.getOwnPropertyDescriptor(target, key)?.value as object | undefined);
+  if (!handler) return;
+  const reads = new Set<string>(Reflect.getMetadata(READS_METADATA, handler) ?? []);
+  reads.add(part);
+  Reflect.defineMetadata(READS_METADATA, [...reads], handler);
+}
+
 /** Applies method decorators from a parameter decorator (they share the handler function's metadata). */
 function onMethod(target: object, key: string | symbol | undefined, ...decorators: HandlerDecorator[]): void {
   if (key === undefined) throw new Error('Zod parameter decorators belong on a route handler');
@@ -33,6 +45,7 @@ function onMethod(target: object, key: string | symbol | undefined, ...decorator
 export function ZodBody(schema: z.ZodType, description?: string): ParameterDecorator {
   return (target, key, index) => {
     Body(new ZodValidationPipe(schema))(target, key!, index);
+    markReads(target, key, 'body');
     onMethod(target, key, ApiBody({ schema: openApiSchema(schema), description, required: true }), badRequestDoc);
   };
 }
@@ -41,6 +54,7 @@ export function ZodBody(schema: z.ZodType, description?: string): ParameterDecor
 export function ZodQuery(schema: z.ZodType): ParameterDecorator {
   return (target, key, index) => {
     Query(new ZodValidationPipe(schema))(target, key!, index);
+    markReads(target, key, 'query');
     onMethod(target, key, ...openApiProperties(schema).map((p) => ApiQuery({ name: p.name, required: p.required, schema: p.schema })), badRequestDoc);
   };
 }
@@ -76,6 +90,7 @@ class RequiredFilePipe implements PipeTransform<UploadedBlob | undefined, Upload
 export function ZodFile(name: string, maxBytes: number, description?: string): ParameterDecorator {
   return (target, key, index) => {
     UploadedFile(new RequiredFilePipe(name))(target, key!, index);
+    markReads(target, key, 'body');
     onMethod(
       target,
       key,
