@@ -17,6 +17,8 @@ interface Case {
   /** A JSON value, or raw text sent as JSON (for keys an object literal cannot hold, and nesting). */
   body?: unknown;
   raw?: string;
+  /** A URL-encoded form body, as a browser form would send it. */
+  form?: string;
   /** A multipart upload: form field name and file contents. */
   upload?: { field: string; contents: string };
   /** The field the 400 must name. */
@@ -49,6 +51,7 @@ const cases: Case[] = [
   { what: 'sign-in with a 10,000-character password', method: 'post', url: '/api/auth/login', body: { email: 'a@example.org', password: huge.slice(0, 10_000) }, field: 'password' },
   { what: 'sign-in with an array for an e-mail', method: 'post', url: '/api/auth/login', body: { email: ['a@example.org'], password: 'x' }, field: 'email' },
   { what: 'invalid JSON', method: 'post', url: '/api/auth/login', raw: '{"email":', field: 'body' },
+  { what: 'a sign-in form nested 2,000 levels deep', method: 'post', url: '/api/auth/login', form: `email${'[a]'.repeat(2000)}=x&password=y`, field: 'body' },
   // people and groups
   { what: 'a role that does not exist', method: 'patch', url: `/api/users/${UUID}/role`, body: { role: 'superuser' }, field: 'role' },
   { what: 'a user id that is not a UUID', method: 'patch', url: '/api/users/42/role', body: { role: 'curator' }, field: 'id' },
@@ -166,6 +169,7 @@ describe('malformed input on every writing route (e2e)', () => {
     const before = await snapshot();
     let req = t.http[c.method](c.url).set('Authorization', `Bearer ${admin}`);
     if (c.raw !== undefined) req = req.set('Content-Type', 'application/json').send(c.raw);
+    else if (c.form !== undefined) req = req.set('Content-Type', 'application/x-www-form-urlencoded').send(c.form);
     else if (c.upload) req = req.attach(c.upload.field, Buffer.from(c.upload.contents), { filename: 'upload.txt', contentType: 'text/plain' });
     else if (c.body !== undefined) req = req.send(c.body as object);
     const res = await req;

@@ -54,6 +54,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
       if (statusCode === 400 && !base.fields && isMulterError(cause)) {
         base.fields = [{ field: cause.field ?? 'form', message: 'is not a field this upload accepts' }];
       }
+      // Any other 400 from the HTTP layer (e.g. a form nested past body-parser's depth) still names what was wrong.
+      if (statusCode === 400 && !base.fields) base.fields = [{ field: 'body', message: 'could not be read as this request' }];
       if (statusCode === 413) base.message = 'The request body is too large.';
       return base;
     }
