@@ -80,7 +80,8 @@ const cases: Case[] = [
   { what: 'a spacing as text', method: 'post', url: '/api/quantities', body: { areaSqFt: 100, species: [{ slug: 'zizia-aurea', spacingIn: '12' }] }, field: 'species.0.spacingIn' },
   { what: 'a calendar in the year 9999', method: 'post', url: '/api/calendar', body: { ...calendar, lastFrost: '9999-05-10' }, field: 'lastFrost' },
   { what: 'a CSV calendar plan with an unknown field', method: 'post', url: '/api/calendar.csv', body: { ...calendar, plans: [{ ...calendar.plans[0], colour: 'red' }] }, field: 'plans.0.colour' },
-  { what: 'an iCalendar in the year 9999', method: 'post', url: '/api/calendar.ics', body: { ...calendar, targetDate: '9999-06-01' }, field: 'targetDate' },
+  { what: 'an iCalendar in the year 9999', method: 'post', url: '/api/calendar.ics', body: { ...calendar, lastFrost: '9999-05-10' }, field: 'lastFrost' },
+  { what: 'a plant-share date in the year 9999', method: 'post', url: '/api/calendar.ics', body: { ...calendar, targetDate: '9999-06-01' }, field: 'targetDate' },
   { what: 'a calendar of 201 plans', method: 'post', url: '/api/calendar', body: { ...calendar, plans: Array.from({ length: 201 }, () => calendar.plans[0]) }, field: 'plans' },
   // the catalogue
   { what: 'a species with 31 common names', method: 'post', url: '/api/species', body: { ...newRecord, commonNames: Array.from({ length: 31 }, (_, i) => `Name ${i}`) }, field: 'commonNames' },
