@@ -5,8 +5,8 @@
 import { seededRandom } from '@homeground/shared';
 import { performance } from 'node:perf_hooks';
 import zipcodes from 'zipcodes';
-import { PolygonIndex } from '../dist/places/polygon-index.js';
-import { loadCountyOutlines } from '../dist/places/us-counties.js';
+import { PolygonIndex } from '../dist/geometry/polygon-index.js';
+import { loadCountyOutlines } from '../dist/geometry/us-counties.js';
 import { measureThroughput, percentile, startBareServer, startBuiltApi } from './support.js';
 
 // Region lookup: the county index is the work per request (the crosswalk is a map lookup after it).

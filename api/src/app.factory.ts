@@ -1,23 +1,24 @@
 import type { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
-import type { NestExpressApplication } from '@nestjs/platform-express';
-import type { NextFunction, Request, Response } from 'express';
+import type { NestExpressApplication, NestExpressBodyParserOptionsFor } from '@nestjs/platform-express';
 import helmet from 'helmet';
 import { AppModule } from './app.module.js';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
-import { createValidationPipe } from './common/validation/validation-pipe.js';
+import { verifyJsonDepth } from './common/http/json-depth.js';
+import { UnexpectedInputInterceptor } from './common/validation/unexpected-input.interceptor.js';
 import { APP_CONFIG, type AppConfig } from './config/app-config.js';
 import { setUpOpenApi } from './docs/openapi.js';
-import { SpeciesListCacheMiddleware } from './species/species-list-cache.middleware.js';
 
-/** Everything main.ts and the e2e tests share: prefix, security headers, validation, errors, docs. */
+/**
+ * Everything main.ts and the e2e tests share: prefix, security headers, body limits, errors, docs.
+ * Validation is per parameter (ZodBody, ZodQuery, ZodParam in common/decorators), not a global pipe.
+ */
 export function configureApp(app: NestExpressApplication): INestApplication {
   app.setGlobalPrefix('api');
   app.set('trust proxy', 'loopback');
   app.disable('x-powered-by');
-  // First in the chain: repeated catalogue list pages are answered from memory before any other work.
-  const listCache = app.get(SpeciesListCacheMiddleware);
-  app.use('/api/species', (req: Request, res: Response, next: NextFunction) => listCache.use(req, res, next));
+  // Security headers come first, so every answer carries them, including the species list cache's
+  // (a module middleware, which Nest mounts after these).
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -34,8 +35,12 @@ export function configureApp(app: NestExpressApplication): INestApplication {
       },
     }),
   );
-  app.useBodyParser('json', { limit: '1mb' });
-  app.useGlobalPipes(createValidationPipe());
+  // 1 MB at most, and no deeper than MAX_JSON_DEPTH: checked on the raw bytes before JSON.parse.
+  // Nest's option type leaves `verify` out because it uses the hook for `rawBody`, which this app never
+  // turns on, so ours is the only one and is passed through to body-parser.
+  const jsonOptions = { limit: '1mb', verify: verifyJsonDepth };
+  app.useBodyParser('json', jsonOptions as NestExpressBodyParserOptionsFor<'json'>);
+  app.useGlobalInterceptors(new UnexpectedInputInterceptor());
   app.useGlobalFilters(new ApiExceptionFilter());
   app.enableShutdownHooks();
   setUpOpenApi(app);

@@ -75,7 +75,9 @@ describe('place → your ground (e2e)', () => {
     expect(codes).toEqual(expect.arrayContaining(['50', '51', '52', '53']));
     expect(res.body.every((e: { description: string }) => e.description.length > 20)).toBe(true);
     await t.http.get('/api/ecoregions?state=XX').expect(400);
-    await t.http.get('/api/ecoregions/99').expect(404);
+    // EPA US Level III codes run 1–85, so 99 is a malformed path parameter, named in the 400.
+    const bad = await t.http.get('/api/ecoregions/99').expect(400);
+    expect(bad.body.fields).toEqual([{ field: 'code', message: 'must be an EPA Level III code, 1–85' }]);
   });
 
   it('refuses boundary uploads from non-admins and rejects malformed or wrong files, changing nothing', async () => {

@@ -1,13 +1,15 @@
-import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
-import { ApiConflictResponse, ApiOkResponse, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
-import type { AuthResponse, User } from '@homeground/shared';
+import { Controller, Get, HttpCode, Post } from '@nestjs/common';
+import { ApiConflictResponse, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
+import {
+  type AuthResponse, authResponseSchema, type LoginRequest, loginRequestSchema, type RegisterRequest,
+  registerRequestSchema, type User, userResponseSchema,
+} from '@homeground/shared';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { UsersService } from '../users/users.service.js';
 import { AuthService } from './auth.service.js';
 import type { AuthenticatedUser } from './authenticated-user.js';
-import { LoginDto } from './dto/login.dto.js';
-import { RegisterDto } from './dto/register.dto.js';
 
 @ApiTags('auth')
 @Controller()
@@ -18,21 +20,26 @@ export class AuthController {
   ) {}
 
   @Post('auth/register')
+
+  @ZodResponse(authResponseSchema, 201)
   @ApiConflictResponse({ description: 'E-mail already registered' })
-  register(@Body() dto: RegisterDto): Promise<AuthResponse> {
+  register(@ZodBody(registerRequestSchema) dto: RegisterRequest): Promise<AuthResponse> {
     return this.auth.register(dto);
   }
 
   @Post('auth/login')
+
+  @ZodResponse(authResponseSchema)
   @HttpCode(200)
   @ApiTooManyRequestsResponse({ description: 'Too many sign-in attempts from this address' })
-  login(@Body() dto: LoginDto): Promise<AuthResponse> {
+  login(@ZodBody(loginRequestSchema) dto: LoginRequest): Promise<AuthResponse> {
     return this.auth.login(dto);
   }
 
   @Get('me')
+
+  @ZodResponse(userResponseSchema)
   @Auth()
-  @ApiOkResponse({ description: 'The signed-in user with their group roles' })
   me(@CurrentUser() user: AuthenticatedUser): Promise<User> {
     return this.users.getDto(user.id);
   }

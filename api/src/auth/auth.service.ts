@@ -1,12 +1,9 @@
 import { Inject, Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import type { AuthResponse } from '@homeground/shared';
+import type { AuthResponse, LoginRequest, RegisterRequest } from '@homeground/shared';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { UsersService } from '../users/users.service.js';
-import type { User } from '../users/user.entity.js';
 import type { JwtPayload } from './authenticated-user.js';
-import type { LoginDto } from './dto/login.dto.js';
-import type { RegisterDto } from './dto/register.dto.js';
 import { DUMMY_HASH_PROMISE, hashPassword, verifyPassword } from './password.js';
 
 @Injectable()
@@ -17,32 +14,32 @@ export class AuthService {
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
-  async register(dto: RegisterDto): Promise<AuthResponse> {
+  async register(dto: RegisterRequest): Promise<AuthResponse> {
     const user = await this.users.create({
       email: dto.email,
       displayName: dto.displayName,
       passwordHash: await hashPassword(dto.password),
     });
-    return this.issueToken(user);
+    return this.issueToken(user.id);
   }
 
-  async login(dto: LoginDto): Promise<AuthResponse> {
+  async login(dto: LoginRequest): Promise<AuthResponse> {
     const user = await this.users.findByEmail(dto.email);
     // Verify against a dummy hash for unknown e-mails so timing does not reveal who has an account.
     const ok = await verifyPassword(dto.password, user?.passwordHash ?? (await DUMMY_HASH_PROMISE));
     const demoBlocked = user?.isDemo && this.config.isProduction;
     if (!user || !ok || demoBlocked) throw new UnauthorizedException('E-mail or password is wrong.');
-    return this.issueToken(user);
+    return this.issueToken(user.id);
   }
 
   /** A fresh sign-in for someone who just proved who they are another way (an accepted invitation). */
-  async tokenFor(userId: string): Promise<AuthResponse> {
-    return this.issueToken({ id: userId } as Pick<User, 'id'>);
+  tokenFor(userId: string): Promise<AuthResponse> {
+    return this.issueToken(userId);
   }
 
-  private async issueToken(user: Pick<User, 'id'>): Promise<AuthResponse> {
-    const payload: JwtPayload = { sub: user.id };
+  private async issueToken(userId: string): Promise<AuthResponse> {
+    const payload: JwtPayload = { sub: userId };
     const accessToken = await this.jwt.signAsync(payload);
-    return { accessToken, expiresIn: this.config.jwtExpiresInSeconds, user: await this.users.getDto(user.id) };
+    return { accessToken, expiresIn: this.config.jwtExpiresInSeconds, user: await this.users.getDto(userId) };
   }
 }

@@ -2,8 +2,8 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { Ecoregion } from '@homeground/shared';
 import { DataSource } from 'typeorm';
-import { type AreaFeature, PolygonIndex } from '../places/polygon-index.js';
-import { parseBoundaryUpload } from './boundary-upload.js';
+import { parseBoundaryUpload } from '../geometry/boundary-upload.js';
+import { type AreaFeature, PolygonIndex } from '../geometry/polygon-index.js';
 
 export interface CountyRegions {
   fips: string;
@@ -18,7 +18,10 @@ export interface BoundaryImportResult {
   vertices: number;
 }
 
-/** Ecoregions, the county crosswalk and any imported boundary polygons, held in memory for lookups. */
+/**
+ * The one in-memory read model of ecoregions, the county crosswalk and any imported boundary
+ * polygons; the catalogue, places and the engine all read regions from here.
+ */
 @Injectable()
 export class EcoregionsService {
   private regions = new Map<string, Ecoregion>();
@@ -50,6 +53,11 @@ export class EcoregionsService {
   list(state?: string): Ecoregion[] {
     const all = [...this.regions.values()];
     return state ? all.filter((e) => (e.states as string[]).includes(state)) : all;
+  }
+
+  /** The region with this code, or undefined (for callers that answer a missing region their own way). */
+  find(code: string): Ecoregion | undefined {
+    return this.regions.get(code);
   }
 
   get(code: string): Ecoregion {

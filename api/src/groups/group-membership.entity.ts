@@ -1,6 +1,7 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
 import type { GroupRole } from '@homeground/shared';
-import { User } from '../users/user.entity.js';
+// Type-only, with the relation named by entity: users and groups must not import each other at run time.
+import type { User } from '../users/user.entity.js';
 import { Group } from './group.entity.js';
 
 /** A person's role in one group: organiser or grower. */
@@ -22,7 +23,7 @@ export class GroupMembership {
   @CreateDateColumn({ name: 'created_at' })
   createdAt: Date;
 
-  @ManyToOne(() => User, (u) => u.memberships, { onDelete: 'CASCADE' })
+  @ManyToOne('User', (u: User) => u.memberships, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'user_id' })
   user: Relation<User>;
 

@@ -1,10 +1,14 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Put } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
-import type { Group } from '@homeground/shared';
+import { Controller, Delete, Get, HttpCode, Put } from '@nestjs/common';
+import { ApiNoContentResponse, ApiTags } from '@nestjs/swagger';
+import {
+  type Group, groupMemberResponseSchema, groupResponseSchema, type SetMemberRequest, setMemberRequestSchema,
+  slugParamSchema, uuidParamSchema,
+} from '@homeground/shared';
+import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { SetMemberDto } from './dto/set-member.dto.js';
+import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { GroupsService, type GroupMemberDto } from './groups.service.js';
 
 @ApiTags('groups')
@@ -13,33 +17,45 @@ export class GroupsController {
   constructor(private readonly groups: GroupsService) {}
 
   @Get()
+
+  @ZodResponse(z.array(groupResponseSchema))
   list(): Promise<Group[]> {
     return this.groups.list();
   }
 
   @Get(':slug')
-  get(@Param('slug') slug: string): Promise<Group> {
+
+  @ZodResponse(groupResponseSchema)
+  get(@ZodParam('slug', slugParamSchema) slug: string): Promise<Group> {
     return this.groups.getDto(slug);
   }
 
   @Get(':slug/members')
+
+  @ZodResponse(z.array(groupMemberResponseSchema))
   @Auth()
-  members(@Param('slug') slug: string, @CurrentUser() user: AuthenticatedUser): Promise<GroupMemberDto[]> {
+  members(@ZodParam('slug', slugParamSchema) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<GroupMemberDto[]> {
     return this.groups.members(slug, user);
   }
 
   @Put(':slug/members')
+  @ZodResponse(groupMemberResponseSchema)
   @Auth()
-  setMember(@Param('slug') slug: string, @CurrentUser() user: AuthenticatedUser, @Body() dto: SetMemberDto): Promise<GroupMemberDto> {
+  setMember(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @CurrentUser() user: AuthenticatedUser,
+    @ZodBody(setMemberRequestSchema) dto: SetMemberRequest,
+  ): Promise<GroupMemberDto> {
     return this.groups.setMember(slug, user, dto.email, dto.role);
   }
 
   @Delete(':slug/members/:userId')
+  @ApiNoContentResponse({ description: 'Removed' })
   @HttpCode(204)
   @Auth()
   removeMember(
-    @Param('slug') slug: string,
-    @Param('userId', new ParseUUIDPipe({ version: '4' })) userId: string,
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @ZodParam('userId', uuidParamSchema) userId: string,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<void> {
     return this.groups.removeMember(slug, user, userId);

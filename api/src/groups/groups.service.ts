@@ -1,14 +1,14 @@
 import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import type { Group as GroupDto, GroupMember, GroupRole } from '@homeground/shared';
+import type { Group as GroupDto, GroupMemberResponse, GroupRole } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
-import { User } from '../users/user.entity.js';
+import { UsersService } from '../users/users.service.js';
 import { GroupMembership } from './group-membership.entity.js';
 import { Group } from './group.entity.js';
 
-/** The shared shape of a member-list row. */
-export type GroupMemberDto = GroupMember;
+/** A member as the group's members see them (the shared answer shape). */
+export type GroupMemberDto = GroupMemberResponse;
 
 @Injectable()
 export class GroupsService {
@@ -16,6 +16,7 @@ export class GroupsService {
     @InjectRepository(Group) private readonly groups: Repository<Group>,
     @InjectRepository(GroupMembership) private readonly memberships: Repository<GroupMembership>,
     @InjectDataSource() private readonly db: DataSource,
+    private readonly users: UsersService,
   ) {}
 
   async list(): Promise<GroupDto[]> {
@@ -32,7 +33,8 @@ export class GroupsService {
     return rows.map((g) => this.toDto(g, byGroup.get(g.id) ?? 0));
   }
 
-  async get(slug: string): Promise<Group> {
+  /** The group entity; stays inside this module (other modules get the shared `Group` from getDto). */
+  private async get(slug: string): Promise<Group> {
     const group = await this.groups.findOne({ where: { slug } });
     if (!group) throw new NotFoundException(`No group called "${slug}".`);
     return group;
@@ -66,9 +68,10 @@ export class GroupsService {
     if ((await this.roleOf(caller, group.id)) !== 'organiser') {
       throw new ForbiddenException('Only an organiser of this group can add people to it.');
     }
+    const account = await this.users.findByEmail(email);
+    if (!account) throw new NotFoundException(`No account uses ${email}: ask them to register first.`);
+    const user = await this.users.getDto(account.id);
     return this.db.transaction(async (tx) => {
-      const user = await tx.findOne(User, { where: { email: email.toLowerCase() } });
-      if (!user) throw new NotFoundException(`No account uses ${email}: ask them to register first.`);
       const existing = await tx.findOne(GroupMembership, { where: { groupId: group.id, userId: user.id } });
       await tx.save(GroupMembership, existing ? { ...existing, role } : tx.create(GroupMembership, { groupId: group.id, userId: user.id, role }));
       return { userId: user.id, displayName: user.displayName, email: user.email, role };

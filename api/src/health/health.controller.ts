@@ -1,9 +1,10 @@
 import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { HealthResponse, StatsResponse } from '@homeground/shared';
+import { type HealthResponse, healthResponseSchema, type StatsResponse, statsResponseSchema } from '@homeground/shared';
 import { DataSource } from 'typeorm';
 import { API_VERSION } from '../config/app-config.js';
+import { ZodResponse } from '../common/decorators/zod.decorators.js';
 
 const STARTED_AT = Date.now();
 
@@ -14,6 +15,7 @@ export class HealthController {
 
   /** Liveness plus a real database round trip and the count of applied migrations. */
   @Get('health')
+  @ZodResponse(healthResponseSchema)
   async health(): Promise<HealthResponse> {
     let database: HealthResponse['database'] = { status: 'down', migrations: 0 };
     try {
@@ -32,6 +34,7 @@ export class HealthController {
 
   /** Live counts for the home page. Tables that a later migration adds count as 0 until they exist. */
   @Get('stats')
+  @ZodResponse(statsResponseSchema)
   async stats(): Promise<StatsResponse> {
     const [species, groups, ecoregions, users] = await Promise.all(
       ['species', 'groups', 'ecoregions', 'users'].map((t) => this.countRows(t)),

@@ -1,15 +1,16 @@
-import { Body, Controller, Get, HttpCode, Param, Post, Req, UseGuards } from '@nestjs/common';
+import { Controller, Get, HttpCode, Post, Req, UseGuards } from '@nestjs/common';
 import { ApiBearerAuth, ApiGoneResponse, ApiTags } from '@nestjs/swagger';
 import {
-  acceptInvitationRequestSchema, type AuthResponse, type Invitation, type InvitationPreview, invitationTokenSchema,
-  inviteRequestSchema, slugSchema,
+  type AcceptInvitationRequest, acceptInvitationRequestSchema, type AuthResponse, authResponseSchema, type Invitation,
+  type InvitationPreview, invitationPreviewSchema, invitationSchema, invitationTokenSchema, type InviteRequest,
+  inviteRequestSchema, slugParamSchema,
 } from '@homeground/shared';
-import type { z } from 'zod';
+import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { OptionalJwtAuthGuard } from '../common/guards/optional-jwt-auth.guard.js';
-import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
+import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { InvitationsService } from './invitations.service.js';
 
 @ApiTags('groups')
@@ -20,9 +21,10 @@ export class InvitationsController {
   /** Organisers invite someone by e-mail; the message carries a link that makes or joins an account. */
   @Post('groups/:slug/invitations')
   @Auth()
+  @ZodResponse(invitationSchema, 201)
   invite(
-    @Param('slug', new ZodValidationPipe(slugSchema)) slug: string,
-    @Body(new ZodValidationPipe(inviteRequestSchema)) body: z.infer<typeof inviteRequestSchema>,
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @ZodBody(inviteRequestSchema) body: InviteRequest,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<Invitation> {
     return this.invitations.invite(slug, user, body);
@@ -30,14 +32,16 @@ export class InvitationsController {
 
   @Get('groups/:slug/invitations')
   @Auth()
-  list(@Param('slug', new ZodValidationPipe(slugSchema)) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<Invitation[]> {
+  @ZodResponse(z.array(invitationSchema))
+  list(@ZodParam('slug', slugParamSchema) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<Invitation[]> {
     return this.invitations.list(slug, user);
   }
 
   /** What the link offers, for the page the invited person lands on. */
   @Get('invitations/:token')
   @ApiGoneResponse({ description: 'Used or expired' })
-  preview(@Param('token', new ZodValidationPipe(invitationTokenSchema)) token: string): Promise<InvitationPreview> {
+  @ZodResponse(invitationPreviewSchema)
+  preview(@ZodParam('token', invitationTokenSchema) token: string): Promise<InvitationPreview> {
     return this.invitations.preview(token);
   }
 
@@ -47,9 +51,10 @@ export class InvitationsController {
   @UseGuards(OptionalJwtAuthGuard)
   @ApiBearerAuth()
   @ApiGoneResponse({ description: 'Used or expired' })
+  @ZodResponse(authResponseSchema)
   accept(
-    @Param('token', new ZodValidationPipe(invitationTokenSchema)) token: string,
-    @Body(new ZodValidationPipe(acceptInvitationRequestSchema)) body: z.infer<typeof acceptInvitationRequestSchema>,
+    @ZodParam('token', invitationTokenSchema) token: string,
+    @ZodBody(acceptInvitationRequestSchema) body: AcceptInvitationRequest,
     @Req() req: { user?: AuthenticatedUser },
   ): Promise<AuthResponse> {
     return this.invitations.accept(token, req.user ?? null, body);

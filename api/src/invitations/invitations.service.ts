@@ -36,7 +36,7 @@ export class InvitationsService {
 
   /** An organiser invites someone by e-mail; a newer invitation to the same address replaces the older one. */
   async invite(slug: string, caller: AuthenticatedUser, req: InviteRequest, now = new Date()): Promise<Invitation> {
-    const group = await this.groups.get(slug);
+    const group = await this.groups.getDto(slug);
     if ((await this.groups.roleOf(caller, group.id)) !== 'organiser') {
       throw new ForbiddenException('Only an organiser of this group can invite people to it.');
     }
@@ -63,7 +63,7 @@ export class InvitationsService {
 
   /** Pending and accepted invitations of a group, newest first, for its organisers. */
   async list(slug: string, caller: AuthenticatedUser): Promise<Invitation[]> {
-    const group = await this.groups.get(slug);
+    const group = await this.groups.getDto(slug);
     if ((await this.groups.roleOf(caller, group.id)) !== 'organiser') {
       throw new ForbiddenException('Only an organiser of this group can see its invitations.');
     }

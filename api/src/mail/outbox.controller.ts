@@ -1,11 +1,11 @@
-import { Controller, Get, Param, ParseUUIDPipe, Query } from '@nestjs/common';
+import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { type OutboxMessage, outboxQuerySchema } from '@homeground/shared';
-import type { z } from 'zod';
+import { type OutboxMessage, outboxMessageSchema, type OutboxQuery, outboxQuerySchema, uuidParamSchema } from '@homeground/shared';
+import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
+import { ZodParam, ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { OutboxService } from './outbox.service.js';
 
 /** What the local mail server received: organisers read their group's mail, admins all of it. */
@@ -16,16 +16,15 @@ export class OutboxController {
 
   @Get()
   @Auth()
-  list(
-    @Query(new ZodValidationPipe(outboxQuerySchema)) query: z.infer<typeof outboxQuerySchema>,
-    @CurrentUser() user: AuthenticatedUser,
-  ): Promise<OutboxMessage[]> {
+  @ZodResponse(z.array(outboxMessageSchema))
+  list(@ZodQuery(outboxQuerySchema) query: OutboxQuery, @CurrentUser() user: AuthenticatedUser): Promise<OutboxMessage[]> {
     return this.outbox.list(user, query);
   }
 
   @Get(':id')
   @Auth()
-  get(@Param('id', new ParseUUIDPipe({ version: '4' })) id: string, @CurrentUser() user: AuthenticatedUser): Promise<OutboxMessage> {
+  @ZodResponse(outboxMessageSchema)
+  get(@ZodParam('id', uuidParamSchema) id: string, @CurrentUser() user: AuthenticatedUser): Promise<OutboxMessage> {
     return this.outbox.get(user, id);
   }
 }

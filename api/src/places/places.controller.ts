@@ -1,8 +1,7 @@
-import { Controller, Get, Query } from '@nestjs/common';
-import { ApiQuery, ApiTags } from '@nestjs/swagger';
-import type { PlaceLookup } from '@homeground/shared';
-import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
-import { type PlaceQuery, placeQuerySchema } from './dto/place-query.js';
+import { Controller, Get } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { type PlaceLookup, placeLookupSchema, type PlaceQuery, placeQuerySchema } from '@homeground/shared';
+import { ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { PlacesService } from './places.service.js';
 
 @ApiTags('places')
@@ -12,10 +11,8 @@ export class PlacesController {
 
   /** Your ground: state, county and EPA Level III ecoregion for a ZIP or a point. */
   @Get('lookup')
-  @ApiQuery({ name: 'zip', required: false, example: '54665' })
-  @ApiQuery({ name: 'lat', required: false })
-  @ApiQuery({ name: 'lon', required: false })
-  lookup(@Query(new ZodValidationPipe(placeQuerySchema)) q: PlaceQuery): PlaceLookup {
+  @ZodResponse(placeLookupSchema)
+  lookup(@ZodQuery(placeQuerySchema) q: PlaceQuery): PlaceLookup {
     return this.places.lookup(q);
   }
 }

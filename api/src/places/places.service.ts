@@ -1,15 +1,15 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
-import type { Ecoregion, PlaceLookup } from '@homeground/shared';
+import { Injectable } from '@nestjs/common';
+import { badRequest } from '../common/validation/bad-request.js';
+import type { Ecoregion, PlaceLookup, PlaceQuery } from '@homeground/shared';
 import zipcodes from 'zipcodes';
 import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
-import type { PlaceQuery } from './dto/place-query.js';
-import { PolygonIndex } from './polygon-index.js';
-import { loadCountyOutlines } from './us-counties.js';
+import { PolygonIndex } from '../geometry/polygon-index.js';
+import { loadCountyOutlines } from '../geometry/us-counties.js';
 
 /** How far a point may sit outside every county outline and still take the nearest (coasts, lakes). */
 const NEAREST_COUNTY_KM = 8;
 
-const bad = (field: string, message: string) => new BadRequestException({ message: `${field} ${message}`, fields: [{ field, message }] });
+const bad = (field: string, message: string) => badRequest([{ field, message }], `${field} ${message}`);
 
 /**
  * Place → your ground: state, county and EPA Level III ecoregion. ZIPs resolve offline to their

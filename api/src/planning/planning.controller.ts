@@ -1,10 +1,12 @@
-import { Body, Controller, Header, HttpCode, Post } from '@nestjs/common';
+import { Controller, Header, HttpCode, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { type CalendarResponse, type MixQuantity, mixQuantities } from '@homeground/shared';
-import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
+import {
+  type CalendarRequest, calendarRequestSchema, type CalendarResponse, mixQuantities, type MixQuantity,
+  mixQuantitySchema, type QuantitiesRequest, quantitiesRequestSchema, sowingCalendarSchema,
+} from '@homeground/shared';
+import { z } from 'zod';
+import { FileResponse, ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { CalendarService } from './calendar.service.js';
-import { type CalendarRequest, calendarRequestSchema } from './dto/calendar-request.js';
-import { type QuantitiesRequest, quantitiesRequestSchema } from './dto/quantities-request.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 
 /** Quantities and the sowing calendar for any list of species (a mix, a season plan, a batch). */
@@ -17,32 +19,40 @@ export class PlanningController {
   ) {}
 
   @Post('quantities')
+
+  @ZodResponse(z.array(mixQuantitySchema))
   @HttpCode(200)
-  quantities(@Body(new ZodValidationPipe(quantitiesRequestSchema)) body: QuantitiesRequest): MixQuantity[] {
+  quantities(@ZodBody(quantitiesRequestSchema) body: QuantitiesRequest): MixQuantity[] {
     this.ctx.assertKnown(body.species.map((s, i) => ({ field: `species.${i}.slug`, slug: s.slug })));
     const spacingIn = Object.fromEntries(body.species.filter((s) => s.spacingIn).map((s) => [s.slug, s.spacingIn!]));
     return mixQuantities(body.species.map((s) => this.ctx.get(s.slug)!), body.areaSqFt, { lossFactor: body.lossFactor, spacingIn, grassShare: body.grassShare });
   }
 
   @Post('calendar')
+
+  @ZodResponse(sowingCalendarSchema)
   @HttpCode(200)
-  json(@Body(new ZodValidationPipe(calendarRequestSchema)) body: CalendarRequest): CalendarResponse {
+  json(@ZodBody(calendarRequestSchema) body: CalendarRequest): CalendarResponse {
     return this.calendar.build(body);
   }
 
   @Post('calendar.csv')
+
+  @FileResponse('text/csv', 'The calendar as CSV, one row per event')
   @HttpCode(200)
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-sowing-calendar.csv"')
-  csv(@Body(new ZodValidationPipe(calendarRequestSchema)) body: CalendarRequest): string {
+  csv(@ZodBody(calendarRequestSchema) body: CalendarRequest): string {
     return this.calendar.toCsv(this.calendar.build(body));
   }
 
   @Post('calendar.ics')
+
+  @FileResponse('text/calendar', 'The calendar as iCalendar (RFC 5545) all-day events')
   @HttpCode(200)
   @Header('Content-Type', 'text/calendar; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-sowing-calendar.ics"')
-  ics(@Body(new ZodValidationPipe(calendarRequestSchema)) body: CalendarRequest): string {
+  ics(@ZodBody(calendarRequestSchema) body: CalendarRequest): string {
     return this.calendar.toIcs(this.calendar.build(body), body);
   }
 }

@@ -1,6 +1,7 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import type { PaletteRequest } from '@homeground/shared';
-import { User } from '../users/user.entity.js';
+// Type-only, with the relation named by entity, so saved mixes need no users code at run time.
+import type { User } from '../users/user.entity.js';
 
 /** A mix a signed-in person saved; anyone with its id (an unguessable UUID) can open it by link. */
 @Entity({ name: 'saved_mixes' })
@@ -23,7 +24,7 @@ export class SavedMixRow {
   @CreateDateColumn({ name: 'created_at' })
   createdAt: Date;
 
-  @ManyToOne(() => User, { onDelete: 'CASCADE' })
+  @ManyToOne('User', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'owner_id' })
   owner: Relation<User>;
 }

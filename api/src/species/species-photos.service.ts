@@ -1,7 +1,8 @@
 import { existsSync, mkdirSync } from 'node:fs';
 import { rename, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { BadRequestException, Inject, Injectable, NotFoundException, UnsupportedMediaTypeException } from '@nestjs/common';
+import { Inject, Injectable, NotFoundException, UnsupportedMediaTypeException } from '@nestjs/common';
+import { PHOTO_WIDTHS } from '@homeground/shared';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp, { type Metadata } from 'sharp';
@@ -11,8 +12,6 @@ import { SpeciesPhoto } from './species-photo.entity.js';
 import { SpeciesStore } from './species-store.service.js';
 
 export const MAX_PHOTO_BYTES = 5 * 1024 * 1024;
-/** Widths served resized; anything else gets the original. A fixed list keeps the disk cache bounded. */
-export const PHOTO_WIDTHS = [160, 400, 800] as const;
 const ACCEPTED = new Map([
   ['image/jpeg', 'jpg'],
   ['image/png', 'png'],
@@ -37,9 +36,8 @@ export class SpeciesPhotosService {
   }
 
   /** Stores a photo after checking its real type from its bytes (the name and the browser's word are not trusted). */
-  async save(slug: string, bytes: Buffer | undefined, userId: string): Promise<SpeciesPhoto> {
+  async save(slug: string, bytes: Buffer, userId: string): Promise<SpeciesPhoto> {
     if (!this.store.get(slug)) throw new NotFoundException(`No species "${slug}" in the catalogue.`);
-    if (!bytes || bytes.length === 0) throw new BadRequestException({ message: 'Attach a photo in the "photo" field.', fields: [{ field: 'photo', message: 'is required' }] });
     const type = await fileTypeFromBuffer(bytes);
     const ext = type && ACCEPTED.get(type.mime);
     if (!type || !ext) {

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { Ecoregion, Species, SpeciesPage, SpeciesQuery } from '@homeground/shared';
+import type { Species, SpeciesPage, SpeciesQuery } from '@homeground/shared';
+import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { DataSource } from 'typeorm';
 import { SpeciesSearchIndex, type NameEntry } from './search/species-search-index.js';
 import { matchesFilters, sortSpecies } from './species-filter.js';
@@ -18,33 +19,33 @@ export class SpeciesStore {
   private species: Species[] = [];
   private bySlug = new Map<string, Species>();
   private photos = new Set<string>();
-  private ecoregions = new Map<string, Ecoregion>();
   private index = new SpeciesSearchIndex([]);
   private generation = 0;
   /** List answers keyed by the raw request URL, as bytes, for the fast path in species-list-cache.middleware. */
   private readonly rawPages = new Map<string, Buffer>();
 
-  constructor(@InjectDataSource() private readonly db: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly db: DataSource,
+    // The one ecoregion table in memory; the catalogue filter reads regions from it.
+    private readonly ecoregions: EcoregionsService,
+  ) {}
 
   async reload(): Promise<void> {
-    const [rows, photoRows, ecoRows] = await Promise.all([
+    const [rows, photoRows] = await Promise.all([
       this.db.query(`SELECT record FROM species ORDER BY slug`),
       this.db.query(`SELECT slug FROM species_photos`),
-      this.db.query(`SELECT record FROM ecoregions`),
     ]);
     this.replace(
       rows.map((r: { record: string }) => JSON.parse(r.record) as Species),
       photoRows.map((r: { slug: string }) => r.slug),
-      ecoRows.map((r: { record: string }) => JSON.parse(r.record) as Ecoregion),
     );
   }
 
   /** Swaps in a new set of records (also used by benchmarks with synthetic species). */
-  replace(species: Species[], photoSlugs: string[], ecoregions: Ecoregion[]): void {
+  replace(species: Species[], photoSlugs: string[]): void {
     this.species = species;
     this.bySlug = new Map(species.map((s) => [s.slug, s]));
     this.photos = new Set(photoSlugs);
-    this.ecoregions = new Map(ecoregions.map((e) => [e.code, e]));
     const names: NameEntry[] = species.flatMap((s) => [
       { slug: s.slug, name: s.scientificName, kind: 'scientific' as const },
       ...s.commonNames.map((name) => ({ slug: s.slug, name, kind: 'common' as const })),
@@ -76,10 +77,6 @@ export class SpeciesStore {
     return this.photos.has(slug);
   }
 
-  ecoregion(code: string): Ecoregion | undefined {
-    return this.ecoregions.get(code);
-  }
-
   cachedForUrl(url: string): Buffer | undefined {
     return this.rawPages.get(url);
   }
@@ -90,7 +87,7 @@ export class SpeciesStore {
   }
 
   list(query: SpeciesQuery): SpeciesPage {
-    const ecoregion = query.ecoregion ? this.ecoregions.get(query.ecoregion) : undefined;
+    const ecoregion = query.ecoregion ? this.ecoregions.find(query.ecoregion) : undefined;
     let pool: Species[];
     if (query.q) {
       pool = this.index.search(query.q, 200).map((h) => this.bySlug.get(h.slug)!);

@@ -1,5 +1,6 @@
-import { Inject, Module, type OnModuleInit } from '@nestjs/common';
+import { Inject, type MiddlewareConsumer, Module, type NestModule, type OnModuleInit, RequestMethod } from '@nestjs/common';
 import { CATALOGUE_LOADED, CatalogueModule } from '../catalogue/catalogue.module.js';
+import { EcoregionsModule } from '../ecoregions/ecoregions.module.js';
 import { SpeciesListCacheMiddleware } from './species-list-cache.middleware.js';
 import { SpeciesPhotosService } from './species-photos.service.js';
 import { SpeciesStore } from './species-store.service.js';
@@ -7,12 +8,12 @@ import { SpeciesController } from './species.controller.js';
 import { SpeciesService } from './species.service.js';
 
 @Module({
-  imports: [CatalogueModule],
+  imports: [CatalogueModule, EcoregionsModule],
   controllers: [SpeciesController],
   providers: [SpeciesService, SpeciesStore, SpeciesPhotosService, SpeciesListCacheMiddleware],
-  exports: [SpeciesStore, SpeciesListCacheMiddleware],
+  exports: [SpeciesStore],
 })
-export class SpeciesModule implements OnModuleInit {
+export class SpeciesModule implements OnModuleInit, NestModule {
   constructor(
     @Inject(CATALOGUE_LOADED) _loaded: unknown,
     private readonly store: SpeciesStore,
@@ -21,5 +22,10 @@ export class SpeciesModule implements OnModuleInit {
   /** The catalogue is in SQLite by now (CATALOGUE_LOADED); build the read model. */
   onModuleInit(): Promise<void> {
     return this.store.reload();
+  }
+
+  /** Repeated list pages are answered from memory; module middleware runs after the app-wide headers. */
+  configure(consumer: MiddlewareConsumer): void {
+    consumer.apply(SpeciesListCacheMiddleware).forRoutes({ path: 'species', method: RequestMethod.GET });
   }
 }

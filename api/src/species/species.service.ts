@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import {
   type CsvImportResult, type CsvRowError, csvRowToSpecies, SPECIES_CSV_COLUMNS, type Species, speciesToCsvRow,
@@ -6,6 +6,7 @@ import {
 import Papa from 'papaparse';
 import { DataSource } from 'typeorm';
 import { writeSpecies } from '../catalogue/catalogue-writer.js';
+import { badRequest } from '../common/validation/bad-request.js';
 import { SpeciesStore } from './species-store.service.js';
 
 /** At most this many bad rows are listed in one answer; the count says how many there were. */
@@ -71,11 +72,11 @@ export class SpeciesService {
     });
     if (errors.length === 0) errors.push(...this.crossRowConflicts(records));
     if (errors.length > 0) {
-      throw new BadRequestException({
-        message: `The file has ${errors.length} problem(s); nothing was imported.`,
-        rows: errors.slice(0, MAX_REPORTED_ROW_ERRORS),
-        fields: [...new Set(errors.map((e) => e.field))].map((field) => ({ field, message: 'see rows' })),
-      });
+      throw badRequest(
+        [...new Set(errors.map((e) => e.field))].map((field) => ({ field, message: 'see rows' })),
+        `The file has ${errors.length} problem(s); nothing was imported.`,
+        { rows: errors.slice(0, MAX_REPORTED_ROW_ERRORS) },
+      );
     }
     let created = 0;
     await this.db.transaction(async (tx) => {

@@ -1,6 +1,7 @@
 import { Column, CreateDateColumn, Entity, OneToMany, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import type { GlobalRole } from '@homeground/shared';
-import { GroupMembership } from '../groups/group-membership.entity.js';
+// Type-only, with the relation named by entity: users and groups must not import each other at run time.
+import type { GroupMembership } from '../groups/group-membership.entity.js';
 
 @Entity({ name: 'users' })
 export class User {
@@ -28,6 +29,6 @@ export class User {
   @CreateDateColumn({ name: 'created_at' })
   createdAt: Date;
 
-  @OneToMany(() => GroupMembership, (m) => m.user)
+  @OneToMany('GroupMembership', (m: GroupMembership) => m.user)
   memberships: Relation<GroupMembership[]>;
 }

@@ -1,8 +1,11 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Patch } from '@nestjs/common';
+import { Controller, Get, Patch } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import type { User } from '@homeground/shared';
+import {
+  type SetRoleRequest, setRoleRequestSchema, type User, userResponseSchema, uuidParamSchema,
+} from '@homeground/shared';
+import { z } from 'zod';
 import { Auth } from '../common/decorators/auth.decorator.js';
-import { SetRoleDto } from './dto/set-role.dto.js';
+import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { UsersService } from './users.service.js';
 
 /** Admins manage people and their global roles. */
@@ -13,12 +16,16 @@ export class UsersController {
   constructor(private readonly users: UsersService) {}
 
   @Get()
+
+  @ZodResponse(z.array(userResponseSchema))
   list(): Promise<User[]> {
     return this.users.list();
   }
 
   @Patch(':id/role')
-  setRole(@Param('id', new ParseUUIDPipe({ version: '4' })) id: string, @Body() dto: SetRoleDto): Promise<User> {
+
+  @ZodResponse(userResponseSchema)
+  setRole(@ZodParam('id', uuidParamSchema) id: string, @ZodBody(setRoleRequestSchema) dto: SetRoleRequest): Promise<User> {
     return this.users.setRole(id, dto.role);
   }
 }

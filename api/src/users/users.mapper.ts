@@ -1,5 +1,19 @@
-import type { User as UserDto } from '@homeground/shared';
+import type { GlobalRole, User as UserDto } from '@homeground/shared';
 import type { User } from './user.entity.js';
+
+/** What sign-in needs of an account; it holds the password hash, so it never leaves the API. */
+export interface UserCredentials {
+  id: string;
+  email: string;
+  role: GlobalRole;
+  isDemo: boolean;
+  passwordHash: string;
+}
+
+/** Entity → the plain credentials the auth module checks (other modules never see the entity). */
+export function toUserCredentials(user: User): UserCredentials {
+  return { id: user.id, email: user.email, role: user.role, isDemo: user.isDemo, passwordHash: user.passwordHash };
+}
 
 /** Entity → the shared `User` shape; memberships must be loaded with their groups. */
 export function toUserDto(user: User): UserDto {

@@ -3,30 +3,35 @@ import { InjectRepository } from '@nestjs/typeorm';
 import type { GlobalRole, User as UserDto } from '@homeground/shared';
 import { Repository } from 'typeorm';
 import { User } from './user.entity.js';
-import { toUserDto } from './users.mapper.js';
+import { toUserCredentials, toUserDto, type UserCredentials } from './users.mapper.js';
 
 @Injectable()
 export class UsersService {
   constructor(@InjectRepository(User) private readonly users: Repository<User>) {}
 
-  findByEmail(email: string): Promise<User | null> {
-    return this.users.findOne({ where: { email: email.toLowerCase() } });
+  /** The account with this e-mail (any case), as sign-in and group invitations need it. */
+  async findByEmail(email: string): Promise<UserCredentials | null> {
+    const user = await this.users.findOne({ where: { email: email.toLowerCase() } });
+    return user && toUserCredentials(user);
   }
 
-  async findById(id: string): Promise<User | null> {
-    return this.users.findOne({ where: { id }, relations: { memberships: { group: true } } });
+  /** The account with this id, for checking a token; null when it was deleted. */
+  async findById(id: string): Promise<UserCredentials | null> {
+    const user = await this.users.findOne({ where: { id } });
+    return user && toUserCredentials(user);
   }
 
   async getDto(id: string): Promise<UserDto> {
-    const user = await this.findById(id);
+    const user = await this.users.findOne({ where: { id }, relations: { memberships: { group: true } } });
     if (!user) throw new NotFoundException('No such user.');
     return toUserDto(user);
   }
 
-  async create(input: { email: string; displayName: string; passwordHash: string; role?: GlobalRole; isDemo?: boolean }): Promise<User> {
+  async create(input: { email: string; displayName: string; passwordHash: string; role?: GlobalRole; isDemo?: boolean }): Promise<UserDto> {
     const email = input.email.toLowerCase();
     if (await this.findByEmail(email)) throw new ConflictException('An account with this e-mail already exists: sign in instead.');
-    return this.users.save(this.users.create({ ...input, email, role: input.role ?? 'member', isDemo: input.isDemo ?? false }));
+    const saved = await this.users.save(this.users.create({ ...input, email, role: input.role ?? 'member', isDemo: input.isDemo ?? false }));
+    return this.getDto(saved.id);
   }
 
   async list(): Promise<UserDto[]> {

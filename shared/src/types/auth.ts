@@ -1,12 +1,12 @@
 import { z } from 'zod';
 
 export const GLOBAL_ROLES = ['member', 'curator', 'admin'] as const;
-export const globalRoleSchema = z.enum(GLOBAL_ROLES);
+export const globalRoleSchema = z.enum(GLOBAL_ROLES, { message: `must be one of ${GLOBAL_ROLES.join(', ')}` });
 export type GlobalRole = z.infer<typeof globalRoleSchema>;
 
 /** A group's people: members reserve plants, growers raise batches, organisers run the season. */
 export const GROUP_ROLES = ['member', 'grower', 'organiser'] as const;
-export const groupRoleSchema = z.enum(GROUP_ROLES);
+export const groupRoleSchema = z.enum(GROUP_ROLES, { message: `must be one of ${GROUP_ROLES.join(', ')}` });
 export type GroupRole = z.infer<typeof groupRoleSchema>;
 
 /** Passwords: at least 10 characters (NIST SP 800-63B asks for 8 or more; we ask a little more). */
@@ -14,20 +14,31 @@ export const PASSWORD_MIN_LENGTH = 10;
 export const PASSWORD_MAX_LENGTH = 200;
 
 export const registerRequestSchema = z.object({
-  email: z.string().trim().toLowerCase().email('must be an e-mail address').max(254),
+  email: z.string().trim().toLowerCase().max(254, 'must be at most 254 characters').email('must be an e-mail address'),
   password: z
     .string()
     .min(PASSWORD_MIN_LENGTH, `must be at least ${PASSWORD_MIN_LENGTH} characters`)
     .max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
   displayName: z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters'),
-});
+}).strict();
 export type RegisterRequest = z.infer<typeof registerRequestSchema>;
 
 export const loginRequestSchema = z.object({
-  email: z.string().trim().toLowerCase().email('must be an e-mail address'),
-  password: z.string().min(1, 'must not be empty'),
-});
+  email: z.string().trim().toLowerCase().max(254, 'must be at most 254 characters').email('must be an e-mail address'),
+  password: z.string().min(1, 'must not be empty').max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
+}).strict();
 export type LoginRequest = z.infer<typeof loginRequestSchema>;
+
+/** `PATCH /api/users/:id/role`: an admin sets a person's global role. */
+export const setRoleRequestSchema = z.object({ role: globalRoleSchema }).strict();
+export type SetRoleRequest = z.infer<typeof setRoleRequestSchema>;
+
+/** `PUT /api/groups/:slug/members`: an organiser adds a person (by e-mail) or changes their role. */
+export const setMemberRequestSchema = z.object({
+  email: z.string().trim().toLowerCase().max(254, 'must be at most 254 characters').email('must be an e-mail address'),
+  role: groupRoleSchema,
+}).strict();
+export type SetMemberRequest = z.infer<typeof setMemberRequestSchema>;
 
 export interface GroupMembership {
   groupId: string;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { habitatSchema, stateCodeSchema } from './species.js';
+import { habitatSchema, stateCodeSchema, US_STATE_CODES } from './species.js';
 
 /** An EPA Level III ecoregion of the conterminous US, with its Level II and Level I parents. */
 export const ecoregionSchema = z.object({
@@ -16,6 +16,15 @@ export const ecoregionSchema = z.object({
   sources: z.record(z.enum(['code', 'name', 'parents', 'states', 'plantCommunities']), z.string()),
 });
 export type Ecoregion = z.infer<typeof ecoregionSchema>;
+
+/** An EPA US Level III ecoregion code, "1"–"85" (as a path parameter or a field). */
+export const ecoregionCodeSchema = z.string().max(2, 'must be an EPA Level III code, 1–85').regex(/^([1-9]|[1-7][0-9]|8[0-5])$/, 'must be an EPA Level III code, 1–85');
+
+/** Query string of `GET /api/ecoregions`: only the regions that reach into a state. */
+export const ecoregionListQuerySchema = z
+  .object({ state: z.enum(US_STATE_CODES, { message: 'must be a USPS code of the 48 states or DC' }).optional() })
+  .strict();
+export type EcoregionListQuery = z.infer<typeof ecoregionListQuerySchema>;
 
 /** One county's overlap with Level III ecoregions, shares summing to about 1. */
 export const countyEcoregionSchema = z.object({

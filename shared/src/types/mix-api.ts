@@ -1,10 +1,13 @@
 import { z } from 'zod';
 import type { SowingCalendar } from '../sowing-calendar/calendar-types.js';
 import type { PaletteAlternative, PaletteResult, ScoredSpecies } from './recommendation.js';
-import { paletteRequestSchema } from './recommendation.js';
+import { MAX_LISTED_SLUGS, paletteRequestSchema } from './recommendation.js';
 import type { Site } from './site.js';
 import type { SpeciesSummary } from './species-query.js';
 import { slugSchema } from './species.js';
+import { isoDateSchema, sowingCalendarRequestSchema } from '../sowing-calendar/calendar-types.js';
+import { MAX_AREA_SQ_FT, MAX_AREA_SQ_M } from './site.js';
+import { squareMetresToSquareFeet } from '../units/conversions.js';
 
 /**
  * Request and response shapes of the mix endpoints (`/api/recommendations`, `/api/mixes/*`,
@@ -48,10 +51,10 @@ export interface MixResponse {
 
 export const alternativesRequestSchema = paletteRequestSchema.extend({
   /** The slugs now in the mix. */
-  chosen: z.array(slugSchema).min(1).max(60),
+  chosen: z.array(slugSchema).min(1).max(MAX_LISTED_SLUGS),
   /** The chosen species to find replacements for. */
   slot: slugSchema,
-});
+}).strict();
 export type AlternativesRequest = z.input<typeof alternativesRequestSchema>;
 
 export interface AlternativesResponse {
@@ -62,8 +65,8 @@ export const saveMixRequestSchema = z.object({
   name: z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters'),
   request: paletteRequestSchema,
   /** The species in the mix as the user left it (after locks, swaps and rebalancing). */
-  chosen: z.array(slugSchema).min(1).max(60),
-});
+  chosen: z.array(slugSchema).min(1).max(MAX_LISTED_SLUGS),
+}).strict();
 export type SaveMixRequest = z.input<typeof saveMixRequestSchema>;
 
 export interface SavedMix {
@@ -76,3 +79,29 @@ export interface SavedMix {
 }
 
 export type CalendarResponse = SowingCalendar;
+
+/** `POST /api/calendar(.csv|.ics)`: the shared calendar request; `today` may be left out (the server's date is used). */
+export const calendarRequestSchema = sowingCalendarRequestSchema.extend({ today: isoDateSchema.optional() }).strict();
+export type CalendarRequest = z.infer<typeof calendarRequestSchema>;
+
+/** `POST /api/quantities`: plants and seed for a list of species over an area (ft² or m², at most 10 acres). */
+export const quantitiesRequestSchema = z
+  .object({
+    areaSqFt: z.number().positive('must be more than 0').max(MAX_AREA_SQ_FT, 'must be at most 10 acres').optional(),
+    areaSqM: z.number().positive('must be more than 0').max(MAX_AREA_SQ_M, 'must be at most 10 acres').optional(),
+    species: z
+      .array(z.object({ slug: slugSchema, spacingIn: z.number().min(4, 'must be at least 4 in').max(240).optional() }).strict())
+      .min(1)
+      .max(MAX_LISTED_SLUGS),
+    /** Fraction of seedlings lost before planting out; default 0.2 (common practice). */
+    lossFactor: z.number().min(0).max(0.9, 'must be at most 0.9').optional(),
+    /** Share of the bed for grasses and sedges; default 0.3. */
+    grassShare: z.number().min(0).max(1).optional(),
+  })
+  .strict()
+  .refine((q) => (q.areaSqFt === undefined) !== (q.areaSqM === undefined), {
+    message: 'give the area in ft² (areaSqFt) or in m² (areaSqM), not both', path: ['areaSqFt'],
+  })
+  .transform(({ areaSqM, areaSqFt, ...rest }) => ({ ...rest, areaSqFt: areaSqFt ?? squareMetresToSquareFeet(areaSqM as number) }));
+export type QuantitiesRequest = z.infer<typeof quantitiesRequestSchema>;
+export type QuantitiesRequestInput = z.input<typeof quantitiesRequestSchema>;

@@ -37,23 +37,25 @@ export interface Recommendation {
 }
 
 export const MAX_MIX_SIZE = 40;
+/** Most slugs one request may list (locks, exclusions, a saved mix): more than any mix holds. */
+export const MAX_LISTED_SLUGS = 60;
 
 export const paletteOptionsSchema = z.object({
   /** Number of species in the mix; from the area when left out. */
   size: z.number().int().min(1).max(MAX_MIX_SIZE).optional(),
   /** Always in the mix. */
-  locked: z.array(slugSchema).default([]),
+  locked: z.array(slugSchema).max(MAX_LISTED_SLUGS).default([]),
   /** Never in the mix (wins over a lock on the same slug). */
-  excluded: z.array(slugSchema).default([]),
-});
+  excluded: z.array(slugSchema).max(MAX_LISTED_SLUGS).default([]),
+}).strict();
 export type PaletteOptions = z.input<typeof paletteOptionsSchema>;
 
-export const recommendRequestSchema = z.object({ site: siteRequestSchema, region: regionContextSchema });
+export const recommendRequestSchema = z.object({ site: siteRequestSchema, region: regionContextSchema }).strict();
 export type RecommendRequest = z.input<typeof recommendRequestSchema>;
 
 export const paletteRequestSchema = recommendRequestSchema.extend({
   options: paletteOptionsSchema.default({ locked: [], excluded: [] }),
-});
+}).strict();
 export type PaletteRequest = z.input<typeof paletteRequestSchema>;
 
 export type PaletteConstraintId =

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { squareMetresToSquareFeet } from '../units/conversions.js';
-import { habitatSchema, moistureSchema, soilTextureSchema, stateCodeSchema, sunSchema } from './species.js';
+import { HABITATS, habitatSchema, moistureSchema, soilTextureSchema, stateCodeSchema, sunSchema } from './species.js';
 
 /** What the user wants their ground to do; each goal adds a part to "why it fits". */
 export const GOALS = ['monarchs', 'pollinators', 'birds', 'rain-garden', 'shade-garden', 'low-spreaders'] as const;
@@ -13,6 +13,8 @@ export type DeerPressure = z.infer<typeof deerPressureSchema>;
 
 /** 10 acres: the largest planting Homeground plans as one site (bigger plantings are field seedings). */
 export const MAX_AREA_SQ_FT = 435_600;
+/** The same 10 acres in m² (1 acre = 4,046.8564224 m², NIST Handbook 44). */
+export const MAX_AREA_SQ_M = 40_468.564224;
 
 /** The stored site: the area is always in ft². */
 export const siteSchema = z.object({
@@ -37,9 +39,10 @@ export type Site = z.infer<typeof siteSchema>;
 export const siteRequestSchema = siteSchema
   .omit({ areaSqFt: true })
   .extend({
-    areaSqFt: z.number().positive().optional(),
-    areaSqM: z.number().positive().optional(),
+    areaSqFt: z.number().positive().max(MAX_AREA_SQ_FT, 'must be at most 10 acres').optional(),
+    areaSqM: z.number().positive().max(MAX_AREA_SQ_M, 'must be at most 10 acres').optional(),
   })
+  .strict()
   .refine((s) => (s.areaSqFt === undefined) !== (s.areaSqM === undefined), {
     message: 'give the area in ft² (areaSqFt) or in m² (areaSqM), not both',
     path: ['areaSqFt'],
@@ -57,6 +60,6 @@ export const regionContextSchema = z.object({
   /** EPA US Level III code, e.g. "52" for the Driftless Area. */
   ecoregionCode: z.string().regex(/^([1-9]|[1-7][0-9]|8[0-5])$/).optional(),
   /** The ecoregion's natural plant communities, in the catalogue's habitat words. */
-  ecoregionPlantCommunities: z.array(habitatSchema).optional(),
-});
+  ecoregionPlantCommunities: z.array(habitatSchema).max(HABITATS.length).optional(),
+}).strict();
 export type RegionContext = z.infer<typeof regionContextSchema>;

@@ -34,6 +34,20 @@ export const speciesQuerySchema = z
     path: ['minHeightCm'],
   });
 export type SpeciesQuery = z.infer<typeof speciesQuerySchema>;
+
+/** Widths a photo is served resized to; a fixed list keeps the server's disk cache bounded. */
+export const PHOTO_WIDTHS = [160, 400, 800] as const;
+
+/** Query string of `GET /api/species/:slug/photo`: `w` picks a resized copy; left out, the original. */
+export const photoQuerySchema = z
+  .object({
+    w: z
+      .enum(PHOTO_WIDTHS.map(String) as ['160', '400', '800'], { message: `must be one of ${PHOTO_WIDTHS.join(', ')}` })
+      .transform(Number)
+      .optional(),
+  })
+  .strict();
+export type PhotoQuery = z.infer<typeof photoQuerySchema>;
 export type SpeciesQueryInput = z.input<typeof speciesQuerySchema>;
 
 /** One species in a list: enough for a table row or a card. */

@@ -1,6 +1,7 @@
 import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { ApiError } from '@homeground/shared';
 import type { Response } from 'express';
+import { JsonTooDeepError } from '../http/json-depth.js';
 
 const REASON: Record<number, string> = {
   400: 'Bad Request', 401: 'Unauthorized', 403: 'Forbidden', 404: 'Not Found', 409: 'Conflict',
@@ -21,10 +22,16 @@ export class ApiExceptionFilter implements ExceptionFilter {
     const body = this.toApiError(exception);
     if (body.statusCode >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
     if (res.headersSent) return;
-    res.status(body.statusCode).json(body);
+    // A route may have set a file's headers (CSV, iCalendar) before it failed: the error is JSON, not a download.
+    res.removeHeader('Content-Disposition');
+    res.status(body.statusCode).type('application/json').send(JSON.stringify(body));
   }
 
   private toApiError(exception: unknown): ApiError {
+    // Raised by the depth check on an uploaded file, outside body-parser.
+    if (exception instanceof JsonTooDeepError) {
+      return { statusCode: 400, error: REASON[400], message: exception.message, fields: exception.fields };
+    }
     if (exception instanceof HttpException) {
       const statusCode = exception.getStatus();
       const response = exception.getResponse();
@@ -36,8 +43,19 @@ export class ApiExceptionFilter implements ExceptionFilter {
         if (r.fields) base.fields = r.fields;
         if (r.rows) base.rows = r.rows;
       }
+      const cause = exception.cause;
       // The Express adapter maps body-parser's SyntaxError to a 400 with the parser's words; say it plainly.
-      if (exception.cause instanceof SyntaxError) base.message = 'The request body is not valid JSON.';
+      if (cause instanceof SyntaxError) {
+        base.message = 'The request body is not valid JSON.';
+        base.fields = [{ field: 'body', message: 'is not valid JSON' }];
+      }
+      if (cause instanceof JsonTooDeepError) base.fields = cause.fields;
+      // Multer names the form field it refused (an unexpected file, too many fields).
+      if (statusCode === 400 && !base.fields && isMulterError(cause)) {
+        base.fields = [{ field: cause.field ?? 'form', message: 'is not a field this upload accepts' }];
+      }
+      // Any other 400 from the HTTP layer (e.g. a form nested past body-parser's depth) still names what was wrong.
+      if (statusCode === 400 && !base.fields) base.fields = [{ field: 'body', message: 'could not be read as this request' }];
       if (statusCode === 413) base.message = 'The request body is too large.';
       return base;
     }
@@ -47,4 +65,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
       message: 'Something went wrong on our side. Please try again.',
     };
   }
+}
+
+function isMulterError(e: unknown): e is { code: string; field?: string } {
+  return typeof e === 'object' && e !== null && typeof (e as { code?: unknown }).code === 'string' && (e as { code: string }).code.startsWith('LIMIT_');
 }

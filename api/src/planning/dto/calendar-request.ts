@@ -1,6 +1,2 @@
-import { isoDateSchema, sowingCalendarRequestSchema } from '@homeground/shared';
-import { z } from 'zod';
-
-/** The shared calendar request; `today` may be left out, and the server's date is used. */
-export const calendarRequestSchema = sowingCalendarRequestSchema.extend({ today: isoDateSchema.optional() }).strict();
-export type CalendarRequest = z.infer<typeof calendarRequestSchema>;
+/** The calendar request lives with the other request schemas in shared; re-exported for this folder's imports. */
+export { type CalendarRequest, calendarRequestSchema } from '@homeground/shared';

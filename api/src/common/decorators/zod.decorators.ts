@@ -1,0 +1,122 @@
+import { Body, Param, Query, UploadedFile, UseInterceptors, type PipeTransform } from '@nestjs/common';
+import { FileInterceptor } from '@nestjs/platform-express';
+import { apiErrorSchema } from '@homeground/shared';
+import { ApiBadRequestResponse, ApiBody, ApiConsumes, ApiParam, ApiQuery, ApiResponse } from '@nestjs/swagger';
+import type { z } from 'zod';
+import { badRequest } from '../validation/bad-request.js';
+import { openApiProperties, openApiSchema } from '../validation/openapi-schema.js';
+import { ZodValidationPipe } from '../validation/zod-validation.pipe.js';
+
+/**
+ * The API's one way to read a request: each decorator parses its part with a shared zod schema
+ * (answering 400 naming each bad field) and publishes the same schema in the OpenAPI document, so
+ * `/api/docs` cannot drift from what is checked.
+ */
+
+type HandlerDecorator = (target: object, key: string | symbol, descriptor: PropertyDescriptor) => unknown;
+
+/** Every validated route may answer 400 with the bad fields. */
+const badRequestDoc = ApiBadRequestResponse({
+  description: 'Bad input: each bad field with its reason',
+  schema: openApiSchema(apiErrorSchema, 'output'),
+}) as HandlerDecorator;
+
+/** Metadata on a handler: which parts of the request it reads ('body', 'query'); see UnexpectedInputInterceptor. */
+export const READS_METADATA = 'homeground:reads';
+
+/** Records that the handler reads `part`, so input there is expected rather than refused. */
+function markReads(target: object, key: string | symbol | undefined, part: 'body' | 'query'): void {
+  const handler = key === undefined ? undefined : (Object.getOwnPropertyDescriptor(target, key)?.value as object | undefined);
+  if (!handler) return;
+  const reads = new Set<string>(Reflect.getMetadata(READS_METADATA, handler) ?? []);
+  reads.add(part);
+  Reflect.defineMetadata(READS_METADATA, [...reads], handler);
+}
+
+/** Applies method decorators from a parameter decorator (they share the handler function's metadata). */
+function onMethod(target: object, key: string | symbol | undefined, ...decorators: HandlerDecorator[]): void {
+  if (key === undefined) throw new Error('Zod parameter decorators belong on a route handler');
+  const descriptor = Object.getOwnPropertyDescriptor(target, key);
+  if (!descriptor) throw new Error(`No handler ${String(key)} to describe`);
+  for (const d of decorators) d(target, key, descriptor);
+}
+
+/** The JSON body, parsed with `schema`; unknown fields are refused when the schema is strict. */
+export function ZodBody(schema: z.ZodType, description?: string): ParameterDecorator {
+  return (target, key, index) => {
+    Body(new ZodValidationPipe(schema))(target, key!, index);
+    markReads(target, key, 'body');
+    onMethod(target, key, ApiBody({ schema: openApiSchema(schema), description, required: true }), badRequestDoc);
+  };
+}
+
+/** The whole query string, parsed with an object `schema`; each property is published as a parameter. */
+export function ZodQuery(schema: z.ZodType): ParameterDecorator {
+  return (target, key, index) => {
+    Query(new ZodValidationPipe(schema))(target, key!, index);
+    markReads(target, key, 'query');
+    onMethod(target, key, ...openApiProperties(schema).map((p) => ApiQuery({ name: p.name, required: p.required, schema: p.schema })), badRequestDoc);
+  };
+}
+
+/** One path parameter, parsed with `schema`; a bad value answers 400 naming the parameter. */
+export function ZodParam(name: string, schema: z.ZodType): ParameterDecorator {
+  return (target, key, index) => {
+    Param(name, new ZodValidationPipe(schema, name))(target, key!, index);
+    onMethod(target, key, ApiParam({ name, required: true, schema: openApiSchema(schema) }), badRequestDoc);
+  };
+}
+
+/** What multer's memory storage hands over (the fields we use). */
+export interface UploadedBlob {
+  buffer: Buffer;
+  size: number;
+}
+
+/** Refuses a request without the file, naming the form field. */
+class RequiredFilePipe implements PipeTransform<UploadedBlob | undefined, UploadedBlob> {
+  constructor(private readonly field: string) {}
+
+  transform(file: UploadedBlob | undefined): UploadedBlob {
+    if (!file || file.size === 0) throw badRequest([{ field: this.field, message: 'is required' }], `Attach the file in the "${this.field}" field.`);
+    return file;
+  }
+}
+
+/**
+ * One uploaded file in a multipart form field (at most `maxBytes`), required; documents the form
+ * in OpenAPI. Other form fields and other files are refused by multer with a 400.
+ */
+export function ZodFile(name: string, maxBytes: number, description?: string): ParameterDecorator {
+  return (target, key, index) => {
+    UploadedFile(new RequiredFilePipe(name))(target, key!, index);
+    markReads(target, key, 'body');
+    onMethod(
+      target,
+      key,
+      UseInterceptors(FileInterceptor(name, { limits: { fileSize: maxBytes, files: 1, fields: 0 } })),
+      ApiConsumes('multipart/form-data'),
+      ApiBody({
+        required: true,
+        description,
+        schema: { type: 'object', required: [name], additionalProperties: false, properties: { [name]: { type: 'string', format: 'binary' } } },
+      }),
+      badRequestDoc,
+    );
+  };
+}
+
+/**
+ * The answer's schema in OpenAPI, from the shared zod response schema (`status` as the route
+ * answers: 200, or 201 for a POST that creates).
+ */
+export function ZodResponse(schema: z.ZodType, status: 200 | 201 = 200, description = 'OK'): ReturnType<typeof ApiResponse> {
+  return ApiResponse({ status, description, schema: openApiSchema(schema, 'output') });
+}
+
+/** A file answer (CSV, iCalendar, image) in OpenAPI, with its media type. */
+export function FileResponse(mediaType: string, description: string): ReturnType<typeof ApiResponse> {
+  return ApiResponse({
+    status: 200, description, content: { [mediaType]: { schema: { type: 'string', format: 'binary' } } },
+  });
+}

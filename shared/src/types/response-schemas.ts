@@ -1,0 +1,206 @@
+import { z } from 'zod';
+import { CALENDAR_EVENT_KINDS, CALENDAR_WARNING_KINDS, type SowingCalendar } from '../sowing-calendar/calendar-types.js';
+import {
+  type AuthResponse, GLOBAL_ROLES, GROUP_ROLES, type Group, type GroupMember, type HealthResponse, type StatsResponse, type User,
+} from './auth.js';
+import { ecoregionSchema } from './ecoregion.js';
+import type { Invitation, InvitationPreview } from './invitation.js';
+import type { OutboxMessage } from './mail.js';
+import type { AlternativesResponse, MixQuantity, MixResponse, RecommendationsResponse, SavedMix } from './mix-api.js';
+import type { PlaceLookup } from './place.js';
+import { paletteRequestSchema, type PaletteResult, type ScoredSpecies } from './recommendation.js';
+import { siteSchema } from './site.js';
+import {
+  CAUTION_KINDS, FLOWER_COLOURS, GROWTH_FORMS, MOISTURE_LEVELS, SOWING_METHODS, speciesSchema, stateCodeSchema, SUN_LEVELS,
+} from './species.js';
+import type { CsvImportResult, SpeciesPage, SpeciesSummary } from './species-query.js';
+
+/**
+ * What the API answers, as zod schemas, so the OpenAPI document describes each answer from the same
+ * source as the requests. Each `satisfies` ties a schema to the TypeScript type the code returns, so
+ * a field the answer does not have, or of another type, fails the build.
+ */
+
+const isoDateTime = z.string().describe('ISO 8601 date and time');
+const isoDate = z.string().describe('calendar date, YYYY-MM-DD');
+
+export const userResponseSchema = z.object({
+  id: z.string(),
+  email: z.string(),
+  displayName: z.string(),
+  role: z.enum(GLOBAL_ROLES),
+  groups: z.array(z.object({ groupId: z.string(), groupSlug: z.string(), groupName: z.string(), role: z.enum(GROUP_ROLES) })),
+  createdAt: isoDateTime,
+}) satisfies z.ZodType<User>;
+
+export const authResponseSchema = z.object({
+  accessToken: z.string().describe('a JWT to send as Authorization: Bearer <token>'),
+  expiresIn: z.number().describe('seconds until the token expires'),
+  user: userResponseSchema,
+}) satisfies z.ZodType<AuthResponse>;
+
+export const groupResponseSchema = z.object({
+  id: z.string(), slug: z.string(), name: z.string(), town: z.string(), state: z.string(),
+  ecoregionCode: z.string().nullable(), members: z.number().int(),
+}) satisfies z.ZodType<Group>;
+
+/** A member of a group as its members see them (names and e-mails only for people in the group). */
+export const groupMemberResponseSchema = z.object({
+  userId: z.string(), displayName: z.string(), email: z.string().nullable(), role: z.enum(GROUP_ROLES),
+}) satisfies z.ZodType<GroupMember>;
+export type GroupMemberResponse = z.infer<typeof groupMemberResponseSchema>;
+
+export const healthResponseSchema = z.object({
+  status: z.enum(['ok', 'degraded']),
+  version: z.string(),
+  database: z.object({ status: z.enum(['up', 'down']), migrations: z.number().int() }),
+  uptimeSeconds: z.number(),
+}) satisfies z.ZodType<HealthResponse>;
+
+export const statsResponseSchema = z.object({
+  species: z.number().int(), groups: z.number().int(), ecoregions: z.number().int(), users: z.number().int(),
+}) satisfies z.ZodType<StatsResponse>;
+
+export const speciesSummarySchema = z.object({
+  slug: z.string(), scientificName: z.string(), commonName: z.string(), family: z.string(),
+  growthForm: z.enum(GROWTH_FORMS),
+  heightCm: z.object({ min: z.number(), max: z.number() }),
+  bloomMonths: z.array(z.number().int()),
+  flowerColours: z.array(z.enum(FLOWER_COLOURS)),
+  sun: z.array(z.enum(SUN_LEVELS)),
+  moisture: z.array(z.enum(MOISTURE_LEVELS)),
+  monarchHost: z.boolean(),
+  lepidopteraGenusCount: z.number().int().nullable(),
+  cautionKinds: z.array(z.enum(CAUTION_KINDS)),
+  hasPhoto: z.boolean(),
+}) satisfies z.ZodType<SpeciesSummary>;
+
+export const speciesPageSchema = z.object({
+  items: z.array(speciesSummarySchema), total: z.number().int(), page: z.number().int(), pageSize: z.number().int(),
+}) satisfies z.ZodType<SpeciesPage>;
+
+export const speciesDetailSchema = speciesSchema.extend({ hasPhoto: z.boolean() });
+
+export const csvImportResultSchema = z.object({ created: z.number().int(), updated: z.number().int() }) satisfies z.ZodType<CsvImportResult>;
+
+export const photoUploadResultSchema = z.object({
+  slug: z.string(), mime: z.string(), bytes: z.number().int(), width: z.number().int(), height: z.number().int(),
+});
+
+export const ecoregionListSchema = z.array(ecoregionSchema);
+
+export const boundaryImportResultSchema = z.object({ regions: z.number().int(), vertices: z.number().int() });
+
+const ecoregionBriefSchema = z.object({
+  code: z.string(), name: z.string(), share: z.number().nullable(), description: z.string(), level1: z.string(), level2: z.string(),
+});
+export const placeLookupSchema = z.object({
+  point: z.object({ lat: z.number(), lon: z.number() }),
+  zip: z.object({ code: z.string(), city: z.string(), state: z.string() }).nullable(),
+  state: stateCodeSchema,
+  county: z.object({ fips: z.string(), name: z.string() }),
+  ecoregion: ecoregionBriefSchema.extend({ method: z.enum(['boundary', 'county-crosswalk']) }),
+  otherEcoregions: z.array(ecoregionBriefSchema),
+}) satisfies z.ZodType<PlaceLookup>;
+
+const scorePartSchema = z.object({
+  name: z.enum([
+    'native', 'sun', 'moisture', 'soil', 'habitat', 'host-plant', 'monarch-host', 'pollinators', 'birds', 'bloom-gap',
+    'height', 'room', 'deer', 'spread', 'rain-garden', 'shade-garden',
+  ]),
+  points: z.number(),
+  reason: z.string(),
+});
+const scoredSpeciesSchema = z.object({
+  slug: z.string(), score: z.number(), parts: z.array(scorePartSchema), eligible: z.boolean(),
+  ineligibleReason: z.string().optional(), nearMiss: z.boolean(),
+}) satisfies z.ZodType<ScoredSpecies>;
+const scoredWithSpeciesSchema = scoredSpeciesSchema.extend({ species: speciesSummarySchema });
+
+export const recommendationsResponseSchema = z.object({
+  site: siteSchema, ranked: z.array(scoredWithSpeciesSchema), alsoConsider: z.array(scoredWithSpeciesSchema),
+}) satisfies z.ZodType<RecommendationsResponse>;
+
+const paletteResultSchema = z.object({
+  size: z.number().int(),
+  sizeReason: z.string(),
+  chosen: z.array(z.object({
+    slug: z.string(), score: z.number(), parts: z.array(scorePartSchema), roles: z.array(z.string()), locked: z.boolean(),
+  })),
+  objective: z.number(),
+  terms: z.array(z.object({
+    name: z.enum(['fit', 'host-plants', 'bloom-periods', 'flowering-count', 'milkweed', 'grasses', 'height-tiers', 'colours', 'genus-variety']),
+    value: z.number(),
+  })),
+  constraints: z.array(z.object({
+    id: z.enum(['cp42-early', 'cp42-mid', 'cp42-late', 'cp42-flowering', 'monarch-milkweed', 'grass-share', 'height-spread']),
+    rule: z.string(), applies: z.boolean(), met: z.boolean(), detail: z.string(), source: z.string(),
+  })),
+  notices: z.array(z.string()),
+}) satisfies z.ZodType<PaletteResult>;
+
+export const mixQuantitySchema = z.object({
+  slug: z.string(), plants: z.number().int(), spacingIn: z.number(), spacingCm: z.number(), areaSqFt: z.number(),
+  areaSqM: z.number(), seedsToSow: z.number().int(),
+  seedWeight: z.object({ grams: z.number(), ounces: z.number() }).nullable(),
+}) satisfies z.ZodType<MixQuantity>;
+
+export const mixResponseSchema = z.object({
+  site: siteSchema,
+  palette: paletteResultSchema,
+  species: z.record(z.string(), speciesSummarySchema),
+  quantities: z.array(mixQuantitySchema),
+  lossFactor: z.number(),
+}) satisfies z.ZodType<MixResponse>;
+
+export const alternativesResponseSchema = z.object({
+  alternatives: z.array(z.object({
+    slug: z.string(), objectiveChange: z.number(), score: z.number(), parts: z.array(scorePartSchema), species: speciesSummarySchema,
+  })),
+}) satisfies z.ZodType<AlternativesResponse>;
+
+export const savedMixSchema = z.object({
+  id: z.string(), name: z.string(), request: paletteRequestSchema, chosen: z.array(z.string()), ownerName: z.string(), createdAt: isoDateTime,
+}) satisfies z.ZodType<SavedMix, unknown>;
+
+const calendarEventSchema = z.object({
+  date: isoDate,
+  kind: z.enum(CALENDAR_EVENT_KINDS),
+  title: z.string(), detail: z.string(), speciesSlug: z.string().nullable(), method: z.enum(SOWING_METHODS).optional(),
+});
+const calendarWarningSchema = z.object({
+  kind: z.enum(CALENDAR_WARNING_KINDS),
+  speciesSlug: z.string(), days: z.number().optional(), message: z.string(), method: z.enum(SOWING_METHODS).optional(),
+});
+export const sowingCalendarSchema = z.object({
+  events: z.array(calendarEventSchema),
+  warnings: z.array(calendarWarningSchema),
+  schedules: z.array(z.object({
+    speciesSlug: z.string(), method: z.enum(SOWING_METHODS), sowDate: isoDate, readyDate: isoDate.nullable(),
+    events: z.array(calendarEventSchema), warnings: z.array(calendarWarningSchema),
+  })),
+}) satisfies z.ZodType<SowingCalendar>;
+
+/** The error every route may answer: 400s name each bad field. */
+export const apiErrorSchema = z.object({
+  statusCode: z.number().int(),
+  error: z.string(),
+  message: z.string(),
+  fields: z.array(z.object({ field: z.string(), message: z.string() })).optional(),
+  rows: z.array(z.object({ row: z.number().int(), field: z.string(), message: z.string() })).optional(),
+});
+
+export const outboxMessageSchema = z.object({
+  id: z.string(), from: z.string(), to: z.array(z.string()), subject: z.string(), text: z.string(),
+  html: z.string().nullable(), kind: z.string(), groupId: z.string().nullable(), receivedAt: z.string(),
+}) satisfies z.ZodType<OutboxMessage>;
+
+export const invitationSchema = z.object({
+  id: z.string(), email: z.string(), role: z.enum(GROUP_ROLES), expiresAt: z.string(), acceptedAt: z.string().nullable(),
+}) satisfies z.ZodType<Invitation>;
+
+export const invitationPreviewSchema = z.object({
+  groupSlug: z.string(), groupName: z.string(), town: z.string(), state: z.string(), role: z.enum(GROUP_ROLES),
+  email: z.string(), accountExists: z.boolean(), expiresAt: z.string(),
+}) satisfies z.ZodType<InvitationPreview>;
+
