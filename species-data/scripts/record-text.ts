@@ -91,5 +91,5 @@ export function writeRecordText(file: string, text: string): void {
 
 /** One-line JSON for a short array or scalar, matching the files' hand layout (`["a", "b"]`). */
 export function inline(value: unknown): string {
-  return JSON.stringify(value).replace(/","/g, '", "').replace(/,(?=[0-9"\[{])/g, ', ');
+  return JSON.stringify(value).replace(/","/g, '", "').replace(/,(?=[0-9"[{])/g, ', ');
 }

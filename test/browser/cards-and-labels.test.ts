@@ -9,7 +9,7 @@ import { spawnSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { test } from 'node:test';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { openGuardedPage, RESULTS_DIR, screenshot } from './support/browser.js';
 import { useAppInBrowser } from './support/app-in-browser.js';
 

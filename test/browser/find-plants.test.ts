@@ -8,7 +8,7 @@
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { openGuardedPage, screenshot } from './support/browser.js';
 import { useAppInBrowser } from './support/app-in-browser.js';
 

@@ -5,7 +5,6 @@
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
-import type { Browser } from 'playwright-core';
 import { openGuardedPage, screenshot } from './support/browser.js';
 import { useAppInBrowser } from './support/app-in-browser.js';
 

@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, OneToMany, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { GroupMembership } from './group-membership.entity.js';
+// Type-only, with the relation named by entity, so the two entities never import each other at run time.
+import type { GroupMembership } from './group-membership.entity.js';
 
 /** A community growing group; seasons and plant shares hang off it. */
 @Entity({ name: 'groups' })
@@ -27,6 +28,6 @@ export class Group {
   @CreateDateColumn({ name: 'created_at' })
   createdAt: Date;
 
-  @OneToMany(() => GroupMembership, (m) => m.group)
+  @OneToMany('GroupMembership', (m: GroupMembership) => m.group)
   memberships: Relation<GroupMembership[]>;
 }

@@ -1,6 +1,5 @@
 import { sowingDepthSentence } from '../vocabulary/sowing-depth.js';
 import type { Species } from '../types/species.js';
-import { cmToInches, roundTo } from '../units/conversions.js';
 import { DURATIONS } from './durations.js';
 import type { Stratification } from './treatments.js';
 

@@ -1,12 +1,9 @@
 import { z } from 'zod';
-import type { SowingCalendar } from '../sowing-calendar/calendar-types.js';
-import type { PaletteAlternative, PaletteResult, ScoredSpecies } from './recommendation.js';
-import { MAX_LISTED_SLUGS, paletteRequestSchema } from './recommendation.js';
-import type { Site } from './site.js';
+import { type SowingCalendar, isoDateSchema, sowingCalendarRequestSchema } from '../sowing-calendar/calendar-types.js';
+import { type PaletteAlternative, type PaletteResult, type ScoredSpecies, MAX_LISTED_SLUGS, paletteRequestSchema } from './recommendation.js';
+import { type Site, MAX_AREA_SQ_FT, MAX_AREA_SQ_M } from './site.js';
 import type { SpeciesSummary } from './species-query.js';
 import { slugSchema } from './species.js';
-import { isoDateSchema, sowingCalendarRequestSchema } from '../sowing-calendar/calendar-types.js';
-import { MAX_AREA_SQ_FT, MAX_AREA_SQ_M } from './site.js';
 import { squareMetresToSquareFeet } from '../units/conversions.js';
 
 /**

@@ -1,6 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router-dom';
-import { useParams } from 'react-router-dom';
+import { type LoaderFunctionArgs, useParams } from 'react-router-dom';
 import { speciesDetailQueryOptions } from '../api/species/species.queries.js';
 import { bloomWords } from '@homeground/shared';
 import { BloomStrip } from '../features/species-browser/index.js';

@@ -1,12 +1,11 @@
 import { Button, Field, makeStyles, SearchBox, Spinner, tokens } from '@fluentui/react-components';
 import { Add16Regular, Checkmark16Regular } from '@fluentui/react-icons';
-import type { SpeciesSummary } from '@homeground/shared';
+import { type SpeciesSummary, cautionList } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { speciesListQueryOptions } from '../../../api/species/species.queries.js';
 import { ErrorState } from '../../../components/states/index.js';
 import { useDebouncedValue } from '../hooks/use-debounced-value.js';
-import { cautionList } from '@homeground/shared';
 
 const useStyles = makeStyles({
   list: { listStyle: 'none', margin: `${tokens.spacingVerticalS} 0 0`, padding: 0 },

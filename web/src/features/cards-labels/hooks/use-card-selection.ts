@@ -22,6 +22,7 @@ export function useCardSelection() {
   useEffect(() => {
     if (mixId && mix.data) setSlugs([...slugs, ...mix.data.chosen.filter((s) => !slugs.includes(s))]);
     // slugs is read at the moment the mix arrives; re-running on every list change would re-add removed ones.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [mixId, mix.data, setSlugs]);
 
   return {

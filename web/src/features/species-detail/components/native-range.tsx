@@ -1,8 +1,7 @@
-import { STATE_NAMES, US_STATE_CODES } from '@homeground/shared';
+import { STATE_NAMES, US_STATE_CODES, joinWords } from '@homeground/shared';
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import { Map20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
-import { joinWords } from '@homeground/shared';
 import { SECTION_FIELDS } from '../utils/source-labels.js';
 import { GRID_COLUMNS, GRID_ROWS, STATE_TILES } from '../utils/state-grid.js';
 import { FactSection } from './fact-section.js';

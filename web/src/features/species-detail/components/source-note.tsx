@@ -1,7 +1,6 @@
-import type { Species } from '@homeground/shared';
+import { type Species, joinWords } from '@homeground/shared';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { hgTokens } from '../../../theme/index.js';
-import { joinWords } from '@homeground/shared';
 import { sectionSources } from '../utils/source-labels.js';
 
 const useStyles = makeStyles({

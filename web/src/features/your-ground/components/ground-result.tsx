@@ -1,6 +1,5 @@
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
-import type { PlaceLookup, StateCode } from '@homeground/shared';
-import { STATE_NAMES } from '@homeground/shared';
+import { type PlaceLookup, type StateCode, STATE_NAMES } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { ecoregionListQueryOptions } from '../../../api/ecoregions/ecoregions.queries.js';
