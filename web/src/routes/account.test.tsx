@@ -19,8 +19,10 @@ describe('account page', () => {
     expect(await main.findByRole('heading', { level: 1, name: 'Your account' })).toBeInTheDocument();
     expect(main.getByText('Mara Ellsworth')).toBeInTheDocument();
     expect(main.getByText('mara.ellsworth@example.org')).toBeInTheDocument();
-    expect(main.getByText('Member')).toBeInTheDocument();
-    expect(main.getByText('Larkfield Commons Growers').parentElement).toHaveTextContent('Organiser');
+    expect(main.getByText(/^Member: finds plants/)).toBeInTheDocument();
+    const group = main.getByRole('link', { name: 'Larkfield Commons Growers' });
+    expect(group).toHaveAttribute('href', '/groups/larkfield-commons-growers');
+    expect(group.parentElement).toHaveTextContent('Organiser');
   });
 
   it('signs out from the account menu: token and cached profile gone', async () => {
