@@ -6,6 +6,8 @@ import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { EmptyState, QueryState } from '../../../components/states/index.js';
 import { hgTokens } from '../../../theme/index.js';
+import { RouterLink } from '../../../components/links/router-link.js';
+import { paths } from '../../../config/paths.js';
 
 const useStyles = makeStyles({
   list: { listStyleType: 'none', margin: 0, padding: 0, display: 'grid', gap: tokens.spacingVerticalM },
@@ -41,7 +43,9 @@ export function GrowingGroups() {
           <ul className={styles.list}>
             {data.map((g) => (
               <li key={g.id}>
-                <div className={styles.name}>{g.name}</div>
+                <div className={styles.name}>
+                  <RouterLink to={paths.group.build(g.slug)}>{g.name}</RouterLink>
+                </div>
                 <div className={styles.meta}>{describeGroup(g)}</div>
               </li>
             ))}
