@@ -19,7 +19,7 @@ describe('health, stats and docs (e2e)', () => {
     expect(res.body.groups).toBe(1);
     expect(res.body.users).toBe(8);
     const groups = await t.http.get('/api/groups').expect(200);
-    expect(groups.body).toEqual([expect.objectContaining({ slug: 'larkfield-commons-growers', state: 'WI', ecoregionCode: '52', members: 4 })]);
+    expect(groups.body).toEqual([expect.objectContaining({ slug: 'larkfield-commons-growers', state: 'WI', ecoregionCode: '52', members: 5 })]);
   });
 
   it('serves OpenAPI docs from packaged assets, with no CDN in the page', async () => {
