@@ -41,3 +41,5 @@ export * from './types/mix-api.js';
 export * from './types/mail.js';
 export * from './types/invitation.js';
 export * from './vocabulary/index.js';
+export * from './types/season.js';
+export * from './season-planning/index.js';
