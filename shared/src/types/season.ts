@@ -14,6 +14,11 @@ export const MAX_TARGET_PLANTS = 5000;
 /** Most species on one season plan. */
 export const MAX_TARGETS = 200;
 
+/** Methods a new season assumes until the organiser says: the three the demo growers use. */
+export const DEFAULT_SEASON_METHODS: readonly SowingMethod[] = ['winter-sowing', 'outdoor-pot-winter', 'indoor-lights'];
+/** Milkweed share of the plants a new season assumes (the organiser sets their own, e.g. 0.5). */
+export const DEFAULT_MILKWEED_SHARE = 0.25;
+
 /** The season's dates and seed-list settings, as an organiser writes them. */
 export const seasonRequestSchema = z
   .object({
