@@ -18,6 +18,7 @@ import { SavedMixesModule } from './saved-mixes/saved-mixes.module.js';
 import { UsersModule } from './users/users.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { InvitationsModule } from './invitations/invitations.module.js';
+import { SeasonsModule } from './seasons/seasons.module.js';
 
 /** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
 function webApp(): DynamicModule[] {
@@ -47,6 +48,7 @@ function webApp(): DynamicModule[] {
     RecommendationsModule,
     SavedMixesModule,
     PlanningModule,
+    SeasonsModule,
     DemoModule,
   ],
 })

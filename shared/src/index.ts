@@ -43,3 +43,5 @@ export * from './types/mail.js';
 export * from './types/invitation.js';
 export * from './vocabulary/index.js';
 export * from './types/response-schemas.js';
+export * from './types/season.js';
+export * from './season-planning/index.js';

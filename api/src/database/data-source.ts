@@ -12,14 +12,17 @@ import { CreateSavedMixes1764892800000 } from './migrations/1764892800000-create
 import { CreateOutbox1764979200000 } from './migrations/1764979200000-create-outbox.js';
 import { AllowGroupMembers1765022400000 } from './migrations/1765022400000-allow-group-members.js';
 import { CreateGroupInvitations1765065600000 } from './migrations/1765065600000-create-group-invitations.js';
+import { CreateSeasons1765152000000 } from './migrations/1765152000000-create-seasons.js';
 import { InvitationRow } from '../invitations/invitation.entity.js';
 import { OutboxMessageRow } from '../mail/outbox-message.entity.js';
 import { SavedMixRow } from '../saved-mixes/saved-mix.entity.js';
+import { SeasonTargetRow } from '../seasons/season-target.entity.js';
+import { SeasonRow } from '../seasons/season.entity.js';
 import { SpeciesPhoto } from '../species/species-photo.entity.js';
 import { SpeciesRow } from '../species/species.entity.js';
 
-export const ENTITIES = [User, Group, GroupMembership, SpeciesRow, SpeciesPhoto, SavedMixRow, OutboxMessageRow, InvitationRow];
-export const MIGRATIONS = [CreateUsersAndGroups1764633600000, CreateCatalogue1764720000000, CreateEcoregionBoundaries1764806400000, CreateSavedMixes1764892800000, CreateOutbox1764979200000, AllowGroupMembers1765022400000, CreateGroupInvitations1765065600000];
+export const ENTITIES = [User, Group, GroupMembership, SpeciesRow, SpeciesPhoto, SavedMixRow, OutboxMessageRow, InvitationRow, SeasonRow, SeasonTargetRow];
+export const MIGRATIONS = [CreateUsersAndGroups1764633600000, CreateCatalogue1764720000000, CreateEcoregionBoundaries1764806400000, CreateSavedMixes1764892800000, CreateOutbox1764979200000, AllowGroupMembers1765022400000, CreateGroupInvitations1765065600000, CreateSeasons1765152000000];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */
 export function databaseOptions(config: Pick<AppConfig, 'databasePath'>): DataSourceOptions {

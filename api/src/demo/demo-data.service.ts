@@ -5,10 +5,13 @@ import { hashPassword } from '../auth/password.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { GroupMembership } from '../groups/group-membership.entity.js';
 import { Group } from '../groups/group.entity.js';
+import { SeasonTargetRow } from '../seasons/season-target.entity.js';
+import { SeasonRow } from '../seasons/season.entity.js';
 import { User } from '../users/user.entity.js';
 import { DEMO_GROUP, DEMO_PEOPLE } from './demo-people.js';
+import { DEMO_SEASON, DEMO_TARGETS } from './demo-season.js';
 
-/** Loads the invented Larkfield group and people at start (idempotent); never in production. */
+/** Loads the invented Larkfield group, people and season at start (idempotent); never in production. */
 @Injectable()
 export class DemoDataService implements OnApplicationBootstrap {
   private readonly logger = new Logger('DemoData');
@@ -39,6 +42,13 @@ export class DemoDataService implements OnApplicationBootstrap {
           email: p.email, displayName: p.displayName, passwordHash: hashes[i], role: p.role, isDemo: true,
         }));
         if (p.groupRole) await tx.save(GroupMembership, tx.create(GroupMembership, { userId: user.id, groupId: group.id, role: p.groupRole }));
+      }
+      // The season in progress, so the season pages show a living plan; an organiser's edits are kept.
+      if (!(await tx.exists(SeasonRow, { where: { groupId: group.id, year: DEMO_SEASON.year } }))) {
+        const season = await tx.save(SeasonRow, tx.create(SeasonRow, { groupId: group.id, ...DEMO_SEASON }));
+        await tx.save(SeasonTargetRow, DEMO_TARGETS.map((t, position) => tx.create(SeasonTargetRow, {
+          seasonId: season.id, slug: t.slug, targetPlants: t.targetPlants, germinationRatePct: t.germinationRatePct ?? null, position,
+        })));
       }
       return missing.length;
     });

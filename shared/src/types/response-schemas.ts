@@ -6,9 +6,11 @@ import {
 import { ecoregionSchema } from './ecoregion.js';
 import type { Invitation, InvitationPreview } from './invitation.js';
 import type { OutboxMessage } from './mail.js';
+import { BLOOM_PERIODS, paletteRequestSchema, type PaletteResult, type ScoredSpecies } from './recommendation.js';
+import type { Season, ShareList } from './season.js';
+import type { SeedList } from '../season-planning/seed-list.js';
 import type { AlternativesResponse, MixQuantity, MixResponse, RecommendationsResponse, SavedMix } from './mix-api.js';
 import type { PlaceLookup } from './place.js';
-import { paletteRequestSchema, type PaletteResult, type ScoredSpecies } from './recommendation.js';
 import { siteSchema } from './site.js';
 import {
   CAUTION_KINDS, FLOWER_COLOURS, GROWTH_FORMS, MOISTURE_LEVELS, SOWING_METHODS, speciesSchema, stateCodeSchema, SUN_LEVELS,
@@ -203,4 +205,43 @@ export const invitationPreviewSchema = z.object({
   groupSlug: z.string(), groupName: z.string(), town: z.string(), state: z.string(), role: z.enum(GROUP_ROLES),
   email: z.string(), accountExists: z.boolean(), expiresAt: z.string(),
 }) satisfies z.ZodType<InvitationPreview>;
+
+const seasonTargetAnswer = z.object({
+  slug: z.string(), targetPlants: z.number().int(), germinationRatePct: z.number().optional(),
+  commonName: z.string(), scientificName: z.string(),
+});
+
+export const seasonSchema = z.object({
+  groupSlug: z.string(), groupName: z.string(),
+  place: z.object({ town: z.string(), state: z.string(), ecoregionCode: z.string().nullable() }),
+  year: z.number().int(), lastFrost: z.string(), plantShareDate: z.string(), methods: z.array(z.enum(SOWING_METHODS)),
+  milkweedShare: z.number(), lossFactor: z.number(), seedsPerPacket: z.number(),
+  targets: z.array(seasonTargetAnswer), updatedAt: z.string(),
+}) satisfies z.ZodType<Season>;
+
+export const shareListSchema = z.object({
+  ecoregionCode: z.string(), state: z.string(), methods: z.array(z.enum(SOWING_METHODS)), milkweedShare: z.number(),
+  totalPlants: z.number(),
+  proposals: z.array(z.object({
+    slug: z.string(), commonName: z.string(), scientificName: z.string(), isMilkweed: z.boolean(),
+    layer: z.enum(['herbaceous', 'woody']), bloomPeriods: z.array(z.enum(BLOOM_PERIODS)),
+    sunOptimum: z.array(z.enum(SUN_LEVELS)), moistureOptimum: z.array(z.enum(MOISTURE_LEVELS)),
+    suggestedPlants: z.number(), why: z.array(z.string()),
+  })),
+  notes: z.array(z.string()),
+}) satisfies z.ZodType<ShareList>;
+
+export const seasonSeedListSchema = z.object({
+  groupSlug: z.string(), year: z.number().int(), lossFactor: z.number(), seedsPerPacket: z.number(),
+  rows: z.array(z.object({
+    slug: z.string(), commonName: z.string(), scientificName: z.string(), targetPlants: z.number(),
+    germinationRatePct: z.number(), germinationFrom: z.enum(['record', 'yours']), lossFactor: z.number(),
+    seedsToSow: z.number(), seedsPerPound: z.number().nullable(), grams: z.number().nullable(), ounces: z.number().nullable(),
+    packets: z.number(), buyBy: z.enum(['packets', 'weight']), collectLocally: z.boolean(), collectNotes: z.array(z.string()),
+    neverCollectWild: z.boolean(),
+    cautions: z.array(z.object({ kind: z.enum(CAUTION_KINDS), title: z.string(), text: z.string() })),
+  })),
+  totals: z.object({ targetPlants: z.number(), seedsToSow: z.number(), grams: z.number(), ounces: z.number(), packets: z.number() }),
+  cautions: z.array(z.string()),
+}) satisfies z.ZodType<SeedList & { groupSlug: string; year: number }>;
 

@@ -1,0 +1,149 @@
+import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import {
+  DEFAULT_LOSS_FACTOR, DEFAULT_MILKWEED_SHARE, DEFAULT_SEASON_METHODS, DEFAULT_SEEDS_PER_PACKET, pastSeasonDateFields,
+  proposeShareList, seedList, seedListToCsv, type Season, type SeasonRequest, type SeedList, type ShareList,
+  type ShareListRequest, type StateCode, type TargetsRequest, type Group
+} from '@homeground/shared';
+import { DataSource, Repository } from 'typeorm';
+import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { GroupsService } from '../groups/groups.service.js';
+import { MixContextService } from '../mix-context/mix-context.service.js';
+import { SeasonTargetRow } from './season-target.entity.js';
+import { SeasonRow } from './season.entity.js';
+import { toSeason } from './season.mapper.js';
+
+/** Species a share list proposes when the organiser does not say: a dozen makes a plant share worth the trip. */
+const DEFAULT_SHARE_LIST_COUNT = 12;
+
+/** A seed list with the season it belongs to. */
+export type SeasonSeedList = SeedList & { groupSlug: string; year: number };
+
+/**
+ * A group's season plan. Organisers of the group (and admins) write it; every member, grower and
+ * organiser of the group reads it. Each write is one transaction; bad input writes nothing.
+ */
+@Injectable()
+export class SeasonsService {
+  constructor(
+    @InjectRepository(SeasonRow) private readonly seasons: Repository<SeasonRow>,
+    @InjectRepository(SeasonTargetRow) private readonly targets: Repository<SeasonTargetRow>,
+    @InjectDataSource() private readonly db: DataSource,
+    private readonly groups: GroupsService,
+    private readonly ctx: MixContextService,
+  ) {}
+
+  async get(slug: string, user: AuthenticatedUser): Promise<Season> {
+    const group = await this.readable(slug, user);
+    const season = await this.latest(group);
+    return this.toDto(group, season, await this.targetsOf(season));
+  }
+
+  /** Sets the season's dates and settings (creates the season for that year if new). `today` is the server's date. */
+  async put(slug: string, user: AuthenticatedUser, req: SeasonRequest, today: string): Promise<Season> {
+    const group = await this.managed(slug, user);
+    const past = pastSeasonDateFields(req, today);
+    if (past.length) throw new BadRequestException({ message: `Please check: ${past.map((f) => `${f.field} ${f.message}`).join('; ')}`, fields: past });
+    const saved = await this.db.transaction(async (tx) => {
+      const existing = await tx.findOne(SeasonRow, { where: { groupId: group.id, year: req.year } });
+      const row = existing ?? tx.create(SeasonRow, {
+        groupId: group.id, year: req.year, methods: [...DEFAULT_SEASON_METHODS], milkweedShare: DEFAULT_MILKWEED_SHARE,
+        lossFactor: DEFAULT_LOSS_FACTOR, seedsPerPacket: DEFAULT_SEEDS_PER_PACKET,
+      });
+      // Settings left out keep their value: an organiser moving the date does not reset the milkweed share.
+      Object.assign(row, {
+        lastFrost: req.lastFrost,
+        plantShareDate: req.plantShareDate,
+        ...(req.methods && { methods: req.methods }),
+        ...(req.milkweedShare !== undefined && { milkweedShare: req.milkweedShare }),
+        ...(req.lossFactor !== undefined && { lossFactor: req.lossFactor }),
+        ...(req.seedsPerPacket !== undefined && { seedsPerPacket: req.seedsPerPacket }),
+      });
+      return tx.save(SeasonRow, row);
+    });
+    return this.toDto(group, saved, await this.targetsOf(saved));
+  }
+
+  /** Proposes a share list for the group's ecoregion; writes nothing. */
+  async propose(slug: string, user: AuthenticatedUser, req: ShareListRequest): Promise<ShareList> {
+    const group = await this.managed(slug, user);
+    if (!group.ecoregionCode) throw new ConflictException('This group has no ecoregion yet: set its place first.');
+    const season = await this.seasons.findOne({ where: { groupId: group.id }, order: { year: 'DESC' } });
+    return proposeShareList({
+      species: this.ctx.species(),
+      ecoregionCode: group.ecoregionCode,
+      state: group.state as StateCode,
+      methods: req.methods ?? season?.methods ?? DEFAULT_SEASON_METHODS,
+      milkweedShare: req.milkweedShare ?? season?.milkweedShare ?? DEFAULT_MILKWEED_SHARE,
+      count: req.count ?? DEFAULT_SHARE_LIST_COUNT,
+      totalPlants: req.totalPlants,
+    });
+  }
+
+  /** Replaces the season's targets with the list given, in its order. */
+  async setTargets(slug: string, user: AuthenticatedUser, req: TargetsRequest): Promise<Season> {
+    const group = await this.managed(slug, user);
+    const season = await this.latest(group);
+    this.ctx.assertKnown(req.targets.map((t, i) => ({ field: `targets.${i}.slug`, slug: t.slug })));
+    const rows = await this.db.transaction(async (tx) => {
+      await tx.delete(SeasonTargetRow, { seasonId: season.id });
+      const fresh = req.targets.map((t, position) => tx.create(SeasonTargetRow, {
+        seasonId: season.id, slug: t.slug, targetPlants: t.targetPlants, germinationRatePct: t.germinationRatePct ?? null, position,
+      }));
+      const saved = await tx.save(SeasonTargetRow, fresh);
+      // The season's updatedAt tells readers the plan changed.
+      await tx.update(SeasonRow, { id: season.id }, { updatedAt: new Date() });
+      return saved;
+    });
+    return this.toDto(group, (await this.seasons.findOneByOrFail({ id: season.id })), rows);
+  }
+
+  async seedList(slug: string, user: AuthenticatedUser): Promise<SeasonSeedList> {
+    const group = await this.readable(slug, user);
+    const season = await this.latest(group);
+    const targets = (await this.targetsOf(season)).flatMap((t) => {
+      const species = this.ctx.get(t.slug);
+      // A target renamed away in the catalogue has no record to count from; the season page still lists it.
+      return species ? [{ species, targetPlants: t.targetPlants, germinationRatePct: t.germinationRatePct ?? undefined }] : [];
+    });
+    const list = seedList(targets, { state: group.state as StateCode, lossFactor: season.lossFactor, seedsPerPacket: season.seedsPerPacket });
+    return { groupSlug: group.slug, year: season.year, ...list };
+  }
+
+  async seedListCsv(slug: string, user: AuthenticatedUser): Promise<string> {
+    return seedListToCsv(await this.seedList(slug, user));
+  }
+
+  /** The group, when the caller has any role in it (member, grower, organiser; admins act as organisers). */
+  private async readable(slug: string, user: AuthenticatedUser): Promise<Group> {
+    const group = await this.groups.getDto(slug);
+    if (!(await this.groups.roleOf(user, group.id))) throw new ForbiddenException('Only people in this group can see its season plan.');
+    return group;
+  }
+
+  private async managed(slug: string, user: AuthenticatedUser): Promise<Group> {
+    const group = await this.groups.getDto(slug);
+    if ((await this.groups.roleOf(user, group.id)) !== 'organiser') {
+      throw new ForbiddenException('Only an organiser of this group can change its season plan.');
+    }
+    return group;
+  }
+
+  /** The group's newest season. */
+  private async latest(group: Group): Promise<SeasonRow> {
+    const season = await this.seasons.findOne({ where: { groupId: group.id }, order: { year: 'DESC' } });
+    if (!season) throw new NotFoundException(`${group.name} has no season plan yet: an organiser sets its dates first.`);
+    return season;
+  }
+
+  private targetsOf(season: SeasonRow): Promise<SeasonTargetRow[]> {
+    return this.targets.find({ where: { seasonId: season.id }, order: { position: 'ASC' } });
+  }
+
+  private toDto(group: Group, season: SeasonRow, targets: readonly SeasonTargetRow[]): Season {
+    return toSeason(group, season, targets, (slug) => {
+      const s = this.ctx.get(slug);
+      return s && { commonName: s.commonNames[0], scientificName: s.scientificName };
+    });
+  }
+}
