@@ -1,7 +1,7 @@
 import { BLOOM_PERIODS, type BloomPeriod, type PaletteConstraint } from '../types/recommendation.js';
 import { joinWords } from '../scoring/plain-words.js';
 import { groundWords, lostOut, names, onlyAvailable, type ConstraintInput } from './constraint-input.js';
-import { OBJECTIVE_WEIGHTS, grassTargets } from './objective.js';
+import { OBJECTIVE_WEIGHTS, grassTargets } from './objective-weights.js';
 
 /** CP42 rules (CP42-IN, CHECK-VALUES §3, R): ≥ 3 flowering species per bloom period, ≥ 9 in all. */
 const CP42 = 'nrcs-cp42-indiana-2012';

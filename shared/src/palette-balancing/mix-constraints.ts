@@ -1,7 +1,7 @@
 import type { PaletteConstraint } from '../types/recommendation.js';
 import { joinWords, stateName } from '../scoring/plain-words.js';
 import { groundWords, lostOut, names, onlyAvailable, type ConstraintInput } from './constraint-input.js';
-import { grassTargets } from './objective.js';
+import { grassTargets } from './objective-weights.js';
 import type { HeightTier } from './palette-item.js';
 
 /** NRCS E327136Z2: at least one native Asclepias species when monarchs are a goal (R). */

@@ -1,5 +1,5 @@
 import { BLOOM_PERIODS, type ObjectiveTerm } from '../types/recommendation.js';
-import type { MixEvaluator } from './mix-evaluator.js';
+import type { Objective } from './mix-evaluator.js';
 import { OBJECTIVE_WEIGHTS, grassTargets, type ObjectiveSettings } from './objective-weights.js';
 import { paletteEvaluator } from './palette-evaluator.js';
 import type { PaletteItem } from './palette-item.js';
@@ -54,15 +54,8 @@ export function objectiveTerms(items: readonly PaletteItem[], settings: Objectiv
   ];
 }
 
-/**
- * A mix objective: items (in slug order) → value to maximise. `evaluator`, when present, gives the
- * same value incrementally (add or remove one item in O(1)), which the optimiser uses for its
- * millions of trial moves; without it the optimiser re-evaluates whole sets.
- */
-export interface Objective<T> {
-  (items: readonly T[]): number;
-  evaluator?: (pool: readonly T[]) => MixEvaluator;
-}
+// The Objective type lives beside the evaluator it names, so the evaluators need not import this file (no cycle).
+export type { Objective } from './mix-evaluator.js';
 
 export function makeObjective(settings: ObjectiveSettings): Objective<PaletteItem> {
   const objective: Objective<PaletteItem> = (items) => objectiveTerms(items, settings).reduce((s, t) => s + t.value, 0);

@@ -1,7 +1,6 @@
 import { BLOOM_PERIODS } from '../types/recommendation.js';
-import { recomputingEvaluator, type MixEvaluator } from './mix-evaluator.js';
+import { recomputingEvaluator, type MixEvaluator, type Objective } from './mix-evaluator.js';
 import { OBJECTIVE_WEIGHTS, grassTargets, type ObjectiveSettings } from './objective-weights.js';
-import type { Objective } from './objective.js';
 import type { PaletteItem } from './palette-item.js';
 
 /** Colour and tier sets are held as bit masks: enough bits for every colour a record can name. */

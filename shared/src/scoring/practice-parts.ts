@@ -1,0 +1,68 @@
+import type { ScorePart } from '../types/recommendation.js';
+import type { Site } from '../types/site.js';
+import type { Species } from '../types/species.js';
+import { layerOf } from './layers.js';
+import { commercialAvailabilityOf, type CommercialAvailability } from './species-traits.js';
+import { beeWords, caterpillarWords, hostLevelOf, hostsSpecialistBees } from './wildlife-value.js';
+
+/** Garden-practice and wildlife parts: whether plants or seed can be had, ease from seed, host value within the layer, bees. */
+
+const AVAILABILITY: Record<CommercialAvailability, { points: number; reason: string }> = {
+  routine: { points: 1.5, reason: 'Seed and plants are commonly sold (USDA commercial availability).' },
+  'contract-only': { points: -1, reason: 'Seed is grown mostly on contract, so plants can be hard to find.' },
+  'field-collection-only': { points: -2, reason: 'Seed is only collected from the wild, so plants are hard to buy.' },
+  'none-known': { points: -3, reason: 'No commercial source is known: hard to buy as seed or plants.' },
+};
+
+/**
+ * Staples of native-plant nurseries in the East and Midwest, sold as plugs nearly everywhere
+ * (common practice, from memory). Used only while a record has no USDA availability value.
+ */
+const NURSERY_STAPLES: ReadonlySet<string> = new Set([
+  'Asclepias tuberosa', 'Asclepias incarnata', 'Asclepias syriaca', 'Asclepias verticillata', 'Echinacea purpurea', 'Echinacea pallida',
+  'Rudbeckia fulgida', 'Monarda fistulosa', 'Monarda didyma', 'Liatris spicata', 'Liatris aspera', 'Liatris pycnostachya',
+  'Symphyotrichum novae-angliae', 'Symphyotrichum laeve', 'Symphyotrichum oblongifolium', 'Symphyotrichum cordifolium',
+  'Solidago speciosa', 'Solidago rigida', 'Solidago nemoralis', 'Solidago caesia', 'Solidago flexicaulis', 'Eutrochium maculatum',
+  'Eutrochium purpureum', 'Eupatorium perfoliatum', 'Lobelia cardinalis', 'Lobelia siphilitica', 'Iris versicolor', 'Iris virginica',
+  'Verbena hastata', 'Chelone glabra', 'Vernonia fasciculata', 'Penstemon digitalis', 'Penstemon hirsutus', 'Zizia aurea',
+  'Pycnanthemum virginianum', 'Pycnanthemum tenuifolium', 'Dalea purpurea', 'Amorpha canescens', 'Baptisia australis',
+  'Schizachyrium scoparium', 'Sporobolus heterolepis', 'Bouteloua curtipendula', 'Andropogon gerardii', 'Sorghastrum nutans',
+  'Panicum virgatum', 'Elymus canadensis', 'Carex pensylvanica', 'Carex vulpinoidea', 'Carex stricta', 'Carex muskingumensis',
+  'Aquilegia canadensis', 'Geranium maculatum', 'Polemonium reptans', 'Tiarella cordifolia', 'Phlox divaricata', 'Mertensia virginica',
+  'Packera aurea', 'Osmundastrum cinnamomeum', 'Matteuccia struthiopteris', 'Athyrium filix-femina', 'Polystichum acrostichoides',
+  'Adiantum pedatum', 'Onoclea sensibilis', 'Coreopsis lanceolata', 'Ratibida pinnata', 'Silphium perfoliatum', 'Heliopsis helianthoides',
+  'Allium cernuum', 'Tradescantia ohiensis', 'Veronicastrum virginicum', 'Eryngium yuccifolium', 'Asarum canadense',
+]);
+
+export function availabilityPart(species: Species): ScorePart | null {
+  const a = commercialAvailabilityOf(species);
+  if (a !== null) return { name: 'availability', ...AVAILABILITY[a] };
+  if (NURSERY_STAPLES.has(species.scientificName)) {
+    return { name: 'availability', points: 1.5, reason: 'Easy to find: native-plant nurseries commonly sell it.' };
+  }
+  return null;
+}
+
+/** Easy from seed: no treatment, or a cold-moist spell of two months at most (the trade's usual winter sowing). */
+export function seedEasePart(species: Species): ScorePart | null {
+  const steps = species.germination.treatments;
+  const easy = steps.every((t) => t.kind === 'none' || (t.kind === 'cold-moist' && (t.days ?? 0) <= 60));
+  if (!easy) return null;
+  return { name: 'seed-ease', points: 0.5, reason: 'Easy to raise from seed.' };
+}
+
+/** Caterpillar host value within the species' layer, in words; points by level, the same scale in both layers. */
+const HOST_POINTS = { top: 3, good: 2, some: 0.75, none: 0 } as const;
+
+export function layeredHostPart(species: Species): ScorePart | null {
+  const level = hostLevelOf(species);
+  const reason = caterpillarWords(species);
+  if (level === 'none' || reason === null) return null;
+  return { name: 'host-plant', points: HOST_POINTS[level], reason };
+}
+
+export function beesPart(species: Species, site: Site): ScorePart | null {
+  if (!site.goals.includes('pollinators') || layerOf(species) !== 'herbaceous' && species.growthForm !== 'shrub') return null;
+  if (!hostsSpecialistBees(species)) return null;
+  return { name: 'bees', points: 1, reason: beeWords(species) ?? 'Flowers for bees.' };
+}

@@ -1,0 +1,81 @@
+import type { ScorePart } from '../types/recommendation.js';
+import type { Site } from '../types/site.js';
+import type { Species } from '../types/species.js';
+import { MOISTURE_WORDS, SUN_WORDS } from './plain-words.js';
+import { moistureOptimumOf, needsAcidSoil, sunOptimumOf, wetlandIndicatorOf, type WetlandIndicator } from './species-traits.js';
+import { PartCache } from './word-cache.js';
+
+/**
+ * Graded site fit: the hard checks only say a species can grow here; these parts tell where it
+ * thrives from what it merely tolerates, so a wetland plant leads on a wet site and a dry-prairie
+ * plant on a dry one. Points are Homeground's own.
+ */
+export const FIT_POINTS = {
+  /** The site's level is in the species' optimum (the whole range when the record has no optimum). */
+  optimum: 2,
+  /** The species' range stops short of the opposite end (a wet-site plant that takes no dry soil). */
+  specialist: 1.5,
+  /** A woodland plant (takes shade) on a full-sun site, or a sun plant in shade: it copes, no more. */
+  offEnd: -1,
+} as const;
+
+/** Wetland indicator points by site moisture (National Wetland Plant List classes; Homeground's weights). */
+const WETLAND_POINTS: Record<Site['moisture'], Record<WetlandIndicator, number>> = {
+  wet: { OBL: 2, FACW: 1.5, FAC: 0.5, FACU: -1, UPL: -2 },
+  medium: { OBL: -1, FACW: 0, FAC: 0.5, FACU: 0.5, UPL: 0 },
+  dry: { OBL: -2, FACW: -1.5, FAC: 0, FACU: 0.5, UPL: 1 },
+};
+
+const WETLAND_WORDS: Record<WetlandIndicator, string> = {
+  OBL: 'almost always found in wetlands',
+  FACW: 'usually found in wetlands',
+  FAC: 'found in wetlands and uplands alike',
+  FACU: 'usually found in uplands',
+  UPL: 'almost never found in wetlands',
+};
+
+const thriveParts = new PartCache<string>();
+
+/** How well the sun and moisture suit the species, as one "thrives" part (or null when it only copes). */
+export function thrivesPart(species: Species, site: Site): ScorePart | null {
+  let points = 0;
+  const good: string[] = [];
+  const sunOpt = sunOptimumOf(species);
+  const moistOpt = moistureOptimumOf(species);
+  if (sunOpt.includes(site.sun)) { points += FIT_POINTS.optimum; good.push(SUN_WORDS[site.sun]); }
+  if (moistOpt.includes(site.moisture)) { points += FIT_POINTS.optimum; good.push(`${MOISTURE_WORDS[site.moisture]} soil`); }
+  if ((site.moisture === 'wet' && !species.moisture.includes('dry')) || (site.moisture === 'dry' && !species.moisture.includes('wet'))) {
+    points += FIT_POINTS.specialist;
+  }
+  if ((site.sun === 'full' && !species.sun.includes('shade')) || (site.sun === 'shade' && !species.sun.includes('full'))) {
+    points += FIT_POINTS.specialist;
+  }
+  if ((site.sun === 'full' && species.sun[0] === 'shade') || (site.sun === 'shade' && species.sun[0] === 'full')) points += FIT_POINTS.offEnd;
+  if (points <= 0) return null;
+  const key = `${points}|${good.join('+')}|${site.sun}${site.moisture}`;
+  const cached = thriveParts.get(key);
+  if (cached !== undefined) return cached;
+  const reason = good.length === 2
+    ? `Thrives in ${good[1]} and ${good[0]}, as on your ground.`
+    : good.length === 1 ? `Does best in ${good[0]}, as on your ground.` : `A plant of ground like yours.`;
+  return thriveParts.keep(key, { name: 'thrives', points, reason });
+}
+
+export function wetlandPart(species: Species, site: Site): ScorePart | null {
+  const indicator = wetlandIndicatorOf(species);
+  if (indicator === null) return null;
+  const points = WETLAND_POINTS[site.moisture][indicator];
+  if (points === 0) return null;
+  return { name: 'wetland-class', points, reason: `In the wild it is ${WETLAND_WORDS[indicator]} (National Wetland Plant List).` };
+}
+
+export function acidSoilPart(species: Species): ScorePart | null {
+  if (!needsAcidSoil(species)) return null;
+  return { name: 'acid-soil', points: -2, reason: 'Needs acid soil: test yours first, as many yard soils are near neutral.' };
+}
+
+/** Ferns belong in shade mixes (common practice): they fill the ground under trees where few flowers bloom. */
+export function fernPart(species: Species, site: Site): ScorePart | null {
+  if (species.growthForm !== 'fern' || site.sun === 'full') return null;
+  return { name: 'fern', points: site.sun === 'shade' ? 2.5 : 1, reason: 'A fern to fill the shade between the flowers.' };
+}
