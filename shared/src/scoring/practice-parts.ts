@@ -1,7 +1,8 @@
 import type { ScorePart } from '../types/recommendation.js';
 import type { Site } from '../types/site.js';
 import type { Species } from '../types/species.js';
-import { layerOf } from './layers.js';
+import { SMALL_BED_SQ_FT, layerOf } from './layers.js';
+import { formatHeightCm } from '../units/format-units.js';
 import { commercialAvailabilityOf, type CommercialAvailability } from './species-traits.js';
 import { beeWords, caterpillarWords, hostLevelOf, hostsSpecialistBees } from './wildlife-value.js';
 
@@ -65,4 +66,12 @@ export function beesPart(species: Species, site: Site): ScorePart | null {
   if (!site.goals.includes('pollinators') || layerOf(species) !== 'herbaceous' && species.growthForm !== 'shrub') return null;
   if (!hostsSpecialistBees(species)) return null;
   return { name: 'bees', points: 1, reason: beeWords(species) ?? 'Flowers for bees.' };
+}
+
+/** Over 6 ft (180 cm) a perennial towers over a small bed and flops onto its neighbours (common practice). */
+export const TALL_FOR_SMALL_BED_CM = 180;
+
+export function scalePart(species: Species, site: Site): ScorePart | null {
+  if (site.areaSqFt >= SMALL_BED_SQ_FT || layerOf(species) === 'woody' || species.heightCm.max <= TALL_FOR_SMALL_BED_CM) return null;
+  return { name: 'height', points: -2, reason: `Grows up to ${formatHeightCm(species.heightCm.max)}: tall for a small bed.` };
 }

@@ -8,9 +8,9 @@ import { hardCheckOutcome } from './hard-check-outcome.js';
 import { catalogueCoverage } from './coverage.js';
 import { checkHeight, checkMoisture, checkNative, checkRoom, checkSun, type CheckResult } from './hard-checks.js';
 import { birdsPart, monarchPart, pollinatorPart } from './wildlife-parts.js';
-import { availabilityPart, beesPart, layeredHostPart, seedEasePart } from './practice-parts.js';
+import { availabilityPart, beesPart, layeredHostPart, scalePart, seedEasePart } from './practice-parts.js';
 import { checkEcoregion, checkLayer, checkLifespan, checkSpreader } from './practice-checks.js';
-import { acidSoilPart, fernPart, thrivesPart, wetlandPart } from './site-fit-parts.js';
+import { acidSoilPart, communityPart, fernPart, thrivesPart, wetlandPart } from './site-fit-parts.js';
 
 export interface ScoringContext {
   /** The mix chosen so far: species that bloom when it has least score higher. */
@@ -37,6 +37,7 @@ export function scoreSpecies(species: Species, site: Site, region: RegionContext
   takeCheck(checkLifespan(species), parts, verdict);
   takeCheck(checkSpreader(species, site), parts, verdict);
   addPart(thrivesPart(species, site), parts);
+  addPart(communityPart(species, site), parts);
   addPart(wetlandPart(species, site), parts);
   addPart(acidSoilPart(species), parts);
   addPart(fernPart(species, site), parts);
@@ -46,6 +47,7 @@ export function scoreSpecies(species: Species, site: Site, region: RegionContext
   addPart(beesPart(species, site), parts);
   addPart(availabilityPart(species), parts);
   addPart(seedEasePart(species), parts);
+  addPart(scalePart(species, site), parts);
   addPart(monarchPart(species, site), parts);
   addPart(pollinatorPart(species, site), parts);
   addPart(birdsPart(species, site), parts);

@@ -1,6 +1,6 @@
 import type { ScorePart } from '../types/recommendation.js';
 import type { Site } from '../types/site.js';
-import type { Species } from '../types/species.js';
+import type { Habitat, Species } from '../types/species.js';
 import { MOISTURE_WORDS, SUN_WORDS } from './plain-words.js';
 import { moistureOptimumOf, needsAcidSoil, sunOptimumOf, wetlandIndicatorOf, type WetlandIndicator } from './species-traits.js';
 import { PartCache } from './word-cache.js';
@@ -78,4 +78,27 @@ export function acidSoilPart(species: Species): ScorePart | null {
 export function fernPart(species: Species, site: Site): ScorePart | null {
   if (species.growthForm !== 'fern' || site.sun === 'full') return null;
   return { name: 'fern', points: site.sun === 'shade' ? 2.5 : 1, reason: 'A fern to fill the shade between the flowers.' };
+}
+
+/**
+ * The natural communities that mark a plant of dry, wet or shaded ground (Homeground's grouping of
+ * the catalogue's habitat words): a species of glades and sand prairies leads on a dry site, one of
+ * marshes and wet prairies on a wet site, one of forests in shade.
+ */
+const DRY_COMMUNITIES: ReadonlySet<Habitat> = new Set(['sand-prairie', 'glade', 'rock-outcrop', 'shortgrass-prairie', 'mixed-grass-prairie', 'dune', 'pine-barrens']);
+const WET_COMMUNITIES: ReadonlySet<Habitat> = new Set(['marsh', 'wetland', 'fen-bog', 'wet-prairie', 'streambank']);
+const SHADE_COMMUNITIES: ReadonlySet<Habitat> = new Set(['forest', 'floodplain-forest']);
+
+const COMMUNITY_WORDS = {
+  dry: 'A plant of dry prairies, glades and sands, at home on dry ground like yours.',
+  wet: 'A plant of marshes, wet prairies and streambanks, at home in wet ground like yours.',
+  shade: 'A woodland plant, at home in shade like yours.',
+} as const;
+
+export function communityPart(species: Species, site: Site): ScorePart | null {
+  const kind = site.moisture === 'dry' ? 'dry' : site.moisture === 'wet' ? 'wet' : site.sun === 'shade' ? 'shade' : null;
+  if (kind === null) return null;
+  const set = kind === 'dry' ? DRY_COMMUNITIES : kind === 'wet' ? WET_COMMUNITIES : SHADE_COMMUNITIES;
+  if (!species.habitats.some((h) => set.has(h))) return null;
+  return { name: 'thrives', points: 1.5, reason: COMMUNITY_WORDS[kind] };
 }
