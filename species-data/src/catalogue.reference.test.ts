@@ -9,7 +9,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { DATA_DIR, loadCatalogue } from './catalogue.js';
 import { checkValueRows, findCheckValueRow } from './reference/check-values.js';
 import { referenceAvailable } from './reference/reference-dir.js';
-import { loadLepidopteraByGenus, loadUsdaDistribution, loadUsdaTaxa } from './reference/usda-plants.js';
+import { loadLepidopteraByGenus, loadUsdaCharacteristics, loadUsdaDistribution, loadUsdaTaxa } from './reference/usda-plants.js';
 
 const FILES = ['usda_plants_taxa.csv', 'usda_plants_state_distribution.csv', 'tallamy_shropshire_2009_lepidoptera_by_plant_genus.csv', 'CHECK-VALUES.md'];
 const available = referenceAvailable(FILES);
@@ -57,6 +57,26 @@ describe.skipIf(!available)('catalogue vs USDA PLANTS (usda_plants_taxa.csv, sta
       const wrong = s.nativeStates.filter((st) => !native.has(st));
       if (wrong.length) bad.push(`${s.slug}: ${wrong.join(', ')} not native per USDA`);
     }
+    expect(bad).toEqual([]);
+  });
+});
+
+describe.skipIf(!available || !referenceAvailable(['usda_plants_characteristics.csv']))('catalogue vs USDA PLANTS characteristics (usda_plants_characteristics.csv)', () => {
+  it('records commercial availability exactly as USDA gives it, and null where USDA has no value', () => {
+    const words: Record<string, string> = {
+      'Routinely Available': 'routine', 'Contracting Only': 'contract-only',
+      'Field Collections Only': 'field-collection-only', 'No Known Source': 'none-known',
+    };
+    const characteristics = loadUsdaCharacteristics();
+    const bad: string[] = [];
+    let withValue = 0;
+    for (const s of loadCatalogue().species) {
+      const usda = characteristics.get(s.usdaSymbol)?.commercial_availability?.trim() ?? '';
+      const expected = usda ? words[usda] : null;
+      if (expected) withValue++;
+      if ((s.commercialAvailability ?? null) !== expected) bad.push(`${s.slug}: ${s.commercialAvailability}, USDA "${usda}"`);
+    }
+    expect(withValue).toBeGreaterThan(100);
     expect(bad).toEqual([]);
   });
 });

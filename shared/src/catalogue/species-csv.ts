@@ -9,8 +9,10 @@ import { type Species, speciesSchema, type TreatmentStep } from '../types/specie
 export const SPECIES_CSV_COLUMNS = [
   'slug', 'scientificName', 'usdaSymbol', 'family', 'commonNames', 'synonyms', 'growthForm', 'lifespan',
   'heightMinCm', 'heightMaxCm', 'spreadMinCm', 'spreadMaxCm', 'bloomMonths', 'flowerColours', 'sun',
-  'moisture', 'soilTextures', 'nativeStates', 'habitats', 'lepidopteraGenusCount', 'monarchHost',
-  'pollinators', 'birds', 'specialistBees', 'spreadHabit', 'deerResistance', 'treatments', 'needsLight',
+  'moisture', 'sunOptimum', 'moistureOptimum', 'wetlandIndicator', 'needsAcidSoil', 'soilTextures',
+  'nativeStates', 'ecoregions', 'habitats', 'lepidopteraGenusCount', 'monarchHost', 'pollinators', 'birds',
+  'specialistBees', 'spreadHabit', 'selfSows', 'commercialAvailability', 'protectedIn', 'deerResistance',
+  'treatments', 'needsLight',
   'sowingDepthMm', 'seedsPerPound', 'germinationRatePct', 'methods', 'tags', 'cautions', 'sources',
   'reconciliations',
 ] as const;
@@ -27,11 +29,15 @@ export function speciesToCsvRow(s: Species): SpeciesCsvRow {
     heightMinCm: String(s.heightCm.min), heightMaxCm: String(s.heightCm.max),
     spreadMinCm: String(s.spreadCm.min), spreadMaxCm: String(s.spreadCm.max),
     bloomMonths: list(s.bloomMonths), flowerColours: list(s.flowerColours), sun: list(s.sun),
-    moisture: list(s.moisture), soilTextures: list(s.soilTextures), nativeStates: list(s.nativeStates),
+    moisture: list(s.moisture), sunOptimum: list(s.sunOptimum ?? []), moistureOptimum: list(s.moistureOptimum ?? []),
+    wetlandIndicator: s.wetlandIndicator ?? '', needsAcidSoil: s.needsAcidSoil === undefined ? '' : String(s.needsAcidSoil),
+    soilTextures: list(s.soilTextures), nativeStates: list(s.nativeStates), ecoregions: list(s.ecoregions ?? []),
     habitats: list(s.habitats),
     lepidopteraGenusCount: s.wildlife.lepidopteraGenusCount === null ? '' : String(s.wildlife.lepidopteraGenusCount),
     monarchHost: String(s.wildlife.monarchHost), pollinators: s.wildlife.pollinators, birds: s.wildlife.birds ?? '',
-    specialistBees: list(s.wildlife.specialistBees), spreadHabit: s.spreadHabit, deerResistance: s.deerResistance,
+    specialistBees: list(s.wildlife.specialistBees), spreadHabit: s.spreadHabit,
+    selfSows: s.selfSows === undefined ? '' : String(s.selfSows), commercialAvailability: s.commercialAvailability ?? '',
+    protectedIn: list(s.protectedIn ?? []), deerResistance: s.deerResistance,
     treatments: s.germination.treatments.map(treatmentText).join(';'), needsLight: String(s.germination.needsLight),
     sowingDepthMm: String(s.germination.sowingDepthMm),
     seedsPerPound: s.germination.seedsPerPound === null ? '' : String(s.germination.seedsPerPound),
@@ -45,6 +51,8 @@ const split = (v: string | undefined) => (v ?? '').split(';').map((x) => x.trim(
 /** A number cell; blank and junk stay visible to the schema as NaN/undefined so it names the field. */
 const num = (v: string | undefined) => (v === undefined || v.trim() === '' ? undefined : Number(v));
 const bool = (v: string | undefined) => (v === 'true' ? true : v === 'false' ? false : v);
+/** A list cell that may be absent (older files): absent or blank leaves the key out. */
+const optionalList = (key: string, v: string | undefined) => (v?.trim() ? { [key]: split(v) } : {});
 
 function parseTreatment(text: string): unknown {
   const [kind, second, ...rest] = text.split(':');
@@ -97,6 +105,13 @@ export function csvRowToSpecies(row: Partial<Record<string, string>>, line: numb
     bloomMonths: split(row.bloomMonths).map(Number), flowerColours: split(row.flowerColours), sun: split(row.sun),
     moisture: split(row.moisture), soilTextures: split(row.soilTextures), nativeStates: split(row.nativeStates),
     habitats: split(row.habitats),
+    ...optionalList('sunOptimum', row.sunOptimum), ...optionalList('moistureOptimum', row.moistureOptimum),
+    ...optionalList('ecoregions', row.ecoregions),
+    ...(row.wetlandIndicator?.trim() ? { wetlandIndicator: row.wetlandIndicator.trim() } : {}),
+    ...(row.needsAcidSoil?.trim() ? { needsAcidSoil: bool(row.needsAcidSoil) } : {}),
+    ...(row.selfSows?.trim() ? { selfSows: bool(row.selfSows) } : {}),
+    ...(row.commercialAvailability?.trim() ? { commercialAvailability: row.commercialAvailability.trim() } : {}),
+    ...optionalList('protectedIn', row.protectedIn),
     wildlife: {
       lepidopteraGenusCount: row.lepidopteraGenusCount?.trim() ? Number(row.lepidopteraGenusCount) : null,
       monarchHost: bool(row.monarchHost), pollinators: row.pollinators,

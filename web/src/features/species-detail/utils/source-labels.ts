@@ -64,6 +64,12 @@ const FIELD_WORDS: Record<SourcedField, string> = {
   'germination.treatments': 'seed treatment',
   'germination.seedsPerPound': 'seeds per pound',
   'germination.germinationRatePct': 'germination rate',
+  ecoregions: 'ecoregions',
+  sunOptimum: 'best light',
+  moistureOptimum: 'best moisture',
+  wetlandIndicator: 'wetland indicator',
+  commercialAvailability: 'seed or plants for sale',
+  protectedIn: 'protected in',
 };
 
 /** The facts each section of the species page shows, so its source line names exactly those. */
