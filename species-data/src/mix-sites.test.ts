@@ -71,7 +71,7 @@ const PUBLISHED: Record<string, { source: string; status: 'retrieved' | 'from me
     source: 'UMass Extension, native plants for shade in Massachusetts', status: 'from memory',
     species: ['Polystichum acrostichoides', 'Matteuccia struthiopteris', 'Osmundastrum cinnamomeum', 'Dennstaedtia punctilobula',
       'Athyrium filix-femina', 'Carex pensylvanica', 'Eurybia divaricata', 'Solidago caesia', 'Geranium maculatum', 'Tiarella cordifolia',
-      'Aquilegia canadensis', 'Aruncus dioicus', 'Dicentra eximia', 'Asarum canadense', 'Chelone lyonii'],
+      'Aquilegia canadensis', 'Aruncus dioicus', 'Dicentra eximia', 'Asarum canadense', 'Chelone lyonii', 'Adiantum pedatum'],
   },
   'nc-dry-sun': {
     // NC State Extension plant toolbox lists for dry sunny Piedmont gardens, and the NC Wildlife Resources

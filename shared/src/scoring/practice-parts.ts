@@ -3,16 +3,17 @@ import type { Site } from '../types/site.js';
 import type { Species } from '../types/species.js';
 import { SMALL_BED_SQ_FT, layerOf } from './layers.js';
 import { formatHeightCm } from '../units/format-units.js';
-import { commercialAvailabilityOf, type CommercialAvailability } from './species-traits.js';
+import { commercialAvailabilityOf } from './species-traits.js';
+import type { CommercialAvailability } from '../types/species.js';
 import { beeWords, caterpillarWords, hostLevelOf, hostsSpecialistBees } from './wildlife-value.js';
 
 /** Garden-practice and wildlife parts: whether plants or seed can be had, ease from seed, host value within the layer, bees. */
 
 const AVAILABILITY: Record<CommercialAvailability, { points: number; reason: string }> = {
   routine: { points: 1.5, reason: 'Seed and plants are commonly sold (USDA commercial availability).' },
-  'contract-only': { points: -1, reason: 'Seed is grown mostly on contract, so plants can be hard to find.' },
-  'field-collection-only': { points: -2, reason: 'Seed is only collected from the wild, so plants are hard to buy.' },
-  'none-known': { points: -3, reason: 'No commercial source is known: hard to buy as seed or plants.' },
+  'contract-only': { points: -0.25, reason: 'Seed is grown mostly on contract, so plants can be hard to find.' },
+  'field-collection-only': { points: -0.75, reason: 'Seed is only collected from the wild, so plants can be hard to buy.' },
+  'none-known': { points: -1, reason: 'USDA knows no commercial source: it may be hard to buy as seed or plants.' },
 };
 
 /**
@@ -35,12 +36,16 @@ const NURSERY_STAPLES: ReadonlySet<string> = new Set([
   'Allium cernuum', 'Tradescantia ohiensis', 'Veronicastrum virginicum', 'Eryngium yuccifolium', 'Asarum canadense',
 ]);
 
+/**
+ * USDA's availability value where it has one; the penalties are mild because the USDA field lags the
+ * trade (many species it knows no source for are now grown by native-plant nurseries), and a nursery
+ * staple (the table above) is never marked hard to buy.
+ */
 export function availabilityPart(species: Species): ScorePart | null {
   const a = commercialAvailabilityOf(species);
-  if (a !== null) return { name: 'availability', ...AVAILABILITY[a] };
-  if (NURSERY_STAPLES.has(species.scientificName)) {
-    return { name: 'availability', points: 1.5, reason: 'Easy to find: native-plant nurseries commonly sell it.' };
-  }
+  const staple = NURSERY_STAPLES.has(species.scientificName);
+  if (a !== null && (a === 'routine' || !staple)) return { name: 'availability', ...AVAILABILITY[a] };
+  if (staple) return { name: 'availability', points: 1.5, reason: 'Easy to find: native-plant nurseries commonly sell it.' };
   return null;
 }
 

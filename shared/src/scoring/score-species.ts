@@ -62,7 +62,7 @@ export function scoreSpecies(species: Species, site: Site, region: RegionContext
   for (const p of parts) {
     sum += p.points;
     // Ties go to the plant that thrives here, then to the one with more wildlife value in its layer.
-    if (p.name === 'thrives' || p.name === 'wetland-class') tie += 10 * p.points;
+    if (p.name === 'thrives' || p.name === 'community' || p.name === 'wetland-class') tie += 10 * p.points;
     else if (p.name === 'host-plant' || p.name === 'bees' || p.name === 'monarch-host') tie += p.points;
   }
   const score = roundTo(sum, 2);

@@ -2,7 +2,8 @@ import type { ScorePart } from '../types/recommendation.js';
 import type { Site } from '../types/site.js';
 import type { Habitat, Species } from '../types/species.js';
 import { MOISTURE_WORDS, SUN_WORDS } from './plain-words.js';
-import { moistureOptimumOf, needsAcidSoil, sunOptimumOf, wetlandIndicatorOf, type WetlandIndicator } from './species-traits.js';
+import { moistureOptimumOf, needsAcidSoil, sunOptimumOf, wetlandIndicatorOf } from './species-traits.js';
+import type { WetlandIndicator } from '../types/species.js';
 import { PartCache } from './word-cache.js';
 
 /**
@@ -100,5 +101,5 @@ export function communityPart(species: Species, site: Site): ScorePart | null {
   if (kind === null) return null;
   const set = kind === 'dry' ? DRY_COMMUNITIES : kind === 'wet' ? WET_COMMUNITIES : SHADE_COMMUNITIES;
   if (!species.habitats.some((h) => set.has(h))) return null;
-  return { name: 'thrives', points: 1.5, reason: COMMUNITY_WORDS[kind] };
+  return { name: 'community', points: 1.5, reason: COMMUNITY_WORDS[kind] };
 }

@@ -1,4 +1,4 @@
-import type { Moisture, Species, StateCode, Sun } from '../types/species.js';
+import type { CommercialAvailability, Moisture, Species, StateCode, Sun, WetlandIndicator } from '../types/species.js';
 import { genusOf } from './genus.js';
 
 /**
@@ -7,8 +7,6 @@ import { genusOf } from './genus.js';
  * engine reads them through these helpers, which fall back as agreed: no ecoregions → state
  * nativity; no optimum → the whole range; the rest → unknown (no points either way).
  */
-export type WetlandIndicator = 'OBL' | 'FACW' | 'FAC' | 'FACU' | 'UPL';
-export type CommercialAvailability = 'routine' | 'contract-only' | 'field-collection-only' | 'none-known';
 
 interface GradedFacts {
   ecoregions?: readonly string[];

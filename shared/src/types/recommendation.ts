@@ -9,7 +9,7 @@ export type BloomPeriod = (typeof BLOOM_PERIODS)[number];
 export type ScorePartName =
   | 'native' | 'sun' | 'moisture' | 'soil' | 'habitat' | 'host-plant' | 'monarch-host' | 'pollinators'
   | 'birds' | 'bloom-gap' | 'height' | 'room' | 'deer' | 'spread' | 'rain-garden' | 'shade-garden'
-  | 'thrives' | 'wetland-class' | 'acid-soil' | 'bees' | 'availability' | 'seed-ease' | 'fern' | 'ecoregion';
+  | 'thrives' | 'community' | 'wetland-class' | 'acid-soil' | 'bees' | 'availability' | 'seed-ease' | 'fern' | 'ecoregion';
 
 /** One line of "why it fits": points and a sentence a homeowner understands. */
 export interface ScorePart {
