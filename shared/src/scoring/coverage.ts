@@ -23,8 +23,21 @@ const WESTERN_ECOREGIONS: ReadonlySet<string> = new Set([
 /** States that lie wholly in the uncovered West (used when only the state is known). */
 const WESTERN_STATES: ReadonlySet<StateCode> = new Set(['AZ', 'CA', 'ID', 'NV', 'OR', 'UT', 'WA']);
 
+/**
+ * Counts per catalogue: the API passes the same array on every request until the catalogue
+ * changes, and counting 30,000 records' ecoregions was a good part of a request's time.
+ */
+const countsByCatalogue = new WeakMap<readonly Species[], Map<string, number> | null>();
+
 /** Species counts per ecoregion code, when most records carry ecoregions; otherwise null. */
 export function speciesPerEcoregion(species: readonly Species[]): Map<string, number> | null {
+  if (countsByCatalogue.has(species)) return countsByCatalogue.get(species) ?? null;
+  const counts = countEcoregions(species);
+  countsByCatalogue.set(species, counts);
+  return counts;
+}
+
+function countEcoregions(species: readonly Species[]): Map<string, number> | null {
   const counts = new Map<string, number>();
   let withData = 0;
   for (const s of species) {

@@ -42,7 +42,7 @@ export function hardCheckOutcome(species: Species, site: Site, region: RegionCon
     if (++failures > 1) return 'out';
     nearMiss = footprint <= ROOM.nearMissFactor * site.areaSqFt;
   }
-  if (ecoregionFails(species, region)) {
+  if (region.ecoregionCode !== undefined && ecoregionFails(species, region)) {
     if (++failures > 1) return 'out';
     nearMiss = false;
   }

@@ -6,6 +6,14 @@ import { formatHeightCm } from '../units/format-units.js';
 import { commercialAvailabilityOf } from './species-traits.js';
 import type { CommercialAvailability } from '../types/species.js';
 import { beeWords, caterpillarWords, hostLevelOf, hostsSpecialistBees } from './wildlife-value.js';
+import { PartCache, sharedPart } from './word-cache.js';
+
+// Parts below repeat across a catalogue; each wording is made once and shared (see word-cache.ts).
+const availabilityParts = new PartCache<string>();
+const hostPartsByWords = new PartCache<string>();
+const beeParts = new PartCache<string>();
+const SEED_EASE_PART = sharedPart({ name: 'seed-ease', points: 0.5, reason: 'Easy to raise from seed.' });
+const STAPLE_PART = sharedPart({ name: 'availability', points: 1.5, reason: 'Easy to find: native-plant nurseries commonly sell it.' });
 
 /** Garden-practice and wildlife parts: whether plants or seed can be had, ease from seed, host value within the layer, bees. */
 
@@ -44,17 +52,17 @@ const NURSERY_STAPLES: ReadonlySet<string> = new Set([
 export function availabilityPart(species: Species): ScorePart | null {
   const a = commercialAvailabilityOf(species);
   const staple = NURSERY_STAPLES.has(species.scientificName);
-  if (a !== null && (a === 'routine' || !staple)) return { name: 'availability', ...AVAILABILITY[a] };
-  if (staple) return { name: 'availability', points: 1.5, reason: 'Easy to find: native-plant nurseries commonly sell it.' };
-  return null;
+  if (a !== null && (a === 'routine' || !staple)) return availabilityParts.get(a) ?? availabilityParts.keep(a, { name: 'availability', ...AVAILABILITY[a] });
+  return staple ? STAPLE_PART : null;
 }
 
 /** Easy from seed: no treatment, or a cold-moist spell of two months at most (the trade's usual winter sowing). */
 export function seedEasePart(species: Species): ScorePart | null {
-  const steps = species.germination.treatments;
-  const easy = steps.every((t) => t.kind === 'none' || (t.kind === 'cold-moist' && (t.days ?? 0) <= 60));
-  if (!easy) return null;
-  return { name: 'seed-ease', points: 0.5, reason: 'Easy to raise from seed.' };
+  // A plain loop: this runs for every candidate on every request.
+  for (const t of species.germination.treatments) {
+    if (t.kind !== 'none' && !(t.kind === 'cold-moist' && (t.days ?? 0) <= 60)) return null;
+  }
+  return SEED_EASE_PART;
 }
 
 /** Caterpillar host value within the species' layer, in words; points by level, the same scale in both layers. */
@@ -62,15 +70,23 @@ const HOST_POINTS = { top: 3, good: 2, some: 0.75, none: 0 } as const;
 
 export function layeredHostPart(species: Species): ScorePart | null {
   const level = hostLevelOf(species);
-  const reason = caterpillarWords(species);
-  if (level === 'none' || reason === null) return null;
-  return { name: 'host-plant', points: HOST_POINTS[level], reason };
+  if (level === 'none') return null;
+  // Keyed by layer and level, so the words are built once per pair, not per species.
+  const key = `${layerOf(species)}${level}`;
+  const cached = hostPartsByWords.get(key);
+  if (cached !== undefined) return cached;
+  const reason = caterpillarWords(species) ?? '';
+  return hostPartsByWords.keep(key, { name: 'host-plant', points: HOST_POINTS[level], reason });
 }
 
 export function beesPart(species: Species, site: Site): ScorePart | null {
   if (!site.goals.includes('pollinators') || layerOf(species) !== 'herbaceous' && species.growthForm !== 'shrub') return null;
   if (!hostsSpecialistBees(species)) return null;
-  return { name: 'bees', points: 1, reason: beeWords(species) ?? 'Flowers for bees.' };
+  const named = species.wildlife.specialistBees;
+  const key = named.length === 0 ? '' : named.slice(0, 3).join('|');
+  const cached = beeParts.get(key);
+  if (cached !== undefined) return cached;
+  return beeParts.keep(key, { name: 'bees', points: 1, reason: beeWords(species) ?? 'Flowers for bees.' });
 }
 
 /** Over 6 ft (180 cm) a perennial towers over a small bed and flops onto its neighbours (common practice). */

@@ -1,6 +1,6 @@
 import type { ScorePart } from '../types/recommendation.js';
 import type { Site } from '../types/site.js';
-import type { Habitat, Species } from '../types/species.js';
+import { MOISTURE_LEVELS, SUN_LEVELS, type Habitat, type Species } from '../types/species.js';
 import { MOISTURE_WORDS, SUN_WORDS } from './plain-words.js';
 import { moistureOptimumOf, needsAcidSoil, sunOptimumOf, wetlandIndicatorOf } from './species-traits.js';
 import type { WetlandIndicator } from '../types/species.js';
@@ -35,16 +35,13 @@ const WETLAND_WORDS: Record<WetlandIndicator, string> = {
   UPL: 'almost never found in wetlands',
 };
 
-const thriveParts = new PartCache<string>();
+const thriveParts = new PartCache<number>();
 
 /** How well the sun and moisture suit the species, as one "thrives" part (or null when it only copes). */
 export function thrivesPart(species: Species, site: Site): ScorePart | null {
-  let points = 0;
-  const good: string[] = [];
-  const sunOpt = sunOptimumOf(species);
-  const moistOpt = moistureOptimumOf(species);
-  if (sunOpt.includes(site.sun)) { points += FIT_POINTS.optimum; good.push(SUN_WORDS[site.sun]); }
-  if (moistOpt.includes(site.moisture)) { points += FIT_POINTS.optimum; good.push(`${MOISTURE_WORDS[site.moisture]} soil`); }
+  const sunBest = sunOptimumOf(species).includes(site.sun);
+  const moistBest = moistureOptimumOf(species).includes(site.moisture);
+  let points = (sunBest ? FIT_POINTS.optimum : 0) + (moistBest ? FIT_POINTS.optimum : 0);
   if ((site.moisture === 'wet' && !species.moisture.includes('dry')) || (site.moisture === 'dry' && !species.moisture.includes('wet'))) {
     points += FIT_POINTS.specialist;
   }
@@ -53,21 +50,29 @@ export function thrivesPart(species: Species, site: Site): ScorePart | null {
   }
   if ((site.sun === 'full' && species.sun[0] === 'shade') || (site.sun === 'shade' && species.sun[0] === 'full')) points += FIT_POINTS.offEnd;
   if (points <= 0) return null;
-  const key = `${points}|${good.join('+')}|${site.sun}${site.moisture}`;
+  // A number naming points, which optimum matched, and the ground: no string per species.
+  const key = (((points * 4 + (sunBest ? 2 : 0) + (moistBest ? 1 : 0)) * 3 + SUN_LEVELS.indexOf(site.sun)) * 3) + MOISTURE_LEVELS.indexOf(site.moisture);
   const cached = thriveParts.get(key);
   if (cached !== undefined) return cached;
-  const reason = good.length === 2
-    ? `Thrives in ${good[1]} and ${good[0]}, as on your ground.`
-    : good.length === 1 ? `Does best in ${good[0]}, as on your ground.` : `A plant of ground like yours.`;
+  const sunWords = SUN_WORDS[site.sun];
+  const soilWords = `${MOISTURE_WORDS[site.moisture]} soil`;
+  const reason = sunBest && moistBest
+    ? `Thrives in ${soilWords} and ${sunWords}, as on your ground.`
+    : sunBest || moistBest ? `Does best in ${sunBest ? sunWords : soilWords}, as on your ground.` : 'A plant of ground like yours.';
   return thriveParts.keep(key, { name: 'thrives', points, reason });
 }
+
+const wetlandParts = new PartCache<string>();
+const communityParts = new PartCache<string>();
 
 export function wetlandPart(species: Species, site: Site): ScorePart | null {
   const indicator = wetlandIndicatorOf(species);
   if (indicator === null) return null;
   const points = WETLAND_POINTS[site.moisture][indicator];
   if (points === 0) return null;
-  return { name: 'wetland-class', points, reason: `In the wild it is ${WETLAND_WORDS[indicator]} (National Wetland Plant List).` };
+  const key = `${site.moisture}${indicator}`;
+  return wetlandParts.get(key)
+    ?? wetlandParts.keep(key, { name: 'wetland-class', points, reason: `In the wild it is ${WETLAND_WORDS[indicator]} (National Wetland Plant List).` });
 }
 
 export function acidSoilPart(species: Species): ScorePart | null {
@@ -101,5 +106,5 @@ export function communityPart(species: Species, site: Site): ScorePart | null {
   if (kind === null) return null;
   const set = kind === 'dry' ? DRY_COMMUNITIES : kind === 'wet' ? WET_COMMUNITIES : SHADE_COMMUNITIES;
   if (!species.habitats.some((h) => set.has(h))) return null;
-  return { name: 'community', points: 1.5, reason: COMMUNITY_WORDS[kind] };
+  return communityParts.get(kind) ?? communityParts.keep(kind, { name: 'community', points: 1.5, reason: COMMUNITY_WORDS[kind] });
 }
