@@ -12,7 +12,9 @@ import { HealthModule } from './health/health.module.js';
 import { SpeciesModule } from './species/species.module.js';
 import { EcoregionsModule } from './ecoregions/ecoregions.module.js';
 import { PlacesModule } from './places/places.module.js';
-import { MixesModule } from './mixes/mixes.module.js';
+import { PlanningModule } from './planning/planning.module.js';
+import { RecommendationsModule } from './recommendations/recommendations.module.js';
+import { SavedMixesModule } from './saved-mixes/saved-mixes.module.js';
 import { UsersModule } from './users/users.module.js';
 
 /** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
@@ -38,7 +40,9 @@ function webApp(): DynamicModule[] {
     SpeciesModule,
     EcoregionsModule,
     PlacesModule,
-    MixesModule,
+    RecommendationsModule,
+    SavedMixesModule,
+    PlanningModule,
     DemoModule,
   ],
 })

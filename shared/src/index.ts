@@ -28,6 +28,7 @@ export * from './quantities/spacing.js';
 export * from './quantities/plant-split.js';
 export * from './quantities/seed-count.js';
 export * from './quantities/seeding-rate.js';
+export * from './quantities/mix-quantities.js';
 export * from './sowing-calendar/calendar-date.js';
 export * from './sowing-calendar/calendar-types.js';
 export * from './sowing-calendar/durations.js';

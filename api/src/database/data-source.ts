@@ -9,7 +9,7 @@ import { CreateUsersAndGroups1764633600000 } from './migrations/1764633600000-cr
 import { CreateCatalogue1764720000000 } from './migrations/1764720000000-create-catalogue.js';
 import { CreateEcoregionBoundaries1764806400000 } from './migrations/1764806400000-create-ecoregion-boundaries.js';
 import { CreateSavedMixes1764892800000 } from './migrations/1764892800000-create-saved-mixes.js';
-import { SavedMixRow } from '../mixes/saved-mix.entity.js';
+import { SavedMixRow } from '../saved-mixes/saved-mix.entity.js';
 import { SpeciesPhoto } from '../species/species-photo.entity.js';
 import { SpeciesRow } from '../species/species.entity.js';
 

@@ -1,11 +1,10 @@
 import { Injectable } from '@nestjs/common';
 import {
   type AlternativesResponse, alternativesFor, balancePalette, DEFAULT_LOSS_FACTOR, type MixResponse,
-  type PaletteOptions, recommend, type RecommendationsResponse, type RegionContext, type Site,
+  mixQuantities, type PaletteOptions, recommend, type RecommendationsResponse, type RegionContext, type Site,
 } from '@homeground/shared';
 import { AnswerCache } from './answer-cache.js';
-import { MixContextService } from './mix-context.service.js';
-import { mixQuantities } from './mix-quantities.js';
+import { MixContextService } from '../mix-context/mix-context.service.js';
 
 const MAX_RANKED = 60;
 const MAX_ALSO_CONSIDER = 20;

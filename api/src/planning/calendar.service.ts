@@ -3,7 +3,7 @@ import { buildSowingCalendar, addDays, type SowingCalendar } from '@homeground/s
 import { createEvents, type EventAttributes } from 'ics';
 import Papa from 'papaparse';
 import type { CalendarRequest } from './dto/calendar-request.js';
-import { MixContextService } from './mix-context.service.js';
+import { MixContextService } from '../mix-context/mix-context.service.js';
 
 const toParts = (iso: string) => iso.split('-').map(Number) as [number, number, number];
 

@@ -3,7 +3,7 @@ import { InjectRepository } from '@nestjs/typeorm';
 import type { SavedMix } from '@homeground/shared';
 import { Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
-import { MixContextService } from './mix-context.service.js';
+import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SavedMixRow } from './saved-mix.entity.js';
 
 type SaveInput = Pick<SavedMix, 'name' | 'request' | 'chosen'>;

@@ -1,12 +1,11 @@
 import { Body, Controller, Header, HttpCode, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import type { CalendarResponse, MixQuantity } from '@homeground/shared';
+import { type CalendarResponse, type MixQuantity, mixQuantities } from '@homeground/shared';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { CalendarService } from './calendar.service.js';
 import { type CalendarRequest, calendarRequestSchema } from './dto/calendar-request.js';
 import { type QuantitiesRequest, quantitiesRequestSchema } from './dto/quantities-request.js';
-import { MixContextService } from './mix-context.service.js';
-import { mixQuantities } from './mix-quantities.js';
+import { MixContextService } from '../mix-context/mix-context.service.js';
 
 /** Quantities and the sowing calendar for any list of species (a mix, a season plan, a batch). */
 @ApiTags('planning')

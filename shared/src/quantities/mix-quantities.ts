@@ -1,13 +1,16 @@
-import {
-  DEFAULT_LOSS_FACTOR, type MixQuantity, plantsPerSpecies, roundTo, seedWeight, seedsToSow, type Species,
-} from '@homeground/shared';
+import type { MixQuantity } from '../types/mix-api.js';
+import type { Species } from '../types/species.js';
+import { roundTo } from '../units/conversions.js';
+import { plantsPerSpecies } from './plant-split.js';
+import { DEFAULT_LOSS_FACTOR, seedsToSow, seedWeight } from './seed-count.js';
 
 /**
- * Plants per species for the bed (shared/quantities: grasses a set share, spacing from the spread),
- * then seeds to sow from each species' germination rate and the loss factor, and their weight.
+ * Plants per species for the bed (grasses a set share, spacing from the spread), then seeds to sow
+ * from each species' germination rate and the loss factor, and their weight.
  */
 export function mixQuantities(
-  species: readonly Species[], areaSqFt: number,
+  species: readonly Species[],
+  areaSqFt: number,
   options: { lossFactor?: number; spacingIn?: Record<string, number>; grassShare?: number } = {},
 ): MixQuantity[] {
   const lossFactor = options.lossFactor ?? DEFAULT_LOSS_FACTOR;

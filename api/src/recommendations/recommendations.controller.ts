@@ -1,26 +1,19 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { Body, Controller, HttpCode, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   alternativesRequestSchema, type AlternativesResponse, type MixResponse, paletteRequestSchema,
-  type RecommendationsResponse, recommendRequestSchema, type SavedMix, saveMixRequestSchema,
+  type RecommendationsResponse, recommendRequestSchema,
 } from '@homeground/shared';
 import type { z } from 'zod';
-import type { AuthenticatedUser } from '../auth/authenticated-user.js';
-import { Auth } from '../common/decorators/auth.decorator.js';
-import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { MixesService } from './mixes.service.js';
-import { SavedMixesService } from './saved-mixes.service.js';
 
 type Parsed<S extends z.ZodType> = z.infer<S>;
 
 @ApiTags('mixes')
 @Controller()
-export class MixesController {
-  constructor(
-    private readonly mixes: MixesService,
-    private readonly saved: SavedMixesService,
-  ) {}
+export class RecommendationsController {
+  constructor(private readonly mixes: MixesService) {}
 
   /** Every species native to the state scored for the site, with "why it fits"; near misses as also-consider. */
   @Post('recommendations')
@@ -42,30 +35,4 @@ export class MixesController {
   alternatives(@Body(new ZodValidationPipe(alternativesRequestSchema)) body: Parsed<typeof alternativesRequestSchema>): AlternativesResponse {
     return this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot);
   }
-
-  @Post('mixes')
-  @Auth()
-  save(@Body(new ZodValidationPipe(saveMixRequestSchema)) body: Parsed<typeof saveMixRequestSchema>, @CurrentUser() user: AuthenticatedUser): Promise<SavedMix> {
-    return this.saved.save(user, { ...body, request: body.request as unknown as SavedMix['request'] });
-  }
-
-  @Get('mixes')
-  @Auth()
-  mine(@CurrentUser() user: AuthenticatedUser): Promise<SavedMix[]> {
-    return this.saved.mine(user);
-  }
-
-  /** A saved mix, for anyone who has its link. */
-  @Get('mixes/:id')
-  get(@Param('id', new ParseUUIDPipe({ version: '4' })) id: string): Promise<SavedMix> {
-    return this.saved.get(id);
-  }
-
-  @Delete('mixes/:id')
-  @HttpCode(204)
-  @Auth()
-  remove(@Param('id', new ParseUUIDPipe({ version: '4' })) id: string, @CurrentUser() user: AuthenticatedUser): Promise<void> {
-    return this.saved.remove(user, id);
-  }
 }
-
