@@ -33,6 +33,6 @@ export class RecommendationsController {
   @Post('mixes/alternatives')
   @HttpCode(200)
   alternatives(@Body(new ZodValidationPipe(alternativesRequestSchema)) body: Parsed<typeof alternativesRequestSchema>): AlternativesResponse {
-    return this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot);
+    return this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot, body.acrossForms);
   }
 }

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { SowingCalendar } from '../sowing-calendar/calendar-types.js';
-import type { PaletteAlternative, PaletteResult, ScoredSpecies } from './recommendation.js';
+import type { Coverage, PaletteAlternative, PaletteResult, ScoredSpecies } from './recommendation.js';
+import type { SeedingLine } from '../quantities/seeding-plan.js';
 import { paletteRequestSchema } from './recommendation.js';
 import type { Site } from './site.js';
 import type { SpeciesSummary } from './species-query.js';
@@ -18,8 +19,10 @@ export interface RecommendationsResponse {
   site: Site;
   /** Best first, at most 60. */
   ranked: ScoredWithSpecies[];
-  /** Near misses with the reason, at most 20. */
+  /** Near misses with the reason, at most 20 (annuals and biennials among them). */
   alsoConsider: ScoredWithSpecies[];
+  /** Whether the catalogue covers the region; when not, ranked is empty and the message says why. */
+  coverage: Coverage;
 }
 
 /** Plants and seed for one species of a mix. */
@@ -42,6 +45,10 @@ export interface MixResponse {
   /** Summaries of every species the answer mentions, by slug. */
   species: Record<string, SpeciesSummary>;
   quantities: MixQuantity[];
+  /** Σ plants × spacing² in ft²: never more than the bed unless it cannot hold one plant of each species. */
+  totalFootprintSqFt: number;
+  /** A meadow's seeding plan by seeds/ft² (from half an acre; palette.plantingMethod is 'seeding'), else null. */
+  seeding: SeedingLine[] | null;
   /** Fraction of seedlings assumed lost before planting out (common practice 0.2). */
   lossFactor: number;
 }
@@ -51,6 +58,8 @@ export const alternativesRequestSchema = paletteRequestSchema.extend({
   chosen: z.array(slugSchema).min(1).max(60),
   /** The chosen species to find replacements for. */
   slot: slugSchema,
+  /** Offer replacements of any growth form (a shrub for a wildflower); by default only the slot's own kind. */
+  acrossForms: z.boolean().default(false),
 });
 export type AlternativesRequest = z.input<typeof alternativesRequestSchema>;
 
