@@ -6,7 +6,7 @@ import type { HeightTier } from './palette-item.js';
 
 /** NRCS E327136Z2: at least one native Asclepias species when monarchs are a goal (R). */
 export function milkweedConstraint(input: ConstraintInput): PaletteConstraint {
-  const rule = 'At least one native milkweed (Asclepias) when monarchs are a goal (NRCS E327136Z2)';
+  const rule = 'At least one native milkweed when monarchs are a goal: their caterpillars eat nothing else';
   const base = { id: 'monarch-milkweed', rule, source: 'nrcs-e327136z2' } as const;
   if (!input.site.goals.includes('monarchs')) {
     return { ...base, applies: false, met: true, detail: 'Monarchs are not one of your goals, so no milkweed is needed.' };

@@ -30,6 +30,8 @@ export interface PaletteItem {
    */
   fit: number;
   periods: BloomPeriod[];
+  /** Months in flower (flowering species only), for the month-by-month bloom rule. */
+  months?: number[];
   flowering: boolean;
   genus: string;
   /**
@@ -56,6 +58,7 @@ export function toPaletteItem(species: Species, scored: ScoredSpecies): PaletteI
     name: species.commonNames[0],
     fit: scored.score - hostPoints,
     periods: flowering ? bloomPeriodsOf(species.bloomMonths) : [],
+    months: flowering ? species.bloomMonths : [],
     flowering,
     genus,
     hostCount: hostValueOnHerbaceousScale(species),
