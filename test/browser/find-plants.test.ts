@@ -28,7 +28,7 @@ async function answerYard(page: Page, sun: RegExp, moisture: RegExp) {
 /** The mix's species (from the table rows) and the three CP42 period rules as the page shows them. */
 async function readMix(page: Page) {
   await page.getByRole('table', { name: /one species a row/ }).waitFor();
-  await page.getByRole('list', { name: 'Design rules' }).waitFor();
+  await page.getByRole('list', { name: 'How this mix is balanced' }).waitFor();
   const slugs = await page.locator('table tr[data-slug]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-slug') ?? ''));
   const rules = await page.locator('[data-constraint]').evaluateAll((items) =>
     items.map((li) => ({ id: li.getAttribute('data-constraint') ?? '', status: li.getAttribute('data-status') ?? '', text: li.textContent ?? '' })),

@@ -11,7 +11,15 @@ const useStyles = makeStyles({
   rule: { margin: 0, fontWeight: tokens.fontWeightSemibold },
   status: { fontWeight: tokens.fontWeightBold },
   detail: { margin: 0, color: tokens.colorNeutralForeground2 },
+  source: { margin: 0, color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase200 },
 });
+
+/** Where each rule comes from, for the source note only (program names never in the rule itself). */
+const SOURCE_WORDS: Record<string, string> = {
+  'nrcs-cp42-indiana-2012': 'USDA NRCS pollinator habitat practice (CP42)',
+  'nrcs-e327136z2': 'USDA NRCS monarch habitat enhancement (E327136Z2)',
+  'common-practice': 'common practice among native-plant gardeners',
+};
 
 function statusOf(c: PaletteConstraint): 'met' | 'unmet' | 'na' {
   if (!c.applies) return 'na';
@@ -26,7 +34,7 @@ export function ConstraintsPanel({ constraints }: { constraints: readonly Palett
   // Rules that apply first, so the ones to act on are not buried under "does not apply".
   const ordered = [...constraints].sort((a, b) => Number(b.applies) - Number(a.applies));
   return (
-    <ul className={styles.list} aria-label="Design rules">
+    <ul className={styles.list} aria-label="How this mix is balanced">
       {ordered.map((c) => {
         const status = statusOf(c);
         const Icon = status === 'met' ? CheckmarkCircle20Filled : status === 'unmet' ? DismissCircle20Regular : Info20Regular;
@@ -38,6 +46,7 @@ export function ConstraintsPanel({ constraints }: { constraints: readonly Palett
                 <span className={mergeClasses(styles.status, styles[status])}>{STATUS_WORDS[status]}:</span> {c.rule}
               </p>
               <p className={styles.detail}>{c.detail}</p>
+              <p className={styles.source}>Source: {SOURCE_WORDS[c.source] ?? c.source}</p>
             </div>
           </li>
         );

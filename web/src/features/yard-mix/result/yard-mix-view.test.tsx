@@ -27,10 +27,14 @@ describe('your yard mix', { timeout: 30_000 }, () => {
     expect(within(table).getAllByText('18 in (46 cm)')).toHaveLength(fixtureSpecies.length);
     expect(within(table).getByText('weight not known')).toBeInTheDocument();
 
-    const rules = screen.getByRole('list', { name: 'Design rules' });
+    const rules = screen.getByRole('list', { name: 'How this mix is balanced' });
     const items = within(rules).getAllByRole('listitem');
-    expect(items[0]).toHaveTextContent('Met: At least 3 species in flower April to mid-June (CP42 early period)');
-    expect(items[1]).toHaveTextContent('Not met: At least 3 species in flower August to October (CP42 late period)');
+    expect(items[0]).toHaveTextContent('Met: Spring (April to mid-June): at least 3 species in flower every month');
+    expect(items[1]).toHaveTextContent('Not met: Late summer and fall (August to October): at least 3 species in flower every month');
+    // Program names only in the source note, never in the rule.
+    expect(within(items[0]).getByText(/^Source:/)).toHaveTextContent('Source: USDA NRCS pollinator habitat practice (CP42)');
+    expect(within(items[0]).getByText(/^Met:/).parentElement?.textContent).not.toMatch(/CP42/);
+    expect(screen.getByTestId('total-footprint')).toHaveTextContent(/The plants take .* of your 200 ft²/);
     expect(items[1]).toHaveTextContent('Only 2 late bloomers suit your ground.');
     expect(items[2]).toHaveTextContent('Does not apply: At least one native milkweed');
 

@@ -11,6 +11,8 @@ import { type MixPlan, paletteRequestOf, planToSearchParams } from '../plan/mix-
 import { ConstraintsPanel } from './constraints-panel.js';
 import { downloadText, mixCsv } from './export-csv.js';
 import { MixActions } from './mix-actions.js';
+import { MixAdjust } from './mix-adjust.js';
+import { formatArea } from '@homeground/shared';
 import { MixNotes } from './mix-notes.js';
 import { mixRows } from './mix-rows.js';
 import { MixSpecies } from './mix-species.js';
@@ -41,13 +43,20 @@ export interface YardMixViewProps {
 /** Step 3: the balanced yard mix with its bloom chart, design rules, quantities and the person's changes. */
 export function YardMixView({ plan, onPlanChange, isSignedIn, signInHref, title = 'Your yard mix', intro, onChangeYard, onChangeGround }: YardMixViewProps) {
   const styles = useStyles();
-  const { query, slugs, isUpdating, toggleLock, toggleExclude, rebalance, swap } = useMixPlan(plan, onPlanChange);
+  const { query, slugs, isUpdating, toggleLock, toggleExclude, rebalance, swap, addSpecies, setSize } = useMixPlan(plan, onPlanChange);
   const [swapSlot, setSwapSlot] = useState<string | null>(null);
   const mix = query.data;
   const speciesList = mix ? mix.palette.chosen.map((c) => mix.species[c.slug]).filter(Boolean) : [];
   const cautions = useMixCautions(speciesList);
 
   if (query.isPending) return <LoadingState label="Working out your yard mix" />;
+  if (mix && mix.palette.coverage && !mix.palette.coverage.covered) {
+    return (
+      <EmptyState title="Homeground does not cover this region yet">
+        {mix.palette.coverage.message}
+      </EmptyState>
+    );
+  }
   if (query.isError || !mix) {
     return (
       <ErrorState
@@ -79,6 +88,16 @@ export function YardMixView({ plan, onPlanChange, isSignedIn, signInHref, title 
         {intro}
         <MixSummary site={mix.site} state={plan.region.state as StateCode} ecoregionCode={plan.region.ecoregionCode}
           count={rows.length} sizeReason={mix.palette.sizeReason} />
+        {mix.palette.plantingMethod === 'seeding' ? (
+          <p data-testid="seeding-plan">
+            A planting this size is sown as a meadow: about {Math.round((mix.seeding ?? []).reduce((sum, l) => sum + l.seedsPerSqFt, 0))} seeds per ft² in all, shared among the species below.
+          </p>
+        ) : (
+          <p data-testid="total-footprint">
+            The plants take {formatArea(mix.totalFootprintSqFt ?? 0)} of your {formatArea(mix.site.areaSqFt)} when grown (plants × spacing²).
+          </p>
+        )}
+        <MixAdjust size={mix.palette.size} state={plan.region.state as StateCode} inMix={slugs} onSize={setSize} onAdd={addSpecies} isBusy={isUpdating} />
         <MixActions
           save={<SaveMix isSignedIn={isSignedIn} signInHref={signInHref} defaultName={`${title === 'Your yard mix' ? 'Yard mix' : title}, ${stateName}`}
             buildRequest={(name) => ({ name, request: paletteRequestOf(plan), chosen: slugs })} />}
@@ -110,7 +129,7 @@ export function YardMixView({ plan, onPlanChange, isSignedIn, signInHref, title 
       </ContentCard>
 
       <ContentCard aria-labelledby="rules-heading">
-        <Heading level="section" id="rules-heading">Design rules</Heading>
+        <Heading level="section" id="rules-heading">How this mix is balanced</Heading>
         <ConstraintsPanel constraints={mix.palette.constraints} />
       </ContentCard>
 
