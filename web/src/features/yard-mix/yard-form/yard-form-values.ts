@@ -17,6 +17,10 @@ export interface YardFormValues {
   heightUnit: HeightUnit;
   deerPressure: DeerPressure | '';
   goals: Goal[];
+  /** Add shrubs and small trees (a yard mix is herbaceous unless asked). */
+  woodyPlants: boolean;
+  /** Allow plants that spread hard or seed themselves about, even in a small bed. */
+  spreaders: boolean;
 }
 
 export type YardField = 'sun' | 'moisture' | 'soilTexture' | 'area' | 'maxHeight' | 'deerPressure' | 'goals';
@@ -24,6 +28,7 @@ export type YardErrors = Partial<Record<YardField, string>>;
 
 export const EMPTY_YARD: YardFormValues = {
   sun: '', moisture: '', soilTexture: '', area: '', areaUnit: 'ft2', maxHeight: '', heightUnit: 'ft', deerPressure: '', goals: [],
+  woodyPlants: false, spreaders: false,
 };
 
 /** 10 acres in m² (the site schema's limit is in ft²). */
@@ -96,6 +101,8 @@ export function checkYard(values: YardFormValues): YardCheck {
     ...(heightCm !== null ? { maxHeightCm: Math.round(heightCm) } : {}),
     deerPressure: values.deerPressure,
     goals: values.goals,
+    ...(values.woodyPlants ? { woodyPlants: true } : {}),
+    ...(values.spreaders ? { spreaders: true } : {}),
   };
   const parsed = siteRequestSchema.safeParse(candidate);
   if (!parsed.success) {
@@ -121,5 +128,7 @@ export function valuesFromSite(site: SiteRequest | undefined, areaUnit: AreaUnit
     heightUnit: 'ft',
     deerPressure: site.deerPressure,
     goals: [...site.goals],
+    woodyPlants: site.woodyPlants === true,
+    spreaders: site.spreaders === true,
   };
 }

@@ -112,6 +112,10 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
             ))}
           </div>
         </div>
+        <Checkbox name="woodyPlants" checked={values.woodyPlants} onChange={(_, d) => set('woodyPlants', d.checked === true)}
+          label="Add shrubs and small trees (only those that fit your bed, in a share of it)" />
+        <Checkbox name="spreaders" checked={values.spreaders} onChange={(_, d) => set('spreaders', d.checked === true)}
+          label="Include plants that spread or seed themselves about (left out of beds under 500 ft² / 46 m² otherwise)" />
       </fieldset>
 
       <div className={styles.actions}>
