@@ -6,3 +6,4 @@ export type { PlanChange } from './hooks/use-mix-plan.js';
 export {
   type AreaUnit, type MixPlan, type MixRegion, hasPlanParams, planFromSavedMix, planFromSearchParams, planToSearchParams, regionFromSearchParams,
 } from './plan/mix-plan.js';
+export { SavedMixesList } from './result/saved-mixes-list.js';
