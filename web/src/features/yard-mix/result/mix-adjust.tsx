@@ -1,4 +1,4 @@
-import { Button, Combobox, Field, makeStyles, Option, SpinButton, tokens } from '@fluentui/react-components';
+import { Button, Field, Input, makeStyles, SpinButton, tokens } from '@fluentui/react-components';
 import { Add20Regular } from '@fluentui/react-icons';
 import { MAX_MIX_SIZE, type StateCode } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
@@ -7,7 +7,8 @@ import { speciesListQueryOptions } from '../../../api/species/species.queries.js
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXL, alignItems: 'flex-end' },
-  search: { display: 'flex', gap: tokens.spacingHorizontalS, alignItems: 'flex-end' },
+  search: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS },
+  matches: { listStyle: 'none', margin: 0, padding: 0, display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalS },
 });
 
 export interface MixAdjustProps {
@@ -27,9 +28,8 @@ export function MixAdjust({ size, state, inMix, onSize, onAdd, isBusy }: MixAdju
   const styles = useStyles();
   const [count, setCount] = useState(size);
   const [text, setText] = useState('');
-  const [picked, setPicked] = useState<string | null>(null);
-  const search = useQuery({ ...speciesListQueryOptions({ q: text, state, pageSize: 8 }), enabled: text.trim().length >= 2 });
-  const options = (search.data?.items ?? []).filter((s) => !inMix.includes(s.slug));
+  const search = useQuery({ ...speciesListQueryOptions({ q: text.trim(), state, pageSize: 8 }), enabled: text.trim().length >= 2 });
+  const matches = (search.data?.items ?? []).filter((s) => !inMix.includes(s.slug));
   return (
     <div className={styles.root} data-print="hide">
       <Field label="Number of species">
@@ -41,21 +41,19 @@ export function MixAdjust({ size, state, inMix, onSize, onAdd, isBusy }: MixAdju
       <Button disabled={isBusy || count === size} onClick={() => onSize(count)}>Use {count} species</Button>
       <div className={styles.search}>
         <Field label="Add a species by name">
-          <Combobox
-            freeform
-            placeholder="e.g. prairie smoke"
-            value={text}
-            onInput={(e) => { setText((e.target as HTMLInputElement).value); setPicked(null); }}
-            onOptionSelect={(_, d) => { setPicked(d.optionValue ?? null); setText(d.optionText ?? ''); }}
-          >
-            {options.map((s) => (
-              <Option key={s.slug} value={s.slug} text={s.commonName}>{`${s.commonName} (${s.scientificName})`}</Option>
-            ))}
-          </Combobox>
+          <Input value={text} placeholder="e.g. prairie smoke" onChange={(_, d) => setText(d.value)} />
         </Field>
-        <Button icon={<Add20Regular />} disabled={!picked || isBusy} onClick={() => { if (picked) onAdd(picked); setText(''); setPicked(null); }}>
-          Add to mix
-        </Button>
+        {matches.length > 0 ? (
+          <ul className={styles.matches} aria-label="Species to add">
+            {matches.map((s) => (
+              <li key={s.slug}>
+                <Button size="small" icon={<Add20Regular />} disabled={isBusy} onClick={() => { onAdd(s.slug); setText(''); }}>
+                  Add {s.commonName}
+                </Button>
+              </li>
+            ))}
+          </ul>
+        ) : null}
       </div>
     </div>
   );
