@@ -2,7 +2,7 @@ import type { MixResponse } from '@homeground/shared';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import { balanceQueryOptions, mixKeys } from '../../../api/mixes/mixes.queries.js';
-import { balanceRequestFor, type MixPlan } from '../plan/mix-plan.js';
+import { balanceRequestFor, type MixPlan } from '../utils/mix-plan.js';
 
 export type PlanChange = (plan: MixPlan, options?: { replace?: boolean }) => void;
 

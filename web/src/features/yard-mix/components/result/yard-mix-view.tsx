@@ -1,25 +1,25 @@
 import { makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import { STATE_NAMES, type StateCode } from '@homeground/shared';
 import { useState, type ReactNode } from 'react';
-import { ContentCard } from '../../../components/page/content-card.js';
-import { Heading } from '../../../components/page/page-heading.js';
-import { EmptyState, ErrorState, LoadingState } from '../../../components/states/index.js';
-import { paths } from '../../../config/paths.js';
+import { ContentCard } from '../../../../components/page/content-card.js';
+import { Heading } from '../../../../components/page/page-heading.js';
+import { EmptyState, ErrorState, LoadingState } from '../../../../components/states/index.js';
+import { paths } from '../../../../config/paths.js';
 import { BloomChart } from '../bloom-chart/bloom-chart.js';
-import { type PlanChange, useMixPlan } from '../hooks/use-mix-plan.js';
-import { type MixPlan, paletteRequestOf, planToSearchParams } from '../plan/mix-plan.js';
+import { type PlanChange, useMixPlan } from '../../hooks/use-mix-plan.js';
+import { type MixPlan, paletteRequestOf, planToSearchParams } from '../../utils/mix-plan.js';
 import { ConstraintsPanel } from './constraints-panel.js';
-import { downloadText, mixCsv } from './export-csv.js';
+import { downloadText, mixCsv } from '../../utils/export-csv.js';
 import { MixActions } from './mix-actions.js';
 import { MixAdjust } from './mix-adjust.js';
 import { formatArea } from '@homeground/shared';
 import { MixNotes } from './mix-notes.js';
-import { mixRows } from './mix-rows.js';
+import { mixRows } from '../../utils/mix-rows.js';
 import { MixSpecies } from './mix-species.js';
 import { MixSummary } from './mix-summary.js';
 import { SaveMix } from './save-mix.js';
 import { SwapDialog } from './swap-dialog.js';
-import { useMixCautions } from './use-mix-cautions.js';
+import { useMixCautions } from '../../hooks/use-mix-cautions.js';
 import './mix-print.css';
 
 const useStyles = makeStyles({

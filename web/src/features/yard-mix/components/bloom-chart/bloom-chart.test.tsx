@@ -1,10 +1,10 @@
 import { FluentProvider } from '@fluentui/react-components';
 import { render, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { homegroundTheme } from '../../../theme/index.js';
-import { fixtureSpecies } from '../testing/mix-fixtures.js';
+import { homegroundTheme } from '../../../../theme/index.js';
+import { fixtureSpecies } from '../../testing/mix-fixtures.js';
 import { BloomChart } from './bloom-chart.js';
-import { describeGaps, monthlyBloom } from './bloom-gaps.js';
+import { describeGaps, monthlyBloom } from '../../utils/bloom-gaps.js';
 
 // Bloom months come from the hand-built fixture (testing/mix-fixtures.ts): no flowering species
 // blooms in September; only the sedge, which CP42 does not count as a flowering species, does.

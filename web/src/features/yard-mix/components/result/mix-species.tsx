@@ -1,12 +1,12 @@
 import { Button, makeStyles, MessageBar, MessageBarBody, Tab, TabList, tokens } from '@fluentui/react-components';
 import { ArrowSync20Regular } from '@fluentui/react-icons';
 import { useState } from 'react';
-import { ContentCard } from '../../../components/page/content-card.js';
-import { Heading } from '../../../components/page/page-heading.js';
+import { ContentCard } from '../../../../components/page/content-card.js';
+import { Heading } from '../../../../components/page/page-heading.js';
 import { MixCards } from './mix-cards.js';
-import type { MixRow } from './mix-rows.js';
+import type { MixRow } from '../../utils/mix-rows.js';
 import { MixTable } from './mix-table.js';
-import type { SpeciesCaution } from './use-mix-cautions.js';
+import type { SpeciesCaution } from '../../hooks/use-mix-cautions.js';
 
 const useStyles = makeStyles({
   head: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalL, alignItems: 'center', justifyContent: 'space-between', marginBottom: tokens.spacingVerticalM },

@@ -1,7 +1,7 @@
 import { mergeClasses } from '@fluentui/react-components';
 import type { SpeciesSummary } from '@homeground/shared';
-import { flowerSwatch, type FlowerSwatch } from '../../../theme/flower-colours.js';
-import { MIN_IN_BLOOM } from './bloom-gaps.js';
+import { flowerSwatch, type FlowerSwatch } from '../../../../theme/flower-colours.js';
+import { MIN_IN_BLOOM } from '../../utils/bloom-gaps.js';
 import { useBloomChartStyles } from './bloom-chart.styles.js';
 
 /** The colours that appear in this chart with their labels, and what the gap hatch means. */

@@ -1,10 +1,10 @@
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import { formatHeightRangeCm } from '@homeground/shared';
-import { bloomWords, type MixRow, whyItFits } from './mix-rows.js';
-import { plantsWords, seedsWords, spacingWords, weightWords } from './quantity-words.js';
+import { bloomWords, type MixRow, whyItFits } from '../../utils/mix-rows.js';
+import { plantsWords, seedsWords, spacingWords, weightWords } from '../../utils/quantity-words.js';
 import { SpeciesActions } from './species-actions.js';
 import { SpeciesCautions } from './species-cautions.js';
-import type { SpeciesCaution } from './use-mix-cautions.js';
+import type { SpeciesCaution } from '../../hooks/use-mix-cautions.js';
 
 const useStyles = makeStyles({
   scroller: { overflowX: 'auto', maxWidth: '100%' },

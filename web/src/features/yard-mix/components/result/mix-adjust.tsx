@@ -3,7 +3,7 @@ import { Add20Regular } from '@fluentui/react-icons';
 import { MAX_MIX_SIZE, type StateCode } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { speciesListQueryOptions } from '../../../api/species/species.queries.js';
+import { speciesListQueryOptions } from '../../../../api/species/species.queries.js';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXL, alignItems: 'flex-end' },

@@ -1,9 +1,9 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { formatHeightRangeCm } from '@homeground/shared';
-import { Heading } from '../../../components/page/page-heading.js';
-import { bloomWords, whyItFits } from './mix-rows.js';
+import { Heading } from '../../../../components/page/page-heading.js';
+import { bloomWords, whyItFits } from '../../utils/mix-rows.js';
 import type { MixViewProps } from './mix-table.js';
-import { plantsWords, seedsWords, spacingWords, weightWords } from './quantity-words.js';
+import { plantsWords, seedsWords, spacingWords, weightWords } from '../../utils/quantity-words.js';
 import { SpeciesActions } from './species-actions.js';
 import { SpeciesCautions } from './species-cautions.js';
 

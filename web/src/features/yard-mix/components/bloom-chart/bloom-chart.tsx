@@ -1,9 +1,9 @@
 import { mergeClasses } from '@fluentui/react-components';
 import { isFloweringSpecies, type SpeciesSummary } from '@homeground/shared';
 import { useId, useMemo } from 'react';
-import { flowerSwatch } from '../../../theme/flower-colours.js';
+import { flowerSwatch } from '../../../../theme/flower-colours.js';
 import { BloomLegend } from './bloom-legend.js';
-import { describeGaps, MONTH_NAMES, monthlyBloom } from './bloom-gaps.js';
+import { describeGaps, MONTH_NAMES, monthlyBloom } from '../../utils/bloom-gaps.js';
 import { useBloomChartStyles } from './bloom-chart.styles.js';
 
 /**

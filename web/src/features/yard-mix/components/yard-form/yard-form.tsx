@@ -2,13 +2,13 @@ import { Button, Checkbox } from '@fluentui/react-components';
 import { ArrowLeft20Regular, ArrowRight20Regular } from '@fluentui/react-icons';
 import type { Goal, SiteRequest } from '@homeground/shared';
 import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
-import type { AreaUnit } from '../plan/mix-plan.js';
+import type { AreaUnit } from '../../utils/mix-plan.js';
 import { ChoiceField } from './choice-field.js';
 import { MeasureField } from './measure-field.js';
-import { DEER_CHOICES, GOAL_CHOICES, MOISTURE_CHOICES, SOIL_CHOICES, SUN_CHOICES } from './yard-form-choices.js';
+import { DEER_CHOICES, GOAL_CHOICES, MOISTURE_CHOICES, SOIL_CHOICES, SUN_CHOICES } from '../../utils/yard-form-choices.js';
 import {
   checkYard, type HeightUnit, otherAreaUnit, otherHeightUnit, type YardErrors, type YardField, type YardFormValues,
-} from './yard-form-values.js';
+} from '../../utils/yard-form-values.js';
 import { useYardFormStyles } from './yard-form.styles.js';
 
 const AREA_UNITS = [

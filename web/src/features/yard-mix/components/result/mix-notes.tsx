@@ -1,7 +1,7 @@
 import { makeStyles, MessageBar, MessageBarBody, MessageBarTitle, tokens } from '@fluentui/react-components';
-import { ContentCard } from '../../../components/page/content-card.js';
-import { Heading } from '../../../components/page/page-heading.js';
-import { lossFactorWords } from './quantity-words.js';
+import { ContentCard } from '../../../../components/page/content-card.js';
+import { Heading } from '../../../../components/page/page-heading.js';
+import { lossFactorWords } from '../../utils/quantity-words.js';
 
 const useStyles = makeStyles({
   text: { margin: `0 0 ${tokens.spacingVerticalM}`, maxWidth: '70ch' },

@@ -3,9 +3,9 @@ import {
 } from '@fluentui/react-components';
 import type { AlternativesRequest, ScorePart, ScorePartName } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
-import { alternativesQueryOptions } from '../../../api/mixes/mixes.queries.js';
-import { EmptyState, ErrorState, LoadingState } from '../../../components/states/index.js';
-import { whyItFits } from './mix-rows.js';
+import { alternativesQueryOptions } from '../../../../api/mixes/mixes.queries.js';
+import { EmptyState, ErrorState, LoadingState } from '../../../../components/states/index.js';
+import { whyItFits } from '../../utils/mix-rows.js';
 
 /** Every alternative suits the sun, soil and state already; the other reasons tell them apart. */
 const SHARED_BASICS: ReadonlySet<ScorePartName> = new Set(['native', 'sun', 'moisture']);

@@ -1,6 +1,6 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { Warning16Regular } from '@fluentui/react-icons';
-import type { SpeciesCaution } from './use-mix-cautions.js';
+import type { SpeciesCaution } from '../../hooks/use-mix-cautions.js';
 
 const useStyles = makeStyles({
   list: { listStyle: 'none', margin: `${tokens.spacingVerticalXS} 0 0`, padding: 0, display: 'grid', gap: tokens.spacingVerticalXXS },

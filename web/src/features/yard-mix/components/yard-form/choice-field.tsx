@@ -1,5 +1,5 @@
 import { Field, makeStyles, Radio, RadioGroup, tokens } from '@fluentui/react-components';
-import type { Choice } from './yard-form-choices.js';
+import type { Choice } from '../../utils/yard-form-choices.js';
 
 const useStyles = makeStyles({
   label: { display: 'flex', flexDirection: 'column' },

@@ -2,9 +2,9 @@ import { Button, Field, Input, makeStyles, MessageBar, MessageBarBody, tokens } 
 import { Save20Regular } from '@fluentui/react-icons';
 import { type SaveMixRequest, saveMixRequestSchema } from '@homeground/shared';
 import { useState, type FormEvent } from 'react';
-import { useSaveMixMutation } from '../../../api/mixes/mixes.mutations.js';
-import { RouterButton, RouterLink } from '../../../components/links/router-link.js';
-import { paths } from '../../../config/paths.js';
+import { useSaveMixMutation } from '../../../../api/mixes/mixes.mutations.js';
+import { RouterButton, RouterLink } from '../../../../components/links/router-link.js';
+import { paths } from '../../../../config/paths.js';
 import { CopyLinkButton } from './share-link.js';
 
 const useStyles = makeStyles({

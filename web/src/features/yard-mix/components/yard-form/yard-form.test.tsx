@@ -2,9 +2,9 @@ import { FluentProvider } from '@fluentui/react-components';
 import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { homegroundTheme } from '../../../theme/index.js';
+import { homegroundTheme } from '../../../../theme/index.js';
 import { YardForm } from './yard-form.js';
-import { checkYard, EMPTY_YARD } from './yard-form-values.js';
+import { checkYard, EMPTY_YARD } from '../../utils/yard-form-values.js';
 
 function renderForm() {
   const onSubmit = vi.fn();

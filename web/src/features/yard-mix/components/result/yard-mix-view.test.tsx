@@ -1,7 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { renderApp } from '../../../testing/render-app.js';
-import { driftlessEcoregion, FIXTURE_MIX_PATH, fixtureMix, fixtureSpecies } from '../testing/mix-fixtures.js';
+import { renderApp } from '../../../../testing/render-app.js';
+import { driftlessEcoregion, FIXTURE_MIX_PATH, fixtureMix, fixtureSpecies } from '../../testing/mix-fixtures.js';
 
 // Mix answers are the hand-built fixture (testing/mix-fixtures.ts); the caution sentence below is
 // the fixture's own, standing in for the species record's text.

@@ -1,7 +1,7 @@
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import { ArrowDownload20Regular, DocumentBulletList20Regular, Edit20Regular, Location20Regular, Print20Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
-import { RouterButton } from '../../../components/links/router-link.js';
+import { RouterButton } from '../../../../components/links/router-link.js';
 import { CopyLinkButton } from './share-link.js';
 
 const useStyles = makeStyles({

@@ -1,5 +1,5 @@
 import type { ChosenSpecies, MixQuantity, MixResponse, ScorePart, SpeciesSummary } from '@homeground/shared';
-import { MONTH_NAMES } from '../bloom-chart/bloom-gaps.js';
+import { MONTH_NAMES } from './bloom-gaps.js';
 
 /** One species of the mix with everything a row or card shows. */
 export interface MixRow {

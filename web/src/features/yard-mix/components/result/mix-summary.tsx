@@ -1,8 +1,8 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { formatArea, formatHeightCm, type Site, STATE_NAMES, type StateCode } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
-import { ecoregionQueryOptions } from '../../../api/ecoregions/ecoregions.queries.js';
-import { GOAL_CHOICES, MOISTURE_CHOICES } from '../yard-form/yard-form-choices.js';
+import { ecoregionQueryOptions } from '../../../../api/ecoregions/ecoregions.queries.js';
+import { GOAL_CHOICES, MOISTURE_CHOICES } from '../../utils/yard-form-choices.js';
 
 const useStyles = makeStyles({
   line: { margin: 0, fontSize: tokens.fontSizeBase400, lineHeight: tokens.lineHeightBase400, maxWidth: '70ch' },

@@ -2,7 +2,7 @@ import {
   type DeerPressure, type Goal, MAX_AREA_SQ_FT, type Moisture, SQUARE_METRES_PER_SQUARE_FOOT, type SiteRequest, type SoilTexture,
   type Sun, cmToInches, inchesToCm, roundTo, siteRequestSchema, squareFeetToSquareMetres,
 } from '@homeground/shared';
-import type { AreaUnit } from '../plan/mix-plan.js';
+import type { AreaUnit } from './mix-plan.js';
 
 export type HeightUnit = 'ft' | 'cm';
 

@@ -1,11 +1,11 @@
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import type { SiteRequest } from '@homeground/shared';
-import { ContentCard } from '../../../components/page/content-card.js';
-import { Heading } from '../../../components/page/page-heading.js';
-import type { AreaUnit, MixRegion } from '../plan/mix-plan.js';
+import { ContentCard } from '../../../../components/page/content-card.js';
+import { Heading } from '../../../../components/page/page-heading.js';
+import type { AreaUnit, MixRegion } from '../../utils/mix-plan.js';
 import { usePlaceWords } from '../result/mix-summary.js';
 import { YardForm } from './yard-form.js';
-import type { YardFormValues } from './yard-form-values.js';
+import type { YardFormValues } from '../../utils/yard-form-values.js';
 
 const useStyles = makeStyles({
   ground: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalS, margin: `0 0 ${tokens.spacingVerticalXL}` },

@@ -1,11 +1,11 @@
 import { formatArea, STATE_NAMES, type StateCode } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
-import { myMixesQueryOptions } from '../../../api/mixes/mixes.queries.js';
-import { ContentCard } from '../../../components/page/content-card.js';
-import { Heading } from '../../../components/page/page-heading.js';
-import { RouterLink } from '../../../components/links/router-link.js';
-import { EmptyState, ErrorState, LoadingState } from '../../../components/states/index.js';
-import { paths } from '../../../config/paths.js';
+import { myMixesQueryOptions } from '../../../../api/mixes/mixes.queries.js';
+import { ContentCard } from '../../../../components/page/content-card.js';
+import { Heading } from '../../../../components/page/page-heading.js';
+import { RouterLink } from '../../../../components/links/router-link.js';
+import { EmptyState, ErrorState, LoadingState } from '../../../../components/states/index.js';
+import { paths } from '../../../../config/paths.js';
 
 /** The signed-in person's saved mixes, newest first, each a link that reopens it. */
 export function SavedMixesList() {
