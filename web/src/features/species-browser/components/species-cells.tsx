@@ -1,4 +1,4 @@
-import type { SpeciesSummary } from '@homeground/shared';
+import { hostLevelOf, type SpeciesSummary } from '@homeground/shared';
 import { Checkmark16Filled, Warning16Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
 import { RouterLink } from '../../../components/links/router-link.js';
@@ -12,7 +12,6 @@ import { HighlightedText } from './highlighted-text.js';
 import { useTableStyles } from './species-table.styles.js';
 
 const SUN_SHORT = { full: 'Full', part: 'Part', shade: 'Shade' } as const;
-const count = new Intl.NumberFormat('en-US');
 
 function capitalise(word: string): string {
   return word.charAt(0).toUpperCase() + word.slice(1);
@@ -75,7 +74,7 @@ export function OptionalCell({ column, species, highlights }: { column: Optional
     case 'moisture':
       return listWords(species.moisture, MOISTURE_LABELS);
     case 'hostValue':
-      return species.lepidopteraGenusCount === null ? <Nothing spoken="Genus not in the host counts" /> : count.format(species.lepidopteraGenusCount);
+      return wildlifeWords(species);
     case 'monarchHost':
       return species.monarchHost ? (
         <span className={styles.yes}>
@@ -96,3 +95,13 @@ export function OptionalCell({ column, species, highlights }: { column: Optional
       );
   }
 }
+
+const HOST_SHORT = { top: 'among the best caterpillar hosts', good: 'a good caterpillar host', some: 'a few caterpillars', none: '' } as const;
+
+/** Homeground's several-part wildlife summary in a few words (caterpillars within its layer, monarchs), never a count. */
+function wildlifeWords(species: SpeciesSummary): string {
+  const level = hostLevelOf({ growthForm: species.growthForm, scientificName: species.scientificName, wildlife: { lepidopteraGenusCount: species.lepidopteraGenusCount } as SpeciesSummaryWildlife });
+  const parts = [HOST_SHORT[level], species.monarchHost ? 'monarch host' : ''].filter(Boolean);
+  return parts.length > 0 ? parts.join('; ') : 'not recorded';
+}
+type SpeciesSummaryWildlife = Parameters<typeof hostLevelOf>[0]['wildlife'];
