@@ -1,4 +1,4 @@
-import { balancePalette, plantsPerSpecies, siteRequestSchema } from '@homeground/shared';
+import { balancePalette, plantingMethodFor, plantsPerSpecies, seedingPlan, siteRequestSchema } from '@homeground/shared';
 import { loadCatalogue } from '../src/catalogue.js';
 import { MIX_SITES } from './mix-sites.js';
 
@@ -17,5 +17,9 @@ for (const s of MIX_SITES) {
   const plants = plantings.reduce((sum, p) => sum + p.plants, 0);
   const woody = chosen.filter((x) => ['shrub', 'tree', 'vine'].includes(x.growthForm)).length;
   console.log(`## ${s.label}: ${chosen.length} species, ${plants} plants, footprint ${Math.round(footprint)} ft² (${Math.round((footprint / site.areaSqFt) * 100)} %), woody ${woody}`);
-  console.log(plantings.map((p, i) => `${chosen[i].commonNames[0]} ${p.plants}`).join('; '));
+  if (plantingMethodFor(site.areaSqFt) === 'seeding') {
+    console.log(`seeding plan: ${seedingPlan(chosen, site.areaSqFt).map((l, i) => `${chosen[i].commonNames[0]} ${l.seedsPerSqFt}/ft²`).join('; ')}`);
+  } else {
+    console.log(plantings.map((p, i) => `${chosen[i].commonNames[0]} ${p.plants}`).join('; '));
+  }
 }
