@@ -90,7 +90,7 @@ export interface PaletteConstraint {
 
 export interface ObjectiveTerm {
   name:
-    | 'fit' | 'host-plants' | 'bloom-periods' | 'flowering-count' | 'milkweed' | 'grasses' | 'height-tiers' | 'colours'
+    | 'fit' | 'host-plants' | 'bloom-periods' | 'bloom-months' | 'flowering-count' | 'milkweed' | 'grasses' | 'height-tiers' | 'colours'
     | 'genus-variety';
   value: number;
 }
