@@ -42,8 +42,12 @@ const HABITAT_MATCHES: Partial<Record<Habitat, Habitat[]>> = {
   'sand-prairie': ['sand-prairie', 'dune', 'pine-barrens'],
   'pine-barrens': ['pine-barrens', 'sand-prairie'],
 };
-/** Old fields follow clearing anywhere in the forested East and the tallgrass plains, so they match every region there. */
+/**
+ * Old fields follow clearing anywhere in the forested East and the tallgrass plains, so they match every
+ * region there, except the peatlands of northern Minnesota (49), which were never farmed much.
+ */
 const OLD_FIELD_LEVEL1 = new Set(['5', '8']);
+const NO_OLD_FIELDS = new Set(['49']);
 const TALLGRASS_PLAINS = new Set(['27', '28', '29', '32', '33', '34', '40', '46', '47', '48']);
 /** Dry western plains: an eastern plant gets in only through a grassland, sand or wetland habitat, not a streambank or woodland. */
 const DRY_PLAINS = new Set(['25', '26', '42', '43', '44']);
@@ -61,7 +65,7 @@ export function firstPass(s: Pick<Species, 'nativeStates' | 'habitats'>, regions
     const communities = new Set<string>(r.plantCommunities);
     const habitats = DRY_PLAINS.has(r.code) ? s.habitats.filter((h) => DRY_PLAINS_HABITATS.has(h)) : s.habitats;
     return habitats.some((h) =>
-      (h === 'old-field' && (OLD_FIELD_LEVEL1.has(r.level1.code) || TALLGRASS_PLAINS.has(r.code)))
+      (h === 'old-field' && !NO_OLD_FIELDS.has(r.code) && (OLD_FIELD_LEVEL1.has(r.level1.code) || TALLGRASS_PLAINS.has(r.code)))
       || (HABITAT_MATCHES[h] ?? [h]).some((c) => communities.has(c)));
   }).map((r) => r.code);
 }

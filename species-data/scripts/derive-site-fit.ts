@@ -18,7 +18,7 @@ import { inline, readRecordText, setKey, setSource, SPECIES_DIR, writeRecordText
 import path from 'node:path';
 
 const OPEN: Habitat[] = ['prairie', 'sand-prairie', 'wet-prairie', 'savanna', 'glade', 'dune', 'old-field', 'shortgrass-prairie',
-  'mixed-grass-prairie', 'marsh', 'pine-barrens', 'coastal-plain'];
+  'mixed-grass-prairie', 'marsh', 'pine-barrens', 'coastal-plain', 'wetland', 'fen-bog'];
 const SHADED: Habitat[] = ['forest', 'floodplain-forest'];
 const DRY: Habitat[] = ['sand-prairie', 'glade', 'rock-outcrop', 'shortgrass-prairie', 'mixed-grass-prairie', 'dune', 'pine-barrens'];
 const WET: Habitat[] = ['marsh', 'wetland', 'fen-bog', 'wet-prairie', 'streambank', 'floodplain-forest'];
@@ -78,6 +78,9 @@ const OPTIMUM_OVERRIDES: Record<string, { sun?: Sun[]; moisture?: Moisture[] }> 
   'andropogon-gerardii': { moisture: ['medium'] },
   'panicum-virgatum': { moisture: ['medium'] },
   'sorghastrum-nutans': { moisture: ['medium'] },
+  'silphium-perfoliatum': { moisture: ['medium', 'wet'] },
+  'rudbeckia-laciniata': { moisture: ['medium', 'wet'] },
+  'athyrium-filix-femina': { moisture: ['medium', 'wet'] },
 };
 
 /** National Wetland Plant List classes as recalled (Midwest / Northcentral–Northeast); others null. */

@@ -9,6 +9,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { DATA_DIR, loadCatalogue } from './catalogue.js';
 import { checkValueRows, findCheckValueRow } from './reference/check-values.js';
 import { referenceAvailable } from './reference/reference-dir.js';
+import { loadSylvanSeedsPercentages, SYLVANSEEDS_FILE } from './reference/sylvanseeds.js';
 import { loadLepidopteraByGenus, loadUsdaCharacteristics, loadUsdaDistribution, loadUsdaTaxa } from './reference/usda-plants.js';
 
 const FILES = ['usda_plants_taxa.csv', 'usda_plants_state_distribution.csv', 'tallamy_shropshire_2009_lepidoptera_by_plant_genus.csv', 'CHECK-VALUES.md'];
@@ -79,6 +80,96 @@ describe.skipIf(!available || !referenceAvailable(['usda_plants_characteristics.
     expect(withValue).toBeGreaterThan(100);
     expect(bad).toEqual([]);
   });
+
+  it('gives a poison caution to every species USDA rates toxic (toxicity Slight, Moderate or Severe)', () => {
+    const characteristics = loadUsdaCharacteristics();
+    const missing: string[] = [];
+    let rated = 0;
+    for (const s of loadCatalogue().species) {
+      const toxicity = characteristics.get(s.usdaSymbol)?.toxicity ?? '';
+      if (!['Slight', 'Moderate', 'Severe'].includes(toxicity)) continue;
+      rated++;
+      if (!s.cautions.some((c) => c.kind === 'toxic-if-eaten' || c.kind === 'livestock' || c.kind === 'pets')) missing.push(`${s.slug} (${toxicity})`);
+    }
+    expect(rated).toBeGreaterThan(5);
+    expect(missing).toEqual([]);
+  });
+
+  /** A record differs when USDA's mature height lies outside its range widened by a fifth each way. */
+  it('agrees with USDA mature height (height_mature_feet), or the record explains why USDA is wrong', () => {
+    const characteristics = loadUsdaCharacteristics();
+    const unexplained: string[] = [];
+    let compared = 0;
+    let differ = 0;
+    for (const s of loadCatalogue().species) {
+      const feet = Number(characteristics.get(s.usdaSymbol)?.height_mature_feet || NaN);
+      if (!Number.isFinite(feet)) continue;
+      compared++;
+      const cm = feet * 30.48;
+      if (cm >= s.heightCm.min * 0.8 && cm <= s.heightCm.max * 1.2) continue;
+      differ++;
+      if (!s.reconciliations.some((r) => r.field === 'heightCm')) unexplained.push(`${s.slug}: ${s.heightCm.min}–${s.heightCm.max} cm, USDA ${feet} ft (${Math.round(cm)} cm)`);
+    }
+    console.log(`heights compared with USDA: ${compared}; ${differ} differ, each with a reconciliation note`);
+    expect(compared).toBeGreaterThan(100);
+    expect(unexplained).toEqual([]);
+  });
+
+  /** USDA gives a season; the record differs when none of its months falls in that season. */
+  it('agrees with USDA bloom period (bloom_period), or the record explains why USDA is wrong', () => {
+    const SEASON_MONTHS: Record<string, number[]> = {
+      'Late Winter': [2, 3], Winter: [12, 1, 2], 'Early Spring': [3, 4], 'Mid Spring': [4, 5], 'Late Spring': [5, 6],
+      Spring: [3, 4, 5, 6], 'Early Summer': [6, 7], 'Mid Summer': [7], 'Late Summer': [8, 9], Summer: [6, 7, 8], Fall: [9, 10],
+    };
+    const characteristics = loadUsdaCharacteristics();
+    const unexplained: string[] = [];
+    let compared = 0;
+    let differ = 0;
+    for (const s of loadCatalogue().species) {
+      const season = characteristics.get(s.usdaSymbol)?.bloom_period ?? '';
+      const months = SEASON_MONTHS[season];
+      if (!months || s.bloomMonths.length === 0) continue;
+      compared++;
+      if (s.bloomMonths.some((m) => months.includes(m))) continue;
+      differ++;
+      if (!s.reconciliations.some((r) => r.field === 'bloomMonths')) unexplained.push(`${s.slug}: months ${s.bloomMonths.join(',')}, USDA "${season}"`);
+    }
+    console.log(`bloom months compared with USDA: ${compared}; ${differ} differ, each with a reconciliation note`);
+    expect(compared).toBeGreaterThan(100);
+    expect(unexplained).toEqual([]);
+  });
+});
+
+describe.skipIf(!referenceAvailable([SYLVANSEEDS_FILE]))('germination rates vs SylvanSeeds (Fernández-Pascual 2021) laboratory trials', () => {
+  /** A record differs when its rate lies outside the trials' range widened by a fifth each way. */
+  it('keeps each stored rate near the published trials, or the record explains the difference', () => {
+    const trials = loadSylvanSeedsPercentages();
+    const unexplained: string[] = [];
+    let compared = 0;
+    for (const s of loadCatalogue().species) {
+      const pct = trials.get(s.scientificName);
+      if (!pct?.length) continue;
+      compared++;
+      const lo = Math.min(...pct);
+      const hi = Math.max(...pct);
+      const rate = s.germination.germinationRatePct;
+      if (rate >= lo * 0.8 && rate <= hi * 1.2) continue;
+      if (!s.reconciliations.some((r) => r.field === 'germination.germinationRatePct')) {
+        unexplained.push(`${s.slug}: ${rate} %, trials ${Math.round(lo)}–${Math.round(hi)} %`);
+      }
+    }
+    console.log(`germination rates compared with SylvanSeeds: ${compared} species`);
+    expect(compared).toBeGreaterThan(20);
+    expect(unexplained).toEqual([]);
+  });
+
+  it('Pennsylvania sedge: the trials show 64–89 %, and the record is in that range', () => {
+    const pct = loadSylvanSeedsPercentages().get('Carex pensylvanica') ?? [];
+    expect(Math.round(Math.min(...pct))).toBe(64);
+    expect(Math.round(Math.max(...pct))).toBe(89);
+    const sedge = loadCatalogue().species.find((s) => s.slug === 'carex-pensylvanica');
+    expect(sedge?.germination.germinationRatePct).toBeGreaterThanOrEqual(64);
+  });
 });
 
 describe.skipIf(!available)('catalogue vs Tallamy & Shropshire 2009 (Lepidoptera species per plant genus)', () => {
@@ -98,6 +189,12 @@ describe.skipIf(!available)('catalogue vs Tallamy & Shropshire 2009 (Lepidoptera
       if (expected.size === 0) expected.add(null);
       if (!expected.has(s.wildlife.lepidopteraGenusCount)) {
         bad.push(`${s.slug}: ${s.wildlife.lepidopteraGenusCount}, table says ${[...expected].join(' or ')}`);
+      }
+      // A genus with its own row that the record overrides with its older name's count must say why.
+      const own = listed(genus);
+      const explained = s.reconciliations.some((r) => r.field === 'wildlife.lepidopteraGenusCount');
+      if (own !== undefined && s.wildlife.lepidopteraGenusCount !== own && !explained) {
+        bad.push(`${s.slug}: takes ${s.wildlife.lepidopteraGenusCount} over its own genus row (${own}) without a reconciliation note`);
       }
     }
     expect(bad).toEqual([]);

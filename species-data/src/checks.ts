@@ -14,14 +14,15 @@ function checkSpecies(s: Species, sourceKeys: Set<string>): string[] {
   const out: string[] = [];
   if (s.slug !== slugFromName(s.scientificName)) out.push(`slug should be "${slugFromName(s.scientificName)}"`);
   for (const field of SOURCED_FIELDS) {
-    // Until every record has the newer facts, a record that lacks one needs no source for it.
-    const value: unknown = field.includes('.') ? 'nested' : (s as Record<string, unknown>)[field];
-    if (value === undefined) continue;
     const key = s.sources[field];
     if (!key) out.push(`sources.${field} is missing (name a source key or "from-memory")`);
     else if (!sourceKeys.has(key)) out.push(`sources.${field}: unknown source key "${key}"`);
   }
   for (const c of s.cautions) if (!sourceKeys.has(c.source)) out.push(`caution source "${c.source}" is not in sources.json`);
+  const kinds = s.cautions.map((c) => c.kind);
+  for (const kind of new Set(kinds)) {
+    if (kinds.filter((k) => k === kind).length > 1) out.push(`two "${kind}" cautions: merge them into one`);
+  }
   const isFlowering = s.growthForm !== 'fern' && s.growthForm !== 'graminoid';
   if (isFlowering && s.bloomMonths.length === 0) out.push('a flowering plant needs bloomMonths');
   if (new Set(s.bloomMonths).size !== s.bloomMonths.length) out.push('bloomMonths repeats a month');

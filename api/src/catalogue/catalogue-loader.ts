@@ -1,7 +1,7 @@
 import { Logger } from '@nestjs/common';
 import type { Catalogue } from '@homeground/species-data';
 import type { DataSource } from 'typeorm';
-import { recordHash, writeEcoregions, writeSpecies } from './catalogue-writer.js';
+import { recordHash, withAddedFacts, writeEcoregions, writeSpecies } from './catalogue-writer.js';
 
 export interface LoadReport {
   inserted: number;
@@ -34,6 +34,9 @@ export async function loadCatalogueIntoDatabase(db: DataSource, catalogue: Catal
       } else if (row.seed_hash === hash) {
         report.unchanged++;
       } else if (row.seed_hash === null) {
+        const [kept]: { record: string }[] = await tx.query(`SELECT record FROM species WHERE slug = ?`, [s.slug]);
+        const completed = kept ? withAddedFacts(JSON.parse(kept.record) as Record<string, unknown>, s) : null;
+        if (completed) await tx.query(`UPDATE species SET record = ? WHERE slug = ?`, [JSON.stringify(completed), s.slug]);
         report.keptCuratorEdits++;
       } else {
         await writeSpecies(tx, s, { seedHash: hash, editedBy: null });

@@ -7,6 +7,29 @@ export function recordHash(value: unknown): string {
   return createHash('sha256').update(JSON.stringify(value)).digest('hex').slice(0, 32);
 }
 
+/** Facts added to the record shape after some curator edits were saved; those edits lack them. */
+const ADDED_FACTS = [
+  'ecoregions', 'sunOptimum', 'moistureOptimum', 'wetlandIndicator', 'needsAcidSoil', 'selfSows',
+  'commercialAvailability', 'protectedIn',
+] as const;
+const ADDED_SOURCED = ['ecoregions', 'sunOptimum', 'moistureOptimum', 'wetlandIndicator', 'commercialAvailability', 'protectedIn'] as const;
+
+/**
+ * A curator-edited record saved before the site-fit facts existed, completed with the catalogue
+ * file's values for those facts only (the curator's other edits stay as they are). Returns null
+ * when nothing is missing.
+ */
+export function withAddedFacts(edited: Record<string, unknown>, file: Species): Species | null {
+  const missing = ADDED_FACTS.filter((k) => !(k in edited));
+  const sources = (edited.sources ?? {}) as Record<string, string>;
+  const missingSources = ADDED_SOURCED.filter((k) => !(k in sources));
+  if (missing.length === 0 && missingSources.length === 0) return null;
+  const out: Record<string, unknown> = { ...edited };
+  for (const k of missing) out[k] = file[k];
+  out.sources = { ...sources, ...Object.fromEntries(missingSources.map((k) => [k, file.sources[k]])) };
+  return out as Species;
+}
+
 /**
  * Writes one species with its names and native states, inside the caller's transaction.
  * `previousSlug` renames a record in place (names, states and photo follow by ON UPDATE CASCADE).

@@ -29,15 +29,15 @@ export function speciesToCsvRow(s: Species): SpeciesCsvRow {
     heightMinCm: String(s.heightCm.min), heightMaxCm: String(s.heightCm.max),
     spreadMinCm: String(s.spreadCm.min), spreadMaxCm: String(s.spreadCm.max),
     bloomMonths: list(s.bloomMonths), flowerColours: list(s.flowerColours), sun: list(s.sun),
-    moisture: list(s.moisture), sunOptimum: list(s.sunOptimum ?? []), moistureOptimum: list(s.moistureOptimum ?? []),
-    wetlandIndicator: s.wetlandIndicator ?? '', needsAcidSoil: s.needsAcidSoil === undefined ? '' : String(s.needsAcidSoil),
-    soilTextures: list(s.soilTextures), nativeStates: list(s.nativeStates), ecoregions: list(s.ecoregions ?? []),
+    moisture: list(s.moisture), sunOptimum: list(s.sunOptimum), moistureOptimum: list(s.moistureOptimum),
+    wetlandIndicator: s.wetlandIndicator ?? '', needsAcidSoil: String(s.needsAcidSoil),
+    soilTextures: list(s.soilTextures), nativeStates: list(s.nativeStates), ecoregions: list(s.ecoregions),
     habitats: list(s.habitats),
     lepidopteraGenusCount: s.wildlife.lepidopteraGenusCount === null ? '' : String(s.wildlife.lepidopteraGenusCount),
     monarchHost: String(s.wildlife.monarchHost), pollinators: s.wildlife.pollinators, birds: s.wildlife.birds ?? '',
     specialistBees: list(s.wildlife.specialistBees), spreadHabit: s.spreadHabit,
-    selfSows: s.selfSows === undefined ? '' : String(s.selfSows), commercialAvailability: s.commercialAvailability ?? '',
-    protectedIn: list(s.protectedIn ?? []), deerResistance: s.deerResistance,
+    selfSows: String(s.selfSows), commercialAvailability: s.commercialAvailability ?? '',
+    protectedIn: list(s.protectedIn), deerResistance: s.deerResistance,
     treatments: s.germination.treatments.map(treatmentText).join(';'), needsLight: String(s.germination.needsLight),
     sowingDepthMm: String(s.germination.sowingDepthMm),
     seedsPerPound: s.germination.seedsPerPound === null ? '' : String(s.germination.seedsPerPound),
@@ -51,8 +51,6 @@ const split = (v: string | undefined) => (v ?? '').split(';').map((x) => x.trim(
 /** A number cell; blank and junk stay visible to the schema as NaN/undefined so it names the field. */
 const num = (v: string | undefined) => (v === undefined || v.trim() === '' ? undefined : Number(v));
 const bool = (v: string | undefined) => (v === 'true' ? true : v === 'false' ? false : v);
-/** A list cell that may be absent (older files): absent or blank leaves the key out. */
-const optionalList = (key: string, v: string | undefined) => (v?.trim() ? { [key]: split(v) } : {});
 
 function parseTreatment(text: string): unknown {
   const [kind, second, ...rest] = text.split(':');
@@ -105,13 +103,10 @@ export function csvRowToSpecies(row: Partial<Record<string, string>>, line: numb
     bloomMonths: split(row.bloomMonths).map(Number), flowerColours: split(row.flowerColours), sun: split(row.sun),
     moisture: split(row.moisture), soilTextures: split(row.soilTextures), nativeStates: split(row.nativeStates),
     habitats: split(row.habitats),
-    ...optionalList('sunOptimum', row.sunOptimum), ...optionalList('moistureOptimum', row.moistureOptimum),
-    ...optionalList('ecoregions', row.ecoregions),
-    ...(row.wetlandIndicator?.trim() ? { wetlandIndicator: row.wetlandIndicator.trim() } : {}),
-    ...(row.needsAcidSoil?.trim() ? { needsAcidSoil: bool(row.needsAcidSoil) } : {}),
-    ...(row.selfSows?.trim() ? { selfSows: bool(row.selfSows) } : {}),
-    ...(row.commercialAvailability?.trim() ? { commercialAvailability: row.commercialAvailability.trim() } : {}),
-    ...optionalList('protectedIn', row.protectedIn),
+    sunOptimum: split(row.sunOptimum), moistureOptimum: split(row.moistureOptimum), ecoregions: split(row.ecoregions),
+    // A blank cell is "not known" for the two nullable facts.
+    wetlandIndicator: row.wetlandIndicator?.trim() || null, needsAcidSoil: bool(row.needsAcidSoil), selfSows: bool(row.selfSows),
+    commercialAvailability: row.commercialAvailability?.trim() || null, protectedIn: split(row.protectedIn),
     wildlife: {
       lepidopteraGenusCount: row.lepidopteraGenusCount?.trim() ? Number(row.lepidopteraGenusCount) : null,
       monarchHost: bool(row.monarchHost), pollinators: row.pollinators,

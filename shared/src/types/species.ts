@@ -104,7 +104,7 @@ export type Germination = z.infer<typeof germinationSchema>;
 
 export const CAUTION_KINDS = [
   'toxic-if-eaten', 'sap-irritant', 'skin-irritant', 'eye-irritant', 'pets', 'livestock',
-  'aggressive-spreader', 'look-alike', 'protected', 'thorns',
+  'aggressive-spreader', 'look-alike', 'protected', 'thorns', 'regulated',
 ] as const;
 export const cautionSchema = z.object({
   kind: z.enum(CAUTION_KINDS),
@@ -127,28 +127,15 @@ export const wildlifeSchema = z.object({
   specialistBees: z.array(z.string()).default([]),
 });
 
-/** Facts every record has named a source for since the catalogue began. */
-const FIRST_SOURCED_FIELDS = [
+/** Facts that must each name a source key (or `from-memory`). */
+export const SOURCED_FIELDS = [
   'usdaSymbol', 'family', 'nativeStates', 'growthForm', 'lifespan', 'heightCm', 'bloomMonths',
   'flowerColours', 'sun', 'moisture', 'soilTextures', 'habitats', 'wildlife.lepidopteraGenusCount',
   'wildlife.monarchHost', 'spreadHabit', 'deerResistance', 'germination.treatments',
-  'germination.seedsPerPound', 'germination.germinationRatePct',
+  'germination.seedsPerPound', 'germination.germinationRatePct', 'ecoregions', 'sunOptimum',
+  'moistureOptimum', 'wetlandIndicator', 'commercialAvailability', 'protectedIn',
 ] as const;
-/** Facts added for ecoregion fit and graded site fit; optional until every record has them. */
-const ADDED_SOURCED_FIELDS = [
-  'ecoregions', 'sunOptimum', 'moistureOptimum', 'wetlandIndicator', 'commercialAvailability', 'protectedIn',
-] as const;
-/** Facts that must each name a source key (or `from-memory`). */
-export const SOURCED_FIELDS = [...FIRST_SOURCED_FIELDS, ...ADDED_SOURCED_FIELDS] as const;
 export type SourcedField = (typeof SOURCED_FIELDS)[number];
-
-type SourcesShape = { [K in (typeof FIRST_SOURCED_FIELDS)[number]]: z.ZodString } &
-  { [K in (typeof ADDED_SOURCED_FIELDS)[number]]: z.ZodOptional<z.ZodString> };
-/** Field → source key; unknown fields are refused. */
-export const sourcesSchema = z.strictObject(Object.fromEntries([
-  ...FIRST_SOURCED_FIELDS.map((f) => [f, z.string()]),
-  ...ADDED_SOURCED_FIELDS.map((f) => [f, z.string().optional()]),
-]) as SourcesShape);
 
 /** A note explaining where the record knowingly differs from a reference. */
 export const reconciliationSchema = z.object({
@@ -177,30 +164,30 @@ export const speciesSchema = z.object({
   sun: z.array(sunSchema).min(1),
   moisture: z.array(moistureSchema).min(1),
   /** Where it thrives: subsets of sun / moisture (which list what it tolerates). */
-  sunOptimum: z.array(sunSchema).min(1).optional(),
-  moistureOptimum: z.array(moistureSchema).min(1).optional(),
+  sunOptimum: z.array(sunSchema).min(1),
+  moistureOptimum: z.array(moistureSchema).min(1),
   /** National Wetland Plant List indicator (a published federal standard); null where unknown. */
-  wetlandIndicator: z.enum(WETLAND_INDICATORS).nullable().optional(),
+  wetlandIndicator: z.enum(WETLAND_INDICATORS).nullable(),
   /** Needs acid soil (e.g. blueberries, many ericads). */
-  needsAcidSoil: z.boolean().optional(),
+  needsAcidSoil: z.boolean(),
   soilTextures: z.array(soilTextureSchema).min(1),
   nativeStates: z.array(stateCodeSchema).min(1),
   /** EPA Level III ecoregion codes ("1"–"85") where the species is native; sourced field 'ecoregions'. */
-  ecoregions: z.array(z.string().regex(/^[1-9][0-9]?$/)).min(1).optional(),
+  ecoregions: z.array(z.string().regex(/^[1-9][0-9]?$/)).min(1),
   habitats: z.array(habitatSchema).min(1),
   wildlife: wildlifeSchema,
   spreadHabit: spreadHabitSchema,
   /** Heavy self-sower (seeds itself around a bed; evening primrose, some asters). */
-  selfSows: z.boolean().optional(),
+  selfSows: z.boolean(),
   /** USDA PLANTS `commercial_availability` where it has a value, else null. */
-  commercialAvailability: z.enum(COMMERCIAL_AVAILABILITY).nullable().optional(),
+  commercialAvailability: z.enum(COMMERCIAL_AVAILABILITY).nullable(),
   /** States where the species is legally protected (listed); empty when none. Used instead of a blanket 'protected'. */
-  protectedIn: z.array(stateCodeSchema).optional(),
+  protectedIn: z.array(stateCodeSchema),
   deerResistance: deerResistanceSchema,
   germination: germinationSchema,
   cautions: z.array(cautionSchema).default([]),
   tags: z.array(z.enum(['spring-ephemeral', 'evergreen', 'nitrogen-fixer', 'keystone', 'rain-garden', 'groundcover'])).default([]),
-  sources: sourcesSchema,
+  sources: z.record(z.enum(SOURCED_FIELDS), z.string()),
   reconciliations: z.array(reconciliationSchema).default([]),
 });
 export type Species = z.infer<typeof speciesSchema>;

@@ -11,6 +11,9 @@ const WIDE_EAST: Species['nativeStates'] = [
   'ND', 'NE', 'NH', 'NJ', 'NY', 'OH', 'OK', 'PA', 'RI', 'SC', 'SD', 'TN', 'TX', 'VA', 'VT', 'WI', 'WV',
 ];
 
+/** EPA Level III codes of the Great Plains and the East (25–84), where these fixtures' species grow. */
+const EASTERN_REGIONS: Species['ecoregions'] = Array.from({ length: 60 }, (_, i) => String(25 + i));
+
 type Overrides = Partial<Omit<Species, 'germination' | 'wildlife'>> & {
   slug: string;
   scientificName: string;
@@ -42,6 +45,15 @@ export function makeSpecies(o: Overrides): Species {
     tags: [],
     sources: Object.fromEntries(SOURCED_FIELDS.map((f) => [f, 'from-memory'])) as Species['sources'],
     reconciliations: [],
+    // Neutral site-fit facts: thrives wherever it grows, eastern and central regions, nothing special.
+    ecoregions: EASTERN_REGIONS,
+    sunOptimum: o.sun ?? ['full', 'part'],
+    moistureOptimum: o.moisture ?? ['dry', 'medium'],
+    wetlandIndicator: null,
+    needsAcidSoil: false,
+    selfSows: false,
+    commercialAvailability: null,
+    protectedIn: [],
     ...rest,
     wildlife: { lepidopteraGenusCount: null, monarchHost: false, pollinators: 'Bees and butterflies visit.', specialistBees: [], ...wildlife },
     germination: {

@@ -5,7 +5,8 @@ import type { SpeciesDetail } from '../../../api/species/species.api.js';
 // monarda-fistulosa.json, zizia-aurea.json; each fact's source key is in those files). Only the
 // fields a fact card or pot label prints matter here.
 
-type Shared = 'synonyms' | 'lifespan' | 'growthForm' | 'soilTextures' | 'nativeStates' | 'habitats' | 'spreadHabit' | 'deerResistance' | 'tags' | 'sources' | 'reconciliations' | 'hasPhoto';
+type Shared = 'synonyms' | 'lifespan' | 'growthForm' | 'soilTextures' | 'nativeStates' | 'habitats' | 'spreadHabit' | 'deerResistance' | 'tags' | 'sources' | 'reconciliations' | 'hasPhoto'
+  | 'ecoregions' | 'sunOptimum' | 'moistureOptimum' | 'wetlandIndicator' | 'needsAcidSoil' | 'selfSows' | 'commercialAvailability' | 'protectedIn';
 
 const COMMON: Pick<SpeciesDetail, Shared> = {
   synonyms: [],
@@ -13,7 +14,16 @@ const COMMON: Pick<SpeciesDetail, Shared> = {
   growthForm: 'forb',
   soilTextures: ['loam'],
   nativeStates: ['WI'],
+  ecoregions: ['52'],
   habitats: ['prairie'],
+  // Site-fit facts are not printed on cards; the real records hold each species' own.
+  sunOptimum: ['full'],
+  moistureOptimum: ['medium'],
+  wetlandIndicator: null,
+  needsAcidSoil: false,
+  selfSows: false,
+  commercialAvailability: null,
+  protectedIn: [],
   spreadHabit: 'clumping',
   deerResistance: 'medium',
   tags: [],

@@ -12,6 +12,7 @@ export const CAUTION_LABELS: Record<Caution['kind'], string> = {
   'look-alike': 'Has a look-alike',
   protected: 'Protected species',
   thorns: 'Thorns',
+  regulated: 'Restricted in some states',
 };
 
 const SUN_ORDER: Sun[] = ['full', 'part', 'shade'];

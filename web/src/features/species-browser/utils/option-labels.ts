@@ -26,6 +26,7 @@ export const CAUTION_SHORT_LABELS: Record<Caution['kind'], string> = {
   'look-alike': 'Has look-alikes',
   protected: 'Protected',
   thorns: 'Thorns',
+  regulated: 'Restricted in some states',
 };
 
 export function listWords<T extends string>(values: readonly T[], labels: Record<T, string>): string {

@@ -41,6 +41,14 @@ export const butterflyMilkweedRecord: SpeciesDetail = {
     "dry",
     "medium"
   ],
+  "sunOptimum": [
+    "full"
+  ],
+  "moistureOptimum": [
+    "dry"
+  ],
+  "wetlandIndicator": null,
+  "needsAcidSoil": false,
   "soilTextures": [
     "sand",
     "loam",
@@ -90,6 +98,58 @@ export const butterflyMilkweedRecord: SpeciesDetail = {
     "WV",
     "WI"
   ],
+  "ecoregions": [
+    "23",
+    "25",
+    "27",
+    "28",
+    "29",
+    "32",
+    "33",
+    "34",
+    "35",
+    "36",
+    "37",
+    "38",
+    "39",
+    "40",
+    "44",
+    "45",
+    "46",
+    "47",
+    "48",
+    "49",
+    "50",
+    "51",
+    "52",
+    "53",
+    "54",
+    "55",
+    "56",
+    "57",
+    "58",
+    "59",
+    "60",
+    "61",
+    "62",
+    "63",
+    "64",
+    "65",
+    "66",
+    "67",
+    "68",
+    "69",
+    "70",
+    "71",
+    "72",
+    "73",
+    "74",
+    "75",
+    "79",
+    "82",
+    "83",
+    "84"
+  ],
   "habitats": [
     "prairie",
     "sand-prairie",
@@ -105,6 +165,9 @@ export const butterflyMilkweedRecord: SpeciesDetail = {
     "specialistBees": []
   },
   "spreadHabit": "clumping",
+  "selfSows": false,
+  "commercialAvailability": "routine",
+  "protectedIn": [],
   "deerResistance": "high",
   "germination": {
     "treatments": [
@@ -133,18 +196,13 @@ export const butterflyMilkweedRecord: SpeciesDetail = {
     },
     {
       "kind": "toxic-if-eaten",
-      "text": "Contains cardiac glycosides; listed in an extension poisonous-plant manual. Keep away from grazing animals.",
+      "text": "Contains cardiac glycosides and is listed in an extension poisonous-plant manual: poisonous to people, pets and livestock that eat it, especially dried in hay. Keep it out of pasture and hay fields.",
       "source": "auburn-poisonous-plants"
     },
     {
       "kind": "look-alike",
       "text": "Tropical milkweed (Asclepias curassavica), sold in garden centres, is not native here and is not allowed in federal monarch plantings: it keeps flowering into winter, which can disrupt migration and spread a monarch parasite. Check the label for this native species.",
       "source": "nrcs-e327136z2"
-    },
-    {
-      "kind": "livestock",
-      "text": "Contains cardiac glycosides: poisonous to livestock and pets that eat it, especially dried in hay. Keep it out of pasture and hay fields.",
-      "source": "from-memory"
     }
   ],
   "tags": [
@@ -154,6 +212,7 @@ export const butterflyMilkweedRecord: SpeciesDetail = {
     "usdaSymbol": "usda-plants",
     "family": "apg-iv-2016",
     "nativeStates": "usda-plants",
+    "ecoregions": "from-memory",
     "growthForm": "usda-plants",
     "lifespan": "usda-plants",
     "heightCm": "from-memory",
@@ -161,11 +220,16 @@ export const butterflyMilkweedRecord: SpeciesDetail = {
     "flowerColours": "usda-plants-characteristics",
     "sun": "from-memory",
     "moisture": "from-memory",
+    "sunOptimum": "from-memory",
+    "moistureOptimum": "from-memory",
+    "wetlandIndicator": "from-memory",
     "soilTextures": "from-memory",
     "habitats": "from-memory",
     "wildlife.lepidopteraGenusCount": "tallamy-shropshire-2009",
     "wildlife.monarchHost": "xerces-milkweeds-2014",
     "spreadHabit": "from-memory",
+    "commercialAvailability": "usda-plants-characteristics",
+    "protectedIn": "from-memory",
     "deerResistance": "from-memory",
     "germination.treatments": "xerces-milkweeds-2014",
     "germination.seedsPerPound": "usda-plants-characteristics",

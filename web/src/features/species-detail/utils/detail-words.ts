@@ -68,6 +68,7 @@ export const CAUTION_TITLES: Record<Species['cautions'][number]['kind'], string>
   'look-alike': 'Look-alike',
   protected: 'Protected',
   thorns: 'Thorns',
+  regulated: 'Restricted in some states',
 };
 
 /** "a, b and c". */

@@ -14,6 +14,7 @@ export const CAUTION_KIND_WORDS: Record<Caution['kind'], string> = {
   'look-alike': 'Has a look-alike: check the label when you buy.',
   protected: 'Protected in some states: grow from bought seed, never dig from the wild.',
   thorns: 'Has thorns or prickles.',
+  regulated: 'Some states restrict planting it: check your state’s rules first.',
 };
 
 export interface SpeciesCaution {
