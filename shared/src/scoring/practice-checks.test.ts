@@ -13,7 +13,7 @@ const jewelweed = makeSpecies({ slug: 'impatiens-capensis', scientificName: 'Imp
 const evening = makeSpecies({ slug: 'oenothera-biennis', scientificName: 'Oenothera biennis', lifespan: 'biennial' });
 const vine = makeSpecies({ slug: 'clematis-virginiana', scientificName: 'Clematis virginiana', growthForm: 'vine', spreadCm: { min: 90, max: 300 } });
 const runner = makeSpecies({ slug: 'helianthus-tuberosus', scientificName: 'Helianthus tuberosus', spreadHabit: 'aggressive' });
-const violet = makeSpecies({ slug: 'viola-sororia', scientificName: 'Viola sororia' });
+const violet = makeSpecies({ slug: 'viola-sororia', scientificName: 'Viola sororia', selfSows: true });
 
 describe('garden practice: what a yard mix holds (input → eligible, near miss)', () => {
   it.each([
@@ -44,10 +44,10 @@ describe('ecoregion, not just state', () => {
   const inDriftless = { ...F.wildBergamot, ecoregions: ['52', '53'] } as GradedSpecies;
   const notInDriftless = { ...F.wildBergamot, ecoregions: ['50', '51'] } as GradedSpecies;
   it.each([
-    ['listed for 52, site in 52', inDriftless, LARKFIELD, true],
+    ['listed for 52 and 53, site in 52', inDriftless, LARKFIELD, true],
     ['native to Wisconsin but listed for 50 and 51 only: out in 52', notInDriftless, LARKFIELD, false],
     ['no ecoregion code for the site: state nativity decides', notInDriftless, { state: 'WI' as const }, true],
-    ['record without ecoregions: state nativity decides', F.wildBergamot, LARKFIELD, true],
+    ['record without ecoregions: state nativity decides', { ...F.wildBergamot, ecoregions: undefined } as unknown as GradedSpecies, LARKFIELD, true],
   ])('%s', (_what, species, region, eligible) => {
     expect(scoreSpecies(species, bed, region).eligible).toBe(eligible);
     expect(hardCheckOutcome(species, bed, region) === 'eligible').toBe(eligible);

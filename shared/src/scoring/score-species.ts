@@ -10,7 +10,7 @@ import { checkHeight, checkMoisture, checkNative, checkRoom, checkSun, type Chec
 import { birdsPart, monarchPart, pollinatorPart } from './wildlife-parts.js';
 import { availabilityPart, beesPart, layeredHostPart, scalePart, seedEasePart } from './practice-parts.js';
 import { checkEcoregion, checkLayer, checkLifespan, checkSpreader } from './practice-checks.js';
-import { acidSoilPart, communityPart, fernPart, thrivesPart, wetlandPart } from './site-fit-parts.js';
+import { acidSoilPart, communityPart, fernPart, regionalPart, thrivesPart, wetlandPart } from './site-fit-parts.js';
 
 export interface ScoringContext {
   /** The mix chosen so far: species that bloom when it has least score higher. */
@@ -43,6 +43,7 @@ export function scoreSpecies(species: Species, site: Site, region: RegionContext
   addPart(fernPart(species, site), parts);
   addPart(soilPart(species, site), parts);
   addPart(habitatPart(species, region), parts);
+  addPart(regionalPart(species, region), parts);
   addPart(layeredHostPart(species), parts);
   addPart(beesPart(species, site), parts);
   addPart(availabilityPart(species), parts);

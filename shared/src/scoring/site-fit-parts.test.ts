@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { Site } from '../types/site.js';
 import { F, LARKFIELD } from './__tests__/species-fixtures.js';
 import { scoreSpecies } from './score-species.js';
-import { thrivesPart, wetlandPart } from './site-fit-parts.js';
+import { regionalPart, thrivesPart, wetlandPart } from './site-fit-parts.js';
 import type { GradedSpecies } from './species-traits.js';
 
 const wetSun: Site = { sun: 'full', moisture: 'wet', areaSqFt: 150, deerPressure: 'low', goals: ['rain-garden'] };
@@ -35,5 +35,17 @@ describe('graded fit: thrives vs tolerates (input → points)', () => {
     const score = (s: GradedSpecies, site: Site) => scoreSpecies(s, site, LARKFIELD).score;
     expect(score(wetPlant, wetSun)).toBeGreaterThan(score(upland, wetSun));
     expect(score(upland, { ...drySun, moisture: 'medium' })).toBeGreaterThan(score(wetPlant, { ...drySun, moisture: 'medium' }));
+  });
+});
+
+describe('regional character (ecoregion lists)', () => {
+  const narrow = { ...F.wildBergamot, ecoregions: ['45', '65', '66'] } as GradedSpecies;
+  const wide = { ...F.wildBergamot, ecoregions: Array.from({ length: 40 }, (_, i) => String(i + 30)) } as GradedSpecies;
+  it.each([
+    ['native to 3 ecoregions, the Piedmont (45) among them', narrow, '45', 0.75],
+    ['native to 40 ecoregions', wide, '45', undefined],
+    ['native to 3 ecoregions, not this one', narrow, '52', undefined],
+  ] as const)('%s', (_what, species, code, points) => {
+    expect(regionalPart(species, { state: 'NC', ecoregionCode: code })?.points).toBe(points);
   });
 });

@@ -2,7 +2,9 @@ import type { ScorePart } from '../types/recommendation.js';
 import type { Site } from '../types/site.js';
 import { MOISTURE_LEVELS, SUN_LEVELS, type Habitat, type Species } from '../types/species.js';
 import { MOISTURE_WORDS, SUN_WORDS } from './plain-words.js';
-import { moistureOptimumOf, needsAcidSoil, sunOptimumOf, wetlandIndicatorOf } from './species-traits.js';
+import { ecoregionsOf, moistureOptimumOf, needsAcidSoil, sunOptimumOf, wetlandIndicatorOf } from './species-traits.js';
+import type { RegionContext } from '../types/site.js';
+import { sharedPart } from './word-cache.js';
 import type { WetlandIndicator } from '../types/species.js';
 import { PartCache } from './word-cache.js';
 
@@ -107,4 +109,20 @@ export function communityPart(species: Species, site: Site): ScorePart | null {
   const set = kind === 'dry' ? DRY_COMMUNITIES : kind === 'wet' ? WET_COMMUNITIES : SHADE_COMMUNITIES;
   if (!species.habitats.some((h) => set.has(h))) return null;
   return communityParts.get(kind) ?? communityParts.keep(kind, { name: 'community', points: 1.5, reason: COMMUNITY_WORDS[kind] });
+}
+
+/**
+ * A species native to few ecoregions, yours among them, is characteristic of your part of the
+ * country; a plant found from Maine to Texas is not. This is what lets the ecoregion change the
+ * answer between regions whose woodland plants otherwise overlap (Homeground's rule: 30 ecoregions
+ * is about the narrowest quarter of the catalogue's ranges, whose median is 40).
+ */
+export const REGIONAL_MAX_ECOREGIONS = 30;
+const REGIONAL_PART = sharedPart({ name: 'ecoregion', points: 0.75, reason: 'Characteristic of your region: native to only a few ecoregions, yours among them.' });
+
+export function regionalPart(species: Species, region: RegionContext): ScorePart | null {
+  const code = region.ecoregionCode;
+  const list = ecoregionsOf(species);
+  if (code === undefined || list === undefined || list.length > REGIONAL_MAX_ECOREGIONS || !list.includes(code)) return null;
+  return REGIONAL_PART;
 }
