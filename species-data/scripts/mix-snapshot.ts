@@ -10,7 +10,9 @@ import { MIX_SITES } from './mix-sites.js';
 const catalogue = loadCatalogue();
 for (const s of MIX_SITES) {
   const site = siteRequestSchema.parse(s.site);
-  const result = balancePalette({ species: catalogue.species, site, region: s.region });
+  // The region as the API fills it: the ecoregion's plant communities from the catalogue.
+  const communities = catalogue.ecoregions.find((e) => e.code === s.region.ecoregionCode)?.plantCommunities;
+  const result = balancePalette({ species: catalogue.species, site, region: { ...s.region, ecoregionPlantCommunities: communities } });
   const chosen = result.chosen.map((c) => catalogue.species.find((x) => x.slug === c.slug)!);
   const plantings = plantsPerSpecies(chosen, site.areaSqFt);
   const footprint = plantings.reduce((sum, p) => sum + (p.plants * p.spacingIn ** 2) / 144, 0);

@@ -124,5 +124,9 @@ export function regionalPart(species: Species, region: RegionContext): ScorePart
   const code = region.ecoregionCode;
   const list = ecoregionsOf(species);
   if (code === undefined || list === undefined || list.length > REGIONAL_MAX_ECOREGIONS || !list.includes(code)) return null;
+  // A narrow range that only grazes the region (a shortgrass plant at the edge of the Driftless
+  // Area) is not characteristic of it: the species must also belong to the region's plant communities.
+  const communities = region.ecoregionPlantCommunities;
+  if (communities && !species.habitats.some((h) => communities.includes(h))) return null;
   return REGIONAL_PART;
 }
