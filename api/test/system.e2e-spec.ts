@@ -18,6 +18,10 @@ describe('health, stats and docs (e2e)', () => {
     const res = await t.http.get('/api/stats').expect(200);
     expect(res.body.groups).toBe(1);
     expect(res.body.users).toBe(8);
+    // Only ecoregions the catalogue covers: of EPA's 85 Level III ecoregions, not the Rockies,
+    // deserts and Pacific regions (e.g. 81 Sonoran Basin and Range), but the Driftless Area (52) and the rest of the East.
+    expect(res.body.ecoregions).toBeGreaterThan(40);
+    expect(res.body.ecoregions).toBeLessThan(85);
     const groups = await t.http.get('/api/groups').expect(200);
     expect(groups.body).toEqual([expect.objectContaining({ slug: 'larkfield-commons-growers', state: 'WI', ecoregionCode: '52', members: 5 })]);
   });

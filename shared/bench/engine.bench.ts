@@ -51,7 +51,7 @@ for (const q of narrowingQuality({ name: 'real-503', species: loadCatalogue().sp
   summary.push(`narrowed vs full search ${q.catalogue} ${q.site}: objective ratio ${q.ratio}, ${q.searched} of ${q.candidates} candidates searched`);
 }
 
-const ox = optimiserVsExhaustive(30, 16, 18, 6);
+const ox = optimiserVsExhaustive(50, 16, 18, 6);
 emit({ bench: 'optimiser-vs-exhaustive', ...ox, targetMinRatio: TARGET_QUALITY, targetSpeedup: TARGET_SPEEDUP });
 summary.push(
   `optimiser vs exhaustive (${ox.instances} instances, ${ox.candidates} candidates, N = ${ox.size}): quality min ${ox.minRatio}, mean ${ox.meanRatio} `

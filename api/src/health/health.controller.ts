@@ -1,17 +1,21 @@
 import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type HealthResponse, healthResponseSchema, type StatsResponse, statsResponseSchema } from '@homeground/shared';
+import { coveredEcoregionCodes, type HealthResponse, healthResponseSchema, type StatsResponse, statsResponseSchema } from '@homeground/shared';
 import { DataSource } from 'typeorm';
 import { API_VERSION } from '../config/app-config.js';
 import { ZodResponse } from '../common/decorators/zod.decorators.js';
+import { MixContextService } from '../mix-context/mix-context.service.js';
 
 const STARTED_AT = Date.now();
 
 @ApiTags('system')
 @Controller()
 export class HealthController {
-  constructor(@InjectDataSource() private readonly db: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly db: DataSource,
+    private readonly ctx: MixContextService,
+  ) {}
 
   /** Liveness plus a real database round trip and the count of applied migrations. */
   @Get('health')
@@ -36,10 +40,16 @@ export class HealthController {
   @Get('stats')
   @ZodResponse(statsResponseSchema)
   async stats(): Promise<StatsResponse> {
-    const [species, groups, ecoregions, users] = await Promise.all(
-      ['species', 'groups', 'ecoregions', 'users'].map((t) => this.countRows(t)),
-    );
-    return { species, groups, ecoregions, users };
+    const [species, groups, users] = await Promise.all(['species', 'groups', 'users'].map((t) => this.countRows(t)));
+    return { species, groups, ecoregions: await this.coveredEcoregions(), users };
+  }
+
+  /** Only the ecoregions the catalogue really covers (shared coverage.ts), not every row of the EPA table. */
+  private async coveredEcoregions(): Promise<number> {
+    const exists = await this.db.query(`SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'ecoregions'`);
+    if (exists.length === 0) return 0;
+    const rows: { code: string }[] = await this.db.query(`SELECT code FROM ecoregions`);
+    return coveredEcoregionCodes(this.ctx.species(), rows.map((r) => r.code)).length;
   }
 
   private async countRows(table: string): Promise<number> {

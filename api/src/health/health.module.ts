@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { HealthController } from './health.controller.js';
+import { MixContextModule } from '../mix-context/mix-context.module.js';
 
-@Module({ controllers: [HealthController] })
+@Module({ imports: [MixContextModule], controllers: [HealthController] })
 export class HealthModule {}

@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from 'node:crypto';
 import {
-  BadRequestException, ConflictException, ForbiddenException, GoneException, Inject, Injectable, NotFoundException,
+  ConflictException, ForbiddenException, GoneException, Inject, Injectable, NotFoundException,
 } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
@@ -9,6 +9,7 @@ import {
 } from '@homeground/shared';
 import { DataSource, IsNull, Repository } from 'typeorm';
 import { AuthService } from '../auth/auth.service.js';
+import { badRequest } from '../common/validation/bad-request.js';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { hashPassword } from '../auth/password.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
@@ -99,10 +100,10 @@ export class InvitationsService {
       }
       const missing = (['displayName', 'password'] as const).filter((f) => !req[f]);
       if (missing.length) {
-        throw new BadRequestException({
-          message: 'To join, give your name and choose a password.',
-          fields: missing.map((field) => ({ field, message: 'is required to make your account' })),
-        });
+        throw badRequest(
+          missing.map((field) => ({ field, message: 'is required to make your account' })),
+          'To join, give your name and choose a password.',
+        );
       }
       userId = '';
     }

@@ -1,4 +1,5 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
+import { badRequest } from '../common/validation/bad-request.js';
 import type { RegionContext, Species, SpeciesSummary } from '@homeground/shared';
 import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { SpeciesStore } from '../species/species-store.service.js';
@@ -37,7 +38,7 @@ export class MixContextService {
   region(region: RegionContext): RegionContext {
     if (!region.ecoregionCode || region.ecoregionPlantCommunities) return region;
     const e = this.ecoregions.list().find((x) => x.code === region.ecoregionCode);
-    if (!e) throw new BadRequestException({ message: 'region.ecoregionCode is not in the catalogue', fields: [{ field: 'region.ecoregionCode', message: 'is not in the catalogue' }] });
+    if (!e) throw badRequest([{ field: 'region.ecoregionCode', message: 'is not in the catalogue' }], 'region.ecoregionCode is not in the catalogue');
     return { ...region, ecoregionPlantCommunities: e.plantCommunities };
   }
 
@@ -45,10 +46,10 @@ export class MixContextService {
   assertKnown(slugs: { field: string; slug: string }[]): void {
     const unknown = slugs.filter((s) => !this.store.get(s.slug));
     if (unknown.length) {
-      throw new BadRequestException({
-        message: `Not in the catalogue: ${unknown.map((u) => u.slug).join(', ')}`,
-        fields: unknown.map((u) => ({ field: u.field, message: `"${u.slug}" is not in the catalogue` })),
-      });
+      throw badRequest(
+        unknown.map((u) => ({ field: u.field, message: `"${u.slug}" is not in the catalogue` })),
+        `Not in the catalogue: ${unknown.map((u) => u.slug).join(', ')}`,
+      );
     }
   }
 }

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import {
   type AlternativesResponse, alternativesFor, balancePalette, DEFAULT_LOSS_FACTOR, type MixResponse,
-  mixQuantities, type PaletteOptions, recommend, type RecommendationsResponse, type RegionContext, type Site,
+  mixPlanting, type PaletteOptions, recommend, type RecommendationsResponse, type RegionContext, type Site,
 } from '@homeground/shared';
 import { AnswerCache } from './answer-cache.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
@@ -20,7 +20,12 @@ export class MixesService {
     const region = this.ctx.region(regionIn);
     const r = recommend(this.ctx.species(), site, region);
     const withSpecies = <T extends { slug: string }>(list: T[]) => list.map((x) => ({ ...x, species: this.ctx.summary(x.slug) }));
-    return { site, ranked: withSpecies(r.ranked.slice(0, MAX_RANKED)), alsoConsider: withSpecies(r.alsoConsider.slice(0, MAX_ALSO_CONSIDER)) };
+    return {
+      site,
+      ranked: withSpecies(r.ranked.slice(0, MAX_RANKED)),
+      alsoConsider: withSpecies(r.alsoConsider.slice(0, MAX_ALSO_CONSIDER)),
+      coverage: r.coverage,
+    };
   }
 
   balance(site: Site, regionIn: RegionContext, options: PaletteOptions): MixResponse {
@@ -36,15 +41,17 @@ export class MixesService {
       site,
       palette,
       species: this.ctx.summaries(palette.chosen.map((c) => c.slug)),
-      quantities: mixQuantities(chosen, site.areaSqFt),
+      ...mixPlanting(chosen, site.areaSqFt),
       lossFactor: DEFAULT_LOSS_FACTOR,
     };
   }
 
-  alternatives(site: Site, regionIn: RegionContext, options: PaletteOptions, chosen: string[], slot: string): AlternativesResponse {
+  alternatives(
+    site: Site, regionIn: RegionContext, options: PaletteOptions, chosen: string[], slot: string, acrossForms = false,
+  ): AlternativesResponse {
     this.ctx.assertKnown([...chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })), { field: 'slot', slug: slot }]);
     const region = this.ctx.region(regionIn);
-    const list = alternativesFor({ species: this.ctx.species(), site, region, options }, chosen, slot);
+    const list = alternativesFor({ species: this.ctx.species(), site, region, options }, chosen, slot, 5, { acrossForms });
     return { alternatives: list.map((a) => ({ ...a, species: this.ctx.summary(a.slug) })) };
   }
 }

@@ -37,6 +37,6 @@ export class RecommendationsController {
   @ZodResponse(alternativesResponseSchema)
   @HttpCode(200)
   alternatives(@ZodBody(alternativesRequestSchema) body: Parsed<typeof alternativesRequestSchema>): AlternativesResponse {
-    return this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot);
+    return this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot, body.acrossForms);
   }
 }

@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
   DEFAULT_LOSS_FACTOR, DEFAULT_MILKWEED_SHARE, DEFAULT_SEASON_METHODS, DEFAULT_SEEDS_PER_PACKET, pastSeasonDateFields,
@@ -7,6 +7,7 @@ import {
 } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { badRequest } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SeasonTargetRow } from './season-target.entity.js';
@@ -43,7 +44,7 @@ export class SeasonsService {
   async put(slug: string, user: AuthenticatedUser, req: SeasonRequest, today: string): Promise<Season> {
     const group = await this.managed(slug, user);
     const past = pastSeasonDateFields(req, today);
-    if (past.length) throw new BadRequestException({ message: `Please check: ${past.map((f) => `${f.field} ${f.message}`).join('; ')}`, fields: past });
+    if (past.length) throw badRequest(past);
     const saved = await this.db.transaction(async (tx) => {
       const existing = await tx.findOne(SeasonRow, { where: { groupId: group.id, year: req.year } });
       const row = existing ?? tx.create(SeasonRow, {

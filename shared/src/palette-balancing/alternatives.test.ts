@@ -13,7 +13,8 @@ describe('alternativesFor (best replacements for one species of the mix)', () =>
   const mix = balancePalette(input);
   const chosen = mix.chosen.map((c) => c.slug);
   const slot = chosen[0];
-  const alts = alternativesFor(input, chosen, slot);
+  // Across growth forms, so the slot's kind does not narrow the list this test reasons about.
+  const alts = alternativesFor(input, chosen, slot, 5, { acrossForms: true });
 
   it('lists outsiders only, best change first, never an excluded species', () => {
     expect(alts.length).toBeGreaterThan(0);
@@ -30,10 +31,20 @@ describe('alternativesFor (best replacements for one species of the mix)', () =>
   });
 
   it('the optimised mix has no improving single swap left (every change ≤ 0)', () => {
-    for (const s of chosen) for (const a of alternativesFor(input, chosen, s)) expect(a.objectiveChange).toBeLessThanOrEqual(1e-6);
+    for (const s of chosen) for (const a of alternativesFor(input, chosen, s, 5, { acrossForms: true })) expect(a.objectiveChange).toBeLessThanOrEqual(1e-6);
   });
 
   it('returns nothing for a slot that is not in the mix', () => {
     expect(alternativesFor(input, chosen, 'not-in-mix')).toEqual([]);
+  });
+});
+
+describe('alternativesFor keeps the slot\'s kind unless asked', () => {
+  it('a wildflower for a wildflower by default; any growth form on request', () => {
+    const mix = balancePalette(input).chosen.map((c) => c.slug);
+    const flower = mix.find((s) => F[Object.keys(F).find((k) => F[k as keyof typeof F].slug === s) as keyof typeof F]?.growthForm === 'forb')!;
+    const forms = (list: { slug: string }[]) => list.map((a) => Object.values(F).find((f) => f.slug === a.slug)!.growthForm);
+    expect(forms(alternativesFor(input, mix, flower, 20)).every((f) => f === 'forb')).toBe(true);
+    expect(forms(alternativesFor(input, mix, flower, 20, { acrossForms: true })).some((f) => f !== 'forb')).toBe(true);
   });
 });

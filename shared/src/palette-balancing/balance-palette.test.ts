@@ -14,7 +14,8 @@ function candidateSet(early: number, mid: number, late: number, grasses = 0, ext
     Array.from({ length: n }, (_, i) =>
       makeSpecies({ slug: `${prefix}-${i}`, scientificName: `${prefix[0].toUpperCase()}${prefix.slice(1)} sp${i}`, bloomMonths: months, growthForm, ...extra }));
   return [
-    ...make('early', [4, 5], early), ...make('mid', [7], mid), ...make('late', [9, 10], late),
+    // Each flowers through its whole part of the season, so the month-by-month rule can be met.
+    ...make('early', [4, 5, 6], early), ...make('mid', [6, 7], mid), ...make('late', [8, 9, 10], late),
     ...make('grass', [8], grasses, 'graminoid'),
   ];
 }
@@ -41,12 +42,22 @@ describe('constraint report: CP42 bloom periods and flowering count', () => {
     const shade = candidateSet(4, 4, 1, 0, { sun: ['shade'], moisture: ['dry'] });
     const r = balancePalette({ species: shade, site: { ...sunny, sun: 'shade', moisture: 'dry' }, region: LARKFIELD, options: { size: 9 } });
     expect(constraint(r, 'cp42-late').detail).toContain('Only 1 late bloomer native to your region suits dry shade');
-    expect(constraint(r, 'cp42-late').detail).toContain('CP42 then allows a species from another period');
+    expect(constraint(r, 'cp42-late').detail).toContain('a species from another part of the season may take its place');
   });
 
   it('explains an unmet 9-species rule in a small mix', () => {
     const r = balancePalette({ species: candidateSet(4, 4, 4), site: sunny, region: LARKFIELD, options: { size: 6 } });
-    expect(constraint(r, 'cp42-flowering').detail).toContain('A mix of 6 species cannot hold the 9 of a full CP42 mix');
+    expect(constraint(r, 'cp42-flowering').detail).toContain('A mix of 6 species cannot hold the 9 kinds of flowers of a full mix');
+  });
+
+  it('agrees with the bloom chart: a late part of the season with one species in September is not met', () => {
+    // 3 late bloomers in all, but only one of them flowers in September.
+    const species = [...candidateSet(3, 3, 0), ...['a', 'b'].map((x) => makeSpecies({ slug: `aug-${x}`, scientificName: `Aug sp${x}`, bloomMonths: [8, 10] })),
+      makeSpecies({ slug: 'sep-a', scientificName: 'Sep spa', bloomMonths: [8, 9, 10] })];
+    const r = balancePalette({ species, site: sunny, region: LARKFIELD, options: { size: 9 } });
+    expect(constraint(r, 'cp42-late').met).toBe(false);
+    expect(constraint(r, 'cp42-late').detail).toContain('Sep has 1 in flower');
+    expect(constraint(r, 'cp42-late').rule).not.toMatch(/CP42/);
   });
 
   it('every rule is reported, met or with a reason', () => {

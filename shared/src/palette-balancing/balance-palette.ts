@@ -11,6 +11,9 @@ import { makeObjective, objectiveTerms } from './objective.js';
 import { optimiseSelection } from './optimiser.js';
 import { buildCandidates, type PaletteCandidates, type PaletteInput } from './palette-candidates.js';
 import { rolesOf } from './mix-roles.js';
+import { chooseWoodyLayer } from './woody-layer.js';
+import { catalogueCoverage } from '../scoring/coverage.js';
+import { plantingMethodFor } from '../quantities/planting-method.js';
 
 /** The mix size: as asked, else from the area; never fewer than the locks nor more than the candidates. */
 export function resolveSize(input: PaletteInput, c: PaletteCandidates): { size: number; reason: string; notices: string[] } {
@@ -41,12 +44,25 @@ export function reportConstraints(input: ConstraintInput): PaletteConstraint[] {
  * when the user keeps them (protected-species.ts).
  */
 export function balancePalette(input: PaletteInput): PaletteResult {
+  const plantingMethod = plantingMethodFor(input.site.areaSqFt);
+  const coverage = catalogueCoverage(input.species, input.region);
+  if (!coverage.covered) {
+    return {
+      size: 0, coverage, plantingMethod, sizeReason: coverage.message ?? '', chosen: [], objective: 0, terms: [], constraints: [],
+      notices: [coverage.message ?? ''],
+    };
+  }
   const c = buildCandidates(input);
   const { size, reason, notices } = resolveSize(input, c);
   const settings = { size, monarchsGoal: input.site.goals.includes('monarchs') };
   const objective = makeObjective(settings);
-  const selection = optimiseSelection(c.items, size, objective, {
-    locked: c.locked,
+  // The woody layer is chosen first and held; the optimiser balances the herbaceous rest around it.
+  const woody = chooseWoodyLayer(c.items, input.site, c.locked);
+  const held = [...c.locked, ...woody];
+  const heldSet = new Set(held);
+  const searchable = c.items.filter((i) => !i.woody || heldSet.has(i.slug));
+  const selection = optimiseSelection(searchable, size, objective, {
+    locked: held,
     searchPool: (pool) => narrowCandidates(pool, settings),
   });
   const chosen: ChosenSpecies[] = selection.chosen
@@ -66,6 +82,8 @@ export function balancePalette(input: PaletteInput): PaletteResult {
 
   return {
     size,
+    coverage,
+    plantingMethod,
     sizeReason: reason,
     chosen,
     objective: roundTo(selection.value, 4),

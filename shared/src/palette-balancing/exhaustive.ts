@@ -1,4 +1,4 @@
-import type { Objective } from './objective.js';
+import type { Objective } from './mix-evaluator.js';
 
 /** Beyond this many subsets brute force is a mistake, not a benchmark. */
 const MAX_SUBSETS = 5_000_000;

@@ -16,7 +16,8 @@ const redbud = makeSpecies({
   heightCm: { min: 600, max: 900 }, spreadCm: { min: 600, max: 1000 }, bloomMonths: [3, 4, 5], flowerColours: ['pink', 'magenta'],
   moisture: ['dry', 'medium'],
 });
-const yard: Site = { sun: 'full', moisture: 'medium', areaSqFt: 5000, deerPressure: 'low', goals: ['pollinators'] };
+// Trees come into a mix only when the user asks for woody plants.
+const yard: Site = { sun: 'full', moisture: 'medium', areaSqFt: 5000, deerPressure: 'low', goals: ['pollinators'], woodyPlants: true };
 
 describe('wind-pollinated trees are not CP42 flowering species in a mix', () => {
   const items = buildCandidates({ species: [riverBirch, redbud], site: yard, region: LARKFIELD }).items;

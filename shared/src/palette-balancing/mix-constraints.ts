@@ -2,12 +2,12 @@ import type { PaletteConstraint } from '../types/recommendation.js';
 import { stateName } from '../scoring/plain-words.js';
 import { joinWords } from '../vocabulary/join-words.js';
 import { groundWords, lostOut, names, onlyAvailable, type ConstraintInput } from './constraint-input.js';
-import { grassTargets } from './objective.js';
+import { grassTargets } from './objective-weights.js';
 import type { HeightTier } from './palette-item.js';
 
 /** NRCS E327136Z2: at least one native Asclepias species when monarchs are a goal (R). */
 export function milkweedConstraint(input: ConstraintInput): PaletteConstraint {
-  const rule = 'At least one native milkweed (Asclepias) when monarchs are a goal (NRCS E327136Z2)';
+  const rule = 'At least one native milkweed when monarchs are a goal: their caterpillars eat nothing else';
   const base = { id: 'monarch-milkweed', rule, source: 'nrcs-e327136z2' } as const;
   if (!input.site.goals.includes('monarchs')) {
     return { ...base, applies: false, met: true, detail: 'Monarchs are not one of your goals, so no milkweed is needed.' };

@@ -1,4 +1,13 @@
-import type { Objective } from './objective.js';
+/**
+ * A mix objective: items (in slug order) → value to maximise. `evaluator`, when present, gives the
+ * same value incrementally (add or remove one item in O(1)), which the optimiser uses for its
+ * millions of trial moves; without it the optimiser re-evaluates whole sets. Declared here, not in
+ * objective.ts, so that objective.ts → palette-evaluator.ts → mix-evaluator.ts has no way back.
+ */
+export interface Objective<T> {
+  (items: readonly T[]): number;
+  evaluator?: (pool: readonly T[]) => MixEvaluator;
+}
 
 /**
  * A mix under construction, over a fixed pool of candidates named by their index in it (the pool

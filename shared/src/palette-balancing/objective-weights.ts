@@ -10,6 +10,12 @@ export const OBJECTIVE_WEIGHTS = {
   /** Per species in flower in a CP42 period, up to CP42's 3 per period (CP42-IN, R). */
   perPeriodSpecies: 2,
   periodTarget: 3,
+  /**
+   * Per species in flower in each month from April to October, up to 3 a month: the bloom chart
+   * and the design rules judge months, so the mix is balanced on them too (Homeground's weight).
+   */
+  perMonthSpecies: 0.25,
+  monthTarget: 3,
   /** Per flowering species up to CP42's 9 in a full mix (CP42-IN, R). */
   perFloweringSpecies: 1,
   floweringTarget: 9,
@@ -41,4 +47,15 @@ export function grassTargets(size: number): { min: number; max: number } {
   if (size < 4) return { min: 0, max: 1 };
   const min = Math.max(1, Math.round(size * 0.2));
   return { min, max: Math.max(min, Math.floor(size * 0.4)) };
+}
+
+/** The months the bloom chart and the design rules judge: April (4) to October (10). */
+export const SEASON_FIRST_MONTH = 4;
+export const SEASON_MONTHS = 7;
+
+/** A species' months in flower within the season as bits (bit 0 = April … bit 6 = October). */
+export function seasonMonthMask(months: readonly number[] | undefined): number {
+  let mask = 0;
+  for (const m of months ?? []) if (m >= SEASON_FIRST_MONTH && m < SEASON_FIRST_MONTH + SEASON_MONTHS) mask |= 1 << (m - SEASON_FIRST_MONTH);
+  return mask;
 }

@@ -1,6 +1,6 @@
 import { BLOOM_PERIODS, type ObjectiveTerm } from '../types/recommendation.js';
-import type { MixEvaluator } from './mix-evaluator.js';
-import { OBJECTIVE_WEIGHTS, grassTargets, type ObjectiveSettings } from './objective-weights.js';
+import type { Objective } from './mix-evaluator.js';
+import { OBJECTIVE_WEIGHTS, SEASON_MONTHS, grassTargets, seasonMonthMask, type ObjectiveSettings } from './objective-weights.js';
 import { paletteEvaluator } from './palette-evaluator.js';
 import type { PaletteItem } from './palette-item.js';
 
@@ -23,6 +23,7 @@ export function objectiveTerms(items: readonly PaletteItem[], settings: Objectiv
   const perPeriod = { early: 0, mid: 0, late: 0 };
   const genera = new Map<string, number>();
   let repeats = 0;
+  const perMonth = new Array<number>(SEASON_MONTHS).fill(0);
   const tiers = new Set<string>();
   const colours = new Set<string>();
   for (const it of items) {
@@ -31,6 +32,10 @@ export function objectiveTerms(items: readonly PaletteItem[], settings: Objectiv
     if (it.graminoid) grasses++;
     if (it.milkweed) milkweeds++;
     for (const p of it.periods) perPeriod[p]++;
+    if (it.flowering) {
+      const mask = seasonMonthMask(it.months);
+      for (let k = 0; k < SEASON_MONTHS; k++) if (mask & (1 << k)) perMonth[k]++;
+    }
     if (genera.has(it.genus)) repeats++;
     genera.set(it.genus, it.hostCount);
     tiers.add(it.tier);
@@ -45,6 +50,7 @@ export function objectiveTerms(items: readonly PaletteItem[], settings: Objectiv
     { name: 'fit', value: fit },
     { name: 'host-plants', value: w.hostWeight * Math.log(1 + hostSum / w.hostScale) },
     { name: 'bloom-periods', value: periodValue },
+    { name: 'bloom-months', value: perMonth.reduce((sum, n) => sum + w.perMonthSpecies * Math.min(n, w.monthTarget), 0) },
     { name: 'flowering-count', value: w.perFloweringSpecies * Math.min(flowering, w.floweringTarget) },
     { name: 'milkweed', value: settings.monarchsGoal ? milkweedValue : 0 },
     { name: 'grasses', value: w.perGrass * Math.min(grasses, grass.min) - w.perGrassOver * Math.max(0, grasses - grass.max) },
@@ -54,15 +60,8 @@ export function objectiveTerms(items: readonly PaletteItem[], settings: Objectiv
   ];
 }
 
-/**
- * A mix objective: items (in slug order) → value to maximise. `evaluator`, when present, gives the
- * same value incrementally (add or remove one item in O(1)), which the optimiser uses for its
- * millions of trial moves; without it the optimiser re-evaluates whole sets.
- */
-export interface Objective<T> {
-  (items: readonly T[]): number;
-  evaluator?: (pool: readonly T[]) => MixEvaluator;
-}
+// The Objective type lives beside the evaluator it names, so the evaluators need not import this file (no cycle).
+export type { Objective } from './mix-evaluator.js';
 
 export function makeObjective(settings: ObjectiveSettings): Objective<PaletteItem> {
   const objective: Objective<PaletteItem> = (items) => objectiveTerms(items, settings).reduce((s, t) => s + t.value, 0);

@@ -1,5 +1,4 @@
-import { recomputingEvaluator } from './mix-evaluator.js';
-import type { Objective } from './objective.js';
+import { recomputingEvaluator, type Objective } from './mix-evaluator.js';
 import { EPSILON, applyMove, bestPairSwap, bestSingleSwap, type SearchState } from './swap-moves.js';
 
 /**

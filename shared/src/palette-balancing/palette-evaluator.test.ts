@@ -19,6 +19,8 @@ function randomItems(seed: number, n: number): PaletteItem[] {
       slug: `s${String(i).padStart(3, '0')}`, name: `s${i}`, fit: rnd() * 12 - 2, periods, flowering: periods.length > 0,
       genus, hostCount, tier: TIERS[randomInt(rnd, 0, 2)], graminoid, milkweed: genus === 'Asclepias',
       colours: graminoid ? [] : FLOWER_COLOURS.filter(() => rnd() < 0.2),
+      // Months in flower, some outside the April–October season the month term counts.
+      months: periods.length > 0 ? [3, 4, 5, 6, 7, 8, 9, 10, 11].filter(() => rnd() < 0.4) : [],
     };
   });
 }

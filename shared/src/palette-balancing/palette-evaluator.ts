@@ -1,7 +1,6 @@
 import { BLOOM_PERIODS } from '../types/recommendation.js';
-import { recomputingEvaluator, type MixEvaluator } from './mix-evaluator.js';
-import { OBJECTIVE_WEIGHTS, grassTargets, type ObjectiveSettings } from './objective-weights.js';
-import type { Objective } from './objective.js';
+import { recomputingEvaluator, type MixEvaluator, type Objective } from './mix-evaluator.js';
+import { OBJECTIVE_WEIGHTS, SEASON_MONTHS, grassTargets, seasonMonthMask, type ObjectiveSettings } from './objective-weights.js';
 import type { PaletteItem } from './palette-item.js';
 
 /** Colour and tier sets are held as bit masks: enough bits for every colour a record can name. */
@@ -39,6 +38,9 @@ class PaletteCounters implements MixEvaluator {
   private readonly perTier = new Int32Array(MAX_MASK_BITS);
   private tiers = 0;
   private readonly perColour = new Int32Array(MAX_MASK_BITS);
+  /** Species in flower per season month (April … October), and Σ min(count, target) over them. */
+  private readonly perMonth = new Int32Array(SEASON_MONTHS);
+  private monthsFilled = 0;
   private colours = 0;
   private readonly grassMin: number;
   private readonly grassMax: number;
@@ -53,6 +55,8 @@ class PaletteCounters implements MixEvaluator {
     private readonly genusHosts: Float64Array,
     private readonly tier: Uint8Array,
     private readonly colourMask: Uint32Array,
+    /** Season months in flower as bits (flowering species only). */
+    private readonly monthMask: Uint8Array,
     private readonly monarchsGoal: boolean,
     size: number,
   ) {
@@ -75,9 +79,12 @@ class PaletteCounters implements MixEvaluator {
       for (let p = 0; p < BLOOM_PERIODS.length; p++) if (this.periodMask[i] & (1 << p)) periods++;
       let colours = 0;
       for (let m = this.colourMask[i]; m !== 0; m >>>= 1) colours += m & 1;
+      let months = 0;
+      for (let m = this.monthMask[i]; m !== 0; m >>>= 1) months += m & 1;
       bounds[i] = this.fit[i]
         + w.hostWeight * Math.log(1 + this.genusHosts[this.genus[i]] / w.hostScale)
         + w.perPeriodSpecies * periods
+        + w.perMonthSpecies * months
         + (f & 1 ? w.perFloweringSpecies : 0)
         + (f & 4 && this.monarchsGoal ? w.milkweed : 0)
         + (f & 2 ? w.perGrass : 0)
@@ -96,6 +103,7 @@ class PaletteCounters implements MixEvaluator {
     const genus = new Int32Array(n);
     const tier = new Uint8Array(n);
     const colourMask = new Uint32Array(n);
+    const monthMask = new Uint8Array(n);
     const genusIds = new Map<string, number>();
     const hosts: number[] = [];
     const tierIds = new Map<string, number>();
@@ -105,6 +113,7 @@ class PaletteCounters implements MixEvaluator {
       fit[i] = it.fit;
       flags[i] = (it.flowering ? 1 : 0) | (it.graminoid ? 2 : 0) | (it.milkweed ? 4 : 0);
       for (const p of it.periods) periodMask[i] |= 1 << BLOOM_PERIODS.indexOf(p);
+      monthMask[i] = it.flowering ? seasonMonthMask(it.months) : 0;
       let g = genusIds.get(it.genus);
       if (g === undefined) {
         g = hosts.length;
@@ -123,7 +132,7 @@ class PaletteCounters implements MixEvaluator {
         colourMask[i] |= 1 << id;
       }
     }
-    return new PaletteCounters(fit, flags, periodMask, genus, Float64Array.from(hosts), tier, colourMask, settings.monarchsGoal, settings.size);
+    return new PaletteCounters(fit, flags, periodMask, genus, Float64Array.from(hosts), tier, colourMask, monthMask, settings.monarchsGoal, settings.size);
   }
 
   // add and remove are written out separately (no shared step with a sign), with the three CP42
@@ -140,6 +149,8 @@ class PaletteCounters implements MixEvaluator {
     if (pm & 1) this.perPeriod[0]++;
     if (pm & 2) this.perPeriod[1]++;
     if (pm & 4) this.perPeriod[2]++;
+    const target = OBJECTIVE_WEIGHTS.monthTarget;
+    for (let m = this.monthMask[i], k = 0; m !== 0; m >>>= 1, k++) if (m & 1 && this.perMonth[k]++ < target) this.monthsFilled++;
     // A genus counts its hosts once; every further member is a repeat.
     const g = this.genus[i];
     if (this.perGenus[g]++ === 0) this.hostSum += this.genusHosts[g];
@@ -160,6 +171,8 @@ class PaletteCounters implements MixEvaluator {
     if (pm & 1) this.perPeriod[0]--;
     if (pm & 2) this.perPeriod[1]--;
     if (pm & 4) this.perPeriod[2]--;
+    const target = OBJECTIVE_WEIGHTS.monthTarget;
+    for (let m = this.monthMask[i], k = 0; m !== 0; m >>>= 1, k++) if (m & 1 && --this.perMonth[k] < target) this.monthsFilled--;
     const g = this.genus[i];
     if (--this.perGenus[g] === 0) this.hostSum -= this.genusHosts[g];
     else this.repeats--;
@@ -182,6 +195,7 @@ class PaletteCounters implements MixEvaluator {
     return this.fitSum
       + this.hostTerm
       + periods
+      + w.perMonthSpecies * this.monthsFilled
       + w.perFloweringSpecies * Math.min(this.flowering, w.floweringTarget)
       + milkweed
       + w.perGrass * Math.min(this.grasses, this.grassMin) - w.perGrassOver * Math.max(0, this.grasses - this.grassMax)

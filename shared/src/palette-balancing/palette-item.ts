@@ -2,6 +2,8 @@ import type { BloomPeriod, ScoredSpecies } from '../types/recommendation.js';
 import type { FlowerColour, Species } from '../types/species.js';
 import { bloomPeriodsOf, isFloweringSpecies } from '../scoring/bloom-periods.js';
 import { genusOf, isNativeMilkweed } from '../scoring/genus.js';
+import { isStructural } from '../scoring/layers.js';
+import { hostValueOnHerbaceousScale } from '../scoring/wildlife-value.js';
 
 /** Rows of a bed by mature height (Homeground's rule, on the middle of the record's height range). */
 export type HeightTier = 'front' | 'middle' | 'back';
@@ -28,10 +30,17 @@ export interface PaletteItem {
    */
   fit: number;
   periods: BloomPeriod[];
+  /** Months in flower (flowering species only), for the month-by-month bloom rule. */
+  months?: number[];
   flowering: boolean;
   genus: string;
-  /** Lepidoptera species using the genus (0 when the genus is not listed). */
+  /**
+   * Lepidoptera species using the genus (0 when the genus is not listed), on the herbaceous list's
+   * scale: woody counts are scaled so host value is weighed within each layer (wildlife-value.ts).
+   */
   hostCount: number;
+  /** A shrub, tree or vine: chosen as its own layer, on request. */
+  woody?: boolean;
   tier: HeightTier;
   colours: FlowerColour[];
   graminoid: boolean;
@@ -49,9 +58,11 @@ export function toPaletteItem(species: Species, scored: ScoredSpecies): PaletteI
     name: species.commonNames[0],
     fit: scored.score - hostPoints,
     periods: flowering ? bloomPeriodsOf(species.bloomMonths) : [],
+    months: flowering ? species.bloomMonths : [],
     flowering,
     genus,
-    hostCount: species.wildlife.lepidopteraGenusCount ?? 0,
+    hostCount: hostValueOnHerbaceousScale(species),
+    woody: isStructural(species),
     tier: heightTierOf(species.heightCm),
     colours: flowering ? [...species.flowerColours] : [],
     graminoid: species.growthForm === 'graminoid',

@@ -1,7 +1,9 @@
 import type { MixQuantity } from '../types/mix-api.js';
 import type { Species } from '../types/species.js';
 import { roundTo } from '../units/conversions.js';
-import { plantsPerSpecies } from './plant-split.js';
+import { plantsPerSpecies, totalFootprintSqFt } from './plant-split.js';
+import { plantingMethodFor } from './planting-method.js';
+import { seedingPlan, type SeedingLine } from './seeding-plan.js';
 import { DEFAULT_LOSS_FACTOR, seedsToSow, seedWeight } from './seed-count.js';
 
 /**
@@ -30,4 +32,15 @@ export function mixQuantities(
       seedWeight: weight && { grams: roundTo(weight.grams, 3), ounces: roundTo(weight.ounces, 4) },
     };
   });
+}
+
+/** The whole planting: plants by count with their total footprint, and for a meadow the seeding plan. */
+export function mixPlanting(
+  species: readonly Species[], areaSqFt: number, options: { lossFactor?: number } = {},
+): { quantities: MixQuantity[]; totalFootprintSqFt: number; seeding: SeedingLine[] | null } {
+  const quantities = mixQuantities(species, areaSqFt, options);
+  const seeding = plantingMethodFor(areaSqFt) === 'seeding'
+    ? seedingPlan(species, areaSqFt).map((l) => ({ ...l, seed: l.seed && { grams: roundTo(l.seed.grams, 1), ounces: roundTo(l.seed.ounces, 2), pounds: roundTo(l.seed.pounds, 3) } }))
+    : null;
+  return { quantities, totalFootprintSqFt: totalFootprintSqFt(quantities), seeding };
 }

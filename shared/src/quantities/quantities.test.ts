@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { F } from '../scoring/__tests__/species-fixtures.js';
-import { plantsPerSpecies } from './plant-split.js';
+import { plantsPerSpecies, totalFootprintSqFt } from './plant-split.js';
 import { seedWeight, seedsToSow } from './seed-count.js';
 import { directSeeding, rateFromSeedsPerSqFt, seedsPerSqFtFromRate } from './seeding-rate.js';
 import { defaultSpacingIn, plantsPerSqFt, plantsPerSqM } from './spacing.js';
@@ -45,19 +45,31 @@ describe('on-centre spacing → plants per area', () => {
   });
 });
 
-describe('plantsPerSpecies (grasses 30 % of the bed, the rest shared; ≥ 3 plants each)', () => {
+describe('plantsPerSpecies (grasses 30 % of the bed, the rest shared; plants × spacing² never over the bed)', () => {
   it('splits a 100 ft² bed', () => {
     const mix = [F.goldenAlexanders, F.wildBergamot, F.littleBluestem];
     const r = Object.fromEntries(plantsPerSpecies(mix, 100).map((p) => [p.slug, p]));
-    expect(r['zizia-aurea'].areaSqFt).toBeCloseTo(35, 6); // 70 ft² ÷ 2
-    expect(r['zizia-aurea'].plants).toBe(35); // 35 ft² at 12 in
-    expect(r['monarda-fistulosa'].plants).toBe(16); // 35 ft² × 0.444 = 15.6 → 16
+    expect(r['zizia-aurea'].plants).toBe(35); // 70 ft² ÷ 2 = 35 ft² at 12 in
+    expect(r['zizia-aurea'].areaSqFt).toBeCloseTo(35, 6);
+    expect(r['monarda-fistulosa'].plants).toBe(15); // 35 ft² ÷ 2.25 ft² = 15.6 → 15 (rounded down: 16 would overfill)
     expect(r['schizachyrium-scoparium'].plants).toBe(30); // 30 ft² at 12 in
     expect(r['zizia-aurea'].areaSqM).toBeCloseTo(3.252, 3);
+    expect(totalFootprintSqFt(Object.values(r))).toBeLessThanOrEqual(100);
   });
 
-  it('never plants fewer than 3 of a species', () => {
-    expect(plantsPerSpecies([F.wildBergamot, F.showyGoldenrod, F.newEnglandAster], 6).map((p) => p.plants)).toEqual([3, 3, 3]);
+  it('3 plants each where 3 fit, fewer where the bed cannot hold them (6 ft² for three 18–24 in plants)', () => {
+    const r = plantsPerSpecies([F.wildBergamot, F.showyGoldenrod, F.newEnglandAster], 6);
+    expect(totalFootprintSqFt(r)).toBeLessThanOrEqual(6);
+    expect(r.every((p) => p.plants >= 1)).toBe(true);
+    expect(plantsPerSpecies([F.goldenAlexanders, F.wildBergamot], 40).map((p) => p.plants)).toEqual([20, 8]);
+  });
+
+  it('no fixed minimum for a shrub: one where one fits (a 6 ft shrub in the woody quarter of a 200 ft² bed)', () => {
+    const shrub = { ...F.wildBergamot, slug: 'a-shrub', scientificName: 'Cornus racemosa', growthForm: 'shrub' as const, spreadCm: { min: 180, max: 300 } };
+    const r = plantsPerSpecies([shrub, F.goldenAlexanders, F.littleBluestem], 200);
+    // spacing 72 in → 36 ft² a plant; woody share 50 ft² → 1 plant
+    expect(r[0]).toMatchObject({ slug: 'a-shrub', plants: 1, spacingIn: 72 });
+    expect(totalFootprintSqFt(r)).toBeLessThanOrEqual(200);
   });
 });
 

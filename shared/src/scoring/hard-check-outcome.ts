@@ -3,6 +3,7 @@ import { MOISTURE_LEVELS, SUN_LEVELS, type Species, type StateCode } from '../ty
 import { footprintSqFtOf, stepsAway } from './hard-checks.js';
 import { HEIGHT_NEAR_MISS_FACTOR, ROOM } from './score-weights.js';
 import { STATE_NEIGHBOURS } from './state-neighbours.js';
+import { ecoregionFails, layerVerdict, lifespanFails, spreaderFails } from './practice-checks.js';
 
 /** What the hard checks make of a species: eligible, out by one step only (a near miss), or out. */
 export type HardCheckOutcome = 'eligible' | 'near-miss' | 'out';
@@ -40,6 +41,23 @@ export function hardCheckOutcome(species: Species, site: Site, region: RegionCon
   if (footprint > site.areaSqFt) {
     if (++failures > 1) return 'out';
     nearMiss = footprint <= ROOM.nearMissFactor * site.areaSqFt;
+  }
+  if (region.ecoregionCode !== undefined && ecoregionFails(species, region)) {
+    if (++failures > 1) return 'out';
+    nearMiss = false;
+  }
+  const layer = layerVerdict(species, site);
+  if (layer !== 'pass') {
+    if (++failures > 1) return 'out';
+    nearMiss = layer === 'near-miss';
+  }
+  if (lifespanFails(species)) {
+    if (++failures > 1) return 'out';
+    nearMiss = true;
+  }
+  if (spreaderFails(species, site)) {
+    if (++failures > 1) return 'out';
+    nearMiss = true;
   }
   if (failures === 0) return 'eligible';
   return nearMiss ? 'near-miss' : 'out';

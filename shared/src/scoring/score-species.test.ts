@@ -41,18 +41,19 @@ describe('scoreSpecies: eligibility (native to the state, right sun and moisture
 describe('scoreSpecies: room for the plant (footprint = circle as wide as the narrow end of its spread)', () => {
   const oak = { ...F.butterflyMilkweed, slug: 'big-tree', growthForm: 'tree' as const, spreadCm: { min: 1000, max: 1500 } };
   it.each([
-    // π × (10 m ÷ 2)² = 78.5 m² = 845 ft²
-    ['845 ft² tree in 300 ft²: out, not a near miss', 300, false, false, undefined],
-    ['845 ft² tree in 500 ft²: out, a near miss', 500, false, true, undefined],
-    ['845 ft² tree in 2,000 ft²: shades part of it, −2', 2000, true, false, -2],
-    ['845 ft² tree in 5,000 ft²: room enough', 5000, true, false, undefined],
-  ])('%s', (_what, areaSqFt, eligible, nearMiss, points) => {
-    const r = scoreSpecies(oak, { ...sunnyDry, areaSqFt }, LARKFIELD);
+    // π × (10 m ÷ 2)² = 78.5 m² = 845 ft²; woody plants asked for get 25 % of a bed up to 500 ft², 35 % above (layers.ts)
+    ['845 ft² tree in 300 ft²: out, not a near miss', 300, true, false, false, undefined],
+    ['845 ft² tree in 500 ft²: out, a near miss', 500, true, false, true, undefined],
+    ['845 ft² tree in 2,000 ft²: over the woody share (700 ft²), a near miss that would shade the bed', 2000, true, false, true, -2],
+    ['845 ft² tree in 5,000 ft²: room enough in the woody share (1,750 ft²)', 5000, true, true, false, undefined],
+    ['845 ft² tree in 5,000 ft², woody plants not asked for: out', 5000, false, false, false, undefined],
+  ])('%s', (_what, areaSqFt, woodyPlants, eligible, nearMiss, points) => {
+    const r = scoreSpecies(oak, { ...sunnyDry, areaSqFt, woodyPlants }, LARKFIELD);
     expect([r.eligible, r.nearMiss, partOf(r, 'room')?.points]).toEqual([eligible, nearMiss, points]);
   });
 
   it('says so with both units', () => {
-    expect(scoreSpecies(oak, { ...sunnyDry, areaSqFt: 300 }, LARKFIELD).ineligibleReason)
+    expect(scoreSpecies(oak, { ...sunnyDry, areaSqFt: 300, woodyPlants: true }, LARKFIELD).ineligibleReason)
       .toBe('Too big: it grows about 33 ft (10 m) across, more than your 300 ft² (27.9 m²) bed can hold.');
   });
 });
@@ -62,11 +63,15 @@ describe('scoreSpecies: why it fits, in words', () => {
 
   it.each([
     ['native', 0, 'Native to Wisconsin.'],
-    ['sun', 3, 'Grows in full sun or part shade; your ground has full sun.'],
-    ['moisture', 3, 'Takes dry or medium-moist soil; your soil is dry.'],
+    ['sun', 1, 'Grows in full sun or part shade; your ground has full sun.'],
+    ['moisture', 1, 'Takes dry or medium-moist soil; your soil is dry.'],
+    // Graded fit: full sun and dry soil are in its range (no optimum recorded: the whole range),
+    // and its range stops short of wet soil and of shade: 2 + 2 + 1.5 + 1.5
+    ['thrives', 7, 'Thrives in dry soil and full sun, as on your ground.'],
     ['habitat', 2, 'Belongs to the prairie and savanna plant communities of your ecoregion.'],
-    // Asclepias: 12 Lepidoptera species (TAL-H, CHECK-VALUES §2, R); points = 2·log10(13) = 2.2
-    ['host-plant', 2.2, 'Hosts the caterpillars of 12 moth and butterfly species in its genus.'],
+    // Asclepias: 12 Lepidoptera species (TAL-H, CHECK-VALUES §2, R), about a tenth of the
+    // herbaceous list's top genus (Solidago 115): "some" host value, in words, no count
+    ['host-plant', 0.75, 'Hosts the caterpillars of a few moths and butterflies.'],
     ['monarch-host', 4, 'Feeds monarch caterpillars, which eat only milkweeds and a few close relatives.'],
     ['deer', 2, 'Deer usually leave it alone.'],
   ])('%s: %d points, "%s"', (name, points, reason) => {
@@ -77,9 +82,9 @@ describe('scoreSpecies: why it fits, in words', () => {
     expect(r.score).toBeCloseTo(r.parts.reduce((s, p) => s + p.points, 0), 5);
   });
 
-  it('goldenrod: "hosts the caterpillars of 115 moth and butterfly species" (Solidago 115, TAL-H, R)', () => {
+  it('goldenrod: among the best herbaceous host plants (Solidago 115, the top of TAL-H, R), said without a count', () => {
     const g = scoreSpecies(F.showyGoldenrod, sunnyDry, LARKFIELD);
-    expect(partOf(g, 'host-plant')?.reason).toBe('Hosts the caterpillars of 115 moth and butterfly species in its genus.');
+    expect(partOf(g, 'host-plant')).toEqual({ name: 'host-plant', points: 3, reason: 'Among the best caterpillar host plants of the wildflowers, grasses and ferns.' });
   });
 
   it('bloom gap: a late bloomer scores when the mix has no late flowers', () => {
@@ -101,11 +106,12 @@ describe('scoreSpecies: why it fits, in words', () => {
 describe('recommend', () => {
   const site: Site = { sun: 'full', moisture: 'medium', areaSqFt: 300, deerPressure: 'medium', goals: ['pollinators'] };
 
-  it('ranks by score, then slug, and puts near misses apart', () => {
+  it('ranks by score, then how well it thrives and its wildlife value, then slug, and puts near misses apart', () => {
     const { ranked, alsoConsider } = recommend(ALL_FIXTURES, site, LARKFIELD);
     for (let i = 1; i < ranked.length; i++) {
       const [a, b] = [ranked[i - 1], ranked[i]];
-      expect(a.score > b.score || (a.score === b.score && a.slug < b.slug)).toBe(true);
+      const [ta, tb] = [a.tieBreak ?? 0, b.tieBreak ?? 0];
+      expect(a.score > b.score || (a.score === b.score && (ta > tb || (ta === tb && a.slug < b.slug)))).toBe(true);
     }
     expect(ranked.every((r) => r.eligible)).toBe(true);
     expect(alsoConsider.map((r) => r.slug)).toContain('amsonia-tabernaemontana');

@@ -5,8 +5,12 @@ import { roundTo } from '../units/conversions.js';
 import { bloomGapPart, habitatPart } from './context-parts.js';
 import { deerPart, rainGardenPart, shadeGardenPart, soilPart, spreadPart } from './garden-parts.js';
 import { hardCheckOutcome } from './hard-check-outcome.js';
+import { catalogueCoverage } from './coverage.js';
 import { checkHeight, checkMoisture, checkNative, checkRoom, checkSun, type CheckResult } from './hard-checks.js';
-import { birdsPart, hostPlantPart, monarchPart, pollinatorPart } from './wildlife-parts.js';
+import { birdsPart, monarchPart, pollinatorPart } from './wildlife-parts.js';
+import { availabilityPart, beesPart, layeredHostPart, scalePart, seedEasePart } from './practice-parts.js';
+import { checkEcoregion, checkLayer, checkLifespan, checkSpreader } from './practice-checks.js';
+import { acidSoilPart, communityPart, fernPart, regionalPart, thrivesPart, wetlandPart } from './site-fit-parts.js';
 
 export interface ScoringContext {
   /** The mix chosen so far: species that bloom when it has least score higher. */
@@ -28,9 +32,23 @@ export function scoreSpecies(species: Species, site: Site, region: RegionContext
   takeCheck(checkMoisture(species, site), parts, verdict);
   takeCheck(checkHeight(species, site), parts, verdict);
   takeCheck(checkRoom(species, site), parts, verdict);
+  takeCheck(checkEcoregion(species, region), parts, verdict);
+  takeCheck(checkLayer(species, site), parts, verdict);
+  takeCheck(checkLifespan(species), parts, verdict);
+  takeCheck(checkSpreader(species, site), parts, verdict);
+  addPart(thrivesPart(species, site), parts);
+  addPart(communityPart(species, site), parts);
+  addPart(wetlandPart(species, site), parts);
+  addPart(acidSoilPart(species), parts);
+  addPart(fernPart(species, site), parts);
   addPart(soilPart(species, site), parts);
   addPart(habitatPart(species, region), parts);
-  addPart(hostPlantPart(species), parts);
+  addPart(regionalPart(species, region), parts);
+  addPart(layeredHostPart(species), parts);
+  addPart(beesPart(species, site), parts);
+  addPart(availabilityPart(species), parts);
+  addPart(seedEasePart(species), parts);
+  addPart(scalePart(species, site), parts);
   addPart(monarchPart(species, site), parts);
   addPart(pollinatorPart(species, site), parts);
   addPart(birdsPart(species, site), parts);
@@ -41,13 +59,20 @@ export function scoreSpecies(species: Species, site: Site, region: RegionContext
   addPart(shadeGardenPart(species, site), parts);
 
   let sum = 0;
-  for (const p of parts) sum += p.points;
+  let tie = 0;
+  for (const p of parts) {
+    sum += p.points;
+    // Ties go to the plant that thrives here, then to the one with more wildlife value in its layer.
+    if (p.name === 'thrives' || p.name === 'community' || p.name === 'wetland-class') tie += 10 * p.points;
+    else if (p.name === 'host-plant' || p.name === 'bees' || p.name === 'monarch-host') tie += p.points;
+  }
   const score = roundTo(sum, 2);
+  const tieBreak = roundTo(tie, 2);
   const slug = species.slug;
-  if (verdict.failure === undefined) return { slug, score, parts, eligible: true, nearMiss: false };
+  if (verdict.failure === undefined) return { slug, score, parts, eligible: true, nearMiss: false, tieBreak };
   // Only a single one-step miss is worth suggesting; two misses is the wrong plant for the spot.
   const nearMiss = verdict.failures === 1 && verdict.nearMiss;
-  return { slug, score, parts, eligible: false, ineligibleReason: verdict.failure, nearMiss };
+  return { slug, score, parts, eligible: false, ineligibleReason: verdict.failure, nearMiss, tieBreak };
 }
 
 interface Verdict {
@@ -73,15 +98,20 @@ function addPart(p: ScorePart | null, parts: ScorePart[]): void {
   if (p) parts.push(p);
 }
 
-/** Score descending, then slug: the same input always gives the same order. */
+/**
+ * Score descending; ties to the species that thrives here rather than copes, then to more wildlife
+ * value within its layer (tieBreak); only then the slug, so the same input always gives the same order.
+ */
 export function compareScored(a: ScoredSpecies, b: ScoredSpecies): number {
-  return b.score - a.score || (a.slug < b.slug ? -1 : a.slug > b.slug ? 1 : 0);
+  return b.score - a.score || (b.tieBreak ?? 0) - (a.tieBreak ?? 0) || (a.slug < b.slug ? -1 : a.slug > b.slug ? 1 : 0);
 }
 
 /** Ranks a species list for a site: eligible species, and near misses to "also consider". */
 export function recommend(speciesList: readonly Species[], site: Site, region: RegionContext, context: ScoringContext = {}): Recommendation {
   const ranked: ScoredSpecies[] = [];
   const alsoConsider: ScoredSpecies[] = [];
+  const coverage = catalogueCoverage(speciesList, region);
+  if (!coverage.covered) return { ranked, alsoConsider, coverage };
   for (const s of speciesList) {
     // Species out by more than a step are dropped unseen: no reasons to build for them.
     if (hardCheckOutcome(s, site, region) === 'out') continue;
@@ -89,5 +119,5 @@ export function recommend(speciesList: readonly Species[], site: Site, region: R
     if (r.eligible) ranked.push(r);
     else if (r.nearMiss) alsoConsider.push(r);
   }
-  return { ranked: ranked.sort(compareScored), alsoConsider: alsoConsider.sort(compareScored) };
+  return { ranked: ranked.sort(compareScored), alsoConsider: alsoConsider.sort(compareScored), coverage };
 }

@@ -4,8 +4,9 @@
  * height) nudge the order. They only rank species for one site; they are not a published scale.
  */
 export const POINTS = {
-  sunMatch: 3,
-  moistureMatch: 3,
+  /** In range: it grows here. How well it thrives is graded apart (site-fit-parts.ts). */
+  sunMatch: 1,
+  moistureMatch: 1,
   soilMatch: 1,
   soilMismatch: -1,
   habitatMatch: 2,

@@ -1,12 +1,7 @@
 import { isNativeMilkweed } from '../scoring/genus.js';
-import type { PlantLayer } from '../types/season.js';
+import { layerOf, type PlantLayer } from '../scoring/layers.js';
 import type { Species, SowingMethod, StateCode } from '../types/species.js';
 import { methodsThatSuit } from './seed-ease.js';
-
-/** Herbaceous plants are compared with herbaceous, woody with woody (a goldenrod is not an oak). */
-export function layerOf(species: Pick<Species, 'growthForm'>): PlantLayer {
-  return species.growthForm === 'forb' || species.growthForm === 'graminoid' || species.growthForm === 'fern' ? 'herbaceous' : 'woody';
-}
 
 /**
  * Herbaceous perennials: what a plant share gives best. Plugs of trees and shrubs take years to

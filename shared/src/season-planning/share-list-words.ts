@@ -1,6 +1,6 @@
 import { countOf } from '../scoring/plain-words.js';
 import type { BloomPeriod } from '../types/recommendation.js';
-import type { PlantLayer } from '../types/season.js';
+import type { PlantLayer } from '../scoring/layers.js';
 import type { Species, SowingMethod } from '../types/species.js';
 import { joinWords } from '../vocabulary/join-words.js';
 import { formatMonths } from '../vocabulary/months.js';

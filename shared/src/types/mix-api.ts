@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { type SowingCalendar, isoDateSchema, sowingCalendarRequestSchema } from '../sowing-calendar/calendar-types.js';
-import { type PaletteAlternative, type PaletteResult, type ScoredSpecies, MAX_LISTED_SLUGS, paletteRequestSchema } from './recommendation.js';
+import type { SeedingLine } from '../quantities/seeding-plan.js';
+import { type Coverage, type PaletteAlternative, type PaletteResult, type ScoredSpecies, MAX_LISTED_SLUGS, paletteRequestSchema } from './recommendation.js';
 import { type Site, MAX_AREA_SQ_FT, MAX_AREA_SQ_M } from './site.js';
 import type { SpeciesSummary } from './species-query.js';
 import { slugSchema } from './species.js';
@@ -18,8 +19,10 @@ export interface RecommendationsResponse {
   site: Site;
   /** Best first, at most 60. */
   ranked: ScoredWithSpecies[];
-  /** Near misses with the reason, at most 20. */
+  /** Near misses with the reason, at most 20 (annuals and biennials among them). */
   alsoConsider: ScoredWithSpecies[];
+  /** Whether the catalogue covers the region; when not, ranked is empty and the message says why. */
+  coverage: Coverage;
 }
 
 /** Plants and seed for one species of a mix. */
@@ -42,6 +45,10 @@ export interface MixResponse {
   /** Summaries of every species the answer mentions, by slug. */
   species: Record<string, SpeciesSummary>;
   quantities: MixQuantity[];
+  /** Σ plants × spacing² in ft²: never more than the bed unless it cannot hold one plant of each species. */
+  totalFootprintSqFt: number;
+  /** A meadow's seeding plan by seeds/ft² (from half an acre; palette.plantingMethod is 'seeding'), else null. */
+  seeding: SeedingLine[] | null;
   /** Fraction of seedlings assumed lost before planting out (common practice 0.2). */
   lossFactor: number;
 }
@@ -51,6 +58,8 @@ export const alternativesRequestSchema = paletteRequestSchema.extend({
   chosen: z.array(slugSchema).min(1).max(MAX_LISTED_SLUGS),
   /** The chosen species to find replacements for. */
   slot: slugSchema,
+  /** Offer replacements of any growth form (a shrub for a wildflower); by default only the slot's own kind. */
+  acrossForms: z.boolean().default(false),
 }).strict();
 export type AlternativesRequest = z.input<typeof alternativesRequestSchema>;
 

@@ -8,7 +8,8 @@ export type BloomPeriod = (typeof BLOOM_PERIODS)[number];
 
 export type ScorePartName =
   | 'native' | 'sun' | 'moisture' | 'soil' | 'habitat' | 'host-plant' | 'monarch-host' | 'pollinators'
-  | 'birds' | 'bloom-gap' | 'height' | 'room' | 'deer' | 'spread' | 'rain-garden' | 'shade-garden';
+  | 'birds' | 'bloom-gap' | 'height' | 'room' | 'deer' | 'spread' | 'rain-garden' | 'shade-garden'
+  | 'thrives' | 'community' | 'wetland-class' | 'acid-soil' | 'bees' | 'availability' | 'seed-ease' | 'fern' | 'ecoregion';
 
 /** One line of "why it fits": points and a sentence a homeowner understands. */
 export interface ScorePart {
@@ -27,13 +28,26 @@ export interface ScoredSpecies {
   ineligibleReason?: string;
   /** Not eligible, but missed by one step only (sun, moisture, height, room, or native next door). */
   nearMiss: boolean;
+  /**
+   * Breaks ties in the score: how well the species thrives here (not merely tolerates), then its
+   * wildlife value within its layer. Higher is better.
+   */
+  tieBreak?: number;
+}
+
+/** Whether Homeground's catalogue covers the site's region; when not, say so instead of recommending. */
+export interface Coverage {
+  covered: boolean;
+  /** Plain words when not covered (e.g. the catalogue holds eastern and central species only). */
+  message?: string;
 }
 
 export interface Recommendation {
   /** Eligible species, best first (score descending, then slug). */
   ranked: ScoredSpecies[];
-  /** Near misses with the reason, same order. */
+  /** Near misses with the reason, same order (annuals and biennials among them: they are not counted into a mix). */
   alsoConsider: ScoredSpecies[];
+  coverage: Coverage;
 }
 
 export const MAX_MIX_SIZE = 40;
@@ -43,7 +57,7 @@ export const MAX_LISTED_SLUGS = 60;
 export const paletteOptionsSchema = z.object({
   /** Number of species in the mix; from the area when left out. */
   size: z.number().int().min(1).max(MAX_MIX_SIZE).optional(),
-  /** Always in the mix. */
+  /** Always in the mix: kept species, swapped-in species and species added by search. */
   locked: z.array(slugSchema).max(MAX_LISTED_SLUGS).default([]),
   /** Never in the mix (wins over a lock on the same slug). */
   excluded: z.array(slugSchema).max(MAX_LISTED_SLUGS).default([]),
@@ -78,7 +92,7 @@ export interface PaletteConstraint {
 
 export interface ObjectiveTerm {
   name:
-    | 'fit' | 'host-plants' | 'bloom-periods' | 'flowering-count' | 'milkweed' | 'grasses' | 'height-tiers' | 'colours'
+    | 'fit' | 'host-plants' | 'bloom-periods' | 'bloom-months' | 'flowering-count' | 'milkweed' | 'grasses' | 'height-tiers' | 'colours'
     | 'genus-variety';
   value: number;
 }
@@ -92,8 +106,14 @@ export interface ChosenSpecies {
   locked: boolean;
 }
 
+/** How a mix is planted: plugs by count for a bed, a seeding plan by seeds/ft² for a meadow. */
+export type PlantingMethod = 'plugs' | 'seeding';
+
 export interface PaletteResult {
   size: number;
+  coverage: Coverage;
+  /** Plugs for a bed; a seeding plan from half an acre (see quantities/planting-method.ts). */
+  plantingMethod: PlantingMethod;
   /** How the size was chosen, in words. */
   sizeReason: string;
   chosen: ChosenSpecies[];

@@ -108,30 +108,35 @@ export const placeLookupSchema = z.object({
 const scorePartSchema = z.object({
   name: z.enum([
     'native', 'sun', 'moisture', 'soil', 'habitat', 'host-plant', 'monarch-host', 'pollinators', 'birds', 'bloom-gap',
-    'height', 'room', 'deer', 'spread', 'rain-garden', 'shade-garden',
+    'height', 'room', 'deer', 'spread', 'rain-garden', 'shade-garden', 'thrives', 'community', 'wetland-class',
+    'acid-soil', 'bees', 'availability', 'seed-ease', 'fern', 'ecoregion',
   ]),
   points: z.number(),
   reason: z.string(),
 });
 const scoredSpeciesSchema = z.object({
   slug: z.string(), score: z.number(), parts: z.array(scorePartSchema), eligible: z.boolean(),
-  ineligibleReason: z.string().optional(), nearMiss: z.boolean(),
+  ineligibleReason: z.string().optional(), nearMiss: z.boolean(), tieBreak: z.number().optional(),
 }) satisfies z.ZodType<ScoredSpecies>;
+const coverageSchema = z.object({ covered: z.boolean(), message: z.string().optional() });
 const scoredWithSpeciesSchema = scoredSpeciesSchema.extend({ species: speciesSummarySchema });
 
 export const recommendationsResponseSchema = z.object({
   site: siteSchema, ranked: z.array(scoredWithSpeciesSchema), alsoConsider: z.array(scoredWithSpeciesSchema),
+  coverage: coverageSchema,
 }) satisfies z.ZodType<RecommendationsResponse>;
 
 const paletteResultSchema = z.object({
   size: z.number().int(),
+  coverage: coverageSchema,
+  plantingMethod: z.enum(['plugs', 'seeding']),
   sizeReason: z.string(),
   chosen: z.array(z.object({
     slug: z.string(), score: z.number(), parts: z.array(scorePartSchema), roles: z.array(z.string()), locked: z.boolean(),
   })),
   objective: z.number(),
   terms: z.array(z.object({
-    name: z.enum(['fit', 'host-plants', 'bloom-periods', 'flowering-count', 'milkweed', 'grasses', 'height-tiers', 'colours', 'genus-variety']),
+    name: z.enum(['fit', 'host-plants', 'bloom-periods', 'bloom-months', 'flowering-count', 'milkweed', 'grasses', 'height-tiers', 'colours', 'genus-variety']),
     value: z.number(),
   })),
   constraints: z.array(z.object({
@@ -153,6 +158,11 @@ export const mixResponseSchema = z.object({
   species: z.record(z.string(), speciesSummarySchema),
   quantities: z.array(mixQuantitySchema),
   lossFactor: z.number(),
+  totalFootprintSqFt: z.number(),
+  seeding: z.array(z.object({
+    slug: z.string(), seedsPerSqFt: z.number(), seedsPerSqM: z.number(),
+    seed: z.object({ grams: z.number(), ounces: z.number(), pounds: z.number() }).nullable(),
+  })).nullable(),
 }) satisfies z.ZodType<MixResponse>;
 
 export const alternativesResponseSchema = z.object({

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { isoDateSchema } from '../sowing-calendar/calendar-types.js';
 import { slugSchema, sowingMethodSchema, type SowingMethod, type Sun, type Moisture } from './species.js';
 import type { BloomPeriod } from './recommendation.js';
+import type { PlantLayer } from '../scoring/layers.js';
 
 /**
  * A group's season plan: when the season runs (average last spring frost, plant-share date), the
@@ -81,8 +82,6 @@ export const shareListRequestSchema = z
   .strict();
 export type ShareListRequest = z.infer<typeof shareListRequestSchema>;
 
-/** Layers whose wildlife value is compared among themselves: a goldenrod is not measured against an oak. */
-export type PlantLayer = 'herbaceous' | 'woody';
 
 /** One species the share list proposes, with why in words. */
 export interface ShareListProposal {

@@ -29,6 +29,13 @@ export const siteSchema = z.object({
   goals: z.array(goalSchema).max(GOALS.length).refine((g) => new Set(g).size === g.length, {
     message: 'each goal once',
   }),
+  /**
+   * Add shrubs, small trees and vines (the woody layer). A yard mix is herbaceous unless asked:
+   * woody plants then get a share of the bed, and only those whose mature spread fits it.
+   */
+  woodyPlants: z.boolean().optional(),
+  /** Allow aggressive spreaders and heavy self-sowers in a small bed (they are left out unless asked). */
+  spreaders: z.boolean().optional(),
 });
 export type Site = z.infer<typeof siteSchema>;
 

@@ -4,6 +4,7 @@ import { ErrorState, LoadingState } from '../components/states/index.js';
 import { paths } from '../config/paths.js';
 import { AccountDetails } from '../features/account/index.js';
 import { useSession } from '../features/auth/index.js';
+import { SavedMixesList } from '../features/yard-mix/index.js';
 import { useDocumentTitle } from '../lib/use-document-title.js';
 
 export function AccountRoute() {
@@ -18,7 +19,10 @@ export function AccountRoute() {
     <>
       <PageIntro title="Your account" />
       {session.user ? (
-        <AccountDetails user={session.user} />
+        <>
+          <AccountDetails user={session.user} />
+          <SavedMixesList />
+        </>
       ) : (
         <ErrorState
           title="Your account details did not load."

@@ -43,7 +43,9 @@ describe('species browser', () => {
     expect(within(row).getByText('30–75 cm')).toBeInTheDocument();
     expect(within(row).getByRole('img', { name: 'Blooms Jun–Aug; orange flowers' })).toBeInTheDocument();
     expect(within(row).getByText('Irritating sap, Toxic if eaten, Has a look-alike, Harmful to livestock')).toBeInTheDocument();
-    expect(within(row).getByText('12')).toBeInTheDocument();
+    // Wildlife value in words, never the genus count: Asclepias 12 of the herbaceous list's top 115 (CHECK-VALUES §2, R).
+    expect(within(row).getByText('a few caterpillars; monarch host')).toBeInTheDocument();
+    expect(within(row).queryByText('12')).toBeNull();
   });
 
   it('searches as you type, after a pause, and puts the search in the URL', async () => {
@@ -97,9 +99,9 @@ describe('species browser', () => {
   it('sorts by a column header and says which way', async () => {
     const { user, api } = openBrowser();
     await screen.findByRole('table', {}, FIRST_PAINT);
-    await user.click(screen.getByRole('button', { name: 'Host value' }));
+    await user.click(screen.getByRole('button', { name: 'Wildlife value' }));
     await waitFor(() => expect(Object.fromEntries(lastQuery(api))).toMatchObject({ sort: 'hostValue', order: 'desc' }));
-    await waitFor(() => expect(screen.getByRole('columnheader', { name: /Host value/ })).toHaveAttribute('aria-sort', 'descending'));
+    await waitFor(() => expect(screen.getByRole('columnheader', { name: /Wildlife value/ })).toHaveAttribute('aria-sort', 'descending'));
   });
 
   it('hides a column and remembers the choice', async () => {

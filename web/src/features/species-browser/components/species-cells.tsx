@@ -1,5 +1,5 @@
 import {
-  capitalise, CAUTION_WORDS, formatMonths, MOISTURE_WORDS, type SpeciesSummary, SUN_LEVELS, SUN_WORDS,
+  capitalise, CAUTION_WORDS, formatMonths, hostLevelOf, MOISTURE_WORDS, type SpeciesSummary, SUN_LEVELS, SUN_WORDS,
 } from '@homeground/shared';
 import { Checkmark16Filled, Warning16Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
@@ -11,7 +11,6 @@ import { BloomStrip } from './bloom-strip.js';
 import { HighlightedText } from './highlighted-text.js';
 import { useTableStyles } from './species-table.styles.js';
 
-const count = new Intl.NumberFormat('en-US');
 
 /** A dash for an empty cell, with words for a screen reader instead of "dash". */
 function Nothing({ spoken }: { spoken: string }) {
@@ -70,7 +69,7 @@ export function OptionalCell({ column, species, highlights }: { column: Optional
     case 'moisture':
       return species.moisture.map((m) => capitalise(MOISTURE_WORDS[m])).join(', ');
     case 'hostValue':
-      return species.lepidopteraGenusCount === null ? <Nothing spoken="Genus not in the host counts" /> : count.format(species.lepidopteraGenusCount);
+      return wildlifeWords(species);
     case 'monarchHost':
       return species.monarchHost ? (
         <span className={styles.yes}>
@@ -91,3 +90,13 @@ export function OptionalCell({ column, species, highlights }: { column: Optional
       );
   }
 }
+
+const HOST_SHORT = { top: 'among the best caterpillar hosts', good: 'a good caterpillar host', some: 'a few caterpillars', none: '' } as const;
+
+/** Homeground's several-part wildlife summary in a few words (caterpillars within its layer, monarchs), never a count. */
+function wildlifeWords(species: SpeciesSummary): string {
+  const level = hostLevelOf({ growthForm: species.growthForm, scientificName: species.scientificName, wildlife: { lepidopteraGenusCount: species.lepidopteraGenusCount } as SpeciesSummaryWildlife });
+  const parts = [HOST_SHORT[level], species.monarchHost ? 'monarch host' : ''].filter(Boolean);
+  return parts.length > 0 ? parts.join('; ') : 'not recorded';
+}
+type SpeciesSummaryWildlife = Parameters<typeof hostLevelOf>[0]['wildlife'];

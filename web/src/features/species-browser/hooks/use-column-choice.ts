@@ -14,7 +14,7 @@ export const COLUMN_LABELS: Record<OptionalColumn, string> = {
   bloom: 'Bloom',
   sun: 'Sun',
   moisture: 'Moisture',
-  hostValue: 'Host value',
+  hostValue: 'Wildlife value',
   monarchHost: 'Monarch host',
   cautions: 'Cautions',
 };

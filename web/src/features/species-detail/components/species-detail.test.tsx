@@ -56,7 +56,7 @@ describe('species page', () => {
   it('gives wildlife value with its citation, sizes in both units and the native range', async () => {
     openDetail();
     await screen.findByRole('heading', { level: 1 }, FIRST_PAINT);
-    expect(within(section('Wildlife value')).getByText('Hosts the caterpillars of 12 moth and butterfly species in its genus — Tallamy & Shropshire 2009.')).toBeInTheDocument();
+    expect(within(section('Wildlife value')).getByText('Hosts the caterpillars of a few moths and butterflies — Tallamy & Shropshire 2009.')).toBeInTheDocument();
     expect(within(section('Wildlife value')).getByText(/Monarch host plant/)).toBeInTheDocument();
     const size = section('Size and habit');
     expect(within(size).getByText('12–30 in (30–75 cm)')).toBeInTheDocument();

@@ -1,5 +1,6 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { LeafOne20Regular } from '@fluentui/react-icons';
+import { beeWords, caterpillarWords } from '@homeground/shared';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { SECTION_FIELDS, shortCitation } from '../utils/source-labels.js';
 import { FactSection } from './fact-section.js';
@@ -9,15 +10,16 @@ const useStyles = makeStyles({
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalS },
 });
 
-const count = new Intl.NumberFormat('en-US');
-
-/** The caterpillar-host sentence with its citation, e.g. "… 115 moth and butterfly species in its genus — Tallamy & Shropshire 2009". */
-export function hostSentence(n: number | null, sourceKey: string | undefined): string {
+/**
+ * The caterpillar-host sentence in words, judged within the plant's layer (wildflowers or shrubs
+ * and trees), with its citation: never the raw genus count (shared wildlife-value.ts).
+ */
+export function hostSentence(species: SpeciesDetail, sourceKey: string | undefined): string {
   const cite = sourceKey ? ` — ${shortCitation(sourceKey)}` : '';
-  if (n === null) return `Its genus is not listed in the caterpillar-host counts${cite}.`;
-  if (n === 0) return `No moth or butterfly caterpillars are recorded on its genus${cite}.`;
-  const kinds = n === 1 ? 'moth or butterfly species' : 'moth and butterfly species';
-  return `Hosts the caterpillars of ${count.format(n)} ${kinds} in its genus${cite}.`;
+  if (species.wildlife.lepidopteraGenusCount === null) return `Its genus is not listed in the caterpillar-host lists${cite}.`;
+  const words = caterpillarWords(species);
+  if (words === null) return `No moth or butterfly caterpillars are recorded on its genus${cite}.`;
+  return `${words.replace(/\.$/, '')}${cite}.`;
 }
 
 /** What the plant feeds: caterpillars, monarchs, pollinators, birds and specialist bees. */
@@ -27,7 +29,8 @@ export function WildlifeValue({ species }: { species: SpeciesDetail }) {
   return (
     <FactSection title="Wildlife value" icon={<LeafOne20Regular />}>
       <ul className={styles.list}>
-        <li>{hostSentence(w.lepidopteraGenusCount, species.sources['wildlife.lepidopteraGenusCount'])}</li>
+        <li>{hostSentence(species, species.sources['wildlife.lepidopteraGenusCount'])}</li>
+        {beeWords(species) ? <li>Bees: {beeWords(species)}</li> : null}
         <li>
           {w.monarchHost ? 'Monarch host plant: monarch caterpillars feed on its leaves.' : 'Not a monarch host plant.'}
         </li>

@@ -2,7 +2,7 @@ import type { MixResponse } from '@homeground/shared';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import { balanceQueryOptions, mixKeys } from '../../../api/mixes/mixes.queries.js';
-import { balanceRequestFor, type MixPlan } from '../plan/mix-plan.js';
+import { balanceRequestFor, type MixPlan } from '../utils/mix-plan.js';
 
 export type PlanChange = (plan: MixPlan, options?: { replace?: boolean }) => void;
 
@@ -47,12 +47,32 @@ export function useMixPlan(plan: MixPlan, onPlanChange: PlanChange) {
       delete next.chosen;
       onPlanChange(next);
     },
+    /**
+     * A swap is a choice that must survive a rebalance: the replacement is kept (locked) and the
+     * species it replaced is left out (excluded).
+     */
     swap: (slot: string, replacement: string) =>
       onPlanChange({
         ...plan,
         chosen: slugs.map((s) => (s === slot ? replacement : s)),
-        locked: known.locked.filter((s) => s !== slot),
-        excluded: known.excluded.filter((s) => s !== replacement),
+        locked: [...known.locked.filter((s) => s !== slot && s !== replacement), replacement],
+        excluded: [...known.excluded.filter((s) => s !== replacement && s !== slot), slot],
       }),
+    /** Adds a species found by search: it joins the mix now and is kept through rebalancing. */
+    addSpecies: (slug: string) => {
+      if (slugs.includes(slug)) return;
+      onPlanChange({
+        ...known,
+        chosen: [...slugs, slug],
+        locked: [...known.locked.filter((s) => s !== slug), slug],
+        excluded: known.excluded.filter((s) => s !== slug),
+      });
+    },
+    /** A new species count: the mix is balanced again at that size, keeping the person's choices. */
+    setSize: (size: number) => {
+      const next: MixPlan = { ...known, size };
+      delete next.chosen;
+      onPlanChange(next);
+    },
   };
 }

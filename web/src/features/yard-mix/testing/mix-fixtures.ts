@@ -36,9 +36,9 @@ function quantity(slug: string, plants: number): MixQuantity {
 }
 
 export const fixtureConstraints: PaletteConstraint[] = [
-  { id: 'cp42-early', rule: 'At least 3 species in flower April to mid-June (CP42 early period)', applies: true, met: true, detail: 'The mix has 3.', source: 'nrcs-cp42-indiana-2012' },
-  { id: 'cp42-late', rule: 'At least 3 species in flower August to October (CP42 late period)', applies: true, met: false, detail: 'Only 2 late bloomers suit your ground.', source: 'nrcs-cp42-indiana-2012' },
-  { id: 'monarch-milkweed', rule: 'At least one native milkweed (Asclepias) when monarchs are a goal', applies: false, met: true, detail: 'Monarchs are not one of your goals, so no milkweed is needed.', source: 'nrcs-e327136z2' },
+  { id: 'cp42-early', rule: 'Spring (April to mid-June): at least 3 species in flower every month, so something is in flower from spring to frost', applies: true, met: true, detail: 'The mix has 3.', source: 'nrcs-cp42-indiana-2012' },
+  { id: 'cp42-late', rule: 'Late summer and fall (August to October): at least 3 species in flower every month, so something is in flower from spring to frost', applies: true, met: false, detail: 'Only 2 late bloomers suit your ground.', source: 'nrcs-cp42-indiana-2012' },
+  { id: 'monarch-milkweed', rule: 'At least one native milkweed when monarchs are a goal: their caterpillars eat nothing else', applies: false, met: true, detail: 'Monarchs are not one of your goals, so no milkweed is needed.', source: 'nrcs-e327136z2' },
 ];
 
 export function fixtureMix(species: SpeciesSummary[] = fixtureSpecies): MixResponse {
@@ -46,6 +46,8 @@ export function fixtureMix(species: SpeciesSummary[] = fixtureSpecies): MixRespo
     site: { sun: 'full', moisture: 'medium', areaSqFt: 200, deerPressure: 'medium', goals: ['pollinators'] },
     palette: {
       size: species.length,
+      coverage: { covered: true },
+      plantingMethod: 'plugs',
       sizeReason: `200 ft² (18.6 m²) has room for about ${species.length} species.`,
       chosen: species.map((s, i) => chosen(s.slug, i === 0 ? ['one of 3 early bloomers'] : ['middle of the bed'])),
       objective: 1,
@@ -55,6 +57,8 @@ export function fixtureMix(species: SpeciesSummary[] = fixtureSpecies): MixRespo
     },
     species: Object.fromEntries(species.map((s) => [s.slug, s])),
     quantities: species.map((s, i) => quantity(s.slug, 10 + i)),
+    totalFootprintSqFt: species.length * 40,
+    seeding: null,
     lossFactor: 0.2,
   };
 }

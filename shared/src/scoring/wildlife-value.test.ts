@@ -1,0 +1,35 @@
+import { describe, expect, it } from 'vitest';
+import { F, makeSpecies } from './__tests__/species-fixtures.js';
+import { layerOf } from './layers.js';
+import { caterpillarWords, hostLevelOf, hostValueOnHerbaceousScale, wildlifeSummary } from './wildlife-value.js';
+
+// Genus counts: Tallamy's herbaceous (h) and woody (w) lists, CHECK-VALUES §2 (R).
+const cherry = makeSpecies({ slug: 'prunus-virginiana', scientificName: 'Prunus virginiana', growthForm: 'shrub', wildlife: { lepidopteraGenusCount: 456 } });
+const oak = makeSpecies({ slug: 'quercus-alba', scientificName: 'Quercus alba', growthForm: 'tree', wildlife: { lepidopteraGenusCount: 534 } });
+const morningGlory = makeSpecies({ slug: 'ipomoea-pandurata', scientificName: 'Ipomoea pandurata', growthForm: 'vine', wildlife: { lepidopteraGenusCount: 39 } });
+
+describe('caterpillar host value within its layer (input → level, words)', () => {
+  it.each([
+    ['Solidago 115 (h, top of the herbaceous list)', F.showyGoldenrod, 'herbaceous', 'top'],
+    ['Prunus 456 (w)', cherry, 'woody', 'top'],
+    ['Quercus 534 (w, top of the woody list)', oak, 'woody', 'top'],
+    ['Ipomoea 39: a vine, but on the herbaceous list (h)', morningGlory, 'herbaceous', 'good'],
+    ['Asclepias 12 (h)', F.butterflyMilkweed, 'herbaceous', 'some'],
+  ] as const)('%s', (_what, species, layer, level) => {
+    expect(layerOf(species)).toBe(layer);
+    expect(hostLevelOf(species)).toBe(level);
+  });
+
+  it('a cherry weighs like a goldenrod in the mix, not four goldenrods (456 × 115 ÷ 534 = 98.2)', () => {
+    expect(hostValueOnHerbaceousScale(cherry)).toBeCloseTo(98.2, 1);
+    expect(hostValueOnHerbaceousScale(F.showyGoldenrod)).toBe(115);
+  });
+
+  it('words, never a count', () => {
+    expect(caterpillarWords(F.showyGoldenrod)).toBe('Among the best caterpillar host plants of the wildflowers, grasses and ferns.');
+    expect(caterpillarWords(cherry)).toBe('Among the best caterpillar host plants of the shrubs and trees.');
+    const summary = wildlifeSummary(F.butterflyMilkweed);
+    expect(summary.monarchs).toBe('Monarch caterpillars feed on it.');
+    expect(JSON.stringify(summary)).not.toMatch(/\d/);
+  });
+});

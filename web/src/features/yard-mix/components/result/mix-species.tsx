@@ -1,0 +1,76 @@
+import { Button, makeStyles, MessageBar, MessageBarBody, Tab, TabList, tokens } from '@fluentui/react-components';
+import { ArrowSync20Regular } from '@fluentui/react-icons';
+import { useState } from 'react';
+import { ContentCard } from '../../../../components/page/content-card.js';
+import { Heading } from '../../../../components/page/page-heading.js';
+import { MixCards } from './mix-cards.js';
+import type { MixRow } from '../../utils/mix-rows.js';
+import { MixTable } from './mix-table.js';
+import type { SpeciesCaution } from '../../hooks/use-mix-cautions.js';
+
+const useStyles = makeStyles({
+  head: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalL, alignItems: 'center', justifyContent: 'space-between', marginBottom: tokens.spacingVerticalM },
+  title: { marginBottom: 0 },
+  rebalance: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalM, alignItems: 'center', marginBottom: tokens.spacingVerticalM },
+  hint: { margin: 0, color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200, maxWidth: '60ch' },
+  notices: { display: 'grid', gap: tokens.spacingVerticalS, marginBottom: tokens.spacingVerticalM },
+});
+
+type View = 'table' | 'cards';
+
+/** Cards read better on a phone; a table compares species better on a wide screen. */
+function initialView(): View {
+  return typeof window !== 'undefined' && window.matchMedia?.('(max-width: 700px)').matches ? 'cards' : 'table';
+}
+
+export interface MixSpeciesProps {
+  rows: readonly MixRow[];
+  cautions: Record<string, SpeciesCaution[]>;
+  notices: readonly string[];
+  pendingOut: number;
+  lockedCount: number;
+  onRebalance: () => void;
+  onToggleLock: (slug: string) => void;
+  onToggleExclude: (slug: string) => void;
+  onSwap: (slug: string) => void;
+  isBusy: boolean;
+}
+
+/** The species of the mix, as a table or as cards, with the marks that wait for Rebalance. */
+export function MixSpecies({ rows, cautions, notices, pendingOut, lockedCount, onRebalance, isBusy, ...actions }: MixSpeciesProps) {
+  const styles = useStyles();
+  const [view, setView] = useState<View>(initialView);
+  const viewProps = { rows, cautions, isBusy, ...actions };
+
+  const hint = pendingOut > 0
+    ? `${pendingOut === 1 ? '1 species is' : `${pendingOut} species are`} marked to leave out. Rebalance to fill ${pendingOut === 1 ? 'its place' : 'their places'}.`
+    : lockedCount > 0
+      ? `${lockedCount === 1 ? '1 species is' : `${lockedCount} species are`} kept: they stay when you rebalance.`
+      : 'Keep the species you like and leave out the ones you do not, then rebalance.';
+
+  return (
+    <ContentCard aria-labelledby="mix-species-heading">
+      <div className={styles.head}>
+        <Heading level="section" id="mix-species-heading" className={styles.title}>Species in the mix</Heading>
+        <TabList selectedValue={view} onTabSelect={(_, d) => setView(d.value as View)} aria-label="Show the mix as" data-print="hide">
+          <Tab value="table">Table</Tab>
+          <Tab value="cards">Cards</Tab>
+        </TabList>
+      </div>
+      {notices.length > 0 ? (
+        <div className={styles.notices}>
+          {notices.map((n) => (
+            <MessageBar key={n} intent="warning" layout="multiline">
+              <MessageBarBody>{n}</MessageBarBody>
+            </MessageBar>
+          ))}
+        </div>
+      ) : null}
+      <div className={styles.rebalance} data-print="hide">
+        <Button icon={<ArrowSync20Regular />} onClick={onRebalance} disabled={isBusy}>Rebalance</Button>
+        <p className={styles.hint} aria-live="polite">{hint}</p>
+      </div>
+      {view === 'table' ? <MixTable {...viewProps} /> : <MixCards {...viewProps} />}
+    </ContentCard>
+  );
+}

@@ -1,0 +1,148 @@
+import { makeStyles, Spinner, tokens } from '@fluentui/react-components';
+import { STATE_NAMES, type StateCode, formatArea } from '@homeground/shared';
+import { useState, type ReactNode } from 'react';
+import { ContentCard } from '../../../../components/page/content-card.js';
+import { Heading } from '../../../../components/page/page-heading.js';
+import { EmptyState, ErrorState, LoadingState } from '../../../../components/states/index.js';
+import { paths } from '../../../../config/paths.js';
+import { BloomChart } from '../bloom-chart/bloom-chart.js';
+import { type PlanChange, useMixPlan } from '../../hooks/use-mix-plan.js';
+import { type MixPlan, paletteRequestOf, planToSearchParams } from '../../utils/mix-plan.js';
+import { ConstraintsPanel } from './constraints-panel.js';
+import { downloadText, mixCsv } from '../../utils/export-csv.js';
+import { MixActions } from './mix-actions.js';
+import { MixAdjust } from './mix-adjust.js';
+import { MixNotes } from './mix-notes.js';
+import { mixRows } from '../../utils/mix-rows.js';
+import { MixSpecies } from './mix-species.js';
+import { MixSummary } from './mix-summary.js';
+import { SaveMix } from './save-mix.js';
+import { SwapDialog } from './swap-dialog.js';
+import { useMixCautions } from '../../hooks/use-mix-cautions.js';
+import './mix-print.css';
+
+const useStyles = makeStyles({
+  root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXL },
+  head: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL },
+  updating: { minHeight: 0 },
+});
+
+export interface YardMixViewProps {
+  plan: MixPlan;
+  onPlanChange: PlanChange;
+  isSignedIn: boolean;
+  signInHref: string;
+  /** Heading of the mix; "Your yard mix" unless a saved mix brings its own name. */
+  title?: string;
+  intro?: ReactNode;
+  onChangeYard?: () => void;
+  onChangeGround?: () => void;
+}
+
+/** Step 3: the balanced yard mix with its bloom chart, design rules, quantities and the person's changes. */
+export function YardMixView({ plan, onPlanChange, isSignedIn, signInHref, title = 'Your yard mix', intro, onChangeYard, onChangeGround }: YardMixViewProps) {
+  const styles = useStyles();
+  const { query, slugs, isUpdating, toggleLock, toggleExclude, rebalance, swap, addSpecies, setSize } = useMixPlan(plan, onPlanChange);
+  const [swapSlot, setSwapSlot] = useState<string | null>(null);
+  const mix = query.data;
+  const speciesList = mix ? mix.palette.chosen.map((c) => mix.species[c.slug]).filter(Boolean) : [];
+  const cautions = useMixCautions(speciesList);
+
+  if (query.isPending) return <LoadingState label="Working out your yard mix" />;
+  if (mix && mix.palette.coverage && !mix.palette.coverage.covered) {
+    return (
+      <EmptyState title="Homeground does not cover this region yet">
+        {mix.palette.coverage.message}
+      </EmptyState>
+    );
+  }
+  if (query.isError || !mix) {
+    return (
+      <ErrorState
+        title="Homeground could not work out this mix"
+        message={query.error?.message ?? 'Try again in a moment.'}
+        onRetry={() => void query.refetch()}
+      />
+    );
+  }
+
+  const rows = mixRows(mix, plan.locked, plan.excluded);
+  const stateName = STATE_NAMES[plan.region.state as StateCode] ?? plan.region.state;
+  const sharePlan: MixPlan = { ...plan, chosen: slugs };
+  const shareUrl = `${window.location.origin}${paths.findPlants.build()}?${planToSearchParams(sharePlan).toString()}`;
+  const cardsHref = `${paths.cardsLabels.build()}?species=${slugs.join(',')}`;
+  const pendingOut = rows.filter((r) => r.isExcluded).length;
+  const swapRow = rows.find((r) => r.slug === swapSlot);
+
+  const print = () => {
+    // Closed <details> would print empty; open every "why it fits" first.
+    document.querySelectorAll<HTMLDetailsElement>('[data-print-root="yard-mix"] details').forEach((d) => (d.open = true));
+    window.print();
+  };
+
+  return (
+    <div className={styles.root} data-print-root="yard-mix" aria-busy={isUpdating}>
+      <ContentCard aria-labelledby="yard-mix-heading" className={styles.head}>
+        <Heading level="section" id="yard-mix-heading">{title}</Heading>
+        {intro}
+        <MixSummary site={mix.site} state={plan.region.state as StateCode} ecoregionCode={plan.region.ecoregionCode}
+          count={rows.length} sizeReason={mix.palette.sizeReason} />
+        {mix.palette.plantingMethod === 'seeding' ? (
+          <p data-testid="seeding-plan">
+            A planting this size is sown as a meadow: about {Math.round((mix.seeding ?? []).reduce((sum, l) => sum + l.seedsPerSqFt, 0))} seeds per ft² in all, shared among the species below.
+          </p>
+        ) : (
+          <p data-testid="total-footprint">
+            The plants take {formatArea(mix.totalFootprintSqFt ?? 0)} of your {formatArea(mix.site.areaSqFt)} when grown (plants × spacing²).
+          </p>
+        )}
+        <MixAdjust size={mix.palette.size} state={plan.region.state as StateCode} inMix={slugs} onSize={setSize} onAdd={addSpecies} isBusy={isUpdating} />
+        <MixActions
+          save={<SaveMix isSignedIn={isSignedIn} signInHref={signInHref} defaultName={`${title === 'Your yard mix' ? 'Yard mix' : title}, ${stateName}`}
+            buildRequest={(name) => ({ name, request: paletteRequestOf(plan), chosen: slugs })} />}
+          shareUrl={shareUrl}
+          cardsHref={cardsHref}
+          onExportCsv={() => downloadText(mixCsv(rows), 'homeground-yard-mix.csv')}
+          onPrint={print}
+          onChangeYard={onChangeYard}
+          onChangeGround={onChangeGround}
+        />
+        <div className={styles.updating} aria-live="polite">
+          {isUpdating ? <Spinner size="tiny" label="Updating the mix…" labelPosition="after" /> : null}
+        </div>
+      </ContentCard>
+
+      {rows.length === 0 ? (
+        <EmptyState title="No native species in the catalogue suit this yard yet">
+          Try a different sun or moisture answer, or a larger area.
+        </EmptyState>
+      ) : (
+        <MixSpecies rows={rows} cautions={cautions} pendingOut={pendingOut} lockedCount={plan.locked.length}
+          onRebalance={rebalance} onToggleLock={toggleLock} onToggleExclude={toggleExclude}
+          onSwap={setSwapSlot} isBusy={isUpdating} notices={mix.palette.notices} />
+      )}
+
+      <ContentCard aria-labelledby="bloom-heading">
+        <Heading level="section" id="bloom-heading">Bloom chart</Heading>
+        <BloomChart species={speciesList} />
+      </ContentCard>
+
+      <ContentCard aria-labelledby="rules-heading">
+        <Heading level="section" id="rules-heading">How this mix is balanced</Heading>
+        <ConstraintsPanel constraints={mix.palette.constraints} />
+      </ContentCard>
+
+      <MixNotes stateName={stateName} lossFactor={mix.lossFactor} />
+
+      <SwapDialog
+        slot={swapRow ? { slug: swapRow.slug, name: swapRow.species.commonName } : null}
+        request={{ ...paletteRequestOf(plan), chosen: slugs }}
+        onPick={(replacement) => {
+          if (swapSlot) swap(swapSlot, replacement);
+          setSwapSlot(null);
+        }}
+        onClose={() => setSwapSlot(null)}
+      />
+    </div>
+  );
+}
