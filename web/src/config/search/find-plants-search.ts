@@ -66,6 +66,8 @@ export function planToSearchParams(plan: MixPlan): URLSearchParams {
   if (s.maxHeightCm !== undefined) p.set('maxh', String(s.maxHeightCm));
   p.set('deer', s.deerPressure);
   if (s.goals.length > 0) p.set('goals', s.goals.join(','));
+  if (s.woodyPlants) p.set('woody', '1');
+  if (s.spreaders) p.set('spreaders', '1');
   if (plan.size !== undefined) p.set('size', String(plan.size));
   if (plan.locked.length > 0) p.set('locked', plan.locked.join(','));
   if (plan.excluded.length > 0) p.set('excluded', plan.excluded.join(','));
@@ -102,6 +104,8 @@ export function planFromSearchParams(params: URLSearchParams): PlanFromUrl {
     maxHeightCm: finiteNumber(params.get('maxh')),
     deerPressure: oneOf(DEER_PRESSURES, params.get('deer')),
     goals,
+    woodyPlants: params.get('woody') === '1' ? true : undefined,
+    spreaders: params.get('spreaders') === '1' ? true : undefined,
   };
   const site = siteRequestSchema.safeParse(candidate);
   if (!site.success) {

@@ -1,8 +1,7 @@
-import { isFloweringSpecies, type SpeciesSummary } from '@homeground/shared';
+import { isFloweringSpecies, MONTH_NUMBERS, monthLong, type SpeciesSummary } from '@homeground/shared';
 
-export const MONTH_NAMES = [
-  'January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December',
-] as const;
+/** January … December, in the shared vocabulary's words. */
+export const MONTH_NAMES: readonly string[] = MONTH_NUMBERS.map(monthLong);
 
 /**
  * CP42 bloom periods run from April (early) to October (late) (CP42-IN, via shared

@@ -1,5 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { formatArea, formatHeightCm, type Site, STATE_NAMES, type StateCode } from '@homeground/shared';
+import { formatArea, formatHeightCm, type Site, STATE_NAMES, type StateCode, SUN_WORDS } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { ecoregionQueryOptions } from '../../../../api/ecoregions/ecoregions.queries.js';
 import { GOAL_CHOICES, MOISTURE_CHOICES } from '../../utils/yard-form-choices.js';
@@ -9,7 +9,6 @@ const useStyles = makeStyles({
   reason: { margin: `${tokens.spacingVerticalXS} 0 0`, color: tokens.colorNeutralForeground2 },
 });
 
-const SUN_WORDS = { full: 'full sun', part: 'part shade', shade: 'shade' } as const;
 
 /** The place's name in words: "the Driftless Area of Wisconsin", or just the state. */
 export function usePlaceWords(state: StateCode, ecoregionCode: string | undefined): string {

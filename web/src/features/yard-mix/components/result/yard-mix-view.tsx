@@ -7,7 +7,7 @@ import { EmptyState, ErrorState, LoadingState } from '../../../../components/sta
 import { paths } from '../../../../config/paths.js';
 import { BloomChart } from '../bloom-chart/bloom-chart.js';
 import { type PlanChange, useMixPlan } from '../../hooks/use-mix-plan.js';
-import { type MixPlan, paletteRequestOf, planToSearchParams } from '../../utils/mix-plan.js';
+import { type MixPlan, paletteRequestOf } from '../../utils/mix-plan.js';
 import { ConstraintsPanel } from './constraints-panel.js';
 import { downloadText, mixCsv } from '../../utils/export-csv.js';
 import { MixActions } from './mix-actions.js';
@@ -69,7 +69,7 @@ export function YardMixView({ plan, onPlanChange, isSignedIn, signInHref, title 
   const rows = mixRows(mix, plan.locked, plan.excluded);
   const stateName = STATE_NAMES[plan.region.state as StateCode] ?? plan.region.state;
   const sharePlan: MixPlan = { ...plan, chosen: slugs };
-  const shareUrl = `${window.location.origin}${paths.findPlants.build()}?${planToSearchParams(sharePlan).toString()}`;
+  const shareUrl = `${window.location.origin}${paths.findPlants.build({ plan: sharePlan })}`;
   const cardsHref = `${paths.cardsLabels.build()}?species=${slugs.join(',')}`;
   const pendingOut = rows.filter((r) => r.isExcluded).length;
   const swapRow = rows.find((r) => r.slug === swapSlot);
