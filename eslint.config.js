@@ -48,14 +48,26 @@ export default tseslint.config(
       'import-x/parsers': { '@typescript-eslint/parser': ['.ts', '.tsx'] },
       'import-x/resolver-next': [
         createTypeScriptImportResolver({
-          project: ['shared/tsconfig.json', 'species-data/tsconfig.json', 'api/tsconfig.json', 'web/tsconfig.json', 'tsconfig.json'],
+          project: [
+            'shared/tsconfig.json',
+            'species-data/tsconfig.json',
+            'api/tsconfig.json',
+            'web/tsconfig.json',
+            'tsconfig.json',
+          ],
           noWarnOnMultipleProjects: true,
         }),
       ],
     },
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrorsIgnorePattern: '^_' }],
-      '@typescript-eslint/consistent-type-imports': ['error', { fixStyle: 'inline-type-imports', disallowTypeAnnotations: false }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrorsIgnorePattern: '^_' },
+      ],
+      '@typescript-eslint/consistent-type-imports': [
+        'error',
+        { fixStyle: 'inline-type-imports', disallowTypeAnnotations: false },
+      ],
       'import-x/no-cycle': ['error', { ignoreExternal: true }],
       'import-x/no-self-import': 'error',
       'import-x/no-duplicates': ['error', { 'prefer-inline': true }],
@@ -88,7 +100,8 @@ export default tseslint.config(
               target: `./web/src/features/${f}`,
               from: './web/src/features',
               except: [`./${f}`],
-              message: 'Features never import each other; share through components/, lib/ or api/, or compose in a route.',
+              message:
+                'Features never import each other; share through components/, lib/ or api/, or compose in a route.',
             })),
             // Common code imports no feature and no route.
             ...['components', 'lib', 'api', 'config', 'theme'].map((common) => ({
@@ -125,7 +138,14 @@ export default tseslint.config(
     },
   },
   {
-    files: ['**/*.test.{ts,tsx}', '**/*.spec.ts', '**/*.e2e-spec.ts', '**/test/**/*.ts', '**/testing/**/*.{ts,tsx}', '**/bench/**/*.ts'],
+    files: [
+      '**/*.test.{ts,tsx}',
+      '**/*.spec.ts',
+      '**/*.e2e-spec.ts',
+      '**/test/**/*.ts',
+      '**/testing/**/*.{ts,tsx}',
+      '**/bench/**/*.ts',
+    ],
     rules: { '@typescript-eslint/no-non-null-assertion': 'off' },
   },
   prettier,

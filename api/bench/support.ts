@@ -13,7 +13,15 @@ export async function startBuiltApi(): Promise<{ baseUrl: string; stop: () => Pr
   const dataDir = mkdtempSync(path.join(tmpdir(), 'homeground-bench-'));
   const child: ChildProcess = spawn(process.execPath, ['dist/main.js'], {
     cwd: API_DIR,
-    env: { ...process.env, PORT: '0', DATA_DIR: dataDir, DATABASE: path.join(dataDir, 'bench.sqlite'), DEMO_DATA: 'false', NODE_ENV: 'test', LOG_LEVEL: 'error' },
+    env: {
+      ...process.env,
+      PORT: '0',
+      DATA_DIR: dataDir,
+      DATABASE: path.join(dataDir, 'bench.sqlite'),
+      DEMO_DATA: 'false',
+      NODE_ENV: 'test',
+      LOG_LEVEL: 'error',
+    },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
   const baseUrl = await new Promise<string>((resolve, reject) => {
@@ -37,7 +45,10 @@ export async function startBuiltApi(): Promise<{ baseUrl: string; stop: () => Pr
 }
 
 /** A bare node:http server answering every request with the same bytes: the ceiling to compare with. */
-export async function startBareServer(body: Buffer, contentType: string): Promise<{ url: string; stop: () => Promise<void> }> {
+export async function startBareServer(
+  body: Buffer,
+  contentType: string,
+): Promise<{ url: string; stop: () => Promise<void> }> {
   const server = http.createServer((_req, res) => {
     res.writeHead(200, { 'Content-Type': contentType, 'Content-Length': body.length });
     res.end(body);
@@ -49,11 +60,14 @@ export async function startBareServer(body: Buffer, contentType: string): Promis
 
 /** Requests per second on loopback, bounded in time; fails loudly if any request errored. */
 export async function measureThroughput(
-  url: string, seconds = 5, connections = 20,
+  url: string,
+  seconds = 5,
+  connections = 20,
   request: { method?: 'GET' | 'POST'; headers?: Record<string, string>; body?: string } = {},
 ): Promise<{ rps: number; p50Ms: number; p99Ms: number }> {
   const result = await autocannon({ url, connections, duration: seconds, pipelining: 1, ...request });
-  if (result.errors || result.non2xx) throw new Error(`${url}: ${result.errors} errors, ${result.non2xx} non-2xx answers`);
+  if (result.errors || result.non2xx)
+    throw new Error(`${url}: ${result.errors} errors, ${result.non2xx} non-2xx answers`);
   return { rps: result.requests.average, p50Ms: result.latency.p50, p99Ms: result.latency.p99 };
 }
 

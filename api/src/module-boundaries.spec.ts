@@ -7,7 +7,9 @@ const SRC = import.meta.dirname;
 /** Run-time (non-type) imports between top-level folders of src/, e.g. places → ecoregions. */
 function folderImports(): Map<string, Set<string>> {
   const edges = new Map<string, Set<string>>();
-  const files = readdirSync(SRC, { recursive: true, encoding: 'utf8' }).filter((f) => f.endsWith('.ts') && !f.endsWith('.spec.ts'));
+  const files = readdirSync(SRC, { recursive: true, encoding: 'utf8' }).filter(
+    (f) => f.endsWith('.ts') && !f.endsWith('.spec.ts'),
+  );
   for (const file of files) {
     const from = file.split(path.sep)[0];
     const text = readFileSync(path.join(SRC, file), 'utf8');
@@ -28,7 +30,9 @@ describe('module boundaries (run-time imports between src/ folders)', () => {
   const imports = (a: string, b: string) => edges.get(a)?.has(b) ?? false;
 
   it('has no two folders importing each other', () => {
-    const pairs = [...edges].flatMap(([a, targets]) => [...targets].filter((b) => a < b && imports(b, a)).map((b) => `${a} <-> ${b}`));
+    const pairs = [...edges].flatMap(([a, targets]) =>
+      [...targets].filter((b) => a < b && imports(b, a)).map((b) => `${a} <-> ${b}`),
+    );
     expect(pairs).toEqual([]);
   });
 

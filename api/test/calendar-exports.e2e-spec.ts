@@ -14,7 +14,10 @@ function parseIcs(text: string) {
 // The demo scenario: Larkfield, Wisconsin (Driftless Area), average last frost taken as 2027-05-10
 // for the example, plant share on the second Saturday of June (2027-06-12), planned on 2027-01-25.
 const body = {
-  lastFrost: '2027-05-10', today: '2027-01-25', targetDate: '2027-06-12', planId: 'larkfield-2027',
+  lastFrost: '2027-05-10',
+  today: '2027-01-25',
+  targetDate: '2027-06-12',
+  planId: 'larkfield-2027',
   plans: [
     { slug: 'monarda-fistulosa', method: 'winter-sowing' },
     { slug: 'asclepias-tuberosa', method: 'outdoor-pot-winter' },
@@ -31,17 +34,28 @@ describe('sowing calendar exports (e2e)', () => {
 
   it('JSON: plant-out after the 2-week frost watch; pale purple coneflower needs a second season (NPN-ECPA R)', async () => {
     const res = await t.http.post('/api/calendar').send(body).expect(200);
-    const plantOut = (slug: string) => res.body.events.find((e: { kind: string; speciesSlug: string }) => e.kind === 'plant-out' && e.speciesSlug === slug).date;
+    const plantOut = (slug: string) =>
+      res.body.events.find(
+        (e: { kind: string; speciesSlug: string }) => e.kind === 'plant-out' && e.speciesSlug === slug,
+      ).date;
     // Wild bergamot winter-sown 2027-01-15: sprouts 2027-04-10 (frost − 30 d, M) + 6 weeks = 05-22; watch ends 05-24.
     expect(plantOut('monarda-fistulosa')).toBe('2027-05-24');
     expect(plantOut('echinacea-pallida')).toBe('2028-05-24');
-    const kinds = res.body.warnings.filter((w: { speciesSlug: string }) => w.speciesSlug === 'echinacea-pallida').map((w: { kind: string }) => w.kind);
+    const kinds = res.body.warnings
+      .filter((w: { speciesSlug: string }) => w.speciesSlug === 'echinacea-pallida')
+      .map((w: { kind: string }) => w.kind);
     expect(kinds).toEqual(expect.arrayContaining(['second-season', 'target-too-early']));
-    expect(res.body.events.map((e: { kind: string }) => e.kind)).toEqual(expect.arrayContaining(['frost-watch-end', 'plant-share', 'label-pots', 'collect-pots']));
+    expect(res.body.events.map((e: { kind: string }) => e.kind)).toEqual(
+      expect.arrayContaining(['frost-watch-end', 'plant-share', 'label-pots', 'collect-pots']),
+    );
   });
 
   it('.ics: ical.js reads it; UIDs survive adding a species; every warning is in a description; lines ≤ 75 octets', async () => {
-    const first = await t.http.post('/api/calendar.ics').send(body).expect(200).expect('Content-Type', /text\/calendar/);
+    const first = await t.http
+      .post('/api/calendar.ics')
+      .send(body)
+      .expect(200)
+      .expect('Content-Type', /text\/calendar/);
     const more = { ...body, plans: [{ slug: 'schizachyrium-scoparium', method: 'outdoor-pot-winter' }, ...body.plans] };
     const second = await t.http.post('/api/calendar.ics').send(more).expect(200);
     const a = parseIcs(first.text);
@@ -65,7 +79,10 @@ describe('sowing calendar exports (e2e)', () => {
 
   it('a bad plan id is a 400 naming the field', async () => {
     for (const path of ['/api/calendar', '/api/calendar.ics', '/api/calendar.csv']) {
-      const bad = await t.http.post(path).send({ ...body, planId: 'has spaces/and slashes' }).expect(400);
+      const bad = await t.http
+        .post(path)
+        .send({ ...body, planId: 'has spaces/and slashes' })
+        .expect(400);
       const error = JSON.parse(bad.text) as { fields: { field: string }[] };
       expect(error.fields.map((f) => f.field)).toContain('planId');
     }

@@ -16,7 +16,9 @@ describe('group roles (e2e, demo data)', () => {
   it('shows the organiser role on /api/me and lets the organiser add a grower', async () => {
     const mara = await signIn(t, 'mara.ellsworth@example.org', 'larkfield-mara');
     const me = await t.http.get('/api/me').set('Authorization', `Bearer ${mara}`).expect(200);
-    expect(me.body.groups).toEqual([expect.objectContaining({ groupSlug: 'larkfield-commons-growers', role: 'organiser' })]);
+    expect(me.body.groups).toEqual([
+      expect.objectContaining({ groupSlug: 'larkfield-commons-growers', role: 'organiser' }),
+    ]);
 
     const added = await t.http
       .put('/api/groups/larkfield-commons-growers/members')
@@ -44,7 +46,9 @@ describe('group roles (e2e, demo data)', () => {
     const auth = t.app.get(AuthService);
     config.isProduction = true;
     try {
-      await expect(auth.login({ email: 'mara.ellsworth@example.org', password: 'larkfield-mara' })).rejects.toThrow(/wrong/);
+      await expect(auth.login({ email: 'mara.ellsworth@example.org', password: 'larkfield-mara' })).rejects.toThrow(
+        /wrong/,
+      );
     } finally {
       config.isProduction = false;
     }

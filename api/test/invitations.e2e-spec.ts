@@ -10,7 +10,11 @@ async function signIn(t: TestApp, email: string, password: string): Promise<stri
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
 /** The invitation link in the newest message to `to`, read from the outbox as the local mail server received it. */
-async function linkFromOutbox(t: TestApp, token: string, to: string): Promise<{ link: string; secret: string; subject: string; html: string | null }> {
+async function linkFromOutbox(
+  t: TestApp,
+  token: string,
+  to: string,
+): Promise<{ link: string; secret: string; subject: string; html: string | null }> {
   const res = await t.http.get('/api/outbox').query({ kind: 'invitation', to }).set(bearer(token)).expect(200);
   expect(res.body.length).toBeGreaterThan(0);
   const mail = res.body[0];
@@ -32,7 +36,11 @@ describe('group invitations and the local outbox (e2e, demo data)', () => {
   afterAll(() => t.close());
 
   it('e-mails a new person a link on the public address; the link makes their account and joins them as a grower', async () => {
-    const sent = await t.http.post(`${GROUP}/invitations`).set(bearer(mara)).send({ email: 'Rowan.Pell@example.org', role: 'grower' }).expect(201);
+    const sent = await t.http
+      .post(`${GROUP}/invitations`)
+      .set(bearer(mara))
+      .send({ email: 'Rowan.Pell@example.org', role: 'grower' })
+      .expect(201);
     expect(sent.body).toMatchObject({ email: 'rowan.pell@example.org', role: 'grower', acceptedAt: null });
     expect(JSON.stringify(sent.body)).not.toMatch(/token/i);
 
@@ -41,20 +49,40 @@ describe('group invitations and the local outbox (e2e, demo data)', () => {
     expect(mail.html).toContain(mail.link);
 
     const preview = await t.http.get(`/api/invitations/${mail.secret}`).expect(200);
-    expect(preview.body).toMatchObject({ groupName: 'Larkfield Commons Growers', role: 'grower', email: 'rowan.pell@example.org', accountExists: false });
+    expect(preview.body).toMatchObject({
+      groupName: 'Larkfield Commons Growers',
+      role: 'grower',
+      email: 'rowan.pell@example.org',
+      accountExists: false,
+    });
 
     // Without a name and password nothing is written: no account, and the link still works.
     const bad = await t.http.post(`/api/invitations/${mail.secret}/accept`).send({}).expect(400);
     expect(bad.body.fields.map((f: { field: string }) => f.field).sort()).toEqual(['displayName', 'password']);
-    await t.http.post('/api/auth/login').send({ email: 'rowan.pell@example.org', password: 'a-long-garden-password' }).expect(401);
+    await t.http
+      .post('/api/auth/login')
+      .send({ email: 'rowan.pell@example.org', password: 'a-long-garden-password' })
+      .expect(401);
 
-    const joined = await t.http.post(`/api/invitations/${mail.secret}/accept`).send({ displayName: 'Rowan Pell', password: 'a-long-garden-password' }).expect(200);
-    expect(joined.body.user.groups).toEqual([expect.objectContaining({ groupSlug: 'larkfield-commons-growers', role: 'grower' })]);
-    await t.http.post(`/api/invitations/${mail.secret}/accept`).send({ displayName: 'Rowan Again', password: 'another-long-password' }).expect(410);
+    const joined = await t.http
+      .post(`/api/invitations/${mail.secret}/accept`)
+      .send({ displayName: 'Rowan Pell', password: 'a-long-garden-password' })
+      .expect(200);
+    expect(joined.body.user.groups).toEqual([
+      expect.objectContaining({ groupSlug: 'larkfield-commons-growers', role: 'grower' }),
+    ]);
+    await t.http
+      .post(`/api/invitations/${mail.secret}/accept`)
+      .send({ displayName: 'Rowan Again', password: 'another-long-password' })
+      .expect(410);
   });
 
   it('lets an existing account accept only when signed in with the invited address', async () => {
-    await t.http.post(`${GROUP}/invitations`).set(bearer(mara)).send({ email: 'sol.marchetti@example.org', role: 'member' }).expect(201);
+    await t.http
+      .post(`${GROUP}/invitations`)
+      .set(bearer(mara))
+      .send({ email: 'sol.marchetti@example.org', role: 'member' })
+      .expect(201);
     const { secret } = await linkFromOutbox(t, mara, 'sol.marchetti@example.org');
     expect((await t.http.get(`/api/invitations/${secret}`).expect(200)).body.accountExists).toBe(true);
     await t.http.post(`/api/invitations/${secret}/accept`).send({}).expect(409);
@@ -63,11 +91,19 @@ describe('group invitations and the local outbox (e2e, demo data)', () => {
     const sol = await signIn(t, 'sol.marchetti@example.org', 'larkfield-sol');
     const joined = await t.http.post(`/api/invitations/${secret}/accept`).set(bearer(sol)).send({}).expect(200);
     expect(joined.body.user.groups).toEqual([expect.objectContaining({ role: 'member' })]);
-    await t.http.post(`${GROUP}/invitations`).set(bearer(mara)).send({ email: 'sol.marchetti@example.org', role: 'grower' }).expect(409);
+    await t.http
+      .post(`${GROUP}/invitations`)
+      .set(bearer(mara))
+      .send({ email: 'sol.marchetti@example.org', role: 'grower' })
+      .expect(409);
   });
 
   it('keeps invitations, the outbox and e-mail addresses to organisers and admins', async () => {
-    await t.http.post(`${GROUP}/invitations`).set(bearer(juniper)).send({ email: 'someone@example.org', role: 'grower' }).expect(403);
+    await t.http
+      .post(`${GROUP}/invitations`)
+      .set(bearer(juniper))
+      .send({ email: 'someone@example.org', role: 'grower' })
+      .expect(403);
     await t.http.get(`${GROUP}/invitations`).set(bearer(juniper)).expect(403);
     await t.http.get('/api/outbox').set(bearer(juniper)).expect(403);
     await t.http.get('/api/outbox').expect(401);
@@ -77,7 +113,9 @@ describe('group invitations and the local outbox (e2e, demo data)', () => {
     const seenByGrower = await t.http.get(`${GROUP}/members`).set(bearer(juniper)).expect(200);
     expect(seenByGrower.body.every((m: { email: string | null }) => m.email === null)).toBe(true);
     const seenByOrganiser = await t.http.get(`${GROUP}/members`).set(bearer(mara)).expect(200);
-    expect(seenByOrganiser.body.find((m: { displayName: string }) => m.displayName === 'Juniper Okafor').email).toBe('juniper.okafor@example.org');
+    expect(seenByOrganiser.body.find((m: { displayName: string }) => m.displayName === 'Juniper Okafor').email).toBe(
+      'juniper.okafor@example.org',
+    );
   });
 
   it('answers bad invitations with 400 naming the field, and writes nothing', async () => {
@@ -97,13 +135,18 @@ describe('group invitations and the local outbox (e2e, demo data)', () => {
   });
 
   it('lets organisers remove people, but never the last organiser', async () => {
-    const members = (await t.http.get(`${GROUP}/members`).set(bearer(mara)).expect(200)).body as { userId: string; displayName: string }[];
+    const members = (await t.http.get(`${GROUP}/members`).set(bearer(mara)).expect(200)).body as {
+      userId: string;
+      displayName: string;
+    }[];
     const sol = members.find((m) => m.displayName === 'Sol Marchetti')!;
     const maraId = members.find((m) => m.displayName === 'Mara Ellsworth')!.userId;
     await t.http.delete(`${GROUP}/members/${sol.userId}`).set(bearer(juniper)).expect(403);
     await t.http.delete(`${GROUP}/members/${sol.userId}`).set(bearer(mara)).expect(204);
     await t.http.delete(`${GROUP}/members/${maraId}`).set(bearer(mara)).expect(409);
-    const after = (await t.http.get(`${GROUP}/members`).set(bearer(mara)).expect(200)).body as { displayName: string }[];
+    const after = (await t.http.get(`${GROUP}/members`).set(bearer(mara)).expect(200)).body as {
+      displayName: string;
+    }[];
     expect(after.map((m) => m.displayName)).not.toContain('Sol Marchetti');
   });
 });

@@ -31,77 +31,428 @@ const huge = 'x'.repeat(100_000);
 const slugs = (n: number) => Array.from({ length: n }, (_, i) => `species-${i}`);
 const site = { sun: 'full', moisture: 'dry', areaSqFt: 500, deerPressure: 'medium', goals: ['pollinators'] };
 const region = { state: 'WI', ecoregionCode: '52' };
-const calendar = { lastFrost: '2027-05-10', today: '2026-10-01', plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }] };
+const calendar = {
+  lastFrost: '2027-05-10',
+  today: '2026-10-01',
+  plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }],
+};
 const record = loadCatalogue().species[0];
 const newRecord = { ...record, slug: 'malformed-test-species' };
-const square = [[-90, 43], [-89, 43], [-89, 44], [-90, 43]];
+const square = [
+  [-90, 43],
+  [-89, 43],
+  [-89, 44],
+  [-90, 43],
+];
 const collection = (geometry: unknown, properties: unknown = { US_L3CODE: '52', US_L3NAME: 'Driftless Area' }) =>
   JSON.stringify({ type: 'FeatureCollection', features: [{ type: 'Feature', properties, geometry }] });
 
 const cases: Case[] = [
   // sign-up and sign-in
-  { what: 'register nested 2,000 levels deep', method: 'post', url: '/api/auth/register', raw: `{"email":${deep(2000)}}`, field: 'body' },
-  { what: 'register with a 100,000-character e-mail', method: 'post', url: '/api/auth/register', body: { email: `${huge}@example.org`, password: 'correct-horse-battery', displayName: 'A' }, field: 'email' },
-  { what: 'register with a number for a name', method: 'post', url: '/api/auth/register', body: { email: 'a@example.org', password: 'correct-horse-battery', displayName: 42 }, field: 'displayName' },
-  { what: 'register with an unknown field', method: 'post', url: '/api/auth/register', body: { email: 'a@example.org', password: 'correct-horse-battery', displayName: 'A', isAdmin: true }, field: 'isAdmin' },
-  { what: 'register with a __proto__ key', method: 'post', url: '/api/auth/register', raw: '{"email":"a@example.org","password":"correct-horse-battery","displayName":"A","__proto__":{"role":"admin"}}', field: '__proto__' },
-  { what: 'register with a constructor key', method: 'post', url: '/api/auth/register', raw: '{"email":"a@example.org","password":"correct-horse-battery","displayName":"A","constructor":{"prototype":{}}}', field: 'constructor' },
+  {
+    what: 'register nested 2,000 levels deep',
+    method: 'post',
+    url: '/api/auth/register',
+    raw: `{"email":${deep(2000)}}`,
+    field: 'body',
+  },
+  {
+    what: 'register with a 100,000-character e-mail',
+    method: 'post',
+    url: '/api/auth/register',
+    body: { email: `${huge}@example.org`, password: 'correct-horse-battery', displayName: 'A' },
+    field: 'email',
+  },
+  {
+    what: 'register with a number for a name',
+    method: 'post',
+    url: '/api/auth/register',
+    body: { email: 'a@example.org', password: 'correct-horse-battery', displayName: 42 },
+    field: 'displayName',
+  },
+  {
+    what: 'register with an unknown field',
+    method: 'post',
+    url: '/api/auth/register',
+    body: { email: 'a@example.org', password: 'correct-horse-battery', displayName: 'A', isAdmin: true },
+    field: 'isAdmin',
+  },
+  {
+    what: 'register with a __proto__ key',
+    method: 'post',
+    url: '/api/auth/register',
+    raw: '{"email":"a@example.org","password":"correct-horse-battery","displayName":"A","__proto__":{"role":"admin"}}',
+    field: '__proto__',
+  },
+  {
+    what: 'register with a constructor key',
+    method: 'post',
+    url: '/api/auth/register',
+    raw: '{"email":"a@example.org","password":"correct-horse-battery","displayName":"A","constructor":{"prototype":{}}}',
+    field: 'constructor',
+  },
   { what: 'register with an array body', method: 'post', url: '/api/auth/register', body: [1, 2], field: 'body' },
-  { what: 'sign-in nested 2,000 levels deep', method: 'post', url: '/api/auth/login', raw: `{"password":${deep(2000)}}`, field: 'body' },
-  { what: 'sign-in with a 10,000-character password', method: 'post', url: '/api/auth/login', body: { email: 'a@example.org', password: huge.slice(0, 10_000) }, field: 'password' },
-  { what: 'sign-in with an array for an e-mail', method: 'post', url: '/api/auth/login', body: { email: ['a@example.org'], password: 'x' }, field: 'email' },
+  {
+    what: 'sign-in nested 2,000 levels deep',
+    method: 'post',
+    url: '/api/auth/login',
+    raw: `{"password":${deep(2000)}}`,
+    field: 'body',
+  },
+  {
+    what: 'sign-in with a 10,000-character password',
+    method: 'post',
+    url: '/api/auth/login',
+    body: { email: 'a@example.org', password: huge.slice(0, 10_000) },
+    field: 'password',
+  },
+  {
+    what: 'sign-in with an array for an e-mail',
+    method: 'post',
+    url: '/api/auth/login',
+    body: { email: ['a@example.org'], password: 'x' },
+    field: 'email',
+  },
   { what: 'invalid JSON', method: 'post', url: '/api/auth/login', raw: '{"email":', field: 'body' },
-  { what: 'a sign-in form nested 2,000 levels deep', method: 'post', url: '/api/auth/login', form: `email${'[a]'.repeat(2000)}=x&password=y`, field: 'body' },
+  {
+    what: 'a sign-in form nested 2,000 levels deep',
+    method: 'post',
+    url: '/api/auth/login',
+    form: `email${'[a]'.repeat(2000)}=x&password=y`,
+    field: 'body',
+  },
   // people and groups
-  { what: 'a role that does not exist', method: 'patch', url: `/api/users/${UUID}/role`, body: { role: 'superuser' }, field: 'role' },
-  { what: 'a user id that is not a UUID', method: 'patch', url: '/api/users/42/role', body: { role: 'curator' }, field: 'id' },
-  { what: 'a role nested 2,000 levels deep', method: 'patch', url: `/api/users/${UUID}/role`, raw: `{"role":${deep(2000)}}`, field: 'body' },
-  { what: 'a role change with an unknown field', method: 'patch', url: `/api/users/${UUID}/role`, body: { role: 'curator', email: 'a@example.org' }, field: 'email' },
-  { what: 'a member with a 100,000-character e-mail', method: 'put', url: '/api/groups/larkfield-commons-growers/members', body: { email: `${huge}@example.org`, role: 'grower' }, field: 'email' },
-  { what: 'a member role that does not exist', method: 'put', url: '/api/groups/larkfield-commons-growers/members', body: { email: 'a@example.org', role: 'owner' }, field: 'role' },
-  { what: 'a group slug with capitals and underscores', method: 'put', url: '/api/groups/Larkfield_Growers/members', body: { email: 'a@example.org', role: 'grower' }, field: 'slug' },
-  { what: 'a member with a __proto__ key', method: 'put', url: '/api/groups/larkfield-commons-growers/members', raw: '{"email":"a@example.org","role":"grower","__proto__":{"isAdmin":true}}', field: '__proto__' },
-  { what: 'members nested 2,000 levels deep', method: 'put', url: '/api/groups/larkfield-commons-growers/members', raw: deep(2000), field: 'body' },
+  {
+    what: 'a role that does not exist',
+    method: 'patch',
+    url: `/api/users/${UUID}/role`,
+    body: { role: 'superuser' },
+    field: 'role',
+  },
+  {
+    what: 'a user id that is not a UUID',
+    method: 'patch',
+    url: '/api/users/42/role',
+    body: { role: 'curator' },
+    field: 'id',
+  },
+  {
+    what: 'a role nested 2,000 levels deep',
+    method: 'patch',
+    url: `/api/users/${UUID}/role`,
+    raw: `{"role":${deep(2000)}}`,
+    field: 'body',
+  },
+  {
+    what: 'a role change with an unknown field',
+    method: 'patch',
+    url: `/api/users/${UUID}/role`,
+    body: { role: 'curator', email: 'a@example.org' },
+    field: 'email',
+  },
+  {
+    what: 'a member with a 100,000-character e-mail',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/members',
+    body: { email: `${huge}@example.org`, role: 'grower' },
+    field: 'email',
+  },
+  {
+    what: 'a member role that does not exist',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/members',
+    body: { email: 'a@example.org', role: 'owner' },
+    field: 'role',
+  },
+  {
+    what: 'a group slug with capitals and underscores',
+    method: 'put',
+    url: '/api/groups/Larkfield_Growers/members',
+    body: { email: 'a@example.org', role: 'grower' },
+    field: 'slug',
+  },
+  {
+    what: 'a member with a __proto__ key',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/members',
+    raw: '{"email":"a@example.org","role":"grower","__proto__":{"isAdmin":true}}',
+    field: '__proto__',
+  },
+  {
+    what: 'members nested 2,000 levels deep',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/members',
+    raw: deep(2000),
+    field: 'body',
+  },
   // the engine
-  { what: 'an area as text', method: 'post', url: '/api/recommendations', body: { site: { ...site, areaSqFt: '500' }, region }, field: 'site.areaSqFt' },
-  { what: 'an unknown site field', method: 'post', url: '/api/recommendations', body: { site: { ...site, colour: 'blue' }, region }, field: 'site.colour' },
-  { what: 'an ecoregion code out of range', method: 'post', url: '/api/recommendations', body: { site, region: { ...region, ecoregionCode: '99' } }, field: 'region.ecoregionCode' },
-  { what: 'more than 60 locked species', method: 'post', url: '/api/mixes/balance', body: { site, region, options: { locked: slugs(61) } }, field: 'options.locked' },
-  { what: 'a 100,000-character excluded slug', method: 'post', url: '/api/mixes/balance', body: { site, region, options: { excluded: [huge] } }, field: 'options.excluded.0' },
-  { what: 'mix options nested 2,000 levels deep', method: 'post', url: '/api/mixes/balance', raw: `{"options":${deep(2000)}}`, field: 'body' },
-  { what: 'alternatives with chosen as text', method: 'post', url: '/api/mixes/alternatives', body: { site, region, chosen: 'zizia-aurea', slot: 'zizia-aurea' }, field: 'chosen' },
-  { what: 'alternatives without a slot', method: 'post', url: '/api/mixes/alternatives', body: { site, region, chosen: ['zizia-aurea'] }, field: 'slot' },
-  { what: 'a saved mix with a 10,000-character name', method: 'post', url: '/api/mixes', body: { name: huge.slice(0, 10_000), request: { site, region }, chosen: ['zizia-aurea'] }, field: 'name' },
-  { what: 'a saved mix of 61 species', method: 'post', url: '/api/mixes', body: { name: 'Too many', request: { site, region }, chosen: slugs(61) }, field: 'chosen' },
-  { what: 'a saved mix with a constructor key', method: 'post', url: '/api/mixes', raw: JSON.stringify({ name: 'Mix', request: { site, region }, chosen: ['zizia-aurea'] }).replace(/^\{/, '{"constructor":1,'), field: 'constructor' },
-  { what: 'a saved mix with a __proto__ key inside the site', method: 'post', url: '/api/mixes', raw: JSON.stringify({ name: 'Mix', request: { site, region }, chosen: ['zizia-aurea'] }).replace('"sun"', '"__proto__":{"polluted":true},"sun"'), field: 'request.site.__proto__' },
-  { what: 'an area of a billion m²', method: 'post', url: '/api/quantities', body: { areaSqM: 1e9, species: [{ slug: 'zizia-aurea' }] }, field: 'areaSqM' },
-  { what: 'quantities for 61 species', method: 'post', url: '/api/quantities', body: { areaSqFt: 100, species: slugs(61).map((slug) => ({ slug })) }, field: 'species' },
-  { what: 'a spacing as text', method: 'post', url: '/api/quantities', body: { areaSqFt: 100, species: [{ slug: 'zizia-aurea', spacingIn: '12' }] }, field: 'species.0.spacingIn' },
-  { what: 'a calendar in the year 9999', method: 'post', url: '/api/calendar', body: { ...calendar, lastFrost: '9999-05-10' }, field: 'lastFrost' },
-  { what: 'a CSV calendar plan with an unknown field', method: 'post', url: '/api/calendar.csv', body: { ...calendar, plans: [{ ...calendar.plans[0], colour: 'red' }] }, field: 'plans.0.colour' },
-  { what: 'an iCalendar in the year 9999', method: 'post', url: '/api/calendar.ics', body: { ...calendar, lastFrost: '9999-05-10' }, field: 'lastFrost' },
-  { what: 'a plant-share date in the year 9999', method: 'post', url: '/api/calendar.ics', body: { ...calendar, targetDate: '9999-06-01' }, field: 'targetDate' },
-  { what: 'a calendar of 201 plans', method: 'post', url: '/api/calendar', body: { ...calendar, plans: Array.from({ length: 201 }, () => calendar.plans[0]) }, field: 'plans' },
+  {
+    what: 'an area as text',
+    method: 'post',
+    url: '/api/recommendations',
+    body: { site: { ...site, areaSqFt: '500' }, region },
+    field: 'site.areaSqFt',
+  },
+  {
+    what: 'an unknown site field',
+    method: 'post',
+    url: '/api/recommendations',
+    body: { site: { ...site, colour: 'blue' }, region },
+    field: 'site.colour',
+  },
+  {
+    what: 'an ecoregion code out of range',
+    method: 'post',
+    url: '/api/recommendations',
+    body: { site, region: { ...region, ecoregionCode: '99' } },
+    field: 'region.ecoregionCode',
+  },
+  {
+    what: 'more than 60 locked species',
+    method: 'post',
+    url: '/api/mixes/balance',
+    body: { site, region, options: { locked: slugs(61) } },
+    field: 'options.locked',
+  },
+  {
+    what: 'a 100,000-character excluded slug',
+    method: 'post',
+    url: '/api/mixes/balance',
+    body: { site, region, options: { excluded: [huge] } },
+    field: 'options.excluded.0',
+  },
+  {
+    what: 'mix options nested 2,000 levels deep',
+    method: 'post',
+    url: '/api/mixes/balance',
+    raw: `{"options":${deep(2000)}}`,
+    field: 'body',
+  },
+  {
+    what: 'alternatives with chosen as text',
+    method: 'post',
+    url: '/api/mixes/alternatives',
+    body: { site, region, chosen: 'zizia-aurea', slot: 'zizia-aurea' },
+    field: 'chosen',
+  },
+  {
+    what: 'alternatives without a slot',
+    method: 'post',
+    url: '/api/mixes/alternatives',
+    body: { site, region, chosen: ['zizia-aurea'] },
+    field: 'slot',
+  },
+  {
+    what: 'a saved mix with a 10,000-character name',
+    method: 'post',
+    url: '/api/mixes',
+    body: { name: huge.slice(0, 10_000), request: { site, region }, chosen: ['zizia-aurea'] },
+    field: 'name',
+  },
+  {
+    what: 'a saved mix of 61 species',
+    method: 'post',
+    url: '/api/mixes',
+    body: { name: 'Too many', request: { site, region }, chosen: slugs(61) },
+    field: 'chosen',
+  },
+  {
+    what: 'a saved mix with a constructor key',
+    method: 'post',
+    url: '/api/mixes',
+    raw: JSON.stringify({ name: 'Mix', request: { site, region }, chosen: ['zizia-aurea'] }).replace(
+      /^\{/,
+      '{"constructor":1,',
+    ),
+    field: 'constructor',
+  },
+  {
+    what: 'a saved mix with a __proto__ key inside the site',
+    method: 'post',
+    url: '/api/mixes',
+    raw: JSON.stringify({ name: 'Mix', request: { site, region }, chosen: ['zizia-aurea'] }).replace(
+      '"sun"',
+      '"__proto__":{"polluted":true},"sun"',
+    ),
+    field: 'request.site.__proto__',
+  },
+  {
+    what: 'an area of a billion m²',
+    method: 'post',
+    url: '/api/quantities',
+    body: { areaSqM: 1e9, species: [{ slug: 'zizia-aurea' }] },
+    field: 'areaSqM',
+  },
+  {
+    what: 'quantities for 61 species',
+    method: 'post',
+    url: '/api/quantities',
+    body: { areaSqFt: 100, species: slugs(61).map((slug) => ({ slug })) },
+    field: 'species',
+  },
+  {
+    what: 'a spacing as text',
+    method: 'post',
+    url: '/api/quantities',
+    body: { areaSqFt: 100, species: [{ slug: 'zizia-aurea', spacingIn: '12' }] },
+    field: 'species.0.spacingIn',
+  },
+  {
+    what: 'a calendar in the year 9999',
+    method: 'post',
+    url: '/api/calendar',
+    body: { ...calendar, lastFrost: '9999-05-10' },
+    field: 'lastFrost',
+  },
+  {
+    what: 'a CSV calendar plan with an unknown field',
+    method: 'post',
+    url: '/api/calendar.csv',
+    body: { ...calendar, plans: [{ ...calendar.plans[0], colour: 'red' }] },
+    field: 'plans.0.colour',
+  },
+  {
+    what: 'an iCalendar in the year 9999',
+    method: 'post',
+    url: '/api/calendar.ics',
+    body: { ...calendar, lastFrost: '9999-05-10' },
+    field: 'lastFrost',
+  },
+  {
+    what: 'a plant-share date in the year 9999',
+    method: 'post',
+    url: '/api/calendar.ics',
+    body: { ...calendar, targetDate: '9999-06-01' },
+    field: 'targetDate',
+  },
+  {
+    what: 'a calendar of 201 plans',
+    method: 'post',
+    url: '/api/calendar',
+    body: { ...calendar, plans: Array.from({ length: 201 }, () => calendar.plans[0]) },
+    field: 'plans',
+  },
   // the catalogue
-  { what: 'a species with 31 common names', method: 'post', url: '/api/species', body: { ...newRecord, commonNames: Array.from({ length: 31 }, (_, i) => `Name ${i}`) }, field: 'commonNames' },
-  { what: 'a species with an unknown field', method: 'post', url: '/api/species', body: { ...newRecord, colour: 'blue' }, field: 'colour' },
-  { what: 'a species height as text', method: 'post', url: '/api/species', body: { ...newRecord, heightCm: '30-90' }, field: 'heightCm' },
-  { what: 'a species edit at a malformed slug', method: 'put', url: '/api/species/Not%20A%20Slug', body: record, field: 'slug' },
-  { what: 'a species edit with a __proto__ key in wildlife', method: 'put', url: `/api/species/${record.slug}`, raw: JSON.stringify(record).replace('"wildlife":{', '"wildlife":{"__proto__":{"x":1},'), field: 'wildlife.__proto__' },
-  { what: 'a species edit nested 2,000 levels deep', method: 'put', url: `/api/species/${record.slug}`, raw: `{"synonyms":${deep(2000)}}`, field: 'body' },
+  {
+    what: 'a species with 31 common names',
+    method: 'post',
+    url: '/api/species',
+    body: { ...newRecord, commonNames: Array.from({ length: 31 }, (_, i) => `Name ${i}`) },
+    field: 'commonNames',
+  },
+  {
+    what: 'a species with an unknown field',
+    method: 'post',
+    url: '/api/species',
+    body: { ...newRecord, colour: 'blue' },
+    field: 'colour',
+  },
+  {
+    what: 'a species height as text',
+    method: 'post',
+    url: '/api/species',
+    body: { ...newRecord, heightCm: '30-90' },
+    field: 'heightCm',
+  },
+  {
+    what: 'a species edit at a malformed slug',
+    method: 'put',
+    url: '/api/species/Not%20A%20Slug',
+    body: record,
+    field: 'slug',
+  },
+  {
+    what: 'a species edit with a __proto__ key in wildlife',
+    method: 'put',
+    url: `/api/species/${record.slug}`,
+    raw: JSON.stringify(record).replace('"wildlife":{', '"wildlife":{"__proto__":{"x":1},'),
+    field: 'wildlife.__proto__',
+  },
+  {
+    what: 'a species edit nested 2,000 levels deep',
+    method: 'put',
+    url: `/api/species/${record.slug}`,
+    raw: `{"synonyms":${deep(2000)}}`,
+    field: 'body',
+  },
   { what: 'a CSV import without a file', method: 'post', url: '/api/species/import', body: {}, field: 'file' },
-  { what: 'a CSV import in the wrong form field', method: 'post', url: '/api/species/import', upload: { field: 'csv', contents: 'slug\n' }, field: 'csv' },
-  { what: 'a photo without a file', method: 'post', url: `/api/species/${record.slug}/photo`, body: {}, field: 'photo' },
-  { what: 'a photo for a malformed slug', method: 'post', url: '/api/species/..%2F..%2Fetc/photo', upload: { field: 'photo', contents: 'x' }, field: 'slug' },
+  {
+    what: 'a CSV import in the wrong form field',
+    method: 'post',
+    url: '/api/species/import',
+    upload: { field: 'csv', contents: 'slug\n' },
+    field: 'csv',
+  },
+  {
+    what: 'a photo without a file',
+    method: 'post',
+    url: `/api/species/${record.slug}/photo`,
+    body: {},
+    field: 'photo',
+  },
+  {
+    what: 'a photo for a malformed slug',
+    method: 'post',
+    url: '/api/species/..%2F..%2Fetc/photo',
+    upload: { field: 'photo', contents: 'x' },
+    field: 'slug',
+  },
   // boundary polygons
-  { what: 'a boundary without coordinates', method: 'post', url: '/api/ecoregions/boundaries', upload: { field: 'file', contents: collection({ type: 'Polygon', coordinates: null }) }, field: 'features[0].geometry.coordinates' },
-  { what: 'a boundary ring of text', method: 'post', url: '/api/ecoregions/boundaries', upload: { field: 'file', contents: collection({ type: 'Polygon', coordinates: [[square[0], ['a', 'b'], square[2], square[0]]] }) }, field: 'features[0].geometry.coordinates[0][1]' },
-  { what: 'a multipolygon holding null', method: 'post', url: '/api/ecoregions/boundaries', upload: { field: 'file', contents: collection({ type: 'MultiPolygon', coordinates: [null] }) }, field: 'features[0].geometry.coordinates[0]' },
-  { what: 'a multipolygon whose rings are numbers', method: 'post', url: '/api/ecoregions/boundaries', upload: { field: 'file', contents: collection({ type: 'MultiPolygon', coordinates: [[1, 2]] }) }, field: 'features[0].geometry[0].coordinates[0]' },
-  { what: 'a boundary code that cannot be text', method: 'post', url: '/api/ecoregions/boundaries', upload: { field: 'file', contents: collection({ type: 'Polygon', coordinates: [square] }, { US_L3CODE: { toString: 1 }, US_L3NAME: 'X' }) }, field: 'features[0].properties.US_L3CODE' },
-  { what: 'a boundary file nested 2,000 levels deep', method: 'post', url: '/api/ecoregions/boundaries', upload: { field: 'file', contents: `{"type":"FeatureCollection","features":${deep(2000)}}` }, field: 'file' },
-  { what: 'a null feature', method: 'post', url: '/api/ecoregions/boundaries', upload: { field: 'file', contents: '{"type":"FeatureCollection","features":[null]}' }, field: 'features[0].geometry' },
+  {
+    what: 'a boundary without coordinates',
+    method: 'post',
+    url: '/api/ecoregions/boundaries',
+    upload: { field: 'file', contents: collection({ type: 'Polygon', coordinates: null }) },
+    field: 'features[0].geometry.coordinates',
+  },
+  {
+    what: 'a boundary ring of text',
+    method: 'post',
+    url: '/api/ecoregions/boundaries',
+    upload: {
+      field: 'file',
+      contents: collection({ type: 'Polygon', coordinates: [[square[0], ['a', 'b'], square[2], square[0]]] }),
+    },
+    field: 'features[0].geometry.coordinates[0][1]',
+  },
+  {
+    what: 'a multipolygon holding null',
+    method: 'post',
+    url: '/api/ecoregions/boundaries',
+    upload: { field: 'file', contents: collection({ type: 'MultiPolygon', coordinates: [null] }) },
+    field: 'features[0].geometry.coordinates[0]',
+  },
+  {
+    what: 'a multipolygon whose rings are numbers',
+    method: 'post',
+    url: '/api/ecoregions/boundaries',
+    upload: { field: 'file', contents: collection({ type: 'MultiPolygon', coordinates: [[1, 2]] }) },
+    field: 'features[0].geometry[0].coordinates[0]',
+  },
+  {
+    what: 'a boundary code that cannot be text',
+    method: 'post',
+    url: '/api/ecoregions/boundaries',
+    upload: {
+      field: 'file',
+      contents: collection({ type: 'Polygon', coordinates: [square] }, { US_L3CODE: { toString: 1 }, US_L3NAME: 'X' }),
+    },
+    field: 'features[0].properties.US_L3CODE',
+  },
+  {
+    what: 'a boundary file nested 2,000 levels deep',
+    method: 'post',
+    url: '/api/ecoregions/boundaries',
+    upload: { field: 'file', contents: `{"type":"FeatureCollection","features":${deep(2000)}}` },
+    field: 'file',
+  },
+  {
+    what: 'a null feature',
+    method: 'post',
+    url: '/api/ecoregions/boundaries',
+    upload: { field: 'file', contents: '{"type":"FeatureCollection","features":[null]}' },
+    field: 'features[0].geometry',
+  },
   // queries
   { what: 'a page size of a billion', method: 'get', url: '/api/species?pageSize=1000000000', field: 'pageSize' },
   { what: 'a 5,000-character search', method: 'get', url: `/api/species?q=${huge.slice(0, 5000)}`, field: 'q' },
@@ -112,7 +463,13 @@ const cases: Case[] = [
   { what: 'a photo width not offered', method: 'get', url: `/api/species/${record.slug}/photo?w=123`, field: 'w' },
   { what: 'a saved mix link that is not a UUID', method: 'get', url: '/api/mixes/not-a-uuid', field: 'id' },
   { what: 'a query on a route that reads none', method: 'get', url: '/api/groups?admin=true', field: 'admin' },
-  { what: 'a body on a route that reads none', method: 'delete', url: '/api/ecoregions/boundaries', body: { keep: '52' }, field: 'keep' },
+  {
+    what: 'a body on a route that reads none',
+    method: 'delete',
+    url: '/api/ecoregions/boundaries',
+    body: { keep: '52' },
+    field: 'keep',
+  },
 ];
 
 describe('malformed input on every writing route (e2e)', () => {
@@ -143,7 +500,18 @@ describe('malformed input on every writing route (e2e)', () => {
 
   it('has at least 30 cases across every writing route', () => {
     expect(cases.length).toBeGreaterThanOrEqual(30);
-    const routes = new Set(cases.filter((c) => c.method !== 'get').map((c) => `${c.method} ${c.url.split('?')[0].replace(/\/species\/(?!import)[^/]+/, '/species/:slug').replace(/\/users\/[^/]+/, '/users/:id').replace(/\/groups\/[^/]+/, '/groups/:slug')}`));
+    const routes = new Set(
+      cases
+        .filter((c) => c.method !== 'get')
+        .map(
+          (c) =>
+            `${c.method} ${c.url
+              .split('?')[0]
+              .replace(/\/species\/(?!import)[^/]+/, '/species/:slug')
+              .replace(/\/users\/[^/]+/, '/users/:id')
+              .replace(/\/groups\/[^/]+/, '/groups/:slug')}`,
+        ),
+    );
     expect([...routes].sort()).toEqual([
       'delete /api/ecoregions/boundaries',
       'patch /api/users/:id/role',
@@ -166,17 +534,27 @@ describe('malformed input on every writing route (e2e)', () => {
     ]);
   });
 
-  it.each(cases.map((c) => [c.what, c] as const))('answers %s with 400 naming the field, writing nothing', async (_what, c) => {
-    const before = await snapshot();
-    let req = t.http[c.method](c.url).set('Authorization', `Bearer ${admin}`);
-    if (c.raw !== undefined) req = req.set('Content-Type', 'application/json').send(c.raw);
-    else if (c.form !== undefined) req = req.set('Content-Type', 'application/x-www-form-urlencoded').send(c.form);
-    else if (c.upload) req = req.attach(c.upload.field, Buffer.from(c.upload.contents), { filename: 'upload.txt', contentType: 'text/plain' });
-    else if (c.body !== undefined) req = req.send(c.body as object);
-    const res = await req;
-    expect({ status: res.status, body: res.body }).toMatchObject({ status: 400, body: { statusCode: 400, error: 'Bad Request' } });
-    expect(res.body.fields.map((f: { field: string }) => f.field)).toContain(c.field);
-    for (const f of res.body.fields) expect(f.message.length).toBeGreaterThan(3);
-    expect(await snapshot()).toEqual(before);
-  });
+  it.each(cases.map((c) => [c.what, c] as const))(
+    'answers %s with 400 naming the field, writing nothing',
+    async (_what, c) => {
+      const before = await snapshot();
+      let req = t.http[c.method](c.url).set('Authorization', `Bearer ${admin}`);
+      if (c.raw !== undefined) req = req.set('Content-Type', 'application/json').send(c.raw);
+      else if (c.form !== undefined) req = req.set('Content-Type', 'application/x-www-form-urlencoded').send(c.form);
+      else if (c.upload)
+        req = req.attach(c.upload.field, Buffer.from(c.upload.contents), {
+          filename: 'upload.txt',
+          contentType: 'text/plain',
+        });
+      else if (c.body !== undefined) req = req.send(c.body as object);
+      const res = await req;
+      expect({ status: res.status, body: res.body }).toMatchObject({
+        status: 400,
+        body: { statusCode: 400, error: 'Bad Request' },
+      });
+      expect(res.body.fields.map((f: { field: string }) => f.field)).toContain(c.field);
+      for (const f of res.body.fields) expect(f.message.length).toBeGreaterThan(3);
+      expect(await snapshot()).toEqual(before);
+    },
+  );
 });

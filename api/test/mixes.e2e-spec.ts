@@ -3,7 +3,13 @@ import { loadCatalogue } from '@homeground/species-data';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
 
 const DRIFTLESS = { state: 'WI', ecoregionCode: '52' };
-const sunnyDry = { sun: 'full', moisture: 'dry', areaSqFt: 500, deerPressure: 'medium', goals: ['monarchs', 'pollinators'] };
+const sunnyDry = {
+  sun: 'full',
+  moisture: 'dry',
+  areaSqFt: 500,
+  deerPressure: 'medium',
+  goals: ['monarchs', 'pollinators'],
+};
 
 describe('recommendations, mixes, quantities and calendar (e2e)', () => {
   let t: TestApp;
@@ -32,20 +38,27 @@ describe('recommendations, mixes, quantities and calendar (e2e)', () => {
     expect(palette.chosen.length).toBe(palette.size);
     expect(palette.chosen.some((c: { slug: string }) => c.slug.startsWith('asclepias-'))).toBe(true);
     const ids = palette.constraints.map((c: { id: string }) => c.id);
-    expect(ids).toEqual(expect.arrayContaining(['cp42-early', 'cp42-mid', 'cp42-late', 'cp42-flowering', 'monarch-milkweed']));
+    expect(ids).toEqual(
+      expect.arrayContaining(['cp42-early', 'cp42-mid', 'cp42-late', 'cp42-flowering', 'monarch-milkweed']),
+    );
     for (const c of palette.constraints) expect(typeof c.met).toBe('boolean');
     expect(palette.constraints.find((c: { id: string }) => c.id === 'monarch-milkweed').met).toBe(true);
-    expect(quantities.map((q: { slug: string }) => q.slug).sort()).toEqual(palette.chosen.map((c: { slug: string }) => c.slug).sort());
+    expect(quantities.map((q: { slug: string }) => q.slug).sort()).toEqual(
+      palette.chosen.map((c: { slug: string }) => c.slug).sort(),
+    );
     expect(Object.keys(species).sort()).toEqual(palette.chosen.map((c: { slug: string }) => c.slug).sort());
   });
 
   it('keeps locked species, leaves excluded ones out, and offers alternatives for a slot', async () => {
-    const first = (await t.http.post('/api/mixes/balance').send({ site: sunnyDry, region: DRIFTLESS }).expect(200)).body.palette;
+    const first = (await t.http.post('/api/mixes/balance').send({ site: sunnyDry, region: DRIFTLESS }).expect(200)).body
+      .palette;
     const [keep, drop] = first.chosen.map((c: { slug: string }) => c.slug);
-    const next = (await t.http
-      .post('/api/mixes/balance')
-      .send({ site: sunnyDry, region: DRIFTLESS, options: { locked: [keep], excluded: [drop] } })
-      .expect(200)).body.palette;
+    const next = (
+      await t.http
+        .post('/api/mixes/balance')
+        .send({ site: sunnyDry, region: DRIFTLESS, options: { locked: [keep], excluded: [drop] } })
+        .expect(200)
+    ).body.palette;
     const slugs = next.chosen.map((c: { slug: string }) => c.slug);
     expect(slugs).toContain(keep);
     expect(slugs).not.toContain(drop);
@@ -75,14 +88,22 @@ describe('recommendations, mixes, quantities and calendar (e2e)', () => {
     const chosen = mix.chosen.map((c: { slug: string }) => c.slug);
     await t.http.post('/api/mixes').send({ name: 'Front yard', request, chosen }).expect(401);
     const priya = await registerUser(t, { email: 'priya.vantongeren@example.org', displayName: 'Priya Vantongeren' });
-    const saved = await t.http.post('/api/mixes').set('Authorization', `Bearer ${priya.token}`).send({ name: 'Front yard', request, chosen }).expect(201);
+    const saved = await t.http
+      .post('/api/mixes')
+      .set('Authorization', `Bearer ${priya.token}`)
+      .send({ name: 'Front yard', request, chosen })
+      .expect(201);
     const opened = await t.http.get(`/api/mixes/${saved.body.id}`).expect(200);
     expect(opened.body).toMatchObject({ name: 'Front yard', chosen, ownerName: 'Priya Vantongeren' });
     const sol = await registerUser(t, { email: 'sol.marchetti@example.org' });
     await t.http.delete(`/api/mixes/${saved.body.id}`).set('Authorization', `Bearer ${sol.token}`).expect(403);
     await t.http.delete(`/api/mixes/${saved.body.id}`).set('Authorization', `Bearer ${priya.token}`).expect(204);
     await t.http.get(`/api/mixes/${saved.body.id}`).expect(404);
-    const bad = await t.http.post('/api/mixes').set('Authorization', `Bearer ${priya.token}`).send({ name: '', request, chosen: ['no-such-plant'] }).expect(400);
+    const bad = await t.http
+      .post('/api/mixes')
+      .set('Authorization', `Bearer ${priya.token}`)
+      .send({ name: '', request, chosen: ['no-such-plant'] })
+      .expect(400);
     expect(bad.body.fields.map((f: { field: string }) => f.field)).toContain('name');
   });
 
@@ -94,24 +115,44 @@ describe('recommendations, mixes, quantities and calendar (e2e)', () => {
       .expect(200);
     // 12 in on centre = 1 plant/ft² (144 ÷ 12², geometry); seeds = plants ÷ (germination × (1 − loss)).
     expect(res.body[0]).toMatchObject({ plants: 100, spacingIn: 12 });
-    expect(res.body[0].seedsToSow).toBe(Math.ceil(100 / ((milkweed.germination.germinationRatePct / 100) * 0.8) - 1e-9));
-    const metric = await t.http.post('/api/quantities').send({ areaSqM: 9.290304, species: [{ slug: 'asclepias-tuberosa', spacingIn: 12 }] }).expect(200);
+    expect(res.body[0].seedsToSow).toBe(
+      Math.ceil(100 / ((milkweed.germination.germinationRatePct / 100) * 0.8) - 1e-9),
+    );
+    const metric = await t.http
+      .post('/api/quantities')
+      .send({ areaSqM: 9.290304, species: [{ slug: 'asclepias-tuberosa', spacingIn: 12 }] })
+      .expect(200);
     expect(metric.body[0].plants).toBe(100);
-    await t.http.post('/api/quantities').send({ areaSqFt: 100, species: [{ slug: 'nope-nope' }] }).expect(400);
+    await t.http
+      .post('/api/quantities')
+      .send({ areaSqFt: 100, species: [{ slug: 'nope-nope' }] })
+      .expect(400);
   });
 
   it('back-schedules a 60-day stratification from an indoor sowing 8 weeks before the last frost, and exports .ics and CSV', async () => {
     const sixty = [...catalogue.values()].find(
-      (s) => s.germination.treatments.length === 1 && s.germination.treatments[0].kind === 'cold-moist' && s.germination.treatments[0].days === 60 && s.germination.methods.includes('indoor-lights'),
+      (s) =>
+        s.germination.treatments.length === 1 &&
+        s.germination.treatments[0].kind === 'cold-moist' &&
+        s.germination.treatments[0].days === 60 &&
+        s.germination.methods.includes('indoor-lights'),
     )!;
-    const body = { lastFrost: '2027-05-10', today: '2026-12-02', plans: [{ slug: sixty.slug, method: 'indoor-lights' }] };
+    const body = {
+      lastFrost: '2027-05-10',
+      today: '2026-12-02',
+      plans: [{ slug: sixty.slug, method: 'indoor-lights' }],
+    };
     const cal = await t.http.post('/api/calendar').send(body).expect(200);
     const events = cal.body.events.filter((e: { speciesSlug: string }) => e.speciesSlug === sixty.slug);
     // Worked by hand: 2027-05-10 − 56 d = 2027-03-15 (sow); − 60 d = 2027-01-14 (start in the refrigerator).
     expect(events.find((e: { kind: string }) => e.kind === 'sow').date).toBe('2027-03-15');
     expect(events.find((e: { kind: string }) => e.kind === 'cms-start').date).toBe('2027-01-14');
 
-    const ics = await t.http.post('/api/calendar.ics').send(body).expect(200).expect('Content-Type', /text\/calendar/);
+    const ics = await t.http
+      .post('/api/calendar.ics')
+      .send(body)
+      .expect(200)
+      .expect('Content-Type', /text\/calendar/);
     expect(ics.text).toMatch(/^BEGIN:VCALENDAR\r?\nVERSION:2\.0/);
     expect(ics.text).toContain('DTSTART;VALUE=DATE:20270114');
     expect(ics.text.match(/BEGIN:VEVENT/g)!.length).toBe(cal.body.events.length);
@@ -119,7 +160,12 @@ describe('recommendations, mixes, quantities and calendar (e2e)', () => {
     expect(csv.text.split('\r\n')[0]).toBe('date,species,scientificName,kind,title,detail');
     expect(csv.text).toContain(`2027-01-14,${sixty.commonNames[0]}`);
 
-    const bad = await t.http.post('/api/calendar').send({ lastFrost: '2027-02-30', plans: [{ slug: 'x-y', method: 'by-hand' }] }).expect(400);
-    expect(bad.body.fields.map((f: { field: string }) => f.field)).toEqual(expect.arrayContaining(['lastFrost', 'plans.0.method']));
+    const bad = await t.http
+      .post('/api/calendar')
+      .send({ lastFrost: '2027-02-30', plans: [{ slug: 'x-y', method: 'by-hand' }] })
+      .expect(400);
+    expect(bad.body.fields.map((f: { field: string }) => f.field)).toEqual(
+      expect.arrayContaining(['lastFrost', 'plans.0.method']),
+    );
   });
 });

@@ -1,7 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import {
-  ecoregionListSchema, mixResponseSchema, placeLookupSchema, recommendationsResponseSchema, sowingCalendarSchema,
-  speciesDetailSchema, speciesPageSchema,
+  ecoregionListSchema,
+  mixResponseSchema,
+  placeLookupSchema,
+  recommendationsResponseSchema,
+  sowingCalendarSchema,
+  speciesDetailSchema,
+  speciesPageSchema,
 } from '@homeground/shared';
 import type { z } from 'zod';
 import { createTestApp, type TestApp } from './support/test-app.js';
@@ -23,9 +28,12 @@ describe('OpenAPI document (e2e)', () => {
 
   beforeAll(async () => {
     t = await createTestApp();
-    const doc = (await t.http.get('/api/docs/openapi.json').expect(200)).body as { paths: Record<string, Record<string, Operation>> };
+    const doc = (await t.http.get('/api/docs/openapi.json').expect(200)).body as {
+      paths: Record<string, Record<string, Operation>>;
+    };
     operations = Object.entries(doc.paths).flatMap(([route, methods]) =>
-      Object.entries(methods).map(([method, op]) => ({ route, method, op })));
+      Object.entries(methods).map(([method, op]) => ({ route, method, op })),
+    );
   });
   afterAll(() => t.close());
 
@@ -59,21 +67,31 @@ describe('OpenAPI document (e2e)', () => {
       .map((o) => `${o.method.toUpperCase()} ${o.route}`);
     expect(undocumented).toEqual([]);
     const register = operations.find((o) => o.route === '/api/auth/register')!.op;
-    expect(Object.keys(register.responses!['201'].content!['application/json'].schema!.properties!).sort())
-      .toEqual(['accessToken', 'expiresIn', 'user']);
+    expect(Object.keys(register.responses!['201'].content!['application/json'].schema!.properties!).sort()).toEqual([
+      'accessToken',
+      'expiresIn',
+      'user',
+    ]);
     expect(register.responses!['400'].content!['application/json'].schema!.properties).toHaveProperty('fields');
   });
 
   it('describes real answers: the engine, catalogue and place answers parse with their published schemas', async () => {
     const site = { sun: 'full', moisture: 'dry', areaSqFt: 500, deerPressure: 'medium', goals: ['monarchs'] };
     const region = { state: 'WI', ecoregionCode: '52' };
-    const calendar = { lastFrost: '2027-05-10', today: '2026-10-01', plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }] };
+    const calendar = {
+      lastFrost: '2027-05-10',
+      today: '2026-10-01',
+      plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }],
+    };
     const answers: [z.ZodType, unknown][] = [
       [speciesPageSchema, (await t.http.get('/api/species?state=WI&pageSize=5').expect(200)).body],
       [speciesDetailSchema, (await t.http.get('/api/species/zizia-aurea').expect(200)).body],
       [ecoregionListSchema, (await t.http.get('/api/ecoregions?state=WI').expect(200)).body],
       [placeLookupSchema, (await t.http.get('/api/places/lookup?zip=54665').expect(200)).body],
-      [recommendationsResponseSchema, (await t.http.post('/api/recommendations').send({ site, region }).expect(200)).body],
+      [
+        recommendationsResponseSchema,
+        (await t.http.post('/api/recommendations').send({ site, region }).expect(200)).body,
+      ],
       [mixResponseSchema, (await t.http.post('/api/mixes/balance').send({ site, region }).expect(200)).body],
       [sowingCalendarSchema, (await t.http.post('/api/calendar').send(calendar).expect(200)).body],
     ];
@@ -82,11 +100,16 @@ describe('OpenAPI document (e2e)', () => {
 
   it('gives every path and query parameter a schema', () => {
     const bare = operations.flatMap(({ route, method, op }) =>
-      (op.parameters ?? []).filter((p) => !p.schema?.type).map((p) => `${method.toUpperCase()} ${route} ${p.in}:${p.name}`));
+      (op.parameters ?? [])
+        .filter((p) => !p.schema?.type)
+        .map((p) => `${method.toUpperCase()} ${route} ${p.in}:${p.name}`),
+    );
     expect(bare).toEqual([]);
     const lookup = operations.find((o) => o.route === '/api/places/lookup')!;
     expect(lookup.op.parameters!.map((p) => p.name).sort()).toEqual(['lat', 'lon', 'zip']);
-    const engine = operations.find((o) => o.route === '/api/mixes/balance')!.op.requestBody!.content!['application/json'].schema!;
+    const engine = operations.find((o) => o.route === '/api/mixes/balance')!.op.requestBody!.content![
+      'application/json'
+    ].schema!;
     expect(Object.keys(engine.properties!)).toEqual(expect.arrayContaining(['site', 'region', 'options']));
   });
 });

@@ -66,7 +66,9 @@ describe('place → your ground (e2e)', () => {
     ['a four-digit ZIP', 'zip=5466', 'zip', /5-digit/],
   ])('answers %s with 400 naming the field', async (_what, qs, field, message) => {
     const res = await t.http.get(`/api/places/lookup?${qs}`).expect(400);
-    expect(res.body.fields).toEqual(expect.arrayContaining([expect.objectContaining({ field, message: expect.stringMatching(message) })]));
+    expect(res.body.fields).toEqual(
+      expect.arrayContaining([expect.objectContaining({ field, message: expect.stringMatching(message) })]),
+    );
   });
 
   it('lists the ecoregions that reach into a state, with plain descriptions', async () => {
@@ -82,15 +84,36 @@ describe('place → your ground (e2e)', () => {
 
   it('refuses boundary uploads from non-admins and rejects malformed or wrong files, changing nothing', async () => {
     const upload = (token: string, body: Buffer, name = 'regions.geojson') =>
-      t.http.post('/api/ecoregions/boundaries').set('Authorization', `Bearer ${token}`).attach('file', body, { filename: name, contentType: 'application/geo+json' });
+      t.http
+        .post('/api/ecoregions/boundaries')
+        .set('Authorization', `Bearer ${token}`)
+        .attach('file', body, { filename: name, contentType: 'application/geo+json' });
     await upload(member, Buffer.from('{}')).expect(403);
     const notJson = await upload(admin, Buffer.from('{"type": "FeatureCollection", ')).expect(400);
     expect(notJson.body.fields[0]).toMatchObject({ field: 'file', message: 'is not valid JSON' });
     const wrong = {
       type: 'FeatureCollection',
       features: [
-        { type: 'Feature', properties: { US_L3CODE: '86', US_L3NAME: 'Nowhere' }, geometry: { type: 'Polygon', coordinates: [[[-90, 43], [-89, 43], [-89, 44], [-90, 43]]] } },
-        { type: 'Feature', properties: { US_L3CODE: '52', US_L3NAME: 'Driftless Area' }, geometry: { type: 'Point', coordinates: [-90, 43] } },
+        {
+          type: 'Feature',
+          properties: { US_L3CODE: '86', US_L3NAME: 'Nowhere' },
+          geometry: {
+            type: 'Polygon',
+            coordinates: [
+              [
+                [-90, 43],
+                [-89, 43],
+                [-89, 44],
+                [-90, 43],
+              ],
+            ],
+          },
+        },
+        {
+          type: 'Feature',
+          properties: { US_L3CODE: '52', US_L3NAME: 'Driftless Area' },
+          geometry: { type: 'Point', coordinates: [-90, 43] },
+        },
       ],
     };
     const res = await upload(admin, Buffer.from(JSON.stringify(wrong))).expect(400);
@@ -115,18 +138,27 @@ describe('place → your ground (e2e)', () => {
 
       // The file is simplified, so only points at least 10 km from their region's boundary count.
       const regions = (JSON.parse(text) as { features: Region[] }).features;
-      const zips = zipcodes.lookupByState('WI').concat(zipcodes.lookupByState('KS'), zipcodes.lookupByState('GA'), zipcodes.lookupByState('PA'));
+      const zips = zipcodes
+        .lookupByState('WI')
+        .concat(zipcodes.lookupByState('KS'), zipcodes.lookupByState('GA'), zipcodes.lookupByState('PA'));
       const robust: { zip: string; code: string }[] = [];
       for (const z of zips.filter((_, i) => i % 30 === 0)) {
         const region = regions.find((r) => booleanPointInPolygon([z.longitude, z.latitude], r));
-        if (region && distanceToBoundaryKm(region, z.longitude, z.latitude) >= 10) robust.push({ zip: z.zip, code: region.properties.US_L3CODE });
+        if (region && distanceToBoundaryKm(region, z.longitude, z.latitude) >= 10)
+          robust.push({ zip: z.zip, code: region.properties.US_L3CODE });
       }
       expect(robust.length).toBeGreaterThanOrEqual(20);
       for (const p of robust) {
         const res = await t.http.get(`/api/places/lookup?zip=${p.zip}`).expect(200);
-        expect({ zip: p.zip, code: res.body.ecoregion.code, method: res.body.ecoregion.method }).toEqual({ zip: p.zip, code: p.code, method: 'boundary' });
+        expect({ zip: p.zip, code: res.body.ecoregion.code, method: res.body.ecoregion.method }).toEqual({
+          zip: p.zip,
+          code: p.code,
+          method: 'boundary',
+        });
       }
-      console.log(`exact lookup after import: ${robust.length}/${robust.length} robust ZIP points matched their EPA polygon`);
+      console.log(
+        `exact lookup after import: ${robust.length}/${robust.length} robust ZIP points matched their EPA polygon`,
+      );
     },
     120_000,
   );

@@ -35,16 +35,23 @@ describe('season plans (e2e, demo data)', () => {
   it('loads the demo season: 2027, last frost 10 May, plant share on the second Saturday of June, a dozen targets', async () => {
     const res = await t.http.get(SEASON).set(bearer(tokens.member)).expect(200);
     expect(res.body).toMatchObject({
-      groupSlug: 'larkfield-commons-growers', place: { town: 'Larkfield', state: 'WI', ecoregionCode: '52' },
-      year: 2027, lastFrost: '2027-05-10', plantShareDate: '2027-06-12', milkweedShare: 0.25,
+      groupSlug: 'larkfield-commons-growers',
+      place: { town: 'Larkfield', state: 'WI', ecoregionCode: '52' },
+      year: 2027,
+      lastFrost: '2027-05-10',
+      plantShareDate: '2027-06-12',
+      milkweedShare: 0.25,
     });
     expect(new Date(`${res.body.plantShareDate}T12:00:00Z`).getUTCDay()).toBe(6); // a Saturday
     expect(res.body.targets.map((x: { slug: string }) => x.slug)).toEqual(DEMO_TARGETS.map((x) => x.slug));
   });
 
   it('the demo targets are the share list Homeground proposes with the demo settings', async () => {
-    const res = await t.http.post(`${SEASON}/share-list/propose`).set(bearer(tokens.organiser))
-      .send({ methods: DEMO_SEASON.methods, milkweedShare: DEMO_SEASON.milkweedShare, count: 12 }).expect(200);
+    const res = await t.http
+      .post(`${SEASON}/share-list/propose`)
+      .set(bearer(tokens.organiser))
+      .send({ methods: DEMO_SEASON.methods, milkweedShare: DEMO_SEASON.milkweedShare, count: 12 })
+      .expect(200);
     expect(res.body.proposals.map((p: { slug: string }) => p.slug)).toEqual(DEMO_TARGETS.map((x) => x.slug));
   });
 
@@ -61,7 +68,11 @@ describe('season plans (e2e, demo data)', () => {
     it.each(Object.entries(writers))('PUT season, PUT targets, propose as %s → %d', async (who, status) => {
       // Writes the season as it stands, so the matrix changes nothing it checks later.
       const current = (await t.http.get(SEASON).set(bearer(tokens.organiser)).expect(200)).body;
-      const targets = current.targets.map(({ slug, targetPlants, germinationRatePct }: Record<string, unknown>) => ({ slug, targetPlants, ...(germinationRatePct === undefined ? {} : { germinationRatePct }) }));
+      const targets = current.targets.map(({ slug, targetPlants, germinationRatePct }: Record<string, unknown>) => ({
+        slug,
+        targetPlants,
+        ...(germinationRatePct === undefined ? {} : { germinationRatePct }),
+      }));
       const body = { year: current.year, lastFrost: current.lastFrost, plantShareDate: current.plantShareDate };
       // The demo season may be past when the suite runs years from now; then a future one stands in.
       const seasonPut = current.plantShareDate >= new Date().toISOString().slice(0, 10) ? body : seasonBody;
@@ -83,15 +94,24 @@ describe('season plans (e2e, demo data)', () => {
   describe('the flow: season dates → share list → targets → seed list', () => {
     it('proposes a Driftless share list, sets targets from it and works out the seed list', async () => {
       const org = bearer(tokens.organiser);
-      const season = await t.http.put(SEASON).set(org).send({ ...seasonBody, milkweedShare: 0.5, lossFactor: 0.2, seedsPerPacket: 100 }).expect(200);
+      const season = await t.http
+        .put(SEASON)
+        .set(org)
+        .send({ ...seasonBody, milkweedShare: 0.5, lossFactor: 0.2, seedsPerPacket: 100 })
+        .expect(200);
       expect(season.body).toMatchObject({ year: YEAR, milkweedShare: 0.5, seedsPerPacket: 100 });
 
       const before = (await t.http.get(SEASON).set(org).expect(200)).body;
-      const proposed = await t.http.post(`${SEASON}/share-list/propose`).set(org).send({ count: 12, totalPlants: 600 }).expect(200);
+      const proposed = await t.http
+        .post(`${SEASON}/share-list/propose`)
+        .set(org)
+        .send({ count: 12, totalPlants: 600 })
+        .expect(200);
       // Proposing writes nothing.
       expect((await t.http.get(SEASON).set(org).expect(200)).body).toEqual(before);
 
-      const proposals: { slug: string; isMilkweed: boolean; suggestedPlants: number; why: string[]; layer: string }[] = proposed.body.proposals;
+      const proposals: { slug: string; isMilkweed: boolean; suggestedPlants: number; why: string[]; layer: string }[] =
+        proposed.body.proposals;
       expect(proposals).toHaveLength(12);
       const slugs = proposals.map((p) => p.slug);
       // What a Driftless organiser expects (from memory of common Wisconsin giveaway lists): butterfly and
@@ -106,8 +126,9 @@ describe('season plans (e2e, demo data)', () => {
       expect(proposals.every((p) => p.why.length >= 3 && !/score|points/i.test(p.why.join(' ')))).toBe(true);
 
       // The organiser takes the list, drops one species and sets their own germination for another.
-      const targets: { slug: string; targetPlants: number; germinationRatePct?: number }[] =
-        proposals.slice(0, 11).map((p) => ({ slug: p.slug, targetPlants: p.suggestedPlants }));
+      const targets: { slug: string; targetPlants: number; germinationRatePct?: number }[] = proposals
+        .slice(0, 11)
+        .map((p) => ({ slug: p.slug, targetPlants: p.suggestedPlants }));
       targets[0] = { ...targets[0], germinationRatePct: 75 };
       const saved = await t.http.put(`${SEASON}/targets`).set(org).send({ targets }).expect(200);
       expect(saved.body.targets).toHaveLength(11);
@@ -119,7 +140,9 @@ describe('season plans (e2e, demo data)', () => {
       for (const r of list.rows) {
         // seeds = plants ÷ (germination × (1 − loss)), rounded up; loss 0.2 is the stated common-practice default.
         expect(r.lossFactor).toBe(DEFAULT_LOSS_FACTOR);
-        expect(r.seedsToSow).toBe(Math.ceil(r.targetPlants / ((r.germinationRatePct / 100) * (1 - r.lossFactor)) - 1e-9));
+        expect(r.seedsToSow).toBe(
+          Math.ceil(r.targetPlants / ((r.germinationRatePct / 100) * (1 - r.lossFactor)) - 1e-9),
+        );
         // weight = seeds ÷ seeds per pound × 453.59237 g (the pound's legal definition, X).
         if (r.seedsPerPound) expect(r.grams).toBeCloseTo((r.seedsToSow / r.seedsPerPound) * GRAMS_PER_POUND, 2);
         expect(r.packets).toBe(Math.ceil(r.seedsToSow / 100));
@@ -132,8 +155,11 @@ describe('season plans (e2e, demo data)', () => {
     const referenceOk = referenceAvailable(['CHECK-VALUES.md']);
     (referenceOk ? it : it.skip)('weighs seed as CHECK-VALUES.md §1 and §3 relate it (NPN-ECPA, BWSR; R)', async () => {
       // The rows this check relies on, found as species-data's reference checks find them (every word present).
-      const rows = readFileSync(path.join(REFERENCE_DIR, 'CHECK-VALUES.md'), 'utf8').split('\n').filter((l) => l.startsWith('| '));
-      const row = (plant: string, mentions: string[]) => rows.find((l) => l.startsWith(`| ${plant}`) && mentions.every((m) => l.includes(m)));
+      const rows = readFileSync(path.join(REFERENCE_DIR, 'CHECK-VALUES.md'), 'utf8')
+        .split('\n')
+        .filter((l) => l.startsWith('| '));
+      const row = (plant: string, mentions: string[]) =>
+        rows.find((l) => l.startsWith(`| ${plant}`) && mentions.every((m) => l.includes(m)));
       // §1 NPN-ECPA (R): Echinacea pallida seed lots germinate 50–81 %.
       expect(row('Echinacea pallida', ['lot germination', '50–81', 'NPN-ECPA', '| R |'])).toBeDefined();
       // §3 BWSR (R): little bluestem 2.3 lb/ac ↔ 12.67 seeds/ft² (≈240,000 seeds/lb); whorled milkweed ≈174,000/lb.
@@ -141,19 +167,32 @@ describe('season plans (e2e, demo data)', () => {
       expect(row('Test vector, Asclepias verticillata', ['≈174,000/lb', 'BWSR', '| R |'])).toBeDefined();
 
       const org = bearer(tokens.organiser);
-      await t.http.put(SEASON).set(org).send({ ...seasonBody, lossFactor: 0.2 }).expect(200);
-      await t.http.put(`${SEASON}/targets`).set(org).send({ targets: [
-        { slug: 'echinacea-pallida', targetPlants: 100, germinationRatePct: 81 },
-        { slug: 'schizachyrium-scoparium', targetPlants: 100 },
-        { slug: 'asclepias-verticillata', targetPlants: 100 },
-      ] }).expect(200);
+      await t.http
+        .put(SEASON)
+        .set(org)
+        .send({ ...seasonBody, lossFactor: 0.2 })
+        .expect(200);
+      await t.http
+        .put(`${SEASON}/targets`)
+        .set(org)
+        .send({
+          targets: [
+            { slug: 'echinacea-pallida', targetPlants: 100, germinationRatePct: 81 },
+            { slug: 'schizachyrium-scoparium', targetPlants: 100 },
+            { slug: 'asclepias-verticillata', targetPlants: 100 },
+          ],
+        })
+        .expect(200);
       const listed = (await t.http.get(`${SEASON}/seed-list`).set(org).expect(200)).body.rows;
       const by = Object.fromEntries(listed.map((r: { slug: string }) => [r.slug, r]));
       // 100 plants at the top of the NPN lot range, 81 %, and 20 % loss: 100 ÷ (0.81 × 0.8) = 154.3 → 155 seeds.
       expect(by['echinacea-pallida'].seedsToSow).toBe(155);
       // The catalogue's seeds per pound agree with the BWSR implied figures within 10 % (seed lots vary),
       // so the seed list's weights are those a BWSR-based order would buy.
-      for (const [slug, bwsrPerPound] of [['schizachyrium-scoparium', 240_000], ['asclepias-verticillata', 174_000]] as const) {
+      for (const [slug, bwsrPerPound] of [
+        ['schizachyrium-scoparium', 240_000],
+        ['asclepias-verticillata', 174_000],
+      ] as const) {
         expect(Math.abs(by[slug].seedsPerPound - bwsrPerPound) / bwsrPerPound).toBeLessThan(0.1);
         expect(by[slug].grams).toBeCloseTo((by[slug].seedsToSow / by[slug].seedsPerPound) * GRAMS_PER_POUND, 2);
       }
@@ -164,29 +203,81 @@ describe('season plans (e2e, demo data)', () => {
       expect(res.headers['content-type']).toMatch(/^text\/csv/);
       expect(res.headers['content-disposition']).toContain('homeground-seed-list.csv');
       const lines = res.text.split('\r\n');
-      expect(lines[0]).toBe('species,scientificName,targetPlants,germinationPct,germinationFrom,lossPct,seedsToSow,seedsPerPound,grams,ounces,packets,buyBy,collectLocally,notes');
+      expect(lines[0]).toBe(
+        'species,scientificName,targetPlants,germinationPct,germinationFrom,lossPct,seedsToSow,seedsPerPound,grams,ounces,packets,buyBy,collectLocally,notes',
+      );
       const list = (await t.http.get(`${SEASON}/seed-list`).set(bearer(tokens.member)).expect(200)).body;
       expect(lines[1].split(',').slice(0, 7)).toEqual([
-        list.rows[0].commonName, list.rows[0].scientificName, String(list.rows[0].targetPlants), String(list.rows[0].germinationRatePct),
-        list.rows[0].germinationFrom, '20', String(list.rows[0].seedsToSow),
+        list.rows[0].commonName,
+        list.rows[0].scientificName,
+        String(list.rows[0].targetPlants),
+        String(list.rows[0].germinationRatePct),
+        list.rows[0].germinationFrom,
+        '20',
+        String(list.rows[0].seedsToSow),
       ]);
-      expect(res.text).toContain('landowner\'s permission');
+      expect(res.text).toContain("landowner's permission");
     });
   });
 
   describe('bad input: 400 naming the field, and nothing written', () => {
     const cases: [string, string, Record<string, unknown>, string][] = [
       ['an impossible date', SEASON, { ...seasonBody, lastFrost: `${YEAR}-02-30` }, 'lastFrost'],
-      ['a plant share before the last frost', SEASON, { ...seasonBody, plantShareDate: `${YEAR}-04-01` }, 'plantShareDate'],
-      ['a plant share in the past', SEASON, { year: 2020, lastFrost: '2020-05-10', plantShareDate: '2020-06-13' }, 'plantShareDate'],
+      [
+        'a plant share before the last frost',
+        SEASON,
+        { ...seasonBody, plantShareDate: `${YEAR}-04-01` },
+        'plantShareDate',
+      ],
+      [
+        'a plant share in the past',
+        SEASON,
+        { year: 2020, lastFrost: '2020-05-10', plantShareDate: '2020-06-13' },
+        'plantShareDate',
+      ],
       ['a negative packet size', SEASON, { ...seasonBody, seedsPerPacket: -100 }, 'seedsPerPacket'],
       ['a milkweed share over 1', SEASON, { ...seasonBody, milkweedShare: 1.5 }, 'milkweedShare'],
       ['an unknown field', SEASON, { ...seasonBody, favouriteColour: 'green' }, 'favouriteColour'],
-      ['a negative target', `${SEASON}/targets`, { targets: [{ slug: 'monarda-fistulosa', targetPlants: -5 }] }, 'targets.0.targetPlants'],
-      ['a target over 5000', `${SEASON}/targets`, { targets: [{ slug: 'monarda-fistulosa', targetPlants: 5001 }] }, 'targets.0.targetPlants'],
-      ['a germination rate of 0', `${SEASON}/targets`, { targets: [{ slug: 'monarda-fistulosa', targetPlants: 5, germinationRatePct: 0 }] }, 'targets.0.germinationRatePct'],
-      ['a species not in the catalogue', `${SEASON}/targets`, { targets: [{ slug: 'monarda-fistulosa', targetPlants: 5 }, { slug: 'not-a-plant', targetPlants: 5 }] }, 'targets.1.slug'],
-      ['a species listed twice', `${SEASON}/targets`, { targets: [{ slug: 'monarda-fistulosa', targetPlants: 5 }, { slug: 'monarda-fistulosa', targetPlants: 7 }] }, 'targets.1.slug'],
+      [
+        'a negative target',
+        `${SEASON}/targets`,
+        { targets: [{ slug: 'monarda-fistulosa', targetPlants: -5 }] },
+        'targets.0.targetPlants',
+      ],
+      [
+        'a target over 5000',
+        `${SEASON}/targets`,
+        { targets: [{ slug: 'monarda-fistulosa', targetPlants: 5001 }] },
+        'targets.0.targetPlants',
+      ],
+      [
+        'a germination rate of 0',
+        `${SEASON}/targets`,
+        { targets: [{ slug: 'monarda-fistulosa', targetPlants: 5, germinationRatePct: 0 }] },
+        'targets.0.germinationRatePct',
+      ],
+      [
+        'a species not in the catalogue',
+        `${SEASON}/targets`,
+        {
+          targets: [
+            { slug: 'monarda-fistulosa', targetPlants: 5 },
+            { slug: 'not-a-plant', targetPlants: 5 },
+          ],
+        },
+        'targets.1.slug',
+      ],
+      [
+        'a species listed twice',
+        `${SEASON}/targets`,
+        {
+          targets: [
+            { slug: 'monarda-fistulosa', targetPlants: 5 },
+            { slug: 'monarda-fistulosa', targetPlants: 7 },
+          ],
+        },
+        'targets.1.slug',
+      ],
     ];
 
     it.each(cases)('%s → 400 naming the field, nothing written (PUT %s)', async (_what, url, body, field) => {
@@ -202,7 +293,11 @@ describe('season plans (e2e, demo data)', () => {
       [{ milkweedShare: -0.1 }, 'milkweedShare'],
       [{ methods: ['hydroponics'] }, 'methods.0'],
     ])('propose %j → 400 naming %s', async (body, field) => {
-      const res = await t.http.post(`${SEASON}/share-list/propose`).set(bearer(tokens.organiser)).send(body).expect(400);
+      const res = await t.http
+        .post(`${SEASON}/share-list/propose`)
+        .set(bearer(tokens.organiser))
+        .send(body)
+        .expect(400);
       expect(res.body.fields.map((f: { field: string }) => f.field)).toContain(field);
     });
   });

@@ -10,10 +10,15 @@ describe('sign-in throttling (e2e)', () => {
   afterAll(() => t.close());
 
   it('answers 429 in the API error shape once an address passes the sign-in limit', async () => {
-    const attempt = () => t.http.post('/api/auth/login').send({ email: 'mara.ellsworth@example.org', password: 'guess-guess' });
+    const attempt = () =>
+      t.http.post('/api/auth/login').send({ email: 'mara.ellsworth@example.org', password: 'guess-guess' });
     for (let i = 0; i < 3; i++) expect((await attempt()).status).toBe(401);
     const blocked = await attempt();
     expect(blocked.status).toBe(429);
-    expect(blocked.body).toMatchObject({ statusCode: 429, error: 'Too Many Requests', message: expect.stringMatching(/wait a minute/) });
+    expect(blocked.body).toMatchObject({
+      statusCode: 429,
+      error: 'Too Many Requests',
+      message: expect.stringMatching(/wait a minute/),
+    });
   });
 });

@@ -3,9 +3,18 @@ import { createTestApp, type TestApp } from './support/test-app.js';
 
 /** Headers helmet sets on every answer; a cached list page must carry the same ones. */
 const SECURITY_HEADERS = [
-  'content-security-policy', 'cross-origin-opener-policy', 'cross-origin-resource-policy', 'origin-agent-cluster',
-  'referrer-policy', 'strict-transport-security', 'x-content-type-options', 'x-dns-prefetch-control',
-  'x-download-options', 'x-frame-options', 'x-permitted-cross-domain-policies', 'x-xss-protection',
+  'content-security-policy',
+  'cross-origin-opener-policy',
+  'cross-origin-resource-policy',
+  'origin-agent-cluster',
+  'referrer-policy',
+  'strict-transport-security',
+  'x-content-type-options',
+  'x-dns-prefetch-control',
+  'x-download-options',
+  'x-frame-options',
+  'x-permitted-cross-domain-policies',
+  'x-xss-protection',
 ];
 
 describe('species list cache (e2e)', () => {

@@ -37,7 +37,9 @@ describe('species catalogue API (e2e)', () => {
   });
 
   it('filters by state, sun, moisture, bloom month, growth form and monarch host together', async () => {
-    const res = await t.http.get('/api/species?state=WI&sun=full&moisture=dry&bloomMonth=7&growthForm=forb&pageSize=200').expect(200);
+    const res = await t.http
+      .get('/api/species?state=WI&sun=full&moisture=dry&bloomMonth=7&growthForm=forb&pageSize=200')
+      .expect(200);
     expect(res.body.total).toBeGreaterThan(0);
     for (const s of res.body.items) {
       expect(s).toMatchObject({ growthForm: 'forb' });
@@ -85,8 +87,16 @@ describe('species catalogue API (e2e)', () => {
     const record = (await t.http.get('/api/species/asclepias-tuberosa').expect(200)).body;
     delete record.hasPhoto;
     const edited = { ...record, commonNames: ['orange butterfly milkweed', ...record.commonNames] };
-    await t.http.put('/api/species/asclepias-tuberosa').set('Authorization', `Bearer ${member}`).send(edited).expect(403);
-    await t.http.put('/api/species/asclepias-tuberosa').set('Authorization', `Bearer ${curator}`).send(edited).expect(200);
+    await t.http
+      .put('/api/species/asclepias-tuberosa')
+      .set('Authorization', `Bearer ${member}`)
+      .send(edited)
+      .expect(403);
+    await t.http
+      .put('/api/species/asclepias-tuberosa')
+      .set('Authorization', `Bearer ${curator}`)
+      .send(edited)
+      .expect(200);
     const after = await t.http.get('/api/species?q=butterfly%20milkweed&pageSize=5').expect(200);
     expect(after.body.items[0].commonName).toBe('orange butterfly milkweed');
 
@@ -95,11 +105,18 @@ describe('species catalogue API (e2e)', () => {
       .set('Authorization', `Bearer ${curator}`)
       .send({ ...record, heightCm: { min: 90, max: 30 }, nativeStates: ['ZZ'] })
       .expect(400);
-    expect(bad.body.fields.map((f: { field: string }) => f.field)).toEqual(expect.arrayContaining(['heightCm', 'nativeStates.0']));
+    expect(bad.body.fields.map((f: { field: string }) => f.field)).toEqual(
+      expect.arrayContaining(['heightCm', 'nativeStates.0']),
+    );
   });
 
   it('exports CSV and re-imports it; a file with one bad row writes nothing and names the row and field', async () => {
-    const csv = (await t.http.get('/api/species/export.csv').expect(200).expect('Content-Type', /text\/csv/)).text;
+    const csv = (
+      await t.http
+        .get('/api/species/export.csv')
+        .expect(200)
+        .expect('Content-Type', /text\/csv/)
+    ).text;
     const lines = csv.split('\r\n');
     const header = lines[0].split(',');
     expect(header).toEqual(expect.arrayContaining(['slug', 'scientificName', 'usdaSymbol', 'treatments']));
@@ -129,14 +146,19 @@ describe('species catalogue API (e2e)', () => {
   });
 
   it('stores a photo and serves it resized; rejects a non-image and a file over 5 MB', async () => {
-    const png = await sharp({ create: { width: 900, height: 600, channels: 3, background: { r: 63, g: 107, b: 58 } } }).png().toBuffer();
+    const png = await sharp({ create: { width: 900, height: 600, channels: 3, background: { r: 63, g: 107, b: 58 } } })
+      .png()
+      .toBuffer();
     const up = await t.http
       .post('/api/species/asclepias-tuberosa/photo')
       .set('Authorization', `Bearer ${curator}`)
       .attach('photo', png, { filename: 'milkweed.png', contentType: 'image/png' })
       .expect(201);
     expect(up.body).toMatchObject({ mime: 'image/png', width: 900, height: 600 });
-    const small = await t.http.get('/api/species/asclepias-tuberosa/photo?w=400').expect(200).expect('Content-Type', /image\/webp/);
+    const small = await t.http
+      .get('/api/species/asclepias-tuberosa/photo?w=400')
+      .expect(200)
+      .expect('Content-Type', /image\/webp/);
     expect((await sharp(small.body).metadata()).width).toBe(400);
 
     // A text file that claims to be a JPEG: the type is sniffed from the bytes.

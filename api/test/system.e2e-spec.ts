@@ -10,7 +10,11 @@ describe('health, stats and docs (e2e)', () => {
 
   it('reports version and a live database with its migrations applied', async () => {
     const res = await t.http.get('/api/health').expect(200).expect('Content-Type', /json/);
-    expect(res.body).toMatchObject({ status: 'ok', version: expect.stringMatching(/^\d+\.\d+\.\d+/), database: { status: 'up' } });
+    expect(res.body).toMatchObject({
+      status: 'ok',
+      version: expect.stringMatching(/^\d+\.\d+\.\d+/),
+      database: { status: 'up' },
+    });
     expect(res.body.database.migrations).toBeGreaterThanOrEqual(1);
   });
 
@@ -23,7 +27,9 @@ describe('health, stats and docs (e2e)', () => {
     expect(res.body.ecoregions).toBeGreaterThan(40);
     expect(res.body.ecoregions).toBeLessThan(85);
     const groups = await t.http.get('/api/groups').expect(200);
-    expect(groups.body).toEqual([expect.objectContaining({ slug: 'larkfield-commons-growers', state: 'WI', ecoregionCode: '52', members: 5 })]);
+    expect(groups.body).toEqual([
+      expect.objectContaining({ slug: 'larkfield-commons-growers', state: 'WI', ecoregionCode: '52', members: 5 }),
+    ]);
   });
 
   it('serves OpenAPI docs from packaged assets, with no CDN in the page', async () => {

@@ -7,7 +7,13 @@ import { createTestApp, type TestApp } from './support/test-app.js';
  * search, swaps across growth forms, and rebalancing that keeps what the user chose.
  */
 const DRIFTLESS = { state: 'WI', ecoregionCode: '52' };
-const bed = { sun: 'full', moisture: 'medium', areaSqFt: 200, deerPressure: 'medium', goals: ['pollinators', 'monarchs'] };
+const bed = {
+  sun: 'full',
+  moisture: 'medium',
+  areaSqFt: 200,
+  deerPressure: 'medium',
+  goals: ['pollinators', 'monarchs'],
+};
 const WOODY = new Set(['shrub', 'tree', 'vine']);
 
 type Chosen = { slug: string; locked: boolean };
@@ -48,28 +54,61 @@ describe('yard mix choices (e2e)', () => {
   it('rebalance keeps kept and swapped-in species and leaves swapped-out ones out', async () => {
     const first = slugsOf((await balance({ site: bed, region: DRIFTLESS }).expect(200)).body.palette);
     const [kept, swappedOut] = first;
-    const alt = (await t.http.post('/api/mixes/alternatives').send({ site: bed, region: DRIFTLESS, chosen: first, slot: swappedOut }).expect(200)).body;
+    const alt = (
+      await t.http
+        .post('/api/mixes/alternatives')
+        .send({ site: bed, region: DRIFTLESS, chosen: first, slot: swappedOut })
+        .expect(200)
+    ).body;
     const swappedIn = alt.alternatives[0].slug;
-    const next = (await balance({ site: bed, region: DRIFTLESS, options: { locked: [kept, swappedIn], excluded: [swappedOut] } }).expect(200)).body;
+    const next = (
+      await balance({
+        site: bed,
+        region: DRIFTLESS,
+        options: { locked: [kept, swappedIn], excluded: [swappedOut] },
+      }).expect(200)
+    ).body;
     expect(slugsOf(next.palette)).toEqual(expect.arrayContaining([kept, swappedIn]));
     expect(slugsOf(next.palette)).not.toContain(swappedOut);
   });
 
   it('swaps within the slot’s kind by default, across growth forms on request', async () => {
-    const first = slugsOf((await balance({ site: bed, region: DRIFTLESS, options: { size: 9 } }).expect(200)).body.palette);
+    const first = slugsOf(
+      (await balance({ site: bed, region: DRIFTLESS, options: { size: 9 } }).expect(200)).body.palette,
+    );
     const grass = first.find((s) => catalogue.get(s)!.growthForm === 'graminoid')!;
-    const same = (await t.http.post('/api/mixes/alternatives').send({ site: bed, region: DRIFTLESS, chosen: first, slot: grass }).expect(200)).body;
-    expect(same.alternatives.every((a: { slug: string }) => catalogue.get(a.slug)!.growthForm === 'graminoid')).toBe(true);
-    const across = (await t.http.post('/api/mixes/alternatives')
-      .send({ site: bed, region: DRIFTLESS, chosen: first, slot: grass, acrossForms: true }).expect(200)).body;
-    expect(across.alternatives.some((a: { slug: string }) => catalogue.get(a.slug)!.growthForm !== 'graminoid')).toBe(true);
+    const same = (
+      await t.http
+        .post('/api/mixes/alternatives')
+        .send({ site: bed, region: DRIFTLESS, chosen: first, slot: grass })
+        .expect(200)
+    ).body;
+    expect(same.alternatives.every((a: { slug: string }) => catalogue.get(a.slug)!.growthForm === 'graminoid')).toBe(
+      true,
+    );
+    const across = (
+      await t.http
+        .post('/api/mixes/alternatives')
+        .send({ site: bed, region: DRIFTLESS, chosen: first, slot: grass, acrossForms: true })
+        .expect(200)
+    ).body;
+    expect(across.alternatives.some((a: { slug: string }) => catalogue.get(a.slug)!.growthForm !== 'graminoid')).toBe(
+      true,
+    );
   });
 
   it('says plainly where the catalogue does not cover the region (Sonoran Basin and Range, EPA 81)', async () => {
-    const res = (await balance({ site: { ...bed, moisture: 'dry' }, region: { state: 'AZ', ecoregionCode: '81' } }).expect(200)).body;
+    const res = (
+      await balance({ site: { ...bed, moisture: 'dry' }, region: { state: 'AZ', ecoregionCode: '81' } }).expect(200)
+    ).body;
     expect(res.palette.chosen).toEqual([]);
     expect(res.palette.coverage.covered).toBe(false);
-    const rec = (await t.http.post('/api/recommendations').send({ site: bed, region: { state: 'AZ', ecoregionCode: '81' } }).expect(200)).body;
+    const rec = (
+      await t.http
+        .post('/api/recommendations')
+        .send({ site: bed, region: { state: 'AZ', ecoregionCode: '81' } })
+        .expect(200)
+    ).body;
     expect(rec.ranked).toEqual([]);
     expect(rec.coverage.message).toMatch(/does not cover/);
   });
@@ -90,7 +129,16 @@ describe('yard mix choices (e2e)', () => {
   });
 
   it('answers acrossForms that is not a yes/no with 400 naming the field', async () => {
-    const res = await t.http.post('/api/mixes/alternatives').send({ site: bed, region: DRIFTLESS, chosen: ['asclepias-tuberosa'], slot: 'asclepias-tuberosa', acrossForms: 'y' }).expect(400);
+    const res = await t.http
+      .post('/api/mixes/alternatives')
+      .send({
+        site: bed,
+        region: DRIFTLESS,
+        chosen: ['asclepias-tuberosa'],
+        slot: 'asclepias-tuberosa',
+        acrossForms: 'y',
+      })
+      .expect(400);
     expect(res.body.fields.map((f: { field: string }) => f.field)).toContain('acrossForms');
   });
 });

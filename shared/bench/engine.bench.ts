@@ -33,29 +33,42 @@ for (const cat of CATALOGUES) {
     const palette = timeRuns(() => balancePalette(input), RUNS);
     const mix = balancePalette(input);
     const met = both.p95Ms <= target;
-    emit({ bench: 'recommendation+palette', catalogue: cat.name, site: name, mixSize: mix.size, objective: mix.objective, ...both, targetP95Ms: target, met });
+    emit({
+      bench: 'recommendation+palette',
+      catalogue: cat.name,
+      site: name,
+      mixSize: mix.size,
+      objective: mix.objective,
+      ...both,
+      targetP95Ms: target,
+      met,
+    });
     emit({ bench: 'recommend-only', catalogue: cat.name, site: name, ...rec });
     emit({ bench: 'palette-only', catalogue: cat.name, site: name, ...palette });
     summary.push(
-      `recommendation+palette  ${cat.name} ${name}: p50 ${both.p50Ms} ms, p95 ${both.p95Ms} ms (target p95 ≤ ${target} ms) ${verdict(met)}; `
-        + `CPU p50 ${both.cpuP50Ms} ms, p95 ${both.cpuP95Ms} ms; palette alone p95 ${palette.p95Ms} ms`,
+      `recommendation+palette  ${cat.name} ${name}: p50 ${both.p50Ms} ms, p95 ${both.p95Ms} ms (target p95 ≤ ${target} ms) ${verdict(met)}; ` +
+        `CPU p50 ${both.cpuP50Ms} ms, p95 ${both.cpuP95Ms} ms; palette alone p95 ${palette.p95Ms} ms`,
     );
   }
   for (const q of narrowingQuality({ name: cat.name, species }, SITES, region)) {
     emit({ bench: 'narrowed-vs-full-search', ...q });
-    summary.push(`narrowed vs full search ${q.catalogue} ${q.site}: objective ratio ${q.ratio}, ${q.searched} of ${q.candidates} candidates searched`);
+    summary.push(
+      `narrowed vs full search ${q.catalogue} ${q.site}: objective ratio ${q.ratio}, ${q.searched} of ${q.candidates} candidates searched`,
+    );
   }
 }
 for (const q of narrowingQuality({ name: 'real-503', species: loadCatalogue().species }, SITES, region)) {
   emit({ bench: 'narrowed-vs-full-search', ...q });
-  summary.push(`narrowed vs full search ${q.catalogue} ${q.site}: objective ratio ${q.ratio}, ${q.searched} of ${q.candidates} candidates searched`);
+  summary.push(
+    `narrowed vs full search ${q.catalogue} ${q.site}: objective ratio ${q.ratio}, ${q.searched} of ${q.candidates} candidates searched`,
+  );
 }
 
 const ox = optimiserVsExhaustive(50, 16, 18, 6);
 emit({ bench: 'optimiser-vs-exhaustive', ...ox, targetMinRatio: TARGET_QUALITY, targetSpeedup: TARGET_SPEEDUP });
 summary.push(
-  `optimiser vs exhaustive (${ox.instances} instances, ${ox.candidates} candidates, N = ${ox.size}): quality min ${ox.minRatio}, mean ${ox.meanRatio} `
-    + `(target ≥ ${TARGET_QUALITY}) ${verdict(ox.minRatio >= TARGET_QUALITY)}; speed ${ox.speedup}× (target ≥ ${TARGET_SPEEDUP}×) ${verdict(ox.speedup >= TARGET_SPEEDUP)}`,
+  `optimiser vs exhaustive (${ox.instances} instances, ${ox.candidates} candidates, N = ${ox.size}): quality min ${ox.minRatio}, mean ${ox.meanRatio} ` +
+    `(target ≥ ${TARGET_QUALITY}) ${verdict(ox.minRatio >= TARGET_QUALITY)}; speed ${ox.speedup}× (target ≥ ${TARGET_SPEEDUP}×) ${verdict(ox.speedup >= TARGET_SPEEDUP)}`,
 );
 
 console.log('\nSummary');

@@ -11,16 +11,26 @@ import { timeOnce } from './timing.js';
  * What narrowing the search (candidate-pool.ts) costs in quality: the mix objective with the
  * narrowed search, over the objective when greedy and swaps try every candidate.
  */
-export function narrowingQuality(cat: { name: string; species: Species[] }, sites: { name: string; site: Site }[], region: RegionContext) {
+export function narrowingQuality(
+  cat: { name: string; species: Species[] },
+  sites: { name: string; site: Site }[],
+  region: RegionContext,
+) {
   return sites.map(({ name, site }) => {
     const input = { species: cat.species, site, region };
     const c = buildCandidates(input);
     const { size } = resolveSize(input, c);
     const settings = { size, monarchsGoal: site.goals.includes('monarchs') };
     const objective = makeObjective(settings);
-    const narrowed = timeOnce(() => optimiseSelection(c.items, size, objective, { locked: c.locked, searchPool: (p) => narrowCandidates(p, settings) }));
+    const narrowed = timeOnce(() =>
+      optimiseSelection(c.items, size, objective, {
+        locked: c.locked,
+        searchPool: (p) => narrowCandidates(p, settings),
+      }),
+    );
     const full = timeOnce(() => optimiseSelection(c.items, size, objective, { locked: c.locked }));
-    if (balancePalette(input).objective !== round4(narrowed.result.value)) throw new Error('bench: balancePalette disagrees with its optimiser call');
+    if (balancePalette(input).objective !== round4(narrowed.result.value))
+      throw new Error('bench: balancePalette disagrees with its optimiser call');
     return {
       catalogue: cat.name,
       site: name,

@@ -9,7 +9,12 @@ import { FLOWER_COLOURS } from '../src/types/species.js';
  * caterpillar counts (tallamy-shropshire-2009 as the catalogue stores them), one grass in five.
  */
 const GENERA: [string, number][] = [
-  ['Solidago', 115], ['Symphyotrichum', 112], ['Asclepias', 12], ['Monarda', 7], ['Carex', 36], ['Zizia', 4],
+  ['Solidago', 115],
+  ['Symphyotrichum', 112],
+  ['Asclepias', 12],
+  ['Monarda', 7],
+  ['Carex', 36],
+  ['Zizia', 4],
 ];
 const TIERS: HeightTier[] = ['front', 'middle', 'back'];
 

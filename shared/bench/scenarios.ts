@@ -13,11 +13,23 @@ export function driftlessWisconsin(): RegionContext {
 export const SITES: { name: string; site: Site }[] = [
   {
     name: 'sunny-medium-500ft2',
-    site: { sun: 'full', moisture: 'medium', areaSqFt: 500, deerPressure: 'medium', goals: ['monarchs', 'pollinators'] },
+    site: {
+      sun: 'full',
+      moisture: 'medium',
+      areaSqFt: 500,
+      deerPressure: 'medium',
+      goals: ['monarchs', 'pollinators'],
+    },
   },
   {
     name: 'shady-wet-500ft2',
-    site: { sun: 'shade', moisture: 'wet', areaSqFt: 500, deerPressure: 'medium', goals: ['pollinators', 'shade-garden'] },
+    site: {
+      sun: 'shade',
+      moisture: 'wet',
+      areaSqFt: 500,
+      deerPressure: 'medium',
+      goals: ['pollinators', 'shade-garden'],
+    },
   },
 ];
 

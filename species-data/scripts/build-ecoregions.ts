@@ -45,7 +45,9 @@ const crosswalk: CountyEcoregions[] = overlaps.map((o) => {
     const near = hit ? { code: hit.code, km: 0 } : locator.nearestRegion(lon, lat);
     if (!near) throw new Error(`${o.county.fips}: no ecoregion within 200 km`);
     ecoregions = [{ code: near.code, share: 1 }];
-    const how = hit ? `inside ${near.code} (county area ${(o.countyArea / 1e6).toFixed(1)} km²)` : `nearest ${near.code}, ${near.km.toFixed(1)} km`;
+    const how = hit
+      ? `inside ${near.code} (county area ${(o.countyArea / 1e6).toFixed(1)} km²)`
+      : `nearest ${near.code}, ${near.km.toFixed(1)} km`;
     placed.push(`${o.county.fips} ${o.county.name}, ${o.county.state}: ${how}`);
   }
   return countyEcoregionSchema.parse({ fips: o.county.fips, name: o.county.name, state: o.county.state, ecoregions });
@@ -61,11 +63,14 @@ const byState = stateOverlaps(overlaps);
 const table: Ecoregion[] = regions.map((r) => {
   const note = noteByCode.get(r.code);
   if (!note) throw new Error(`ecoregion-notes.json has no entry for ${r.code} ${r.name}`);
-  if (note.name !== r.name) throw new Error(`ecoregion-notes.json: ${r.code} is "${r.name}" in the EPA file, not "${note.name}"`);
+  if (note.name !== r.name)
+    throw new Error(`ecoregion-notes.json: ${r.code} is "${r.name}" in the EPA file, not "${note.name}"`);
   const overlapsHere = byState.get(r.code) ?? [];
   for (const o of overlapsHere) {
     if (statesOf([o]).length === 0) {
-      console.log(`  left out ${r.code} in ${o.state}: ${(o.ofRegion * 100).toFixed(3)} % of region, ${(o.ofState * 100).toFixed(3)} % of state`);
+      console.log(
+        `  left out ${r.code} in ${o.state}: ${(o.ofRegion * 100).toFixed(3)} % of region, ${(o.ofState * 100).toFixed(3)} % of state`,
+      );
     }
   }
   const l2 = level2.get(note.level2)!;
@@ -78,17 +83,27 @@ const table: Ecoregion[] = regions.map((r) => {
     plantCommunities: note.plantCommunities,
     description: note.description,
     sources: {
-      code: 'epa-ecoregions-l3', name: 'epa-ecoregions-l3', states: 'epa-ecoregions-l3',
-      parents: notes.source, plantCommunities: notes.source,
+      code: 'epa-ecoregions-l3',
+      name: 'epa-ecoregions-l3',
+      states: 'epa-ecoregions-l3',
+      parents: notes.source,
+      plantCommunities: notes.source,
     },
   });
 });
-if (noteByCode.size !== regions.length) throw new Error('ecoregion-notes.json has entries for codes not in the EPA file');
+if (noteByCode.size !== regions.length)
+  throw new Error('ecoregion-notes.json has entries for codes not in the EPA file');
 
 // The two files should tell one story: a county's region should list the county's state.
 const statesByCode = new Map(table.map((e) => [e.code, new Set<string>(e.states)]));
-const disagree = crosswalk.flatMap((c) => c.ecoregions.filter((e) => !statesByCode.get(e.code)!.has(c.state)).map((e) => `${c.fips} ${c.state} ${e.code} ${e.share}`));
-console.log(`county regions missing from the region's state list: ${disagree.length}${disagree.length ? ` (${disagree.join('; ')})` : ''}`);
+const disagree = crosswalk.flatMap((c) =>
+  c.ecoregions
+    .filter((e) => !statesByCode.get(e.code)!.has(c.state))
+    .map((e) => `${c.fips} ${c.state} ${e.code} ${e.share}`),
+);
+console.log(
+  `county regions missing from the region's state list: ${disagree.length}${disagree.length ? ` (${disagree.join('; ')})` : ''}`,
+);
 
 // One record per line keeps the files reviewable in a diff while staying compact.
 const lines = (items: unknown[]) => `[\n${items.map((x) => JSON.stringify(x)).join(',\n')}\n]\n`;

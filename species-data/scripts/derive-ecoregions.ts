@@ -51,7 +51,15 @@ const NO_OLD_FIELDS = new Set(['49']);
 const TALLGRASS_PLAINS = new Set(['27', '28', '29', '32', '33', '34', '40', '46', '47', '48']);
 /** Dry western plains: an eastern plant gets in only through a grassland, sand or wetland habitat, not a streambank or woodland. */
 const DRY_PLAINS = new Set(['25', '26', '42', '43', '44']);
-const DRY_PLAINS_HABITATS = new Set<Habitat>(['shortgrass-prairie', 'mixed-grass-prairie', 'sand-prairie', 'dune', 'marsh', 'wetland', 'wet-prairie']);
+const DRY_PLAINS_HABITATS = new Set<Habitat>([
+  'shortgrass-prairie',
+  'mixed-grass-prairie',
+  'sand-prairie',
+  'dune',
+  'marsh',
+  'wetland',
+  'wet-prairie',
+]);
 const WESTERN_LEVEL1 = new Set(['6', '7', '10', '11', '12', '13']);
 const NEVER_BY_DEFAULT = new Set(['14', '81', '24', '6', '7', '8', '85']);
 const WESTERN_STATES = new Set(['AZ', 'CA', 'CO', 'ID', 'MT', 'NV', 'NM', 'OR', 'UT', 'WA', 'WY']);
@@ -59,18 +67,29 @@ const WESTERN_STATES = new Set(['AZ', 'CA', 'CO', 'ID', 'MT', 'NV', 'NM', 'OR', 
 export function firstPass(s: Pick<Species, 'nativeStates' | 'habitats'>, regions: Ecoregion[]): string[] {
   const states = new Set<string>(s.nativeStates);
   const westernStates = s.nativeStates.filter((st) => WESTERN_STATES.has(st)).length;
-  return regions.filter((r) => {
-    if (!r.states.some((st) => states.has(st))) return false;
-    if (WESTERN_LEVEL1.has(r.level1.code) && (westernStates < 8 || NEVER_BY_DEFAULT.has(r.code))) return false;
-    const communities = new Set<string>(r.plantCommunities);
-    const habitats = DRY_PLAINS.has(r.code) ? s.habitats.filter((h) => DRY_PLAINS_HABITATS.has(h)) : s.habitats;
-    return habitats.some((h) =>
-      (h === 'old-field' && !NO_OLD_FIELDS.has(r.code) && (OLD_FIELD_LEVEL1.has(r.level1.code) || TALLGRASS_PLAINS.has(r.code)))
-      || (HABITAT_MATCHES[h] ?? [h]).some((c) => communities.has(c)));
-  }).map((r) => r.code);
+  return regions
+    .filter((r) => {
+      if (!r.states.some((st) => states.has(st))) return false;
+      if (WESTERN_LEVEL1.has(r.level1.code) && (westernStates < 8 || NEVER_BY_DEFAULT.has(r.code))) return false;
+      const communities = new Set<string>(r.plantCommunities);
+      const habitats = DRY_PLAINS.has(r.code) ? s.habitats.filter((h) => DRY_PLAINS_HABITATS.has(h)) : s.habitats;
+      return habitats.some(
+        (h) =>
+          (h === 'old-field' &&
+            !NO_OLD_FIELDS.has(r.code) &&
+            (OLD_FIELD_LEVEL1.has(r.level1.code) || TALLGRASS_PLAINS.has(r.code))) ||
+          (HABITAT_MATCHES[h] ?? [h]).some((c) => communities.has(c)),
+      );
+    })
+    .map((r) => r.code);
 }
 
-export function applyLimits(s: Pick<Species, 'slug' | 'nativeStates'>, codes: string[], limits: RangeLimit[], regions: Ecoregion[]): string[] {
+export function applyLimits(
+  s: Pick<Species, 'slug' | 'nativeStates'>,
+  codes: string[],
+  limits: RangeLimit[],
+  regions: Ecoregion[],
+): string[] {
   const slug = s.slug;
   let out = [...codes];
   for (const l of limits.filter((x) => x.region)) {
@@ -94,7 +113,9 @@ function main(): void {
   const { species, ecoregions } = loadCatalogue();
   const limits: RangeLimit[] = JSON.parse(readFileSync(path.join(DATA_DIR, 'ecoregions', 'range-limits.json'), 'utf8'));
   const known = new Set(species.map((s) => s.slug));
-  for (const l of limits) for (const slug of l.slugs) if (!known.has(slug)) throw new Error(`range-limits.json names ${slug}, not in the catalogue`);
+  for (const l of limits)
+    for (const slug of l.slugs)
+      if (!known.has(slug)) throw new Error(`range-limits.json names ${slug}, not in the catalogue`);
   const perRegion = new Map<string, number>();
   let changed = 0;
   for (const s of species) {
@@ -115,7 +136,8 @@ function main(): void {
     writeRecordText(file, text);
   }
   const names = new Map(ecoregions.map((e) => [e.code, e.name]));
-  for (const e of ecoregions) console.log(`${e.code.padStart(2)} ${names.get(e.code)}: ${perRegion.get(e.code) ?? 0} species`);
+  for (const e of ecoregions)
+    console.log(`${e.code.padStart(2)} ${names.get(e.code)}: ${perRegion.get(e.code) ?? 0} species`);
   console.log(`${changed} record(s) ${check ? 'would change' : 'written'}`);
 }
 

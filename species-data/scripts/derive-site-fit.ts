@@ -11,16 +11,46 @@
  *   and Northcentral–Northeast regions (from memory; null where not recalled with confidence).
  * - `needsAcidSoil`, `selfSows`, `protectedIn`: curator lists below (from memory).
  */
-import type { Habitat, Moisture, Species, StateCode, Sun, WetlandIndicator, CommercialAvailability } from '@homeground/shared';
+import type {
+  Habitat,
+  Moisture,
+  Species,
+  StateCode,
+  Sun,
+  WetlandIndicator,
+  CommercialAvailability,
+} from '@homeground/shared';
 import { loadCatalogue } from '../src/catalogue.js';
 import { loadUsdaCharacteristics } from '../src/reference/usda-plants.js';
 import { inline, readRecordText, setKey, setSource, SPECIES_DIR, writeRecordText } from './record-text.js';
 import path from 'node:path';
 
-const OPEN: Habitat[] = ['prairie', 'sand-prairie', 'wet-prairie', 'savanna', 'glade', 'dune', 'old-field', 'shortgrass-prairie',
-  'mixed-grass-prairie', 'marsh', 'pine-barrens', 'coastal-plain', 'wetland', 'fen-bog'];
+const OPEN: Habitat[] = [
+  'prairie',
+  'sand-prairie',
+  'wet-prairie',
+  'savanna',
+  'glade',
+  'dune',
+  'old-field',
+  'shortgrass-prairie',
+  'mixed-grass-prairie',
+  'marsh',
+  'pine-barrens',
+  'coastal-plain',
+  'wetland',
+  'fen-bog',
+];
 const SHADED: Habitat[] = ['forest', 'floodplain-forest'];
-const DRY: Habitat[] = ['sand-prairie', 'glade', 'rock-outcrop', 'shortgrass-prairie', 'mixed-grass-prairie', 'dune', 'pine-barrens'];
+const DRY: Habitat[] = [
+  'sand-prairie',
+  'glade',
+  'rock-outcrop',
+  'shortgrass-prairie',
+  'mixed-grass-prairie',
+  'dune',
+  'pine-barrens',
+];
 const WET: Habitat[] = ['marsh', 'wetland', 'fen-bog', 'wet-prairie', 'streambank', 'floodplain-forest'];
 
 const has = (s: Pick<Species, 'habitats'>, list: Habitat[]) => s.habitats.filter((h) => list.includes(h)).length;
@@ -31,7 +61,10 @@ export function sunFirstPass(s: Pick<Species, 'sun' | 'habitats'>): Sun[] {
   const open = has(s, OPEN) > 0;
   const shaded = has(s, SHADED) > 0;
   if (sun.has('full') && sun.has('part') && !sun.has('shade')) return shaded && !open ? ['part'] : ['full'];
-  if (!sun.has('full')) return shaded && !open && s.habitats.every((h) => [...SHADED, 'streambank', 'rock-outcrop'].includes(h)) ? ['part', 'shade'] : ['part'];
+  if (!sun.has('full'))
+    return shaded && !open && s.habitats.every((h) => [...SHADED, 'streambank', 'rock-outcrop'].includes(h))
+      ? ['part', 'shade']
+      : ['part'];
   if (sun.has('full') && !sun.has('part')) return ['full'];
   // tolerates all three
   if (open && !shaded) return ['full'];
@@ -85,59 +118,204 @@ const OPTIMUM_OVERRIDES: Record<string, { sun?: Sun[]; moisture?: Moisture[] }> 
 
 /** National Wetland Plant List classes as recalled (Midwest / Northcentral–Northeast); others null. */
 const WETLAND_INDICATOR: Record<string, WetlandIndicator> = {
-  'asclepias-incarnata': 'OBL', 'asclepias-perennis': 'OBL', 'asclepias-lanceolata': 'OBL', 'asclepias-rubra': 'OBL',
-  'caltha-palustris': 'OBL', 'iris-versicolor': 'OBL', 'iris-virginica': 'OBL', 'iris-fulva': 'OBL', 'iris-brevicaulis': 'OBL',
-  'pontederia-cordata': 'OBL', 'sagittaria-latifolia': 'OBL', 'schoenoplectus-tabernaemontani': 'OBL',
-  'scirpus-atrovirens': 'OBL', 'scirpus-cyperinus': 'OBL', 'bolboschoenus-fluviatilis': 'OBL', 'eleocharis-palustris': 'OBL',
-  'carex-comosa': 'OBL', 'carex-crinita': 'OBL', 'carex-hystericina': 'OBL', 'carex-lupulina': 'OBL', 'carex-lurida': 'OBL',
-  'carex-stricta': 'OBL', 'carex-emoryi': 'OBL', 'carex-pellita': 'OBL', 'carex-vulpinoidea': 'FACW', 'carex-scoparia': 'FACW',
-  'carex-grayi': 'FACW', 'carex-squarrosa': 'FACW', 'carex-tribuloides': 'FACW', 'carex-intumescens': 'FACW',
-  'carex-bromoides': 'FACW', 'carex-annectens': 'FACW', 'carex-blanda': 'FAC',
-  'cephalanthus-occidentalis': 'OBL', 'chelone-glabra': 'OBL', 'chelone-obliqua': 'OBL', 'hibiscus-laevis': 'OBL',
-  'hibiscus-moscheutos': 'OBL', 'hibiscus-coccineus': 'OBL', 'leersia-oryzoides': 'OBL', 'mimulus-ringens': 'OBL',
-  'mimulus-alatus': 'OBL', 'lobelia-cardinalis': 'FACW', 'lobelia-siphilitica': 'FACW', 'eupatorium-perfoliatum': 'FACW',
-  'eutrochium-maculatum': 'OBL', 'eutrochium-fistulosum': 'FACW', 'eutrochium-purpureum': 'FAC', 'verbena-hastata': 'FACW',
-  'helenium-autumnale': 'FACW', 'glyceria-striata': 'OBL', 'juncus-effusus': 'OBL', 'juncus-torreyi': 'FACW',
-  'juncus-canadensis': 'OBL', 'juncus-tenuis': 'FAC', 'calamagrostis-canadensis': 'OBL', 'spartina-pectinata': 'FACW',
-  'onoclea-sensibilis': 'FACW', 'osmunda-regalis': 'OBL', 'osmunda-cinnamomea': 'FACW', 'thelypteris-palustris': 'FACW',
-  'athyrium-filix-femina': 'FAC', 'symphyotrichum-puniceum': 'OBL', 'symphyotrichum-novae-angliae': 'FACW',
-  'symphyotrichum-novi-belgii': 'FACW', 'boltonia-asteroides': 'FACW', 'helianthus-giganteus': 'FACW',
-  'helianthus-grosseserratus': 'FACW', 'helianthus-angustifolius': 'FACW', 'rudbeckia-laciniata': 'FACW',
-  'rudbeckia-hirta': 'FACU', 'liatris-pycnostachya': 'FAC', 'physostegia-virginiana': 'FACW',
-  'pycnanthemum-virginianum': 'FACW', 'pycnanthemum-tenuifolium': 'FAC', 'gentiana-andrewsii': 'FACW',
-  'gentianopsis-crinita': 'FACW', 'spiraea-alba': 'FACW', 'spiraea-tomentosa': 'FACW', 'rosa-palustris': 'OBL',
-  'cornus-amomum': 'FACW', 'cornus-sericea': 'FACW', 'cornus-racemosa': 'FAC', 'salix-discolor': 'FACW',
-  'salix-humilis': 'FACU', 'ilex-verticillata': 'FACW', 'vaccinium-corymbosum': 'FACW', 'itea-virginica': 'OBL',
-  'acer-rubrum': 'FAC', 'betula-nigra': 'FACW', 'quercus-bicolor': 'FACW', 'quercus-macrocarpa': 'FAC',
-  'quercus-alba': 'FACU', 'quercus-rubra': 'FACU', 'lindera-benzoin': 'FAC', 'asimina-triloba': 'FAC',
-  'aronia-melanocarpa': 'FAC', 'amorpha-fruticosa': 'FACW', 'impatiens-capensis': 'FACW', 'impatiens-pallida': 'FACW',
-  'scutellaria-lateriflora': 'FACW', 'stachys-tenuifolia': 'FACW', 'thalictrum-dasycarpum': 'FACW',
-  'thalictrum-pubescens': 'FACW', 'vernonia-fasciculata': 'FACW', 'vernonia-gigantea': 'FAC',
-  'vernonia-noveboracensis': 'FACW', 'lobelia-spicata': 'FAC', 'doellingeria-umbellata': 'FACW', 'solidago-patula': 'OBL',
-  'solidago-uliginosa': 'OBL', 'solidago-rugosa': 'FAC', 'solidago-sempervirens': 'FACW', 'oligoneuron-riddellii': 'OBL',
-  'oligoneuron-ohioense': 'OBL', 'packera-aurea': 'FACW', 'zizia-aurea': 'FAC', 'apios-americana': 'FACW',
-  'anemone-canadensis': 'FACW', 'andropogon-gerardii': 'FAC', 'panicum-virgatum': 'FAC', 'sorghastrum-nutans': 'FACU',
-  'schizachyrium-scoparium': 'FACU', 'elymus-riparius': 'FACW', 'cinna-arundinacea': 'FACW', 'tripsacum-dactyloides': 'FACW',
-  'dichanthelium-clandestinum': 'FAC', 'mertensia-virginica': 'FACW', 'phlox-maculata': 'FACW', 'phlox-glaberrima': 'FACW',
-  'phlox-paniculata': 'FACU', 'lobelia-inflata': 'FACU', 'monarda-fistulosa': 'FACU', 'monarda-didyma': 'FAC',
-  'penstemon-digitalis': 'FAC', 'veronicastrum-virginicum': 'FAC', 'helenium-flexuosum': 'FAC', 'coreopsis-rosea': 'OBL',
-  'symphyotrichum-prenanthoides': 'FAC', 'symphyotrichum-lateriflorum': 'FAC', 'symphyotrichum-ericoides': 'FACU',
-  'verbena-urticifolia': 'FAC', 'viola-sororia': 'FAC', 'dryopteris-carthusiana': 'FACW', 'thelypteris-noveboracensis': 'FAC',
-  'polystichum-acrostichoides': 'FACU', 'geranium-maculatum': 'FACU', 'liatris-spicata': 'FAC',
+  'asclepias-incarnata': 'OBL',
+  'asclepias-perennis': 'OBL',
+  'asclepias-lanceolata': 'OBL',
+  'asclepias-rubra': 'OBL',
+  'caltha-palustris': 'OBL',
+  'iris-versicolor': 'OBL',
+  'iris-virginica': 'OBL',
+  'iris-fulva': 'OBL',
+  'iris-brevicaulis': 'OBL',
+  'pontederia-cordata': 'OBL',
+  'sagittaria-latifolia': 'OBL',
+  'schoenoplectus-tabernaemontani': 'OBL',
+  'scirpus-atrovirens': 'OBL',
+  'scirpus-cyperinus': 'OBL',
+  'bolboschoenus-fluviatilis': 'OBL',
+  'eleocharis-palustris': 'OBL',
+  'carex-comosa': 'OBL',
+  'carex-crinita': 'OBL',
+  'carex-hystericina': 'OBL',
+  'carex-lupulina': 'OBL',
+  'carex-lurida': 'OBL',
+  'carex-stricta': 'OBL',
+  'carex-emoryi': 'OBL',
+  'carex-pellita': 'OBL',
+  'carex-vulpinoidea': 'FACW',
+  'carex-scoparia': 'FACW',
+  'carex-grayi': 'FACW',
+  'carex-squarrosa': 'FACW',
+  'carex-tribuloides': 'FACW',
+  'carex-intumescens': 'FACW',
+  'carex-bromoides': 'FACW',
+  'carex-annectens': 'FACW',
+  'carex-blanda': 'FAC',
+  'cephalanthus-occidentalis': 'OBL',
+  'chelone-glabra': 'OBL',
+  'chelone-obliqua': 'OBL',
+  'hibiscus-laevis': 'OBL',
+  'hibiscus-moscheutos': 'OBL',
+  'hibiscus-coccineus': 'OBL',
+  'leersia-oryzoides': 'OBL',
+  'mimulus-ringens': 'OBL',
+  'mimulus-alatus': 'OBL',
+  'lobelia-cardinalis': 'FACW',
+  'lobelia-siphilitica': 'FACW',
+  'eupatorium-perfoliatum': 'FACW',
+  'eutrochium-maculatum': 'OBL',
+  'eutrochium-fistulosum': 'FACW',
+  'eutrochium-purpureum': 'FAC',
+  'verbena-hastata': 'FACW',
+  'helenium-autumnale': 'FACW',
+  'glyceria-striata': 'OBL',
+  'juncus-effusus': 'OBL',
+  'juncus-torreyi': 'FACW',
+  'juncus-canadensis': 'OBL',
+  'juncus-tenuis': 'FAC',
+  'calamagrostis-canadensis': 'OBL',
+  'spartina-pectinata': 'FACW',
+  'onoclea-sensibilis': 'FACW',
+  'osmunda-regalis': 'OBL',
+  'osmunda-cinnamomea': 'FACW',
+  'thelypteris-palustris': 'FACW',
+  'athyrium-filix-femina': 'FAC',
+  'symphyotrichum-puniceum': 'OBL',
+  'symphyotrichum-novae-angliae': 'FACW',
+  'symphyotrichum-novi-belgii': 'FACW',
+  'boltonia-asteroides': 'FACW',
+  'helianthus-giganteus': 'FACW',
+  'helianthus-grosseserratus': 'FACW',
+  'helianthus-angustifolius': 'FACW',
+  'rudbeckia-laciniata': 'FACW',
+  'rudbeckia-hirta': 'FACU',
+  'liatris-pycnostachya': 'FAC',
+  'physostegia-virginiana': 'FACW',
+  'pycnanthemum-virginianum': 'FACW',
+  'pycnanthemum-tenuifolium': 'FAC',
+  'gentiana-andrewsii': 'FACW',
+  'gentianopsis-crinita': 'FACW',
+  'spiraea-alba': 'FACW',
+  'spiraea-tomentosa': 'FACW',
+  'rosa-palustris': 'OBL',
+  'cornus-amomum': 'FACW',
+  'cornus-sericea': 'FACW',
+  'cornus-racemosa': 'FAC',
+  'salix-discolor': 'FACW',
+  'salix-humilis': 'FACU',
+  'ilex-verticillata': 'FACW',
+  'vaccinium-corymbosum': 'FACW',
+  'itea-virginica': 'OBL',
+  'acer-rubrum': 'FAC',
+  'betula-nigra': 'FACW',
+  'quercus-bicolor': 'FACW',
+  'quercus-macrocarpa': 'FAC',
+  'quercus-alba': 'FACU',
+  'quercus-rubra': 'FACU',
+  'lindera-benzoin': 'FAC',
+  'asimina-triloba': 'FAC',
+  'aronia-melanocarpa': 'FAC',
+  'amorpha-fruticosa': 'FACW',
+  'impatiens-capensis': 'FACW',
+  'impatiens-pallida': 'FACW',
+  'scutellaria-lateriflora': 'FACW',
+  'stachys-tenuifolia': 'FACW',
+  'thalictrum-dasycarpum': 'FACW',
+  'thalictrum-pubescens': 'FACW',
+  'vernonia-fasciculata': 'FACW',
+  'vernonia-gigantea': 'FAC',
+  'vernonia-noveboracensis': 'FACW',
+  'lobelia-spicata': 'FAC',
+  'doellingeria-umbellata': 'FACW',
+  'solidago-patula': 'OBL',
+  'solidago-uliginosa': 'OBL',
+  'solidago-rugosa': 'FAC',
+  'solidago-sempervirens': 'FACW',
+  'oligoneuron-riddellii': 'OBL',
+  'oligoneuron-ohioense': 'OBL',
+  'packera-aurea': 'FACW',
+  'zizia-aurea': 'FAC',
+  'apios-americana': 'FACW',
+  'anemone-canadensis': 'FACW',
+  'andropogon-gerardii': 'FAC',
+  'panicum-virgatum': 'FAC',
+  'sorghastrum-nutans': 'FACU',
+  'schizachyrium-scoparium': 'FACU',
+  'elymus-riparius': 'FACW',
+  'cinna-arundinacea': 'FACW',
+  'tripsacum-dactyloides': 'FACW',
+  'dichanthelium-clandestinum': 'FAC',
+  'mertensia-virginica': 'FACW',
+  'phlox-maculata': 'FACW',
+  'phlox-glaberrima': 'FACW',
+  'phlox-paniculata': 'FACU',
+  'lobelia-inflata': 'FACU',
+  'monarda-fistulosa': 'FACU',
+  'monarda-didyma': 'FAC',
+  'penstemon-digitalis': 'FAC',
+  'veronicastrum-virginicum': 'FAC',
+  'helenium-flexuosum': 'FAC',
+  'coreopsis-rosea': 'OBL',
+  'symphyotrichum-prenanthoides': 'FAC',
+  'symphyotrichum-lateriflorum': 'FAC',
+  'symphyotrichum-ericoides': 'FACU',
+  'verbena-urticifolia': 'FAC',
+  'viola-sororia': 'FAC',
+  'dryopteris-carthusiana': 'FACW',
+  'thelypteris-noveboracensis': 'FAC',
+  'polystichum-acrostichoides': 'FACU',
+  'geranium-maculatum': 'FACU',
+  'liatris-spicata': 'FAC',
 };
 
 /** Needs acid soil to thrive (from memory). */
-const NEEDS_ACID = new Set(['vaccinium-angustifolium', 'vaccinium-corymbosum', 'clethra-alnifolia', 'lupinus-perennis',
-  'baptisia-tinctoria', 'tephrosia-virginiana', 'dennstaedtia-punctilobula', 'osmunda-cinnamomea']);
+const NEEDS_ACID = new Set([
+  'vaccinium-angustifolium',
+  'vaccinium-corymbosum',
+  'clethra-alnifolia',
+  'lupinus-perennis',
+  'baptisia-tinctoria',
+  'tephrosia-virginiana',
+  'dennstaedtia-punctilobula',
+  'osmunda-cinnamomea',
+]);
 
 /** Heavy self-sowers: seed themselves around a bed (from memory). */
-const SELF_SOWS = new Set(['oenothera-biennis', 'rudbeckia-hirta', 'rudbeckia-triloba', 'coreopsis-tinctoria', 'helianthus-annuus',
-  'chamaecrista-fasciculata', 'gaillardia-pulchella', 'lobelia-inflata', 'lobelia-siphilitica', 'erigeron-philadelphicus',
-  'symphyotrichum-pilosum', 'symphyotrichum-novae-angliae', 'eupatorium-altissimum', 'verbena-hastata', 'verbena-urticifolia',
-  'impatiens-capensis', 'impatiens-pallida', 'aquilegia-canadensis', 'heliopsis-helianthoides', 'penstemon-digitalis',
-  'agastache-foeniculum', 'campanulastrum-americanum', 'coreopsis-lanceolata', 'tradescantia-ohiensis', 'sisyrinchium-angustifolium',
-  'mertensia-virginica', 'polemonium-reptans', 'ruellia-humilis', 'clematis-virginiana', 'elymus-canadensis', 'monarda-punctata',
-  'hypericum-punctatum', 'vernonia-gigantea']);
+const SELF_SOWS = new Set([
+  'oenothera-biennis',
+  'rudbeckia-hirta',
+  'rudbeckia-triloba',
+  'coreopsis-tinctoria',
+  'helianthus-annuus',
+  'chamaecrista-fasciculata',
+  'gaillardia-pulchella',
+  'lobelia-inflata',
+  'lobelia-siphilitica',
+  'erigeron-philadelphicus',
+  'symphyotrichum-pilosum',
+  'symphyotrichum-novae-angliae',
+  'eupatorium-altissimum',
+  'verbena-hastata',
+  'verbena-urticifolia',
+  'impatiens-capensis',
+  'impatiens-pallida',
+  'aquilegia-canadensis',
+  'heliopsis-helianthoides',
+  'penstemon-digitalis',
+  'agastache-foeniculum',
+  'campanulastrum-americanum',
+  'coreopsis-lanceolata',
+  'tradescantia-ohiensis',
+  'sisyrinchium-angustifolium',
+  'mertensia-virginica',
+  'polemonium-reptans',
+  'ruellia-humilis',
+  'clematis-virginiana',
+  'elymus-canadensis',
+  'monarda-punctata',
+  'hypericum-punctatum',
+  'vernonia-gigantea',
+]);
 
 /** States where the species is listed (endangered, threatened or protected from collecting), as recalled. */
 const PROTECTED_IN: Record<string, StateCode[]> = {
@@ -167,14 +345,17 @@ function main(): void {
   for (const table of [OPTIMUM_OVERRIDES, WETLAND_INDICATOR, PROTECTED_IN]) {
     for (const slug of Object.keys(table)) if (!slugs.has(slug)) throw new Error(`${slug} is not in the catalogue`);
   }
-  for (const slug of [...NEEDS_ACID, ...SELF_SOWS]) if (!slugs.has(slug)) throw new Error(`${slug} is not in the catalogue`);
+  for (const slug of [...NEEDS_ACID, ...SELF_SOWS])
+    if (!slugs.has(slug)) throw new Error(`${slug} is not in the catalogue`);
   const counts = { indicator: 0, availability: 0, acid: 0, selfSows: 0, protected: 0 };
   for (const s of species) {
     const o = OPTIMUM_OVERRIDES[s.slug] ?? {};
     const sunOptimum = o.sun ?? sunFirstPass(s);
     const moistureOptimum = o.moisture ?? moistureFirstPass(s);
-    for (const v of sunOptimum) if (!s.sun.includes(v)) throw new Error(`${s.slug}: sun optimum ${v} is not among what it tolerates`);
-    for (const v of moistureOptimum) if (!s.moisture.includes(v)) throw new Error(`${s.slug}: moisture optimum ${v} is not among what it tolerates`);
+    for (const v of sunOptimum)
+      if (!s.sun.includes(v)) throw new Error(`${s.slug}: sun optimum ${v} is not among what it tolerates`);
+    for (const v of moistureOptimum)
+      if (!s.moisture.includes(v)) throw new Error(`${s.slug}: moisture optimum ${v} is not among what it tolerates`);
     const usda = characteristics.get(s.usdaSymbol)?.commercial_availability?.trim() ?? '';
     const availability = AVAILABILITY[usda] ?? null;
     if (usda && !availability) throw new Error(`${s.slug}: unknown USDA commercial_availability "${usda}"`);
@@ -202,7 +383,9 @@ function main(): void {
     text = setSource(text, 'protectedIn', 'from-memory', 'commercialAvailability');
     writeRecordText(file, text);
   }
-  console.log(`${species.length} records: wetland indicator ${counts.indicator}, USDA availability ${counts.availability}, acid soil ${counts.acid}, self-sowers ${counts.selfSows}, protected somewhere ${counts.protected}`);
+  console.log(
+    `${species.length} records: wetland indicator ${counts.indicator}, USDA availability ${counts.availability}, acid soil ${counts.acid}, self-sowers ${counts.selfSows}, protected somewhere ${counts.protected}`,
+  );
 }
 
 main();

@@ -54,7 +54,12 @@ function intersectAreas(county: County, candidates: EpaRegion[]): Map<string, nu
  * Fallback: a lon/lat grid of about `target` points inside the county, each weighted by cos(latitude)
  * because a grid cell's ground area shrinks towards the pole.
  */
-export function sampleAreas(county: County, candidates: EpaRegion[], countyArea: number, target = 2000): Map<string, number> {
+export function sampleAreas(
+  county: County,
+  candidates: EpaRegion[],
+  countyArea: number,
+  target = 2000,
+): Map<string, number> {
   const [w, s, e, n] = county.bbox;
   const step = Math.sqrt(((e - w) * (n - s)) / target) || 0.001;
   const weights = new Map<string, number>();

@@ -58,9 +58,16 @@ export function stateOverlaps(overlaps: CountyOverlap[]): Map<string, StateOverl
   }
   const out = new Map<string, StateOverlap[]>();
   for (const [code, row] of cell) {
-    out.set(code, [...row].map(([state, a]) => ({
-      state, ofRegion: a / regionArea.get(code)!, ofState: a / stateArea.get(state)!,
-    })).sort((x, y) => x.state.localeCompare(y.state)));
+    out.set(
+      code,
+      [...row]
+        .map(([state, a]) => ({
+          state,
+          ofRegion: a / regionArea.get(code)!,
+          ofState: a / stateArea.get(state)!,
+        }))
+        .sort((x, y) => x.state.localeCompare(y.state)),
+    );
   }
   return out;
 }

@@ -10,7 +10,10 @@ import { DATA_DIR } from '../src/catalogue.js';
 export const SPECIES_DIR = path.join(DATA_DIR, 'species');
 
 export function speciesFiles(): string[] {
-  return readdirSync(SPECIES_DIR).filter((f) => f.endsWith('.json')).sort().map((f) => path.join(SPECIES_DIR, f));
+  return readdirSync(SPECIES_DIR)
+    .filter((f) => f.endsWith('.json'))
+    .sort()
+    .map((f) => path.join(SPECIES_DIR, f));
 }
 
 /** Index just past the JSON value that starts at `start` (skipping leading spaces). */
@@ -91,5 +94,7 @@ export function writeRecordText(file: string, text: string): void {
 
 /** One-line JSON for a short array or scalar, matching the files' hand layout (`["a", "b"]`). */
 export function inline(value: unknown): string {
-  return JSON.stringify(value).replace(/","/g, '", "').replace(/,(?=[0-9"[{])/g, ', ');
+  return JSON.stringify(value)
+    .replace(/","/g, '", "')
+    .replace(/,(?=[0-9"[{])/g, ', ');
 }

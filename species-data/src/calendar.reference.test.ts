@@ -44,15 +44,24 @@ describe.skipIf(!available)('calendar durations vs CHECK-VALUES.md §4', () => {
 
   it('warm-season grass waits for soil ≥ 10–13 °C (M): little bluestem in outdoor pots sprouts after the frost', () => {
     row('Transplant/warm-season grass sowing soil-temperature threshold', ['10–13']);
-    const c = buildSowingCalendar({ lastFrost: '2027-05-10', today: '2026-10-01', plans: [{ species: bySlug.get('schizachyrium-scoparium')!, method: 'outdoor-pot-winter' }] });
+    const c = buildSowingCalendar({
+      lastFrost: '2027-05-10',
+      today: '2026-10-01',
+      plans: [{ species: bySlug.get('schizachyrium-scoparium')!, method: 'outdoor-pot-winter' }],
+    });
     expect(c.events.find((e) => e.kind === 'sprouts-expected')!.date > '2027-05-10').toBe(true);
   });
 });
 
 describe.skipIf(!available)('readiness rules vs CHECK-VALUES.md §1', () => {
   it('pale purple coneflower: 2 years to a finished 160 ml plug (NPN-ECPA, R) → a second season', () => {
-    expect(findCheckValueRow(checkValueRows(), 'Echinacea pallida', ['160 ml plug', 'years', 'NPN-ECPA', '| R'])).toBeDefined();
-    expect(readinessOf(bySlug.get('echinacea-pallida')!)).toMatchObject({ secondSeason: true, source: 'npn-echinacea-pallida' });
+    expect(
+      findCheckValueRow(checkValueRows(), 'Echinacea pallida', ['160 ml plug', 'years', 'NPN-ECPA', '| R']),
+    ).toBeDefined();
+    expect(readinessOf(bySlug.get('echinacea-pallida')!)).toMatchObject({
+      secondSeason: true,
+      source: 'npn-echinacea-pallida',
+    });
   });
 
   it('lupine germinates fastest at 24–29 °C (JEH96, R) → waits for warm soil outdoors', () => {
@@ -69,7 +78,9 @@ describe.skipIf(!available)('readiness rules vs CHECK-VALUES.md §1', () => {
 });
 
 describe('readiness over the whole catalogue', () => {
-  const sourceKeys = new Set((JSON.parse(readFileSync(path.join(DATA_DIR, 'sources.json'), 'utf8')) as { key: string }[]).map((s) => s.key));
+  const sourceKeys = new Set(
+    (JSON.parse(readFileSync(path.join(DATA_DIR, 'sources.json'), 'utf8')) as { key: string }[]).map((s) => s.key),
+  );
 
   it('every rule applied names a source key in sources.json', () => {
     for (const s of species) expect(sourceKeys, `${s.slug}: ${readinessOf(s).source}`).toContain(readinessOf(s).source);
@@ -79,9 +90,17 @@ describe('readiness over the whole catalogue', () => {
     const warmCold = species.filter((s) => s.germination.treatments.some((t) => t.kind === 'warm-moist'));
     expect(warmCold.length).toBeGreaterThan(40);
     for (const s of warmCold) {
-      const warm = s.germination.treatments.filter((t) => t.kind === 'warm-moist').reduce((n, t) => n + (t.days ?? 0), 0);
-      const cold = s.germination.treatments.filter((t) => t.kind === 'cold-moist').reduce((n, t) => n + (t.days ?? 0), 0);
-      const c = buildSowingCalendar({ lastFrost: '2027-05-10', today: '2026-07-01', plans: [{ species: s, method: 'outdoor-pot-winter' }] });
+      const warm = s.germination.treatments
+        .filter((t) => t.kind === 'warm-moist')
+        .reduce((n, t) => n + (t.days ?? 0), 0);
+      const cold = s.germination.treatments
+        .filter((t) => t.kind === 'cold-moist')
+        .reduce((n, t) => n + (t.days ?? 0), 0);
+      const c = buildSowingCalendar({
+        lastFrost: '2027-05-10',
+        today: '2026-07-01',
+        plans: [{ species: s, method: 'outdoor-pot-winter' }],
+      });
       const on = (k: string) => c.events.find((e) => e.kind === k && e.speciesSlug)!.date;
       expect(daysBetween(on('sow'), on('cms-start')), s.slug).toBeGreaterThanOrEqual(warm);
       expect(daysBetween(on('cms-start'), on('sprouts-expected')), s.slug).toBeGreaterThanOrEqual(cold);

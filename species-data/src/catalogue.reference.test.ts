@@ -10,12 +10,24 @@ import { DATA_DIR, loadCatalogue } from './catalogue.js';
 import { checkValueRows, findCheckValueRow } from './reference/check-values.js';
 import { referenceAvailable } from './reference/reference-dir.js';
 import { loadSylvanSeedsPercentages, SYLVANSEEDS_FILE } from './reference/sylvanseeds.js';
-import { loadLepidopteraByGenus, loadUsdaCharacteristics, loadUsdaDistribution, loadUsdaTaxa } from './reference/usda-plants.js';
+import {
+  loadLepidopteraByGenus,
+  loadUsdaCharacteristics,
+  loadUsdaDistribution,
+  loadUsdaTaxa,
+} from './reference/usda-plants.js';
 
-const FILES = ['usda_plants_taxa.csv', 'usda_plants_state_distribution.csv', 'tallamy_shropshire_2009_lepidoptera_by_plant_genus.csv', 'CHECK-VALUES.md'];
+const FILES = [
+  'usda_plants_taxa.csv',
+  'usda_plants_state_distribution.csv',
+  'tallamy_shropshire_2009_lepidoptera_by_plant_genus.csv',
+  'CHECK-VALUES.md',
+];
 const available = referenceAvailable(FILES);
 const genusOf = (s: Species) => s.scientificName.split(' ')[0];
-const aliases: { genus: string; listedAs: string }[] = JSON.parse(readFileSync(path.join(DATA_DIR, 'genus-aliases.json'), 'utf8'));
+const aliases: { genus: string; listedAs: string }[] = JSON.parse(
+  readFileSync(path.join(DATA_DIR, 'genus-aliases.json'), 'utf8'),
+);
 
 describe.skipIf(!available)('catalogue vs USDA PLANTS (usda_plants_taxa.csv, state distribution)', () => {
   const { species, realignments } = loadCatalogue();
@@ -33,17 +45,23 @@ describe.skipIf(!available)('catalogue vs USDA PLANTS (usda_plants_taxa.csv, sta
       const problems: { field: string; text: string }[] = [];
       if (!t) problems.push({ field: 'usdaSymbol', text: `symbol ${s.usdaSymbol} is not an accepted USDA taxon` });
       else {
-        if (t.name !== s.scientificName) problems.push({ field: 'scientificName', text: `USDA names ${s.usdaSymbol} "${t.name}"` });
+        if (t.name !== s.scientificName)
+          problems.push({ field: 'scientificName', text: `USDA names ${s.usdaSymbol} "${t.name}"` });
         // USDA keeps older family concepts; only documented APG IV / PPG I realignments are accepted.
-        const realigned = realignments.some((r) => r.usdaFamily === t.family && r.family === s.family && r.genera.includes(genusOf(s)));
-        if (t.family !== s.family && !realigned) problems.push({ field: 'family', text: `USDA family ${t.family}, record ${s.family}` });
+        const realigned = realignments.some(
+          (r) => r.usdaFamily === t.family && r.family === s.family && r.genera.includes(genusOf(s)),
+        );
+        if (t.family !== s.family && !realigned)
+          problems.push({ field: 'family', text: `USDA family ${t.family}, record ${s.family}` });
       }
       if (problems.length === 0) agree++;
       const unexplained = problems.filter((p) => !s.reconciliations.some((r) => r.field === p.field));
       disagreements.push(...unexplained.map((p) => `${s.slug}: ${p.text} (no reconciliation note)`));
     }
     const share = agree / species.length;
-    console.log(`USDA PLANTS agreement on symbol/name/family: ${agree}/${species.length} = ${(share * 100).toFixed(1)} %`);
+    console.log(
+      `USDA PLANTS agreement on symbol/name/family: ${agree}/${species.length} = ${(share * 100).toFixed(1)} %`,
+    );
     expect(disagreements).toEqual([]);
     expect(share).toBeGreaterThanOrEqual(0.98);
   });
@@ -62,115 +80,136 @@ describe.skipIf(!available)('catalogue vs USDA PLANTS (usda_plants_taxa.csv, sta
   });
 });
 
-describe.skipIf(!available || !referenceAvailable(['usda_plants_characteristics.csv']))('catalogue vs USDA PLANTS characteristics (usda_plants_characteristics.csv)', () => {
-  it('records commercial availability exactly as USDA gives it, and null where USDA has no value', () => {
-    const words: Record<string, string> = {
-      'Routinely Available': 'routine', 'Contracting Only': 'contract-only',
-      'Field Collections Only': 'field-collection-only', 'No Known Source': 'none-known',
-    };
-    const characteristics = loadUsdaCharacteristics();
-    const bad: string[] = [];
-    let withValue = 0;
-    for (const s of loadCatalogue().species) {
-      const usda = characteristics.get(s.usdaSymbol)?.commercial_availability?.trim() ?? '';
-      const expected = usda ? words[usda] : null;
-      if (expected) withValue++;
-      if ((s.commercialAvailability ?? null) !== expected) bad.push(`${s.slug}: ${s.commercialAvailability}, USDA "${usda}"`);
-    }
-    expect(withValue).toBeGreaterThan(100);
-    expect(bad).toEqual([]);
-  });
-
-  it('gives a poison caution to every species USDA rates toxic (toxicity Slight, Moderate or Severe)', () => {
-    const characteristics = loadUsdaCharacteristics();
-    const missing: string[] = [];
-    let rated = 0;
-    for (const s of loadCatalogue().species) {
-      const toxicity = characteristics.get(s.usdaSymbol)?.toxicity ?? '';
-      if (!['Slight', 'Moderate', 'Severe'].includes(toxicity)) continue;
-      rated++;
-      if (!s.cautions.some((c) => c.kind === 'toxic-if-eaten' || c.kind === 'livestock' || c.kind === 'pets')) missing.push(`${s.slug} (${toxicity})`);
-    }
-    expect(rated).toBeGreaterThan(5);
-    expect(missing).toEqual([]);
-  });
-
-  /** A record differs when USDA's mature height lies outside its range widened by a fifth each way. */
-  it('agrees with USDA mature height (height_mature_feet), or the record explains why USDA is wrong', () => {
-    const characteristics = loadUsdaCharacteristics();
-    const unexplained: string[] = [];
-    let compared = 0;
-    let differ = 0;
-    for (const s of loadCatalogue().species) {
-      const feet = Number(characteristics.get(s.usdaSymbol)?.height_mature_feet || NaN);
-      if (!Number.isFinite(feet)) continue;
-      compared++;
-      const cm = feet * 30.48;
-      if (cm >= s.heightCm.min * 0.8 && cm <= s.heightCm.max * 1.2) continue;
-      differ++;
-      if (!s.reconciliations.some((r) => r.field === 'heightCm')) unexplained.push(`${s.slug}: ${s.heightCm.min}–${s.heightCm.max} cm, USDA ${feet} ft (${Math.round(cm)} cm)`);
-    }
-    console.log(`heights compared with USDA: ${compared}; ${differ} differ, each with a reconciliation note`);
-    expect(compared).toBeGreaterThan(100);
-    expect(unexplained).toEqual([]);
-  });
-
-  /** USDA gives a season; the record differs when none of its months falls in that season. */
-  it('agrees with USDA bloom period (bloom_period), or the record explains why USDA is wrong', () => {
-    const SEASON_MONTHS: Record<string, number[]> = {
-      'Late Winter': [2, 3], Winter: [12, 1, 2], 'Early Spring': [3, 4], 'Mid Spring': [4, 5], 'Late Spring': [5, 6],
-      Spring: [3, 4, 5, 6], 'Early Summer': [6, 7], 'Mid Summer': [7], 'Late Summer': [8, 9], Summer: [6, 7, 8], Fall: [9, 10],
-    };
-    const characteristics = loadUsdaCharacteristics();
-    const unexplained: string[] = [];
-    let compared = 0;
-    let differ = 0;
-    for (const s of loadCatalogue().species) {
-      const season = characteristics.get(s.usdaSymbol)?.bloom_period ?? '';
-      const months = SEASON_MONTHS[season];
-      if (!months || s.bloomMonths.length === 0) continue;
-      compared++;
-      if (s.bloomMonths.some((m) => months.includes(m))) continue;
-      differ++;
-      if (!s.reconciliations.some((r) => r.field === 'bloomMonths')) unexplained.push(`${s.slug}: months ${s.bloomMonths.join(',')}, USDA "${season}"`);
-    }
-    console.log(`bloom months compared with USDA: ${compared}; ${differ} differ, each with a reconciliation note`);
-    expect(compared).toBeGreaterThan(100);
-    expect(unexplained).toEqual([]);
-  });
-});
-
-describe.skipIf(!referenceAvailable([SYLVANSEEDS_FILE]))('germination rates vs SylvanSeeds (Fernández-Pascual 2021) laboratory trials', () => {
-  /** A record differs when its rate lies outside the trials' range widened by a fifth each way. */
-  it('keeps each stored rate near the published trials, or the record explains the difference', () => {
-    const trials = loadSylvanSeedsPercentages();
-    const unexplained: string[] = [];
-    let compared = 0;
-    for (const s of loadCatalogue().species) {
-      const pct = trials.get(s.scientificName);
-      if (!pct?.length) continue;
-      compared++;
-      const lo = Math.min(...pct);
-      const hi = Math.max(...pct);
-      const rate = s.germination.germinationRatePct;
-      if (rate >= lo * 0.8 && rate <= hi * 1.2) continue;
-      if (!s.reconciliations.some((r) => r.field === 'germination.germinationRatePct')) {
-        unexplained.push(`${s.slug}: ${rate} %, trials ${Math.round(lo)}–${Math.round(hi)} %`);
+describe.skipIf(!available || !referenceAvailable(['usda_plants_characteristics.csv']))(
+  'catalogue vs USDA PLANTS characteristics (usda_plants_characteristics.csv)',
+  () => {
+    it('records commercial availability exactly as USDA gives it, and null where USDA has no value', () => {
+      const words: Record<string, string> = {
+        'Routinely Available': 'routine',
+        'Contracting Only': 'contract-only',
+        'Field Collections Only': 'field-collection-only',
+        'No Known Source': 'none-known',
+      };
+      const characteristics = loadUsdaCharacteristics();
+      const bad: string[] = [];
+      let withValue = 0;
+      for (const s of loadCatalogue().species) {
+        const usda = characteristics.get(s.usdaSymbol)?.commercial_availability?.trim() ?? '';
+        const expected = usda ? words[usda] : null;
+        if (expected) withValue++;
+        if ((s.commercialAvailability ?? null) !== expected)
+          bad.push(`${s.slug}: ${s.commercialAvailability}, USDA "${usda}"`);
       }
-    }
-    console.log(`germination rates compared with SylvanSeeds: ${compared} species`);
-    expect(compared).toBeGreaterThan(20);
-    expect(unexplained).toEqual([]);
-  });
+      expect(withValue).toBeGreaterThan(100);
+      expect(bad).toEqual([]);
+    });
 
-  it('Pennsylvania sedge: the trials show 64–89 %, and the record is in that range', () => {
-    const pct = loadSylvanSeedsPercentages().get('Carex pensylvanica') ?? [];
-    expect(Math.round(Math.min(...pct))).toBe(64);
-    expect(Math.round(Math.max(...pct))).toBe(89);
-    const sedge = loadCatalogue().species.find((s) => s.slug === 'carex-pensylvanica');
-    expect(sedge?.germination.germinationRatePct).toBeGreaterThanOrEqual(64);
-  });
-});
+    it('gives a poison caution to every species USDA rates toxic (toxicity Slight, Moderate or Severe)', () => {
+      const characteristics = loadUsdaCharacteristics();
+      const missing: string[] = [];
+      let rated = 0;
+      for (const s of loadCatalogue().species) {
+        const toxicity = characteristics.get(s.usdaSymbol)?.toxicity ?? '';
+        if (!['Slight', 'Moderate', 'Severe'].includes(toxicity)) continue;
+        rated++;
+        if (!s.cautions.some((c) => c.kind === 'toxic-if-eaten' || c.kind === 'livestock' || c.kind === 'pets'))
+          missing.push(`${s.slug} (${toxicity})`);
+      }
+      expect(rated).toBeGreaterThan(5);
+      expect(missing).toEqual([]);
+    });
+
+    /** A record differs when USDA's mature height lies outside its range widened by a fifth each way. */
+    it('agrees with USDA mature height (height_mature_feet), or the record explains why USDA is wrong', () => {
+      const characteristics = loadUsdaCharacteristics();
+      const unexplained: string[] = [];
+      let compared = 0;
+      let differ = 0;
+      for (const s of loadCatalogue().species) {
+        const feet = Number(characteristics.get(s.usdaSymbol)?.height_mature_feet || NaN);
+        if (!Number.isFinite(feet)) continue;
+        compared++;
+        const cm = feet * 30.48;
+        if (cm >= s.heightCm.min * 0.8 && cm <= s.heightCm.max * 1.2) continue;
+        differ++;
+        if (!s.reconciliations.some((r) => r.field === 'heightCm'))
+          unexplained.push(`${s.slug}: ${s.heightCm.min}–${s.heightCm.max} cm, USDA ${feet} ft (${Math.round(cm)} cm)`);
+      }
+      console.log(`heights compared with USDA: ${compared}; ${differ} differ, each with a reconciliation note`);
+      expect(compared).toBeGreaterThan(100);
+      expect(unexplained).toEqual([]);
+    });
+
+    /** USDA gives a season; the record differs when none of its months falls in that season. */
+    it('agrees with USDA bloom period (bloom_period), or the record explains why USDA is wrong', () => {
+      const SEASON_MONTHS: Record<string, number[]> = {
+        'Late Winter': [2, 3],
+        Winter: [12, 1, 2],
+        'Early Spring': [3, 4],
+        'Mid Spring': [4, 5],
+        'Late Spring': [5, 6],
+        Spring: [3, 4, 5, 6],
+        'Early Summer': [6, 7],
+        'Mid Summer': [7],
+        'Late Summer': [8, 9],
+        Summer: [6, 7, 8],
+        Fall: [9, 10],
+      };
+      const characteristics = loadUsdaCharacteristics();
+      const unexplained: string[] = [];
+      let compared = 0;
+      let differ = 0;
+      for (const s of loadCatalogue().species) {
+        const season = characteristics.get(s.usdaSymbol)?.bloom_period ?? '';
+        const months = SEASON_MONTHS[season];
+        if (!months || s.bloomMonths.length === 0) continue;
+        compared++;
+        if (s.bloomMonths.some((m) => months.includes(m))) continue;
+        differ++;
+        if (!s.reconciliations.some((r) => r.field === 'bloomMonths'))
+          unexplained.push(`${s.slug}: months ${s.bloomMonths.join(',')}, USDA "${season}"`);
+      }
+      console.log(`bloom months compared with USDA: ${compared}; ${differ} differ, each with a reconciliation note`);
+      expect(compared).toBeGreaterThan(100);
+      expect(unexplained).toEqual([]);
+    });
+  },
+);
+
+describe.skipIf(!referenceAvailable([SYLVANSEEDS_FILE]))(
+  'germination rates vs SylvanSeeds (Fernández-Pascual 2021) laboratory trials',
+  () => {
+    /** A record differs when its rate lies outside the trials' range widened by a fifth each way. */
+    it('keeps each stored rate near the published trials, or the record explains the difference', () => {
+      const trials = loadSylvanSeedsPercentages();
+      const unexplained: string[] = [];
+      let compared = 0;
+      for (const s of loadCatalogue().species) {
+        const pct = trials.get(s.scientificName);
+        if (!pct?.length) continue;
+        compared++;
+        const lo = Math.min(...pct);
+        const hi = Math.max(...pct);
+        const rate = s.germination.germinationRatePct;
+        if (rate >= lo * 0.8 && rate <= hi * 1.2) continue;
+        if (!s.reconciliations.some((r) => r.field === 'germination.germinationRatePct')) {
+          unexplained.push(`${s.slug}: ${rate} %, trials ${Math.round(lo)}–${Math.round(hi)} %`);
+        }
+      }
+      console.log(`germination rates compared with SylvanSeeds: ${compared} species`);
+      expect(compared).toBeGreaterThan(20);
+      expect(unexplained).toEqual([]);
+    });
+
+    it('Pennsylvania sedge: the trials show 64–89 %, and the record is in that range', () => {
+      const pct = loadSylvanSeedsPercentages().get('Carex pensylvanica') ?? [];
+      expect(Math.round(Math.min(...pct))).toBe(64);
+      expect(Math.round(Math.max(...pct))).toBe(89);
+      const sedge = loadCatalogue().species.find((s) => s.slug === 'carex-pensylvanica');
+      expect(sedge?.germination.germinationRatePct).toBeGreaterThanOrEqual(64);
+    });
+  },
+);
 
 describe.skipIf(!available)('catalogue vs Tallamy & Shropshire 2009 (Lepidoptera species per plant genus)', () => {
   it('gives each species its genus count, or a documented older genus concept, or null when unlisted', () => {
@@ -194,7 +233,9 @@ describe.skipIf(!available)('catalogue vs Tallamy & Shropshire 2009 (Lepidoptera
       const own = listed(genus);
       const explained = s.reconciliations.some((r) => r.field === 'wildlife.lepidopteraGenusCount');
       if (own !== undefined && s.wildlife.lepidopteraGenusCount !== own && !explained) {
-        bad.push(`${s.slug}: takes ${s.wildlife.lepidopteraGenusCount} over its own genus row (${own}) without a reconciliation note`);
+        bad.push(
+          `${s.slug}: takes ${s.wildlife.lepidopteraGenusCount} over its own genus row (${own}) without a reconciliation note`,
+        );
       }
     }
     expect(bad).toEqual([]);
@@ -211,36 +252,104 @@ describe.skipIf(!available)('catalogue vs Tallamy & Shropshire 2009 (Lepidoptera
 });
 
 /** Hard checks from CHECK-VALUES.md §1 rows marked R (retrieved): the row must exist, then the rule holds. */
-const RETRIEVED_RULES: { plant: string; mentions: string[]; slug: string; rule: string; holds: (s: Species) => boolean }[] = [
-  { plant: 'Asclepias incarnata', mentions: ['NPN-ASIN', '| R'], slug: 'asclepias-incarnata', rule: 'cold-moist ≥ 7 d',
-    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) >= 7) },
-  { plant: 'Asclepias tuberosa', mentions: ['HS23', '| R'], slug: 'asclepias-tuberosa', rule: 'chilled moist (cold-moist), never dry',
-    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist') },
-  { plant: 'Asclepias syriaca', mentions: ['KAYE18', '| R'], slug: 'asclepias-syriaca', rule: 'cold-moist ≥ 14 d',
-    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) >= 14) },
-  { plant: 'Echinacea purpurea', mentions: ['ROM05', '| R'], slug: 'echinacea-purpurea', rule: 'cold-moist ≥ 28 d',
-    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) >= 28) },
-  { plant: 'Echinacea pallida', mentions: ['NPN-ECPA', '60–90', '| R'], slug: 'echinacea-pallida', rule: 'cold-moist 60–90 d',
-    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) >= 60 && (t.days ?? 0) <= 90) },
-  { plant: 'Echinacea pallida', mentions: ['surface sow', '| R'], slug: 'echinacea-pallida', rule: 'surface sown, needs light',
-    holds: (s) => s.germination.needsLight && s.germination.sowingDepthMm === 0 },
-  { plant: 'Baptisia australis', mentions: ['mechanical scarification', '| R'], slug: 'baptisia-australis', rule: 'scarification or hot water',
-    holds: (s) => s.germination.treatments.some((t) => t.kind === 'scarification' || t.kind === 'hot-water') },
-  { plant: 'Lupinus perennis', mentions: ['nicked', '| R'], slug: 'lupinus-perennis', rule: 'scarification',
-    holds: (s) => s.germination.treatments.some((t) => t.kind === 'scarification') },
-  { plant: 'Penstemon digitalis', mentions: ['HS04P', '| R'], slug: 'penstemon-digitalis', rule: 'cold-moist (0 % emerged unstratified)',
-    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist') },
-  { plant: 'Liatris punctata', mentions: ['NPN-LIPU', '| R'], slug: 'liatris-punctata', rule: 'no pretreatment',
-    holds: (s) => s.germination.treatments.every((t) => t.kind === 'none') },
+const RETRIEVED_RULES: {
+  plant: string;
+  mentions: string[];
+  slug: string;
+  rule: string;
+  holds: (s: Species) => boolean;
+}[] = [
+  {
+    plant: 'Asclepias incarnata',
+    mentions: ['NPN-ASIN', '| R'],
+    slug: 'asclepias-incarnata',
+    rule: 'cold-moist ≥ 7 d',
+    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) >= 7),
+  },
+  {
+    plant: 'Asclepias tuberosa',
+    mentions: ['HS23', '| R'],
+    slug: 'asclepias-tuberosa',
+    rule: 'chilled moist (cold-moist), never dry',
+    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist'),
+  },
+  {
+    plant: 'Asclepias syriaca',
+    mentions: ['KAYE18', '| R'],
+    slug: 'asclepias-syriaca',
+    rule: 'cold-moist ≥ 14 d',
+    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) >= 14),
+  },
+  {
+    plant: 'Echinacea purpurea',
+    mentions: ['ROM05', '| R'],
+    slug: 'echinacea-purpurea',
+    rule: 'cold-moist ≥ 28 d',
+    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) >= 28),
+  },
+  {
+    plant: 'Echinacea pallida',
+    mentions: ['NPN-ECPA', '60–90', '| R'],
+    slug: 'echinacea-pallida',
+    rule: 'cold-moist 60–90 d',
+    holds: (s) =>
+      s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) >= 60 && (t.days ?? 0) <= 90),
+  },
+  {
+    plant: 'Echinacea pallida',
+    mentions: ['surface sow', '| R'],
+    slug: 'echinacea-pallida',
+    rule: 'surface sown, needs light',
+    holds: (s) => s.germination.needsLight && s.germination.sowingDepthMm === 0,
+  },
+  {
+    plant: 'Baptisia australis',
+    mentions: ['mechanical scarification', '| R'],
+    slug: 'baptisia-australis',
+    rule: 'scarification or hot water',
+    holds: (s) => s.germination.treatments.some((t) => t.kind === 'scarification' || t.kind === 'hot-water'),
+  },
+  {
+    plant: 'Lupinus perennis',
+    mentions: ['nicked', '| R'],
+    slug: 'lupinus-perennis',
+    rule: 'scarification',
+    holds: (s) => s.germination.treatments.some((t) => t.kind === 'scarification'),
+  },
+  {
+    plant: 'Penstemon digitalis',
+    mentions: ['HS04P', '| R'],
+    slug: 'penstemon-digitalis',
+    rule: 'cold-moist (0 % emerged unstratified)',
+    holds: (s) => s.germination.treatments.some((t) => t.kind === 'cold-moist'),
+  },
+  {
+    plant: 'Liatris punctata',
+    mentions: ['NPN-LIPU', '| R'],
+    slug: 'liatris-punctata',
+    rule: 'no pretreatment',
+    holds: (s) => s.germination.treatments.every((t) => t.kind === 'none'),
+  },
 ];
 
 /** Soft checks from rows marked M (from memory): reported, never failed. */
 const MEMORY_RANGES: [string, number, number][] = [
-  ['asclepias-verticillata', 30, 30], ['asclepias-sullivantii', 30, 30], ['asclepias-purpurascens', 30, 60],
-  ['rudbeckia-fulgida', 30, 60], ['liatris-spicata', 30, 60], ['liatris-aspera', 60, 60], ['liatris-pycnostachya', 60, 60],
-  ['symphyotrichum-novae-angliae', 30, 60], ['solidago-speciosa', 60, 60], ['zizia-aurea', 60, 90],
-  ['eryngium-yuccifolium', 60, 60], ['silphium-laciniatum', 60, 60], ['aquilegia-canadensis', 30, 30],
-  ['lobelia-cardinalis', 60, 60], ['lobelia-siphilitica', 60, 60], ['packera-aurea', 60, 60],
+  ['asclepias-verticillata', 30, 30],
+  ['asclepias-sullivantii', 30, 30],
+  ['asclepias-purpurascens', 30, 60],
+  ['rudbeckia-fulgida', 30, 60],
+  ['liatris-spicata', 30, 60],
+  ['liatris-aspera', 60, 60],
+  ['liatris-pycnostachya', 60, 60],
+  ['symphyotrichum-novae-angliae', 30, 60],
+  ['solidago-speciosa', 60, 60],
+  ['zizia-aurea', 60, 90],
+  ['eryngium-yuccifolium', 60, 60],
+  ['silphium-laciniatum', 60, 60],
+  ['aquilegia-canadensis', 30, 30],
+  ['lobelia-cardinalis', 60, 60],
+  ['lobelia-siphilitica', 60, 60],
+  ['packera-aurea', 60, 60],
 ];
 
 describe.skipIf(!available)('germination treatments vs CHECK-VALUES.md §1', () => {
@@ -256,7 +365,9 @@ describe.skipIf(!available)('germination treatments vs CHECK-VALUES.md §1', () 
   it('Carex: cold-moist of at most 6 months, usually ≤ 1 month (KG07, R)', () => {
     expect(findCheckValueRow(checkValueRows(), 'Carex (12', ['KG07', '| R'])).toBeDefined();
     const sedges = [...bySlug.values()].filter((s) => s.scientificName.startsWith('Carex '));
-    const tooLong = sedges.filter((s) => s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) > 180));
+    const tooLong = sedges.filter((s) =>
+      s.germination.treatments.some((t) => t.kind === 'cold-moist' && (t.days ?? 0) > 180),
+    );
     expect(sedges.length).toBeGreaterThan(0);
     expect(tooLong.map((s) => s.slug)).toEqual([]);
   });
@@ -268,7 +379,9 @@ describe.skipIf(!available)('germination treatments vs CHECK-VALUES.md §1', () 
       const days = s.germination.treatments.find((t) => t.kind === 'cold-moist')?.days ?? 0;
       return days >= lo && days <= hi ? [] : [`${slug}: ${days} d cold-moist, M row says ${lo}–${hi}`];
     });
-    console.log(`CHECK-VALUES M rows: ${MEMORY_RANGES.length - outside.length}/${MEMORY_RANGES.length} within range${outside.length ? `; soft differences:\n  ${outside.join('\n  ')}` : ''}`);
+    console.log(
+      `CHECK-VALUES M rows: ${MEMORY_RANGES.length - outside.length}/${MEMORY_RANGES.length} within range${outside.length ? `; soft differences:\n  ${outside.join('\n  ')}` : ''}`,
+    );
     expect(MEMORY_RANGES.length).toBeGreaterThan(0);
   });
 });

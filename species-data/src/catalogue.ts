@@ -1,8 +1,14 @@
 import { readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import {
-  countyEcoregionSchema, ecoregionSchema, sourceSchema, speciesSchema,
-  type CountyEcoregions, type Ecoregion, type Source, type Species,
+  countyEcoregionSchema,
+  ecoregionSchema,
+  sourceSchema,
+  speciesSchema,
+  type CountyEcoregions,
+  type Ecoregion,
+  type Source,
+  type Species,
 } from '@homeground/shared';
 import { z } from 'zod';
 
@@ -82,9 +88,24 @@ export function readCatalogue(): { catalogue: Catalogue; problems: DataProblem[]
     catalogue: {
       species,
       sources: parseEach(sourceSchema, readJson('sources.json'), 'sources.json', problems),
-      realignments: parseEach(realignmentSchema, readJson('family-realignments.json'), 'family-realignments.json', problems),
-      ecoregions: parseEach(ecoregionSchema, optional('ecoregions/ecoregions.json'), 'ecoregions/ecoregions.json', problems),
-      counties: parseEach(countyEcoregionSchema, optional('ecoregions/county-ecoregions.json'), 'ecoregions/county-ecoregions.json', problems),
+      realignments: parseEach(
+        realignmentSchema,
+        readJson('family-realignments.json'),
+        'family-realignments.json',
+        problems,
+      ),
+      ecoregions: parseEach(
+        ecoregionSchema,
+        optional('ecoregions/ecoregions.json'),
+        'ecoregions/ecoregions.json',
+        problems,
+      ),
+      counties: parseEach(
+        countyEcoregionSchema,
+        optional('ecoregions/county-ecoregions.json'),
+        'ecoregions/county-ecoregions.json',
+        problems,
+      ),
     },
     problems,
   };
@@ -96,7 +117,9 @@ export function loadCatalogue(): Catalogue {
   if (cached) return cached;
   const { catalogue, problems } = readCatalogue();
   if (problems.length > 0) {
-    throw new Error(`species-data has ${problems.length} problem(s):\n${problems.map((p) => `${p.file}: ${p.message}`).join('\n')}`);
+    throw new Error(
+      `species-data has ${problems.length} problem(s):\n${problems.map((p) => `${p.file}: ${p.message}`).join('\n')}`,
+    );
   }
   cached = catalogue;
   return catalogue;

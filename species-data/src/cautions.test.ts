@@ -14,14 +14,25 @@ const bySlug = (slug: string) => {
 
 describe('cautions and spread habits (from memory)', () => {
   it.each([
-    ['jeffersonia-diphylla', 'toxic-if-eaten'], ['ptelea-trifoliata', 'skin-irritant'], ['ribes-americanum', 'regulated'],
-    ['amorpha-fruticosa', 'toxic-if-eaten'], ['aronia-melanocarpa', 'toxic-if-eaten'], ['chamaecrista-fasciculata', 'livestock'],
+    ['jeffersonia-diphylla', 'toxic-if-eaten'],
+    ['ptelea-trifoliata', 'skin-irritant'],
+    ['ribes-americanum', 'regulated'],
+    ['amorpha-fruticosa', 'toxic-if-eaten'],
+    ['aronia-melanocarpa', 'toxic-if-eaten'],
+    ['chamaecrista-fasciculata', 'livestock'],
   ])('%s carries a %s caution', (slug, kind) => {
     expect(bySlug(slug).cautions.map((c) => c.kind)).toContain(kind);
   });
 
-  it.each(['matteuccia-struthiopteris', 'thelypteris-noveboracensis', 'monarda-fistulosa', 'helianthus-divaricatus',
-    'helianthus-strumosus', 'helianthus-giganteus', 'clematis-virginiana'])('%s is recorded as a spreader', (slug) => {
+  it.each([
+    'matteuccia-struthiopteris',
+    'thelypteris-noveboracensis',
+    'monarda-fistulosa',
+    'helianthus-divaricatus',
+    'helianthus-strumosus',
+    'helianthus-giganteus',
+    'clematis-virginiana',
+  ])('%s is recorded as a spreader', (slug) => {
     expect(bySlug(slug).spreadHabit).not.toBe('clumping');
   });
 
@@ -32,7 +43,9 @@ describe('cautions and spread habits (from memory)', () => {
   });
 
   it('an aggressive spreader always says so in a caution', () => {
-    const silent = species.filter((s) => s.spreadHabit === 'aggressive' && !s.cautions.some((c) => c.kind === 'aggressive-spreader'));
+    const silent = species.filter(
+      (s) => s.spreadHabit === 'aggressive' && !s.cautions.some((c) => c.kind === 'aggressive-spreader'),
+    );
     expect(silent.map((s) => s.slug)).toEqual([]);
   });
 });

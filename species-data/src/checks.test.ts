@@ -5,11 +5,21 @@ import { checkComposition, slugFromName } from './checks.js';
 
 const base = loadCatalogue().species[0];
 const make = (n: number, form: Species['growthForm'], genus = 'Zizia'): Species[] =>
-  Array.from({ length: n }, (_, i) => ({ ...base, growthForm: form, slug: `${genus.toLowerCase()}-x${i}-${form}`, scientificName: `${genus} x${i}` }));
+  Array.from({ length: n }, (_, i) => ({
+    ...base,
+    growthForm: form,
+    slug: `${genus.toLowerCase()}-x${i}-${form}`,
+    scientificName: `${genus} x${i}`,
+  }));
 
 describe('catalogue composition rules', () => {
   it('accepts 300 species with most forbs, 15 % graminoids, 10 milkweeds and some woody plants', () => {
-    const list = [...make(190, 'forb'), ...make(10, 'forb', 'Asclepias'), ...make(60, 'graminoid'), ...make(40, 'shrub')];
+    const list = [
+      ...make(190, 'forb'),
+      ...make(10, 'forb', 'Asclepias'),
+      ...make(60, 'graminoid'),
+      ...make(40, 'shrub'),
+    ];
     expect(checkComposition(list)).toEqual([]);
   });
 

@@ -18,7 +18,8 @@ function checkSpecies(s: Species, sourceKeys: Set<string>): string[] {
     if (!key) out.push(`sources.${field} is missing (name a source key or "from-memory")`);
     else if (!sourceKeys.has(key)) out.push(`sources.${field}: unknown source key "${key}"`);
   }
-  for (const c of s.cautions) if (!sourceKeys.has(c.source)) out.push(`caution source "${c.source}" is not in sources.json`);
+  for (const c of s.cautions)
+    if (!sourceKeys.has(c.source)) out.push(`caution source "${c.source}" is not in sources.json`);
   const kinds = s.cautions.map((c) => c.kind);
   for (const kind of new Set(kinds)) {
     if (kinds.filter((k) => k === kind).length > 1) out.push(`two "${kind}" cautions: merge them into one`);
@@ -29,7 +30,8 @@ function checkSpecies(s: Species, sourceKeys: Set<string>): string[] {
   if (s.germination.treatments.length > 1 && s.germination.treatments.some((t) => t.kind === 'none')) {
     out.push('treatment "none" cannot be combined with other steps');
   }
-  if (s.germination.needsLight && s.germination.sowingDepthMm > 2) out.push('seed that needs light is surface sown (depth ≤ 2 mm)');
+  if (s.germination.needsLight && s.germination.sowingDepthMm > 2)
+    out.push('seed that needs light is surface sown (depth ≤ 2 mm)');
   if (s.scientificName.startsWith('Asclepias ') && !s.cautions.some((c) => c.kind === 'sap-irritant')) {
     out.push('milkweeds carry the milky-sap caution');
   }
@@ -69,19 +71,26 @@ export function checkCatalogue(catalogue: Catalogue): DataProblem[] {
     seenSymbols.set(s.usdaSymbol, s.slug);
   }
   for (const r of catalogue.realignments) {
-    if (!sourceKeys.has(r.source)) problems.push({ file: 'family-realignments.json', message: `unknown source "${r.source}"` });
+    if (!sourceKeys.has(r.source))
+      problems.push({ file: 'family-realignments.json', message: `unknown source "${r.source}"` });
   }
   const codes = new Set(catalogue.ecoregions.map((e) => e.code));
   for (const e of catalogue.ecoregions) {
     for (const key of Object.values(e.sources)) {
-      if (!sourceKeys.has(key)) problems.push({ file: 'ecoregions/ecoregions.json', message: `${e.code}: unknown source "${key}"` });
+      if (!sourceKeys.has(key))
+        problems.push({ file: 'ecoregions/ecoregions.json', message: `${e.code}: unknown source "${key}"` });
     }
   }
   for (const c of catalogue.counties) {
     const total = c.ecoregions.reduce((sum, e) => sum + e.share, 0);
-    if (Math.abs(total - 1) > 0.02) problems.push({ file: 'ecoregions/county-ecoregions.json', message: `${c.fips}: shares add up to ${total.toFixed(3)}` });
+    if (Math.abs(total - 1) > 0.02)
+      problems.push({
+        file: 'ecoregions/county-ecoregions.json',
+        message: `${c.fips}: shares add up to ${total.toFixed(3)}`,
+      });
     for (const e of c.ecoregions) {
-      if (!codes.has(e.code)) problems.push({ file: 'ecoregions/county-ecoregions.json', message: `${c.fips}: unknown ecoregion ${e.code}` });
+      if (!codes.has(e.code))
+        problems.push({ file: 'ecoregions/county-ecoregions.json', message: `${c.fips}: unknown ecoregion ${e.code}` });
     }
   }
   return problems;

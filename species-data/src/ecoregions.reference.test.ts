@@ -69,7 +69,9 @@ describe.skipIf(!available)('ecoregions against the EPA Level III reference', ()
     for (const p of ROBUST_POINTS) {
       const hit = locator.regionAt(p.lon, p.lat);
       const km = hit ? locator.boundaryDistanceKm(hit.code, p.lon, p.lat, 50) : NaN;
-      console.log(`${p.place}: ${hit?.code} ${hit?.name}, ${Number.isFinite(km) ? km.toFixed(1) : '≥ 50'} km from its boundary`);
+      console.log(
+        `${p.place}: ${hit?.code} ${hit?.name}, ${Number.isFinite(km) ? km.toFixed(1) : '≥ 50'} km from its boundary`,
+      );
       expect(hit?.code, p.place).toBe(p.code);
       expect(km, `${p.place} is too near a boundary to be robust`).toBeGreaterThanOrEqual(ROBUST_KM);
     }
@@ -85,13 +87,21 @@ describe.skipIf(!available)('ecoregions against the EPA Level III reference', ()
       const region = locator.regionAt(z.lon, z.lat);
       if (!region || locator.boundaryDistanceKm(region.code, z.lon, z.lat, ROBUST_KM) < ROBUST_KM) continue;
       const county = counties.find(
-        (c) => z.lon >= c.bbox[0] && z.lon <= c.bbox[2] && z.lat >= c.bbox[1] && z.lat <= c.bbox[3] && booleanPointInPolygon([z.lon, z.lat], c.feature),
+        (c) =>
+          z.lon >= c.bbox[0] &&
+          z.lon <= c.bbox[2] &&
+          z.lat >= c.bbox[1] &&
+          z.lat <= c.bbox[3] &&
+          booleanPointInPolygon([z.lon, z.lat], c.feature),
       );
       if (!county) continue;
       robust++;
       const dominant = crosswalk.get(county.fips)?.ecoregions[0].code;
       if (dominant === region.code) agree++;
-      else misses.push(`${z.zip} ${county.fips} ${county.name} ${county.state}: polygon ${region.code}, county ${dominant}`);
+      else
+        misses.push(
+          `${z.zip} ${county.fips} ${county.name} ${county.state}: polygon ${region.code}, county ${dominant}`,
+        );
     }
     const share = agree / robust;
     console.log(

@@ -1,2 +1,9 @@
-export { loadCatalogue, readCatalogue, DATA_DIR, type Catalogue, type DataProblem, type FamilyRealignment } from './catalogue.js';
+export {
+  loadCatalogue,
+  readCatalogue,
+  DATA_DIR,
+  type Catalogue,
+  type DataProblem,
+  type FamilyRealignment,
+} from './catalogue.js';
 export { checkCatalogue, slugFromName } from './checks.js';

@@ -1,7 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import {
-  MOISTURE_LEVELS, SUN_LEVELS, balancePalette, plantsPerSpecies, randomInt, seededRandom, siteSchema, totalFootprintSqFt,
-  type RegionContext, type Site, type Species,
+  MOISTURE_LEVELS,
+  SUN_LEVELS,
+  balancePalette,
+  plantsPerSpecies,
+  randomInt,
+  seededRandom,
+  siteSchema,
+  totalFootprintSqFt,
+  type RegionContext,
+  type Site,
+  type Species,
 } from '@homeground/shared';
 import { loadCatalogue } from './catalogue.js';
 
@@ -9,7 +18,9 @@ import { loadCatalogue } from './catalogue.js';
 const catalogue = loadCatalogue();
 const bySlug = new Map(catalogue.species.map((s) => [s.slug, s]));
 const regionFor = (state: RegionContext['state'], code: string): RegionContext => ({
-  state, ecoregionCode: code, ecoregionPlantCommunities: catalogue.ecoregions.find((e) => e.code === code)?.plantCommunities,
+  state,
+  ecoregionCode: code,
+  ecoregionPlantCommunities: catalogue.ecoregions.find((e) => e.code === code)?.plantCommunities,
 });
 
 function randomSite(random: () => number): Site {
@@ -45,12 +56,18 @@ describe('yard mix properties', () => {
   it('two distant ecoregions give different mixes for the same ground', () => {
     // Northern Lakes and Forests (50, MN) against the Southern Coastal Plain (75, GA), and the
     // Driftless Area (52, WI) against the Piedmont (45, NC), on every sun and moisture.
-    const pairs = [[regionFor('MN', '50'), regionFor('GA', '75')], [regionFor('WI', '52'), regionFor('NC', '45')]] as const;
+    const pairs = [
+      [regionFor('MN', '50'), regionFor('GA', '75')],
+      [regionFor('WI', '52'), regionFor('NC', '45')],
+    ] as const;
     for (const [a, b] of pairs) {
       for (const sun of SUN_LEVELS) {
         for (const moisture of MOISTURE_LEVELS) {
           const site: Site = { sun, moisture, areaSqFt: 250, deerPressure: 'medium', goals: [] };
-          const slugs = (r: RegionContext) => chosenSpecies(site, r).map((s) => s.slug).sort();
+          const slugs = (r: RegionContext) =>
+            chosenSpecies(site, r)
+              .map((s) => s.slug)
+              .sort();
           expect(slugs(a), `${a.ecoregionCode} vs ${b.ecoregionCode}, ${moisture} ${sun}`).not.toEqual(slugs(b));
         }
       }

@@ -30,7 +30,10 @@ describe.skipIf(!available)('species ecoregions vs USDA native states and the EP
       for (const code of s.ecoregions ?? []) {
         checked++;
         const states = statesOfRegion.get(code) ?? new Set();
-        if (![...states].some((st) => native.has(st))) bad.push(`${s.slug}: region ${code} lies in ${[...states].join(', ') || 'no county'}, none a USDA native state`);
+        if (![...states].some((st) => native.has(st)))
+          bad.push(
+            `${s.slug}: region ${code} lies in ${[...states].join(', ') || 'no county'}, none a USDA native state`,
+          );
       }
     }
     console.log(`species × ecoregion pairs checked against USDA native states: ${checked}`);

@@ -16,8 +16,14 @@ import { useAppInBrowser } from './support/app-in-browser.js';
 // Eight records of the demo catalogue (species-data/species/*.json), picked for variety: long
 // cautions (Asclepias), warm-then-cold treatment (Actaea), a fern grown from spores (Adiantum).
 const SLUGS = [
-  'asclepias-tuberosa', 'monarda-fistulosa', 'zizia-aurea', 'andropogon-gerardii',
-  'aquilegia-canadensis', 'amorpha-canescens', 'actaea-racemosa', 'adiantum-pedatum',
+  'asclepias-tuberosa',
+  'monarda-fistulosa',
+  'zizia-aurea',
+  'andropogon-gerardii',
+  'aquilegia-canadensis',
+  'amorpha-canescens',
+  'actaea-racemosa',
+  'adiantum-pedatum',
 ];
 
 const app = useAppInBrowser();
@@ -29,14 +35,25 @@ function pdfPageCount(pdf: Buffer): number {
 
 async function waitForCards(page: Page, count: number) {
   const preview = page.getByRole('region', { name: 'Fact cards as they will print' });
-  await preview.getByRole('article').nth(count - 1).waitFor();
-  await preview.locator('svg[data-url]').nth(count - 1).waitFor();
+  await preview
+    .getByRole('article')
+    .nth(count - 1)
+    .waitFor();
+  await preview
+    .locator('svg[data-url]')
+    .nth(count - 1)
+    .waitFor();
   await page.evaluate(() => document.fonts.ready);
   return preview;
 }
 
 test('eight species print as two Letter pages of fact cards, with working QR links and pot labels', async () => {
-  for (const slug of SLUGS) assert.equal((await fetch(`${app.server.baseUrl}/api/species/${slug}`)).status, 200, `${slug} is in the demo catalogue`);
+  for (const slug of SLUGS)
+    assert.equal(
+      (await fetch(`${app.server.baseUrl}/api/species/${slug}`)).status,
+      200,
+      `${slug} is in the demo catalogue`,
+    );
 
   const { page, offHostRequests, pageErrors, context } = await openGuardedPage(app.browser);
   try {
@@ -45,21 +62,34 @@ test('eight species print as two Letter pages of fact cards, with working QR lin
     await page.getByText('8 fact cards on 2 pages').waitFor();
     assert.equal(await preview.getByRole('group', { name: /^Page \d of 2$/ }).count(), 2);
 
-    const urls = await preview.locator('svg[data-url]').evaluateAll((svgs) => svgs.map((s) => s.getAttribute('data-url')));
-    assert.deepEqual(urls, SLUGS.map((s) => `${app.server.baseUrl}/species/${s}`));
+    const urls = await preview
+      .locator('svg[data-url]')
+      .evaluateAll((svgs) => svgs.map((s) => s.getAttribute('data-url')));
+    assert.deepEqual(
+      urls,
+      SLUGS.map((s) => `${app.server.baseUrl}/species/${s}`),
+    );
     await screenshot(page, 'cards-preview');
 
     // On paper: nothing but the sheets, and no card's words cut off at its edge.
     await page.emulateMedia({ media: 'print' });
-    const overflow = await preview.getByRole('article').evaluateAll((cards) =>
-      cards
-        .filter((c) => c.scrollHeight > c.clientHeight + 1)
-        .map((c) => `${c.querySelector('h3')?.textContent} (${c.scrollHeight} > ${c.clientHeight} px, shrink step ${c.getAttribute('data-fit')})`),
-    );
+    const overflow = await preview
+      .getByRole('article')
+      .evaluateAll((cards) =>
+        cards
+          .filter((c) => c.scrollHeight > c.clientHeight + 1)
+          .map(
+            (c) =>
+              `${c.querySelector('h3')?.textContent} (${c.scrollHeight} > ${c.clientHeight} px, shrink step ${c.getAttribute('data-fit')})`,
+          ),
+      );
     assert.deepEqual(overflow, [], 'every fact card fits its quarter page');
     const shellHidden = await page.evaluate(() => getComputedStyle(document.querySelector('header')!).display);
     assert.equal(shellHidden, 'none', 'the top bar does not print');
-    await page.locator('.hg-sheet').first().screenshot({ path: path.join(RESULTS_DIR, 'fact-cards-print-page-1.png') });
+    await page
+      .locator('.hg-sheet')
+      .first()
+      .screenshot({ path: path.join(RESULTS_DIR, 'fact-cards-print-page-1.png') });
     // Back to no emulation: page.pdf() prints with print media unless screen is forced.
     await page.emulateMedia({ media: null });
 
@@ -68,7 +98,18 @@ test('eight species print as two Letter pages of fact cards, with working QR lin
     writeFileSync(pdfFile, pdf);
     assert.equal(pdfPageCount(pdf), 2, 'eight cards at four a page make two pages');
     // A picture of the PDF itself, when poppler-utils happens to be installed (the test does not need it).
-    spawnSync('pdftoppm', ['-png', '-r', '60', '-f', '1', '-l', '1', '-singlefile', pdfFile, path.join(RESULTS_DIR, 'fact-cards-page-1')]);
+    spawnSync('pdftoppm', [
+      '-png',
+      '-r',
+      '60',
+      '-f',
+      '1',
+      '-l',
+      '1',
+      '-singlefile',
+      pdfFile,
+      path.join(RESULTS_DIR, 'fact-cards-page-1'),
+    ]);
 
     // A4 keeps four cards a page.
     await page.getByRole('radio', { name: /A4/ }).check();
@@ -79,7 +120,10 @@ test('eight species print as two Letter pages of fact cards, with working QR lin
     await page.getByRole('radio', { name: /US Letter/ }).check();
     const labels = page.getByRole('region', { name: 'Pot labels as they will print' }).getByTestId('pot-label');
     await labels.nth(SLUGS.length - 1).waitFor();
-    assert.match(await labels.first().innerText(), /Butterfly milkweed[\s\S]*Sown [A-Z][a-z]{2} \d{1,2}, \d{4}[\s\S]*CMS 30 d/);
+    assert.match(
+      await labels.first().innerText(),
+      /Butterfly milkweed[\s\S]*Sown [A-Z][a-z]{2} \d{1,2}, \d{4}[\s\S]*CMS 30 d/,
+    );
     await screenshot(page, 'pot-labels');
     const labelPdf = await page.pdf({ format: 'Letter', printBackground: true });
     writeFileSync(path.join(RESULTS_DIR, 'pot-labels.pdf'), labelPdf);
@@ -90,7 +134,11 @@ test('eight species print as two Letter pages of fact cards, with working QR lin
     await page.waitForURL(`${app.server.baseUrl}/species`);
     await page.getByRole('heading', { level: 1 }).waitFor();
     await page.emulateMedia({ media: 'print' });
-    assert.notEqual(await page.getByRole('heading', { level: 1 }).evaluate((h) => getComputedStyle(h).display), 'none', 'other pages still print');
+    assert.notEqual(
+      await page.getByRole('heading', { level: 1 }).evaluate((h) => getComputedStyle(h).display),
+      'none',
+      'other pages still print',
+    );
     await page.emulateMedia({ media: null });
 
     assert.deepEqual(offHostRequests, [], 'no request may leave localhost');

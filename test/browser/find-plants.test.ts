@@ -29,9 +29,15 @@ async function answerYard(page: Page, sun: RegExp, moisture: RegExp) {
 async function readMix(page: Page) {
   await page.getByRole('table', { name: /one species a row/ }).waitFor();
   await page.getByRole('list', { name: 'How this mix is balanced' }).waitFor();
-  const slugs = await page.locator('table tr[data-slug]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-slug') ?? ''));
+  const slugs = await page
+    .locator('table tr[data-slug]')
+    .evaluateAll((rows) => rows.map((r) => r.getAttribute('data-slug') ?? ''));
   const rules = await page.locator('[data-constraint]').evaluateAll((items) =>
-    items.map((li) => ({ id: li.getAttribute('data-constraint') ?? '', status: li.getAttribute('data-status') ?? '', text: li.textContent ?? '' })),
+    items.map((li) => ({
+      id: li.getAttribute('data-constraint') ?? '',
+      status: li.getAttribute('data-status') ?? '',
+      text: li.textContent ?? '',
+    })),
   );
   return { slugs, cp42: rules.filter((r) => CP42_PERIODS.includes(r.id)) };
 }
@@ -41,10 +47,18 @@ function assertBloomRules(cp42: { id: string; status: string; text: string }[], 
   assert.equal(cp42.length, 3, `${label}: the three CP42 period rules are listed`);
   for (const rule of cp42) {
     if (rule.status === 'met') {
-      assert.match(rule.text, /^Met: (Spring|Early summer|Late summer and fall) \(.+\): at least 3 species in flower every month/, `${label} ${rule.id}`);
+      assert.match(
+        rule.text,
+        /^Met: (Spring|Early summer|Late summer and fall) \(.+\): at least 3 species in flower every month/,
+        `${label} ${rule.id}`,
+      );
     } else {
       assert.equal(rule.status, 'unmet', `${label} ${rule.id} applies`);
-      assert.match(rule.text, /^Not met: (Spring|Early summer|Late summer and fall) \(.+\): at least 3 species in flower.+\S{10,}/, `${label} ${rule.id} unmet, with why in words`);
+      assert.match(
+        rule.text,
+        /^Not met: (Spring|Early summer|Late summer and fall) \(.+\): at least 3 species in flower.+\S{10,}/,
+        `${label} ${rule.id} unmet, with why in words`,
+      );
       console.log(`${label}: ${rule.id} not met: ${rule.text}`);
     }
   }
@@ -55,7 +69,9 @@ test('home page first contentful paint', async () => {
   try {
     await page.goto(`${app.server.baseUrl}/`);
     await page.getByRole('heading', { level: 1 }).waitFor();
-    const fcp = await page.evaluate(() => performance.getEntriesByType('paint').find((e) => e.name === 'first-contentful-paint')?.startTime ?? -1);
+    const fcp = await page.evaluate(
+      () => performance.getEntriesByType('paint').find((e) => e.name === 'first-contentful-paint')?.startTime ?? -1,
+    );
     console.log(`home page first-contentful-paint: ${fcp.toFixed(0)} ms`);
     assert.ok(fcp > 0, 'the browser reports a first contentful paint');
     assert.deepEqual(offHostRequests, []);
@@ -99,7 +115,10 @@ test('a new visitor finds their ground by ZIP and gets a different mix for a sha
     await screenshot(page, 'yard-mix-sun-dry');
 
     // Swap one species through the live alternatives endpoint; the mix changes and keeps its size.
-    await page.getByRole('button', { name: /^Swap / }).first().click();
+    await page
+      .getByRole('button', { name: /^Swap / })
+      .first()
+      .click();
     const dialog = page.getByRole('dialog');
     await dialog.getByRole('button', { name: /^Use / }).first().click();
     await page.waitForFunction((before) => {
@@ -119,14 +138,23 @@ test('a new visitor finds their ground by ZIP and gets a different mix for a sha
     try {
       await phone.page.goto(shareUrl);
       await phone.page.getByRole('list', { name: /one card a species/ }).waitFor();
-      const phoneSlugs = await phone.page.locator('li[data-slug]').evaluateAll((items) => items.map((i) => i.getAttribute('data-slug') ?? ''));
+      const phoneSlugs = await phone.page
+        .locator('li[data-slug]')
+        .evaluateAll((items) => items.map((i) => i.getAttribute('data-slug') ?? ''));
       assert.deepEqual(phoneSlugs, swapped.slugs, 'the shared link shows the same mix');
       await screenshot(phone.page, 'yard-mix-phone');
       const overflow = await phone.page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
       if (overflow > 1) {
-        const wide = await phone.page.evaluate(() => [...document.querySelectorAll('body *')]
-          .filter((el) => el.getBoundingClientRect().right > window.innerWidth + 1 && !el.closest('[tabindex="0"], [data-scroll]'))
-          .slice(0, 8).map((el) => `${el.tagName}.${el.className} ${Math.round(el.getBoundingClientRect().right)}`));
+        const wide = await phone.page.evaluate(() =>
+          [...document.querySelectorAll('body *')]
+            .filter(
+              (el) =>
+                el.getBoundingClientRect().right > window.innerWidth + 1 &&
+                !el.closest('[tabindex="0"], [data-scroll]'),
+            )
+            .slice(0, 8)
+            .map((el) => `${el.tagName}.${el.className} ${Math.round(el.getBoundingClientRect().right)}`),
+        );
         console.log(wide.join('\n'));
       }
       assert.ok(overflow <= 1, `no sideways scrolling at 360 px (overflow ${overflow}px)`);

@@ -35,8 +35,14 @@ test('a demo organiser signs in and sees the Homeground shell with live figures 
       const h1 = document.querySelector('h1');
       return { faces, heading: h1 ? getComputedStyle(h1).fontFamily : '' };
     });
-    assert.ok(fonts.faces.some((f) => f.startsWith('Merriweather')), `Merriweather loaded: ${fonts.faces.join(', ')}`);
-    assert.ok(fonts.faces.some((f) => f.startsWith('Open Sans')), `Open Sans loaded: ${fonts.faces.join(', ')}`);
+    assert.ok(
+      fonts.faces.some((f) => f.startsWith('Merriweather')),
+      `Merriweather loaded: ${fonts.faces.join(', ')}`,
+    );
+    assert.ok(
+      fonts.faces.some((f) => f.startsWith('Open Sans')),
+      `Open Sans loaded: ${fonts.faces.join(', ')}`,
+    );
     assert.match(fonts.heading, /Merriweather/);
 
     await screenshot(page, 'foundation-home-signed-in');
@@ -52,7 +58,11 @@ test('the shell works at phone width and deep links fall back to the app', async
   try {
     await page.goto(`${app.server.baseUrl}/species`);
     await page.getByRole('button', { name: 'Main menu' }).click();
-    await page.getByRole('menuitem', { name: 'Find plants' }).or(page.getByRole('link', { name: 'Find plants' })).first().waitFor();
+    await page
+      .getByRole('menuitem', { name: 'Find plants' })
+      .or(page.getByRole('link', { name: 'Find plants' }))
+      .first()
+      .waitFor();
     await page.waitForTimeout(400); // let the menu's fade-in finish before the screenshot
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     assert.ok(overflow <= 1, `no sideways scrolling at 360 px (overflow ${overflow}px)`);

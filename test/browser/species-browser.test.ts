@@ -64,7 +64,10 @@ test('a shared filtered link applies its filters, and an unknown species says so
       return [...table.querySelectorAll('tbody tr')].map((tr) => tr.children[column]?.textContent?.trim());
     });
     assert.ok(monarch.length > 0, 'some Wisconsin monarch hosts are listed');
-    assert.ok(monarch.every((cell) => cell === 'Yes'), `every row is a monarch host: ${monarch.join(', ')}`);
+    assert.ok(
+      monarch.every((cell) => cell === 'Yes'),
+      `every row is a monarch host: ${monarch.join(', ')}`,
+    );
 
     await page.goto(`${app.server.baseUrl}/species/no-such-plant`);
     await page.getByRole('heading', { level: 1, name: 'Species not found' }).waitFor();
@@ -75,13 +78,20 @@ test('a shared filtered link applies its filters, and an unknown species says so
 });
 
 test('the browser fits a 360 px phone: filters fold away and only the table scrolls sideways', async () => {
-  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(app.browser, { width: 360, height: 780 });
+  const { page, offHostRequests, pageErrors, context } = await openGuardedPage(app.browser, {
+    width: 360,
+    height: 780,
+  });
   try {
     await page.goto(`${app.server.baseUrl}/species`);
     await page.getByRole('table').waitFor();
     const filters = page.getByRole('button', { name: /^Filters/ });
     await filters.waitFor();
-    assert.equal(await page.getByRole('combobox', { name: 'Native to' }).isVisible(), false, 'filters start folded on a phone');
+    assert.equal(
+      await page.getByRole('combobox', { name: 'Native to' }).isVisible(),
+      false,
+      'filters start folded on a phone',
+    );
     await filters.click();
     await page.getByRole('combobox', { name: 'Native to' }).waitFor();
     await page.getByRole('button', { name: 'Hide filters' }).click();

@@ -58,7 +58,11 @@ test('keep, swap and add stay through a rebalance', async () => {
 
     // Add a species by name (prairie smoke: a Wisconsin wildflower of dry prairies, catalogue record).
     await page.getByRole('textbox', { name: 'Add a species by name' }).fill('prairie smoke');
-    await page.getByRole('list', { name: 'Species to add' }).getByRole('button', { name: /^Add prairie smoke/i }).first().click();
+    await page
+      .getByRole('list', { name: 'Species to add' })
+      .getByRole('button', { name: /^Add prairie smoke/i })
+      .first()
+      .click();
     await waitForRow(page, 'geum-triflorum');
 
     await page.getByRole('button', { name: 'Rebalance' }).click();

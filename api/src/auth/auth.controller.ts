@@ -1,8 +1,14 @@
 import { Controller, Get, HttpCode, Post } from '@nestjs/common';
 import { ApiConflictResponse, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
 import {
-  type AuthResponse, authResponseSchema, type LoginRequest, loginRequestSchema, type RegisterRequest,
-  registerRequestSchema, type User, userResponseSchema,
+  type AuthResponse,
+  authResponseSchema,
+  type LoginRequest,
+  loginRequestSchema,
+  type RegisterRequest,
+  registerRequestSchema,
+  type User,
+  userResponseSchema,
 } from '@homeground/shared';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
@@ -20,7 +26,6 @@ export class AuthController {
   ) {}
 
   @Post('auth/register')
-
   @ZodResponse(authResponseSchema, 201)
   @ApiConflictResponse({ description: 'E-mail already registered' })
   register(@ZodBody(registerRequestSchema) dto: RegisterRequest): Promise<AuthResponse> {
@@ -28,7 +33,6 @@ export class AuthController {
   }
 
   @Post('auth/login')
-
   @ZodResponse(authResponseSchema)
   @HttpCode(200)
   @ApiTooManyRequestsResponse({ description: 'Too many sign-in attempts from this address' })
@@ -37,7 +41,6 @@ export class AuthController {
   }
 
   @Get('me')
-
   @ZodResponse(userResponseSchema)
   @Auth()
   me(@CurrentUser() user: AuthenticatedUser): Promise<User> {

@@ -36,7 +36,8 @@ export async function loadCatalogueIntoDatabase(db: DataSource, catalogue: Catal
       } else if (row.seed_hash === null) {
         const [kept]: { record: string }[] = await tx.query(`SELECT record FROM species WHERE slug = ?`, [s.slug]);
         const completed = kept ? withAddedFacts(JSON.parse(kept.record) as Record<string, unknown>, s) : null;
-        if (completed) await tx.query(`UPDATE species SET record = ? WHERE slug = ?`, [JSON.stringify(completed), s.slug]);
+        if (completed)
+          await tx.query(`UPDATE species SET record = ? WHERE slug = ?`, [JSON.stringify(completed), s.slug]);
         report.keptCuratorEdits++;
       } else {
         await writeSpecies(tx, s, { seedHash: hash, editedBy: null });

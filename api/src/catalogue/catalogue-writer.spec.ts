@@ -7,8 +7,30 @@ import { withAddedFacts } from './catalogue-writer.js';
 // the curator's own edits stay. The record is the catalogue's golden alexanders.
 describe('withAddedFacts', () => {
   const file = loadCatalogue().species.find((s) => s.slug === 'zizia-aurea')!;
-  const { ecoregions, sunOptimum, moistureOptimum, wetlandIndicator, needsAcidSoil, selfSows, commercialAvailability, protectedIn, ...older } = file;
-  const olderSources = Object.fromEntries(Object.entries(file.sources).filter(([k]) => !['ecoregions', 'sunOptimum', 'moistureOptimum', 'wetlandIndicator', 'commercialAvailability', 'protectedIn'].includes(k)));
+  const {
+    ecoregions,
+    sunOptimum,
+    moistureOptimum,
+    wetlandIndicator,
+    needsAcidSoil,
+    selfSows,
+    commercialAvailability,
+    protectedIn,
+    ...older
+  } = file;
+  const olderSources = Object.fromEntries(
+    Object.entries(file.sources).filter(
+      ([k]) =>
+        ![
+          'ecoregions',
+          'sunOptimum',
+          'moistureOptimum',
+          'wetlandIndicator',
+          'commercialAvailability',
+          'protectedIn',
+        ].includes(k),
+    ),
+  );
 
   it('fills the missing facts and their sources from the file, keeping the curator’s edits', () => {
     const edited = { ...older, heightCm: { min: 40, max: 80 }, sources: olderSources };

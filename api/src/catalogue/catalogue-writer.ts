@@ -9,10 +9,23 @@ export function recordHash(value: unknown): string {
 
 /** Facts added to the record shape after some curator edits were saved; those edits lack them. */
 const ADDED_FACTS = [
-  'ecoregions', 'sunOptimum', 'moistureOptimum', 'wetlandIndicator', 'needsAcidSoil', 'selfSows',
-  'commercialAvailability', 'protectedIn',
+  'ecoregions',
+  'sunOptimum',
+  'moistureOptimum',
+  'wetlandIndicator',
+  'needsAcidSoil',
+  'selfSows',
+  'commercialAvailability',
+  'protectedIn',
 ] as const;
-const ADDED_SOURCED = ['ecoregions', 'sunOptimum', 'moistureOptimum', 'wetlandIndicator', 'commercialAvailability', 'protectedIn'] as const;
+const ADDED_SOURCED = [
+  'ecoregions',
+  'sunOptimum',
+  'moistureOptimum',
+  'wetlandIndicator',
+  'commercialAvailability',
+  'protectedIn',
+] as const;
 
 /**
  * A curator-edited record saved before the site-fit facts existed, completed with the catalogue
@@ -39,7 +52,18 @@ export async function writeSpecies(
   s: Species,
   meta: { seedHash: string | null; editedBy: string | null; previousSlug?: string },
 ): Promise<void> {
-  const values = [s.slug, s.scientificName, s.usdaSymbol, s.family, s.growthForm, s.heightCm.max, s.wildlife.monarchHost ? 1 : 0, JSON.stringify(s), meta.seedHash, meta.editedBy];
+  const values = [
+    s.slug,
+    s.scientificName,
+    s.usdaSymbol,
+    s.family,
+    s.growthForm,
+    s.heightCm.max,
+    s.wildlife.monarchHost ? 1 : 0,
+    JSON.stringify(s),
+    meta.seedHash,
+    meta.editedBy,
+  ];
   const old = meta.previousSlug ?? s.slug;
   const existing = await tx.query(`SELECT 1 FROM species WHERE slug = ?`, [old]);
   if (existing.length > 0) {
@@ -56,21 +80,35 @@ export async function writeSpecies(
     );
   }
   await tx.query(`DELETE FROM species_names WHERE slug = ?`, [s.slug]);
-  await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'scientific')`, [s.slug, s.scientificName]);
-  for (const n of new Set(s.commonNames)) await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'common')`, [s.slug, n]);
-  for (const n of new Set(s.synonyms)) await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'synonym')`, [s.slug, n]);
+  await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'scientific')`, [
+    s.slug,
+    s.scientificName,
+  ]);
+  for (const n of new Set(s.commonNames))
+    await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'common')`, [s.slug, n]);
+  for (const n of new Set(s.synonyms))
+    await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'synonym')`, [s.slug, n]);
   await tx.query(`DELETE FROM species_states WHERE slug = ?`, [s.slug]);
-  for (const st of new Set(s.nativeStates)) await tx.query(`INSERT INTO species_states (slug, state) VALUES (?, ?)`, [s.slug, st]);
+  for (const st of new Set(s.nativeStates))
+    await tx.query(`INSERT INTO species_states (slug, state) VALUES (?, ?)`, [s.slug, st]);
 }
 
 /** Replaces the ecoregion table, counties and the crosswalk, inside the caller's transaction. */
-export async function writeEcoregions(tx: EntityManager, ecoregions: Ecoregion[], counties: CountyEcoregions[]): Promise<void> {
+export async function writeEcoregions(
+  tx: EntityManager,
+  ecoregions: Ecoregion[],
+  counties: CountyEcoregions[],
+): Promise<void> {
   await tx.query(`DELETE FROM county_ecoregions`);
   await tx.query(`DELETE FROM counties`);
   await tx.query(`DELETE FROM ecoregions`);
   for (const e of ecoregions) {
     await tx.query(`INSERT INTO ecoregions (code, name, level2_code, level1_code, record) VALUES (?, ?, ?, ?, ?)`, [
-      e.code, e.name, e.level2.code, e.level1.code, JSON.stringify(e),
+      e.code,
+      e.name,
+      e.level2.code,
+      e.level1.code,
+      JSON.stringify(e),
     ]);
   }
   for (const c of counties) {

@@ -7,7 +7,9 @@ describe('environment validation', () => {
   });
 
   it('refuses to start on bad values and names every bad variable', () => {
-    expect(() => validateEnv({ PORT: 'eighty', JWT_SECRET: 'short', NODE_ENV: 'staging' })).toThrow(/PORT[\s\S]*JWT_SECRET|JWT_SECRET[\s\S]*PORT/);
+    expect(() => validateEnv({ PORT: 'eighty', JWT_SECRET: 'short', NODE_ENV: 'staging' })).toThrow(
+      /PORT[\s\S]*JWT_SECRET|JWT_SECRET[\s\S]*PORT/,
+    );
     expect(() => validateEnv({ NODE_ENV: 'staging' })).toThrow(/NODE_ENV/);
   });
 });

@@ -35,7 +35,9 @@ export const envSchema = z.object({
   /** The sender on every message. */
   MAIL_FROM: z.string().min(3).default('Homeground <no-reply@homeground.invalid>'),
   /** The address people reach Homeground at: links in e-mails and on printed cards point here. */
-  PUBLIC_URL: z.url({ protocol: /^https?$/, error: 'must be an http:// or https:// address' }).default('http://localhost:3000'),
+  PUBLIC_URL: z
+    .url({ protocol: /^https?$/, error: 'must be an http:// or https:// address' })
+    .default('http://localhost:3000'),
 });
 export type Env = z.infer<typeof envSchema>;
 

@@ -21,8 +21,28 @@ import { SeasonRow } from '../seasons/season.entity.js';
 import { SpeciesPhoto } from '../species/species-photo.entity.js';
 import { SpeciesRow } from '../species/species.entity.js';
 
-export const ENTITIES = [User, Group, GroupMembership, SpeciesRow, SpeciesPhoto, SavedMixRow, OutboxMessageRow, InvitationRow, SeasonRow, SeasonTargetRow];
-export const MIGRATIONS = [CreateUsersAndGroups1764633600000, CreateCatalogue1764720000000, CreateEcoregionBoundaries1764806400000, CreateSavedMixes1764892800000, CreateOutbox1764979200000, AllowGroupMembers1765022400000, CreateGroupInvitations1765065600000, CreateSeasons1765152000000];
+export const ENTITIES = [
+  User,
+  Group,
+  GroupMembership,
+  SpeciesRow,
+  SpeciesPhoto,
+  SavedMixRow,
+  OutboxMessageRow,
+  InvitationRow,
+  SeasonRow,
+  SeasonTargetRow,
+];
+export const MIGRATIONS = [
+  CreateUsersAndGroups1764633600000,
+  CreateCatalogue1764720000000,
+  CreateEcoregionBoundaries1764806400000,
+  CreateSavedMixes1764892800000,
+  CreateOutbox1764979200000,
+  AllowGroupMembers1765022400000,
+  CreateGroupInvitations1765065600000,
+  CreateSeasons1765152000000,
+];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */
 export function databaseOptions(config: Pick<AppConfig, 'databasePath'>): DataSourceOptions {

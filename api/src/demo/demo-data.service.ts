@@ -38,17 +38,37 @@ export class DemoDataService implements OnApplicationBootstrap {
       let group = await tx.findOne(Group, { where: { slug: DEMO_GROUP.slug } });
       group ??= await tx.save(Group, tx.create(Group, DEMO_GROUP));
       for (const [i, p] of missing.entries()) {
-        const user = await tx.save(User, tx.create(User, {
-          email: p.email, displayName: p.displayName, passwordHash: hashes[i], role: p.role, isDemo: true,
-        }));
-        if (p.groupRole) await tx.save(GroupMembership, tx.create(GroupMembership, { userId: user.id, groupId: group.id, role: p.groupRole }));
+        const user = await tx.save(
+          User,
+          tx.create(User, {
+            email: p.email,
+            displayName: p.displayName,
+            passwordHash: hashes[i],
+            role: p.role,
+            isDemo: true,
+          }),
+        );
+        if (p.groupRole)
+          await tx.save(
+            GroupMembership,
+            tx.create(GroupMembership, { userId: user.id, groupId: group.id, role: p.groupRole }),
+          );
       }
       // The season in progress, so the season pages show a living plan; an organiser's edits are kept.
       if (!(await tx.exists(SeasonRow, { where: { groupId: group.id, year: DEMO_SEASON.year } }))) {
         const season = await tx.save(SeasonRow, tx.create(SeasonRow, { groupId: group.id, ...DEMO_SEASON }));
-        await tx.save(SeasonTargetRow, DEMO_TARGETS.map((t, position) => tx.create(SeasonTargetRow, {
-          seasonId: season.id, slug: t.slug, targetPlants: t.targetPlants, germinationRatePct: t.germinationRatePct ?? null, position,
-        })));
+        await tx.save(
+          SeasonTargetRow,
+          DEMO_TARGETS.map((t, position) =>
+            tx.create(SeasonTargetRow, {
+              seasonId: season.id,
+              slug: t.slug,
+              targetPlants: t.targetPlants,
+              germinationRatePct: t.germinationRatePct ?? null,
+              position,
+            }),
+          ),
+        );
       }
       return missing.length;
     });

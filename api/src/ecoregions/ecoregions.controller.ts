@@ -1,8 +1,13 @@
 import { Controller, Delete, Get, HttpCode, Post } from '@nestjs/common';
 import { ApiNoContentResponse, ApiTags } from '@nestjs/swagger';
 import {
-  boundaryImportResultSchema, type Ecoregion, ecoregionCodeParamSchema, type EcoregionListQuery,
-  ecoregionListQuerySchema, ecoregionListSchema, ecoregionSchema,
+  boundaryImportResultSchema,
+  type Ecoregion,
+  ecoregionCodeParamSchema,
+  type EcoregionListQuery,
+  ecoregionListQuerySchema,
+  ecoregionListSchema,
+  ecoregionSchema,
 } from '@homeground/shared';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
@@ -19,14 +24,12 @@ export class EcoregionsController {
   constructor(private readonly ecoregions: EcoregionsService) {}
 
   @Get()
-
   @ZodResponse(ecoregionListSchema)
   list(@ZodQuery(ecoregionListQuerySchema) query: EcoregionListQuery): Ecoregion[] {
     return this.ecoregions.list(query.state);
   }
 
   @Get(':code')
-
   @ZodResponse(ecoregionSchema)
   get(@ZodParam('code', ecoregionCodeParamSchema) code: string): Ecoregion {
     return this.ecoregions.get(code);
@@ -38,14 +41,14 @@ export class EcoregionsController {
   @HttpCode(200)
   @Auth('admin')
   importBoundaries(
-    @ZodFile('file', MAX_BOUNDARY_BYTES, 'GeoJSON FeatureCollection with US_L3CODE and US_L3NAME properties') file: UploadedBlob,
+    @ZodFile('file', MAX_BOUNDARY_BYTES, 'GeoJSON FeatureCollection with US_L3CODE and US_L3NAME properties')
+    file: UploadedBlob,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<BoundaryImportResult> {
     return this.ecoregions.importBoundaries(file.buffer.toString('utf8'), user.id);
   }
 
   @Delete('boundaries')
-
   @ApiNoContentResponse({ description: 'All boundary polygons removed' })
   @HttpCode(204)
   @Auth('admin')

@@ -37,15 +37,20 @@ export class EcoregionsService {
       this.db.query(`SELECT fips, code, share FROM county_ecoregions ORDER BY fips, share DESC`),
       this.db.query(`SELECT code, geometry FROM ecoregion_boundaries`),
     ]);
-    this.regions = new Map(regions.map((r: { record: string }) => {
-      const e = JSON.parse(r.record) as Ecoregion;
-      return [e.code, e];
-    }));
+    this.regions = new Map(
+      regions.map((r: { record: string }) => {
+        const e = JSON.parse(r.record) as Ecoregion;
+        return [e.code, e];
+      }),
+    );
     this.counties = new Map(counties.map((c: Omit<CountyRegions, 'ecoregions'>) => [c.fips, { ...c, ecoregions: [] }]));
-    for (const s of shares as { fips: string; code: string; share: number }[]) this.counties.get(s.fips)?.ecoregions.push({ code: s.code, share: s.share });
+    for (const s of shares as { fips: string; code: string; share: number }[])
+      this.counties.get(s.fips)?.ecoregions.push({ code: s.code, share: s.share });
     this.boundaries = new PolygonIndex(
       boundaries.map((b: { code: string; geometry: string }): AreaFeature<{ code: string }> => ({
-        type: 'Feature', properties: { code: b.code }, geometry: JSON.parse(b.geometry),
+        type: 'Feature',
+        properties: { code: b.code },
+        geometry: JSON.parse(b.geometry),
       })),
     );
   }
@@ -85,9 +90,10 @@ export class EcoregionsService {
     await this.db.transaction(async (tx) => {
       await tx.query(`DELETE FROM ecoregion_boundaries`);
       for (const f of features) {
-        await tx.query(`INSERT INTO ecoregion_boundaries (code, name, geometry, vertices, imported_by) VALUES (?, ?, ?, ?, ?)`, [
-          f.code, f.name, JSON.stringify(f.geometry), f.vertices, userId,
-        ]);
+        await tx.query(
+          `INSERT INTO ecoregion_boundaries (code, name, geometry, vertices, imported_by) VALUES (?, ?, ?, ?, ?)`,
+          [f.code, f.name, JSON.stringify(f.geometry), f.vertices, userId],
+        );
       }
     });
     await this.reload();

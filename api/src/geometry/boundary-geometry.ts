@@ -12,11 +12,14 @@ export function geometryProblems(g: unknown, at: string): FieldProblem[] {
     return [{ field: at, message: 'must be a Polygon or MultiPolygon' }];
   }
   const coords = geometry.coordinates;
-  if (!Array.isArray(coords) || coords.length === 0) return [{ field: `${at}.coordinates`, message: 'must be a non-empty array' }];
+  if (!Array.isArray(coords) || coords.length === 0)
+    return [{ field: `${at}.coordinates`, message: 'must be a non-empty array' }];
   if (geometry.type === 'Polygon') return polygonProblems(coords, at);
-  return coords.flatMap((rings, p) => (Array.isArray(rings) && rings.length > 0
-    ? polygonProblems(rings, `${at}[${p}]`)
-    : [{ field: `${at}.coordinates[${p}]`, message: 'must be a polygon: a non-empty array of rings' }]));
+  return coords.flatMap((rings, p) =>
+    Array.isArray(rings) && rings.length > 0
+      ? polygonProblems(rings, `${at}[${p}]`)
+      : [{ field: `${at}.coordinates[${p}]`, message: 'must be a polygon: a non-empty array of rings' }],
+  );
 }
 
 function polygonProblems(rings: unknown[], at: string): FieldProblem[] {
@@ -27,16 +30,27 @@ function polygonProblems(rings: unknown[], at: string): FieldProblem[] {
       return;
     }
     const bad = ring.findIndex((p) => !isPosition(p));
-    if (bad >= 0) out.push({ field: `${at}.coordinates[${r}][${bad}]`, message: 'must be [longitude, latitude] in degrees (WGS84)' });
+    if (bad >= 0)
+      out.push({
+        field: `${at}.coordinates[${r}][${bad}]`,
+        message: 'must be [longitude, latitude] in degrees (WGS84)',
+      });
     const [a, z] = [ring[0] as Position, ring[ring.length - 1] as Position];
-    if (bad < 0 && (a[0] !== z[0] || a[1] !== z[1])) out.push({ field: `${at}.coordinates[${r}]`, message: 'a ring must end where it starts' });
+    if (bad < 0 && (a[0] !== z[0] || a[1] !== z[1]))
+      out.push({ field: `${at}.coordinates[${r}]`, message: 'a ring must end where it starts' });
   });
   return out;
 }
 
 function isPosition(p: unknown): p is Position {
-  return Array.isArray(p) && p.length >= 2 && p.length <= 3 && p.every((n) => typeof n === 'number' && Number.isFinite(n))
-    && Math.abs(p[0]) <= 180 && Math.abs(p[1]) <= 90;
+  return (
+    Array.isArray(p) &&
+    p.length >= 2 &&
+    p.length <= 3 &&
+    p.every((n) => typeof n === 'number' && Number.isFinite(n)) &&
+    Math.abs(p[0]) <= 180 &&
+    Math.abs(p[1]) <= 90
+  );
 }
 
 /** Positions in a checked geometry (for the import's vertex count). */

@@ -25,18 +25,29 @@ export function parseBoundaryUpload(text: string, knownCodes: Map<string, string
     throw badRequest([{ field: 'file', message: 'is not valid JSON' }], 'The file is not valid JSON.');
   }
   if (doc?.type !== 'FeatureCollection' || !Array.isArray(doc.features) || doc.features.length === 0) {
-    throw badRequest([{ field: 'file', message: 'must be a GeoJSON FeatureCollection' }], 'Expected a GeoJSON FeatureCollection with features.');
+    throw badRequest(
+      [{ field: 'file', message: 'must be a GeoJSON FeatureCollection' }],
+      'Expected a GeoJSON FeatureCollection with features.',
+    );
   }
   const problems: FieldProblem[] = [];
   const out: BoundaryFeature[] = [];
   const seen = new Set<string>();
   (doc.features as unknown[]).forEach((item, i) => {
     const at = `features[${i}]`;
-    const f = (item && typeof item === 'object' ? item : {}) as { properties?: Record<string, unknown> | null; geometry?: unknown };
-    if (f.properties !== undefined && (typeof f.properties !== 'object' || Array.isArray(f.properties))) f.properties = null;
+    const f = (item && typeof item === 'object' ? item : {}) as {
+      properties?: Record<string, unknown> | null;
+      geometry?: unknown;
+    };
+    if (f.properties !== undefined && (typeof f.properties !== 'object' || Array.isArray(f.properties)))
+      f.properties = null;
     const code = propertyText(f.properties?.US_L3CODE);
     const name = propertyText(f.properties?.US_L3NAME);
-    if (!knownCodes.has(code)) problems.push({ field: `${at}.properties.US_L3CODE`, message: `"${code.slice(0, 20)}" is not an EPA Level III code (1–85)` });
+    if (!knownCodes.has(code))
+      problems.push({
+        field: `${at}.properties.US_L3CODE`,
+        message: `"${code.slice(0, 20)}" is not an EPA Level III code (1–85)`,
+      });
     if (!name) problems.push({ field: `${at}.properties.US_L3NAME`, message: 'is required' });
     if (seen.has(code)) problems.push({ field: `${at}.properties.US_L3CODE`, message: `${code} appears twice` });
     seen.add(code);

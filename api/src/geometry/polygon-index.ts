@@ -2,7 +2,10 @@ import { bbox, booleanPointInPolygon, lineString, pointToLineDistance } from '@t
 import Flatbush from 'flatbush';
 import type { Feature, MultiPolygon, Polygon } from 'geojson';
 
-export type AreaFeature<P extends Record<string, unknown> = Record<string, unknown>> = Feature<Polygon | MultiPolygon, P>;
+export type AreaFeature<P extends Record<string, unknown> = Record<string, unknown>> = Feature<
+  Polygon | MultiPolygon,
+  P
+>;
 
 /**
  * Point-in-polygon over many polygons, with a Flatbush R-tree of their bounding boxes so a lookup

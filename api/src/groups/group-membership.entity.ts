@@ -1,4 +1,13 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, type Relation } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  Unique,
+  type Relation,
+} from 'typeorm';
 import type { GroupRole } from '@homeground/shared';
 // Type-only, with the relation named by entity: users and groups must not import each other at run time.
 import type { User } from '../users/user.entity.js';

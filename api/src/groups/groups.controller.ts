@@ -1,8 +1,13 @@
 import { Controller, Delete, Get, HttpCode, Put } from '@nestjs/common';
 import { ApiNoContentResponse, ApiTags } from '@nestjs/swagger';
 import {
-  type Group, groupMemberResponseSchema, groupResponseSchema, type SetMemberRequest, setMemberRequestSchema,
-  slugParamSchema, uuidParamSchema,
+  type Group,
+  groupMemberResponseSchema,
+  groupResponseSchema,
+  type SetMemberRequest,
+  setMemberRequestSchema,
+  slugParamSchema,
+  uuidParamSchema,
 } from '@homeground/shared';
 import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
@@ -17,24 +22,24 @@ export class GroupsController {
   constructor(private readonly groups: GroupsService) {}
 
   @Get()
-
   @ZodResponse(z.array(groupResponseSchema))
   list(): Promise<Group[]> {
     return this.groups.list();
   }
 
   @Get(':slug')
-
   @ZodResponse(groupResponseSchema)
   get(@ZodParam('slug', slugParamSchema) slug: string): Promise<Group> {
     return this.groups.getDto(slug);
   }
 
   @Get(':slug/members')
-
   @ZodResponse(z.array(groupMemberResponseSchema))
   @Auth()
-  members(@ZodParam('slug', slugParamSchema) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<GroupMemberDto[]> {
+  members(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<GroupMemberDto[]> {
     return this.groups.members(slug, user);
   }
 

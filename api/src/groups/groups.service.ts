@@ -56,10 +56,19 @@ export class GroupsService {
     const group = await this.get(slug);
     const role = await this.roleOf(caller, group.id);
     if (!role) throw new ForbiddenException('Only members of this group can see who is in it.');
-    const rows = await this.memberships.find({ where: { groupId: group.id }, relations: { user: true }, order: { createdAt: 'ASC' } });
+    const rows = await this.memberships.find({
+      where: { groupId: group.id },
+      relations: { user: true },
+      order: { createdAt: 'ASC' },
+    });
     // E-mail addresses are personal data: the organisers who invite and contact people see them, no one else.
     const showEmail = role === 'organiser';
-    return rows.map((m) => ({ userId: m.userId, displayName: m.user.displayName, email: showEmail ? m.user.email : null, role: m.role }));
+    return rows.map((m) => ({
+      userId: m.userId,
+      displayName: m.user.displayName,
+      email: showEmail ? m.user.email : null,
+      role: m.role,
+    }));
   }
 
   /** Adds or changes a person's role in the group; organisers of that group (or admins) only. */
@@ -73,7 +82,10 @@ export class GroupsService {
     const user = await this.users.getDto(account.id);
     return this.db.transaction(async (tx) => {
       const existing = await tx.findOne(GroupMembership, { where: { groupId: group.id, userId: user.id } });
-      await tx.save(GroupMembership, existing ? { ...existing, role } : tx.create(GroupMembership, { groupId: group.id, userId: user.id, role }));
+      await tx.save(
+        GroupMembership,
+        existing ? { ...existing, role } : tx.create(GroupMembership, { groupId: group.id, userId: user.id, role }),
+      );
       return { userId: user.id, displayName: user.displayName, email: user.email, role };
     });
   }
@@ -87,8 +99,11 @@ export class GroupsService {
     await this.db.transaction(async (tx) => {
       const m = await tx.findOne(GroupMembership, { where: { groupId: group.id, userId } });
       if (!m) throw new NotFoundException('That person is not in this group.');
-      if (m.role === 'organiser' && (await tx.count(GroupMembership, { where: { groupId: group.id, role: 'organiser' } })) === 1) {
-        throw new ConflictException('This is the group\'s only organiser: make someone else an organiser first.');
+      if (
+        m.role === 'organiser' &&
+        (await tx.count(GroupMembership, { where: { groupId: group.id, role: 'organiser' } })) === 1
+      ) {
+        throw new ConflictException("This is the group's only organiser: make someone else an organiser first.");
       }
       await tx.delete(GroupMembership, { id: m.id });
     });
@@ -99,6 +114,14 @@ export class GroupsService {
   }
 
   private toDto(g: Group, members: number): GroupDto {
-    return { id: g.id, slug: g.slug, name: g.name, town: g.town, state: g.state, ecoregionCode: g.ecoregionCode, members };
+    return {
+      id: g.id,
+      slug: g.slug,
+      name: g.name,
+      town: g.town,
+      state: g.state,
+      ecoregionCode: g.ecoregionCode,
+      members,
+    };
   }
 }

@@ -1,7 +1,13 @@
 import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { coveredEcoregionCodes, type HealthResponse, healthResponseSchema, type StatsResponse, statsResponseSchema } from '@homeground/shared';
+import {
+  coveredEcoregionCodes,
+  type HealthResponse,
+  healthResponseSchema,
+  type StatsResponse,
+  statsResponseSchema,
+} from '@homeground/shared';
 import { DataSource } from 'typeorm';
 import { API_VERSION } from '../config/app-config.js';
 import { ZodResponse } from '../common/decorators/zod.decorators.js';
@@ -49,7 +55,10 @@ export class HealthController {
     const exists = await this.db.query(`SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'ecoregions'`);
     if (exists.length === 0) return 0;
     const rows: { code: string }[] = await this.db.query(`SELECT code FROM ecoregions`);
-    return coveredEcoregionCodes(this.ctx.species(), rows.map((r) => r.code)).length;
+    return coveredEcoregionCodes(
+      this.ctx.species(),
+      rows.map((r) => r.code),
+    ).length;
   }
 
   private async countRows(table: string): Promise<number> {

@@ -1,9 +1,18 @@
 import { Controller, Get, HttpCode, Post, Req, UseGuards } from '@nestjs/common';
 import { ApiBearerAuth, ApiGoneResponse, ApiTags } from '@nestjs/swagger';
 import {
-  type AcceptInvitationRequest, acceptInvitationRequestSchema, type AuthResponse, authResponseSchema, type Invitation,
-  type InvitationPreview, invitationPreviewSchema, invitationSchema, invitationTokenSchema, type InviteRequest,
-  inviteRequestSchema, slugParamSchema,
+  type AcceptInvitationRequest,
+  acceptInvitationRequestSchema,
+  type AuthResponse,
+  authResponseSchema,
+  type Invitation,
+  type InvitationPreview,
+  invitationPreviewSchema,
+  invitationSchema,
+  invitationTokenSchema,
+  type InviteRequest,
+  inviteRequestSchema,
+  slugParamSchema,
 } from '@homeground/shared';
 import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';

@@ -1,10 +1,19 @@
 import { createHash, randomBytes } from 'node:crypto';
 import {
-  ConflictException, ForbiddenException, GoneException, Inject, Injectable, NotFoundException,
+  ConflictException,
+  ForbiddenException,
+  GoneException,
+  Inject,
+  Injectable,
+  NotFoundException,
 } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
-  type AcceptInvitationRequest, type AuthResponse, type Invitation, INVITATION_DAYS, type InvitationPreview,
+  type AcceptInvitationRequest,
+  type AuthResponse,
+  type Invitation,
+  INVITATION_DAYS,
+  type InvitationPreview,
   type InviteRequest,
 } from '@homeground/shared';
 import { DataSource, IsNull, Repository } from 'typeorm';
@@ -42,21 +51,39 @@ export class InvitationsService {
       throw new ForbiddenException('Only an organiser of this group can invite people to it.');
     }
     const existingUser = await this.users.findOne({ where: { email: req.email } });
-    if (existingUser && (await this.db.getRepository(GroupMembership).exists({ where: { groupId: group.id, userId: existingUser.id } }))) {
-      throw new ConflictException(`${req.email} is already in ${group.name}: change their role in the member list instead.`);
+    if (
+      existingUser &&
+      (await this.db.getRepository(GroupMembership).exists({ where: { groupId: group.id, userId: existingUser.id } }))
+    ) {
+      throw new ConflictException(
+        `${req.email} is already in ${group.name}: change their role in the member list instead.`,
+      );
     }
     const inviter = await this.users.findOneOrFail({ where: { id: caller.id } });
     const token = randomBytes(32).toString('base64url');
     const expiresAt = new Date(now.getTime() + INVITATION_DAYS * 86_400_000);
     const row = await this.db.transaction(async (tx) => {
       await tx.delete(InvitationRow, { groupId: group.id, email: req.email, acceptedAt: IsNull() });
-      return tx.save(InvitationRow, tx.create(InvitationRow, {
-        groupId: group.id, email: req.email, role: req.role, tokenHash: hashToken(token), invitedBy: caller.id, expiresAt,
-      }));
+      return tx.save(
+        InvitationRow,
+        tx.create(InvitationRow, {
+          groupId: group.id,
+          email: req.email,
+          role: req.role,
+          tokenHash: hashToken(token),
+          invitedBy: caller.id,
+          expiresAt,
+        }),
+      );
     });
     const message = invitationEmail({
-      inviterName: inviter.displayName, groupName: group.name, town: group.town, state: group.state, role: req.role,
-      link: `${this.config.publicUrl}/invitations/${token}`, days: INVITATION_DAYS,
+      inviterName: inviter.displayName,
+      groupName: group.name,
+      town: group.town,
+      state: group.state,
+      role: req.role,
+      link: `${this.config.publicUrl}/invitations/${token}`,
+      days: INVITATION_DAYS,
     });
     await this.mail.send({ to: req.email, ...message, kind: 'invitation', groupId: group.id });
     return toInvitation(row);
@@ -76,8 +103,14 @@ export class InvitationsService {
     const { row, group } = await this.open(token, now);
     const accountExists = await this.users.exists({ where: { email: row.email } });
     return {
-      groupSlug: group.slug, groupName: group.name, town: group.town, state: group.state, role: row.role,
-      email: row.email, accountExists, expiresAt: row.expiresAt.toISOString(),
+      groupSlug: group.slug,
+      groupName: group.name,
+      town: group.town,
+      state: group.state,
+      role: row.role,
+      email: row.email,
+      accountExists,
+      expiresAt: row.expiresAt.toISOString(),
     };
   }
 
@@ -86,12 +119,19 @@ export class InvitationsService {
    * the invitation's address with the name and password given. One transaction: no account without its
    * membership, no membership from a used link.
    */
-  async accept(token: string, caller: AuthenticatedUser | null, req: AcceptInvitationRequest, now = new Date()): Promise<AuthResponse> {
+  async accept(
+    token: string,
+    caller: AuthenticatedUser | null,
+    req: AcceptInvitationRequest,
+    now = new Date(),
+  ): Promise<AuthResponse> {
     const { row } = await this.open(token, now);
     let userId: string;
     if (caller) {
       if (caller.email.toLowerCase() !== row.email) {
-        throw new ForbiddenException(`This invitation was sent to ${row.email}: sign in with that address to accept it.`);
+        throw new ForbiddenException(
+          `This invitation was sent to ${row.email}: sign in with that address to accept it.`,
+        );
       }
       userId = caller.id;
     } else {
@@ -114,13 +154,25 @@ export class InvitationsService {
       if (!claimed.affected) throw new GoneException('This invitation has already been used.');
       let id = userId;
       if (!caller) {
-        const user = await tx.save(User, tx.create(User, {
-          email: row.email, displayName: req.displayName!, passwordHash: passwordHash!, role: 'member', isDemo: false,
-        }));
+        const user = await tx.save(
+          User,
+          tx.create(User, {
+            email: row.email,
+            displayName: req.displayName!,
+            passwordHash: passwordHash!,
+            role: 'member',
+            isDemo: false,
+          }),
+        );
         id = user.id;
       }
       const existing = await tx.findOne(GroupMembership, { where: { groupId: row.groupId, userId: id } });
-      await tx.save(GroupMembership, existing ? { ...existing, role: row.role } : tx.create(GroupMembership, { groupId: row.groupId, userId: id, role: row.role }));
+      await tx.save(
+        GroupMembership,
+        existing
+          ? { ...existing, role: row.role }
+          : tx.create(GroupMembership, { groupId: row.groupId, userId: id, role: row.role }),
+      );
       return id;
     });
     return this.auth.tokenFor(joinedId);
@@ -128,7 +180,8 @@ export class InvitationsService {
 
   private async open(token: string, now: Date): Promise<{ row: InvitationRow; group: Group }> {
     const row = await this.invitations.findOne({ where: { tokenHash: hashToken(token) } });
-    if (!row) throw new NotFoundException('This invitation link is not one we sent, or it was replaced by a newer one.');
+    if (!row)
+      throw new NotFoundException('This invitation link is not one we sent, or it was replaced by a newer one.');
     if (row.acceptedAt) throw new GoneException('This invitation has already been used.');
     if (row.expiresAt.getTime() < now.getTime()) {
       throw new GoneException('This invitation has expired: ask the organiser to send a new one.');
@@ -140,7 +193,10 @@ export class InvitationsService {
 
 function toInvitation(r: InvitationRow): Invitation {
   return {
-    id: r.id, email: r.email, role: r.role, expiresAt: r.expiresAt.toISOString(),
+    id: r.id,
+    email: r.email,
+    role: r.role,
+    expiresAt: r.expiresAt.toISOString(),
     acceptedAt: r.acceptedAt ? r.acceptedAt.toISOString() : null,
   };
 }

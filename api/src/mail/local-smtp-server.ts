@@ -20,7 +20,9 @@ const MAX_MESSAGE_BYTES = 5 * 1024 * 1024;
  * for a real mail server in development and tests, so mail is really sent over SMTP by nodemailer and
  * really received, without leaving the machine.
  */
-export async function startLocalSmtpServer(onMail: (mail: ReceivedMail) => Promise<void>): Promise<{ port: number; close(): Promise<void> }> {
+export async function startLocalSmtpServer(
+  onMail: (mail: ReceivedMail) => Promise<void>,
+): Promise<{ port: number; close(): Promise<void> }> {
   const server = new SMTPServer({
     authOptional: true,
     disabledCommands: ['STARTTLS'],
@@ -39,7 +41,10 @@ export async function startLocalSmtpServer(onMail: (mail: ReceivedMail) => Promi
             headers: parsed.headers,
           }),
         )
-        .then(() => callback(), (err: Error) => callback(err));
+        .then(
+          () => callback(),
+          (err: Error) => callback(err),
+        );
     },
   });
   await new Promise<void>((resolve, reject) => {

@@ -37,7 +37,12 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     const local = await startLocalSmtpServer((mail) => this.outbox.keep(mail));
     this.closeLocalServer = local.close;
     // Loopback only, so no TLS: the message never leaves this machine.
-    this.transport = nodemailer.createTransport({ host: '127.0.0.1', port: local.port, secure: false, ignoreTLS: true });
+    this.transport = nodemailer.createTransport({
+      host: '127.0.0.1',
+      port: local.port,
+      secure: false,
+      ignoreTLS: true,
+    });
   }
 
   async onModuleDestroy(): Promise<void> {

@@ -1,6 +1,12 @@
 import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { type OutboxMessage, outboxMessageSchema, type OutboxQuery, outboxQuerySchema, uuidParamSchema } from '@homeground/shared';
+import {
+  type OutboxMessage,
+  outboxMessageSchema,
+  type OutboxQuery,
+  outboxQuerySchema,
+  uuidParamSchema,
+} from '@homeground/shared';
 import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
@@ -17,7 +23,10 @@ export class OutboxController {
   @Get()
   @Auth()
   @ZodResponse(z.array(outboxMessageSchema))
-  list(@ZodQuery(outboxQuerySchema) query: OutboxQuery, @CurrentUser() user: AuthenticatedUser): Promise<OutboxMessage[]> {
+  list(
+    @ZodQuery(outboxQuerySchema) query: OutboxQuery,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<OutboxMessage[]> {
     return this.outbox.list(user, query);
   }
 

@@ -38,7 +38,11 @@ export class MixContextService {
   region(region: RegionContext): RegionContext {
     if (!region.ecoregionCode || region.ecoregionPlantCommunities) return region;
     const e = this.ecoregions.list().find((x) => x.code === region.ecoregionCode);
-    if (!e) throw badRequest([{ field: 'region.ecoregionCode', message: 'is not in the catalogue' }], 'region.ecoregionCode is not in the catalogue');
+    if (!e)
+      throw badRequest(
+        [{ field: 'region.ecoregionCode', message: 'is not in the catalogue' }],
+        'region.ecoregionCode is not in the catalogue',
+      );
     return { ...region, ecoregionPlantCommunities: e.plantCommunities };
   }
 

@@ -1,8 +1,15 @@
 import { Controller, Header, HttpCode, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
-  type CalendarRequest, calendarRequestSchema, type CalendarResponse, mixQuantities, type MixQuantity,
-  mixQuantitySchema, type QuantitiesRequest, quantitiesRequestSchema, sowingCalendarSchema,
+  type CalendarRequest,
+  calendarRequestSchema,
+  type CalendarResponse,
+  mixQuantities,
+  type MixQuantity,
+  mixQuantitySchema,
+  type QuantitiesRequest,
+  quantitiesRequestSchema,
+  sowingCalendarSchema,
 } from '@homeground/shared';
 import { z } from 'zod';
 import { FileResponse, ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
@@ -19,17 +26,19 @@ export class PlanningController {
   ) {}
 
   @Post('quantities')
-
   @ZodResponse(z.array(mixQuantitySchema))
   @HttpCode(200)
   quantities(@ZodBody(quantitiesRequestSchema) body: QuantitiesRequest): MixQuantity[] {
     this.ctx.assertKnown(body.species.map((s, i) => ({ field: `species.${i}.slug`, slug: s.slug })));
     const spacingIn = Object.fromEntries(body.species.filter((s) => s.spacingIn).map((s) => [s.slug, s.spacingIn!]));
-    return mixQuantities(body.species.map((s) => this.ctx.get(s.slug)!), body.areaSqFt, { lossFactor: body.lossFactor, spacingIn, grassShare: body.grassShare });
+    return mixQuantities(
+      body.species.map((s) => this.ctx.get(s.slug)!),
+      body.areaSqFt,
+      { lossFactor: body.lossFactor, spacingIn, grassShare: body.grassShare },
+    );
   }
 
   @Post('calendar')
-
   @ZodResponse(sowingCalendarSchema)
   @HttpCode(200)
   json(@ZodBody(calendarRequestSchema) body: CalendarRequest): CalendarResponse {
@@ -37,7 +46,6 @@ export class PlanningController {
   }
 
   @Post('calendar.csv')
-
   @FileResponse('text/csv', 'The calendar as CSV, one row per event')
   @HttpCode(200)
   @Header('Content-Type', 'text/csv; charset=utf-8')
@@ -47,7 +55,6 @@ export class PlanningController {
   }
 
   @Post('calendar.ics')
-
   @FileResponse('text/calendar', 'The calendar as iCalendar (RFC 5545) all-day events')
   @HttpCode(200)
   @Header('Content-Type', 'text/calendar; charset=utf-8')

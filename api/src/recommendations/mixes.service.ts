@@ -1,7 +1,16 @@
 import { Injectable } from '@nestjs/common';
 import {
-  type AlternativesResponse, alternativesFor, balancePalette, DEFAULT_LOSS_FACTOR, type MixResponse,
-  mixPlanting, type PaletteOptions, recommend, type RecommendationsResponse, type RegionContext, type Site,
+  type AlternativesResponse,
+  alternativesFor,
+  balancePalette,
+  DEFAULT_LOSS_FACTOR,
+  type MixResponse,
+  mixPlanting,
+  type PaletteOptions,
+  recommend,
+  type RecommendationsResponse,
+  type RegionContext,
+  type Site,
 } from '@homeground/shared';
 import { AnswerCache } from './answer-cache.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
@@ -19,7 +28,8 @@ export class MixesService {
   recommend(site: Site, regionIn: RegionContext): RecommendationsResponse {
     const region = this.ctx.region(regionIn);
     const r = recommend(this.ctx.species(), site, region);
-    const withSpecies = <T extends { slug: string }>(list: T[]) => list.map((x) => ({ ...x, species: this.ctx.summary(x.slug) }));
+    const withSpecies = <T extends { slug: string }>(list: T[]) =>
+      list.map((x) => ({ ...x, species: this.ctx.summary(x.slug) }));
     return {
       site,
       ranked: withSpecies(r.ranked.slice(0, MAX_RANKED)),
@@ -47,11 +57,18 @@ export class MixesService {
   }
 
   alternatives(
-    site: Site, regionIn: RegionContext, options: PaletteOptions, chosen: string[], slot: string, acrossForms = false,
+    site: Site,
+    regionIn: RegionContext,
+    options: PaletteOptions,
+    chosen: string[],
+    slot: string,
+    acrossForms = false,
   ): AlternativesResponse {
     this.ctx.assertKnown([...chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })), { field: 'slot', slug: slot }]);
     const region = this.ctx.region(regionIn);
-    const list = alternativesFor({ species: this.ctx.species(), site, region, options }, chosen, slot, 5, { acrossForms });
+    const list = alternativesFor({ species: this.ctx.species(), site, region, options }, chosen, slot, 5, {
+      acrossForms,
+    });
     return { alternatives: list.map((a) => ({ ...a, species: this.ctx.summary(a.slug) })) };
   }
 }

@@ -1,8 +1,14 @@
 import { Controller, HttpCode, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
-  alternativesRequestSchema, type AlternativesResponse, alternativesResponseSchema, type MixResponse,
-  mixResponseSchema, paletteRequestSchema, type RecommendationsResponse, recommendationsResponseSchema,
+  alternativesRequestSchema,
+  type AlternativesResponse,
+  alternativesResponseSchema,
+  type MixResponse,
+  mixResponseSchema,
+  paletteRequestSchema,
+  type RecommendationsResponse,
+  recommendationsResponseSchema,
   recommendRequestSchema,
 } from '@homeground/shared';
 import type { z } from 'zod';
@@ -36,7 +42,9 @@ export class RecommendationsController {
   @Post('mixes/alternatives')
   @ZodResponse(alternativesResponseSchema)
   @HttpCode(200)
-  alternatives(@ZodBody(alternativesRequestSchema) body: Parsed<typeof alternativesRequestSchema>): AlternativesResponse {
+  alternatives(
+    @ZodBody(alternativesRequestSchema) body: Parsed<typeof alternativesRequestSchema>,
+  ): AlternativesResponse {
     return this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot, body.acrossForms);
   }
 }

@@ -1,4 +1,12 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
 import type { PaletteRequest } from '@homeground/shared';
 // Type-only, with the relation named by entity, so saved mixes need no users code at run time.
 import type { User } from '../users/user.entity.js';

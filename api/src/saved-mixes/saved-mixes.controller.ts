@@ -16,15 +16,16 @@ export class SavedMixesController {
   constructor(private readonly saved: SavedMixesService) {}
 
   @Post('mixes')
-
   @ZodResponse(savedMixSchema, 201)
   @Auth()
-  save(@ZodBody(saveMixRequestSchema) body: Parsed<typeof saveMixRequestSchema>, @CurrentUser() user: AuthenticatedUser): Promise<SavedMix> {
+  save(
+    @ZodBody(saveMixRequestSchema) body: Parsed<typeof saveMixRequestSchema>,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<SavedMix> {
     return this.saved.save(user, { ...body, request: body.request as unknown as SavedMix['request'] });
   }
 
   @Get('mixes')
-
   @ZodResponse(z.array(savedMixSchema))
   @Auth()
   mine(@CurrentUser() user: AuthenticatedUser): Promise<SavedMix[]> {
@@ -39,7 +40,6 @@ export class SavedMixesController {
   }
 
   @Delete('mixes/:id')
-
   @ApiNoContentResponse({ description: 'Deleted' })
   @HttpCode(204)
   @Auth()

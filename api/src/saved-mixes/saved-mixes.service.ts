@@ -17,7 +17,9 @@ export class SavedMixesService {
 
   async save(user: AuthenticatedUser, input: SaveInput): Promise<SavedMix> {
     this.ctx.assertKnown(input.chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })));
-    const row = await this.mixes.save(this.mixes.create({ ownerId: user.id, name: input.name, request: input.request, chosen: input.chosen }));
+    const row = await this.mixes.save(
+      this.mixes.create({ ownerId: user.id, name: input.name, request: input.request, chosen: input.chosen }),
+    );
     return this.get(row.id);
   }
 
@@ -28,14 +30,19 @@ export class SavedMixesService {
   }
 
   async mine(user: AuthenticatedUser): Promise<SavedMix[]> {
-    const rows = await this.mixes.find({ where: { ownerId: user.id }, relations: { owner: true }, order: { createdAt: 'DESC' } });
+    const rows = await this.mixes.find({
+      where: { ownerId: user.id },
+      relations: { owner: true },
+      order: { createdAt: 'DESC' },
+    });
     return rows.map(toDto);
   }
 
   async remove(user: AuthenticatedUser, id: string): Promise<void> {
     const row = await this.mixes.findOne({ where: { id } });
     if (!row) throw new NotFoundException('No saved mix with that id.');
-    if (row.ownerId !== user.id && user.role !== 'admin') throw new ForbiddenException('Only the person who saved a mix can delete it.');
+    if (row.ownerId !== user.id && user.role !== 'admin')
+      throw new ForbiddenException('Only the person who saved a mix can delete it.');
     await this.mixes.delete({ id });
   }
 }

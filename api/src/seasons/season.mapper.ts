@@ -6,7 +6,12 @@ import type { SeasonRow } from './season.entity.js';
 export type SpeciesNames = (slug: string) => { commonName: string; scientificName: string } | undefined;
 
 /** A season with its group's place and its targets in the organiser's order, as the API returns it. */
-export function toSeason(group: Group, season: SeasonRow, targets: readonly SeasonTargetRow[], names: SpeciesNames): Season {
+export function toSeason(
+  group: Group,
+  season: SeasonRow,
+  targets: readonly SeasonTargetRow[],
+  names: SpeciesNames,
+): Season {
   return {
     groupSlug: group.slug,
     groupName: group.name,
@@ -18,13 +23,15 @@ export function toSeason(group: Group, season: SeasonRow, targets: readonly Seas
     milkweedShare: season.milkweedShare,
     lossFactor: season.lossFactor,
     seedsPerPacket: season.seedsPerPacket,
-    targets: [...targets].sort((a, b) => a.position - b.position).map((t) => ({
-      slug: t.slug,
-      targetPlants: t.targetPlants,
-      ...(t.germinationRatePct === null ? {} : { germinationRatePct: t.germinationRatePct }),
-      commonName: names(t.slug)?.commonName ?? t.slug,
-      scientificName: names(t.slug)?.scientificName ?? '',
-    })),
+    targets: [...targets]
+      .sort((a, b) => a.position - b.position)
+      .map((t) => ({
+        slug: t.slug,
+        targetPlants: t.targetPlants,
+        ...(t.germinationRatePct === null ? {} : { germinationRatePct: t.germinationRatePct }),
+        commonName: names(t.slug)?.commonName ?? t.slug,
+        scientificName: names(t.slug)?.scientificName ?? '',
+      })),
     updatedAt: season.updatedAt.toISOString(),
   };
 }

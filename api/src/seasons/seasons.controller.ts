@@ -1,8 +1,18 @@
 import { Controller, Get, Header, HttpCode, Post, Put } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
-  type Season, type SeasonRequest, seasonRequestSchema, type ShareList, type ShareListRequest, shareListRequestSchema,
-  slugParamSchema, type TargetsRequest, targetsRequestSchema, seasonSchema, shareListSchema, seasonSeedListSchema,
+  type Season,
+  type SeasonRequest,
+  seasonRequestSchema,
+  type ShareList,
+  type ShareListRequest,
+  shareListRequestSchema,
+  slugParamSchema,
+  type TargetsRequest,
+  targetsRequestSchema,
+  seasonSchema,
+  shareListSchema,
+  seasonSeedListSchema,
 } from '@homeground/shared';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
@@ -62,7 +72,10 @@ export class SeasonsController {
 
   @Get('seed-list')
   @ZodResponse(seasonSeedListSchema)
-  seedList(@ZodParam('slug', slugParamSchema) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<SeasonSeedList> {
+  seedList(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<SeasonSeedList> {
     return this.seasons.seedList(slug, user);
   }
 
@@ -70,7 +83,10 @@ export class SeasonsController {
   @FileResponse('text/csv', 'The seed list as CSV')
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-seed-list.csv"')
-  seedListCsv(@ZodParam('slug', slugParamSchema) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<string> {
+  seedListCsv(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<string> {
     return this.seasons.seedListCsv(slug, user);
   }
 }

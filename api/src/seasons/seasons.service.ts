@@ -1,9 +1,22 @@
 import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
-  DEFAULT_LOSS_FACTOR, DEFAULT_MILKWEED_SHARE, DEFAULT_SEASON_METHODS, DEFAULT_SEEDS_PER_PACKET, pastSeasonDateFields,
-  proposeShareList, seedList, seedListToCsv, type Season, type SeasonRequest, type SeedList, type ShareList,
-  type ShareListRequest, type StateCode, type TargetsRequest, type Group
+  DEFAULT_LOSS_FACTOR,
+  DEFAULT_MILKWEED_SHARE,
+  DEFAULT_SEASON_METHODS,
+  DEFAULT_SEEDS_PER_PACKET,
+  pastSeasonDateFields,
+  proposeShareList,
+  seedList,
+  seedListToCsv,
+  type Season,
+  type SeasonRequest,
+  type SeedList,
+  type ShareList,
+  type ShareListRequest,
+  type StateCode,
+  type TargetsRequest,
+  type Group,
 } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
@@ -47,10 +60,16 @@ export class SeasonsService {
     if (past.length) throw badRequest(past);
     const saved = await this.db.transaction(async (tx) => {
       const existing = await tx.findOne(SeasonRow, { where: { groupId: group.id, year: req.year } });
-      const row = existing ?? tx.create(SeasonRow, {
-        groupId: group.id, year: req.year, methods: [...DEFAULT_SEASON_METHODS], milkweedShare: DEFAULT_MILKWEED_SHARE,
-        lossFactor: DEFAULT_LOSS_FACTOR, seedsPerPacket: DEFAULT_SEEDS_PER_PACKET,
-      });
+      const row =
+        existing ??
+        tx.create(SeasonRow, {
+          groupId: group.id,
+          year: req.year,
+          methods: [...DEFAULT_SEASON_METHODS],
+          milkweedShare: DEFAULT_MILKWEED_SHARE,
+          lossFactor: DEFAULT_LOSS_FACTOR,
+          seedsPerPacket: DEFAULT_SEEDS_PER_PACKET,
+        });
       // Settings left out keep their value: an organiser moving the date does not reset the milkweed share.
       Object.assign(row, {
         lastFrost: req.lastFrost,
@@ -88,15 +107,21 @@ export class SeasonsService {
     this.ctx.assertKnown(req.targets.map((t, i) => ({ field: `targets.${i}.slug`, slug: t.slug })));
     const rows = await this.db.transaction(async (tx) => {
       await tx.delete(SeasonTargetRow, { seasonId: season.id });
-      const fresh = req.targets.map((t, position) => tx.create(SeasonTargetRow, {
-        seasonId: season.id, slug: t.slug, targetPlants: t.targetPlants, germinationRatePct: t.germinationRatePct ?? null, position,
-      }));
+      const fresh = req.targets.map((t, position) =>
+        tx.create(SeasonTargetRow, {
+          seasonId: season.id,
+          slug: t.slug,
+          targetPlants: t.targetPlants,
+          germinationRatePct: t.germinationRatePct ?? null,
+          position,
+        }),
+      );
       const saved = await tx.save(SeasonTargetRow, fresh);
       // The season's updatedAt tells readers the plan changed.
       await tx.update(SeasonRow, { id: season.id }, { updatedAt: new Date() });
       return saved;
     });
-    return this.toDto(group, (await this.seasons.findOneByOrFail({ id: season.id })), rows);
+    return this.toDto(group, await this.seasons.findOneByOrFail({ id: season.id }), rows);
   }
 
   async seedList(slug: string, user: AuthenticatedUser): Promise<SeasonSeedList> {
@@ -105,9 +130,15 @@ export class SeasonsService {
     const targets = (await this.targetsOf(season)).flatMap((t) => {
       const species = this.ctx.get(t.slug);
       // A target renamed away in the catalogue has no record to count from; the season page still lists it.
-      return species ? [{ species, targetPlants: t.targetPlants, germinationRatePct: t.germinationRatePct ?? undefined }] : [];
+      return species
+        ? [{ species, targetPlants: t.targetPlants, germinationRatePct: t.germinationRatePct ?? undefined }]
+        : [];
     });
-    const list = seedList(targets, { state: group.state as StateCode, lossFactor: season.lossFactor, seedsPerPacket: season.seedsPerPacket });
+    const list = seedList(targets, {
+      state: group.state as StateCode,
+      lossFactor: season.lossFactor,
+      seedsPerPacket: season.seedsPerPacket,
+    });
     return { groupSlug: group.slug, year: season.year, ...list };
   }
 
@@ -118,7 +149,8 @@ export class SeasonsService {
   /** The group, when the caller has any role in it (member, grower, organiser; admins act as organisers). */
   private async readable(slug: string, user: AuthenticatedUser): Promise<Group> {
     const group = await this.groups.getDto(slug);
-    if (!(await this.groups.roleOf(user, group.id))) throw new ForbiddenException('Only people in this group can see its season plan.');
+    if (!(await this.groups.roleOf(user, group.id)))
+      throw new ForbiddenException('Only people in this group can see its season plan.');
     return group;
   }
 
@@ -133,7 +165,8 @@ export class SeasonsService {
   /** The group's newest season. */
   private async latest(group: Group): Promise<SeasonRow> {
     const season = await this.seasons.findOne({ where: { groupId: group.id }, order: { year: 'DESC' } });
-    if (!season) throw new NotFoundException(`${group.name} has no season plan yet: an organiser sets its dates first.`);
+    if (!season)
+      throw new NotFoundException(`${group.name} has no season plan yet: an organiser sets its dates first.`);
     return season;
   }
 

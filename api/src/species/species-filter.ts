@@ -16,20 +16,31 @@ export function matchesFilters(s: Species, q: SpeciesQuery, ecoregion: Ecoregion
   return true;
 }
 
-const byName = (a: Species, b: Species) => a.commonNames[0].localeCompare(b.commonNames[0]) || a.slug.localeCompare(b.slug);
+const byName = (a: Species, b: Species) =>
+  a.commonNames[0].localeCompare(b.commonNames[0]) || a.slug.localeCompare(b.slug);
 
-const COMPARATORS: Record<Exclude<NonNullable<SpeciesQuery['sort']>, 'relevance'>, (a: Species, b: Species) => number> = {
+const COMPARATORS: Record<
+  Exclude<NonNullable<SpeciesQuery['sort']>, 'relevance'>,
+  (a: Species, b: Species) => number
+> = {
   name: byName,
   scientificName: (a, b) => a.scientificName.localeCompare(b.scientificName),
   height: (a, b) => a.heightCm.max - b.heightCm.max || byName(a, b),
-  bloomStart: (a, b) => (Math.min(...a.bloomMonths, 13) - Math.min(...b.bloomMonths, 13)) || byName(a, b),
-  hostValue: (a, b) => (a.wildlife.lepidopteraGenusCount ?? -1) - (b.wildlife.lepidopteraGenusCount ?? -1) || byName(a, b),
+  bloomStart: (a, b) => Math.min(...a.bloomMonths, 13) - Math.min(...b.bloomMonths, 13) || byName(a, b),
+  hostValue: (a, b) =>
+    (a.wildlife.lepidopteraGenusCount ?? -1) - (b.wildlife.lepidopteraGenusCount ?? -1) || byName(a, b),
 };
 
 /** Sorts in place; `relevance` keeps the search order (or falls back to name without a search). */
-export function sortSpecies(list: Species[], sort: SpeciesQuery['sort'], order: SpeciesQuery['order'], hasSearch: boolean): Species[] {
+export function sortSpecies(
+  list: Species[],
+  sort: SpeciesQuery['sort'],
+  order: SpeciesQuery['order'],
+  hasSearch: boolean,
+): Species[] {
   const key = sort ?? (hasSearch ? 'relevance' : 'name');
-  if (key === 'relevance') return hasSearch ? (order === 'desc' ? list.reverse() : list) : sortSpecies(list, 'name', order, false);
+  if (key === 'relevance')
+    return hasSearch ? (order === 'desc' ? list.reverse() : list) : sortSpecies(list, 'name', order, false);
   const cmp = COMPARATORS[key];
   return list.sort(order === 'desc' ? (a, b) => cmp(b, a) : cmp);
 }

@@ -41,7 +41,9 @@ export class SpeciesPhotosService {
     const type = await fileTypeFromBuffer(bytes);
     const ext = type && ACCEPTED.get(type.mime);
     if (!type || !ext) {
-      throw new UnsupportedMediaTypeException(`Photos must be JPEG, PNG or WebP; this file is ${type ? type.mime : 'not an image we recognise'}.`);
+      throw new UnsupportedMediaTypeException(
+        `Photos must be JPEG, PNG or WebP; this file is ${type ? type.mime : 'not an image we recognise'}.`,
+      );
     }
     let meta: Metadata;
     try {
@@ -55,9 +57,18 @@ export class SpeciesPhotosService {
     await writeFile(tmp, bytes);
     const photo = await this.db.transaction(async (tx) => {
       const old = await tx.findOne(SpeciesPhoto, { where: { slug } });
-      const saved = await tx.save(SpeciesPhoto, tx.create(SpeciesPhoto, {
-        slug, file, mime: type.mime, bytes: bytes.length, width: meta.width ?? 0, height: meta.height ?? 0, uploadedBy: userId,
-      }));
+      const saved = await tx.save(
+        SpeciesPhoto,
+        tx.create(SpeciesPhoto, {
+          slug,
+          file,
+          mime: type.mime,
+          bytes: bytes.length,
+          width: meta.width ?? 0,
+          height: meta.height ?? 0,
+          uploadedBy: userId,
+        }),
+      );
       await rename(tmp, path.join(this.dir, file));
       await this.removeVariants(slug, old && old.file !== file ? old.file : null);
       return saved;

@@ -94,7 +94,12 @@ export class SpeciesStore {
     } else {
       pool = [...this.species];
     }
-    const filtered = sortSpecies(pool.filter((s) => matchesFilters(s, query, ecoregion)), query.sort, query.order, Boolean(query.q));
+    const filtered = sortSpecies(
+      pool.filter((s) => matchesFilters(s, query, ecoregion)),
+      query.sort,
+      query.order,
+      Boolean(query.q),
+    );
     const start = (query.page - 1) * query.pageSize;
     return {
       items: filtered.slice(start, start + query.pageSize).map((s) => toSpeciesSummary(s, this.photos.has(s.slug))),

@@ -1,8 +1,17 @@
 import { Controller, Get, Header, HttpCode, Post, Put, Req, Res, StreamableFile } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
-  type CsvImportResult, csvImportResultSchema, type PhotoQuery, photoQuerySchema, photoUploadResultSchema,
-  slugParamSchema, type Species, speciesDetailSchema, speciesPageSchema, type SpeciesQuery, speciesQuerySchema,
+  type CsvImportResult,
+  csvImportResultSchema,
+  type PhotoQuery,
+  photoQuerySchema,
+  photoUploadResultSchema,
+  slugParamSchema,
+  type Species,
+  speciesDetailSchema,
+  speciesPageSchema,
+  type SpeciesQuery,
+  speciesQuerySchema,
   speciesSchema,
 } from '@homeground/shared';
 import type { Request, Response } from 'express';
@@ -10,7 +19,15 @@ import { createReadStream } from 'node:fs';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { FileResponse, type UploadedBlob, ZodBody, ZodFile, ZodParam, ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
+import {
+  FileResponse,
+  type UploadedBlob,
+  ZodBody,
+  ZodFile,
+  ZodParam,
+  ZodQuery,
+  ZodResponse,
+} from '../common/decorators/zod.decorators.js';
 import { MAX_PHOTO_BYTES, SpeciesPhotosService } from './species-photos.service.js';
 import { SpeciesStore } from './species-store.service.js';
 import { SpeciesService } from './species.service.js';
@@ -38,8 +55,7 @@ export class SpeciesController {
   }
 
   @Get('export.csv')
-
-  @FileResponse('text/csv', 'The whole catalogue as CSV (the import\'s columns)')
+  @FileResponse('text/csv', "The whole catalogue as CSV (the import's columns)")
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-species.csv"')
   exportCsv(): string {
@@ -47,14 +63,12 @@ export class SpeciesController {
   }
 
   @Get(':slug')
-
   @ZodResponse(speciesDetailSchema)
   get(@ZodParam('slug', slugParamSchema) slug: string): Species & { hasPhoto: boolean } {
     return { ...this.species.get(slug), hasPhoto: this.store.hasPhoto(slug) };
   }
 
   @Post()
-
   @ZodResponse(speciesSchema, 201)
   @Auth('curator')
   create(@ZodBody(speciesSchema) record: Species, @CurrentUser() user: AuthenticatedUser): Promise<Species> {
@@ -62,7 +76,6 @@ export class SpeciesController {
   }
 
   @Put(':slug')
-
   @ZodResponse(speciesSchema)
   @Auth('curator')
   replace(
@@ -78,12 +91,14 @@ export class SpeciesController {
   @ZodResponse(csvImportResultSchema)
   @HttpCode(200)
   @Auth('curator')
-  importCsv(@ZodFile('file', MAX_CSV_BYTES, 'CSV with the export\'s columns') file: UploadedBlob, @CurrentUser() user: AuthenticatedUser): Promise<CsvImportResult> {
+  importCsv(
+    @ZodFile('file', MAX_CSV_BYTES, "CSV with the export's columns") file: UploadedBlob,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<CsvImportResult> {
     return this.species.importCsv(file.buffer.toString('utf8'), user.id);
   }
 
   @Post(':slug/photo')
-
   @ZodResponse(photoUploadResultSchema, 201)
   @Auth('curator')
   async uploadPhoto(
@@ -96,7 +111,6 @@ export class SpeciesController {
   }
 
   @Get(':slug/photo')
-
   @FileResponse('image/*', 'The photo, resized to WebP when w is given')
   async photo(
     @ZodParam('slug', slugParamSchema) slug: string,
@@ -108,4 +122,3 @@ export class SpeciesController {
     return new StreamableFile(createReadStream(file.path), { type: file.mime });
   }
 }
-

@@ -1,4 +1,11 @@
-import { Inject, type MiddlewareConsumer, Module, type NestModule, type OnModuleInit, RequestMethod } from '@nestjs/common';
+import {
+  Inject,
+  type MiddlewareConsumer,
+  Module,
+  type NestModule,
+  type OnModuleInit,
+  RequestMethod,
+} from '@nestjs/common';
 import { CATALOGUE_LOADED, CatalogueModule } from '../catalogue/catalogue.module.js';
 import { EcoregionsModule } from '../ecoregions/ecoregions.module.js';
 import { SpeciesListCacheMiddleware } from './species-list-cache.middleware.js';

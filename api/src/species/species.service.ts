@@ -1,7 +1,12 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import {
-  type CsvImportResult, type CsvRowError, csvRowToSpecies, SPECIES_CSV_COLUMNS, type Species, speciesToCsvRow,
+  type CsvImportResult,
+  type CsvRowError,
+  csvRowToSpecies,
+  SPECIES_CSV_COLUMNS,
+  type Species,
+  speciesToCsvRow,
 } from '@homeground/shared';
 import Papa from 'papaparse';
 import { DataSource } from 'typeorm';
@@ -26,7 +31,8 @@ export class SpeciesService {
   }
 
   async create(record: Species, userId: string): Promise<Species> {
-    if (this.store.get(record.slug)) throw new ConflictException(`Species "${record.slug}" already exists: edit it instead.`);
+    if (this.store.get(record.slug))
+      throw new ConflictException(`Species "${record.slug}" already exists: edit it instead.`);
     await this.db.transaction(async (tx) => {
       await this.assertUnique(tx, record, null);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId });
@@ -38,7 +44,8 @@ export class SpeciesService {
   /** Replaces a record; a curator's edit is kept over later catalogue-file changes (seed hash cleared). */
   async replace(slug: string, record: Species, userId: string): Promise<Species> {
     this.get(slug);
-    if (record.slug !== slug && this.store.get(record.slug)) throw new ConflictException(`Species "${record.slug}" already exists.`);
+    if (record.slug !== slug && this.store.get(record.slug))
+      throw new ConflictException(`Species "${record.slug}" already exists.`);
     await this.db.transaction(async (tx) => {
       await this.assertUnique(tx, record, slug);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId, previousSlug: slug });
@@ -53,8 +60,15 @@ export class SpeciesService {
    * written. Otherwise all rows are written in one transaction (existing slugs are replaced).
    */
   async importCsv(text: string, userId: string): Promise<CsvImportResult> {
-    const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy' });
-    const errors: CsvRowError[] = parsed.errors.map((e) => ({ row: (e.row ?? 0) + 2, field: 'row', message: e.message }));
+    const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
+      header: true,
+      skipEmptyLines: 'greedy',
+    });
+    const errors: CsvRowError[] = parsed.errors.map((e) => ({
+      row: (e.row ?? 0) + 2,
+      field: 'row',
+      message: e.message,
+    }));
     const missing = SPECIES_CSV_COLUMNS.filter((c) => !(parsed.meta.fields ?? []).includes(c));
     if (missing.length) errors.push({ row: 1, field: missing.join(', '), message: 'column missing from the header' });
     if (parsed.data.length === 0) errors.push({ row: 2, field: 'row', message: 'the file has no species rows' });
@@ -90,7 +104,10 @@ export class SpeciesService {
   }
 
   exportCsv(): string {
-    return Papa.unparse({ fields: [...SPECIES_CSV_COLUMNS], data: this.store.all().map(speciesToCsvRow) }, { newline: '\r\n' });
+    return Papa.unparse(
+      { fields: [...SPECIES_CSV_COLUMNS], data: this.store.all().map(speciesToCsvRow) },
+      { newline: '\r\n' },
+    );
   }
 
   /** A symbol or scientific name may belong to one species only (other than the one being replaced). */
@@ -99,7 +116,10 @@ export class SpeciesService {
       `SELECT slug FROM species WHERE (usda_symbol = ? OR scientific_name = ?) AND slug <> ? AND slug <> ?`,
       [r.usdaSymbol, r.scientificName, r.slug, ownSlug ?? r.slug],
     );
-    if (clash.length) throw new ConflictException(`USDA symbol ${r.usdaSymbol} or name ${r.scientificName} is already used by "${clash[0].slug}".`);
+    if (clash.length)
+      throw new ConflictException(
+        `USDA symbol ${r.usdaSymbol} or name ${r.scientificName} is already used by "${clash[0].slug}".`,
+      );
   }
 
   /** Rows that would clash with another species in the catalogue (same symbol or name, other slug). */
@@ -108,7 +128,8 @@ export class SpeciesService {
     const out: CsvRowError[] = [];
     records.forEach((r, i) => {
       const owner = bySymbol.get(r.usdaSymbol);
-      if (owner && owner !== r.slug) out.push({ row: i + 2, field: 'usdaSymbol', message: `is already used by "${owner}"` });
+      if (owner && owner !== r.slug)
+        out.push({ row: i + 2, field: 'usdaSymbol', message: `is already used by "${owner}"` });
     });
     return out;
   }

@@ -27,15 +27,27 @@ export class UsersService {
     return toUserDto(user);
   }
 
-  async create(input: { email: string; displayName: string; passwordHash: string; role?: GlobalRole; isDemo?: boolean }): Promise<UserDto> {
+  async create(input: {
+    email: string;
+    displayName: string;
+    passwordHash: string;
+    role?: GlobalRole;
+    isDemo?: boolean;
+  }): Promise<UserDto> {
     const email = input.email.toLowerCase();
-    if (await this.findByEmail(email)) throw new ConflictException('An account with this e-mail already exists: sign in instead.');
-    const saved = await this.users.save(this.users.create({ ...input, email, role: input.role ?? 'member', isDemo: input.isDemo ?? false }));
+    if (await this.findByEmail(email))
+      throw new ConflictException('An account with this e-mail already exists: sign in instead.');
+    const saved = await this.users.save(
+      this.users.create({ ...input, email, role: input.role ?? 'member', isDemo: input.isDemo ?? false }),
+    );
     return this.getDto(saved.id);
   }
 
   async list(): Promise<UserDto[]> {
-    const all = await this.users.find({ relations: { memberships: { group: true } }, order: { createdAt: 'ASC', email: 'ASC' } });
+    const all = await this.users.find({
+      relations: { memberships: { group: true } },
+      order: { createdAt: 'ASC', email: 'ASC' },
+    });
     return all.map(toUserDto);
   }
 

@@ -2,7 +2,9 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 
 /** ../shared/reference beside the project (never copied in); HOMEGROUND_REFERENCE_DIR overrides it. */
-export const REFERENCE_DIR = process.env.HOMEGROUND_REFERENCE_DIR ?? path.resolve(import.meta.dirname, '..', '..', '..', '..', 'shared', 'reference');
+export const REFERENCE_DIR =
+  process.env.HOMEGROUND_REFERENCE_DIR ??
+  path.resolve(import.meta.dirname, '..', '..', '..', '..', 'shared', 'reference');
 
 /**
  * Whether reference checks can run: missing files skip the checks with a printed reason, except in

@@ -52,7 +52,11 @@ export async function registerUser(
 ): Promise<{ token: string; id: string }> {
   const res = await t.http
     .post('/api/auth/register')
-    .send({ email: who.email, password: who.password ?? 'correct-horse-battery', displayName: who.displayName ?? 'Test Grower' })
+    .send({
+      email: who.email,
+      password: who.password ?? 'correct-horse-battery',
+      displayName: who.displayName ?? 'Test Grower',
+    })
     .expect(201);
   return { token: res.body.accessToken, id: res.body.user.id };
 }

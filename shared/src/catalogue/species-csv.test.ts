@@ -5,8 +5,13 @@ import { csvRowToSpecies, speciesToCsvRow } from './species-csv.js';
 
 const record = speciesSchema.parse({
   ...ziziaAurea,
-  cautions: [{ kind: 'look-alike', text: 'Looks like poison hemlock when young: learn the difference.', source: 'from-memory' }],
-  germination: { ...ziziaAurea.germination, treatments: [{ kind: 'cold-moist', days: 60, note: 'sow in fall; or chill' }] },
+  cautions: [
+    { kind: 'look-alike', text: 'Looks like poison hemlock when young: learn the difference.', source: 'from-memory' },
+  ],
+  germination: {
+    ...ziziaAurea.germination,
+    treatments: [{ kind: 'cold-moist', days: 60, note: 'sow in fall; or chill' }],
+  },
 });
 
 describe('species CSV mapping', () => {
@@ -15,7 +20,10 @@ describe('species CSV mapping', () => {
     expect(back.errors).toEqual([]);
     expect(back.species).toEqual({
       ...record,
-      germination: { ...record.germination, treatments: [{ kind: 'cold-moist', days: 60, note: 'sow in fall, or chill' }] },
+      germination: {
+        ...record.germination,
+        treatments: [{ kind: 'cold-moist', days: 60, note: 'sow in fall, or chill' }],
+      },
     });
   });
 

@@ -7,47 +7,112 @@ import { type Species, speciesSchema, type TreatmentStep } from '../types/specie
  * Export and import use the same columns, so an exported file imports unchanged.
  */
 export const SPECIES_CSV_COLUMNS = [
-  'slug', 'scientificName', 'usdaSymbol', 'family', 'commonNames', 'synonyms', 'growthForm', 'lifespan',
-  'heightMinCm', 'heightMaxCm', 'spreadMinCm', 'spreadMaxCm', 'bloomMonths', 'flowerColours', 'sun',
-  'moisture', 'sunOptimum', 'moistureOptimum', 'wetlandIndicator', 'needsAcidSoil', 'soilTextures',
-  'nativeStates', 'ecoregions', 'habitats', 'lepidopteraGenusCount', 'monarchHost', 'pollinators', 'birds',
-  'specialistBees', 'spreadHabit', 'selfSows', 'commercialAvailability', 'protectedIn', 'deerResistance',
-  'treatments', 'needsLight',
-  'sowingDepthMm', 'seedsPerPound', 'germinationRatePct', 'methods', 'tags', 'cautions', 'sources',
+  'slug',
+  'scientificName',
+  'usdaSymbol',
+  'family',
+  'commonNames',
+  'synonyms',
+  'growthForm',
+  'lifespan',
+  'heightMinCm',
+  'heightMaxCm',
+  'spreadMinCm',
+  'spreadMaxCm',
+  'bloomMonths',
+  'flowerColours',
+  'sun',
+  'moisture',
+  'sunOptimum',
+  'moistureOptimum',
+  'wetlandIndicator',
+  'needsAcidSoil',
+  'soilTextures',
+  'nativeStates',
+  'ecoregions',
+  'habitats',
+  'lepidopteraGenusCount',
+  'monarchHost',
+  'pollinators',
+  'birds',
+  'specialistBees',
+  'spreadHabit',
+  'selfSows',
+  'commercialAvailability',
+  'protectedIn',
+  'deerResistance',
+  'treatments',
+  'needsLight',
+  'sowingDepthMm',
+  'seedsPerPound',
+  'germinationRatePct',
+  'methods',
+  'tags',
+  'cautions',
+  'sources',
   'reconciliations',
 ] as const;
 export type SpeciesCsvColumn = (typeof SPECIES_CSV_COLUMNS)[number];
 export type SpeciesCsvRow = Record<SpeciesCsvColumn, string>;
 
 const list = (v: readonly (string | number)[]) => v.join(';');
-const treatmentText = (t: TreatmentStep) => (t.days ? `${t.kind}:${t.days}` : t.kind) + (t.note ? `:${t.note.replaceAll(';', ',')}` : '');
+const treatmentText = (t: TreatmentStep) =>
+  (t.days ? `${t.kind}:${t.days}` : t.kind) + (t.note ? `:${t.note.replaceAll(';', ',')}` : '');
 
 export function speciesToCsvRow(s: Species): SpeciesCsvRow {
   return {
-    slug: s.slug, scientificName: s.scientificName, usdaSymbol: s.usdaSymbol, family: s.family,
-    commonNames: list(s.commonNames), synonyms: list(s.synonyms), growthForm: s.growthForm, lifespan: s.lifespan,
-    heightMinCm: String(s.heightCm.min), heightMaxCm: String(s.heightCm.max),
-    spreadMinCm: String(s.spreadCm.min), spreadMaxCm: String(s.spreadCm.max),
-    bloomMonths: list(s.bloomMonths), flowerColours: list(s.flowerColours), sun: list(s.sun),
-    moisture: list(s.moisture), sunOptimum: list(s.sunOptimum), moistureOptimum: list(s.moistureOptimum),
-    wetlandIndicator: s.wetlandIndicator ?? '', needsAcidSoil: String(s.needsAcidSoil),
-    soilTextures: list(s.soilTextures), nativeStates: list(s.nativeStates), ecoregions: list(s.ecoregions),
+    slug: s.slug,
+    scientificName: s.scientificName,
+    usdaSymbol: s.usdaSymbol,
+    family: s.family,
+    commonNames: list(s.commonNames),
+    synonyms: list(s.synonyms),
+    growthForm: s.growthForm,
+    lifespan: s.lifespan,
+    heightMinCm: String(s.heightCm.min),
+    heightMaxCm: String(s.heightCm.max),
+    spreadMinCm: String(s.spreadCm.min),
+    spreadMaxCm: String(s.spreadCm.max),
+    bloomMonths: list(s.bloomMonths),
+    flowerColours: list(s.flowerColours),
+    sun: list(s.sun),
+    moisture: list(s.moisture),
+    sunOptimum: list(s.sunOptimum),
+    moistureOptimum: list(s.moistureOptimum),
+    wetlandIndicator: s.wetlandIndicator ?? '',
+    needsAcidSoil: String(s.needsAcidSoil),
+    soilTextures: list(s.soilTextures),
+    nativeStates: list(s.nativeStates),
+    ecoregions: list(s.ecoregions),
     habitats: list(s.habitats),
     lepidopteraGenusCount: s.wildlife.lepidopteraGenusCount === null ? '' : String(s.wildlife.lepidopteraGenusCount),
-    monarchHost: String(s.wildlife.monarchHost), pollinators: s.wildlife.pollinators, birds: s.wildlife.birds ?? '',
-    specialistBees: list(s.wildlife.specialistBees), spreadHabit: s.spreadHabit,
-    selfSows: String(s.selfSows), commercialAvailability: s.commercialAvailability ?? '',
-    protectedIn: list(s.protectedIn), deerResistance: s.deerResistance,
-    treatments: s.germination.treatments.map(treatmentText).join(';'), needsLight: String(s.germination.needsLight),
+    monarchHost: String(s.wildlife.monarchHost),
+    pollinators: s.wildlife.pollinators,
+    birds: s.wildlife.birds ?? '',
+    specialistBees: list(s.wildlife.specialistBees),
+    spreadHabit: s.spreadHabit,
+    selfSows: String(s.selfSows),
+    commercialAvailability: s.commercialAvailability ?? '',
+    protectedIn: list(s.protectedIn),
+    deerResistance: s.deerResistance,
+    treatments: s.germination.treatments.map(treatmentText).join(';'),
+    needsLight: String(s.germination.needsLight),
     sowingDepthMm: String(s.germination.sowingDepthMm),
     seedsPerPound: s.germination.seedsPerPound === null ? '' : String(s.germination.seedsPerPound),
-    germinationRatePct: String(s.germination.germinationRatePct), methods: list(s.germination.methods),
-    tags: list(s.tags), cautions: JSON.stringify(s.cautions), sources: JSON.stringify(s.sources),
+    germinationRatePct: String(s.germination.germinationRatePct),
+    methods: list(s.germination.methods),
+    tags: list(s.tags),
+    cautions: JSON.stringify(s.cautions),
+    sources: JSON.stringify(s.sources),
     reconciliations: JSON.stringify(s.reconciliations),
   };
 }
 
-const split = (v: string | undefined) => (v ?? '').split(';').map((x) => x.trim()).filter(Boolean);
+const split = (v: string | undefined) =>
+  (v ?? '')
+    .split(';')
+    .map((x) => x.trim())
+    .filter(Boolean);
 /** A number cell; blank and junk stay visible to the schema as NaN/undefined so it names the field. */
 const num = (v: string | undefined) => (v === undefined || v.trim() === '' ? undefined : Number(v));
 const bool = (v: string | undefined) => (v === 'true' ? true : v === 'false' ? false : v);
@@ -61,19 +126,32 @@ function parseTreatment(text: string): unknown {
 
 /** Maps a schema path back to the CSV column a person would fix. */
 const PATH_TO_COLUMN: Record<string, SpeciesCsvColumn> = {
-  'heightCm.min': 'heightMinCm', 'heightCm.max': 'heightMaxCm', heightCm: 'heightMaxCm',
-  'spreadCm.min': 'spreadMinCm', 'spreadCm.max': 'spreadMaxCm', spreadCm: 'spreadMaxCm',
-  'wildlife.lepidopteraGenusCount': 'lepidopteraGenusCount', 'wildlife.monarchHost': 'monarchHost',
-  'wildlife.pollinators': 'pollinators', 'wildlife.birds': 'birds', 'wildlife.specialistBees': 'specialistBees',
-  'germination.treatments': 'treatments', 'germination.needsLight': 'needsLight',
-  'germination.sowingDepthMm': 'sowingDepthMm', 'germination.seedsPerPound': 'seedsPerPound',
-  'germination.germinationRatePct': 'germinationRatePct', 'germination.methods': 'methods',
+  'heightCm.min': 'heightMinCm',
+  'heightCm.max': 'heightMaxCm',
+  heightCm: 'heightMaxCm',
+  'spreadCm.min': 'spreadMinCm',
+  'spreadCm.max': 'spreadMaxCm',
+  spreadCm: 'spreadMaxCm',
+  'wildlife.lepidopteraGenusCount': 'lepidopteraGenusCount',
+  'wildlife.monarchHost': 'monarchHost',
+  'wildlife.pollinators': 'pollinators',
+  'wildlife.birds': 'birds',
+  'wildlife.specialistBees': 'specialistBees',
+  'germination.treatments': 'treatments',
+  'germination.needsLight': 'needsLight',
+  'germination.sowingDepthMm': 'sowingDepthMm',
+  'germination.seedsPerPound': 'seedsPerPound',
+  'germination.germinationRatePct': 'germinationRatePct',
+  'germination.methods': 'methods',
 };
 
 function columnFor(path: readonly PropertyKey[]): string {
   const named = path.filter((p) => typeof p === 'string').join('.');
   for (let n = path.length; n > 0; n--) {
-    const key = path.slice(0, n).filter((p) => typeof p === 'string').join('.');
+    const key = path
+      .slice(0, n)
+      .filter((p) => typeof p === 'string')
+      .join('.');
     if (PATH_TO_COLUMN[key]) return PATH_TO_COLUMN[key];
   }
   return named.split('.')[0] || 'row';
@@ -83,7 +161,10 @@ function columnFor(path: readonly PropertyKey[]): string {
  * One CSV row → a checked species record, or the row's errors (line number, column, reason).
  * `line` is the row's line in the file, the header being line 1.
  */
-export function csvRowToSpecies(row: Partial<Record<string, string>>, line: number): { species?: Species; errors: CsvRowError[] } {
+export function csvRowToSpecies(
+  row: Partial<Record<string, string>>,
+  line: number,
+): { species?: Species; errors: CsvRowError[] } {
   const errors: CsvRowError[] = [];
   const json = (column: SpeciesCsvColumn, fallback: unknown) => {
     const cell = row[column];
@@ -96,33 +177,58 @@ export function csvRowToSpecies(row: Partial<Record<string, string>>, line: numb
     }
   };
   const candidate = {
-    slug: row.slug, scientificName: row.scientificName, usdaSymbol: row.usdaSymbol, family: row.family,
-    commonNames: split(row.commonNames), synonyms: split(row.synonyms), growthForm: row.growthForm, lifespan: row.lifespan,
+    slug: row.slug,
+    scientificName: row.scientificName,
+    usdaSymbol: row.usdaSymbol,
+    family: row.family,
+    commonNames: split(row.commonNames),
+    synonyms: split(row.synonyms),
+    growthForm: row.growthForm,
+    lifespan: row.lifespan,
     heightCm: { min: num(row.heightMinCm), max: num(row.heightMaxCm) },
     spreadCm: { min: num(row.spreadMinCm), max: num(row.spreadMaxCm) },
-    bloomMonths: split(row.bloomMonths).map(Number), flowerColours: split(row.flowerColours), sun: split(row.sun),
-    moisture: split(row.moisture), soilTextures: split(row.soilTextures), nativeStates: split(row.nativeStates),
+    bloomMonths: split(row.bloomMonths).map(Number),
+    flowerColours: split(row.flowerColours),
+    sun: split(row.sun),
+    moisture: split(row.moisture),
+    soilTextures: split(row.soilTextures),
+    nativeStates: split(row.nativeStates),
     habitats: split(row.habitats),
-    sunOptimum: split(row.sunOptimum), moistureOptimum: split(row.moistureOptimum), ecoregions: split(row.ecoregions),
+    sunOptimum: split(row.sunOptimum),
+    moistureOptimum: split(row.moistureOptimum),
+    ecoregions: split(row.ecoregions),
     // A blank cell is "not known" for the two nullable facts.
-    wetlandIndicator: row.wetlandIndicator?.trim() || null, needsAcidSoil: bool(row.needsAcidSoil), selfSows: bool(row.selfSows),
-    commercialAvailability: row.commercialAvailability?.trim() || null, protectedIn: split(row.protectedIn),
+    wetlandIndicator: row.wetlandIndicator?.trim() || null,
+    needsAcidSoil: bool(row.needsAcidSoil),
+    selfSows: bool(row.selfSows),
+    commercialAvailability: row.commercialAvailability?.trim() || null,
+    protectedIn: split(row.protectedIn),
     wildlife: {
       lepidopteraGenusCount: row.lepidopteraGenusCount?.trim() ? Number(row.lepidopteraGenusCount) : null,
-      monarchHost: bool(row.monarchHost), pollinators: row.pollinators,
-      ...(row.birds?.trim() ? { birds: row.birds } : {}), specialistBees: split(row.specialistBees),
+      monarchHost: bool(row.monarchHost),
+      pollinators: row.pollinators,
+      ...(row.birds?.trim() ? { birds: row.birds } : {}),
+      specialistBees: split(row.specialistBees),
     },
-    spreadHabit: row.spreadHabit, deerResistance: row.deerResistance,
+    spreadHabit: row.spreadHabit,
+    deerResistance: row.deerResistance,
     germination: {
-      treatments: split(row.treatments).map(parseTreatment), needsLight: bool(row.needsLight),
-      sowingDepthMm: num(row.sowingDepthMm), seedsPerPound: row.seedsPerPound?.trim() ? Number(row.seedsPerPound) : null,
-      germinationRatePct: num(row.germinationRatePct), methods: split(row.methods),
+      treatments: split(row.treatments).map(parseTreatment),
+      needsLight: bool(row.needsLight),
+      sowingDepthMm: num(row.sowingDepthMm),
+      seedsPerPound: row.seedsPerPound?.trim() ? Number(row.seedsPerPound) : null,
+      germinationRatePct: num(row.germinationRatePct),
+      methods: split(row.methods),
     },
-    tags: split(row.tags), cautions: json('cautions', []), sources: json('sources', {}), reconciliations: json('reconciliations', []),
+    tags: split(row.tags),
+    cautions: json('cautions', []),
+    sources: json('sources', {}),
+    reconciliations: json('reconciliations', []),
   };
   const parsed = speciesSchema.safeParse(candidate);
   if (!parsed.success) {
-    for (const issue of parsed.error.issues) errors.push({ row: line, field: columnFor(issue.path), message: issue.message });
+    for (const issue of parsed.error.issues)
+      errors.push({ row: line, field: columnFor(issue.path), message: issue.message });
   }
   return errors.length > 0 || !parsed.success ? { errors } : { species: parsed.data, errors };
 }

@@ -19,19 +19,23 @@ describe('alternativesFor (best replacements for one species of the mix)', () =>
   it('lists outsiders only, best change first, never an excluded species', () => {
     expect(alts.length).toBeGreaterThan(0);
     for (const a of alts) expect([...chosen, 'monarda-fistulosa']).not.toContain(a.slug);
-    for (let i = 1; i < alts.length; i++) expect(alts[i - 1].objectiveChange).toBeGreaterThanOrEqual(alts[i].objectiveChange);
+    for (let i = 1; i < alts.length; i++)
+      expect(alts[i - 1].objectiveChange).toBeGreaterThanOrEqual(alts[i].objectiveChange);
   });
 
   it('the change is the objective with the swap minus the objective without it', () => {
     const c = buildCandidates(input);
     const f = makeObjective({ size: chosen.length, monarchsGoal: true });
-    const set = (slugs: string[]) => c.items.filter((i) => slugs.includes(i.slug)).sort((a, b) => (a.slug < b.slug ? -1 : 1));
+    const set = (slugs: string[]) =>
+      c.items.filter((i) => slugs.includes(i.slug)).sort((a, b) => (a.slug < b.slug ? -1 : 1));
     const swapped = [...chosen.filter((s) => s !== slot), alts[0].slug];
     expect(alts[0].objectiveChange).toBeCloseTo(f(set(swapped)) - f(set(chosen)), 3);
   });
 
   it('the optimised mix has no improving single swap left (every change ≤ 0)', () => {
-    for (const s of chosen) for (const a of alternativesFor(input, chosen, s, 5, { acrossForms: true })) expect(a.objectiveChange).toBeLessThanOrEqual(1e-6);
+    for (const s of chosen)
+      for (const a of alternativesFor(input, chosen, s, 5, { acrossForms: true }))
+        expect(a.objectiveChange).toBeLessThanOrEqual(1e-6);
   });
 
   it('returns nothing for a slot that is not in the mix', () => {
@@ -39,11 +43,14 @@ describe('alternativesFor (best replacements for one species of the mix)', () =>
   });
 });
 
-describe('alternativesFor keeps the slot\'s kind unless asked', () => {
+describe("alternativesFor keeps the slot's kind unless asked", () => {
   it('a wildflower for a wildflower by default; any growth form on request', () => {
     const mix = balancePalette(input).chosen.map((c) => c.slug);
-    const flower = mix.find((s) => F[Object.keys(F).find((k) => F[k as keyof typeof F].slug === s) as keyof typeof F]?.growthForm === 'forb')!;
-    const forms = (list: { slug: string }[]) => list.map((a) => Object.values(F).find((f) => f.slug === a.slug)!.growthForm);
+    const flower = mix.find(
+      (s) => F[Object.keys(F).find((k) => F[k as keyof typeof F].slug === s) as keyof typeof F]?.growthForm === 'forb',
+    )!;
+    const forms = (list: { slug: string }[]) =>
+      list.map((a) => Object.values(F).find((f) => f.slug === a.slug)!.growthForm);
     expect(forms(alternativesFor(input, mix, flower, 20)).every((f) => f === 'forb')).toBe(true);
     expect(forms(alternativesFor(input, mix, flower, 20, { acrossForms: true })).some((f) => f !== 'forb')).toBe(true);
   });

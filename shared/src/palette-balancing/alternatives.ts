@@ -25,7 +25,11 @@ function formKind(form: GrowthForm | undefined): FormKind {
  * appear.
  */
 export function alternativesFor(
-  input: PaletteInput, chosenSlugs: readonly string[], slot: string, limit = 5, options: { acrossForms?: boolean } = {},
+  input: PaletteInput,
+  chosenSlugs: readonly string[],
+  slot: string,
+  limit = 5,
+  options: { acrossForms?: boolean } = {},
 ): PaletteAlternative[] {
   const c = buildCandidates(input);
   const kindOf = (slug: string) => formKind(c.species.get(slug)?.growthForm);

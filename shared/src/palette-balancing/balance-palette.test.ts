@@ -12,10 +12,19 @@ const slugs = (r: PaletteResult) => r.chosen.map((c) => c.slug).sort();
 function candidateSet(early: number, mid: number, late: number, grasses = 0, extra: Partial<Species> = {}): Species[] {
   const make = (prefix: string, months: number[], n: number, growthForm: Species['growthForm'] = 'forb') =>
     Array.from({ length: n }, (_, i) =>
-      makeSpecies({ slug: `${prefix}-${i}`, scientificName: `${prefix[0].toUpperCase()}${prefix.slice(1)} sp${i}`, bloomMonths: months, growthForm, ...extra }));
+      makeSpecies({
+        slug: `${prefix}-${i}`,
+        scientificName: `${prefix[0].toUpperCase()}${prefix.slice(1)} sp${i}`,
+        bloomMonths: months,
+        growthForm,
+        ...extra,
+      }),
+    );
   return [
     // Each flowers through its whole part of the season, so the month-by-month rule can be met.
-    ...make('early', [4, 5, 6], early), ...make('mid', [6, 7], mid), ...make('late', [8, 9, 10], late),
+    ...make('early', [4, 5, 6], early),
+    ...make('mid', [6, 7], mid),
+    ...make('late', [8, 9, 10], late),
     ...make('grass', [8], grasses, 'graminoid'),
   ];
 }
@@ -27,33 +36,50 @@ describe('constraint report: CP42 bloom periods and flowering count', () => {
   it.each([
     ['4 + 4 + 4 forbs, mix of 12', [4, 4, 4], 12, { early: true, mid: true, late: true, flowering: true }],
     ['3 + 3 + 3 forbs, mix of 9', [3, 3, 3], 9, { early: true, mid: true, late: true, flowering: true }],
-    ['5 + 5 + 1 forbs, mix of 9: only 1 late bloomer exists', [5, 5, 1], 9, { early: true, mid: true, late: false, flowering: true }],
+    [
+      '5 + 5 + 1 forbs, mix of 9: only 1 late bloomer exists',
+      [5, 5, 1],
+      9,
+      { early: true, mid: true, late: false, flowering: true },
+    ],
     ['2 + 2 + 2 forbs, mix of 6', [2, 2, 2], 6, { early: false, mid: false, late: false, flowering: false }],
   ] as const)('%s', (_what, [e, m, l], size, expected) => {
     const r = balancePalette({ species: candidateSet(e, m, l), site: sunny, region: LARKFIELD, options: { size } });
     const met = {
-      early: constraint(r, 'cp42-early').met, mid: constraint(r, 'cp42-mid').met,
-      late: constraint(r, 'cp42-late').met, flowering: constraint(r, 'cp42-flowering').met,
+      early: constraint(r, 'cp42-early').met,
+      mid: constraint(r, 'cp42-mid').met,
+      late: constraint(r, 'cp42-late').met,
+      flowering: constraint(r, 'cp42-flowering').met,
     };
     expect(met).toEqual(expected);
   });
 
   it('says why in words when a period has too few species: "Only 1 late bloomer … suits dry shade"', () => {
     const shade = candidateSet(4, 4, 1, 0, { sun: ['shade'], moisture: ['dry'] });
-    const r = balancePalette({ species: shade, site: { ...sunny, sun: 'shade', moisture: 'dry' }, region: LARKFIELD, options: { size: 9 } });
+    const r = balancePalette({
+      species: shade,
+      site: { ...sunny, sun: 'shade', moisture: 'dry' },
+      region: LARKFIELD,
+      options: { size: 9 },
+    });
     expect(constraint(r, 'cp42-late').detail).toContain('Only 1 late bloomer native to your region suits dry shade');
     expect(constraint(r, 'cp42-late').detail).toContain('a species from another part of the season may take its place');
   });
 
   it('explains an unmet 9-species rule in a small mix', () => {
     const r = balancePalette({ species: candidateSet(4, 4, 4), site: sunny, region: LARKFIELD, options: { size: 6 } });
-    expect(constraint(r, 'cp42-flowering').detail).toContain('A mix of 6 species cannot hold the 9 kinds of flowers of a full mix');
+    expect(constraint(r, 'cp42-flowering').detail).toContain(
+      'A mix of 6 species cannot hold the 9 kinds of flowers of a full mix',
+    );
   });
 
   it('agrees with the bloom chart: a late part of the season with one species in September is not met', () => {
     // 3 late bloomers in all, but only one of them flowers in September.
-    const species = [...candidateSet(3, 3, 0), ...['a', 'b'].map((x) => makeSpecies({ slug: `aug-${x}`, scientificName: `Aug sp${x}`, bloomMonths: [8, 10] })),
-      makeSpecies({ slug: 'sep-a', scientificName: 'Sep spa', bloomMonths: [8, 9, 10] })];
+    const species = [
+      ...candidateSet(3, 3, 0),
+      ...['a', 'b'].map((x) => makeSpecies({ slug: `aug-${x}`, scientificName: `Aug sp${x}`, bloomMonths: [8, 10] })),
+      makeSpecies({ slug: 'sep-a', scientificName: 'Sep spa', bloomMonths: [8, 9, 10] }),
+    ];
     const r = balancePalette({ species, site: sunny, region: LARKFIELD, options: { size: 9 } });
     expect(constraint(r, 'cp42-late').met).toBe(false);
     expect(constraint(r, 'cp42-late').detail).toContain('Sep has 1 in flower');
@@ -63,7 +89,13 @@ describe('constraint report: CP42 bloom periods and flowering count', () => {
   it('every rule is reported, met or with a reason', () => {
     const r = balancePalette({ species: candidateSet(1, 1, 0), site: sunny, region: LARKFIELD, options: { size: 2 } });
     expect(r.constraints.map((c) => c.id)).toEqual([
-      'cp42-early', 'cp42-mid', 'cp42-late', 'cp42-flowering', 'monarch-milkweed', 'grass-share', 'height-spread',
+      'cp42-early',
+      'cp42-mid',
+      'cp42-late',
+      'cp42-flowering',
+      'monarch-milkweed',
+      'grass-share',
+      'height-spread',
     ]);
     for (const c of r.constraints) expect(c.detail.length).toBeGreaterThan(10);
   });
@@ -72,7 +104,15 @@ describe('constraint report: CP42 bloom periods and flowering count', () => {
 // NRCS E327136Z2: at least one native Asclepias species when monarchs are a goal (E327, R).
 describe('constraint report: native milkweed for monarchs', () => {
   const monarchs: Site = { ...sunny, moisture: 'dry', goals: ['monarchs'] };
-  const pool = [F.butterflyMilkweed, F.showyGoldenrod, F.wildBergamot, F.wildLupine, F.littleBluestem, F.prairieDropseed, ...candidateSet(3, 3, 3, 0, { moisture: ['dry'] })];
+  const pool = [
+    F.butterflyMilkweed,
+    F.showyGoldenrod,
+    F.wildBergamot,
+    F.wildLupine,
+    F.littleBluestem,
+    F.prairieDropseed,
+    ...candidateSet(3, 3, 3, 0, { moisture: ['dry'] }),
+  ];
 
   it('includes an eligible native milkweed', () => {
     const r = balancePalette({ species: pool, site: monarchs, region: LARKFIELD, options: { size: 5 } });
@@ -92,14 +132,25 @@ describe('constraint report: native milkweed for monarchs', () => {
   });
 
   it('does not apply when monarchs are not a goal', () => {
-    const r = balancePalette({ species: pool, site: { ...monarchs, goals: [] }, region: LARKFIELD, options: { size: 5 } });
+    const r = balancePalette({
+      species: pool,
+      site: { ...monarchs, goals: [] },
+      region: LARKFIELD,
+      options: { size: 5 },
+    });
     expect(constraint(r, 'monarch-milkweed')).toMatchObject({ applies: false, met: true });
   });
 });
 
 describe('balancePalette: determinism, locks, exclusions, size', () => {
   const pool = [...Object.values(F), ...candidateSet(4, 4, 4, 2)];
-  const site: Site = { sun: 'full', moisture: 'medium', areaSqFt: 300, deerPressure: 'high', goals: ['monarchs', 'pollinators'] };
+  const site: Site = {
+    sun: 'full',
+    moisture: 'medium',
+    areaSqFt: 300,
+    deerPressure: 'high',
+    goals: ['monarchs', 'pollinators'],
+  };
 
   it('same input → identical output, in any input order', () => {
     const a = balancePalette({ species: pool, site, region: LARKFIELD });
@@ -110,10 +161,20 @@ describe('balancePalette: determinism, locks, exclusions, size', () => {
   it('keeps locked species and never uses excluded ones', () => {
     const free = balancePalette({ species: pool, site, region: LARKFIELD });
     const out = free.chosen.slice(0, 2).map((c) => c.slug);
-    const r = balancePalette({ species: pool, site, region: LARKFIELD, options: { locked: ['grass-0', 'early-3'], excluded: out } });
+    const r = balancePalette({
+      species: pool,
+      site,
+      region: LARKFIELD,
+      options: { locked: ['grass-0', 'early-3'], excluded: out },
+    });
     expect(slugs(r)).toEqual(expect.arrayContaining(['grass-0', 'early-3']));
     for (const x of out) expect(slugs(r)).not.toContain(x);
-    expect(r.chosen.filter((c) => c.locked).map((c) => c.slug).sort()).toEqual(['early-3', 'grass-0']);
+    expect(
+      r.chosen
+        .filter((c) => c.locked)
+        .map((c) => c.slug)
+        .sort(),
+    ).toEqual(['early-3', 'grass-0']);
   });
 
   it('refuses a lock on a species not native to the state, and says so', () => {
@@ -123,7 +184,12 @@ describe('balancePalette: determinism, locks, exclusions, size', () => {
   });
 
   it('shrinks the mix to the species that suit the ground, with a notice', () => {
-    const r = balancePalette({ species: [F.butterflyMilkweed, F.wildBergamot], site, region: LARKFIELD, options: { size: 5 } });
+    const r = balancePalette({
+      species: [F.butterflyMilkweed, F.wildBergamot],
+      site,
+      region: LARKFIELD,
+      options: { size: 5 },
+    });
     expect(r.size).toBe(2);
     expect(r.notices).toContain('Only 2 species suit your ground, so the mix has 2 instead of 5.');
   });

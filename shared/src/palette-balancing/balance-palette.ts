@@ -16,7 +16,10 @@ import { catalogueCoverage } from '../scoring/coverage.js';
 import { plantingMethodFor } from '../quantities/planting-method.js';
 
 /** The mix size: as asked, else from the area; never fewer than the locks nor more than the candidates. */
-export function resolveSize(input: PaletteInput, c: PaletteCandidates): { size: number; reason: string; notices: string[] } {
+export function resolveSize(
+  input: PaletteInput,
+  c: PaletteCandidates,
+): { size: number; reason: string; notices: string[] } {
   const fromArea = mixSizeForArea(input.site.areaSqFt);
   let size = input.options?.size ?? fromArea.size;
   let reason = input.options?.size !== undefined ? `You asked for ${size} species.` : fromArea.reason;
@@ -26,7 +29,9 @@ export function resolveSize(input: PaletteInput, c: PaletteCandidates): { size: 
     reason = `You kept ${size} species, so the mix holds ${size}.`;
   }
   if (c.items.length < size) {
-    notices.push(`Only ${c.items.length} species suit your ground, so the mix has ${c.items.length} instead of ${size}.`);
+    notices.push(
+      `Only ${c.items.length} species suit your ground, so the mix has ${c.items.length} instead of ${size}.`,
+    );
     size = c.items.length;
   }
   return { size, reason, notices };
@@ -48,7 +53,14 @@ export function balancePalette(input: PaletteInput): PaletteResult {
   const coverage = catalogueCoverage(input.species, input.region);
   if (!coverage.covered) {
     return {
-      size: 0, coverage, plantingMethod, sizeReason: coverage.message ?? '', chosen: [], objective: 0, terms: [], constraints: [],
+      size: 0,
+      coverage,
+      plantingMethod,
+      sizeReason: coverage.message ?? '',
+      chosen: [],
+      objective: 0,
+      terms: [],
+      constraints: [],
       notices: [coverage.message ?? ''],
     };
   }
@@ -76,9 +88,14 @@ export function balancePalette(input: PaletteInput): PaletteResult {
         locked: c.locked.includes(item.slug),
       };
     })
-    .sort((a, b) => compareScored({ ...a, eligible: true, nearMiss: false }, { ...b, eligible: true, nearMiss: false }));
+    .sort((a, b) =>
+      compareScored({ ...a, eligible: true, nearMiss: false }, { ...b, eligible: true, nearMiss: false }),
+    );
 
-  const milkweedNearMisses = c.milkweedNearMisses.map((r) => ({ name: c.species.get(r.slug)!.commonNames[0], reason: r.ineligibleReason ?? '' }));
+  const milkweedNearMisses = c.milkweedNearMisses.map((r) => ({
+    name: c.species.get(r.slug)!.commonNames[0],
+    reason: r.ineligibleReason ?? '',
+  }));
 
   return {
     size,
@@ -89,10 +106,18 @@ export function balancePalette(input: PaletteInput): PaletteResult {
     objective: roundTo(selection.value, 4),
     terms: objectiveTerms(selection.chosen, settings).map((t) => ({ ...t, value: roundTo(t.value, 4) })),
     constraints: reportConstraints({
-      chosen: selection.chosen, candidates: c.items, size, site: input.site, region: input.region,
-      locked: c.locked, milkweedNearMisses,
+      chosen: selection.chosen,
+      candidates: c.items,
+      size,
+      site: input.site,
+      region: input.region,
+      locked: c.locked,
+      milkweedNearMisses,
       // Withheld species passed the checks, so they are native; the best three name the case.
-      protectedMilkweeds: c.withheld.filter(isNativeMilkweed).slice(0, 3).map((s) => s.commonNames[0]),
+      protectedMilkweeds: c.withheld
+        .filter(isNativeMilkweed)
+        .slice(0, 3)
+        .map((s) => s.commonNames[0]),
     }),
     notices: [...c.notices, ...notices],
   };

@@ -38,7 +38,8 @@ function periodConstraint(input: ConstraintInput, period: BloomPeriod): PaletteC
   const met = inMix.length >= PER_PERIOD && thin.length === 0;
   const has = inMix.length === 0 ? 'The mix has none' : `The mix has ${inMix.length}: ${joinWords(names(inMix))}`;
   const thinWords = thin.map((m) => `${monthName(m)} has ${inFlower(input.chosen, m).length}`);
-  let detail = thin.length > 0 && inMix.length >= PER_PERIOD ? `${has}, but ${joinWords(thinWords)} in flower.` : `${has}.`;
+  let detail =
+    thin.length > 0 && inMix.length >= PER_PERIOD ? `${has}, but ${joinWords(thinWords)} in flower.` : `${has}.`;
   if (!met && available.length < PER_PERIOD) {
     const only = onlyAvailable(available.length, p.one, p.many, groundWords(input));
     detail = `${has}. ${only}; a species from another part of the season may take its place.`;

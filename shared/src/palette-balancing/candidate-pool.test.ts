@@ -6,13 +6,32 @@ import type { PaletteItem } from './palette-item.js';
 
 // Behaviour of Homeground's own search narrowing (candidate-pool.ts); no outside values.
 const item = (slug: string, fit: number, extra: Partial<PaletteItem> = {}): PaletteItem => ({
-  slug, name: slug, fit, periods: ['mid'], flowering: true, genus: `G${slug}`, hostCount: 0, tier: 'middle',
-  colours: ['yellow'], graminoid: false, milkweed: false, ...extra,
+  slug,
+  name: slug,
+  fit,
+  periods: ['mid'],
+  flowering: true,
+  genus: `G${slug}`,
+  hostCount: 0,
+  tier: 'middle',
+  colours: ['yellow'],
+  graminoid: false,
+  milkweed: false,
+  ...extra,
 });
 // 80 good midsummer forbs, and a few weak ones that alone meet other needs.
-const strong = Array.from({ length: 80 }, (_, i) => item(`m${String(i).padStart(2, '0')}`, 20 - i / 10, { genus: 'Solidago', hostCount: 115 }));
+const strong = Array.from({ length: 80 }, (_, i) =>
+  item(`m${String(i).padStart(2, '0')}`, 20 - i / 10, { genus: 'Solidago', hostCount: 115 }),
+);
 const lateBloomer = item('late', 1, { periods: ['late'] });
-const grass = item('grass', 0.5, { periods: [], flowering: false, colours: [], graminoid: true, genus: 'Carex', hostCount: 36 });
+const grass = item('grass', 0.5, {
+  periods: [],
+  flowering: false,
+  colours: [],
+  graminoid: true,
+  genus: 'Carex',
+  hostCount: 36,
+});
 const milkweed = item('milkweed', 0.2, { genus: 'Asclepias', hostCount: 12, milkweed: true });
 const all = [...strong, lateBloomer, grass, milkweed];
 const settings = { size: 9, monarchsGoal: true };

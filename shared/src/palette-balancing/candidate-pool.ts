@@ -86,6 +86,7 @@ export function narrowCandidates(items: readonly PaletteItem[], settings: Object
   }
   const keep = new Set<PaletteItem>();
   for (const top of [best, ...periods, grasses, milkweeds]) for (const it of top.items) keep.add(it);
-  for (const group of [tiers, colours, genera]) for (const top of group.byKey.values()) for (const it of top.items) keep.add(it);
+  for (const group of [tiers, colours, genera])
+    for (const top of group.byKey.values()) for (const it of top.items) keep.add(it);
   return [...keep].sort((a, b) => (better(a, b) ? -1 : better(b, a) ? 1 : 0));
 }

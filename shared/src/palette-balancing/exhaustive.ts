@@ -14,7 +14,9 @@ function binomial(n: number, k: number): number {
  * optimiser on small candidate lists. Subsets are evaluated in slug order, as the optimiser does.
  */
 export function exhaustiveBest<T extends { slug: string }>(
-  candidates: readonly T[], size: number, objective: Objective<T>,
+  candidates: readonly T[],
+  size: number,
+  objective: Objective<T>,
 ): { chosen: T[]; value: number } {
   const items = [...candidates].sort((a, b) => (a.slug < b.slug ? -1 : a.slug > b.slug ? 1 : 0));
   const k = Math.min(size, items.length);

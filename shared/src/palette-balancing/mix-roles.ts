@@ -1,7 +1,11 @@
 import type { BloomPeriod } from '../types/recommendation.js';
 import type { PaletteItem } from './palette-item.js';
 
-const PERIOD_NOUN: Record<BloomPeriod, string> = { early: 'early bloomers', mid: 'midsummer bloomers', late: 'late bloomers' };
+const PERIOD_NOUN: Record<BloomPeriod, string> = {
+  early: 'early bloomers',
+  mid: 'midsummer bloomers',
+  late: 'late bloomers',
+};
 const TIER_ROLE = { front: 'front of the bed', middle: 'middle of the bed', back: 'back of the bed' } as const;
 
 /** What one chosen species does for the mix as a whole, in short phrases. */

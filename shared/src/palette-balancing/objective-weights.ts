@@ -56,6 +56,7 @@ export const SEASON_MONTHS = 7;
 /** A species' months in flower within the season as bits (bit 0 = April … bit 6 = October). */
 export function seasonMonthMask(months: readonly number[] | undefined): number {
   let mask = 0;
-  for (const m of months ?? []) if (m >= SEASON_FIRST_MONTH && m < SEASON_FIRST_MONTH + SEASON_MONTHS) mask |= 1 << (m - SEASON_FIRST_MONTH);
+  for (const m of months ?? [])
+    if (m >= SEASON_FIRST_MONTH && m < SEASON_FIRST_MONTH + SEASON_MONTHS) mask |= 1 << (m - SEASON_FIRST_MONTH);
   return mask;
 }

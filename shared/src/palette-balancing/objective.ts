@@ -1,6 +1,12 @@
 import { BLOOM_PERIODS, type ObjectiveTerm } from '../types/recommendation.js';
 import type { Objective } from './mix-evaluator.js';
-import { OBJECTIVE_WEIGHTS, SEASON_MONTHS, grassTargets, seasonMonthMask, type ObjectiveSettings } from './objective-weights.js';
+import {
+  OBJECTIVE_WEIGHTS,
+  SEASON_MONTHS,
+  grassTargets,
+  seasonMonthMask,
+  type ObjectiveSettings,
+} from './objective-weights.js';
 import { paletteEvaluator } from './palette-evaluator.js';
 import type { PaletteItem } from './palette-item.js';
 
@@ -44,16 +50,26 @@ export function objectiveTerms(items: readonly PaletteItem[], settings: Objectiv
   let hostSum = 0;
   for (const count of genera.values()) hostSum += count;
   const grass = grassTargets(settings.size);
-  const milkweedValue = w.milkweed * Math.min(milkweeds, 1) + w.secondMilkweed * Math.min(Math.max(milkweeds - 1, 0), 1);
-  const periodValue = BLOOM_PERIODS.reduce((s, p) => s + w.perPeriodSpecies * Math.min(perPeriod[p], w.periodTarget), 0);
+  const milkweedValue =
+    w.milkweed * Math.min(milkweeds, 1) + w.secondMilkweed * Math.min(Math.max(milkweeds - 1, 0), 1);
+  const periodValue = BLOOM_PERIODS.reduce(
+    (s, p) => s + w.perPeriodSpecies * Math.min(perPeriod[p], w.periodTarget),
+    0,
+  );
   return [
     { name: 'fit', value: fit },
     { name: 'host-plants', value: w.hostWeight * Math.log(1 + hostSum / w.hostScale) },
     { name: 'bloom-periods', value: periodValue },
-    { name: 'bloom-months', value: perMonth.reduce((sum, n) => sum + w.perMonthSpecies * Math.min(n, w.monthTarget), 0) },
+    {
+      name: 'bloom-months',
+      value: perMonth.reduce((sum, n) => sum + w.perMonthSpecies * Math.min(n, w.monthTarget), 0),
+    },
     { name: 'flowering-count', value: w.perFloweringSpecies * Math.min(flowering, w.floweringTarget) },
     { name: 'milkweed', value: settings.monarchsGoal ? milkweedValue : 0 },
-    { name: 'grasses', value: w.perGrass * Math.min(grasses, grass.min) - w.perGrassOver * Math.max(0, grasses - grass.max) },
+    {
+      name: 'grasses',
+      value: w.perGrass * Math.min(grasses, grass.min) - w.perGrassOver * Math.max(0, grasses - grass.max),
+    },
     { name: 'height-tiers', value: w.perHeightTier * tiers.size },
     { name: 'colours', value: w.perColour * Math.min(colours.size, w.colourTarget) },
     { name: 'genus-variety', value: -w.perRepeatedGenus * repeats },

@@ -7,7 +7,14 @@ import { optimiseSelection } from './optimiser.js';
 import type { HeightTier, PaletteItem } from './palette-item.js';
 import { randomInt, seededRandom } from './seeded-random.js';
 
-const GENERA: [string, number][] = [['Solidago', 115], ['Symphyotrichum', 112], ['Asclepias', 12], ['Monarda', 7], ['Carex', 36], ['Zizia', 4]];
+const GENERA: [string, number][] = [
+  ['Solidago', 115],
+  ['Symphyotrichum', 112],
+  ['Asclepias', 12],
+  ['Monarda', 7],
+  ['Carex', 36],
+  ['Zizia', 4],
+];
 const TIERS: HeightTier[] = ['front', 'middle', 'back'];
 
 /** A random but plausible candidate list, reproducible from its seed. */
@@ -50,7 +57,9 @@ describe('optimiseSelection vs exhaustive optimum (50 seeded instances, 12–14 
       if (Math.abs(found.value - best.value) < 1e-9) exact++;
       expect(ratio, `seed ${seed}`).toBeGreaterThanOrEqual(0.99);
     }
-    console.info(`optimiser/exhaustive: minimum ratio ${minRatio.toFixed(4)} over 50 instances; ${exact} exactly optimal`);
+    console.info(
+      `optimiser/exhaustive: minimum ratio ${minRatio.toFixed(4)} over 50 instances; ${exact} exactly optimal`,
+    );
   });
 });
 
@@ -78,7 +87,11 @@ describe('optimiseSelection: determinism, locks and exclusions', () => {
 
 describe('exhaustiveBest', () => {
   it('finds the best pair on a hand-checked list', () => {
-    const items = [{ slug: 'a', v: 1 }, { slug: 'b', v: 5 }, { slug: 'c', v: 3 }];
+    const items = [
+      { slug: 'a', v: 1 },
+      { slug: 'b', v: 5 },
+      { slug: 'c', v: 3 },
+    ];
     const best = exhaustiveBest(items, 2, (s) => s.reduce((t, i) => t + i.v, 0));
     expect(best.chosen.map((i) => i.slug)).toEqual(['b', 'c']);
     expect(best.value).toBe(8);

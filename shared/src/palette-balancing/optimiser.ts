@@ -37,11 +37,16 @@ const bySlug = <T extends { slug: string }>(a: T, b: T) => (a.slug < b.slug ? -1
  * incremental evaluator when it has one (see palette-evaluator.ts).
  */
 export function optimiseSelection<T extends { slug: string }>(
-  candidates: readonly T[], size: number, objective: Objective<T>, options: SelectionOptions<T> = {},
+  candidates: readonly T[],
+  size: number,
+  objective: Objective<T>,
+  options: SelectionOptions<T> = {},
 ): Selection<T> {
   const excluded = new Set(options.excluded ?? []);
   const seen = new Set<string>();
-  const pool = [...candidates].sort(bySlug).filter((c) => !excluded.has(c.slug) && !seen.has(c.slug) && seen.add(c.slug));
+  const pool = [...candidates]
+    .sort(bySlug)
+    .filter((c) => !excluded.has(c.slug) && !seen.has(c.slug) && seen.add(c.slug));
   const lockedSlugs = new Set(options.locked ?? []);
   const all = pool.map((_, i) => i);
   const narrowed = options.searchPool ? new Set(options.searchPool(pool)) : null;

@@ -6,7 +6,13 @@ import type { HeightTier, PaletteItem } from './palette-item.js';
 import { randomInt, seededRandom } from './seeded-random.js';
 
 // Consistency checks, not outside values: the incremental evaluator must give the objective's value.
-const GENERA: [string, number][] = [['Solidago', 115], ['Asclepias', 12], ['Carex', 36], ['Quercus', 534], ['Zizia', 0]];
+const GENERA: [string, number][] = [
+  ['Solidago', 115],
+  ['Asclepias', 12],
+  ['Carex', 36],
+  ['Quercus', 534],
+  ['Zizia', 0],
+];
 const TIERS: HeightTier[] = ['front', 'middle', 'back'];
 
 function randomItems(seed: number, n: number): PaletteItem[] {
@@ -16,8 +22,16 @@ function randomItems(seed: number, n: number): PaletteItem[] {
     const graminoid = genus === 'Carex';
     const periods = graminoid ? [] : BLOOM_PERIODS.filter(() => rnd() < 0.5);
     return {
-      slug: `s${String(i).padStart(3, '0')}`, name: `s${i}`, fit: rnd() * 12 - 2, periods, flowering: periods.length > 0,
-      genus, hostCount, tier: TIERS[randomInt(rnd, 0, 2)], graminoid, milkweed: genus === 'Asclepias',
+      slug: `s${String(i).padStart(3, '0')}`,
+      name: `s${i}`,
+      fit: rnd() * 12 - 2,
+      periods,
+      flowering: periods.length > 0,
+      genus,
+      hostCount,
+      tier: TIERS[randomInt(rnd, 0, 2)],
+      graminoid,
+      milkweed: genus === 'Asclepias',
       colours: graminoid ? [] : FLOWER_COLOURS.filter(() => rnd() < 0.2),
       // Months in flower, some outside the April–October season the month term counts.
       months: periods.length > 0 ? [3, 4, 5, 6, 7, 8, 9, 10, 11].filter(() => rnd() < 0.4) : [],
@@ -26,7 +40,11 @@ function randomItems(seed: number, n: number): PaletteItem[] {
 }
 
 describe('paletteEvaluator (objective kept up to date one item at a time)', () => {
-  it.each([[1, 6, true], [2, 11, false], [3, 25, true]] as const)('seed %i, mix of %i, monarchs %s: equals the objective after every step', (seed, size, monarchsGoal) => {
+  it.each([
+    [1, 6, true],
+    [2, 11, false],
+    [3, 25, true],
+  ] as const)('seed %i, mix of %i, monarchs %s: equals the objective after every step', (seed, size, monarchsGoal) => {
     const items = randomItems(seed, 40);
     const objective = makeObjective({ size, monarchsGoal });
     const ev = objective.evaluator!(items);

@@ -1,6 +1,12 @@
 import { BLOOM_PERIODS } from '../types/recommendation.js';
 import { recomputingEvaluator, type MixEvaluator, type Objective } from './mix-evaluator.js';
-import { OBJECTIVE_WEIGHTS, SEASON_MONTHS, grassTargets, seasonMonthMask, type ObjectiveSettings } from './objective-weights.js';
+import {
+  OBJECTIVE_WEIGHTS,
+  SEASON_MONTHS,
+  grassTargets,
+  seasonMonthMask,
+  type ObjectiveSettings,
+} from './objective-weights.js';
 import type { PaletteItem } from './palette-item.js';
 
 /** Colour and tier sets are held as bit masks: enough bits for every colour a record can name. */
@@ -19,7 +25,11 @@ const MAX_MASK_BITS = 30;
  * and subtracting, so it may drift from a fresh sum in the last bits (~1e-13); the optimiser's
  * improvement threshold (1e-9) is far above that, and it reports the fresh value at the end.
  */
-export function paletteEvaluator(pool: readonly PaletteItem[], settings: ObjectiveSettings, objective: Objective<PaletteItem>): MixEvaluator {
+export function paletteEvaluator(
+  pool: readonly PaletteItem[],
+  settings: ObjectiveSettings,
+  objective: Objective<PaletteItem>,
+): MixEvaluator {
   return PaletteCounters.build(pool, settings) ?? recomputingEvaluator(pool, objective);
 }
 
@@ -81,15 +91,16 @@ class PaletteCounters implements MixEvaluator {
       for (let m = this.colourMask[i]; m !== 0; m >>>= 1) colours += m & 1;
       let months = 0;
       for (let m = this.monthMask[i]; m !== 0; m >>>= 1) months += m & 1;
-      bounds[i] = this.fit[i]
-        + w.hostWeight * Math.log(1 + this.genusHosts[this.genus[i]] / w.hostScale)
-        + w.perPeriodSpecies * periods
-        + w.perMonthSpecies * months
-        + (f & 1 ? w.perFloweringSpecies : 0)
-        + (f & 4 && this.monarchsGoal ? w.milkweed : 0)
-        + (f & 2 ? w.perGrass : 0)
-        + w.perHeightTier
-        + w.perColour * Math.min(colours, w.colourTarget);
+      bounds[i] =
+        this.fit[i] +
+        w.hostWeight * Math.log(1 + this.genusHosts[this.genus[i]] / w.hostScale) +
+        w.perPeriodSpecies * periods +
+        w.perMonthSpecies * months +
+        (f & 1 ? w.perFloweringSpecies : 0) +
+        (f & 4 && this.monarchsGoal ? w.milkweed : 0) +
+        (f & 2 ? w.perGrass : 0) +
+        w.perHeightTier +
+        w.perColour * Math.min(colours, w.colourTarget);
     }
     return bounds;
   }
@@ -132,7 +143,18 @@ class PaletteCounters implements MixEvaluator {
         colourMask[i] |= 1 << id;
       }
     }
-    return new PaletteCounters(fit, flags, periodMask, genus, Float64Array.from(hosts), tier, colourMask, monthMask, settings.monarchsGoal, settings.size);
+    return new PaletteCounters(
+      fit,
+      flags,
+      periodMask,
+      genus,
+      Float64Array.from(hosts),
+      tier,
+      colourMask,
+      monthMask,
+      settings.monarchsGoal,
+      settings.size,
+    );
   }
 
   // add and remove are written out separately (no shared step with a sign), with the three CP42
@@ -150,13 +172,15 @@ class PaletteCounters implements MixEvaluator {
     if (pm & 2) this.perPeriod[1]++;
     if (pm & 4) this.perPeriod[2]++;
     const target = OBJECTIVE_WEIGHTS.monthTarget;
-    for (let m = this.monthMask[i], k = 0; m !== 0; m >>>= 1, k++) if (m & 1 && this.perMonth[k]++ < target) this.monthsFilled++;
+    for (let m = this.monthMask[i], k = 0; m !== 0; m >>>= 1, k++)
+      if (m & 1 && this.perMonth[k]++ < target) this.monthsFilled++;
     // A genus counts its hosts once; every further member is a repeat.
     const g = this.genus[i];
     if (this.perGenus[g]++ === 0) this.hostSum += this.genusHosts[g];
     else this.repeats++;
     if (this.perTier[this.tier[i]]++ === 0) this.tiers++;
-    for (let m = this.colourMask[i], c = 0; m !== 0; m >>>= 1, c++) if (m & 1 && this.perColour[c]++ === 0) this.colours++;
+    for (let m = this.colourMask[i], c = 0; m !== 0; m >>>= 1, c++)
+      if (m & 1 && this.perColour[c]++ === 0) this.colours++;
   }
 
   remove(i: number): void {
@@ -172,12 +196,14 @@ class PaletteCounters implements MixEvaluator {
     if (pm & 2) this.perPeriod[1]--;
     if (pm & 4) this.perPeriod[2]--;
     const target = OBJECTIVE_WEIGHTS.monthTarget;
-    for (let m = this.monthMask[i], k = 0; m !== 0; m >>>= 1, k++) if (m & 1 && --this.perMonth[k] < target) this.monthsFilled--;
+    for (let m = this.monthMask[i], k = 0; m !== 0; m >>>= 1, k++)
+      if (m & 1 && --this.perMonth[k] < target) this.monthsFilled--;
     const g = this.genus[i];
     if (--this.perGenus[g] === 0) this.hostSum -= this.genusHosts[g];
     else this.repeats--;
     if (--this.perTier[this.tier[i]] === 0) this.tiers--;
-    for (let m = this.colourMask[i], c = 0; m !== 0; m >>>= 1, c++) if (m & 1 && --this.perColour[c] === 0) this.colours--;
+    for (let m = this.colourMask[i], c = 0; m !== 0; m >>>= 1, c++)
+      if (m & 1 && --this.perColour[c] === 0) this.colours--;
   }
 
   value(): number {
@@ -192,16 +218,19 @@ class PaletteCounters implements MixEvaluator {
     const milkweed = this.monarchsGoal
       ? w.milkweed * Math.min(this.milkweeds, 1) + w.secondMilkweed * Math.min(Math.max(this.milkweeds - 1, 0), 1)
       : 0;
-    return this.fitSum
-      + this.hostTerm
-      + periods
-      + w.perMonthSpecies * this.monthsFilled
-      + w.perFloweringSpecies * Math.min(this.flowering, w.floweringTarget)
-      + milkweed
-      + w.perGrass * Math.min(this.grasses, this.grassMin) - w.perGrassOver * Math.max(0, this.grasses - this.grassMax)
-      + w.perHeightTier * this.tiers
-      + w.perColour * Math.min(this.colours, w.colourTarget)
-      - w.perRepeatedGenus * this.repeats;
+    return (
+      this.fitSum +
+      this.hostTerm +
+      periods +
+      w.perMonthSpecies * this.monthsFilled +
+      w.perFloweringSpecies * Math.min(this.flowering, w.floweringTarget) +
+      milkweed +
+      w.perGrass * Math.min(this.grasses, this.grassMin) -
+      w.perGrassOver * Math.max(0, this.grasses - this.grassMax) +
+      w.perHeightTier * this.tiers +
+      w.perColour * Math.min(this.colours, w.colourTarget) -
+      w.perRepeatedGenus * this.repeats
+    );
   }
 }
 

@@ -7,19 +7,43 @@ import { balancePalette } from './balance-palette.js';
 
 // Mead's milkweed as in its catalogue record (species-data/species/asclepias-meadii.json): federally
 // listed as threatened (the record's `protected` caution, from-memory); dry to medium soil, full sun.
-const meadsMilkweed = (protectedCaution: boolean): Species => makeSpecies({
-  slug: 'asclepias-meadii', scientificName: 'Asclepias meadii', family: 'Apocynaceae', commonNames: ["Mead's milkweed"],
-  nativeStates: ['IL', 'IN', 'IA', 'KS', 'MO', 'WI'], sun: ['full'], moisture: ['medium', 'dry'],
-  heightCm: { min: 20, max: 40 }, spreadCm: { min: 15, max: 30 }, bloomMonths: [5, 6], flowerColours: ['green', 'cream'],
-  habitats: ['prairie', 'glade'], wildlife: { lepidopteraGenusCount: 12, monarchHost: true },
-  cautions: protectedCaution
-    ? [{ kind: 'protected', text: 'Federally listed as threatened. Buy from a nursery that propagates it; never dig from the wild.', source: 'from-memory' }]
-    : [],
-});
+const meadsMilkweed = (protectedCaution: boolean): Species =>
+  makeSpecies({
+    slug: 'asclepias-meadii',
+    scientificName: 'Asclepias meadii',
+    family: 'Apocynaceae',
+    commonNames: ["Mead's milkweed"],
+    nativeStates: ['IL', 'IN', 'IA', 'KS', 'MO', 'WI'],
+    sun: ['full'],
+    moisture: ['medium', 'dry'],
+    heightCm: { min: 20, max: 40 },
+    spreadCm: { min: 15, max: 30 },
+    bloomMonths: [5, 6],
+    flowerColours: ['green', 'cream'],
+    habitats: ['prairie', 'glade'],
+    wildlife: { lepidopteraGenusCount: 12, monarchHost: true },
+    cautions: protectedCaution
+      ? [
+          {
+            kind: 'protected',
+            text: 'Federally listed as threatened. Buy from a nursery that propagates it; never dig from the wild.',
+            source: 'from-memory',
+          },
+        ]
+      : [],
+  });
 
 const site: Site = { sun: 'full', moisture: 'medium', areaSqFt: 120, deerPressure: 'low', goals: ['monarchs'] };
-const others = [F.wildBergamot, F.goldenAlexanders, F.showyGoldenrod, F.littleBluestem, F.prairieDropseed, F.newEnglandAster];
-const mix = (species: Species[], options = {}) => balancePalette({ species, site, region: LARKFIELD, options: { size: 5, ...options } });
+const others = [
+  F.wildBergamot,
+  F.goldenAlexanders,
+  F.showyGoldenrod,
+  F.littleBluestem,
+  F.prairieDropseed,
+  F.newEnglandAster,
+];
+const mix = (species: Species[], options = {}) =>
+  balancePalette({ species, site, region: LARKFIELD, options: { size: 5, ...options } });
 
 describe('protected species (caution kind "protected") are never chosen for a mix automatically', () => {
   it('the same plant without the caution is chosen (the only milkweed, on a monarch site)', () => {
@@ -32,11 +56,12 @@ describe('protected species (caution kind "protected") are never chosen for a mi
     expect(r.chosen).toHaveLength(5);
     expect(r.constraints.find((c) => c.id === 'monarch-milkweed')).toMatchObject({
       met: false,
-      detail: "Mead's milkweed suits your ground but is protected in the wild, so not chosen for you; keep one in the mix to meet this rule, bought from a nursery that propagates it.",
+      detail:
+        "Mead's milkweed suits your ground but is protected in the wild, so not chosen for you; keep one in the mix to meet this rule, bought from a nursery that propagates it.",
     });
     expect(r.notices).toContain(
-      "Mead's milkweed suits your ground but is protected in the wild, so Homeground does not choose it for you. "
-        + 'To grow it, keep it in the mix and buy from a nursery that propagates it; never dig from the wild.',
+      "Mead's milkweed suits your ground but is protected in the wild, so Homeground does not choose it for you. " +
+        'To grow it, keep it in the mix and buy from a nursery that propagates it; never dig from the wild.',
     );
   });
 
@@ -53,6 +78,7 @@ describe('protected species (caution kind "protected") are never chosen for a mi
   it('is never offered as a replacement either', () => {
     const input = { species: [meadsMilkweed(true), ...others], site, region: LARKFIELD, options: { size: 5 } };
     const chosen = balancePalette(input).chosen.map((c) => c.slug);
-    for (const slot of chosen) expect(alternativesFor(input, chosen, slot, 10).map((a) => a.slug)).not.toContain('asclepias-meadii');
+    for (const slot of chosen)
+      expect(alternativesFor(input, chosen, slot, 10).map((a) => a.slug)).not.toContain('asclepias-meadii');
   });
 });

@@ -24,8 +24,13 @@ const NAMED = 3;
 export function withheldProtectedNotice(species: readonly Species[]): string {
   const named = species.slice(0, NAMED).map((s) => s.commonNames[0]);
   const more = species.length - named.length;
-  const names = more > 0 ? `${named.join(', ')} and ${countOf(more, 'other protected species', 'other protected species')}` : joinWords(named);
+  const names =
+    more > 0
+      ? `${named.join(', ')} and ${countOf(more, 'other protected species', 'other protected species')}`
+      : joinWords(named);
   const one = species.length === 1;
-  return `${names} ${one ? 'suits' : 'suit'} your ground but ${one ? 'is' : 'are'} protected in the wild, so Homeground does not choose `
-    + `${one ? 'it' : 'them'} for you. To grow ${one ? 'it' : 'one'}, keep it in the mix and buy from a nursery that propagates it; never dig from the wild.`;
+  return (
+    `${names} ${one ? 'suits' : 'suit'} your ground but ${one ? 'is' : 'are'} protected in the wild, so Homeground does not choose ` +
+    `${one ? 'it' : 'them'} for you. To grow ${one ? 'it' : 'one'}, keep it in the mix and buy from a nursery that propagates it; never dig from the wild.`
+  );
 }

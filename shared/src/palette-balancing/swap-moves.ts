@@ -16,7 +16,11 @@ export interface SearchState {
   value: number;
 }
 
-export interface Move { out: number[]; in: number[]; gain: number }
+export interface Move {
+  out: number[];
+  in: number[];
+  gain: number;
+}
 
 /**
  * Best single swap (one unlocked chosen item out, one outsider from `outs` in), or null if none
@@ -121,6 +125,9 @@ export function applyMove(s: SearchState, move: Move): void {
     s.ev.add(j);
     s.inMix[j] = 1;
   }
-  s.chosen = s.chosen.filter((i) => s.inMix[i]).concat(move.in).sort((x, y) => x - y);
+  s.chosen = s.chosen
+    .filter((i) => s.inMix[i])
+    .concat(move.in)
+    .sort((x, y) => x - y);
   s.value = s.ev.value();
 }

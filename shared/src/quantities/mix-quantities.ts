@@ -16,7 +16,10 @@ export function mixQuantities(
   options: { lossFactor?: number; spacingIn?: Record<string, number>; grassShare?: number } = {},
 ): MixQuantity[] {
   const lossFactor = options.lossFactor ?? DEFAULT_LOSS_FACTOR;
-  const plantings = plantsPerSpecies(species, areaSqFt, { spacingIn: options.spacingIn, grassShare: options.grassShare });
+  const plantings = plantsPerSpecies(species, areaSqFt, {
+    spacingIn: options.spacingIn,
+    grassShare: options.grassShare,
+  });
   return plantings.map((p, i) => {
     const s = species[i];
     const seeds = seedsToSow(p.plants, s.germination.germinationRatePct, lossFactor);
@@ -36,11 +39,21 @@ export function mixQuantities(
 
 /** The whole planting: plants by count with their total footprint, and for a meadow the seeding plan. */
 export function mixPlanting(
-  species: readonly Species[], areaSqFt: number, options: { lossFactor?: number } = {},
+  species: readonly Species[],
+  areaSqFt: number,
+  options: { lossFactor?: number } = {},
 ): { quantities: MixQuantity[]; totalFootprintSqFt: number; seeding: SeedingLine[] | null } {
   const quantities = mixQuantities(species, areaSqFt, options);
-  const seeding = plantingMethodFor(areaSqFt) === 'seeding'
-    ? seedingPlan(species, areaSqFt).map((l) => ({ ...l, seed: l.seed && { grams: roundTo(l.seed.grams, 1), ounces: roundTo(l.seed.ounces, 2), pounds: roundTo(l.seed.pounds, 3) } }))
-    : null;
+  const seeding =
+    plantingMethodFor(areaSqFt) === 'seeding'
+      ? seedingPlan(species, areaSqFt).map((l) => ({
+          ...l,
+          seed: l.seed && {
+            grams: roundTo(l.seed.grams, 1),
+            ounces: roundTo(l.seed.ounces, 2),
+            pounds: roundTo(l.seed.pounds, 3),
+          },
+        }))
+      : null;
   return { quantities, totalFootprintSqFt: totalFootprintSqFt(quantities), seeding };
 }

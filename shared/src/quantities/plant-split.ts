@@ -36,7 +36,8 @@ const woodyOf = (s: PlantFacts) => isStructural({ growthForm: s.growthForm, scie
  * rounded down (rounding up is how beds got overfilled), at least 3 where 3 fit.
  */
 export function plantsPerSpecies(
-  mix: readonly PlantFacts[], areaSqFt: number,
+  mix: readonly PlantFacts[],
+  areaSqFt: number,
   options: { grassShare?: number; spacingIn?: Record<string, number> } = {},
 ): SpeciesPlanting[] {
   const spacingOf = (s: PlantFacts) => describeSpacing(options.spacingIn?.[s.slug] ?? defaultSpacingIn(s));
@@ -62,7 +63,10 @@ export function plantsPerSpecies(
     const sq = spacingOf(s).spacingIn ** 2 / 144;
     // Round before floor so float noise (24.999999999) does not drop a plant.
     const fits = Math.floor(roundTo(area / sq, 6));
-    plantsBySlug.set(s.slug, fits >= MIN_PLANTS_PER_SPECIES ? fits : Math.min(MIN_PLANTS_PER_SPECIES, Math.max(1, fits)));
+    plantsBySlug.set(
+      s.slug,
+      fits >= MIN_PLANTS_PER_SPECIES ? fits : Math.min(MIN_PLANTS_PER_SPECIES, Math.max(1, fits)),
+    );
   }
   trimToBed(mix, plantsBySlug, spacingOf, areaSqFt);
   return mix.map((s) => {
@@ -78,12 +82,19 @@ export function plantsPerSpecies(
  * with most until it fits, never below one plant (the user still gets every species they chose,
  * and the total says it is over).
  */
-function trimToBed(mix: readonly PlantFacts[], plants: Map<string, number>, spacingOf: (s: PlantFacts) => Spacing, areaSqFt: number): void {
+function trimToBed(
+  mix: readonly PlantFacts[],
+  plants: Map<string, number>,
+  spacingOf: (s: PlantFacts) => Spacing,
+  areaSqFt: number,
+): void {
   const sq = (s: PlantFacts) => spacingOf(s).spacingIn ** 2 / 144;
   let total = mix.reduce((sum, s) => sum + (plants.get(s.slug) ?? 0) * sq(s), 0);
   while (total > areaSqFt + 1e-6) {
     let most: PlantFacts | undefined;
-    for (const s of mix) if ((plants.get(s.slug) ?? 0) > 1 && (!most || (plants.get(s.slug) ?? 0) > (plants.get(most.slug) ?? 0))) most = s;
+    for (const s of mix)
+      if ((plants.get(s.slug) ?? 0) > 1 && (!most || (plants.get(s.slug) ?? 0) > (plants.get(most.slug) ?? 0)))
+        most = s;
     if (!most) return;
     plants.set(most.slug, (plants.get(most.slug) ?? 0) - 1);
     total -= sq(most);

@@ -29,7 +29,11 @@ describe('seeds/ft² ↔ lb PLS/acre (seeds/ft² = lb/acre × seeds/lb ÷ 43,560
 
 // Geometry of a square grid (X); CHECK-VALUES marks the typical 12–18 in plug spacing as M.
 describe('on-centre spacing → plants per area', () => {
-  it.each([[12, 1.0], [18, 0.44], [24, 0.25]])('%d in → %d plants/ft²', (spacing, density) => {
+  it.each([
+    [12, 1.0],
+    [18, 0.44],
+    [24, 0.25],
+  ])('%d in → %d plants/ft²', (spacing, density) => {
     expect(plantsPerSqFt(spacing)).toBeCloseTo(density, 2);
   });
 
@@ -65,7 +69,13 @@ describe('plantsPerSpecies (grasses 30 % of the bed, the rest shared; plants × 
   });
 
   it('no fixed minimum for a shrub: one where one fits (a 6 ft shrub in the woody quarter of a 200 ft² bed)', () => {
-    const shrub = { ...F.wildBergamot, slug: 'a-shrub', scientificName: 'Cornus racemosa', growthForm: 'shrub' as const, spreadCm: { min: 180, max: 300 } };
+    const shrub = {
+      ...F.wildBergamot,
+      slug: 'a-shrub',
+      scientificName: 'Cornus racemosa',
+      growthForm: 'shrub' as const,
+      spreadCm: { min: 180, max: 300 },
+    };
     const r = plantsPerSpecies([shrub, F.goldenAlexanders, F.littleBluestem], 200);
     // spacing 72 in → 36 ft² a plant; woody share 50 ft² → 1 plant
     expect(r[0]).toMatchObject({ slug: 'a-shrub', plants: 1, spacingIn: 72 });

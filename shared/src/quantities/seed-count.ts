@@ -12,7 +12,8 @@ export const DEFAULT_LOSS_FACTOR = 0.2;
  * up. E.g. 10 plants at 60 % germination and 20 % loss: 10 ÷ (0.6 × 0.8) = 20.8 → 21 seeds.
  */
 export function seedsToSow(plantsWanted: number, germinationRatePct: number, lossFactor = DEFAULT_LOSS_FACTOR): number {
-  if (germinationRatePct <= 0 || germinationRatePct > 100) throw new RangeError('germinationRatePct must be in (0, 100]');
+  if (germinationRatePct <= 0 || germinationRatePct > 100)
+    throw new RangeError('germinationRatePct must be in (0, 100]');
   if (lossFactor < 0 || lossFactor >= 1) throw new RangeError('lossFactor must be in [0, 1)');
   const perSeed = (germinationRatePct / 100) * (1 - lossFactor);
   return Math.ceil(Math.round((plantsWanted / perSeed) * 1e6) / 1e6);

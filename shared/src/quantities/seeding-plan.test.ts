@@ -4,7 +4,12 @@ import { plantingMethodFor } from './planting-method.js';
 import { seedingPlan } from './seeding-plan.js';
 
 describe('meadows get a seeding plan by seeds/ft²', () => {
-  it.each([[300, 'plugs'], [21_779, 'plugs'], [21_780, 'seeding'], [43_560, 'seeding']] as const)('%d ft² → %s (half an acre = 21,780 ft²)', (area, method) => {
+  it.each([
+    [300, 'plugs'],
+    [21_779, 'plugs'],
+    [21_780, 'seeding'],
+    [43_560, 'seeding'],
+  ] as const)('%d ft² → %s (half an acre = 21,780 ft²)', (area, method) => {
     expect(plantingMethodFor(area)).toBe(method);
   });
 

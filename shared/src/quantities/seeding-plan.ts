@@ -21,7 +21,9 @@ export interface SeedingLine {
 }
 
 export function seedingPlan(
-  mix: readonly Pick<Species, 'slug' | 'growthForm' | 'germination'>[], areaSqFt: number, totalSeedsPerSqFt = MEADOW_SEEDS_PER_SQ_FT,
+  mix: readonly Pick<Species, 'slug' | 'growthForm' | 'germination'>[],
+  areaSqFt: number,
+  totalSeedsPerSqFt = MEADOW_SEEDS_PER_SQ_FT,
 ): SeedingLine[] {
   const grasses = mix.filter((s) => s.growthForm === 'graminoid');
   const others = mix.filter((s) => s.growthForm !== 'graminoid');

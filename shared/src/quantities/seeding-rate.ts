@@ -1,4 +1,8 @@
-import { SQUARE_FEET_PER_ACRE, perSquareFootToPerSquareMetre, poundsPerAcreToKgPerHectare } from '../units/conversions.js';
+import {
+  SQUARE_FEET_PER_ACRE,
+  perSquareFootToPerSquareMetre,
+  poundsPerAcreToKgPerHectare,
+} from '../units/conversions.js';
 import { seedWeight, type SeedWeight } from './seed-count.js';
 
 /**

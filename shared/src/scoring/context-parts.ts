@@ -56,7 +56,11 @@ export function countBloomers(mix: readonly Species[]): Record<BloomPeriod, numb
   return counts;
 }
 
-const PERIOD_WORDS: Record<BloomPeriod, string> = { early: 'spring', mid: 'early summer', late: 'late summer and fall' };
+const PERIOD_WORDS: Record<BloomPeriod, string> = {
+  early: 'spring',
+  mid: 'early summer',
+  late: 'late summer and fall',
+};
 
 /**
  * Points for flowering when the current mix is thin: most for the period the mix has least of,

@@ -22,7 +22,10 @@ describe('which regions the catalogue covers', () => {
   });
 
   it('from the data once most records list ecoregions: covered where at least 40 species are native', () => {
-    const many = Array.from({ length: 100 }, (_, i) => ({ ...F.wildBergamot, slug: `s-${i}`, ecoregions: i < 39 ? ['52', '81'] : ['52'] }) as GradedSpecies);
+    const many = Array.from(
+      { length: 100 },
+      (_, i) => ({ ...F.wildBergamot, slug: `s-${i}`, ecoregions: i < 39 ? ['52', '81'] : ['52'] }) as GradedSpecies,
+    );
     expect(catalogueCoverage(many, LARKFIELD).covered).toBe(true);
     expect(catalogueCoverage(many, { state: 'AZ', ecoregionCode: '81' }).covered).toBe(false); // 39 species
     expect(coveredEcoregionCodes(many, ['45', '52', '81'])).toEqual(['52']);

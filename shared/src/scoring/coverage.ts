@@ -17,7 +17,14 @@ import { ecoregionsOf } from './species-traits.js';
 export const MIN_SPECIES_FOR_COVERAGE = 40;
 
 const WESTERN_ECOREGIONS: ReadonlySet<string> = new Set([
-  ...Array.from({ length: 24 }, (_, i) => String(i + 1)), '41', '77', '78', '79', '80', '81', '85',
+  ...Array.from({ length: 24 }, (_, i) => String(i + 1)),
+  '41',
+  '77',
+  '78',
+  '79',
+  '80',
+  '81',
+  '85',
 ]);
 
 /** States that lie wholly in the uncovered West (used when only the state is known). */
@@ -52,12 +59,17 @@ function countEcoregions(species: readonly Species[]): Map<string, number> | nul
 function notCovered(where: string): Coverage {
   return {
     covered: false,
-    message: `Homeground's catalogue holds native plants of the eastern and central United States and does not cover ${where} yet, `
-      + 'so it does not recommend plants there: eastern plants would be the wrong choice. A native-plant society or extension office near you can help.',
+    message:
+      `Homeground's catalogue holds native plants of the eastern and central United States and does not cover ${where} yet, ` +
+      'so it does not recommend plants there: eastern plants would be the wrong choice. A native-plant society or extension office near you can help.',
   };
 }
 
-export function catalogueCoverage(species: readonly Species[], region: RegionContext, counts = speciesPerEcoregion(species)): Coverage {
+export function catalogueCoverage(
+  species: readonly Species[],
+  region: RegionContext,
+  counts = speciesPerEcoregion(species),
+): Coverage {
   const code = region.ecoregionCode;
   if (code !== undefined) {
     // A small catalogue (a test's, a curator's draft) needs half its species there, not 40.

@@ -13,7 +13,11 @@ export function soilPart(species: Species, site: Site): ScorePart | null {
     return { name: 'soil', points: POINTS.soilMatch, reason: `Grows in ${site.soilTexture} soil like yours.` };
   }
   const prefers = joinWords(species.soilTextures, 'or');
-  return { name: 'soil', points: POINTS.soilMismatch, reason: `Prefers ${prefers} soil; yours is ${site.soilTexture}.` };
+  return {
+    name: 'soil',
+    points: POINTS.soilMismatch,
+    reason: `Prefers ${prefers} soil; yours is ${site.soilTexture}.`,
+  };
 }
 
 const DEER_WORDS = {
@@ -47,7 +51,11 @@ const LOW_SPREADER_PARTS = {
   spreading: sharedPart({ name: 'spread', points: POINTS.lowSpreaders.spreading, reason: SPREAD_WORDS.spreading }),
   aggressive: sharedPart({ name: 'spread', points: POINTS.lowSpreaders.aggressive, reason: SPREAD_WORDS.aggressive }),
 };
-const AGGRESSIVE_ANYWAY_PART = sharedPart({ name: 'spread', points: POINTS.aggressiveAnyway, reason: SPREAD_WORDS.aggressive });
+const AGGRESSIVE_ANYWAY_PART = sharedPart({
+  name: 'spread',
+  points: POINTS.aggressiveAnyway,
+  reason: SPREAD_WORDS.aggressive,
+});
 
 export function spreadPart(species: Species, site: Site): ScorePart | null {
   const habit = species.spreadHabit;
@@ -75,7 +83,11 @@ export function rainGardenPart(species: Species, site: Site): ScorePart | null {
   return null;
 }
 
-const SHADE_GARDEN_PART = sharedPart({ name: 'shade-garden', points: POINTS.shadeGarden, reason: 'Grows in full shade, for your shade garden.' });
+const SHADE_GARDEN_PART = sharedPart({
+  name: 'shade-garden',
+  points: POINTS.shadeGarden,
+  reason: 'Grows in full shade, for your shade garden.',
+});
 
 export function shadeGardenPart(species: Species, site: Site): ScorePart | null {
   if (!site.goals.includes('shade-garden') || !species.sun.includes('shade')) return null;

@@ -14,7 +14,14 @@ describe('hardCheckOutcome agrees with scoreSpecies (eligible / near miss / out)
     for (const moisture of MOISTURE_LEVELS) {
       for (const areaSqFt of [3, 20, 300, 5000]) {
         for (const maxHeightCm of [undefined, 40, 60, 100]) {
-          sites.push({ sun, moisture, areaSqFt, deerPressure: 'medium', goals: [], ...(maxHeightCm ? { maxHeightCm } : {}) });
+          sites.push({
+            sun,
+            moisture,
+            areaSqFt,
+            deerPressure: 'medium',
+            goals: [],
+            ...(maxHeightCm ? { maxHeightCm } : {}),
+          });
         }
       }
     }

@@ -33,8 +33,12 @@ export function checkNative(species: Species, region: RegionContext): CheckResul
   const nextDoor = STATE_NEIGHBOURS[state].filter((s) => species.nativeStates.includes(s));
   if (nextDoor.length > 0) {
     const key = `${state}<${nextDoor.join(',')}`;
-    const failure = failures.get(key)
-      ?? failures.keep(key, `Native next door in ${joinWords(nextDoor.map(stateName))}, but not recorded as native in ${stateName(state)}.`);
+    const failure =
+      failures.get(key) ??
+      failures.keep(
+        key,
+        `Native next door in ${joinWords(nextDoor.map(stateName))}, but not recorded as native in ${stateName(state)}.`,
+      );
     return { failure, nearMiss: true };
   }
   const key = `!${state}`;
@@ -50,7 +54,10 @@ export function stepsAway<T extends string>(levels: readonly T[], wanted: readon
 }
 
 function sunWanted(species: Species): string {
-  return joinWords(species.sun.map((s) => SUN_WORDS[s]), 'or');
+  return joinWords(
+    species.sun.map((s) => SUN_WORDS[s]),
+    'or',
+  );
 }
 
 // Numeric keys: sun codes are multiples of 4, moisture codes 4k + 2; a pass is the code + 1.
@@ -59,15 +66,24 @@ export function checkSun(species: Species, site: Site): CheckResult {
   const code = levelListCode(SUN_LEVELS, species.sun, site.sun) * 4;
   const ground = SUN_WORDS[site.sun];
   if (steps === 0) {
-    return passes.get(code + 1)
-      ?? passed(code + 1, { name: 'sun', points: POINTS.sunMatch, reason: `Grows in ${sunWanted(species)}; your ground has ${ground}.` });
+    return (
+      passes.get(code + 1) ??
+      passed(code + 1, {
+        name: 'sun',
+        points: POINTS.sunMatch,
+        reason: `Grows in ${sunWanted(species)}; your ground has ${ground}.`,
+      })
+    );
   }
   const failure = failures.get(code) ?? failures.keep(code, `Needs ${sunWanted(species)}; your ground has ${ground}.`);
   return { failure, nearMiss: steps === 1 };
 }
 
 function moistureWanted(species: Species): string {
-  return joinWords(species.moisture.map((m) => MOISTURE_WORDS[m]), 'or');
+  return joinWords(
+    species.moisture.map((m) => MOISTURE_WORDS[m]),
+    'or',
+  );
 }
 
 export function checkMoisture(species: Species, site: Site): CheckResult {
@@ -75,10 +91,17 @@ export function checkMoisture(species: Species, site: Site): CheckResult {
   const code = levelListCode(MOISTURE_LEVELS, species.moisture, site.moisture) * 4 + 2;
   const yours = MOISTURE_WORDS[site.moisture];
   if (steps === 0) {
-    return passes.get(code + 1)
-      ?? passed(code + 1, { name: 'moisture', points: POINTS.moistureMatch, reason: `Takes ${moistureWanted(species)} soil; your soil is ${yours}.` });
+    return (
+      passes.get(code + 1) ??
+      passed(code + 1, {
+        name: 'moisture',
+        points: POINTS.moistureMatch,
+        reason: `Takes ${moistureWanted(species)} soil; your soil is ${yours}.`,
+      })
+    );
   }
-  const failure = failures.get(code) ?? failures.keep(code, `Needs ${moistureWanted(species)} soil; your soil is ${yours}.`);
+  const failure =
+    failures.get(code) ?? failures.keep(code, `Needs ${moistureWanted(species)} soil; your soil is ${yours}.`);
   return { failure, nearMiss: steps === 1 };
 }
 
@@ -92,7 +115,13 @@ export function checkHeight(species: Species, site: Site): CheckResult {
   const { min, max } = species.heightCm;
   if (max <= limit) {
     // Height words name the species' own range, so they are rarely shared: no cache.
-    return { part: { name: 'height', points: POINTS.heightWithin, reason: `Stays low enough: ${heightWords(min, max, limit)}.` } };
+    return {
+      part: {
+        name: 'height',
+        points: POINTS.heightWithin,
+        reason: `Stays low enough: ${heightWords(min, max, limit)}.`,
+      },
+    };
   }
   if (min <= limit) {
     const reason = `Can grow taller than you want: ${heightWords(min, max, limit)}.`;

@@ -15,8 +15,18 @@ export type PlantLayer = 'herbaceous' | 'woody';
  * winter (from memory): they climb, but belong with the wildflowers for host value.
  */
 const HERBACEOUS_VINE_GENERA: ReadonlySet<string> = new Set([
-  'Ipomoea', 'Apios', 'Echinocystis', 'Sicyos', 'Mikania', 'Amphicarpaea', 'Clitoria', 'Strophostyles',
-  'Dioscorea', 'Cuscuta', 'Galactia', 'Passiflora',
+  'Ipomoea',
+  'Apios',
+  'Echinocystis',
+  'Sicyos',
+  'Mikania',
+  'Amphicarpaea',
+  'Clitoria',
+  'Strophostyles',
+  'Dioscorea',
+  'Cuscuta',
+  'Galactia',
+  'Passiflora',
 ]);
 
 export function layerOf(species: Pick<Species, 'growthForm' | 'scientificName'>): PlantLayer {

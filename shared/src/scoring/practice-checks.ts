@@ -28,7 +28,10 @@ export function checkLayer(species: Species, site: Site): CheckResult {
   const v = layerVerdict(species, site);
   if (v === 'pass') return null;
   if (!site.woodyPlants) {
-    return { failure: 'A shrub, tree or vine: ask for shrubs and small trees to include woody plants.', nearMiss: false };
+    return {
+      failure: 'A shrub, tree or vine: ask for shrubs and small trees to include woody plants.',
+      nearMiss: false,
+    };
   }
   const room = woodyShare(site.areaSqFt) * site.areaSqFt;
   return {
@@ -43,8 +46,14 @@ export function lifespanFails(species: Species): boolean {
 
 export function checkLifespan(species: Species): CheckResult {
   if (!lifespanFails(species)) return null;
-  const kind = species.lifespan === 'annual' ? 'An annual: it lives one season' : 'A biennial: it flowers in its second year, then dies';
-  return { failure: `${kind} and comes back only from seed, so it is not counted as a plant of the mix; sow it among the perennials.`, nearMiss: true };
+  const kind =
+    species.lifespan === 'annual'
+      ? 'An annual: it lives one season'
+      : 'A biennial: it flowers in its second year, then dies';
+  return {
+    failure: `${kind} and comes back only from seed, so it is not counted as a plant of the mix; sow it among the perennials.`,
+    nearMiss: true,
+  };
 }
 
 export function spreaderFails(species: Species, site: Site): boolean {
@@ -56,7 +65,10 @@ export function spreaderFails(species: Species, site: Site): boolean {
 export function checkSpreader(species: Species, site: Site): CheckResult {
   if (!spreaderFails(species, site)) return null;
   const how = species.spreadHabit === 'aggressive' ? 'Spreads hard by roots or seed' : 'Seeds itself about freely';
-  return { failure: `${how} and would take over a bed under ${formatArea(SMALL_BED_SQ_FT)}; ask for spreaders to include it.`, nearMiss: true };
+  return {
+    failure: `${how} and would take over a bed under ${formatArea(SMALL_BED_SQ_FT)}; ask for spreaders to include it.`,
+    nearMiss: true,
+  };
 }
 
 /**
@@ -72,5 +84,8 @@ export function ecoregionFails(species: Species, region: RegionContext): boolean
 
 export function checkEcoregion(species: Species, region: RegionContext): CheckResult {
   if (!ecoregionFails(species, region)) return null;
-  return { failure: `Native to the state, but not to your ecoregion (EPA Level III ${region.ecoregionCode}).`, nearMiss: false };
+  return {
+    failure: `Native to the state, but not to your ecoregion (EPA Level III ${region.ecoregionCode}).`,
+    nearMiss: false,
+  };
 }

@@ -12,14 +12,21 @@ const availabilityParts = new PartCache<string>();
 const hostPartsByWords = new PartCache<string>();
 const beeParts = new PartCache<string>();
 const SEED_EASE_PART = sharedPart({ name: 'seed-ease', points: 0.5, reason: 'Easy to raise from seed.' });
-const STAPLE_PART = sharedPart({ name: 'availability', points: 1.5, reason: 'Easy to find: native-plant nurseries commonly sell it.' });
+const STAPLE_PART = sharedPart({
+  name: 'availability',
+  points: 1.5,
+  reason: 'Easy to find: native-plant nurseries commonly sell it.',
+});
 
 /** Garden-practice and wildlife parts: whether plants or seed can be had, ease from seed, host value within the layer, bees. */
 
 const AVAILABILITY: Record<CommercialAvailability, { points: number; reason: string }> = {
   routine: { points: 1.5, reason: 'Seed and plants are commonly sold (USDA commercial availability).' },
   'contract-only': { points: -0.25, reason: 'Seed is grown mostly on contract, so plants can be hard to find.' },
-  'field-collection-only': { points: -0.75, reason: 'Seed is only collected from the wild, so plants can be hard to buy.' },
+  'field-collection-only': {
+    points: -0.75,
+    reason: 'Seed is only collected from the wild, so plants can be hard to buy.',
+  },
   'none-known': { points: -1, reason: 'USDA knows no commercial source: it may be hard to buy as seed or plants.' },
 };
 
@@ -28,19 +35,78 @@ const AVAILABILITY: Record<CommercialAvailability, { points: number; reason: str
  * (common practice, from memory). Used only while a record has no USDA availability value.
  */
 const NURSERY_STAPLES: ReadonlySet<string> = new Set([
-  'Asclepias tuberosa', 'Asclepias incarnata', 'Asclepias syriaca', 'Asclepias verticillata', 'Echinacea purpurea', 'Echinacea pallida',
-  'Rudbeckia fulgida', 'Monarda fistulosa', 'Monarda didyma', 'Liatris spicata', 'Liatris aspera', 'Liatris pycnostachya',
-  'Symphyotrichum novae-angliae', 'Symphyotrichum laeve', 'Symphyotrichum oblongifolium', 'Symphyotrichum cordifolium',
-  'Solidago speciosa', 'Solidago rigida', 'Solidago nemoralis', 'Solidago caesia', 'Solidago flexicaulis', 'Eutrochium maculatum',
-  'Eutrochium purpureum', 'Eupatorium perfoliatum', 'Lobelia cardinalis', 'Lobelia siphilitica', 'Iris versicolor', 'Iris virginica',
-  'Verbena hastata', 'Chelone glabra', 'Vernonia fasciculata', 'Penstemon digitalis', 'Penstemon hirsutus', 'Zizia aurea',
-  'Pycnanthemum virginianum', 'Pycnanthemum tenuifolium', 'Dalea purpurea', 'Amorpha canescens', 'Baptisia australis',
-  'Schizachyrium scoparium', 'Sporobolus heterolepis', 'Bouteloua curtipendula', 'Andropogon gerardii', 'Sorghastrum nutans',
-  'Panicum virgatum', 'Elymus canadensis', 'Carex pensylvanica', 'Carex vulpinoidea', 'Carex stricta', 'Carex muskingumensis',
-  'Aquilegia canadensis', 'Geranium maculatum', 'Polemonium reptans', 'Tiarella cordifolia', 'Phlox divaricata', 'Mertensia virginica',
-  'Packera aurea', 'Osmundastrum cinnamomeum', 'Matteuccia struthiopteris', 'Athyrium filix-femina', 'Polystichum acrostichoides',
-  'Adiantum pedatum', 'Onoclea sensibilis', 'Coreopsis lanceolata', 'Ratibida pinnata', 'Silphium perfoliatum', 'Heliopsis helianthoides',
-  'Allium cernuum', 'Tradescantia ohiensis', 'Veronicastrum virginicum', 'Eryngium yuccifolium', 'Asarum canadense',
+  'Asclepias tuberosa',
+  'Asclepias incarnata',
+  'Asclepias syriaca',
+  'Asclepias verticillata',
+  'Echinacea purpurea',
+  'Echinacea pallida',
+  'Rudbeckia fulgida',
+  'Monarda fistulosa',
+  'Monarda didyma',
+  'Liatris spicata',
+  'Liatris aspera',
+  'Liatris pycnostachya',
+  'Symphyotrichum novae-angliae',
+  'Symphyotrichum laeve',
+  'Symphyotrichum oblongifolium',
+  'Symphyotrichum cordifolium',
+  'Solidago speciosa',
+  'Solidago rigida',
+  'Solidago nemoralis',
+  'Solidago caesia',
+  'Solidago flexicaulis',
+  'Eutrochium maculatum',
+  'Eutrochium purpureum',
+  'Eupatorium perfoliatum',
+  'Lobelia cardinalis',
+  'Lobelia siphilitica',
+  'Iris versicolor',
+  'Iris virginica',
+  'Verbena hastata',
+  'Chelone glabra',
+  'Vernonia fasciculata',
+  'Penstemon digitalis',
+  'Penstemon hirsutus',
+  'Zizia aurea',
+  'Pycnanthemum virginianum',
+  'Pycnanthemum tenuifolium',
+  'Dalea purpurea',
+  'Amorpha canescens',
+  'Baptisia australis',
+  'Schizachyrium scoparium',
+  'Sporobolus heterolepis',
+  'Bouteloua curtipendula',
+  'Andropogon gerardii',
+  'Sorghastrum nutans',
+  'Panicum virgatum',
+  'Elymus canadensis',
+  'Carex pensylvanica',
+  'Carex vulpinoidea',
+  'Carex stricta',
+  'Carex muskingumensis',
+  'Aquilegia canadensis',
+  'Geranium maculatum',
+  'Polemonium reptans',
+  'Tiarella cordifolia',
+  'Phlox divaricata',
+  'Mertensia virginica',
+  'Packera aurea',
+  'Osmundastrum cinnamomeum',
+  'Matteuccia struthiopteris',
+  'Athyrium filix-femina',
+  'Polystichum acrostichoides',
+  'Adiantum pedatum',
+  'Onoclea sensibilis',
+  'Coreopsis lanceolata',
+  'Ratibida pinnata',
+  'Silphium perfoliatum',
+  'Heliopsis helianthoides',
+  'Allium cernuum',
+  'Tradescantia ohiensis',
+  'Veronicastrum virginicum',
+  'Eryngium yuccifolium',
+  'Asarum canadense',
 ]);
 
 /**
@@ -51,7 +117,8 @@ const NURSERY_STAPLES: ReadonlySet<string> = new Set([
 export function availabilityPart(species: Species): ScorePart | null {
   const a = commercialAvailabilityOf(species);
   const staple = NURSERY_STAPLES.has(species.scientificName);
-  if (a !== null && (a === 'routine' || !staple)) return availabilityParts.get(a) ?? availabilityParts.keep(a, { name: 'availability', ...AVAILABILITY[a] });
+  if (a !== null && (a === 'routine' || !staple))
+    return availabilityParts.get(a) ?? availabilityParts.keep(a, { name: 'availability', ...AVAILABILITY[a] });
   return staple ? STAPLE_PART : null;
 }
 
@@ -79,7 +146,8 @@ export function layeredHostPart(species: Species): ScorePart | null {
 }
 
 export function beesPart(species: Species, site: Site): ScorePart | null {
-  if (!site.goals.includes('pollinators') || layerOf(species) !== 'herbaceous' && species.growthForm !== 'shrub') return null;
+  if (!site.goals.includes('pollinators') || (layerOf(species) !== 'herbaceous' && species.growthForm !== 'shrub'))
+    return null;
   if (!hostsSpecialistBees(species)) return null;
   const named = species.wildlife.specialistBees;
   const key = named.length === 0 ? '' : named.slice(0, 3).join('|');
@@ -92,6 +160,11 @@ export function beesPart(species: Species, site: Site): ScorePart | null {
 export const TALL_FOR_SMALL_BED_CM = 180;
 
 export function scalePart(species: Species, site: Site): ScorePart | null {
-  if (site.areaSqFt >= SMALL_BED_SQ_FT || layerOf(species) === 'woody' || species.heightCm.max <= TALL_FOR_SMALL_BED_CM) return null;
-  return { name: 'height', points: -2, reason: `Grows up to ${formatHeightCm(species.heightCm.max)}: tall for a small bed.` };
+  if (site.areaSqFt >= SMALL_BED_SQ_FT || layerOf(species) === 'woody' || species.heightCm.max <= TALL_FOR_SMALL_BED_CM)
+    return null;
+  return {
+    name: 'height',
+    points: -2,
+    reason: `Grows up to ${formatHeightCm(species.heightCm.max)}: tall for a small bed.`,
+  };
 }

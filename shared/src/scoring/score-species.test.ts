@@ -10,11 +10,23 @@ const partOf = (r: ReturnType<typeof scoreSpecies>, name: string) => r.parts.fin
 describe('scoreSpecies: eligibility (native to the state, right sun and moisture, under the height limit)', () => {
   it.each([
     ['butterfly milkweed on dry full sun', F.butterflyMilkweed, sunnyDry, true, false],
-    ['native to Illinois only, for Wisconsin: near miss', F.eastsideBluestar, { ...sunnyDry, moisture: 'medium' }, false, true],
+    [
+      'native to Illinois only, for Wisconsin: near miss',
+      F.eastsideBluestar,
+      { ...sunnyDry, moisture: 'medium' },
+      false,
+      true,
+    ],
     ['native to Arkansas–Texas only: not a near miss', F.yellowConeflower, sunnyDry, false, false],
     ['shade plant in part shade… on full sun: one step', F.blueWoodAster, { ...sunnyDry, sun: 'full' }, false, true],
     ['wild lupine (dry) in wet soil: two steps', F.wildLupine, { ...sunnyDry, moisture: 'wet' }, false, false],
-    ['two one-step misses at once: not suggested', F.columbine, { ...sunnyDry, sun: 'full', moisture: 'wet' }, false, false],
+    [
+      'two one-step misses at once: not suggested',
+      F.columbine,
+      { ...sunnyDry, sun: 'full', moisture: 'wet' },
+      false,
+      false,
+    ],
   ] as const)('%s', (_what, species, site, eligible, nearMiss) => {
     const r = scoreSpecies(species, site as Site, LARKFIELD);
     expect(r.eligible).toBe(eligible);
@@ -39,12 +51,24 @@ describe('scoreSpecies: eligibility (native to the state, right sun and moisture
 });
 
 describe('scoreSpecies: room for the plant (footprint = circle as wide as the narrow end of its spread)', () => {
-  const oak = { ...F.butterflyMilkweed, slug: 'big-tree', growthForm: 'tree' as const, spreadCm: { min: 1000, max: 1500 } };
+  const oak = {
+    ...F.butterflyMilkweed,
+    slug: 'big-tree',
+    growthForm: 'tree' as const,
+    spreadCm: { min: 1000, max: 1500 },
+  };
   it.each([
     // π × (10 m ÷ 2)² = 78.5 m² = 845 ft²; woody plants asked for get 25 % of a bed up to 500 ft², 35 % above (layers.ts)
     ['845 ft² tree in 300 ft²: out, not a near miss', 300, true, false, false, undefined],
     ['845 ft² tree in 500 ft²: out, a near miss', 500, true, false, true, undefined],
-    ['845 ft² tree in 2,000 ft²: over the woody share (700 ft²), a near miss that would shade the bed', 2000, true, false, true, -2],
+    [
+      '845 ft² tree in 2,000 ft²: over the woody share (700 ft²), a near miss that would shade the bed',
+      2000,
+      true,
+      false,
+      true,
+      -2,
+    ],
     ['845 ft² tree in 5,000 ft²: room enough in the woody share (1,750 ft²)', 5000, true, true, false, undefined],
     ['845 ft² tree in 5,000 ft², woody plants not asked for: out', 5000, false, false, false, undefined],
   ])('%s', (_what, areaSqFt, woodyPlants, eligible, nearMiss, points) => {
@@ -53,8 +77,9 @@ describe('scoreSpecies: room for the plant (footprint = circle as wide as the na
   });
 
   it('says so with both units', () => {
-    expect(scoreSpecies(oak, { ...sunnyDry, areaSqFt: 300, woodyPlants: true }, LARKFIELD).ineligibleReason)
-      .toBe('Too big: it grows about 33 ft (10 m) across, more than your 300 ft² (27.9 m²) bed can hold.');
+    expect(scoreSpecies(oak, { ...sunnyDry, areaSqFt: 300, woodyPlants: true }, LARKFIELD).ineligibleReason).toBe(
+      'Too big: it grows about 33 ft (10 m) across, more than your 300 ft² (27.9 m²) bed can hold.',
+    );
   });
 });
 
@@ -79,22 +104,39 @@ describe('scoreSpecies: why it fits, in words', () => {
   });
 
   it('score is the sum of the parts', () => {
-    expect(r.score).toBeCloseTo(r.parts.reduce((s, p) => s + p.points, 0), 5);
+    expect(r.score).toBeCloseTo(
+      r.parts.reduce((s, p) => s + p.points, 0),
+      5,
+    );
   });
 
   it('goldenrod: among the best herbaceous host plants (Solidago 115, the top of TAL-H, R), said without a count', () => {
     const g = scoreSpecies(F.showyGoldenrod, sunnyDry, LARKFIELD);
-    expect(partOf(g, 'host-plant')).toEqual({ name: 'host-plant', points: 3, reason: 'Among the best caterpillar host plants of the wildflowers, grasses and ferns.' });
+    expect(partOf(g, 'host-plant')).toEqual({
+      name: 'host-plant',
+      points: 3,
+      reason: 'Among the best caterpillar host plants of the wildflowers, grasses and ferns.',
+    });
   });
 
   it('bloom gap: a late bloomer scores when the mix has no late flowers', () => {
     const mix = [F.butterflyMilkweed, F.wildLupine, F.goldenAlexanders];
     const g = scoreSpecies(F.showyGoldenrod, sunnyDry, LARKFIELD, { currentMix: mix });
-    expect(partOf(g, 'bloom-gap')).toEqual({ name: 'bloom-gap', points: 2, reason: 'Blooms Aug–Oct, when your mix has least.' });
+    expect(partOf(g, 'bloom-gap')).toEqual({
+      name: 'bloom-gap',
+      points: 2,
+      reason: 'Blooms Aug–Oct, when your mix has least.',
+    });
   });
 
   it('goal parts: low spreaders, rain garden, shade garden', () => {
-    const site: Site = { sun: 'part', moisture: 'medium', areaSqFt: 100, deerPressure: 'low', goals: ['low-spreaders', 'shade-garden', 'rain-garden'] };
+    const site: Site = {
+      sun: 'part',
+      moisture: 'medium',
+      areaSqFt: 100,
+      deerPressure: 'low',
+      goals: ['low-spreaders', 'shade-garden', 'rain-garden'],
+    };
     const sedge = scoreSpecies(F.pennSedge, site, LARKFIELD);
     expect(partOf(sedge, 'spread')?.points).toBe(-1);
     expect(partOf(sedge, 'shade-garden')?.points).toBe(2);

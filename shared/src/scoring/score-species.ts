@@ -22,7 +22,12 @@ export interface ScoringContext {
  * or on the wrong sun, moisture, height or size for the bed, is not eligible; when it misses by one step only
  * (see hard-checks) it is a near miss the caller may show as "also consider".
  */
-export function scoreSpecies(species: Species, site: Site, region: RegionContext, context: ScoringContext = {}): ScoredSpecies {
+export function scoreSpecies(
+  species: Species,
+  site: Site,
+  region: RegionContext,
+  context: ScoringContext = {},
+): ScoredSpecies {
   // Parts and failures are collected in place, without closures or intermediate arrays: this runs
   // once per catalogue species on every request, and garbage was most of its cost at 30,000.
   const parts: ScorePart[] = [];
@@ -107,7 +112,12 @@ export function compareScored(a: ScoredSpecies, b: ScoredSpecies): number {
 }
 
 /** Ranks a species list for a site: eligible species, and near misses to "also consider". */
-export function recommend(speciesList: readonly Species[], site: Site, region: RegionContext, context: ScoringContext = {}): Recommendation {
+export function recommend(
+  speciesList: readonly Species[],
+  site: Site,
+  region: RegionContext,
+  context: ScoringContext = {},
+): Recommendation {
   const ranked: ScoredSpecies[] = [];
   const alsoConsider: ScoredSpecies[] = [];
   const coverage = catalogueCoverage(speciesList, region);

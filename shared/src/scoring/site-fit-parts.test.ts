@@ -15,7 +15,12 @@ describe('graded fit: thrives vs tolerates (input → points)', () => {
     // butterfly milkweed takes dry and medium: on dry sun it leads
     ['butterfly milkweed on dry sun', F.butterflyMilkweed, drySun, 7],
     // an optimum narrower than the range: medium only, so dry is tolerated, not thrived in
-    ['bergamot with a medium-only optimum on dry sun: sun optimum only', { ...F.wildBergamot, moistureOptimum: ['medium'] } as GradedSpecies, drySun, 5],
+    [
+      'bergamot with a medium-only optimum on dry sun: sun optimum only',
+      { ...F.wildBergamot, moistureOptimum: ['medium'] } as GradedSpecies,
+      drySun,
+      5,
+    ],
   ])('%s → %d', (_what, species, site, points) => {
     expect(thrivesPart(species, site)?.points).toBe(points);
   });
@@ -25,16 +30,26 @@ describe('graded fit: thrives vs tolerates (input → points)', () => {
     ['FACU on a wet site', 'FACU', wetSun, -1],
     ['OBL on a dry site', 'OBL', drySun, -2],
     ['UPL on a dry site', 'UPL', drySun, 1],
-  ] as const)('wetland indicator (National Wetland Plant List class): %s → %d', (_what, wetlandIndicator, site, points) => {
-    expect(wetlandPart({ ...F.wildBergamot, wetlandIndicator } as GradedSpecies, site)?.points).toBe(points);
-  });
+  ] as const)(
+    'wetland indicator (National Wetland Plant List class): %s → %d',
+    (_what, wetlandIndicator, site, points) => {
+      expect(wetlandPart({ ...F.wildBergamot, wetlandIndicator } as GradedSpecies, site)?.points).toBe(points);
+    },
+  );
 
   it('a wetland plant outranks an upland generalist on a wet site, and the other way round on a dry one', () => {
     const wetPlant = { ...F.swampMilkweed, slug: 'wet-plant', wetlandIndicator: 'OBL' } as GradedSpecies;
-    const upland = { ...F.swampMilkweed, slug: 'upland', moisture: ['dry', 'medium', 'wet'], wetlandIndicator: 'FACU' } as GradedSpecies;
+    const upland = {
+      ...F.swampMilkweed,
+      slug: 'upland',
+      moisture: ['dry', 'medium', 'wet'],
+      wetlandIndicator: 'FACU',
+    } as GradedSpecies;
     const score = (s: GradedSpecies, site: Site) => scoreSpecies(s, site, LARKFIELD).score;
     expect(score(wetPlant, wetSun)).toBeGreaterThan(score(upland, wetSun));
-    expect(score(upland, { ...drySun, moisture: 'medium' })).toBeGreaterThan(score(wetPlant, { ...drySun, moisture: 'medium' }));
+    expect(score(upland, { ...drySun, moisture: 'medium' })).toBeGreaterThan(
+      score(wetPlant, { ...drySun, moisture: 'medium' }),
+    );
   });
 });
 

@@ -41,23 +41,35 @@ export function thrivesPart(species: Species, site: Site): ScorePart | null {
   const sunBest = sunOptimumOf(species).includes(site.sun);
   const moistBest = moistureOptimumOf(species).includes(site.moisture);
   let points = (sunBest ? FIT_POINTS.optimum : 0) + (moistBest ? FIT_POINTS.optimum : 0);
-  if ((site.moisture === 'wet' && !species.moisture.includes('dry')) || (site.moisture === 'dry' && !species.moisture.includes('wet'))) {
+  if (
+    (site.moisture === 'wet' && !species.moisture.includes('dry')) ||
+    (site.moisture === 'dry' && !species.moisture.includes('wet'))
+  ) {
     points += FIT_POINTS.specialist;
   }
-  if ((site.sun === 'full' && !species.sun.includes('shade')) || (site.sun === 'shade' && !species.sun.includes('full'))) {
+  if (
+    (site.sun === 'full' && !species.sun.includes('shade')) ||
+    (site.sun === 'shade' && !species.sun.includes('full'))
+  ) {
     points += FIT_POINTS.specialist;
   }
-  if ((site.sun === 'full' && species.sun[0] === 'shade') || (site.sun === 'shade' && species.sun[0] === 'full')) points += FIT_POINTS.offEnd;
+  if ((site.sun === 'full' && species.sun[0] === 'shade') || (site.sun === 'shade' && species.sun[0] === 'full'))
+    points += FIT_POINTS.offEnd;
   if (points <= 0) return null;
   // A number naming points, which optimum matched, and the ground: no string per species.
-  const key = (((points * 4 + (sunBest ? 2 : 0) + (moistBest ? 1 : 0)) * 3 + SUN_LEVELS.indexOf(site.sun)) * 3) + MOISTURE_LEVELS.indexOf(site.moisture);
+  const key =
+    ((points * 4 + (sunBest ? 2 : 0) + (moistBest ? 1 : 0)) * 3 + SUN_LEVELS.indexOf(site.sun)) * 3 +
+    MOISTURE_LEVELS.indexOf(site.moisture);
   const cached = thriveParts.get(key);
   if (cached !== undefined) return cached;
   const sunWords = SUN_WORDS[site.sun];
   const soilWords = `${MOISTURE_WORDS[site.moisture]} soil`;
-  const reason = sunBest && moistBest
-    ? `Thrives in ${soilWords} and ${sunWords}, as on your ground.`
-    : sunBest || moistBest ? `Does best in ${sunBest ? sunWords : soilWords}, as on your ground.` : 'A plant of ground like yours.';
+  const reason =
+    sunBest && moistBest
+      ? `Thrives in ${soilWords} and ${sunWords}, as on your ground.`
+      : sunBest || moistBest
+        ? `Does best in ${sunBest ? sunWords : soilWords}, as on your ground.`
+        : 'A plant of ground like yours.';
   return thriveParts.keep(key, { name: 'thrives', points, reason });
 }
 
@@ -70,19 +82,33 @@ export function wetlandPart(species: Species, site: Site): ScorePart | null {
   const points = WETLAND_POINTS[site.moisture][indicator];
   if (points === 0) return null;
   const key = `${site.moisture}${indicator}`;
-  return wetlandParts.get(key)
-    ?? wetlandParts.keep(key, { name: 'wetland-class', points, reason: `In the wild it is ${WETLAND_WORDS[indicator]} (National Wetland Plant List).` });
+  return (
+    wetlandParts.get(key) ??
+    wetlandParts.keep(key, {
+      name: 'wetland-class',
+      points,
+      reason: `In the wild it is ${WETLAND_WORDS[indicator]} (National Wetland Plant List).`,
+    })
+  );
 }
 
 export function acidSoilPart(species: Species): ScorePart | null {
   if (!needsAcidSoil(species)) return null;
-  return { name: 'acid-soil', points: -2, reason: 'Needs acid soil: test yours first, as many yard soils are near neutral.' };
+  return {
+    name: 'acid-soil',
+    points: -2,
+    reason: 'Needs acid soil: test yours first, as many yard soils are near neutral.',
+  };
 }
 
 /** Ferns belong in shade mixes (common practice): they fill the ground under trees where few flowers bloom. */
 export function fernPart(species: Species, site: Site): ScorePart | null {
   if (species.growthForm !== 'fern' || site.sun === 'full') return null;
-  return { name: 'fern', points: site.sun === 'shade' ? 2.5 : 1, reason: 'A fern to fill the shade between the flowers.' };
+  return {
+    name: 'fern',
+    points: site.sun === 'shade' ? 2.5 : 1,
+    reason: 'A fern to fill the shade between the flowers.',
+  };
 }
 
 /**
@@ -90,7 +116,15 @@ export function fernPart(species: Species, site: Site): ScorePart | null {
  * the catalogue's habitat words): a species of glades and sand prairies leads on a dry site, one of
  * marshes and wet prairies on a wet site, one of forests in shade.
  */
-const DRY_COMMUNITIES: ReadonlySet<Habitat> = new Set(['sand-prairie', 'glade', 'rock-outcrop', 'shortgrass-prairie', 'mixed-grass-prairie', 'dune', 'pine-barrens']);
+const DRY_COMMUNITIES: ReadonlySet<Habitat> = new Set([
+  'sand-prairie',
+  'glade',
+  'rock-outcrop',
+  'shortgrass-prairie',
+  'mixed-grass-prairie',
+  'dune',
+  'pine-barrens',
+]);
 const WET_COMMUNITIES: ReadonlySet<Habitat> = new Set(['marsh', 'wetland', 'fen-bog', 'wet-prairie', 'streambank']);
 const SHADE_COMMUNITIES: ReadonlySet<Habitat> = new Set(['forest', 'floodplain-forest']);
 
@@ -101,11 +135,15 @@ const COMMUNITY_WORDS = {
 } as const;
 
 export function communityPart(species: Species, site: Site): ScorePart | null {
-  const kind = site.moisture === 'dry' ? 'dry' : site.moisture === 'wet' ? 'wet' : site.sun === 'shade' ? 'shade' : null;
+  const kind =
+    site.moisture === 'dry' ? 'dry' : site.moisture === 'wet' ? 'wet' : site.sun === 'shade' ? 'shade' : null;
   if (kind === null) return null;
   const set = kind === 'dry' ? DRY_COMMUNITIES : kind === 'wet' ? WET_COMMUNITIES : SHADE_COMMUNITIES;
   if (!species.habitats.some((h) => set.has(h))) return null;
-  return communityParts.get(kind) ?? communityParts.keep(kind, { name: 'community', points: 1.5, reason: COMMUNITY_WORDS[kind] });
+  return (
+    communityParts.get(kind) ??
+    communityParts.keep(kind, { name: 'community', points: 1.5, reason: COMMUNITY_WORDS[kind] })
+  );
 }
 
 /**
@@ -115,12 +153,17 @@ export function communityPart(species: Species, site: Site): ScorePart | null {
  * is about the narrowest quarter of the catalogue's ranges, whose median is 40).
  */
 export const REGIONAL_MAX_ECOREGIONS = 30;
-const REGIONAL_PART = sharedPart({ name: 'ecoregion', points: 0.75, reason: 'Characteristic of your region: native to only a few ecoregions, yours among them.' });
+const REGIONAL_PART = sharedPart({
+  name: 'ecoregion',
+  points: 0.75,
+  reason: 'Characteristic of your region: native to only a few ecoregions, yours among them.',
+});
 
 export function regionalPart(species: Species, region: RegionContext): ScorePart | null {
   const code = region.ecoregionCode;
   const list = ecoregionsOf(species);
-  if (code === undefined || list === undefined || list.length > REGIONAL_MAX_ECOREGIONS || !list.includes(code)) return null;
+  if (code === undefined || list === undefined || list.length > REGIONAL_MAX_ECOREGIONS || !list.includes(code))
+    return null;
   // A narrow range that only grazes the region (a shortgrass plant at the edge of the Driftless
   // Area) is not characteristic of it: the species must also belong to the region's plant communities.
   const communities = region.ecoregionPlantCommunities;

@@ -57,21 +57,48 @@ export function commercialAvailabilityOf(s: Species): CommercialAvailability | n
  * know for seeding about a small bed (Homeground's table, common practice, from memory).
  */
 const SELF_SOWING_GENERA: ReadonlySet<string> = new Set([
-  'Impatiens', 'Viola', 'Rudbeckia', 'Oenothera', 'Erigeron', 'Aquilegia', 'Chamaecrista', 'Helianthus',
-  'Verbena', 'Penstemon', 'Lobelia', 'Senna',
+  'Impatiens',
+  'Viola',
+  'Rudbeckia',
+  'Oenothera',
+  'Erigeron',
+  'Aquilegia',
+  'Chamaecrista',
+  'Helianthus',
+  'Verbena',
+  'Penstemon',
+  'Lobelia',
+  'Senna',
 ]);
 const SELF_SOWING_SPECIES: ReadonlySet<string> = new Set([
-  'Rudbeckia hirta', 'Rudbeckia triloba', 'Oenothera biennis', 'Impatiens capensis', 'Impatiens pallida',
-  'Erigeron annuus', 'Erigeron philadelphicus', 'Chamaecrista fasciculata', 'Helianthus annuus', 'Verbena urticifolia',
-  'Viola sororia', 'Viola pubescens', 'Senna hebecarpa', 'Senna marilandica', 'Aquilegia canadensis',
-  'Hackelia virginiana', 'Agastache scrophulariifolia', 'Geum canadense', 'Campanulastrum americanum',
+  'Rudbeckia hirta',
+  'Rudbeckia triloba',
+  'Oenothera biennis',
+  'Impatiens capensis',
+  'Impatiens pallida',
+  'Erigeron annuus',
+  'Erigeron philadelphicus',
+  'Chamaecrista fasciculata',
+  'Helianthus annuus',
+  'Verbena urticifolia',
+  'Viola sororia',
+  'Viola pubescens',
+  'Senna hebecarpa',
+  'Senna marilandica',
+  'Aquilegia canadensis',
+  'Hackelia virginiana',
+  'Agastache scrophulariifolia',
+  'Geum canadense',
+  'Campanulastrum americanum',
 ]);
 
 export function selfSows(s: Species): boolean {
   const f = facts(s).selfSows;
   if (f !== undefined) return f;
   // The species table only: the genus table is a hint for curators, too broad to exclude on.
-  return SELF_SOWING_SPECIES.has(s.scientificName) || (s.lifespan !== 'perennial' && SELF_SOWING_GENERA.has(genusOf(s)));
+  return (
+    SELF_SOWING_SPECIES.has(s.scientificName) || (s.lifespan !== 'perennial' && SELF_SOWING_GENERA.has(genusOf(s)))
+  );
 }
 
 /** States where the species is legally protected, when the record says. */

@@ -21,7 +21,11 @@ export function hostPlantPart(species: Species): ScorePart | null {
   // log10: the first few dozen caterpillar species matter most; 534 (oaks) is not 5× 115.
   const points = roundTo(Math.min(POINTS.hostCap, POINTS.hostPerLog10 * Math.log10(1 + count)), 1);
   const kinds = countOf(count, 'moth or butterfly species', 'moth and butterfly species');
-  return hostParts.keep(count, { name: 'host-plant', points, reason: `Hosts the caterpillars of ${kinds} in its genus.` });
+  return hostParts.keep(count, {
+    name: 'host-plant',
+    points,
+    reason: `Hosts the caterpillars of ${kinds} in its genus.`,
+  });
 }
 
 const MONARCH_PART = sharedPart({
@@ -41,7 +45,10 @@ const pollinatorParts = new PartCache<string>();
 export function pollinatorPart(species: Species, site: Site): ScorePart | null {
   if (!site.goals.includes('pollinators') || !isFloweringSpecies(species)) return null;
   const words = species.wildlife.pollinators;
-  return pollinatorParts.get(words) ?? pollinatorParts.keep(words, { name: 'pollinators', points: POINTS.pollinatorFlowers, reason: words });
+  return (
+    pollinatorParts.get(words) ??
+    pollinatorParts.keep(words, { name: 'pollinators', points: POINTS.pollinatorFlowers, reason: words })
+  );
 }
 
 export function birdsPart(species: Species, site: Site): ScorePart | null {

@@ -4,9 +4,24 @@ import { layerOf } from './layers.js';
 import { caterpillarWords, hostLevelOf, hostValueOnHerbaceousScale, wildlifeSummary } from './wildlife-value.js';
 
 // Genus counts: Tallamy's herbaceous (h) and woody (w) lists, CHECK-VALUES §2 (R).
-const cherry = makeSpecies({ slug: 'prunus-virginiana', scientificName: 'Prunus virginiana', growthForm: 'shrub', wildlife: { lepidopteraGenusCount: 456 } });
-const oak = makeSpecies({ slug: 'quercus-alba', scientificName: 'Quercus alba', growthForm: 'tree', wildlife: { lepidopteraGenusCount: 534 } });
-const morningGlory = makeSpecies({ slug: 'ipomoea-pandurata', scientificName: 'Ipomoea pandurata', growthForm: 'vine', wildlife: { lepidopteraGenusCount: 39 } });
+const cherry = makeSpecies({
+  slug: 'prunus-virginiana',
+  scientificName: 'Prunus virginiana',
+  growthForm: 'shrub',
+  wildlife: { lepidopteraGenusCount: 456 },
+});
+const oak = makeSpecies({
+  slug: 'quercus-alba',
+  scientificName: 'Quercus alba',
+  growthForm: 'tree',
+  wildlife: { lepidopteraGenusCount: 534 },
+});
+const morningGlory = makeSpecies({
+  slug: 'ipomoea-pandurata',
+  scientificName: 'Ipomoea pandurata',
+  growthForm: 'vine',
+  wildlife: { lepidopteraGenusCount: 39 },
+});
 
 describe('caterpillar host value within its layer (input → level, words)', () => {
   it.each([
@@ -26,7 +41,9 @@ describe('caterpillar host value within its layer (input → level, words)', () 
   });
 
   it('words, never a count', () => {
-    expect(caterpillarWords(F.showyGoldenrod)).toBe('Among the best caterpillar host plants of the wildflowers, grasses and ferns.');
+    expect(caterpillarWords(F.showyGoldenrod)).toBe(
+      'Among the best caterpillar host plants of the wildflowers, grasses and ferns.',
+    );
     expect(caterpillarWords(cherry)).toBe('Among the best caterpillar host plants of the shrubs and trees.');
     const summary = wildlifeSummary(F.butterflyMilkweed);
     expect(summary.monarchs).toBe('Monarch caterpillars feed on it.');

@@ -27,13 +27,18 @@ export function hostLevelOf(species: Pick<Species, 'growthForm' | 'scientificNam
  * The genus count on the herbaceous scale: woody counts are scaled by 115 / 534, so the mix
  * objective's host term weighs a cherry like a goldenrod rather than four goldenrods.
  */
-export function hostValueOnHerbaceousScale(species: Pick<Species, 'growthForm' | 'scientificName' | 'wildlife'>): number {
+export function hostValueOnHerbaceousScale(
+  species: Pick<Species, 'growthForm' | 'scientificName' | 'wildlife'>,
+): number {
   const count = species.wildlife.lepidopteraGenusCount ?? 0;
   if (layerOf(species) === 'herbaceous') return count;
   return (count * LAYER_TOP_HOST_COUNT.herbaceous) / LAYER_TOP_HOST_COUNT.woody;
 }
 
-const LAYER_WORDS: Record<PlantLayer, string> = { herbaceous: 'wildflowers, grasses and ferns', woody: 'shrubs and trees' };
+const LAYER_WORDS: Record<PlantLayer, string> = {
+  herbaceous: 'wildflowers, grasses and ferns',
+  woody: 'shrubs and trees',
+};
 
 export function caterpillarWords(species: Pick<Species, 'growthForm' | 'scientificName' | 'wildlife'>): string | null {
   const level = hostLevelOf(species);
@@ -49,23 +54,69 @@ export function caterpillarWords(species: Pick<Species, 'growthForm' | 'scientif
  * specialist-bee host lists of the Mid-Atlantic and Northeast; to be confirmed against them).
  */
 const SPECIALIST_BEE_GENERA: ReadonlySet<string> = new Set([
-  'Solidago', 'Symphyotrichum', 'Helianthus', 'Rudbeckia', 'Coreopsis', 'Ratibida', 'Silphium', 'Heliopsis',
-  'Echinacea', 'Penstemon', 'Oenothera', 'Vaccinium', 'Salix', 'Physalis', 'Pontederia', 'Ludwigia',
-  'Lysimachia', 'Campanula', 'Geranium', 'Hydrophyllum', 'Claytonia', 'Ipomoea', 'Calystegia', 'Dalea',
-  'Cornus', 'Monarda', 'Verbesina', 'Bidens', 'Eutrochium', 'Eupatorium', 'Packera', 'Erigeron',
-  'Zizia', 'Chamaecrista', 'Baptisia', 'Lupinus', 'Asclepias', 'Sphaeralcea', 'Callirhoe', 'Hibiscus',
-  'Cercis', 'Amorpha', 'Viola', 'Uvularia', 'Nuphar', 'Nymphaea', 'Larrea',
+  'Solidago',
+  'Symphyotrichum',
+  'Helianthus',
+  'Rudbeckia',
+  'Coreopsis',
+  'Ratibida',
+  'Silphium',
+  'Heliopsis',
+  'Echinacea',
+  'Penstemon',
+  'Oenothera',
+  'Vaccinium',
+  'Salix',
+  'Physalis',
+  'Pontederia',
+  'Ludwigia',
+  'Lysimachia',
+  'Campanula',
+  'Geranium',
+  'Hydrophyllum',
+  'Claytonia',
+  'Ipomoea',
+  'Calystegia',
+  'Dalea',
+  'Cornus',
+  'Monarda',
+  'Verbesina',
+  'Bidens',
+  'Eutrochium',
+  'Eupatorium',
+  'Packera',
+  'Erigeron',
+  'Zizia',
+  'Chamaecrista',
+  'Baptisia',
+  'Lupinus',
+  'Asclepias',
+  'Sphaeralcea',
+  'Callirhoe',
+  'Hibiscus',
+  'Cercis',
+  'Amorpha',
+  'Viola',
+  'Uvularia',
+  'Nuphar',
+  'Nymphaea',
+  'Larrea',
 ]);
 
 export function hostsSpecialistBees(species: Pick<Species, 'scientificName' | 'wildlife'>): boolean {
   return species.wildlife.specialistBees.length > 0 || SPECIALIST_BEE_GENERA.has(genusOf(species));
 }
 
-export function beeWords(species: Pick<Species, 'scientificName' | 'wildlife' | 'growthForm' | 'bloomMonths'>): string | null {
+export function beeWords(
+  species: Pick<Species, 'scientificName' | 'wildlife' | 'growthForm' | 'bloomMonths'>,
+): string | null {
   const named = species.wildlife.specialistBees;
-  if (named.length > 0) return `Pollen and nectar for bees, and the host of specialist bees (${named.slice(0, 3).join(', ')}).`;
-  if (SPECIALIST_BEE_GENERA.has(genusOf(species))) return 'Pollen and nectar for bees, including bees that collect pollen from this genus only.';
-  if (species.growthForm === 'graminoid' || species.growthForm === 'fern' || species.bloomMonths.length === 0) return null;
+  if (named.length > 0)
+    return `Pollen and nectar for bees, and the host of specialist bees (${named.slice(0, 3).join(', ')}).`;
+  if (SPECIALIST_BEE_GENERA.has(genusOf(species)))
+    return 'Pollen and nectar for bees, including bees that collect pollen from this genus only.';
+  if (species.growthForm === 'graminoid' || species.growthForm === 'fern' || species.bloomMonths.length === 0)
+    return null;
   return 'Flowers for bees and other pollinators.';
 }
 

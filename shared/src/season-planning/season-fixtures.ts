@@ -18,7 +18,11 @@ export function seasonSpecies(o: Overrides): Species {
     ...base,
     commonNames: [o.slug.replace(/-/g, ' ')],
     ...o,
-    germination: { ...base.germination, methods: ['winter-sowing', 'outdoor-pot-winter', 'indoor-lights'], ...o.germination },
+    germination: {
+      ...base.germination,
+      methods: ['winter-sowing', 'outdoor-pot-winter', 'indoor-lights'],
+      ...o.germination,
+    },
     wildlife: { ...base.wildlife, ...o.wildlife },
   });
 }

@@ -24,8 +24,15 @@ export interface SeedEase {
 export function seedEaseOf(species: Species): SeedEase {
   const s = stratificationOf(species);
   const extraSteps = s.before.length;
-  const level: EaseLevel = s.warmDays > 0 || s.coldDays > 90 ? 'hard' : s.coldDays > 60 || extraSteps > 0 ? 'moderate' : 'easy';
-  return { level, coldDays: s.coldDays, warmDays: s.warmDays, extraSteps, germinationRatePct: species.germination.germinationRatePct };
+  const level: EaseLevel =
+    s.warmDays > 0 || s.coldDays > 90 ? 'hard' : s.coldDays > 60 || extraSteps > 0 ? 'moderate' : 'easy';
+  return {
+    level,
+    coldDays: s.coldDays,
+    warmDays: s.warmDays,
+    extraSteps,
+    germinationRatePct: species.germination.germinationRatePct,
+  };
 }
 
 /** Methods that chill the seed outdoors over winter, so cold-moist stratification happens by itself. */

@@ -2,8 +2,20 @@ import { csvField } from '../sowing-calendar/calendar-csv.js';
 import type { SeedList } from './seed-list.js';
 
 const COLUMNS = [
-  'species', 'scientificName', 'targetPlants', 'germinationPct', 'germinationFrom', 'lossPct', 'seedsToSow',
-  'seedsPerPound', 'grams', 'ounces', 'packets', 'buyBy', 'collectLocally', 'notes',
+  'species',
+  'scientificName',
+  'targetPlants',
+  'germinationPct',
+  'germinationFrom',
+  'lossPct',
+  'seedsToSow',
+  'seedsPerPound',
+  'grams',
+  'ounces',
+  'packets',
+  'buyBy',
+  'collectLocally',
+  'notes',
 ] as const;
 
 /**
@@ -13,13 +25,29 @@ const COLUMNS = [
  */
 export function seedListToCsv(list: SeedList): string {
   const rows: string[][] = list.rows.map((r) => [
-    r.commonName, r.scientificName, String(r.targetPlants), String(r.germinationRatePct), r.germinationFrom,
-    String(Math.round(r.lossFactor * 100)), String(r.seedsToSow), r.seedsPerPound === null ? '' : String(r.seedsPerPound),
-    r.grams === null ? '' : r.grams.toFixed(2), r.ounces === null ? '' : r.ounces.toFixed(3), String(r.packets), r.buyBy,
-    r.collectLocally ? 'yes' : 'no', r.collectNotes.join(' '),
+    r.commonName,
+    r.scientificName,
+    String(r.targetPlants),
+    String(r.germinationRatePct),
+    r.germinationFrom,
+    String(Math.round(r.lossFactor * 100)),
+    String(r.seedsToSow),
+    r.seedsPerPound === null ? '' : String(r.seedsPerPound),
+    r.grams === null ? '' : r.grams.toFixed(2),
+    r.ounces === null ? '' : r.ounces.toFixed(3),
+    String(r.packets),
+    r.buyBy,
+    r.collectLocally ? 'yes' : 'no',
+    r.collectNotes.join(' '),
   ]);
-  const note = (species: string, scientific: string, text: string) => [species, scientific, ...Array(COLUMNS.length - 3).fill(''), text];
+  const note = (species: string, scientific: string, text: string) => [
+    species,
+    scientific,
+    ...Array(COLUMNS.length - 3).fill(''),
+    text,
+  ];
   for (const c of list.cautions) rows.push(note('Please note', '', c));
-  for (const r of list.rows) for (const c of r.cautions) rows.push(note(r.commonName, r.scientificName, `${c.title}: ${c.text}`));
+  for (const r of list.rows)
+    for (const c of r.cautions) rows.push(note(r.commonName, r.scientificName, `${c.title}: ${c.text}`));
   return [COLUMNS as readonly string[], ...rows].map((r) => r.map(csvField).join(',')).join('\r\n');
 }

@@ -18,11 +18,11 @@ export const MAX_PACKETS_BEFORE_WEIGHT = 5;
  * groups; defer to state and local rules, which can be stricter).
  */
 export const SEED_LIST_CAUTIONS: readonly string[] = [
-  'Collect wild seed only with the landowner\'s permission, and follow the rules of parks and reserves: many forbid it.',
-  'Take only a small share of any one population\'s seed and leave the rest to reseed the stand and feed wildlife.',
+  "Collect wild seed only with the landowner's permission, and follow the rules of parks and reserves: many forbid it.",
+  "Take only a small share of any one population's seed and leave the rest to reseed the stand and feed wildlife.",
   'Never collect seed or plants of a protected species from the wild; buy it from a nursery that propagates it.',
   'Dry potting mix is dusty: dampen it before you fill pots, and work outdoors or wear a dust mask.',
-  'Check your state\'s noxious-weed and protected-plant lists and any local rules before you collect, sow or give plants away.',
+  "Check your state's noxious-weed and protected-plant lists and any local rules before you collect, sow or give plants away.",
 ];
 
 export interface SeedListTarget {
@@ -96,8 +96,14 @@ export function seedList(targets: readonly SeedListTarget[], options: SeedListOp
     totals: {
       targetPlants: sum((r) => r.targetPlants),
       seedsToSow: sum((r) => r.seedsToSow),
-      grams: roundTo(sum((r) => r.grams ?? 0), 2),
-      ounces: roundTo(sum((r) => r.ounces ?? 0), 3),
+      grams: roundTo(
+        sum((r) => r.grams ?? 0),
+        2,
+      ),
+      ounces: roundTo(
+        sum((r) => r.ounces ?? 0),
+        3,
+      ),
       packets: sum((r) => r.packets),
     },
     cautions: SEED_LIST_CAUTIONS,
@@ -135,17 +141,32 @@ function rowOf(t: SeedListTarget, lossFactor: number, seedsPerPacket: number, st
   };
 }
 
-function collectAdvice(s: Species, state: StateCode, neverCollectWild: boolean): { collectLocally: boolean; collectNotes: string[] } {
+function collectAdvice(
+  s: Species,
+  state: StateCode,
+  neverCollectWild: boolean,
+): { collectLocally: boolean; collectNotes: string[] } {
   if (neverCollectWild) {
     const where = s.protectedIn.includes(state) ? `protected in ${stateName(state)}` : 'protected in the wild';
-    return { collectLocally: false, collectNotes: [`Never collect it from the wild: it is ${where}. Buy seed from a nursery that propagates it.`] };
+    return {
+      collectLocally: false,
+      collectNotes: [`Never collect it from the wild: it is ${where}. Buy seed from a nursery that propagates it.`],
+    };
   }
   switch (s.commercialAvailability) {
     case 'field-collection-only':
     case 'none-known':
-      return { collectLocally: true, collectNotes: ['Seed is seldom sold (USDA PLANTS lists no routine supply): collect it locally, with the landowner\'s permission.'] };
+      return {
+        collectLocally: true,
+        collectNotes: [
+          "Seed is seldom sold (USDA PLANTS lists no routine supply): collect it locally, with the landowner's permission.",
+        ],
+      };
     case 'contract-only':
-      return { collectLocally: true, collectNotes: ['Seed is mostly grown to order: collect it locally with permission, or order early.'] };
+      return {
+        collectLocally: true,
+        collectNotes: ['Seed is mostly grown to order: collect it locally with permission, or order early.'],
+      };
     default:
       return { collectLocally: false, collectNotes: [] };
   }

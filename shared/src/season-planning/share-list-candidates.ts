@@ -8,7 +8,10 @@ import { methodsThatSuit } from './seed-ease.js';
  * size up and annuals are gone by fall, so both are proposed only when the perennials run out.
  */
 export function isHerbaceousPerennial(species: Species): boolean {
-  return layerOf(species) === 'herbaceous' && (species.lifespan === 'perennial' || species.lifespan === 'short-lived-perennial');
+  return (
+    layerOf(species) === 'herbaceous' &&
+    (species.lifespan === 'perennial' || species.lifespan === 'short-lived-perennial')
+  );
 }
 
 /**
@@ -17,7 +20,10 @@ export function isHerbaceousPerennial(species: Species): boolean {
  * by some states. The organiser can still add one by hand, and the seed list then warns.
  */
 export function isWithheldFromShareList(species: Species, state: StateCode): boolean {
-  return species.protectedIn.includes(state) || species.cautions.some((c) => c.kind === 'protected' || c.kind === 'regulated');
+  return (
+    species.protectedIn.includes(state) ||
+    species.cautions.some((c) => c.kind === 'protected' || c.kind === 'regulated')
+  );
 }
 
 export interface ShareCandidate {
@@ -32,7 +38,12 @@ export interface ShareCandidate {
  * a plant native to its other side may not be native here) that the group's methods can raise from
  * seed, without the withheld ones.
  */
-export function shareCandidates(species: readonly Species[], ecoregionCode: string, state: StateCode, methods: readonly SowingMethod[]): ShareCandidate[] {
+export function shareCandidates(
+  species: readonly Species[],
+  ecoregionCode: string,
+  state: StateCode,
+  methods: readonly SowingMethod[],
+): ShareCandidate[] {
   const out: ShareCandidate[] = [];
   for (const s of species) {
     if (!s.ecoregions.includes(ecoregionCode) || !s.nativeStates.includes(state)) continue;

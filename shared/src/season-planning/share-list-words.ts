@@ -19,11 +19,12 @@ function germinationWords(pct: number): string {
 
 export function easeWords(ease: SeedEase, suits: readonly SowingMethod[]): string {
   const outdoors = suits.filter((m) => OUTDOOR_WINTER_METHODS.includes(m));
-  const chill = ease.coldDays === 0
-    ? 'needs no treatment'
-    : outdoors.length > 0
-      ? `needs ${ease.coldDays} days of cold-moist stratification, which a winter outdoors gives it (${sowingMethodsPhrase(outdoors)})`
-      : `needs ${ease.coldDays} days of cold-moist stratification in the refrigerator first`;
+  const chill =
+    ease.coldDays === 0
+      ? 'needs no treatment'
+      : outdoors.length > 0
+        ? `needs ${ease.coldDays} days of cold-moist stratification, which a winter outdoors gives it (${sowingMethodsPhrase(outdoors)})`
+        : `needs ${ease.coldDays} days of cold-moist stratification in the refrigerator first`;
   const germ = germinationWords(ease.germinationRatePct);
   switch (ease.level) {
     case 'easy':
@@ -56,16 +57,19 @@ export function caterpillarWords(species: Species, layer: PlantLayer, rank: numb
   const count = species.wildlife.lepidopteraGenusCount;
   if (!count) return null;
   const kinds = countOf(count, 'moth or butterfly species', 'moth and butterfly species');
-  if (rank >= 0.9) return `One of the best caterpillar plants among ${LAYER_WORDS[layer]} here: its genus hosts ${kinds}.`;
+  if (rank >= 0.9)
+    return `One of the best caterpillar plants among ${LAYER_WORDS[layer]} here: its genus hosts ${kinds}.`;
   if (rank >= 0.6) return `A good caterpillar plant among ${LAYER_WORDS[layer]} here: its genus hosts ${kinds}.`;
   return `Its genus hosts the caterpillars of ${kinds}.`;
 }
 
 export function wildlifeWords(species: Species): string[] {
   const out: string[] = [];
-  if (species.wildlife.monarchHost) out.push('Feeds monarch caterpillars, which eat only milkweeds and a few close relatives.');
+  if (species.wildlife.monarchHost)
+    out.push('Feeds monarch caterpillars, which eat only milkweeds and a few close relatives.');
   if (species.wildlife.pollinators) out.push(species.wildlife.pollinators);
-  if (species.wildlife.specialistBees.length > 0) out.push(`Specialist bees depend on it: ${joinWords(species.wildlife.specialistBees)}.`);
+  if (species.wildlife.specialistBees.length > 0)
+    out.push(`Specialist bees depend on it: ${joinWords(species.wildlife.specialistBees)}.`);
   if (species.wildlife.birds) out.push(species.wildlife.birds);
   return out;
 }
@@ -73,7 +77,11 @@ export function wildlifeWords(species: Species): string[] {
 const PERIOD_WORDS: Record<BloomPeriod, string> = { early: 'early', mid: 'midsummer', late: 'late' };
 
 /** `fills` names the periods the list had no flowers in until this species came. */
-export function bloomSentence(species: Species, periods: readonly BloomPeriod[], fills: readonly BloomPeriod[]): string | null {
+export function bloomSentence(
+  species: Species,
+  periods: readonly BloomPeriod[],
+  fills: readonly BloomPeriod[],
+): string | null {
   if (species.bloomMonths.length === 0 || periods.length === 0) return null;
   const when = `Blooms ${formatMonths(species.bloomMonths)} (${joinWords(periods.map((p) => PERIOD_WORDS[p]))})`;
   if (fills.length === 0) return `${when}.`;
@@ -82,15 +90,23 @@ export function bloomSentence(species: Species, periods: readonly BloomPeriod[],
 
 /** The yards it suits, from where it thrives. */
 export function yardWords(species: Species): string {
-  const sun = joinWords(species.sunOptimum.map((s) => SUN_WORDS[s]), 'or');
-  const moisture = joinWords(species.moistureOptimum.map((m) => MOISTURE_WORDS[m]), 'or');
-  const forWhom = species.sunOptimum.includes('shade') || (species.sunOptimum.includes('part') && !species.sunOptimum.includes('full'))
-    ? ' for takers with shady yards'
-    : species.moistureOptimum.includes('wet') && !species.moistureOptimum.includes('dry')
-      ? ' for wet spots and rain gardens'
-      : species.moistureOptimum.includes('dry') && !species.moistureOptimum.includes('wet')
-        ? ' for dry, sunny spots'
-        : '';
+  const sun = joinWords(
+    species.sunOptimum.map((s) => SUN_WORDS[s]),
+    'or',
+  );
+  const moisture = joinWords(
+    species.moistureOptimum.map((m) => MOISTURE_WORDS[m]),
+    'or',
+  );
+  const forWhom =
+    species.sunOptimum.includes('shade') ||
+    (species.sunOptimum.includes('part') && !species.sunOptimum.includes('full'))
+      ? ' for takers with shady yards'
+      : species.moistureOptimum.includes('wet') && !species.moistureOptimum.includes('dry')
+        ? ' for wet spots and rain gardens'
+        : species.moistureOptimum.includes('dry') && !species.moistureOptimum.includes('wet')
+          ? ' for dry, sunny spots'
+          : '';
   return `Thrives in ${sun} and ${moisture} soil${forWhom}.`;
 }
 
@@ -103,7 +119,7 @@ export function supplyWords(species: Species): string | null {
       return 'Seed is mostly grown to order: ask a native seed nursery early, or collect it locally with permission.';
     case 'field-collection-only':
     case 'none-known':
-      return 'Seed is seldom sold: plan to collect it locally, with the landowner\'s permission.';
+      return "Seed is seldom sold: plan to collect it locally, with the landowner's permission.";
     default:
       return null;
   }

@@ -2,10 +2,25 @@ import { cp42PeriodsOf } from '../scoring/bloom-periods.js';
 import { genusOf } from '../scoring/genus.js';
 import { BLOOM_PERIODS, type BloomPeriod } from '../types/recommendation.js';
 import type { ShareList, ShareListProposal } from '../types/season.js';
-import { MOISTURE_LEVELS, SUN_LEVELS, type Moisture, type Species, type SowingMethod, type StateCode, type Sun } from '../types/species.js';
+import {
+  MOISTURE_LEVELS,
+  SUN_LEVELS,
+  type Moisture,
+  type Species,
+  type SowingMethod,
+  type StateCode,
+  type Sun,
+} from '../types/species.js';
 import { isHerbaceousPerennial, shareCandidates, type ShareCandidate } from './share-list-candidates.js';
 import {
-  MILKWEED_WORDS, bloomSentence, caterpillarWords, easeWords, methodWords, supplyWords, wildlifeWords, yardWords,
+  MILKWEED_WORDS,
+  bloomSentence,
+  caterpillarWords,
+  easeWords,
+  methodWords,
+  supplyWords,
+  wildlifeWords,
+  yardWords,
 } from './share-list-words.js';
 import { seedEaseOf, type SeedEase } from './seed-ease.js';
 
@@ -137,7 +152,10 @@ function scoreCandidates(candidates: readonly ShareCandidate[]): Scored[] {
     const s = c.species;
     const ease = seedEaseOf(s);
     const caterpillarRank = rankOf.get(s.slug) ?? 0;
-    let base = W.ease[ease.level] + ((ease.germinationRatePct - 50) / 10) * W.germinationPer10Pct + W.caterpillarRank * caterpillarRank;
+    let base =
+      W.ease[ease.level] +
+      ((ease.germinationRatePct - 50) / 10) * W.germinationPer10Pct +
+      W.caterpillarRank * caterpillarRank;
     base += W.widespread * Math.min(1, s.nativeStates.length / WIDESPREAD_STATES);
     if (s.lifespan === 'short-lived-perennial') base += W.shortLived;
     if (!isHerbaceousPerennial(s)) base += W.notHerbaceousPerennial;
@@ -145,7 +163,8 @@ function scoreCandidates(candidates: readonly ShareCandidate[]): Scored[] {
     if (s.wildlife.specialistBees.length > 0) base += W.specialistBees;
     if (s.wildlife.birds) base += W.birds;
     if (s.commercialAvailability) base += W.supply[s.commercialAvailability];
-    if (s.cautions.some((k) => k.kind === 'aggressive-spreader') || s.spreadHabit === 'aggressive') base += W.aggressive;
+    if (s.cautions.some((k) => k.kind === 'aggressive-spreader') || s.spreadHabit === 'aggressive')
+      base += W.aggressive;
     if (s.cautions.some((k) => k.kind === 'toxic-if-eaten' || k.kind === 'pets')) base += W.toxicOrPets;
     if (s.heightCm.max > TALL_CM) base += W.tall;
     return { ...c, ease, base, periods: cp42PeriodsOf(s), caterpillarRank };
@@ -192,7 +211,12 @@ function spreadGain(c: Scored, cover: Coverage): number {
 }
 
 /** Greedy: each round takes the candidate that adds most; ties go to the slug, so the answer never varies. */
-function pick(pool: readonly Scored[], n: number, cover: Coverage, picked: { c: Scored; fills: BloomPeriod[] }[]): void {
+function pick(
+  pool: readonly Scored[],
+  n: number,
+  cover: Coverage,
+  picked: { c: Scored; fills: BloomPeriod[] }[],
+): void {
   const left = [...pool];
   // One grass or sedge for every six species: takers want flowers, but a bunchgrass knits a bed together.
   const maxGraminoids = Math.max(1, Math.round((picked.length + n) / 6));
@@ -247,19 +271,33 @@ function whyOf(c: Scored, fills: readonly BloomPeriod[]): string[] {
   return why;
 }
 
-function notesFor(proposals: readonly ShareListProposal[], count: number, milkweedShare: number, milkweedsAvailable: number): string[] {
+function notesFor(
+  proposals: readonly ShareListProposal[],
+  count: number,
+  milkweedShare: number,
+  milkweedsAvailable: number,
+): string[] {
   const notes: string[] = [];
   if (proposals.length < count) {
-    notes.push(`Only ${proposals.length} species native here suit your growers' methods; add a method to widen the choice.`);
+    notes.push(
+      `Only ${proposals.length} species native here suit your growers' methods; add a method to widen the choice.`,
+    );
   }
-  if (milkweedShare > 0 && milkweedsAvailable === 0) notes.push('No native milkweed here suits your growers\' methods, so the list has none.');
+  if (milkweedShare > 0 && milkweedsAvailable === 0)
+    notes.push("No native milkweed here suits your growers' methods, so the list has none.");
   for (const p of BLOOM_PERIODS) {
-    if (!proposals.some((x) => x.bloomPeriods.includes(p))) notes.push(`Nothing on the list flowers in the ${p === 'mid' ? 'midsummer' : p} period.`);
+    if (!proposals.some((x) => x.bloomPeriods.includes(p)))
+      notes.push(`Nothing on the list flowers in the ${p === 'mid' ? 'midsummer' : p} period.`);
   }
   const has = (sun: readonly Sun[], moisture: readonly Moisture[]) =>
-    proposals.some((x) => x.sunOptimum.some((s) => sun.includes(s)) && x.moistureOptimum.some((m) => moisture.includes(m)));
-  if (!has(['part', 'shade'], MOISTURE_LEVELS)) notes.push('Nothing on the list is at its best in shade: takers with shady yards will find little.');
-  if (!has(SUN_LEVELS, ['wet'])) notes.push('Nothing on the list is at its best in wet soil: takers with wet spots will find little.');
-  if (!has(SUN_LEVELS, ['dry'])) notes.push('Nothing on the list is at its best in dry soil: takers with dry spots will find little.');
+    proposals.some(
+      (x) => x.sunOptimum.some((s) => sun.includes(s)) && x.moistureOptimum.some((m) => moisture.includes(m)),
+    );
+  if (!has(['part', 'shade'], MOISTURE_LEVELS))
+    notes.push('Nothing on the list is at its best in shade: takers with shady yards will find little.');
+  if (!has(SUN_LEVELS, ['wet']))
+    notes.push('Nothing on the list is at its best in wet soil: takers with wet spots will find little.');
+  if (!has(SUN_LEVELS, ['dry']))
+    notes.push('Nothing on the list is at its best in dry soil: takers with dry spots will find little.');
   return notes;
 }

@@ -27,8 +27,16 @@ export function calendarToCsv(calendar: SowingCalendar, names: (slug: string) =>
   };
   const rows: string[][] = calendar.events.map((e) => [e.date, ...nameCells(e.speciesSlug), e.kind, e.title, e.detail]);
   for (const w of calendar.warnings) {
-    const schedule = calendar.schedules.find((s) => s.speciesSlug === w.speciesSlug && (!w.method || s.method === w.method));
-    rows.push([schedule?.sowDate ?? '', ...nameCells(w.speciesSlug), `warning:${w.kind}`, w.method ? `Please note (${w.method})` : 'Please note', w.message]);
+    const schedule = calendar.schedules.find(
+      (s) => s.speciesSlug === w.speciesSlug && (!w.method || s.method === w.method),
+    );
+    rows.push([
+      schedule?.sowDate ?? '',
+      ...nameCells(w.speciesSlug),
+      `warning:${w.kind}`,
+      w.method ? `Please note (${w.method})` : 'Please note',
+      w.message,
+    ]);
   }
   return [CSV_FIELDS as readonly string[], ...rows].map((r) => r.map(csvField).join(',')).join('\r\n');
 }

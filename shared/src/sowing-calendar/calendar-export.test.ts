@@ -6,7 +6,8 @@ import { calendarToIcs, escapeText, foldLine } from './calendar-ics.js';
 import type { SowingPlan } from './calendar-types.js';
 import { buildSowingCalendar } from './sowing-calendar.js';
 
-const build = (plans: SowingPlan[]) => buildSowingCalendar({ lastFrost: '2027-05-10', today: '2027-01-25', targetDate: '2027-06-12', plans });
+const build = (plans: SowingPlan[]) =>
+  buildSowingCalendar({ lastFrost: '2027-05-10', today: '2027-01-25', targetDate: '2027-06-12', plans });
 const base: SowingPlan[] = [
   { species: F.goldenAlexanders, method: 'indoor-lights' }, // late: CMS today, ready after the share
   { species: F.wildBergamot, method: 'winter-sowing' },
@@ -20,7 +21,13 @@ function parse(ics: string) {
   const vcal = new ICAL.Component(ICAL.parse(ics));
   return vcal.getAllSubcomponents('vevent').map((v) => {
     const e = new ICAL.Event(v);
-    return { uid: e.uid, start: e.startDate.toString(), end: e.endDate.toString(), summary: e.summary, description: e.description };
+    return {
+      uid: e.uid,
+      start: e.startDate.toString(),
+      end: e.endDate.toString(),
+      summary: e.summary,
+      description: e.description,
+    };
   });
 }
 
@@ -39,19 +46,27 @@ describe('iCalendar export (RFC 5545)', () => {
 
   it('UIDs stay the same when a species is added, so a re-import replaces instead of duplicating', () => {
     const before = parse(calendarToIcs(build(base), { today: '2027-01-25', planId: 'larkfield-2027' }));
-    const after = parse(calendarToIcs(build([{ species: F.showyGoldenrod, method: 'indoor-lights' }, ...base]), { today: '2027-01-25', planId: 'larkfield-2027' }));
+    const after = parse(
+      calendarToIcs(build([{ species: F.showyGoldenrod, method: 'indoor-lights' }, ...base]), {
+        today: '2027-01-25',
+        planId: 'larkfield-2027',
+      }),
+    );
     const afterByUid = new Map(after.map((p) => [p.uid, p]));
     for (const p of before) expect(afterByUid.get(p.uid)).toMatchObject({ start: p.start, summary: p.summary });
     expect(new Set(after.map((p) => p.uid)).size).toBe(after.length); // unique
     expect(after.length).toBeGreaterThan(before.length);
-    expect(before.find((p) => p.summary.startsWith('Wild bergamot') && p.summary.includes('winter-sow'))!.uid)
-      .toBe('sow.monarda-fistulosa.winter-sowing.larkfield-2027@homeground');
+    expect(before.find((p) => p.summary.startsWith('Wild bergamot') && p.summary.includes('winter-sow'))!.uid).toBe(
+      'sow.monarda-fistulosa.winter-sowing.larkfield-2027@homeground',
+    );
   });
 
   it('every warning reaches the DESCRIPTION of its species’ events', () => {
     const c = build(base);
     expect(c.warnings.map((w) => w.kind)).toEqual(expect.arrayContaining(['late-start', 'target-too-early']));
-    const text = parse(calendarToIcs(c, { today: '2027-01-25' })).map((p) => p.description).join('\n');
+    const text = parse(calendarToIcs(c, { today: '2027-01-25' }))
+      .map((p) => p.description)
+      .join('\n');
     for (const w of c.warnings) expect(text).toContain(w.message);
   });
 
@@ -61,7 +76,12 @@ describe('iCalendar export (RFC 5545)', () => {
     // "°" and "–" are 2 and 3 octets: 40 of them are 80+ characters' worth of octets.
     const folded = foldLine(`DESCRIPTION:${'°C–'.repeat(20)}`);
     for (const line of folded.split('\r\n')) expect(octets(line)).toBeLessThanOrEqual(75);
-    expect(folded.split('\r\n').map((l, i) => (i === 0 ? l : l.slice(1))).join('')).toBe(`DESCRIPTION:${'°C–'.repeat(20)}`);
+    expect(
+      folded
+        .split('\r\n')
+        .map((l, i) => (i === 0 ? l : l.slice(1)))
+        .join(''),
+    ).toBe(`DESCRIPTION:${'°C–'.repeat(20)}`);
   });
 
   it('escapes TEXT values (RFC 5545 §3.3.11)', () => {

@@ -46,7 +46,9 @@ const dateValue = (iso: string) => iso.replace(/-/g, '');
 /** The warnings of an event's species and method, so they travel with the events they concern. */
 function warningsFor(calendar: SowingCalendar, e: CalendarEvent): string[] {
   if (!e.speciesSlug) return [];
-  return calendar.warnings.filter((w) => w.speciesSlug === e.speciesSlug && (!w.method || !e.method || w.method === e.method)).map((w) => w.message);
+  return calendar.warnings
+    .filter((w) => w.speciesSlug === e.speciesSlug && (!w.method || !e.method || w.method === e.method))
+    .map((w) => w.message);
 }
 
 /**
@@ -58,17 +60,28 @@ export function calendarToIcs(calendar: SowingCalendar, options: IcsOptions): st
   const uids = uidsFor(calendar.events, options.planId);
   const stamp = `${dateValue(options.today)}T000000Z`;
   const lines = [
-    'BEGIN:VCALENDAR', 'VERSION:2.0', 'PRODID:-//Homeground//Sowing calendar//EN', 'CALSCALE:GREGORIAN', 'METHOD:PUBLISH',
+    'BEGIN:VCALENDAR',
+    'VERSION:2.0',
+    'PRODID:-//Homeground//Sowing calendar//EN',
+    'CALSCALE:GREGORIAN',
+    'METHOD:PUBLISH',
     'X-WR-CALNAME:Homeground sowing calendar',
   ];
   calendar.events.forEach((e, i) => {
     const notes = warningsFor(calendar, e);
-    const description = notes.length > 0 ? `${e.detail}\n\nPlease note:\n${notes.map((n) => `- ${n}`).join('\n')}` : e.detail;
+    const description =
+      notes.length > 0 ? `${e.detail}\n\nPlease note:\n${notes.map((n) => `- ${n}`).join('\n')}` : e.detail;
     lines.push(
-      'BEGIN:VEVENT', `UID:${uids[i]}`, `DTSTAMP:${stamp}`,
-      `DTSTART;VALUE=DATE:${dateValue(e.date)}`, `DTEND;VALUE=DATE:${dateValue(addDays(e.date, 1))}`,
-      `SUMMARY:${escapeText(e.title)}`, `DESCRIPTION:${escapeText(description)}`,
-      `CATEGORIES:Homeground,${escapeText(e.kind)}`, 'TRANSP:TRANSPARENT', 'END:VEVENT',
+      'BEGIN:VEVENT',
+      `UID:${uids[i]}`,
+      `DTSTAMP:${stamp}`,
+      `DTSTART;VALUE=DATE:${dateValue(e.date)}`,
+      `DTEND;VALUE=DATE:${dateValue(addDays(e.date, 1))}`,
+      `SUMMARY:${escapeText(e.title)}`,
+      `DESCRIPTION:${escapeText(description)}`,
+      `CATEGORIES:Homeground,${escapeText(e.kind)}`,
+      'TRANSP:TRANSPARENT',
+      'END:VEVENT',
     );
   });
   lines.push('END:VCALENDAR');

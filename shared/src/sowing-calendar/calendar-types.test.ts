@@ -2,7 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { sowingCalendarRequestSchema } from './calendar-types.js';
 
 describe('sowingCalendarRequestSchema', () => {
-  const ok = { lastFrost: '2027-05-10', today: '2026-10-01', plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }] };
+  const ok = {
+    lastFrost: '2027-05-10',
+    today: '2026-10-01',
+    plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }],
+  };
 
   it('accepts a request', () => {
     expect(sowingCalendarRequestSchema.parse({ ...ok, targetDate: '2027-06-12' }).targetDate).toBe('2027-06-12');

@@ -29,11 +29,22 @@ export function directSeedSchedule(plan: SowingPlan, season: Season): ScheduleOu
   let sow = plan.sowDate ?? usual;
   const warnings: CalendarWarning[] = [];
   if (!plan.sowDate && usual < season.today) {
-    sow = needsCold && season.today <= frostSeedCloses ? season.today : addDays(season.today, needsCold ? s.coldDays + s.warmDays : 0);
-    if (sow > springCloses) return { seasonPast: true, reason: `spring sowing where it will grow ends about ${springCloses}` };
-    warnings.push({ kind: 'late-start', speciesSlug: slug, method,
-      message: `${nameOf(species)}: the usual sowing day (${usual}) is past. ` +
-        (sow === season.today && needsCold ? `Frost-seeding still works until ${frostSeedCloses}: sow today.` : `Sow on ${sow}${needsCold ? ', after stratifying in the refrigerator from today' : ''}.`) });
+    sow =
+      needsCold && season.today <= frostSeedCloses
+        ? season.today
+        : addDays(season.today, needsCold ? s.coldDays + s.warmDays : 0);
+    if (sow > springCloses)
+      return { seasonPast: true, reason: `spring sowing where it will grow ends about ${springCloses}` };
+    warnings.push({
+      kind: 'late-start',
+      speciesSlug: slug,
+      method,
+      message:
+        `${nameOf(species)}: the usual sowing day (${usual}) is past. ` +
+        (sow === season.today && needsCold
+          ? `Frost-seeding still works until ${frostSeedCloses}: sow today.`
+          : `Sow on ${sow}${needsCold ? ', after stratifying in the refrigerator from today' : ''}.`),
+    });
   }
   const month = Number(sow.slice(5, 7));
   const winterSown = month >= 11 || month <= 2;
@@ -43,11 +54,17 @@ export function directSeedSchedule(plan: SowingPlan, season: Season): ScheduleOu
   const before = s.before.length > 0 ? `${s.before.join(' ')} ` : '';
 
   if (needsCold && !winterSown) {
-    event(addDays(sow, -s.coldDays - s.warmDays), 'cms-start', 'start cold-moist stratification', `${before}${cmsDetail(s.coldDays, s)}`);
+    event(
+      addDays(sow, -s.coldDays - s.warmDays),
+      'cms-start',
+      'start cold-moist stratification',
+      `${before}${cmsDetail(s.coldDays, s)}`,
+    );
   }
-  const how = needsCold && winterSown
-    ? 'Dormant seeding: scatter the seed on bare, weeded soil and press it in; winter stratifies it. Frost-seeding still works to the end of January.'
-    : 'Sow on bare, weeded soil once it is warm, and keep it damp until seedlings are up.';
+  const how =
+    needsCold && winterSown
+      ? 'Dormant seeding: scatter the seed on bare, weeded soil and press it in; winter stratifies it. Frost-seeding still works to the end of January.'
+      : 'Sow on bare, weeded soil once it is warm, and keep it damp until seedlings are up.';
   const prep = needsCold && !winterSown ? '' : before;
   const atSowing = s.atSowing.length > 0 ? ` ${s.atSowing.join(' ')}` : '';
   event(sow, 'sow', 'sow where it will grow', `${prep}${how} ${sowingDepthWords(species)}${atSowing}`);

@@ -76,7 +76,12 @@ export function outdoorPotsDetail(): string {
 }
 
 /** Outdoors, warm-moist days come from late summer and autumn, not from winter (they are not cold days). */
-export function warmThenColdDetail(warmDays: number, coldDays: number, firstSpring: boolean, doubleDormancy: boolean): string {
+export function warmThenColdDetail(
+  warmDays: number,
+  coldDays: number,
+  firstSpring: boolean,
+  doubleDormancy: boolean,
+): string {
   const when = firstSpring
     ? 'Sown now, the late-summer warmth gives the warm step and the winter the cold: seedlings the first spring.'
     : doubleDormancy
@@ -100,8 +105,10 @@ export function readyDetail(secondSeason: boolean, grownOutdoors: boolean): stri
 }
 
 export function potOnDetail(share: string): string {
-  return `Ready before the share on ${share}: hold the plants outdoors in light shade and water often. If roots circle the bottom, ` +
-    'move them into a pot one size up. Dampen dry potting mix before you handle it, and work outdoors or wear a dust mask.';
+  return (
+    `Ready before the share on ${share}: hold the plants outdoors in light shade and water often. If roots circle the bottom, ` +
+    'move them into a pot one size up. Dampen dry potting mix before you handle it, and work outdoors or wear a dust mask.'
+  );
 }
 
 export function collectPotsDetail(): string {

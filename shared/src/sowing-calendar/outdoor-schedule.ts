@@ -2,14 +2,22 @@ import { addDays, daysBetween, earlier, endOfFebruary, isoDate, later, yearOf, t
 import type { CalendarEvent, CalendarWarning, SowingPlan } from './calendar-types.js';
 import { DURATIONS, WINDOWS } from './durations.js';
 import {
-  cmsDetail, nameOf, outdoorPotsDetail, readyDetail, secondSeasonDetail, sowingDepthWords, warmSoilDetail, warmThenColdDetail,
+  cmsDetail,
+  nameOf,
+  outdoorPotsDetail,
+  readyDetail,
+  secondSeasonDetail,
+  sowingDepthWords,
+  warmSoilDetail,
+  warmThenColdDetail,
   winterSowingDetail,
 } from './event-text.js';
 import { readinessOf } from './readiness.js';
 import { sameDayNextYear, type ScheduleOutcome, type Season } from './season.js';
 import { stratificationOf } from './treatments.js';
 
-const inYearOf = (like: IsoDate, year: number): IsoDate => isoDate(year, Number(like.slice(5, 7)), Number(like.slice(8, 10)));
+const inYearOf = (like: IsoDate, year: number): IsoDate =>
+  isoDate(year, Number(like.slice(5, 7)), Number(like.slice(8, 10)));
 
 /**
  * Winter sowing (covered containers, December–February, M) and outdoor pots over winter (sown in
@@ -30,7 +38,10 @@ export function outdoorSchedule(plan: SowingPlan, season: Season): ScheduleOutco
   const coldStarts = isoDate(year - 1, WINDOWS.outdoorColdStarts.month, WINDOWS.outdoorColdStarts.day);
   // Winter sowing runs to the end of February (M); seed put out in pots or on the ground can still
   // be frost-seeded to the end of January (IPN, R).
-  const closes = method === 'winter-sowing' ? endOfFebruary(year) : isoDate(year, WINDOWS.frostSeedingCloses.month, WINDOWS.frostSeedingCloses.day);
+  const closes =
+    method === 'winter-sowing'
+      ? endOfFebruary(year)
+      : isoDate(year, WINDOWS.frostSeedingCloses.month, WINDOWS.frostSeedingCloses.day);
   const warnings: CalendarWarning[] = [];
 
   let usual: IsoDate;
@@ -50,8 +61,12 @@ export function outdoorSchedule(plan: SowingPlan, season: Season): ScheduleOutco
     sow = season.today;
   }
   if (method === 'winter-sowing' && s.warmDays === 0 && (sow < opens || sow > endOfFebruary(year))) {
-    warnings.push({ kind: 'outside-window', speciesSlug: slug, method,
-      message: `${name}: ${sow} is outside the winter-sowing window (${opens} to ${endOfFebruary(year)}).` });
+    warnings.push({
+      kind: 'outside-window',
+      speciesSlug: slug,
+      method,
+      message: `${name}: ${sow} is outside the winter-sowing window (${opens} to ${endOfFebruary(year)}).`,
+    });
   }
 
   const events: CalendarEvent[] = [];
@@ -68,16 +83,29 @@ export function outdoorSchedule(plan: SowingPlan, season: Season): ScheduleOutco
     sprouts = firstSpring ? warming : sameDayNextYear(warming);
     const coldFrom = warmThisAutumn ? coldStarts : sameDayNextYear(coldStarts);
     if (!warmThisAutumn) {
-      event(season.lastFrost, 'warm-moist-start', 'summer gives the warm-moist step',
-        `Keep the pots outdoors, damp and in light shade through the summer: ${s.warmDays} warm, moist days come before the cold.`);
+      event(
+        season.lastFrost,
+        'warm-moist-start',
+        'summer gives the warm-moist step',
+        `Keep the pots outdoors, damp and in light shade through the summer: ${s.warmDays} warm, moist days come before the cold.`,
+      );
     }
-    event(coldFrom, 'cms-start', "winter's cold-moist step begins outdoors",
-      `Leave the pots out in the cold and wet: ${s.coldDays} days of cold-moist stratification from now, given by the winter.`);
+    event(
+      coldFrom,
+      'cms-start',
+      "winter's cold-moist step begins outdoors",
+      `Leave the pots out in the cold and wet: ${s.coldDays} days of cold-moist stratification from now, given by the winter.`,
+    );
     fridgeNote = warmThenColdDetail(s.warmDays, s.coldDays, firstSpring, r.doubleDormancy);
     if (!firstSpring) {
-      warnings.push({ kind: 'second-season', speciesSlug: slug, method,
-        message: `${name} needs ${s.warmDays} warm then ${s.coldDays} cold days${r.doubleDormancy ? ' and sends up its first leaf only after a second winter' : ''}; ` +
-          `sown on ${sow}, expect seedlings in spring ${yearOf(sprouts)}, not ${year}.` });
+      warnings.push({
+        kind: 'second-season',
+        speciesSlug: slug,
+        method,
+        message:
+          `${name} needs ${s.warmDays} warm then ${s.coldDays} cold days${r.doubleDormancy ? ' and sends up its first leaf only after a second winter' : ''}; ` +
+          `sown on ${sow}, expect seedlings in spring ${yearOf(sprouts)}, not ${year}.`,
+      });
     }
   } else {
     const coldGiven = daysBetween(sow, warming);
@@ -86,46 +114,91 @@ export function outdoorSchedule(plan: SowingPlan, season: Season): ScheduleOutco
     if (short > 0) {
       const fridgeFrom = addDays(sow, -short);
       if (fridgeFrom >= season.today) {
-        event(fridgeFrom, 'cms-start', 'start cold-moist stratification in the refrigerator',
-          `${cmsDetail(short, s, r.stratifyInLight)} Then sow outdoors on ${sow}: winter gives the rest of the cold.`);
-        warnings.push({ kind: 'cold-too-short', speciesSlug: slug, method, days: short,
-          message: `${name} needs ${s.coldDays} days of cold-moist stratification; sown outdoors on ${sow} it gets about ${Math.max(coldGiven, 0)}. ` +
-            `Give it ${short} days in the refrigerator first, from ${fridgeFrom} (on the calendar).` });
+        event(
+          fridgeFrom,
+          'cms-start',
+          'start cold-moist stratification in the refrigerator',
+          `${cmsDetail(short, s, r.stratifyInLight)} Then sow outdoors on ${sow}: winter gives the rest of the cold.`,
+        );
+        warnings.push({
+          kind: 'cold-too-short',
+          speciesSlug: slug,
+          method,
+          days: short,
+          message:
+            `${name} needs ${s.coldDays} days of cold-moist stratification; sown outdoors on ${sow} it gets about ${Math.max(coldGiven, 0)}. ` +
+            `Give it ${short} days in the refrigerator first, from ${fridgeFrom} (on the calendar).`,
+        });
       } else {
-        warnings.push({ kind: 'cold-too-short', speciesSlug: slug, method, days: short,
-          message: `${name} needs ${s.coldDays} days of cold-moist stratification; sown outdoors on ${sow} it gets about ${Math.max(coldGiven, 0)}. ` +
-            `A shorter cold period gives fewer seedlings, and some seed may wait a year; sowing under lights after ${s.coldDays} days in the refrigerator is surer.` });
+        warnings.push({
+          kind: 'cold-too-short',
+          speciesSlug: slug,
+          method,
+          days: short,
+          message:
+            `${name} needs ${s.coldDays} days of cold-moist stratification; sown outdoors on ${sow} it gets about ${Math.max(coldGiven, 0)}. ` +
+            `A shorter cold period gives fewer seedlings, and some seed may wait a year; sowing under lights after ${s.coldDays} days in the refrigerator is surer.`,
+        });
       }
     }
   }
   if (r.doubleDormancy && s.warmDays === 0) sprouts = later(sprouts, sameDayNextYear(warming));
-  if (r.needsWarmSoil) sprouts = later(sprouts, addDays(inYearOf(season.lastFrost, yearOf(sprouts)), DURATIONS.warmSoilAfterFrostDays));
+  if (r.needsWarmSoil)
+    sprouts = later(sprouts, addDays(inYearOf(season.lastFrost, yearOf(sprouts)), DURATIONS.warmSoilAfterFrostDays));
 
   if (isLate) {
-    const still = s.warmDays > 0
-      ? 'sown today, the warm step comes next summer'
-      : `${method === 'winter-sowing' ? 'winter sowing' : 'frost-seeding pots outdoors'} still works until ${closes}`;
-    warnings.push({ kind: 'late-start', speciesSlug: slug, method,
-      message: `${name}: the usual sowing day (${usual}) is past, but ${still}. Sow today; seedlings are expected about ${sprouts}.` });
+    const still =
+      s.warmDays > 0
+        ? 'sown today, the warm step comes next summer'
+        : `${method === 'winter-sowing' ? 'winter sowing' : 'frost-seeding pots outdoors'} still works until ${closes}`;
+    warnings.push({
+      kind: 'late-start',
+      speciesSlug: slug,
+      method,
+      message: `${name}: the usual sowing day (${usual}) is past, but ${still}. Sow today; seedlings are expected about ${sprouts}.`,
+    });
   }
 
   const before = [...s.before, ...s.atSowing].join(' ');
   const how = method === 'winter-sowing' ? winterSowingDetail() : outdoorPotsDetail();
   const extra = [fridgeNote, r.needsWarmSoil ? warmSoilDetail(r.why) : ''].filter(Boolean).join(' ');
-  event(sow, 'sow', method === 'winter-sowing' ? 'winter-sow outdoors' : 'sow pots for outdoors',
-    `${before ? `${before} ` : ''}${how} ${sowingDepthWords(species)}${extra ? ` ${extra}` : ''}`);
-  event(sprouts, 'sprouts-expected', 'sprouts expected', 'Seedlings come up as the containers warm; keep them damp, never soggy.');
+  event(
+    sow,
+    'sow',
+    method === 'winter-sowing' ? 'winter-sow outdoors' : 'sow pots for outdoors',
+    `${before ? `${before} ` : ''}${how} ${sowingDepthWords(species)}${extra ? ` ${extra}` : ''}`,
+  );
+  event(
+    sprouts,
+    'sprouts-expected',
+    'sprouts expected',
+    'Seedlings come up as the containers warm; keep them damp, never soggy.',
+  );
   if (method === 'winter-sowing') {
-    event(addDays(sprouts, DURATIONS.winterSownPotUpAfterDays), 'pot-up', 'pot up', 'Tease the clump apart and move each seedling into its own cell or pot once it has true leaves.');
+    event(
+      addDays(sprouts, DURATIONS.winterSownPotUpAfterDays),
+      'pot-up',
+      'pot up',
+      'Tease the clump apart and move each seedling into its own cell or pot once it has true leaves.',
+    );
   } else {
-    event(addDays(sprouts, DURATIONS.outdoorPotUpAfterDays), 'pot-up', 'pot up',
-      'Where several seedlings share a pot, ease them apart and give each its own 3–4 in (8–10 cm) pot once it has true leaves.');
+    event(
+      addDays(sprouts, DURATIONS.outdoorPotUpAfterDays),
+      'pot-up',
+      'pot up',
+      'Where several seedlings share a pot, ease them apart and give each its own 3–4 in (8–10 cm) pot once it has true leaves.',
+    );
   }
   const plantOutThatYear = inYearOf(season.plantOutFrom, yearOf(sprouts));
   const grown = later(addDays(sprouts, 7 * r.outdoorWeeks), plantOutThatYear);
   const ready = r.secondSeason ? later(grown, sameDayNextYear(plantOutThatYear)) : grown;
   if (r.secondSeason && !warnings.some((w) => w.kind === 'second-season')) {
-    warnings.push({ kind: 'second-season', speciesSlug: slug, method, message: `${name}: ${secondSeasonDetail(r.why, ready)}` });
+    warnings.push({
+      kind: 'second-season',
+      speciesSlug: slug,
+      method,
+      message: `${name}: ${secondSeasonDetail(r.why, ready)}`,
+    });
   }
   event(ready, 'plant-out', 'ready to plant out or give', readyDetail(r.secondSeason, true));
   return { speciesSlug: slug, method, sowDate: sow, readyDate: ready, events, warnings };

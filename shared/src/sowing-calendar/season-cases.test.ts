@@ -21,7 +21,12 @@ import { buildSowingCalendar } from './sowing-calendar.js';
 
 type Extra = { lastFrost?: string; targetDate?: string; today: string; sowDate?: string };
 const cal = (species: Species, method: SowingMethod, x: Extra): SowingCalendar =>
-  buildSowingCalendar({ lastFrost: x.lastFrost ?? '2027-05-10', targetDate: x.targetDate, today: x.today, plans: [{ species, method, sowDate: x.sowDate }] });
+  buildSowingCalendar({
+    lastFrost: x.lastFrost ?? '2027-05-10',
+    targetDate: x.targetDate,
+    today: x.today,
+    plans: [{ species, method, sowDate: x.sowDate }],
+  });
 const on = (c: SowingCalendar, kind: string) => c.events.find((e) => e.kind === kind && e.speciesSlug !== null)?.date;
 const kinds = (c: SowingCalendar) => c.warnings.map((w) => w.kind).sort();
 
@@ -100,8 +105,16 @@ describe('a late start in January, three methods (golden alexanders, 90 d CMS)',
 
 describe('warm-then-cold seed outdoors: warm days are not cold days', () => {
   const warmCold = makeSpecies({
-    slug: 'actaea-racemosa', scientificName: 'Actaea racemosa', commonNames: ['black cohosh'],
-    germination: { treatments: [{ kind: 'warm-moist', days: 90 }, { kind: 'cold-moist', days: 90 }], methods: ['outdoor-pot-winter'] },
+    slug: 'actaea-racemosa',
+    scientificName: 'Actaea racemosa',
+    commonNames: ['black cohosh'],
+    germination: {
+      treatments: [
+        { kind: 'warm-moist', days: 90 },
+        { kind: 'cold-moist', days: 90 },
+      ],
+      methods: ['outdoor-pot-winter'],
+    },
   });
 
   it('sown fresh in late summer: 90 warm days to Nov 20, then winter cold; seedlings the first spring', () => {
@@ -131,7 +144,8 @@ describe('warm-then-cold seed outdoors: warm days are not cold days', () => {
 
 describe('readiness per species', () => {
   const pallida = makeSpecies({
-    slug: 'echinacea-pallida', scientificName: 'Echinacea pallida',
+    slug: 'echinacea-pallida',
+    scientificName: 'Echinacea pallida',
     germination: { treatments: [{ kind: 'cold-moist', days: 60 }], needsLight: true, sowingDepthMm: 0 },
   });
 
@@ -170,7 +184,11 @@ describe('a southern and a northern frost date (showy goldenrod, 60 d CMS)', () 
   });
 
   it('north, frost 2027-05-31: plant out after the watch, 2027-06-14, two days after a June 12 share', () => {
-    const c = cal(F.showyGoldenrod, 'indoor-lights', { today: '2026-10-01', lastFrost: '2027-05-31', targetDate: '2027-06-12' });
+    const c = cal(F.showyGoldenrod, 'indoor-lights', {
+      today: '2026-10-01',
+      lastFrost: '2027-05-31',
+      targetDate: '2027-06-12',
+    });
     expect(on(c, 'sow')).toBe('2027-04-05'); // frost − 8 weeks
     expect(on(c, 'cms-start')).toBe('2027-02-04'); // − 60 d
     expect(on(c, 'plant-out')).toBe('2027-06-14');
@@ -180,19 +198,31 @@ describe('a southern and a northern frost date (showy goldenrod, 60 d CMS)', () 
 
 describe('whole-calendar events', () => {
   it('frost watch, its end, the winter-sowing window end and the share with its reminders', () => {
-    const c = buildSowingCalendar({ lastFrost: '2027-05-10', today: '2026-10-01', targetDate: '2027-06-12',
-      plans: [{ species: F.wildBergamot, method: 'winter-sowing' }] });
+    const c = buildSowingCalendar({
+      lastFrost: '2027-05-10',
+      today: '2026-10-01',
+      targetDate: '2027-06-12',
+      plans: [{ species: F.wildBergamot, method: 'winter-sowing' }],
+    });
     const whole = Object.fromEntries(c.events.filter((e) => e.speciesSlug === null).map((e) => [e.kind, e.date]));
     expect(whole).toEqual({
-      'frost-watch': '2027-05-10', 'frost-watch-end': '2027-05-24', 'winter-sowing-window': '2026-12-01',
-      'winter-sowing-window-ends': '2027-02-28', 'vent-containers': '2027-03-29', 'collect-pots': '2027-05-29',
-      'label-pots': '2027-06-09', 'plant-share': '2027-06-12',
+      'frost-watch': '2027-05-10',
+      'frost-watch-end': '2027-05-24',
+      'winter-sowing-window': '2026-12-01',
+      'winter-sowing-window-ends': '2027-02-28',
+      'vent-containers': '2027-03-29',
+      'collect-pots': '2027-05-29',
+      'label-pots': '2027-06-09',
+      'plant-share': '2027-06-12',
     });
   });
 
   it('too little cold with time to spare adds the refrigerator step as an event', () => {
     // 150 d CMS, winter-sown 2026-12-01: 130 d of cold to 2027-04-10, so 20 d in the refrigerator from 2026-11-11.
-    const long = { ...F.showyGoldenrod, germination: { ...F.showyGoldenrod.germination, treatments: [{ kind: 'cold-moist' as const, days: 150 }] } };
+    const long = {
+      ...F.showyGoldenrod,
+      germination: { ...F.showyGoldenrod.germination, treatments: [{ kind: 'cold-moist' as const, days: 150 }] },
+    };
     const c = cal(long, 'winter-sowing', { today: '2026-10-01' });
     expect(on(c, 'cms-start')).toBe('2026-11-11');
     expect(c.warnings.find((w) => w.kind === 'cold-too-short')!.message).toContain('from 2026-11-11 (on the calendar)');

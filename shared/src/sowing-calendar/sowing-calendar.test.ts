@@ -5,10 +5,19 @@ import { daysBetween } from './calendar-date.js';
 import type { SowingCalendar } from './calendar-types.js';
 import { buildSowingCalendar } from './sowing-calendar.js';
 
-const withCms = (days: number): Species => ({ ...F.showyGoldenrod, germination: { ...F.showyGoldenrod.germination, treatments: [{ kind: 'cold-moist', days }] } });
-const cal = (species: Species, method: SowingMethod, extra: { lastFrost?: string; targetDate?: string; today?: string; sowDate?: string } = {}) =>
+const withCms = (days: number): Species => ({
+  ...F.showyGoldenrod,
+  germination: { ...F.showyGoldenrod.germination, treatments: [{ kind: 'cold-moist', days }] },
+});
+const cal = (
+  species: Species,
+  method: SowingMethod,
+  extra: { lastFrost?: string; targetDate?: string; today?: string; sowDate?: string } = {},
+) =>
   buildSowingCalendar({
-    lastFrost: extra.lastFrost ?? '2027-05-10', targetDate: extra.targetDate, today: extra.today ?? '2026-10-01',
+    lastFrost: extra.lastFrost ?? '2027-05-10',
+    targetDate: extra.targetDate,
+    today: extra.today ?? '2026-10-01',
     plans: [{ species, method, sowDate: extra.sowDate }],
   });
 const on = (c: SowingCalendar, kind: string) => c.events.find((e) => e.kind === kind && e.speciesSlug !== null)?.date;
@@ -34,7 +43,9 @@ describe('indoor sowing under lights', () => {
     const days = daysBetween(on(c, 'harden-off')!, on(c, 'plant-out')!);
     expect(days).toBeGreaterThanOrEqual(7);
     expect(days).toBeLessThanOrEqual(14);
-    expect(c.events.find((e) => e.kind === 'harden-off')!.detail).toContain('1–2 hours on the first day and add about an hour each day');
+    expect(c.events.find((e) => e.kind === 'harden-off')!.detail).toContain(
+      '1–2 hours on the first day and add about an hour each day',
+    );
   });
 
   it('tells how to stratify (IPN R: 1 part seed to 2–3 parts damp sand or vermiculite; 1–5 °C, D)', () => {
@@ -87,7 +98,10 @@ describe("the species' own stratification length", () => {
   });
 
   it('a cold step with no length gets the 60 d default (IPN R) and says so', () => {
-    const s = { ...F.showyGoldenrod, germination: { ...F.showyGoldenrod.germination, treatments: [{ kind: 'cold-moist' as const }] } };
+    const s = {
+      ...F.showyGoldenrod,
+      germination: { ...F.showyGoldenrod.germination, treatments: [{ kind: 'cold-moist' as const }] },
+    };
     const c = cal(s, 'indoor-lights');
     expect(daysBetween(on(c, 'cms-start')!, on(c, 'sow')!)).toBe(60);
     expect(c.events.find((e) => e.kind === 'cms-start')!.detail).toContain('The record gives no length');
@@ -143,17 +157,23 @@ describe('winter sowing, outdoor pots and direct seeding', () => {
     expect(on(cal(F.wildBergamot, 'direct-seed'), 'sow')).toBe('2027-05-24');
     const spring = cal(withCms(60), 'direct-seed', { sowDate: '2027-04-20' });
     expect(on(spring, 'cms-start')).toBe('2027-02-19');
-    expect(cal(F.wildBergamot, 'direct-seed', { targetDate: '2027-06-12' }).warnings.map((w) => w.kind)).toEqual(['not-for-share']);
+    expect(cal(F.wildBergamot, 'direct-seed', { targetDate: '2027-06-12' }).warnings.map((w) => w.kind)).toEqual([
+      'not-for-share',
+    ]);
   });
 });
 
 describe('determinism', () => {
   it('same input → same calendar; events in date order', () => {
-    const input = { lastFrost: '2027-05-10', today: '2026-10-01', plans: [
-      { species: F.swampMilkweed, method: 'indoor-lights' as const },
-      { species: F.goldenAlexanders, method: 'winter-sowing' as const },
-      { species: F.wildLupine, method: 'direct-seed' as const },
-    ] };
+    const input = {
+      lastFrost: '2027-05-10',
+      today: '2026-10-01',
+      plans: [
+        { species: F.swampMilkweed, method: 'indoor-lights' as const },
+        { species: F.goldenAlexanders, method: 'winter-sowing' as const },
+        { species: F.wildLupine, method: 'direct-seed' as const },
+      ],
+    };
     const a = buildSowingCalendar(input);
     expect(buildSowingCalendar(input)).toEqual(a);
     const dates = a.events.map((e) => e.date);

@@ -1,19 +1,48 @@
 import { addDays, endOfFebruary, isoDate, yearOf } from './calendar-date.js';
-import type { CalendarEvent, CalendarWarning, SowingCalendar, SowingCalendarInput, SowingPlan, SpeciesSchedule } from './calendar-types.js';
+import type {
+  CalendarEvent,
+  CalendarWarning,
+  SowingCalendar,
+  SowingCalendarInput,
+  SowingPlan,
+  SpeciesSchedule,
+} from './calendar-types.js';
 import { scheduleWarnings } from './calendar-warnings.js';
 import { directSeedSchedule } from './direct-seed-schedule.js';
 import { DURATIONS, WINDOWS } from './durations.js';
 import {
-  collectPotsDetail, frostWatchDetail, frostWatchEndDetail, labelPotsDetail, nameOf, plantShareDetail, potOnDetail, ventDetail,
-  winterSowingDetail, winterSowingEndsDetail,
+  collectPotsDetail,
+  frostWatchDetail,
+  frostWatchEndDetail,
+  labelPotsDetail,
+  nameOf,
+  plantShareDetail,
+  potOnDetail,
+  ventDetail,
+  winterSowingDetail,
+  winterSowingEndsDetail,
 } from './event-text.js';
 import { indoorSchedule } from './indoor-schedule.js';
 import { outdoorSchedule } from './outdoor-schedule.js';
 import { isSeasonPast, nextSeason, seasonOf, type ScheduleOutcome, type Season } from './season.js';
 
 const KIND_ORDER: CalendarEvent['kind'][] = [
-  'winter-sowing-window', 'warm-moist-start', 'cms-start', 'check-sprouts', 'sow', 'vent-containers', 'winter-sowing-window-ends',
-  'sprouts-expected', 'pot-up', 'harden-off', 'frost-watch', 'frost-watch-end', 'plant-out', 'pot-on', 'collect-pots', 'label-pots',
+  'winter-sowing-window',
+  'warm-moist-start',
+  'cms-start',
+  'check-sprouts',
+  'sow',
+  'vent-containers',
+  'winter-sowing-window-ends',
+  'sprouts-expected',
+  'pot-up',
+  'harden-off',
+  'frost-watch',
+  'frost-watch-end',
+  'plant-out',
+  'pot-on',
+  'collect-pots',
+  'label-pots',
   'plant-share',
 ];
 
@@ -48,8 +77,11 @@ function scheduleThisOrNext(plan: SowingPlan, season: Season): { schedule: Speci
     later = scheduleFor(plan, next);
   }
   const warning: CalendarWarning = {
-    kind: 'next-season', speciesSlug: plan.species.slug, method: plan.method,
-    message: `${nameOf(plan.species)}: too late this season (${outcome.reason}). These dates are for next season, ` +
+    kind: 'next-season',
+    speciesSlug: plan.species.slug,
+    method: plan.method,
+    message:
+      `${nameOf(plan.species)}: too late this season (${outcome.reason}). These dates are for next season, ` +
       `with the last frost about ${next.lastFrost}${plan.method === 'winter-sowing' || plan.method === 'outdoor-pot-winter' ? '; for plants this year, sow under lights instead' : ''}.`,
   };
   return { schedule: { ...later, warnings: [warning, ...later.warnings] }, lastFrost: next.lastFrost };
@@ -57,24 +89,54 @@ function scheduleThisOrNext(plan: SowingPlan, season: Season): { schedule: Speci
 
 /** Events for the whole calendar: frost date and watch, the winter-sowing window, the share. */
 function sharedEvents(input: SowingCalendarInput, winterSowingFrosts: Set<string>): CalendarEvent[] {
-  const all = (date: string, kind: CalendarEvent['kind'], title: string, detail: string): CalendarEvent => ({ date, kind, title, detail, speciesSlug: null });
+  const all = (date: string, kind: CalendarEvent['kind'], title: string, detail: string): CalendarEvent => ({
+    date,
+    kind,
+    title,
+    detail,
+    speciesSlug: null,
+  });
   const events: CalendarEvent[] = [
     all(input.lastFrost, 'frost-watch', 'Average last spring frost: frost watch begins', frostWatchDetail()),
-    all(addDays(input.lastFrost, DURATIONS.frostWatchDays), 'frost-watch-end', 'Frost watch ends: plant out', frostWatchEndDetail()),
+    all(
+      addDays(input.lastFrost, DURATIONS.frostWatchDays),
+      'frost-watch-end',
+      'Frost watch ends: plant out',
+      frostWatchEndDetail(),
+    ),
   ];
   for (const lastFrost of [...winterSowingFrosts].sort()) {
     const year = yearOf(lastFrost);
     events.push(
-      all(isoDate(year - 1, WINDOWS.winterSowingOpens.month, WINDOWS.winterSowingOpens.day), 'winter-sowing-window',
-        'Winter-sowing window opens (December to February)', winterSowingDetail()),
+      all(
+        isoDate(year - 1, WINDOWS.winterSowingOpens.month, WINDOWS.winterSowingOpens.day),
+        'winter-sowing-window',
+        'Winter-sowing window opens (December to February)',
+        winterSowingDetail(),
+      ),
       all(endOfFebruary(year), 'winter-sowing-window-ends', 'Winter-sowing window ends', winterSowingEndsDetail()),
-      all(addDays(lastFrost, -DURATIONS.ventBeforeFrostDays), 'vent-containers', 'Vent winter-sowing containers on warm days', ventDetail()),
+      all(
+        addDays(lastFrost, -DURATIONS.ventBeforeFrostDays),
+        'vent-containers',
+        'Vent winter-sowing containers on warm days',
+        ventDetail(),
+      ),
     );
   }
   if (input.targetDate) {
     events.push(
-      all(addDays(input.targetDate, -DURATIONS.collectPotsBeforeShareDays), 'collect-pots', 'Collect pots and trays for the plant share', collectPotsDetail()),
-      all(addDays(input.targetDate, -DURATIONS.labelPotsBeforeShareDays), 'label-pots', 'Label the pots for the plant share', labelPotsDetail()),
+      all(
+        addDays(input.targetDate, -DURATIONS.collectPotsBeforeShareDays),
+        'collect-pots',
+        'Collect pots and trays for the plant share',
+        collectPotsDetail(),
+      ),
+      all(
+        addDays(input.targetDate, -DURATIONS.labelPotsBeforeShareDays),
+        'label-pots',
+        'Label the pots for the plant share',
+        labelPotsDetail(),
+      ),
       all(input.targetDate, 'plant-share', 'Plant share', plantShareDetail()),
     );
   }
@@ -85,8 +147,16 @@ function sharedEvents(input: SowingCalendarInput, winterSowingFrosts: Set<string
 function holdingEvents(schedule: SpeciesSchedule, name: string, target: string | undefined): CalendarEvent[] {
   if (!target || !schedule.readyDate || schedule.readyDate > target) return [];
   if (schedule.readyDate > addDays(target, -DURATIONS.potOnWhenHeldDays)) return [];
-  return [{ date: schedule.readyDate, kind: 'pot-on', title: `${name}: hold and pot on until the share`, detail: potOnDetail(target),
-    speciesSlug: schedule.speciesSlug, method: schedule.method }];
+  return [
+    {
+      date: schedule.readyDate,
+      kind: 'pot-on',
+      title: `${name}: hold and pot on until the share`,
+      detail: potOnDetail(target),
+      speciesSlug: schedule.speciesSlug,
+      method: schedule.method,
+    },
+  ];
 }
 
 /**
@@ -102,8 +172,14 @@ export function buildSowingCalendar(input: SowingCalendarInput): SowingCalendar 
     const { schedule, lastFrost } = scheduleThisOrNext(plan, season);
     if (plan.method === 'winter-sowing') winterSowingFrosts.add(lastFrost);
     const thisSeason = lastFrost === input.lastFrost;
-    const events = [...schedule.events, ...(thisSeason ? holdingEvents(schedule, nameOf(plan.species), input.targetDate) : [])];
-    const warnings = [...schedule.warnings, ...scheduleWarnings(plan, schedule, input.today, thisSeason ? input.targetDate : undefined)];
+    const events = [
+      ...schedule.events,
+      ...(thisSeason ? holdingEvents(schedule, nameOf(plan.species), input.targetDate) : []),
+    ];
+    const warnings = [
+      ...schedule.warnings,
+      ...scheduleWarnings(plan, schedule, input.today, thisSeason ? input.targetDate : undefined),
+    ];
     return { ...schedule, events, warnings };
   });
   const events = [...sharedEvents(input, winterSowingFrosts), ...schedules.flatMap((s) => s.events)].sort(

@@ -13,20 +13,37 @@ export type GroupRole = z.infer<typeof groupRoleSchema>;
 export const PASSWORD_MIN_LENGTH = 10;
 export const PASSWORD_MAX_LENGTH = 200;
 
-export const registerRequestSchema = z.object({
-  email: z.string().trim().toLowerCase().max(254, 'must be at most 254 characters').email('must be an e-mail address'),
-  password: z
-    .string()
-    .min(PASSWORD_MIN_LENGTH, `must be at least ${PASSWORD_MIN_LENGTH} characters`)
-    .max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
-  displayName: z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters'),
-}).strict();
+export const registerRequestSchema = z
+  .object({
+    email: z
+      .string()
+      .trim()
+      .toLowerCase()
+      .max(254, 'must be at most 254 characters')
+      .email('must be an e-mail address'),
+    password: z
+      .string()
+      .min(PASSWORD_MIN_LENGTH, `must be at least ${PASSWORD_MIN_LENGTH} characters`)
+      .max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
+    displayName: z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters'),
+  })
+  .strict();
 export type RegisterRequest = z.infer<typeof registerRequestSchema>;
 
-export const loginRequestSchema = z.object({
-  email: z.string().trim().toLowerCase().max(254, 'must be at most 254 characters').email('must be an e-mail address'),
-  password: z.string().min(1, 'must not be empty').max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
-}).strict();
+export const loginRequestSchema = z
+  .object({
+    email: z
+      .string()
+      .trim()
+      .toLowerCase()
+      .max(254, 'must be at most 254 characters')
+      .email('must be an e-mail address'),
+    password: z
+      .string()
+      .min(1, 'must not be empty')
+      .max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
+  })
+  .strict();
 export type LoginRequest = z.infer<typeof loginRequestSchema>;
 
 /** `PATCH /api/users/:id/role`: an admin sets a person's global role. */
@@ -34,10 +51,17 @@ export const setRoleRequestSchema = z.object({ role: globalRoleSchema }).strict(
 export type SetRoleRequest = z.infer<typeof setRoleRequestSchema>;
 
 /** `PUT /api/groups/:slug/members`: an organiser adds a person (by e-mail) or changes their role. */
-export const setMemberRequestSchema = z.object({
-  email: z.string().trim().toLowerCase().max(254, 'must be at most 254 characters').email('must be an e-mail address'),
-  role: groupRoleSchema,
-}).strict();
+export const setMemberRequestSchema = z
+  .object({
+    email: z
+      .string()
+      .trim()
+      .toLowerCase()
+      .max(254, 'must be at most 254 characters')
+      .email('must be an e-mail address'),
+    role: groupRoleSchema,
+  })
+  .strict();
 export type SetMemberRequest = z.infer<typeof setMemberRequestSchema>;
 
 export interface GroupMembership {

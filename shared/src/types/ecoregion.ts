@@ -18,7 +18,10 @@ export const ecoregionSchema = z.object({
 export type Ecoregion = z.infer<typeof ecoregionSchema>;
 
 /** An EPA US Level III ecoregion code, "1"–"85" (as a path parameter or a field). */
-export const ecoregionCodeSchema = z.string().max(2, 'must be an EPA Level III code, 1–85').regex(/^([1-9]|[1-7][0-9]|8[0-5])$/, 'must be an EPA Level III code, 1–85');
+export const ecoregionCodeSchema = z
+  .string()
+  .max(2, 'must be an EPA Level III code, 1–85')
+  .regex(/^([1-9]|[1-7][0-9]|8[0-5])$/, 'must be an EPA Level III code, 1–85');
 
 /** Query string of `GET /api/ecoregions`: only the regions that reach into a state. */
 export const ecoregionListQuerySchema = z

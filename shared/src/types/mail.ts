@@ -16,7 +16,10 @@ export interface OutboxMessage {
 
 export const outboxQuerySchema = z
   .object({
-    kind: z.string().regex(/^[a-z-]{1,40}$/, 'lower-case words joined by hyphens').optional(),
+    kind: z
+      .string()
+      .regex(/^[a-z-]{1,40}$/, 'lower-case words joined by hyphens')
+      .optional(),
     to: z.string().trim().toLowerCase().email('must be an e-mail address').max(254).optional(),
   })
   .strict();

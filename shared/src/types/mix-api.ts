@@ -1,7 +1,14 @@
 import { z } from 'zod';
 import { type SowingCalendar, isoDateSchema, sowingCalendarRequestSchema } from '../sowing-calendar/calendar-types.js';
 import type { SeedingLine } from '../quantities/seeding-plan.js';
-import { type Coverage, type PaletteAlternative, type PaletteResult, type ScoredSpecies, MAX_LISTED_SLUGS, paletteRequestSchema } from './recommendation.js';
+import {
+  type Coverage,
+  type PaletteAlternative,
+  type PaletteResult,
+  type ScoredSpecies,
+  MAX_LISTED_SLUGS,
+  paletteRequestSchema,
+} from './recommendation.js';
 import { type Site, MAX_AREA_SQ_FT, MAX_AREA_SQ_M } from './site.js';
 import type { SpeciesSummary } from './species-query.js';
 import { slugSchema } from './species.js';
@@ -53,26 +60,30 @@ export interface MixResponse {
   lossFactor: number;
 }
 
-export const alternativesRequestSchema = paletteRequestSchema.extend({
-  /** The slugs now in the mix. */
-  chosen: z.array(slugSchema).min(1).max(MAX_LISTED_SLUGS),
-  /** The chosen species to find replacements for. */
-  slot: slugSchema,
-  /** Offer replacements of any growth form (a shrub for a wildflower); by default only the slot's own kind. */
-  acrossForms: z.boolean().default(false),
-}).strict();
+export const alternativesRequestSchema = paletteRequestSchema
+  .extend({
+    /** The slugs now in the mix. */
+    chosen: z.array(slugSchema).min(1).max(MAX_LISTED_SLUGS),
+    /** The chosen species to find replacements for. */
+    slot: slugSchema,
+    /** Offer replacements of any growth form (a shrub for a wildflower); by default only the slot's own kind. */
+    acrossForms: z.boolean().default(false),
+  })
+  .strict();
 export type AlternativesRequest = z.input<typeof alternativesRequestSchema>;
 
 export interface AlternativesResponse {
   alternatives: (PaletteAlternative & { species: SpeciesSummary })[];
 }
 
-export const saveMixRequestSchema = z.object({
-  name: z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters'),
-  request: paletteRequestSchema,
-  /** The species in the mix as the user left it (after locks, swaps and rebalancing). */
-  chosen: z.array(slugSchema).min(1).max(MAX_LISTED_SLUGS),
-}).strict();
+export const saveMixRequestSchema = z
+  .object({
+    name: z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters'),
+    request: paletteRequestSchema,
+    /** The species in the mix as the user left it (after locks, swaps and rebalancing). */
+    chosen: z.array(slugSchema).min(1).max(MAX_LISTED_SLUGS),
+  })
+  .strict();
 export type SaveMixRequest = z.input<typeof saveMixRequestSchema>;
 
 export interface SavedMix {
@@ -96,7 +107,11 @@ export const quantitiesRequestSchema = z
     areaSqFt: z.number().positive('must be more than 0').max(MAX_AREA_SQ_FT, 'must be at most 10 acres').optional(),
     areaSqM: z.number().positive('must be more than 0').max(MAX_AREA_SQ_M, 'must be at most 10 acres').optional(),
     species: z
-      .array(z.object({ slug: slugSchema, spacingIn: z.number().min(4, 'must be at least 4 in').max(240).optional() }).strict())
+      .array(
+        z
+          .object({ slug: slugSchema, spacingIn: z.number().min(4, 'must be at least 4 in').max(240).optional() })
+          .strict(),
+      )
       .min(1)
       .max(MAX_LISTED_SLUGS),
     /** Fraction of seedlings lost before planting out; default 0.2 (common practice). */
@@ -106,8 +121,12 @@ export const quantitiesRequestSchema = z
   })
   .strict()
   .refine((q) => (q.areaSqFt === undefined) !== (q.areaSqM === undefined), {
-    message: 'give the area in ft² (areaSqFt) or in m² (areaSqM), not both', path: ['areaSqFt'],
+    message: 'give the area in ft² (areaSqFt) or in m² (areaSqM), not both',
+    path: ['areaSqFt'],
   })
-  .transform(({ areaSqM, areaSqFt, ...rest }) => ({ ...rest, areaSqFt: areaSqFt ?? squareMetresToSquareFeet(areaSqM as number) }));
+  .transform(({ areaSqM, areaSqFt, ...rest }) => ({
+    ...rest,
+    areaSqFt: areaSqFt ?? squareMetresToSquareFeet(areaSqM as number),
+  }));
 export type QuantitiesRequest = z.infer<typeof quantitiesRequestSchema>;
 export type QuantitiesRequestInput = z.input<typeof quantitiesRequestSchema>;

@@ -4,7 +4,12 @@ import type { StateCode } from './species.js';
 /** `GET /api/places/lookup`: a 5-digit ZIP code, or a latitude and longitude (WGS84 degrees). */
 export const placeQuerySchema = z
   .object({
-    zip: z.string().trim().max(10, 'must be a 5-digit US ZIP code').regex(/^\d{5}$/, 'must be a 5-digit US ZIP code').optional(),
+    zip: z
+      .string()
+      .trim()
+      .max(10, 'must be a 5-digit US ZIP code')
+      .regex(/^\d{5}$/, 'must be a 5-digit US ZIP code')
+      .optional(),
     lat: z.coerce.number().min(-90, 'must be −90 to 90').max(90, 'must be −90 to 90').optional(),
     lon: z.coerce.number().min(-180, 'must be −180 to 180').max(180, 'must be −180 to 180').optional(),
   })

@@ -7,9 +7,31 @@ export const BLOOM_PERIODS = ['early', 'mid', 'late'] as const;
 export type BloomPeriod = (typeof BLOOM_PERIODS)[number];
 
 export type ScorePartName =
-  | 'native' | 'sun' | 'moisture' | 'soil' | 'habitat' | 'host-plant' | 'monarch-host' | 'pollinators'
-  | 'birds' | 'bloom-gap' | 'height' | 'room' | 'deer' | 'spread' | 'rain-garden' | 'shade-garden'
-  | 'thrives' | 'community' | 'wetland-class' | 'acid-soil' | 'bees' | 'availability' | 'seed-ease' | 'fern' | 'ecoregion';
+  | 'native'
+  | 'sun'
+  | 'moisture'
+  | 'soil'
+  | 'habitat'
+  | 'host-plant'
+  | 'monarch-host'
+  | 'pollinators'
+  | 'birds'
+  | 'bloom-gap'
+  | 'height'
+  | 'room'
+  | 'deer'
+  | 'spread'
+  | 'rain-garden'
+  | 'shade-garden'
+  | 'thrives'
+  | 'community'
+  | 'wetland-class'
+  | 'acid-soil'
+  | 'bees'
+  | 'availability'
+  | 'seed-ease'
+  | 'fern'
+  | 'ecoregion';
 
 /** One line of "why it fits": points and a sentence a homeowner understands. */
 export interface ScorePart {
@@ -54,27 +76,30 @@ export const MAX_MIX_SIZE = 40;
 /** Most slugs one request may list (locks, exclusions, a saved mix): more than any mix holds. */
 export const MAX_LISTED_SLUGS = 60;
 
-export const paletteOptionsSchema = z.object({
-  /** Number of species in the mix; from the area when left out. */
-  size: z.number().int().min(1).max(MAX_MIX_SIZE).optional(),
-  /** Always in the mix: kept species, swapped-in species and species added by search. */
-  locked: z.array(slugSchema).max(MAX_LISTED_SLUGS).default([]),
-  /** Never in the mix (wins over a lock on the same slug). */
-  excluded: z.array(slugSchema).max(MAX_LISTED_SLUGS).default([]),
-}).strict();
+export const paletteOptionsSchema = z
+  .object({
+    /** Number of species in the mix; from the area when left out. */
+    size: z.number().int().min(1).max(MAX_MIX_SIZE).optional(),
+    /** Always in the mix: kept species, swapped-in species and species added by search. */
+    locked: z.array(slugSchema).max(MAX_LISTED_SLUGS).default([]),
+    /** Never in the mix (wins over a lock on the same slug). */
+    excluded: z.array(slugSchema).max(MAX_LISTED_SLUGS).default([]),
+  })
+  .strict();
 export type PaletteOptions = z.input<typeof paletteOptionsSchema>;
 
 export const recommendRequestSchema = z.object({ site: siteRequestSchema, region: regionContextSchema }).strict();
 export type RecommendRequest = z.input<typeof recommendRequestSchema>;
 
-export const paletteRequestSchema = recommendRequestSchema.extend({
-  options: paletteOptionsSchema.default({ locked: [], excluded: [] }),
-}).strict();
+export const paletteRequestSchema = recommendRequestSchema
+  .extend({
+    options: paletteOptionsSchema.default({ locked: [], excluded: [] }),
+  })
+  .strict();
 export type PaletteRequest = z.input<typeof paletteRequestSchema>;
 
 export type PaletteConstraintId =
-  | 'cp42-early' | 'cp42-mid' | 'cp42-late' | 'cp42-flowering' | 'monarch-milkweed' | 'grass-share'
-  | 'height-spread';
+  'cp42-early' | 'cp42-mid' | 'cp42-late' | 'cp42-flowering' | 'monarch-milkweed' | 'grass-share' | 'height-spread';
 
 /** One design rule checked on the mix; an unmet rule always says why in words. */
 export interface PaletteConstraint {
@@ -92,7 +117,15 @@ export interface PaletteConstraint {
 
 export interface ObjectiveTerm {
   name:
-    | 'fit' | 'host-plants' | 'bloom-periods' | 'bloom-months' | 'flowering-count' | 'milkweed' | 'grasses' | 'height-tiers' | 'colours'
+    | 'fit'
+    | 'host-plants'
+    | 'bloom-periods'
+    | 'bloom-months'
+    | 'flowering-count'
+    | 'milkweed'
+    | 'grasses'
+    | 'height-tiers'
+    | 'colours'
     | 'genus-variety';
   value: number;
 }

@@ -21,20 +21,70 @@ function fieldOf(schema: z.ZodType, input: unknown): string | null {
 
 describe('request schemas: one set of rules the API and the forms share', () => {
   it.each([
-    ['a register request', registerRequestSchema, { email: 'a@example.org', password: 'correct-horse', displayName: 'A' }, null],
-    ['register with an unknown field', registerRequestSchema, { email: 'a@example.org', password: 'correct-horse', displayName: 'A', role: 'admin' }, 'role'],
-    ['sign-in with a 201-character password', loginRequestSchema, { email: 'a@example.org', password: 'p'.repeat(201) }, 'password'],
+    [
+      'a register request',
+      registerRequestSchema,
+      { email: 'a@example.org', password: 'correct-horse', displayName: 'A' },
+      null,
+    ],
+    [
+      'register with an unknown field',
+      registerRequestSchema,
+      { email: 'a@example.org', password: 'correct-horse', displayName: 'A', role: 'admin' },
+      'role',
+    ],
+    [
+      'sign-in with a 201-character password',
+      loginRequestSchema,
+      { email: 'a@example.org', password: 'p'.repeat(201) },
+      'password',
+    ],
     ['a role', setRoleRequestSchema, { role: 'curator' }, null],
     ['a role that does not exist', setRoleRequestSchema, { role: 'owner' }, 'role'],
     ['a member with a group role', setMemberRequestSchema, { email: 'a@example.org', role: 'grower' }, null],
-    ['61 locked species', paletteRequestSchema, { site, region, options: { locked: Array.from({ length: 61 }, (_, i) => `s-${i}`) } }, 'options.locked'],
-    ['an unknown key inside the site', paletteRequestSchema, { site: { ...site, colour: 'red' }, region }, 'site.colour'],
-    ['a saved mix name of 81 characters', saveMixRequestSchema, { name: 'n'.repeat(81), request: { site, region }, chosen: ['zizia-aurea'] }, 'name'],
+    [
+      '61 locked species',
+      paletteRequestSchema,
+      { site, region, options: { locked: Array.from({ length: 61 }, (_, i) => `s-${i}`) } },
+      'options.locked',
+    ],
+    [
+      'an unknown key inside the site',
+      paletteRequestSchema,
+      { site: { ...site, colour: 'red' }, region },
+      'site.colour',
+    ],
+    [
+      'a saved mix name of 81 characters',
+      saveMixRequestSchema,
+      { name: 'n'.repeat(81), request: { site, region }, chosen: ['zizia-aurea'] },
+      'name',
+    ],
     // 10 acres = 40,468.564224 m² (NIST Handbook 44: 1 acre = 4,046.8564224 m²)
-    ['quantities for exactly 10 acres in m²', quantitiesRequestSchema, { areaSqM: 40_468.564224, species: [{ slug: 'zizia-aurea' }] }, null],
-    ['quantities for more than 10 acres in m²', quantitiesRequestSchema, { areaSqM: 40_469, species: [{ slug: 'zizia-aurea' }] }, 'areaSqM'],
-    ['a calendar in 2200', calendarRequestSchema, { lastFrost: '2200-05-10', plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }] }, null],
-    ['a calendar in 9999', calendarRequestSchema, { lastFrost: '9999-05-10', plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }] }, 'lastFrost'],
+    [
+      'quantities for exactly 10 acres in m²',
+      quantitiesRequestSchema,
+      { areaSqM: 40_468.564224, species: [{ slug: 'zizia-aurea' }] },
+      null,
+    ],
+    [
+      'quantities for more than 10 acres in m²',
+      quantitiesRequestSchema,
+      { areaSqM: 40_469, species: [{ slug: 'zizia-aurea' }] },
+      'areaSqM',
+    ],
+    [
+      'a calendar in 2200',
+      calendarRequestSchema,
+      { lastFrost: '2200-05-10', plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }] },
+      null,
+    ],
+    [
+      'a calendar in 9999',
+      calendarRequestSchema,
+      { lastFrost: '9999-05-10', plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }] },
+      'lastFrost',
+    ],
     ['a photo width offered', photoQuerySchema, { w: '400' }, null],
     ['a photo width not offered', photoQuerySchema, { w: '401' }, 'w'],
     ['a state query', ecoregionListQuerySchema, { state: 'WI' }, null],
@@ -52,6 +102,9 @@ describe('request schemas: one set of rules the API and the forms share', () => 
     const body = JSON.parse('{"role":"curator","__proto__":{"role":"admin"},"constructor":1}');
     const r = setRoleRequestSchema.safeParse(body);
     expect(r.success).toBe(false);
-    expect(r.error!.issues.flatMap((i) => (i.code === 'unrecognized_keys' ? i.keys : []))).toEqual(['__proto__', 'constructor']);
+    expect(r.error!.issues.flatMap((i) => (i.code === 'unrecognized_keys' ? i.keys : []))).toEqual([
+      '__proto__',
+      'constructor',
+    ]);
   });
 });

@@ -1,7 +1,18 @@
 import { z } from 'zod';
-import { CALENDAR_EVENT_KINDS, CALENDAR_WARNING_KINDS, type SowingCalendar } from '../sowing-calendar/calendar-types.js';
 import {
-  type AuthResponse, GLOBAL_ROLES, GROUP_ROLES, type Group, type GroupMember, type HealthResponse, type StatsResponse, type User,
+  CALENDAR_EVENT_KINDS,
+  CALENDAR_WARNING_KINDS,
+  type SowingCalendar,
+} from '../sowing-calendar/calendar-types.js';
+import {
+  type AuthResponse,
+  GLOBAL_ROLES,
+  GROUP_ROLES,
+  type Group,
+  type GroupMember,
+  type HealthResponse,
+  type StatsResponse,
+  type User,
 } from './auth.js';
 import { ecoregionSchema } from './ecoregion.js';
 import type { Invitation, InvitationPreview } from './invitation.js';
@@ -13,7 +24,14 @@ import type { AlternativesResponse, MixQuantity, MixResponse, RecommendationsRes
 import type { PlaceLookup } from './place.js';
 import { siteSchema } from './site.js';
 import {
-  CAUTION_KINDS, FLOWER_COLOURS, GROWTH_FORMS, MOISTURE_LEVELS, SOWING_METHODS, speciesSchema, stateCodeSchema, SUN_LEVELS,
+  CAUTION_KINDS,
+  FLOWER_COLOURS,
+  GROWTH_FORMS,
+  MOISTURE_LEVELS,
+  SOWING_METHODS,
+  speciesSchema,
+  stateCodeSchema,
+  SUN_LEVELS,
 } from './species.js';
 import type { CsvImportResult, SpeciesPage, SpeciesSummary } from './species-query.js';
 
@@ -31,7 +49,9 @@ export const userResponseSchema = z.object({
   email: z.string(),
   displayName: z.string(),
   role: z.enum(GLOBAL_ROLES),
-  groups: z.array(z.object({ groupId: z.string(), groupSlug: z.string(), groupName: z.string(), role: z.enum(GROUP_ROLES) })),
+  groups: z.array(
+    z.object({ groupId: z.string(), groupSlug: z.string(), groupName: z.string(), role: z.enum(GROUP_ROLES) }),
+  ),
   createdAt: isoDateTime,
 }) satisfies z.ZodType<User>;
 
@@ -42,13 +62,21 @@ export const authResponseSchema = z.object({
 }) satisfies z.ZodType<AuthResponse>;
 
 export const groupResponseSchema = z.object({
-  id: z.string(), slug: z.string(), name: z.string(), town: z.string(), state: z.string(),
-  ecoregionCode: z.string().nullable(), members: z.number().int(),
+  id: z.string(),
+  slug: z.string(),
+  name: z.string(),
+  town: z.string(),
+  state: z.string(),
+  ecoregionCode: z.string().nullable(),
+  members: z.number().int(),
 }) satisfies z.ZodType<Group>;
 
 /** A member of a group as its members see them (names and e-mails only for people in the group). */
 export const groupMemberResponseSchema = z.object({
-  userId: z.string(), displayName: z.string(), email: z.string().nullable(), role: z.enum(GROUP_ROLES),
+  userId: z.string(),
+  displayName: z.string(),
+  email: z.string().nullable(),
+  role: z.enum(GROUP_ROLES),
 }) satisfies z.ZodType<GroupMember>;
 export type GroupMemberResponse = z.infer<typeof groupMemberResponseSchema>;
 
@@ -60,11 +88,17 @@ export const healthResponseSchema = z.object({
 }) satisfies z.ZodType<HealthResponse>;
 
 export const statsResponseSchema = z.object({
-  species: z.number().int(), groups: z.number().int(), ecoregions: z.number().int(), users: z.number().int(),
+  species: z.number().int(),
+  groups: z.number().int(),
+  ecoregions: z.number().int(),
+  users: z.number().int(),
 }) satisfies z.ZodType<StatsResponse>;
 
 export const speciesSummarySchema = z.object({
-  slug: z.string(), scientificName: z.string(), commonName: z.string(), family: z.string(),
+  slug: z.string(),
+  scientificName: z.string(),
+  commonName: z.string(),
+  family: z.string(),
   growthForm: z.enum(GROWTH_FORMS),
   heightCm: z.object({ min: z.number(), max: z.number() }),
   bloomMonths: z.array(z.number().int()),
@@ -78,15 +112,25 @@ export const speciesSummarySchema = z.object({
 }) satisfies z.ZodType<SpeciesSummary>;
 
 export const speciesPageSchema = z.object({
-  items: z.array(speciesSummarySchema), total: z.number().int(), page: z.number().int(), pageSize: z.number().int(),
+  items: z.array(speciesSummarySchema),
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
 }) satisfies z.ZodType<SpeciesPage>;
 
 export const speciesDetailSchema = speciesSchema.extend({ hasPhoto: z.boolean() });
 
-export const csvImportResultSchema = z.object({ created: z.number().int(), updated: z.number().int() }) satisfies z.ZodType<CsvImportResult>;
+export const csvImportResultSchema = z.object({
+  created: z.number().int(),
+  updated: z.number().int(),
+}) satisfies z.ZodType<CsvImportResult>;
 
 export const photoUploadResultSchema = z.object({
-  slug: z.string(), mime: z.string(), bytes: z.number().int(), width: z.number().int(), height: z.number().int(),
+  slug: z.string(),
+  mime: z.string(),
+  bytes: z.number().int(),
+  width: z.number().int(),
+  height: z.number().int(),
 });
 
 export const ecoregionListSchema = z.array(ecoregionSchema);
@@ -94,7 +138,12 @@ export const ecoregionListSchema = z.array(ecoregionSchema);
 export const boundaryImportResultSchema = z.object({ regions: z.number().int(), vertices: z.number().int() });
 
 const ecoregionBriefSchema = z.object({
-  code: z.string(), name: z.string(), share: z.number().nullable(), description: z.string(), level1: z.string(), level2: z.string(),
+  code: z.string(),
+  name: z.string(),
+  share: z.number().nullable(),
+  description: z.string(),
+  level1: z.string(),
+  level2: z.string(),
 });
 export const placeLookupSchema = z.object({
   point: z.object({ lat: z.number(), lon: z.number() }),
@@ -107,22 +156,51 @@ export const placeLookupSchema = z.object({
 
 const scorePartSchema = z.object({
   name: z.enum([
-    'native', 'sun', 'moisture', 'soil', 'habitat', 'host-plant', 'monarch-host', 'pollinators', 'birds', 'bloom-gap',
-    'height', 'room', 'deer', 'spread', 'rain-garden', 'shade-garden', 'thrives', 'community', 'wetland-class',
-    'acid-soil', 'bees', 'availability', 'seed-ease', 'fern', 'ecoregion',
+    'native',
+    'sun',
+    'moisture',
+    'soil',
+    'habitat',
+    'host-plant',
+    'monarch-host',
+    'pollinators',
+    'birds',
+    'bloom-gap',
+    'height',
+    'room',
+    'deer',
+    'spread',
+    'rain-garden',
+    'shade-garden',
+    'thrives',
+    'community',
+    'wetland-class',
+    'acid-soil',
+    'bees',
+    'availability',
+    'seed-ease',
+    'fern',
+    'ecoregion',
   ]),
   points: z.number(),
   reason: z.string(),
 });
 const scoredSpeciesSchema = z.object({
-  slug: z.string(), score: z.number(), parts: z.array(scorePartSchema), eligible: z.boolean(),
-  ineligibleReason: z.string().optional(), nearMiss: z.boolean(), tieBreak: z.number().optional(),
+  slug: z.string(),
+  score: z.number(),
+  parts: z.array(scorePartSchema),
+  eligible: z.boolean(),
+  ineligibleReason: z.string().optional(),
+  nearMiss: z.boolean(),
+  tieBreak: z.number().optional(),
 }) satisfies z.ZodType<ScoredSpecies>;
 const coverageSchema = z.object({ covered: z.boolean(), message: z.string().optional() });
 const scoredWithSpeciesSchema = scoredSpeciesSchema.extend({ species: speciesSummarySchema });
 
 export const recommendationsResponseSchema = z.object({
-  site: siteSchema, ranked: z.array(scoredWithSpeciesSchema), alsoConsider: z.array(scoredWithSpeciesSchema),
+  site: siteSchema,
+  ranked: z.array(scoredWithSpeciesSchema),
+  alsoConsider: z.array(scoredWithSpeciesSchema),
   coverage: coverageSchema,
 }) satisfies z.ZodType<RecommendationsResponse>;
 
@@ -131,24 +209,62 @@ const paletteResultSchema = z.object({
   coverage: coverageSchema,
   plantingMethod: z.enum(['plugs', 'seeding']),
   sizeReason: z.string(),
-  chosen: z.array(z.object({
-    slug: z.string(), score: z.number(), parts: z.array(scorePartSchema), roles: z.array(z.string()), locked: z.boolean(),
-  })),
+  chosen: z.array(
+    z.object({
+      slug: z.string(),
+      score: z.number(),
+      parts: z.array(scorePartSchema),
+      roles: z.array(z.string()),
+      locked: z.boolean(),
+    }),
+  ),
   objective: z.number(),
-  terms: z.array(z.object({
-    name: z.enum(['fit', 'host-plants', 'bloom-periods', 'bloom-months', 'flowering-count', 'milkweed', 'grasses', 'height-tiers', 'colours', 'genus-variety']),
-    value: z.number(),
-  })),
-  constraints: z.array(z.object({
-    id: z.enum(['cp42-early', 'cp42-mid', 'cp42-late', 'cp42-flowering', 'monarch-milkweed', 'grass-share', 'height-spread']),
-    rule: z.string(), applies: z.boolean(), met: z.boolean(), detail: z.string(), source: z.string(),
-  })),
+  terms: z.array(
+    z.object({
+      name: z.enum([
+        'fit',
+        'host-plants',
+        'bloom-periods',
+        'bloom-months',
+        'flowering-count',
+        'milkweed',
+        'grasses',
+        'height-tiers',
+        'colours',
+        'genus-variety',
+      ]),
+      value: z.number(),
+    }),
+  ),
+  constraints: z.array(
+    z.object({
+      id: z.enum([
+        'cp42-early',
+        'cp42-mid',
+        'cp42-late',
+        'cp42-flowering',
+        'monarch-milkweed',
+        'grass-share',
+        'height-spread',
+      ]),
+      rule: z.string(),
+      applies: z.boolean(),
+      met: z.boolean(),
+      detail: z.string(),
+      source: z.string(),
+    }),
+  ),
   notices: z.array(z.string()),
 }) satisfies z.ZodType<PaletteResult>;
 
 export const mixQuantitySchema = z.object({
-  slug: z.string(), plants: z.number().int(), spacingIn: z.number(), spacingCm: z.number(), areaSqFt: z.number(),
-  areaSqM: z.number(), seedsToSow: z.number().int(),
+  slug: z.string(),
+  plants: z.number().int(),
+  spacingIn: z.number(),
+  spacingCm: z.number(),
+  areaSqFt: z.number(),
+  areaSqM: z.number(),
+  seedsToSow: z.number().int(),
   seedWeight: z.object({ grams: z.number(), ounces: z.number() }).nullable(),
 }) satisfies z.ZodType<MixQuantity>;
 
@@ -159,38 +275,67 @@ export const mixResponseSchema = z.object({
   quantities: z.array(mixQuantitySchema),
   lossFactor: z.number(),
   totalFootprintSqFt: z.number(),
-  seeding: z.array(z.object({
-    slug: z.string(), seedsPerSqFt: z.number(), seedsPerSqM: z.number(),
-    seed: z.object({ grams: z.number(), ounces: z.number(), pounds: z.number() }).nullable(),
-  })).nullable(),
+  seeding: z
+    .array(
+      z.object({
+        slug: z.string(),
+        seedsPerSqFt: z.number(),
+        seedsPerSqM: z.number(),
+        seed: z.object({ grams: z.number(), ounces: z.number(), pounds: z.number() }).nullable(),
+      }),
+    )
+    .nullable(),
 }) satisfies z.ZodType<MixResponse>;
 
 export const alternativesResponseSchema = z.object({
-  alternatives: z.array(z.object({
-    slug: z.string(), objectiveChange: z.number(), score: z.number(), parts: z.array(scorePartSchema), species: speciesSummarySchema,
-  })),
+  alternatives: z.array(
+    z.object({
+      slug: z.string(),
+      objectiveChange: z.number(),
+      score: z.number(),
+      parts: z.array(scorePartSchema),
+      species: speciesSummarySchema,
+    }),
+  ),
 }) satisfies z.ZodType<AlternativesResponse>;
 
 export const savedMixSchema = z.object({
-  id: z.string(), name: z.string(), request: paletteRequestSchema, chosen: z.array(z.string()), ownerName: z.string(), createdAt: isoDateTime,
+  id: z.string(),
+  name: z.string(),
+  request: paletteRequestSchema,
+  chosen: z.array(z.string()),
+  ownerName: z.string(),
+  createdAt: isoDateTime,
 }) satisfies z.ZodType<SavedMix, unknown>;
 
 const calendarEventSchema = z.object({
   date: isoDate,
   kind: z.enum(CALENDAR_EVENT_KINDS),
-  title: z.string(), detail: z.string(), speciesSlug: z.string().nullable(), method: z.enum(SOWING_METHODS).optional(),
+  title: z.string(),
+  detail: z.string(),
+  speciesSlug: z.string().nullable(),
+  method: z.enum(SOWING_METHODS).optional(),
 });
 const calendarWarningSchema = z.object({
   kind: z.enum(CALENDAR_WARNING_KINDS),
-  speciesSlug: z.string(), days: z.number().optional(), message: z.string(), method: z.enum(SOWING_METHODS).optional(),
+  speciesSlug: z.string(),
+  days: z.number().optional(),
+  message: z.string(),
+  method: z.enum(SOWING_METHODS).optional(),
 });
 export const sowingCalendarSchema = z.object({
   events: z.array(calendarEventSchema),
   warnings: z.array(calendarWarningSchema),
-  schedules: z.array(z.object({
-    speciesSlug: z.string(), method: z.enum(SOWING_METHODS), sowDate: isoDate, readyDate: isoDate.nullable(),
-    events: z.array(calendarEventSchema), warnings: z.array(calendarWarningSchema),
-  })),
+  schedules: z.array(
+    z.object({
+      speciesSlug: z.string(),
+      method: z.enum(SOWING_METHODS),
+      sowDate: isoDate,
+      readyDate: isoDate.nullable(),
+      events: z.array(calendarEventSchema),
+      warnings: z.array(calendarWarningSchema),
+    }),
+  ),
 }) satisfies z.ZodType<SowingCalendar>;
 
 /** The error every route may answer: 400s name each bad field. */
@@ -203,55 +348,114 @@ export const apiErrorSchema = z.object({
 });
 
 export const outboxMessageSchema = z.object({
-  id: z.string(), from: z.string(), to: z.array(z.string()), subject: z.string(), text: z.string(),
-  html: z.string().nullable(), kind: z.string(), groupId: z.string().nullable(), receivedAt: z.string(),
+  id: z.string(),
+  from: z.string(),
+  to: z.array(z.string()),
+  subject: z.string(),
+  text: z.string(),
+  html: z.string().nullable(),
+  kind: z.string(),
+  groupId: z.string().nullable(),
+  receivedAt: z.string(),
 }) satisfies z.ZodType<OutboxMessage>;
 
 export const invitationSchema = z.object({
-  id: z.string(), email: z.string(), role: z.enum(GROUP_ROLES), expiresAt: z.string(), acceptedAt: z.string().nullable(),
+  id: z.string(),
+  email: z.string(),
+  role: z.enum(GROUP_ROLES),
+  expiresAt: z.string(),
+  acceptedAt: z.string().nullable(),
 }) satisfies z.ZodType<Invitation>;
 
 export const invitationPreviewSchema = z.object({
-  groupSlug: z.string(), groupName: z.string(), town: z.string(), state: z.string(), role: z.enum(GROUP_ROLES),
-  email: z.string(), accountExists: z.boolean(), expiresAt: z.string(),
+  groupSlug: z.string(),
+  groupName: z.string(),
+  town: z.string(),
+  state: z.string(),
+  role: z.enum(GROUP_ROLES),
+  email: z.string(),
+  accountExists: z.boolean(),
+  expiresAt: z.string(),
 }) satisfies z.ZodType<InvitationPreview>;
 
 const seasonTargetAnswer = z.object({
-  slug: z.string(), targetPlants: z.number().int(), germinationRatePct: z.number().optional(),
-  commonName: z.string(), scientificName: z.string(),
+  slug: z.string(),
+  targetPlants: z.number().int(),
+  germinationRatePct: z.number().optional(),
+  commonName: z.string(),
+  scientificName: z.string(),
 });
 
 export const seasonSchema = z.object({
-  groupSlug: z.string(), groupName: z.string(),
+  groupSlug: z.string(),
+  groupName: z.string(),
   place: z.object({ town: z.string(), state: z.string(), ecoregionCode: z.string().nullable() }),
-  year: z.number().int(), lastFrost: z.string(), plantShareDate: z.string(), methods: z.array(z.enum(SOWING_METHODS)),
-  milkweedShare: z.number(), lossFactor: z.number(), seedsPerPacket: z.number(),
-  targets: z.array(seasonTargetAnswer), updatedAt: z.string(),
+  year: z.number().int(),
+  lastFrost: z.string(),
+  plantShareDate: z.string(),
+  methods: z.array(z.enum(SOWING_METHODS)),
+  milkweedShare: z.number(),
+  lossFactor: z.number(),
+  seedsPerPacket: z.number(),
+  targets: z.array(seasonTargetAnswer),
+  updatedAt: z.string(),
 }) satisfies z.ZodType<Season>;
 
 export const shareListSchema = z.object({
-  ecoregionCode: z.string(), state: z.string(), methods: z.array(z.enum(SOWING_METHODS)), milkweedShare: z.number(),
+  ecoregionCode: z.string(),
+  state: z.string(),
+  methods: z.array(z.enum(SOWING_METHODS)),
+  milkweedShare: z.number(),
   totalPlants: z.number(),
-  proposals: z.array(z.object({
-    slug: z.string(), commonName: z.string(), scientificName: z.string(), isMilkweed: z.boolean(),
-    layer: z.enum(['herbaceous', 'woody']), bloomPeriods: z.array(z.enum(BLOOM_PERIODS)),
-    sunOptimum: z.array(z.enum(SUN_LEVELS)), moistureOptimum: z.array(z.enum(MOISTURE_LEVELS)),
-    suggestedPlants: z.number(), why: z.array(z.string()),
-  })),
+  proposals: z.array(
+    z.object({
+      slug: z.string(),
+      commonName: z.string(),
+      scientificName: z.string(),
+      isMilkweed: z.boolean(),
+      layer: z.enum(['herbaceous', 'woody']),
+      bloomPeriods: z.array(z.enum(BLOOM_PERIODS)),
+      sunOptimum: z.array(z.enum(SUN_LEVELS)),
+      moistureOptimum: z.array(z.enum(MOISTURE_LEVELS)),
+      suggestedPlants: z.number(),
+      why: z.array(z.string()),
+    }),
+  ),
   notes: z.array(z.string()),
 }) satisfies z.ZodType<ShareList>;
 
 export const seasonSeedListSchema = z.object({
-  groupSlug: z.string(), year: z.number().int(), lossFactor: z.number(), seedsPerPacket: z.number(),
-  rows: z.array(z.object({
-    slug: z.string(), commonName: z.string(), scientificName: z.string(), targetPlants: z.number(),
-    germinationRatePct: z.number(), germinationFrom: z.enum(['record', 'yours']), lossFactor: z.number(),
-    seedsToSow: z.number(), seedsPerPound: z.number().nullable(), grams: z.number().nullable(), ounces: z.number().nullable(),
-    packets: z.number(), buyBy: z.enum(['packets', 'weight']), collectLocally: z.boolean(), collectNotes: z.array(z.string()),
-    neverCollectWild: z.boolean(),
-    cautions: z.array(z.object({ kind: z.enum(CAUTION_KINDS), title: z.string(), text: z.string() })),
-  })),
-  totals: z.object({ targetPlants: z.number(), seedsToSow: z.number(), grams: z.number(), ounces: z.number(), packets: z.number() }),
+  groupSlug: z.string(),
+  year: z.number().int(),
+  lossFactor: z.number(),
+  seedsPerPacket: z.number(),
+  rows: z.array(
+    z.object({
+      slug: z.string(),
+      commonName: z.string(),
+      scientificName: z.string(),
+      targetPlants: z.number(),
+      germinationRatePct: z.number(),
+      germinationFrom: z.enum(['record', 'yours']),
+      lossFactor: z.number(),
+      seedsToSow: z.number(),
+      seedsPerPound: z.number().nullable(),
+      grams: z.number().nullable(),
+      ounces: z.number().nullable(),
+      packets: z.number(),
+      buyBy: z.enum(['packets', 'weight']),
+      collectLocally: z.boolean(),
+      collectNotes: z.array(z.string()),
+      neverCollectWild: z.boolean(),
+      cautions: z.array(z.object({ kind: z.enum(CAUTION_KINDS), title: z.string(), text: z.string() })),
+    }),
+  ),
+  totals: z.object({
+    targetPlants: z.number(),
+    seedsToSow: z.number(),
+    grams: z.number(),
+    ounces: z.number(),
+    packets: z.number(),
+  }),
   cautions: z.array(z.string()),
 }) satisfies z.ZodType<SeedList & { groupSlug: string; year: number }>;
-

@@ -31,7 +31,15 @@ describe('targetsRequestSchema', () => {
     [{ targets: [{ slug: 'monarda-fistulosa', targetPlants: 5001 }] }, ['targets.0.targetPlants']],
     [{ targets: [{ slug: 'monarda-fistulosa', targetPlants: 2.5 }] }, ['targets.0.targetPlants']],
     [{ targets: [{ slug: 'Monarda', targetPlants: 5 }] }, ['targets.0.slug']],
-    [{ targets: [{ slug: 'a-b', targetPlants: 5 }, { slug: 'a-b', targetPlants: 6 }] }, ['targets.1.slug']],
+    [
+      {
+        targets: [
+          { slug: 'a-b', targetPlants: 5 },
+          { slug: 'a-b', targetPlants: 6 },
+        ],
+      },
+      ['targets.1.slug'],
+    ],
   ])('%j → bad fields %j', (body, fields) => {
     expect(fieldsOf(targetsRequestSchema.safeParse(body))).toEqual(fields);
   });
@@ -48,7 +56,7 @@ describe('shareListRequestSchema', () => {
   });
 });
 
-describe('pastSeasonDateFields (today passed in; the clock is the caller\'s)', () => {
+describe("pastSeasonDateFields (today passed in; the clock is the caller's)", () => {
   it.each([
     ['2027-06-12', '2026-12-02', []],
     ['2027-06-12', '2027-06-12', []], // the plant share itself is still today

@@ -23,7 +23,11 @@ export const DEFAULT_MILKWEED_SHARE = 0.25;
 /** The season's dates and seed-list settings, as an organiser writes them. */
 export const seasonRequestSchema = z
   .object({
-    year: z.number().int('must be a whole year').min(2000, 'must be 2000 or later').max(2100, 'must be 2100 or earlier'),
+    year: z
+      .number()
+      .int('must be a whole year')
+      .min(2000, 'must be 2000 or later')
+      .max(2100, 'must be 2100 or earlier'),
     /** Average last spring frost for the group's place (a local figure the organiser looks up). */
     lastFrost: isoDateSchema,
     /** The day plants are given away; must fall after the last frost. */
@@ -39,15 +43,25 @@ export const seasonRequestSchema = z
   })
   .strict()
   .refine((s) => s.plantShareDate > s.lastFrost, { message: 'must be after the last frost', path: ['plantShareDate'] })
-  .refine((s) => s.lastFrost.slice(0, 4) === String(s.year), { message: 'must fall in the season\'s year', path: ['lastFrost'] })
-  .refine((s) => s.plantShareDate.slice(0, 4) === String(s.year), { message: 'must fall in the season\'s year', path: ['plantShareDate'] });
+  .refine((s) => s.lastFrost.slice(0, 4) === String(s.year), {
+    message: "must fall in the season's year",
+    path: ['lastFrost'],
+  })
+  .refine((s) => s.plantShareDate.slice(0, 4) === String(s.year), {
+    message: "must fall in the season's year",
+    path: ['plantShareDate'],
+  });
 export type SeasonRequest = z.infer<typeof seasonRequestSchema>;
 
 /** One target: plants wanted of a species, with the organiser's own germination rate if they have one. */
 export const seasonTargetSchema = z
   .object({
     slug: slugSchema.max(120),
-    targetPlants: z.number().int('must be a whole number').min(1, 'must be at least 1').max(MAX_TARGET_PLANTS, `must be at most ${MAX_TARGET_PLANTS}`),
+    targetPlants: z
+      .number()
+      .int('must be a whole number')
+      .min(1, 'must be at least 1')
+      .max(MAX_TARGET_PLANTS, `must be at most ${MAX_TARGET_PLANTS}`),
     /** Germination of this seed lot in percent (e.g. from a germination test), replacing the record's. */
     germinationRatePct: z.number().min(1, 'must be at least 1').max(100, 'must be at most 100').optional(),
   })
@@ -63,7 +77,8 @@ export const targetsRequestSchema = z
   .superRefine((r, ctx) => {
     const seen = new Set<string>();
     r.targets.forEach((t, i) => {
-      if (seen.has(t.slug)) ctx.addIssue({ code: 'custom', message: `"${t.slug}" is listed twice`, path: ['targets', i, 'slug'] });
+      if (seen.has(t.slug))
+        ctx.addIssue({ code: 'custom', message: `"${t.slug}" is listed twice`, path: ['targets', i, 'slug'] });
       seen.add(t.slug);
     });
   });
@@ -75,13 +90,17 @@ export const shareListRequestSchema = z
     methods: z.array(sowingMethodSchema).min(1, 'must name at least one method').max(5).optional(),
     milkweedShare: z.number().min(0, 'must be 0 or more').max(1, 'must be at most 1').optional(),
     /** How many species to propose. */
-    count: z.number().int('must be a whole number').min(3, 'must be at least 3').max(40, 'must be at most 40').optional(),
+    count: z
+      .number()
+      .int('must be a whole number')
+      .min(3, 'must be at least 3')
+      .max(40, 'must be at most 40')
+      .optional(),
     /** Plants the group means to raise in all; split into a suggested number per species. */
     totalPlants: z.number().int('must be a whole number').min(10, 'must be at least 10').max(50_000).optional(),
   })
   .strict();
 export type ShareListRequest = z.infer<typeof shareListRequestSchema>;
-
 
 /** One species the share list proposes, with why in words. */
 export interface ShareListProposal {

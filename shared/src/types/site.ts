@@ -26,9 +26,12 @@ export const siteSchema = z.object({
   /** Tallest plant wanted, in centimetres (e.g. under a window or by a path). */
   maxHeightCm: z.number().min(10).max(3000).optional(),
   deerPressure: deerPressureSchema,
-  goals: z.array(goalSchema).max(GOALS.length).refine((g) => new Set(g).size === g.length, {
-    message: 'each goal once',
-  }),
+  goals: z
+    .array(goalSchema)
+    .max(GOALS.length)
+    .refine((g) => new Set(g).size === g.length, {
+      message: 'each goal once',
+    }),
   /**
    * Add shrubs, small trees and vines (the woody layer). A yard mix is herbaceous unless asked:
    * woody plants then get a share of the bed, and only those whose mature spread fits it.
@@ -62,11 +65,16 @@ export const siteRequestSchema = siteSchema
 export type SiteRequest = z.input<typeof siteRequestSchema>;
 
 /** Where the site is: its state, and its EPA Level III ecoregion when known. */
-export const regionContextSchema = z.object({
-  state: stateCodeSchema,
-  /** EPA US Level III code, e.g. "52" for the Driftless Area. */
-  ecoregionCode: z.string().regex(/^([1-9]|[1-7][0-9]|8[0-5])$/).optional(),
-  /** The ecoregion's natural plant communities, in the catalogue's habitat words. */
-  ecoregionPlantCommunities: z.array(habitatSchema).max(HABITATS.length).optional(),
-}).strict();
+export const regionContextSchema = z
+  .object({
+    state: stateCodeSchema,
+    /** EPA US Level III code, e.g. "52" for the Driftless Area. */
+    ecoregionCode: z
+      .string()
+      .regex(/^([1-9]|[1-7][0-9]|8[0-5])$/)
+      .optional(),
+    /** The ecoregion's natural plant communities, in the catalogue's habitat words. */
+    ecoregionPlantCommunities: z.array(habitatSchema).max(HABITATS.length).optional(),
+  })
+  .strict();
 export type RegionContext = z.infer<typeof regionContextSchema>;

@@ -1,12 +1,17 @@
 import { z } from 'zod';
 import {
-  type Caution, type FlowerColour, GROWTH_FORMS, type GrowthForm, MOISTURE_LEVELS, type Moisture, SUN_LEVELS, type Sun,
+  type Caution,
+  type FlowerColour,
+  GROWTH_FORMS,
+  type GrowthForm,
+  MOISTURE_LEVELS,
+  type Moisture,
+  SUN_LEVELS,
+  type Sun,
   stateCodeSchema,
 } from './species.js';
 
-const boolFromQuery = z
-  .enum(['true', 'false'], { message: 'must be true or false' })
-  .transform((v) => v === 'true');
+const boolFromQuery = z.enum(['true', 'false'], { message: 'must be true or false' }).transform((v) => v === 'true');
 
 export const SPECIES_SORTS = ['name', 'scientificName', 'height', 'bloomStart', 'hostValue', 'relevance'] as const;
 
@@ -15,10 +20,18 @@ export const speciesQuerySchema = z
   .object({
     q: z.string().trim().max(100, 'must be at most 100 characters').optional(),
     state: stateCodeSchema.optional(),
-    ecoregion: z.string().regex(/^([1-9]|[1-7][0-9]|8[0-5])$/, 'must be an EPA Level III code, 1–85').optional(),
+    ecoregion: z
+      .string()
+      .regex(/^([1-9]|[1-7][0-9]|8[0-5])$/, 'must be an EPA Level III code, 1–85')
+      .optional(),
     sun: z.enum(SUN_LEVELS).optional(),
     moisture: z.enum(MOISTURE_LEVELS).optional(),
-    bloomMonth: z.coerce.number().int('must be a whole month number').min(1, 'must be 1–12').max(12, 'must be 1–12').optional(),
+    bloomMonth: z.coerce
+      .number()
+      .int('must be a whole month number')
+      .min(1, 'must be 1–12')
+      .max(12, 'must be 1–12')
+      .optional(),
     growthForm: z.enum(GROWTH_FORMS).optional(),
     minHeightCm: z.coerce.number().min(0, 'must not be negative').max(5000).optional(),
     maxHeightCm: z.coerce.number().min(0, 'must not be negative').max(5000).optional(),

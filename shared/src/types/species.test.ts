@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import { ziziaAurea as valid } from '../testing/species-fixtures.js';
 import { speciesSchema } from './species.js';
 
-
 describe('speciesSchema (the catalogue record shape)', () => {
   it('accepts a complete record and fills the optional lists', () => {
     const parsed = speciesSchema.parse(valid);

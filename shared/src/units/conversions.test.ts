@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import {
-  cmToInches, gramsToOunces, poundsPerAcreToKgPerHectare, squareFeetToSquareMetres,
+  cmToInches,
+  gramsToOunces,
+  poundsPerAcreToKgPerHectare,
+  squareFeetToSquareMetres,
   squareMetresToSquareFeet,
 } from './conversions.js';
 import { formatArea, formatHeightCm, formatHeightRangeCm } from './format-units.js';

@@ -19,11 +19,14 @@ export const CAUTION_WORDS = {
   livestock: { title: 'Harmful to livestock', sentence: 'Harmful to grazing animals.' },
   'aggressive-spreader': { title: 'Spreads fast', sentence: 'Spreads fast and can take over a small bed.' },
   'look-alike': { title: 'Has a look-alike', sentence: 'Has a look-alike: check the label when you buy.' },
-  protected: { title: 'Protected species', sentence: 'Protected in some states: grow from bought seed, never dig from the wild.' },
+  protected: {
+    title: 'Protected species',
+    sentence: 'Protected in some states: grow from bought seed, never dig from the wild.',
+  },
   thorns: { title: 'Thorns', sentence: 'Has thorns or prickles.' },
   regulated: {
     title: 'Restricted in some states',
-    sentence: 'Some states restrict planting it: check your state\'s rules before you buy or plant.',
+    sentence: "Some states restrict planting it: check your state's rules before you buy or plant.",
   },
 } as const satisfies Record<CautionKind, CautionWords>;
 

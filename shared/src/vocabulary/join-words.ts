@@ -16,9 +16,15 @@ export function capitalise(text: string): string {
  * `wordsInOrder(['shade', 'full'], SUN_LEVELS, SUN_WORDS, 'or')` → "full sun or shade".
  */
 export function wordsInOrder<T extends string>(
-  values: readonly T[], order: readonly T[], words: Record<T, string>, conjunction: 'and' | 'or' = 'and',
+  values: readonly T[],
+  order: readonly T[],
+  words: Record<T, string>,
+  conjunction: 'and' | 'or' = 'and',
 ): string {
-  return joinWords(order.filter((v) => values.includes(v)).map((v) => words[v]), conjunction);
+  return joinWords(
+    order.filter((v) => values.includes(v)).map((v) => words[v]),
+    conjunction,
+  );
 }
 
 /** A word table with each entry capitalised, for options and table cells: { full: "Full sun", … }. */

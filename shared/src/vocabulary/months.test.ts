@@ -28,7 +28,10 @@ describe('month words', () => {
 
   it('keeps a run across the new year as one run', () => {
     expect(monthRuns([12, 1, 2])).toEqual([[12, 2]]);
-    expect(monthRuns([7, 9])).toEqual([[7, 7], [9, 9]]);
+    expect(monthRuns([7, 9])).toEqual([
+      [7, 7],
+      [9, 9],
+    ]);
   });
 
   it.each([

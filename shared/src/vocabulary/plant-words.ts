@@ -1,6 +1,4 @@
-import type {
-  DEER_RESISTANCE, FlowerColour, GrowthForm, LIFESPANS, SPREAD_HABITS,
-} from '../types/species.js';
+import type { DEER_RESISTANCE, FlowerColour, GrowthForm, LIFESPANS, SPREAD_HABITS } from '../types/species.js';
 
 export type Lifespan = (typeof LIFESPANS)[number];
 export type SpreadHabit = (typeof SPREAD_HABITS)[number];

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import {
-  sowingMethodsPhrase, treatmentBrief, treatmentHow, treatmentShortWords, treatmentTitle, weeksWords,
+  sowingMethodsPhrase,
+  treatmentBrief,
+  treatmentHow,
+  treatmentShortWords,
+  treatmentTitle,
+  weeksWords,
 } from './seed-words.js';
 
 // Butterfly milkweed: cold-moist 30 days (species-data/species/asclepias-tuberosa.json). CMS and
@@ -18,19 +23,28 @@ describe('seed treatment words', () => {
   });
 
   it('gives a card one sentence and a page the household way, both with the days', () => {
-    expect(treatmentBrief({ kind: 'cold-moist', days: 30 }))
-      .toBe('Cold-moist stratification, 30 days: mix the seed with damp sand in a sealed bag in the refrigerator.');
-    expect(treatmentHow({ kind: 'cold-moist', days: 30 })).toMatch(/refrigerator, not the freezer, for 30 days \(about 4 weeks\)/);
-    expect(treatmentHow({ kind: 'warm-moist', days: 90 })).toMatch(/room temperature for 90 days \(about 13 weeks\) before the next step\.$/);
+    expect(treatmentBrief({ kind: 'cold-moist', days: 30 })).toBe(
+      'Cold-moist stratification, 30 days: mix the seed with damp sand in a sealed bag in the refrigerator.',
+    );
+    expect(treatmentHow({ kind: 'cold-moist', days: 30 })).toMatch(
+      /refrigerator, not the freezer, for 30 days \(about 4 weeks\)/,
+    );
+    expect(treatmentHow({ kind: 'warm-moist', days: 90 })).toMatch(
+      /room temperature for 90 days \(about 13 weeks\) before the next step\.$/,
+    );
     expect(treatmentBrief({ kind: 'hot-water' })).toMatch(/soak overnight/);
   });
 
-  it.each([[5, 'about a week'], [7, 'about a week'], [30, 'about 4 weeks'], [60, 'about 9 weeks']])(
-    '%i days is %s', (days, words) => expect(weeksWords(days)).toBe(words),
-  );
+  it.each([
+    [5, 'about a week'],
+    [7, 'about a week'],
+    [30, 'about 4 weeks'],
+    [60, 'about 9 weeks'],
+  ])('%i days is %s', (days, words) => expect(weeksWords(days)).toBe(words));
 
   it('names sowing methods inside a sentence', () => {
-    expect(sowingMethodsPhrase(['winter-sowing', 'indoor-lights', 'direct-seed']))
-      .toBe('winter sowing in covered containers, sowing indoors under lights or direct seeding');
+    expect(sowingMethodsPhrase(['winter-sowing', 'indoor-lights', 'direct-seed'])).toBe(
+      'winter sowing in covered containers, sowing indoors under lights or direct seeding',
+    );
   });
 });

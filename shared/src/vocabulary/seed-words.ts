@@ -81,7 +81,9 @@ export function treatmentTitle(step: Pick<TreatmentStep, 'kind' | 'days'>): stri
 
 /** A fact card's sentence: "Cold-moist stratification, 30 days: mix the seed … refrigerator." */
 export function treatmentBrief(step: Pick<TreatmentStep, 'kind' | 'days'>): string {
-  return isMoist(step.kind) ? `${treatmentTitle(step)}: ${TREATMENT_WORDS[step.kind].brief}` : TREATMENT_WORDS[step.kind].brief;
+  return isMoist(step.kind)
+    ? `${treatmentTitle(step)}: ${TREATMENT_WORDS[step.kind].brief}`
+    : TREATMENT_WORDS[step.kind].brief;
 }
 
 /** A pot label's letters for one step: "CMS 60 d", "scarify". */
@@ -96,8 +98,10 @@ export function treatmentHow(step: Pick<TreatmentStep, 'kind' | 'days'>): string
   const when = `${days} days (${weeksWords(days)})`;
   switch (step.kind) {
     case 'cold-moist':
-      return `${TREATMENT_WORDS['cold-moist'].how} Keep it in the refrigerator, not the freezer, for ${when}, ` +
-        'checking now and then that it stays damp. Sowing outdoors in late fall or winter does the same job.';
+      return (
+        `${TREATMENT_WORDS['cold-moist'].how} Keep it in the refrigerator, not the freezer, for ${when}, ` +
+        'checking now and then that it stays damp. Sowing outdoors in late fall or winter does the same job.'
+      );
     case 'warm-moist':
       return `${TREATMENT_WORDS['warm-moist'].how} for ${when} before the next step.`;
     default:
@@ -114,14 +118,29 @@ export interface SowingMethodWords {
 
 /** The five ways Homeground's growers raise plants, as the trade names them. */
 export const SOWING_METHOD_WORDS = {
-  'outdoor-pot-winter': { phrase: 'outdoor pots over winter', how: 'Sow in pots in late fall and leave them outside; winter does the chilling.' },
-  'winter-sowing': { phrase: 'winter sowing in covered containers', how: 'Sow in covered containers with air and drainage holes, set outside in winter.' },
-  'indoor-lights': { phrase: 'sowing indoors under lights', how: 'Sow indoors after any treatment, grow on under lights, then harden off.' },
-  'soil-blocks': { phrase: 'soil blocks', how: 'Sow into pressed blocks of compost; roots stop at the air and transplant without a pot.' },
+  'outdoor-pot-winter': {
+    phrase: 'outdoor pots over winter',
+    how: 'Sow in pots in late fall and leave them outside; winter does the chilling.',
+  },
+  'winter-sowing': {
+    phrase: 'winter sowing in covered containers',
+    how: 'Sow in covered containers with air and drainage holes, set outside in winter.',
+  },
+  'indoor-lights': {
+    phrase: 'sowing indoors under lights',
+    how: 'Sow indoors after any treatment, grow on under lights, then harden off.',
+  },
+  'soil-blocks': {
+    phrase: 'soil blocks',
+    how: 'Sow into pressed blocks of compost; roots stop at the air and transplant without a pot.',
+  },
   'direct-seed': { phrase: 'direct seeding', how: 'Sow straight into prepared ground, usually in late fall.' },
 } as const satisfies Record<SowingMethod, SowingMethodWords>;
 
 /** ['winter-sowing', 'direct-seed'] → "winter sowing in covered containers or direct seeding". */
 export function sowingMethodsPhrase(methods: readonly SowingMethod[], conjunction: 'and' | 'or' = 'or'): string {
-  return joinWords(methods.map((m) => SOWING_METHOD_WORDS[m].phrase), conjunction);
+  return joinWords(
+    methods.map((m) => SOWING_METHOD_WORDS[m].phrase),
+    conjunction,
+  );
 }

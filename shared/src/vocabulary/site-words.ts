@@ -1,5 +1,11 @@
 import {
-  type Habitat, MOISTURE_LEVELS, type Moisture, SOIL_TEXTURES, type SoilTexture, SUN_LEVELS, type Sun,
+  type Habitat,
+  MOISTURE_LEVELS,
+  type Moisture,
+  SOIL_TEXTURES,
+  type SoilTexture,
+  SUN_LEVELS,
+  type Sun,
 } from '../types/species.js';
 import { capitalise, wordsInOrder } from './join-words.js';
 

@@ -17,7 +17,9 @@ describe('sowing depth in plain words', () => {
 
   it('says to surface sow seed that needs light', () => {
     expect(sowingDepthSentence({ needsLight: true, sowingDepthMm: 0 })).toMatch(/surface sow.*do not cover/i);
-    expect(sowingDepthSentence({ needsLight: false, sowingDepthMm: 0 })).toBe('Surface sow, pressing the seed onto the soil.');
+    expect(sowingDepthSentence({ needsLight: false, sowingDepthMm: 0 })).toBe(
+      'Surface sow, pressing the seed onto the soil.',
+    );
   });
 
   // Butterfly milkweed is sown 6 mm deep (species-data/species/asclepias-tuberosa.json).

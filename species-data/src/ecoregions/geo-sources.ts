@@ -38,7 +38,12 @@ export function loadEpaRegions(): EpaRegion[] {
     features: Feature<Polygon | MultiPolygon, { US_L3CODE: string; US_L3NAME: string }>[];
   };
   return fc.features
-    .map((f) => ({ code: f.properties.US_L3CODE, name: f.properties.US_L3NAME, feature: f as Area, bbox: turfBbox(f) as BBox }))
+    .map((f) => ({
+      code: f.properties.US_L3CODE,
+      name: f.properties.US_L3NAME,
+      feature: f as Area,
+      bbox: turfBbox(f) as BBox,
+    }))
     .sort((a, b) => Number(a.code) - Number(b.code));
 }
 

@@ -32,7 +32,9 @@ export class RegionLocator {
           const a = ring[i - 1];
           const b = ring[i];
           const seg: Segment = {
-            region: r.code, a, b,
+            region: r.code,
+            a,
+            b,
             box: [Math.min(a[0], b[0]), Math.min(a[1], b[1]), Math.max(a[0], b[0]), Math.max(a[1], b[1])],
           };
           for (let cx = Math.floor(seg.box[0] / CELL_DEG); cx <= Math.floor(seg.box[2] / CELL_DEG); cx++) {
@@ -51,7 +53,12 @@ export class RegionLocator {
   /** The region whose polygon contains the point, if any (the polygons do not overlap). */
   regionAt(lon: number, lat: number): EpaRegion | undefined {
     return this.regions.find(
-      (r) => lon >= r.bbox[0] && lon <= r.bbox[2] && lat >= r.bbox[1] && lat <= r.bbox[3] && booleanPointInPolygon([lon, lat], r.feature),
+      (r) =>
+        lon >= r.bbox[0] &&
+        lon <= r.bbox[2] &&
+        lat >= r.bbox[1] &&
+        lat <= r.bbox[3] &&
+        booleanPointInPolygon([lon, lat], r.feature),
     );
   }
 

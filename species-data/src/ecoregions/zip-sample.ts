@@ -27,7 +27,9 @@ export function sampleZips(step: number): ZipPoint[] {
   const { codes } = require('zipcodes') as { codes: Record<string, ZipRecord> };
   const covered = new Set<string>(US_STATE_CODES);
   return Object.values(codes)
-    .filter((z) => z.country === 'US' && covered.has(z.state) && Number.isFinite(z.latitude) && Number.isFinite(z.longitude))
+    .filter(
+      (z) => z.country === 'US' && covered.has(z.state) && Number.isFinite(z.latitude) && Number.isFinite(z.longitude),
+    )
     .sort((a, b) => a.zip.localeCompare(b.zip))
     .filter((_, i) => i % step === 0)
     .map((z) => ({ zip: z.zip, state: z.state, lon: z.longitude, lat: z.latitude }));

@@ -6,7 +6,12 @@ export function checkValueRows(): string[][] {
   return readFileSync(referenceFile('CHECK-VALUES.md'), 'utf8')
     .split('\n')
     .filter((l) => l.startsWith('| ') && !l.startsWith('|---'))
-    .map((l) => l.slice(1, -1).split('|').map((c) => c.trim()));
+    .map((l) =>
+      l
+        .slice(1, -1)
+        .split('|')
+        .map((c) => c.trim()),
+    );
 }
 
 /** Finds the one row whose first cell starts with `plant` and that mentions every word in `mentions`. */

@@ -60,7 +60,10 @@ let distributionCache: Map<string, UsdaDistribution> | undefined;
 export function loadUsdaDistribution(): Map<string, UsdaDistribution> {
   if (distributionCache) return distributionCache;
   const toCodes = (list: string) =>
-    list.split(';').map((n) => STATE_NAME_TO_CODE[n.trim()]).filter((c): c is StateCode => Boolean(c));
+    list
+      .split(';')
+      .map((n) => STATE_NAME_TO_CODE[n.trim()])
+      .filter((c): c is StateCode => Boolean(c));
   distributionCache = new Map(
     readCsv('usda_plants_state_distribution.csv').map((r) => [
       r.symbol,

@@ -11,8 +11,14 @@ export async function launchBrowser(): Promise<Browser> {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     args: [
-      '--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--disable-background-networking',
-      '--disable-component-update', '--disable-sync', '--no-first-run',
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
     ],
   });
 }
@@ -36,7 +42,10 @@ export async function openGuardedPage(browser: Browser, viewport = { width: 1280
   const consoleErrors: string[] = [];
   await context.route('**/*', (route) => {
     const url = new URL(route.request().url());
-    const local = url.protocol === 'data:' || url.protocol === 'blob:' || ['localhost', '127.0.0.1', '[::1]'].includes(url.hostname);
+    const local =
+      url.protocol === 'data:' ||
+      url.protocol === 'blob:' ||
+      ['localhost', '127.0.0.1', '[::1]'].includes(url.hostname);
     if (local) return route.continue();
     offHostRequests.push(url.href);
     return route.abort('blockedbyclient');

@@ -19,7 +19,15 @@ export async function startServer(env: Record<string, string> = {}): Promise<Run
   const dataDir = mkdtempSync(path.join(tmpdir(), 'homeground-browser-'));
   const child: ChildProcess = spawn(process.execPath, ['api/dist/main.js'], {
     cwd: ROOT,
-    env: { ...process.env, PORT: '0', DATA_DIR: dataDir, DATABASE: path.join(dataDir, 'homeground.sqlite'), NODE_ENV: 'test', DEMO_DATA: 'true', ...env },
+    env: {
+      ...process.env,
+      PORT: '0',
+      DATA_DIR: dataDir,
+      DATABASE: path.join(dataDir, 'homeground.sqlite'),
+      NODE_ENV: 'test',
+      DEMO_DATA: 'true',
+      ...env,
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';

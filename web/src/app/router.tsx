@@ -35,10 +35,16 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               return { Component: m.HomeRoute, loader: m.homeLoader(queryClient) };
             }),
             page(paths.signIn.path, async () => ({ Component: (await import('../routes/sign-in.js')).SignInRoute })),
-            page(paths.register.path, async () => ({ Component: (await import('../routes/register.js')).RegisterRoute })),
+            page(paths.register.path, async () => ({
+              Component: (await import('../routes/register.js')).RegisterRoute,
+            })),
             page(paths.account.path, async () => ({ Component: (await import('../routes/account.js')).AccountRoute })),
-            page(paths.findPlants.path, async () => ({ Component: (await import('../routes/find-plants.js')).FindPlantsRoute })),
-            page(paths.savedMix.path, async () => ({ Component: (await import('../routes/mix-saved.js')).SavedMixRoute })),
+            page(paths.findPlants.path, async () => ({
+              Component: (await import('../routes/find-plants.js')).FindPlantsRoute,
+            })),
+            page(paths.savedMix.path, async () => ({
+              Component: (await import('../routes/mix-saved.js')).SavedMixRoute,
+            })),
             page(paths.species.path, async () => {
               const m = await import('../routes/species.js');
               return { Component: m.SpeciesRoute, loader: m.speciesLoader(queryClient) };
@@ -47,12 +53,20 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               const m = await import('../routes/species-detail.js');
               return { Component: m.SpeciesDetailRoute, loader: m.speciesDetailLoader(queryClient) };
             }),
-            page(paths.cardsLabels.path, async () => ({ Component: (await import('../routes/cards-and-labels.js')).CardsLabelsRoute })),
+            page(paths.cardsLabels.path, async () => ({
+              Component: (await import('../routes/cards-and-labels.js')).CardsLabelsRoute,
+            })),
             page(paths.group.path, async () => ({ Component: (await import('../routes/group.js')).GroupRoute })),
-            page(paths.invitation.path, async () => ({ Component: (await import('../routes/invitation.js')).InvitationRoute })),
+            page(paths.invitation.path, async () => ({
+              Component: (await import('../routes/invitation.js')).InvitationRoute,
+            })),
             page(paths.season.path, async () => ({ Component: (await import('../routes/season.js')).SeasonRoute })),
-            page(paths.myBatches.path, async () => ({ Component: (await import('../routes/my-batches.js')).MyBatchesRoute })),
-            page(paths.plantShare.path, async () => ({ Component: (await import('../routes/plant-share.js')).PlantShareRoute })),
+            page(paths.myBatches.path, async () => ({
+              Component: (await import('../routes/my-batches.js')).MyBatchesRoute,
+            })),
+            page(paths.plantShare.path, async () => ({
+              Component: (await import('../routes/plant-share.js')).PlantShareRoute,
+            })),
             page('*', async () => ({ Component: (await import('../routes/not-found.js')).NotFoundRoute })),
           ],
         },

@@ -6,7 +6,14 @@ const query = (url: string) => new URL(url, 'http://localhost').searchParams;
 // Demo scenario (DESIGN.md): Larkfield, Wisconsin, EPA Level III ecoregion 52 (Driftless Area).
 const plan: MixPlan = {
   region: { state: 'WI', ecoregionCode: '52' },
-  site: { sun: 'part', moisture: 'dry', soilTexture: 'sand', areaSqFt: 200, deerPressure: 'high', goals: ['monarchs', 'birds'] },
+  site: {
+    sun: 'part',
+    moisture: 'dry',
+    soilTexture: 'sand',
+    areaSqFt: 200,
+    deerPressure: 'high',
+    goals: ['monarchs', 'birds'],
+  },
   areaUnit: 'ft2',
   size: 9,
   locked: ['asclepias-tuberosa'],
@@ -18,7 +25,14 @@ describe('page URLs are built and read in one place', () => {
   it('round-trips the species browser filters, leaving defaults out', () => {
     const url = paths.species.build({ q: 'milkweed', state: 'WI', sun: 'full', monarchHost: true, page: 2 });
     expect(url).toBe('/species?q=milkweed&state=WI&sun=full&monarchHost=true&page=2');
-    expect(paths.species.parse(query(url))).toMatchObject({ q: 'milkweed', state: 'WI', sun: 'full', monarchHost: true, page: 2, pageSize: 50 });
+    expect(paths.species.parse(query(url))).toMatchObject({
+      q: 'milkweed',
+      state: 'WI',
+      sun: 'full',
+      monarchHost: true,
+      page: 2,
+      pageSize: 50,
+    });
     expect(paths.species.build()).toBe('/species');
   });
 
@@ -33,8 +47,9 @@ describe('page URLs are built and read in one place', () => {
     const url = paths.cardsLabels.build({ species: ['asclepias-tuberosa', 'zizia-aurea'] });
     expect(url).toBe('/cards-and-labels?species=asclepias-tuberosa%2Czizia-aurea');
     expect(paths.cardsLabels.parse(query(url))).toEqual({ species: ['asclepias-tuberosa', 'zizia-aurea'] });
-    expect(paths.cardsLabels.parse(query('/cards-and-labels?species=Zizia-Aurea,,bad slug!,zizia-aurea&mix=m1')))
-      .toEqual({ species: ['zizia-aurea'], mix: 'm1' });
+    expect(
+      paths.cardsLabels.parse(query('/cards-and-labels?species=Zizia-Aurea,,bad slug!,zizia-aurea&mix=m1')),
+    ).toEqual({ species: ['zizia-aurea'], mix: 'm1' });
     expect(paths.cardsLabels.build()).toBe('/cards-and-labels');
   });
 

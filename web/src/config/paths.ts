@@ -1,9 +1,19 @@
 import { type CardsSelection, cardsSelectionToSearchParams, parseCardsSelection } from './search/cards-search.js';
 import {
-  type FindPlantsSearch, type FindPlantsStep, findPlantsSearchParams, type MixPlan, type MixRegion, parseFindPlantsSearch,
+  type FindPlantsSearch,
+  type FindPlantsStep,
+  findPlantsSearchParams,
+  type MixPlan,
+  type MixRegion,
+  parseFindPlantsSearch,
 } from './search/find-plants-search.js';
 import { withQuery } from './search/query-values.js';
-import { type BrowserState, browserStateToSearchParams, EMPTY_STATE, parseBrowserState } from './search/species-search.js';
+import {
+  type BrowserState,
+  browserStateToSearchParams,
+  EMPTY_STATE,
+  parseBrowserState,
+} from './search/species-search.js';
 
 /**
  * Every URL in the web app, built and parsed here and nowhere else. Routes use `path`; links call
@@ -33,7 +43,8 @@ export const paths = {
   species: {
     path: '/species',
     /** The browser with some filters set, e.g. `build({ state: 'WI', monarchHost: true })`. */
-    build: (filters: Partial<BrowserState> = {}) => withQuery('/species', browserStateToSearchParams({ ...EMPTY_STATE, ...filters })),
+    build: (filters: Partial<BrowserState> = {}) =>
+      withQuery('/species', browserStateToSearchParams({ ...EMPTY_STATE, ...filters })),
     parse: parseBrowserState,
     search: browserStateToSearchParams,
   },
@@ -41,7 +52,8 @@ export const paths = {
   cardsLabels: {
     path: '/cards-and-labels',
     /** Cards for these species (`?species=a,b`) and/or a saved mix's (`?mix=id`). */
-    build: (selection: Partial<CardsSelection> = {}) => withQuery('/cards-and-labels', cardsSelectionToSearchParams(selection)),
+    build: (selection: Partial<CardsSelection> = {}) =>
+      withQuery('/cards-and-labels', cardsSelectionToSearchParams(selection)),
     parse: parseCardsSelection,
     search: cardsSelectionToSearchParams,
   },
@@ -77,5 +89,12 @@ function parseNext(params: URLSearchParams): { next?: string } {
 export type { BrowserState, SortOrder, SpeciesSort } from './search/species-search.js';
 export { DEFAULT_PAGE_SIZE, EMPTY_STATE, PAGE_SIZES } from './search/species-search.js';
 export type { CardsSelection } from './search/cards-search.js';
-export type { AreaUnit, FindPlantsSearch, FindPlantsStep, MixPlan, MixRegion, PlanFromUrl } from './search/find-plants-search.js';
+export type {
+  AreaUnit,
+  FindPlantsSearch,
+  FindPlantsStep,
+  MixPlan,
+  MixRegion,
+  PlanFromUrl,
+} from './search/find-plants-search.js';
 export { stepOf, withGround, withStep } from './search/find-plants-search.js';

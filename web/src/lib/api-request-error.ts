@@ -39,7 +39,6 @@ export function isApiErrorBody(value: unknown): value is ApiError {
   const v = value as Record<string, unknown>;
   const fieldsOk =
     v.fields === undefined ||
-    (Array.isArray(v.fields) &&
-      v.fields.every((f) => typeof f?.field === 'string' && typeof f?.message === 'string'));
+    (Array.isArray(v.fields) && v.fields.every((f) => typeof f?.field === 'string' && typeof f?.message === 'string'));
   return typeof v.statusCode === 'number' && typeof v.message === 'string' && typeof v.error === 'string' && fieldsOk;
 }

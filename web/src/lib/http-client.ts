@@ -68,7 +68,8 @@ export function createHttpClient(config: HttpClientConfig) {
 
   return {
     request,
-    get: <T>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) => request<T>(path, { ...options, method: 'GET' }),
+    get: <T>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+      request<T>(path, { ...options, method: 'GET' }),
     post: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
       request<T>(path, { ...options, method: 'POST', body }),
     delete: <T = void>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>

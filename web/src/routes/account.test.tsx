@@ -32,7 +32,12 @@ describe('account page', () => {
 
     expect(await within(screen.getByRole('banner')).findByRole('link', { name: 'Sign in' })).toBeInTheDocument();
     expect(window.localStorage.getItem('homeground.accessToken')).toBeNull();
-    expect(queryClient.getQueryCache().findAll({ queryKey: ['auth'] }).filter((q) => q.state.data)).toHaveLength(0);
+    expect(
+      queryClient
+        .getQueryCache()
+        .findAll({ queryKey: ['auth'] })
+        .filter((q) => q.state.data),
+    ).toHaveLength(0);
     expect(screen.queryByText('Mara Ellsworth')).not.toBeInTheDocument();
   });
 });

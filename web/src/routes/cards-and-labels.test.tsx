@@ -1,6 +1,11 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
-import { butterflyMilkweed, goldenAlexanders, manySpecies, wildBergamot } from '../features/cards-labels/testing/card-fixtures.js';
+import {
+  butterflyMilkweed,
+  goldenAlexanders,
+  manySpecies,
+  wildBergamot,
+} from '../features/cards-labels/testing/card-fixtures.js';
 import { detailRoutes, fakeSpeciesSearch } from '../features/cards-labels/testing/card-api.js';
 import { apiError } from '../testing/fake-api.js';
 import { renderApp } from '../testing/render-app.js';
@@ -31,9 +36,13 @@ describe('cards & labels page', () => {
   });
 
   it('lists the chosen species with a count, removes one, and says which slug is not in the catalogue', async () => {
-    const { user, router } = open('/cards-and-labels?species=asclepias-tuberosa,monarda-fistulosa,no-such-plant', three, {
-      'GET /api/species/no-such-plant': apiError(404, 'No species with slug no-such-plant'),
-    });
+    const { user, router } = open(
+      '/cards-and-labels?species=asclepias-tuberosa,monarda-fistulosa,no-such-plant',
+      three,
+      {
+        'GET /api/species/no-such-plant': apiError(404, 'No species with slug no-such-plant'),
+      },
+    );
     expect(await screen.findByText('3 species chosen')).toBeInTheDocument();
     expect(await screen.findByText(/“no-such-plant” is not in the catalogue/)).toBeInTheDocument();
     await user.click(await screen.findByRole('button', { name: 'Remove wild bergamot' }));
@@ -57,10 +66,15 @@ describe('cards & labels page', () => {
     const { user } = open('/cards-and-labels');
     fakeSpeciesSearch((q) => ({ 'wild bergamot': [wildBergamot], 'Zizia aurea': [goldenAlexanders] })[q] ?? []);
     await screen.findByText('No species chosen yet');
-    await user.type(screen.getByRole('textbox', { name: /Or paste a list/ }), '- wild bergamot{Enter}2. Zizia aurea{Enter}purple hazeweed');
+    await user.type(
+      screen.getByRole('textbox', { name: /Or paste a list/ }),
+      '- wild bergamot{Enter}2. Zizia aurea{Enter}purple hazeweed',
+    );
     await user.click(screen.getByRole('button', { name: 'Find and add these' }));
     expect(await screen.findByText('2 species chosen')).toBeInTheDocument();
-    expect(screen.getByRole('status')).toHaveTextContent('Not found in the catalogue, so not added: “purple hazeweed”.');
+    expect(screen.getByRole('status')).toHaveTextContent(
+      'Not found in the catalogue, so not added: “purple hazeweed”.',
+    );
     const found = within(screen.getByRole('list', { name: 'Names found' }));
     expect(found.getByText(/“wild bergamot”: added wild bergamot/)).toBeInTheDocument();
   });
@@ -103,7 +117,14 @@ describe('cards & labels page', () => {
   it('adds the species of a saved mix named in the link', async () => {
     const { router } = open('/cards-and-labels?mix=4f1c2a7e-6a3b-4c1d-9e2f-0a1b2c3d4e5f', three, {
       'GET /api/mixes/4f1c2a7e-6a3b-4c1d-9e2f-0a1b2c3d4e5f': {
-        body: { id: '4f1c2a7e-6a3b-4c1d-9e2f-0a1b2c3d4e5f', name: 'Larkfield front yard', chosen: ['zizia-aurea', 'monarda-fistulosa'], request: {}, ownerName: 'Priya Vantongeren', createdAt: '2026-03-01T12:00:00.000Z' },
+        body: {
+          id: '4f1c2a7e-6a3b-4c1d-9e2f-0a1b2c3d4e5f',
+          name: 'Larkfield front yard',
+          chosen: ['zizia-aurea', 'monarda-fistulosa'],
+          request: {},
+          ownerName: 'Priya Vantongeren',
+          createdAt: '2026-03-01T12:00:00.000Z',
+        },
       },
     });
     expect(await screen.findByRole('article', { name: 'Golden alexanders' })).toBeInTheDocument();

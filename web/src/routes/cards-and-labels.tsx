@@ -20,7 +20,11 @@ export function CardsLabelsRoute() {
         Print fact cards (four to a page) and pot labels for the plants you grow: black on white with a thin band of
         flower colour, so they stay readable when photocopied.
       </PageIntro>
-      {selection.isMixMissing ? <p className={styles.note} role="status">The saved mix in this link could not be opened, so its species were not added.</p> : null}
+      {selection.isMixMissing ? (
+        <p className={styles.note} role="status">
+          The saved mix in this link could not be opened, so its species were not added.
+        </p>
+      ) : null}
       <ChooseSpecies
         slugs={selection.slugs}
         entries={chosen.entries}

@@ -8,9 +8,14 @@ describe('find plants: from your yard to your yard mix', { timeout: 30_000 }, ()
   it('sends the yard answers with your ground and shows the mix, with the answers in the URL', async () => {
     const { user, api, router } = renderApp({
       path: '/find-plants?step=yard&state=WI&eco=52',
-      api: { 'POST /api/mixes/balance': { body: fixtureMix() }, 'GET /api/ecoregions/52': { body: driftlessEcoregion } },
+      api: {
+        'POST /api/mixes/balance': { body: fixtureMix() },
+        'GET /api/ecoregions/52': { body: driftlessEcoregion },
+      },
     });
-    expect(await screen.findByText('Driftless Area (ecoregion 52) of Wisconsin', {}, { timeout: 5000 })).toBeInTheDocument();
+    expect(
+      await screen.findByText('Driftless Area (ecoregion 52) of Wisconsin', {}, { timeout: 5000 }),
+    ).toBeInTheDocument();
     await user.click(screen.getByRole('radio', { name: /^Shade/ }));
     await user.click(screen.getByRole('radio', { name: /^Wet/ }));
     await user.click(screen.getByRole('radio', { name: /^Often/ }));
@@ -30,6 +35,8 @@ describe('find plants: from your yard to your yard mix', { timeout: 30_000 }, ()
 
   it('says in words when a shared link has broken yard answers', async () => {
     renderApp({ path: '/find-plants?state=WI&eco=52&sun=sideways&moisture=wet&area=200&deer=low' });
-    expect(await screen.findByText("This link's yard answers are incomplete", {}, { timeout: 5000 })).toBeInTheDocument();
+    expect(
+      await screen.findByText("This link's yard answers are incomplete", {}, { timeout: 5000 }),
+    ).toBeInTheDocument();
   });
 });

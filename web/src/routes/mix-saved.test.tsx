@@ -1,7 +1,12 @@
 import type { SavedMix } from '@homeground/shared';
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { driftlessEcoregion, FIXTURE_MIX_PATH, fixtureMix, fixtureSpecies } from '../features/yard-mix/testing/mix-fixtures.js';
+import {
+  driftlessEcoregion,
+  FIXTURE_MIX_PATH,
+  fixtureMix,
+  fixtureSpecies,
+} from '../features/yard-mix/testing/mix-fixtures.js';
 import { maraOrganiser } from '../testing/fixtures.js';
 import { renderApp } from '../testing/render-app.js';
 
@@ -40,8 +45,15 @@ describe('saving and sharing a mix', { timeout: 30_000 }, () => {
     await user.type(name, 'Front bed by the porch');
     await user.click(screen.getByRole('button', { name: 'Save' }));
 
-    expect(await screen.findByRole('link', { name: `/mixes/${SAVED_ID}` })).toHaveAttribute('href', `/mixes/${SAVED_ID}`);
-    const body = api.callsTo('POST', '/api/mixes')[0].body as { name: string; chosen: string[]; request: { options: unknown } };
+    expect(await screen.findByRole('link', { name: `/mixes/${SAVED_ID}` })).toHaveAttribute(
+      'href',
+      `/mixes/${SAVED_ID}`,
+    );
+    const body = api.callsTo('POST', '/api/mixes')[0].body as {
+      name: string;
+      chosen: string[];
+      request: { options: unknown };
+    };
     expect(body.name).toBe('Front bed by the porch');
     expect(body.chosen).toEqual(fixtureSpecies.map((s) => s.slug));
     expect(body.request.options).toEqual({ locked: [], excluded: [] });
@@ -49,8 +61,13 @@ describe('saving and sharing a mix', { timeout: 30_000 }, () => {
   });
 
   it('opens a saved mix from its link with its name and who saved it, showing the same species', async () => {
-    const { api } = renderApp({ path: `/mixes/${SAVED_ID}`, api: { ...mixApi, [`GET /api/mixes/${SAVED_ID}`]: { body: saved } } });
-    expect(await screen.findByRole('heading', { level: 1, name: 'Front bed by the porch' }, { timeout: 5000 })).toBeInTheDocument();
+    const { api } = renderApp({
+      path: `/mixes/${SAVED_ID}`,
+      api: { ...mixApi, [`GET /api/mixes/${SAVED_ID}`]: { body: saved } },
+    });
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Front bed by the porch' }, { timeout: 5000 }),
+    ).toBeInTheDocument();
     expect(screen.getByText(/saved by Mara Ellsworth on March 14, 2026/)).toBeInTheDocument();
     const table = await screen.findByRole('table', { name: /one species a row/ });
     expect(within(table).getAllByRole('rowheader')).toHaveLength(fixtureSpecies.length);

@@ -21,7 +21,8 @@ export function SavedMixRoute() {
   useDocumentTitle(saved.data ? saved.data.name : 'Saved mix');
 
   const toFindPlants = useCallback<PlanChange>(
-    (next: MixPlan, options) => navigate(paths.findPlants.build({ plan: next }), { replace: options?.replace ?? false }),
+    (next: MixPlan, options) =>
+      navigate(paths.findPlants.build({ plan: next }), { replace: options?.replace ?? false }),
     [navigate],
   );
 
@@ -32,7 +33,11 @@ export function SavedMixRoute() {
         <PageIntro title="Saved mix" />
         <ErrorState
           title={isMissing ? 'There is no saved mix at this link' : 'Homeground could not open this mix'}
-          message={isMissing ? 'The link may be incomplete, or the mix was deleted. Ask the person who shared it for the link again.' : error.message}
+          message={
+            isMissing
+              ? 'The link may be incomplete, or the mix was deleted. Ask the person who shared it for the link again.'
+              : error.message
+          }
           onRetry={isMissing ? undefined : retry}
         />
       </>
@@ -44,8 +49,8 @@ export function SavedMixRoute() {
       {(mix) => (
         <>
           <PageIntro title={mix.name}>
-            A yard mix saved by {mix.ownerName} on {formatSavedOn(mix.createdAt)}. Changing it opens a copy in Find plants; this saved
-            mix stays as it is.
+            A yard mix saved by {mix.ownerName} on {formatSavedOn(mix.createdAt)}. Changing it opens a copy in Find
+            plants; this saved mix stays as it is.
           </PageIntro>
           {plan ? (
             <YardMixView

@@ -15,7 +15,12 @@ export function RootLayout() {
   };
 
   return (
-    <AppShell status={session.status} user={session.user} onSignOut={signOut} isNavigating={navigation.state === 'loading'}>
+    <AppShell
+      status={session.status}
+      user={session.user}
+      onSignOut={signOut}
+      isNavigating={navigation.state === 'loading'}
+    >
       <Outlet />
     </AppShell>
   );

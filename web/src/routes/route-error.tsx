@@ -8,7 +8,10 @@ const useStyles = makeStyles({ root: { padding: tokens.spacingVerticalXXL, maxWi
 function describe(error: unknown): string {
   if (isRouteErrorResponse(error)) return `${error.status} ${error.statusText}`.trim();
   // A deploy replaces the hashed page files; an open tab then asks for ones that are gone.
-  if (error instanceof TypeError && /dynamically imported module|Importing a module script failed/i.test(error.message)) {
+  if (
+    error instanceof TypeError &&
+    /dynamically imported module|Importing a module script failed/i.test(error.message)
+  ) {
     return 'Homeground was updated since this tab opened. Reload the page to get the new version.';
   }
   return error instanceof Error ? error.message : 'Something unexpected went wrong.';

@@ -19,7 +19,9 @@ export function SignInRoute() {
 
   return (
     <div className={styles.column}>
-      <PageIntro title="Sign in">Plan your season, keep your batch log and reserve plants at the plant share.</PageIntro>
+      <PageIntro title="Sign in">
+        Plan your season, keep your batch log and reserve plants at the plant share.
+      </PageIntro>
       <ContentCard>
         <SignInForm onSignedIn={session.signIn} />
       </ContentCard>

@@ -12,8 +12,8 @@ export function SpeciesRoute() {
   return (
     <>
       <PageIntro title="Species">
-        Every native species in the catalogue: when it blooms, how tall it grows, what it feeds, and how to raise it from seed.
-        Search by name or narrow the list to your ground.
+        Every native species in the catalogue: when it blooms, how tall it grows, what it feeds, and how to raise it
+        from seed. Search by name or narrow the list to your ground.
       </PageIntro>
       <SpeciesBrowser />
     </>

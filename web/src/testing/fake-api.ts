@@ -57,7 +57,12 @@ export function installFakeApi(routes: FakeRoutes = {}) {
     };
     calls.push(request);
     const route = all[`${method} ${url.pathname}`];
-    const answer = route === undefined ? apiError(404, `No fake route for ${method} ${url.pathname}`) : typeof route === 'function' ? await route(request) : route;
+    const answer =
+      route === undefined
+        ? apiError(404, `No fake route for ${method} ${url.pathname}`)
+        : typeof route === 'function'
+          ? await route(request)
+          : route;
     const status = answer.status ?? 200;
     return new Response(answer.body === undefined ? null : JSON.stringify(answer.body), {
       status,
@@ -65,5 +70,9 @@ export function installFakeApi(routes: FakeRoutes = {}) {
     });
   });
   vi.stubGlobal('fetch', fetchStub);
-  return { calls, fetch: fetchStub, callsTo: (method: string, path: string) => calls.filter((c) => c.method === method && c.path === path) };
+  return {
+    calls,
+    fetch: fetchStub,
+    callsTo: (method: string, path: string) => calls.filter((c) => c.method === method && c.path === path),
+  };
 }

@@ -4,7 +4,11 @@ import type { AuthResponse, Group, HealthResponse, StatsResponse, User } from '@
 // Larkfield Commons Growers of Larkfield, Wisconsin (EPA Level III ecoregion 52). Counts are
 // made up for the tests; the screens must show whatever the API answers.
 
-const LARKFIELD = { groupId: 'g-larkfield', groupSlug: 'larkfield-commons-growers', groupName: 'Larkfield Commons Growers' };
+const LARKFIELD = {
+  groupId: 'g-larkfield',
+  groupSlug: 'larkfield-commons-growers',
+  groupName: 'Larkfield Commons Growers',
+};
 
 export const maraOrganiser: User = {
   id: 'u-mara',

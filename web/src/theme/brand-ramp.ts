@@ -15,7 +15,10 @@ function toRgb(hex: string): [number, number, number] {
 }
 
 function toHex(rgb: [number, number, number]): string {
-  return `#${rgb.map((c) => Math.round(c).toString(16).padStart(2, '0')).join('').toUpperCase()}`;
+  return `#${rgb
+    .map((c) => Math.round(c).toString(16).padStart(2, '0'))
+    .join('')
+    .toUpperCase()}`;
 }
 
 /** Straight sRGB mix: t = 0 gives `from`, t = 1 gives `to`. */

@@ -32,7 +32,12 @@ export const FLOWER_SWATCHES: Record<FlowerColour, FlowerSwatch> = {
 };
 
 /** For a species with no recorded flower colour (e.g. a fern): a neutral cell still labelled. */
-export const UNKNOWN_SWATCH: FlowerSwatch = { fill: '#D9D4C7', ink: DARK_INK, label: '··', name: 'colour not recorded' };
+export const UNKNOWN_SWATCH: FlowerSwatch = {
+  fill: '#D9D4C7',
+  ink: DARK_INK,
+  label: '··',
+  name: 'colour not recorded',
+};
 
 export function flowerSwatch(colour: FlowerColour | undefined): FlowerSwatch {
   return colour ? FLOWER_SWATCHES[colour] : UNKNOWN_SWATCH;

@@ -26,7 +26,8 @@ export const READS_METADATA = 'homeground:reads';
 
 /** Records that the handler reads `part`, so input there is expected rather than refused. */
 function markReads(target: object, key: string | symbol | undefined, part: 'body' | 'query'): void {
-  const handler = key === undefined ? undefined : (Object.getOwnPropertyDescriptor(target, key)?.value as object | undefined);
+  const handler =
+    key === undefined ? undefined : (Object.getOwnPropertyDescriptor(target, key)?.value as object | undefined);
   if (!handler) return;
   const reads = new Set<string>(Reflect.getMetadata(READS_METADATA, handler) ?? []);
   reads.add(part);
@@ -55,7 +56,12 @@ export function ZodQuery(schema: z.ZodType): ParameterDecorator {
   return (target, key, index) => {
     Query(new ZodValidationPipe(schema))(target, key!, index);
     markReads(target, key, 'query');
-    onMethod(target, key, ...openApiProperties(schema).map((p) => ApiQuery({ name: p.name, required: p.required, schema: p.schema })), badRequestDoc);
+    onMethod(
+      target,
+      key,
+      ...openApiProperties(schema).map((p) => ApiQuery({ name: p.name, required: p.required, schema: p.schema })),
+      badRequestDoc,
+    );
   };
 }
 
@@ -78,7 +84,11 @@ class RequiredFilePipe implements PipeTransform<UploadedBlob | undefined, Upload
   constructor(private readonly field: string) {}
 
   transform(file: UploadedBlob | undefined): UploadedBlob {
-    if (!file || file.size === 0) throw badRequest([{ field: this.field, message: 'is required' }], `Attach the file in the "${this.field}" field.`);
+    if (!file || file.size === 0)
+      throw badRequest(
+        [{ field: this.field, message: 'is required' }],
+        `Attach the file in the "${this.field}" field.`,
+      );
     return file;
   }
 }
@@ -99,7 +109,12 @@ export function ZodFile(name: string, maxBytes: number, description?: string): P
       ApiBody({
         required: true,
         description,
-        schema: { type: 'object', required: [name], additionalProperties: false, properties: { [name]: { type: 'string', format: 'binary' } } },
+        schema: {
+          type: 'object',
+          required: [name],
+          additionalProperties: false,
+          properties: { [name]: { type: 'string', format: 'binary' } },
+        },
       }),
       badRequestDoc,
     );
@@ -110,13 +125,19 @@ export function ZodFile(name: string, maxBytes: number, description?: string): P
  * The answer's schema in OpenAPI, from the shared zod response schema (`status` as the route
  * answers: 200, or 201 for a POST that creates).
  */
-export function ZodResponse(schema: z.ZodType, status: 200 | 201 = 200, description = 'OK'): ReturnType<typeof ApiResponse> {
+export function ZodResponse(
+  schema: z.ZodType,
+  status: 200 | 201 = 200,
+  description = 'OK',
+): ReturnType<typeof ApiResponse> {
   return ApiResponse({ status, description, schema: openApiSchema(schema, 'output') });
 }
 
 /** A file answer (CSV, iCalendar, image) in OpenAPI, with its media type. */
 export function FileResponse(mediaType: string, description: string): ReturnType<typeof ApiResponse> {
   return ApiResponse({
-    status: 200, description, content: { [mediaType]: { schema: { type: 'string', format: 'binary' } } },
+    status: 200,
+    description,
+    content: { [mediaType]: { schema: { type: 'string', format: 'binary' } } },
   });
 }

@@ -4,9 +4,18 @@ import type { Response } from 'express';
 import { JsonTooDeepError } from '../http/json-depth.js';
 
 const REASON: Record<number, string> = {
-  400: 'Bad Request', 401: 'Unauthorized', 403: 'Forbidden', 404: 'Not Found', 409: 'Conflict',
-  410: 'Gone', 413: 'Payload Too Large', 415: 'Unsupported Media Type', 422: 'Unprocessable Entity',
-  429: 'Too Many Requests', 500: 'Internal Server Error', 503: 'Service Unavailable',
+  400: 'Bad Request',
+  401: 'Unauthorized',
+  403: 'Forbidden',
+  404: 'Not Found',
+  409: 'Conflict',
+  410: 'Gone',
+  413: 'Payload Too Large',
+  415: 'Unsupported Media Type',
+  422: 'Unprocessable Entity',
+  429: 'Too Many Requests',
+  500: 'Internal Server Error',
+  503: 'Service Unavailable',
 };
 
 /**
@@ -55,7 +64,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
         base.fields = [{ field: cause.field ?? 'form', message: 'is not a field this upload accepts' }];
       }
       // Any other 400 from the HTTP layer (e.g. a form nested past body-parser's depth) still names what was wrong.
-      if (statusCode === 400 && !base.fields) base.fields = [{ field: 'body', message: 'could not be read as this request' }];
+      if (statusCode === 400 && !base.fields)
+        base.fields = [{ field: 'body', message: 'could not be read as this request' }];
       if (statusCode === 413) base.message = 'The request body is too large.';
       return base;
     }
@@ -68,5 +78,10 @@ export class ApiExceptionFilter implements ExceptionFilter {
 }
 
 function isMulterError(e: unknown): e is { code: string; field?: string } {
-  return typeof e === 'object' && e !== null && typeof (e as { code?: unknown }).code === 'string' && (e as { code: string }).code.startsWith('LIMIT_');
+  return (
+    typeof e === 'object' &&
+    e !== null &&
+    typeof (e as { code?: unknown }).code === 'string' &&
+    (e as { code: string }).code.startsWith('LIMIT_')
+  );
 }

@@ -5,7 +5,8 @@ import { AuthGuard } from '@nestjs/passport';
 @Injectable()
 export class JwtAuthGuard extends AuthGuard('jwt') {
   override handleRequest<T>(err: unknown, user: T): T {
-    if (err || !user) throw new UnauthorizedException('Sign in to continue: the token is missing, expired or not valid.');
+    if (err || !user)
+      throw new UnauthorizedException('Sign in to continue: the token is missing, expired or not valid.');
     return user;
   }
 }

@@ -10,7 +10,10 @@ export class RolesGuard implements CanActivate {
   constructor(private readonly reflector: Reflector) {}
 
   canActivate(context: ExecutionContext): boolean {
-    const roles = this.reflector.getAllAndOverride<GlobalRole[] | undefined>(ROLES_KEY, [context.getHandler(), context.getClass()]);
+    const roles = this.reflector.getAllAndOverride<GlobalRole[] | undefined>(ROLES_KEY, [
+      context.getHandler(),
+      context.getClass(),
+    ]);
     if (!roles || roles.length === 0) return true;
     const user = context.switchToHttp().getRequest<{ user?: AuthenticatedUser }>().user;
     if (user && (user.role === 'admin' || roles.includes(user.role))) return true;

@@ -23,7 +23,9 @@ describe('JSON depth scan (raw bytes, before parsing)', () => {
       assertJsonDepth(deep, 32, 'file');
     } catch (e) {
       expect((e as JsonTooDeepError).status).toBe(400);
-      expect((e as JsonTooDeepError).fields).toEqual([{ field: 'file', message: 'is nested more than 32 levels deep' }]);
+      expect((e as JsonTooDeepError).fields).toEqual([
+        { field: 'file', message: 'is nested more than 32 levels deep' },
+      ]);
     }
   });
 });

@@ -8,7 +8,11 @@ export type FieldProblem = NonNullable<ApiError['fields']>[number];
  * The API's one 400: `{message, fields}` with each bad field and its reason. The message repeats
  * them in a sentence unless a better one is given (e.g. "nothing was imported").
  */
-export function badRequest(fields: FieldProblem[], message?: string, extra: Pick<ApiError, 'rows'> = {}): BadRequestException {
+export function badRequest(
+  fields: FieldProblem[],
+  message?: string,
+  extra: Pick<ApiError, 'rows'> = {},
+): BadRequestException {
   const text = message ?? `Please check: ${fields.map((f) => `${f.field} ${f.message}`).join('; ')}`;
   return new BadRequestException({ message: text, fields, ...extra });
 }

@@ -2,7 +2,10 @@ import type { OpenAPIObject } from '@nestjs/swagger';
 import { z } from 'zod';
 
 /** An OpenAPI schema object as @nestjs/swagger's decorators take it (its own type is not exported). */
-export type SchemaObject = Exclude<NonNullable<NonNullable<OpenAPIObject['components']>['schemas']>[string], { $ref: string }>;
+export type SchemaObject = Exclude<
+  NonNullable<NonNullable<OpenAPIObject['components']>['schemas']>[string],
+  { $ref: string }
+>;
 
 /**
  * A zod schema as an OpenAPI 3.0 schema object, from zod's own JSON Schema output. `input` describes
@@ -18,5 +21,9 @@ export function openApiSchema(schema: z.ZodType, io: 'input' | 'output' = 'input
 /** The properties of an object schema (a query string's parameters), each with whether it is required. */
 export function openApiProperties(schema: z.ZodType): { name: string; required: boolean; schema: SchemaObject }[] {
   const json = openApiSchema(schema) as { properties?: Record<string, SchemaObject>; required?: string[] };
-  return Object.entries(json.properties ?? {}).map(([name, s]) => ({ name, required: (json.required ?? []).includes(name), schema: s }));
+  return Object.entries(json.properties ?? {}).map(([name, s]) => ({
+    name,
+    required: (json.required ?? []).includes(name),
+    schema: s,
+  }));
 }

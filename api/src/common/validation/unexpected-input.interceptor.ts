@@ -18,7 +18,8 @@ export class UnexpectedInputInterceptor implements NestInterceptor {
       ...(reads.includes('query') ? [] : keysOf(req.query)),
       ...(reads.includes('body') ? [] : keysOf(req.body)),
     ];
-    if (unexpected.length) throw badRequest(unexpected.map((field) => ({ field, message: 'is not a field this request accepts' })));
+    if (unexpected.length)
+      throw badRequest(unexpected.map((field) => ({ field, message: 'is not a field this request accepts' })));
     return next.handle();
   }
 }

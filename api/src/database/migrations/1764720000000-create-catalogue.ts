@@ -66,7 +66,16 @@ export class CreateCatalogue1764720000000 implements MigrationInterface {
   }
 
   async down(q: QueryRunner): Promise<void> {
-    for (const t of ['catalogue_meta', 'species_photos', 'county_ecoregions', 'counties', 'ecoregions', 'species_states', 'species_names', 'species']) {
+    for (const t of [
+      'catalogue_meta',
+      'species_photos',
+      'county_ecoregions',
+      'counties',
+      'ecoregions',
+      'species_states',
+      'species_names',
+      'species',
+    ]) {
       await q.query(`DROP TABLE "${t}"`);
     }
   }

@@ -27,7 +27,10 @@ export class SpeciesSearchIndex {
   private readonly names: IndexedName[];
   private readonly postings = new Map<string, number[]>();
 
-  constructor(entries: NameEntry[], private readonly candidateLimit = 48) {
+  constructor(
+    entries: NameEntry[],
+    private readonly candidateLimit = 48,
+  ) {
     this.names = entries.map((e) => ({ ...e, normalised: normaliseName(e.name) }));
     this.names.forEach((n, i) => {
       for (const t of trigrams(n.normalised)) {
@@ -47,7 +50,12 @@ export class SpeciesSearchIndex {
     if (!q) return [];
     const candidates = this.candidates(q);
     if (candidates.length === 0) return [];
-    const fuse = new Fuse(candidates, { keys: ['normalised'], includeScore: true, ignoreLocation: true, threshold: 0.45 });
+    const fuse = new Fuse(candidates, {
+      keys: ['normalised'],
+      includeScore: true,
+      ignoreLocation: true,
+      threshold: 0.45,
+    });
     const best = new Map<string, SearchHit>();
     for (const r of fuse.search(q)) {
       const hit = { slug: r.item.slug, score: r.score ?? 1, matchedName: r.item.name };

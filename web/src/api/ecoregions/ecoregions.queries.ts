@@ -8,9 +8,17 @@ export const ecoregionKeys = {
 };
 
 export function ecoregionListQueryOptions(state?: string) {
-  return queryOptions({ queryKey: ecoregionKeys.list(state), queryFn: ({ signal }) => listEcoregions(state, signal), staleTime: Infinity });
+  return queryOptions({
+    queryKey: ecoregionKeys.list(state),
+    queryFn: ({ signal }) => listEcoregions(state, signal),
+    staleTime: Infinity,
+  });
 }
 
 export function ecoregionQueryOptions(code: string) {
-  return queryOptions({ queryKey: ecoregionKeys.detail(code), queryFn: ({ signal }) => getEcoregion(code, signal), staleTime: Infinity });
+  return queryOptions({
+    queryKey: ecoregionKeys.detail(code),
+    queryFn: ({ signal }) => getEcoregion(code, signal),
+    staleTime: Infinity,
+  });
 }

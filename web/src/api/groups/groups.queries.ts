@@ -26,5 +26,8 @@ export function membersQueryOptions(slug: string) {
 }
 
 export function invitationsQueryOptions(slug: string) {
-  return queryOptions({ queryKey: groupKeys.invitations(slug), queryFn: ({ signal }) => listInvitations(slug, signal) });
+  return queryOptions({
+    queryKey: groupKeys.invitations(slug),
+    queryFn: ({ signal }) => listInvitations(slug, signal),
+  });
 }

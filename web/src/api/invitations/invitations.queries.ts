@@ -8,5 +8,9 @@ export const invitationKeys = {
 
 export function invitationPreviewQueryOptions(token: string) {
   // A used or expired link answers 410 at once; asking again will not change that.
-  return queryOptions({ queryKey: invitationKeys.preview(token), queryFn: ({ signal }) => previewInvitation(token, signal), retry: false });
+  return queryOptions({
+    queryKey: invitationKeys.preview(token),
+    queryFn: ({ signal }) => previewInvitation(token, signal),
+    retry: false,
+  });
 }

@@ -1,6 +1,14 @@
 import type {
-  AlternativesRequest, AlternativesResponse, CalendarResponse, MixResponse, PaletteRequest, RecommendationsResponse,
-  RecommendRequest, SavedMix, SaveMixRequest, SowingCalendarRequest,
+  AlternativesRequest,
+  AlternativesResponse,
+  CalendarResponse,
+  MixResponse,
+  PaletteRequest,
+  RecommendationsResponse,
+  RecommendRequest,
+  SavedMix,
+  SaveMixRequest,
+  SowingCalendarRequest,
 } from '@homeground/shared';
 import { httpClient } from '../../lib/http-client.js';
 

@@ -1,6 +1,14 @@
 import type { AlternativesRequest, PaletteRequest, RecommendRequest } from '@homeground/shared';
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
-import { balanceMix, buildCalendar, type CalendarRequest, findAlternatives, getRecommendations, getSavedMix, listMyMixes } from './mixes.api.js';
+import {
+  balanceMix,
+  buildCalendar,
+  type CalendarRequest,
+  findAlternatives,
+  getRecommendations,
+  getSavedMix,
+  listMyMixes,
+} from './mixes.api.js';
 
 /** Keys run general to specific; each holds the whole request body, because the answer depends on all of it. */
 export const mixKeys = {
@@ -43,7 +51,12 @@ export function alternativesQueryOptions(body: AlternativesRequest) {
 }
 
 export function savedMixQueryOptions(id: string) {
-  return queryOptions({ queryKey: mixKeys.savedDetail(id), queryFn: ({ signal }) => getSavedMix(id, signal), staleTime: Infinity, retry: false });
+  return queryOptions({
+    queryKey: mixKeys.savedDetail(id),
+    queryFn: ({ signal }) => getSavedMix(id, signal),
+    staleTime: Infinity,
+    retry: false,
+  });
 }
 
 export function myMixesQueryOptions() {

@@ -56,7 +56,9 @@ export function AppShell({ isNavigating, children, ...topBar }: AppShellProps) {
       <main id={MAIN_CONTENT_ID} tabIndex={-1} className={styles.main}>
         {children}
       </main>
-      <footer className={styles.footer}>Homeground: native plants for your ground, grown and shared by neighbours.</footer>
+      <footer className={styles.footer}>
+        Homeground: native plants for your ground, grown and shared by neighbours.
+      </footer>
     </div>
   );
 }

@@ -21,7 +21,10 @@ const useStyles = makeStyles({
     display: 'flex',
     alignItems: 'center',
     gap: tokens.spacingHorizontalM,
-    '@media (max-width: 480px)': { padding: `${tokens.spacingVerticalS} ${tokens.spacingHorizontalS}`, gap: tokens.spacingHorizontalXS },
+    '@media (max-width: 480px)': {
+      padding: `${tokens.spacingVerticalS} ${tokens.spacingHorizontalS}`,
+      gap: tokens.spacingHorizontalXS,
+    },
   },
   spacer: { flexGrow: 1 },
 });

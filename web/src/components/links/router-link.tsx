@@ -33,7 +33,15 @@ interface RouterButtonProps {
 export function RouterButton({ to, children, appearance, size, icon, className }: RouterButtonProps) {
   const anchor = useRouterAnchor(to);
   return (
-    <Button as="a" href={anchor.href} onClick={anchor.onClick} appearance={appearance} size={size} icon={icon} className={className}>
+    <Button
+      as="a"
+      href={anchor.href}
+      onClick={anchor.onClick}
+      appearance={appearance}
+      size={size}
+      icon={icon}
+      className={className}
+    >
       {children}
     </Button>
   );

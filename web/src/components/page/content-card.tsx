@@ -12,7 +12,12 @@ const useStyles = makeStyles({
 });
 
 /** A white surface with 8 px corners and a soft shadow (DESIGN.md "Look"). */
-export function ContentCard({ as: Tag = 'section', className, children, ...aria }: {
+export function ContentCard({
+  as: Tag = 'section',
+  className,
+  children,
+  ...aria
+}: {
   as?: ElementType;
   className?: string;
   children: ReactNode;

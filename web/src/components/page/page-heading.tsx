@@ -6,7 +6,17 @@ type Level = 'page' | 'section' | 'card';
 const TAGS = { page: 'h1', section: 'h2', card: 'h3' } as const;
 
 /** Headings in Merriweather: `page` is the one h1 of a screen, `section` h2, `card` h3. */
-export function Heading({ level = 'page', id, className, children }: { level?: Level; id?: string; className?: string; children: ReactNode }) {
+export function Heading({
+  level = 'page',
+  id,
+  className,
+  children,
+}: {
+  level?: Level;
+  id?: string;
+  className?: string;
+  children: ReactNode;
+}) {
   const styles = useHeadingStyles();
   const Tag = TAGS[level];
   return (

@@ -17,7 +17,13 @@ const show = (query: QueryLike<string[]>, keepDataOnError = false) =>
         empty="No growing groups have joined yet."
         keepDataOnError={keepDataOnError}
       >
-        {(groups) => <ul>{groups.map((g) => <li key={g}>{g}</li>)}</ul>}
+        {(groups) => (
+          <ul>
+            {groups.map((g) => (
+              <li key={g}>{g}</li>
+            ))}
+          </ul>
+        )}
       </QueryState>
     </FluentProvider>,
   );

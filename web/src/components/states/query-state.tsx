@@ -37,11 +37,27 @@ export interface QueryStateProps<T> {
  * One switch for a query's loading, error, empty and content states, so every page says each the
  * same way: a spinner with words, the failure in words with "Try again", a plain empty message.
  */
-export function QueryState<T>({ query, loading, error, isEmpty, empty, keepDataOnError = false, children }: QueryStateProps<T>) {
+export function QueryState<T>({
+  query,
+  loading,
+  error,
+  isEmpty,
+  empty,
+  keepDataOnError = false,
+  children,
+}: QueryStateProps<T>) {
   const retry = () => void query.refetch();
   if (query.isPending) return <>{typeof loading === 'string' ? <LoadingState label={loading} /> : loading}</>;
   if (query.isError && query.error && (query.data === undefined || !keepDataOnError)) {
-    return <>{typeof error === 'string' ? <ErrorState title={error} message={query.error.message} onRetry={retry} /> : error(query.error, retry)}</>;
+    return (
+      <>
+        {typeof error === 'string' ? (
+          <ErrorState title={error} message={query.error.message} onRetry={retry} />
+        ) : (
+          error(query.error, retry)
+        )}
+      </>
+    );
   }
   const data = query.data as T;
   if (isEmpty?.(data)) {

@@ -1,6 +1,15 @@
 import {
-  DEER_PRESSURES, GOALS, type Goal, MOISTURE_LEVELS, SOIL_TEXTURES, type SiteRequest, type StateCode, stateCodeSchema,
-  SUN_LEVELS, siteRequestSchema, slugSchema,
+  DEER_PRESSURES,
+  GOALS,
+  type Goal,
+  MOISTURE_LEVELS,
+  SOIL_TEXTURES,
+  type SiteRequest,
+  type StateCode,
+  stateCodeSchema,
+  SUN_LEVELS,
+  siteRequestSchema,
+  slugSchema,
 } from '@homeground/shared';
 import { finiteNumber, oneOf } from './query-values.js';
 
@@ -43,7 +52,8 @@ export interface FindPlantsSearch {
 /** Keys that belong to a finished mix; a new ground or new yard answers make them stale. */
 export const MIX_KEYS = ['chosen', 'locked', 'excluded', 'size'] as const;
 
-const list = (value: string | null): string[] => (value ? value.split(',').filter((s) => slugSchema.safeParse(s).success) : []);
+const list = (value: string | null): string[] =>
+  value ? value.split(',').filter((s) => slugSchema.safeParse(s).success) : [];
 
 function dropUndefined<T extends object>(o: T): Partial<T> {
   return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
@@ -154,8 +164,14 @@ export function stepOf(search: FindPlantsSearch): FindPlantsStep {
  * A Find plants URL's query: a whole plan (the mix's share link), or just your ground, and the step
  * to show when it is not the mix.
  */
-export function findPlantsSearchParams(target: { plan?: MixPlan; region?: MixRegion; step?: FindPlantsStep } = {}): URLSearchParams {
-  const p = target.plan ? planToSearchParams(target.plan) : target.region ? regionToSearchParams(target.region) : new URLSearchParams();
+export function findPlantsSearchParams(
+  target: { plan?: MixPlan; region?: MixRegion; step?: FindPlantsStep } = {},
+): URLSearchParams {
+  const p = target.plan
+    ? planToSearchParams(target.plan)
+    : target.region
+      ? regionToSearchParams(target.region)
+      : new URLSearchParams();
   if (target.step && target.step !== 'mix') p.set('step', target.step);
   return p;
 }

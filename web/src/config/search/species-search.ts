@@ -1,5 +1,12 @@
 import {
-  GROWTH_FORMS, type GrowthForm, MOISTURE_LEVELS, type Moisture, SPECIES_SORTS, type StateCode, SUN_LEVELS, type Sun,
+  GROWTH_FORMS,
+  type GrowthForm,
+  MOISTURE_LEVELS,
+  type Moisture,
+  SPECIES_SORTS,
+  type StateCode,
+  SUN_LEVELS,
+  type Sun,
   US_STATE_CODES,
 } from '@homeground/shared';
 import { oneOf, wholeNumber } from './query-values.js';
@@ -34,7 +41,13 @@ export interface BrowserState {
   order: SortOrder;
 }
 
-export const EMPTY_STATE: BrowserState = { q: '', monarchHost: false, page: 1, pageSize: DEFAULT_PAGE_SIZE, order: 'asc' };
+export const EMPTY_STATE: BrowserState = {
+  q: '',
+  monarchHost: false,
+  page: 1,
+  pageSize: DEFAULT_PAGE_SIZE,
+  order: 'asc',
+};
 
 function heightCm(value: string | null): number | undefined {
   if (value === null || !/^\d+(\.\d+)?$/.test(value)) return undefined;

@@ -58,7 +58,12 @@ describe('useSchemaForm', () => {
   });
 
   it('puts the API’s 400 fields beside the matching inputs', async () => {
-    render(<LoginForm onValid={vi.fn()} apiError={badRequest([{ field: 'password', message: 'must be at most 200 characters' }])} />);
+    render(
+      <LoginForm
+        onValid={vi.fn()}
+        apiError={badRequest([{ field: 'password', message: 'must be at most 200 characters' }])}
+      />,
+    );
     await userEvent.type(screen.getByLabelText('E-mail'), 'mara.ellsworth@example.org');
     await userEvent.type(screen.getByLabelText('Password'), 'larkfield-mara');
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
@@ -70,13 +75,22 @@ describe('useSchemaForm', () => {
 
 describe('failureFromApi', () => {
   it('says fields the form does not have above it, with their names', () => {
-    expect(failureFromApi(badRequest([{ field: 'extra', message: 'is not allowed' }]), ['email', 'password']))
-      .toEqual({ fields: {}, message: 'extra: is not allowed' });
+    expect(failureFromApi(badRequest([{ field: 'extra', message: 'is not allowed' }]), ['email', 'password'])).toEqual({
+      fields: {},
+      message: 'extra: is not allowed',
+    });
   });
 
   it('uses the API’s message when there are no fields, and plain words for a non-API failure', () => {
-    const conflict = new ApiRequestError({ statusCode: 503, error: 'Service Unavailable', message: 'The catalogue is loading' });
+    const conflict = new ApiRequestError({
+      statusCode: 503,
+      error: 'Service Unavailable',
+      message: 'The catalogue is loading',
+    });
     expect(failureFromApi(conflict, ['email'])).toEqual({ fields: {}, message: 'The catalogue is loading' });
-    expect(failureFromApi(new TypeError('boom'), ['email'])).toEqual({ fields: {}, message: 'Something went wrong. Try again.' });
+    expect(failureFromApi(new TypeError('boom'), ['email'])).toEqual({
+      fields: {},
+      message: 'Something went wrong. Try again.',
+    });
   });
 });

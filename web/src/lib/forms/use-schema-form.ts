@@ -50,7 +50,10 @@ export function useSchemaForm<S extends z.ZodType>({ schema, initial }: SchemaFo
   });
 
   /** Shows a failed submit: `failureFromApi` by default, or the caller's own reading of the error. */
-  const fail = (error: unknown, describe: (error: unknown, fields: readonly Field[]) => FormFailure<Field> = failureFromApi) => {
+  const fail = (
+    error: unknown,
+    describe: (error: unknown, fields: readonly Field[]) => FormFailure<Field> = failureFromApi,
+  ) => {
     const described = describe(error, fields);
     setErrors(described.fields);
     setFailure(described.message);

@@ -7,7 +7,6 @@ import { Heading } from '../../../components/page/page-heading.js';
 import { EmptyState } from '../../../components/states/index.js';
 import { hgTokens } from '../../../theme/index.js';
 
-
 const useStyles = makeStyles({
   stack: { display: 'grid', gap: tokens.spacingVerticalXL, maxWidth: '720px' },
   facts: {

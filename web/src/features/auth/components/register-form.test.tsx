@@ -37,7 +37,9 @@ describe('register form', () => {
   });
 
   it('signs the new person in', async () => {
-    const { user, api } = await openRegister({ 'POST /api/auth/register': { status: 201, body: authFor(priyaMember, 'priya-token') } });
+    const { user, api } = await openRegister({
+      'POST /api/auth/register': { status: 201, body: authFor(priyaMember, 'priya-token') },
+    });
     await user.type(screen.getByLabelText(/Your name/), 'Priya Vantongeren');
     await user.type(screen.getByLabelText(/E-mail/), 'priya.vantongeren@example.org');
     await user.type(screen.getByLabelText(/^Password/), 'plant-share-2026');

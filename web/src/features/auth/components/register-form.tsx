@@ -24,12 +24,28 @@ export function RegisterForm({ onRegistered }: { onRegistered: (auth: AuthRespon
     <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-label="Create an account">
       <FormFailure message={form.failure} />
       <Field label="Your name" hint="Your group sees this name." required {...form.validation('displayName')}>
-        <Input name="displayName" autoComplete="name" value={form.values.displayName} onChange={(_, d) => form.change('displayName', d.value)} />
+        <Input
+          name="displayName"
+          autoComplete="name"
+          value={form.values.displayName}
+          onChange={(_, d) => form.change('displayName', d.value)}
+        />
       </Field>
       <Field label="E-mail" required {...form.validation('email')}>
-        <Input type="email" name="email" autoComplete="email" value={form.values.email} onChange={(_, d) => form.change('email', d.value)} />
+        <Input
+          type="email"
+          name="email"
+          autoComplete="email"
+          value={form.values.email}
+          onChange={(_, d) => form.change('email', d.value)}
+        />
       </Field>
-      <Field label="Password" hint={`At least ${PASSWORD_MIN_LENGTH} characters. A short sentence is easy to remember.`} required {...form.validation('password')}>
+      <Field
+        label="Password"
+        hint={`At least ${PASSWORD_MIN_LENGTH} characters. A short sentence is easy to remember.`}
+        required
+        {...form.validation('password')}
+      >
         <Input
           type="password"
           name="password"
@@ -39,7 +55,11 @@ export function RegisterForm({ onRegistered }: { onRegistered: (auth: AuthRespon
         />
       </Field>
       <div className={styles.actions}>
-        <SubmitButton isPending={registerAccount.isPending} label="Create account" pendingLabel="Creating your account…" />
+        <SubmitButton
+          isPending={registerAccount.isPending}
+          label="Create account"
+          pendingLabel="Creating your account…"
+        />
       </div>
     </form>
   );

@@ -14,14 +14,23 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (auth: AuthResponse) =>
   const form = useSchemaForm({ schema: loginRequestSchema, initial: { email: '', password: '' } });
 
   const submit = form.handleSubmit((body) =>
-    login.mutate(body, { onSuccess: onSignedIn, onError: (error) => form.fail(error, (e, fields) => describeAuthFailure(e, 'sign-in', fields)) }),
+    login.mutate(body, {
+      onSuccess: onSignedIn,
+      onError: (error) => form.fail(error, (e, fields) => describeAuthFailure(e, 'sign-in', fields)),
+    }),
   );
 
   return (
     <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-label="Sign in">
       <FormFailure message={form.failure} />
       <Field label="E-mail" required {...form.validation('email')}>
-        <Input type="email" name="email" autoComplete="email" value={form.values.email} onChange={(_, d) => form.change('email', d.value)} />
+        <Input
+          type="email"
+          name="email"
+          autoComplete="email"
+          value={form.values.email}
+          onChange={(_, d) => form.change('email', d.value)}
+        />
       </Field>
       <Field label="Password" required {...form.validation('password')}>
         <Input

@@ -30,7 +30,10 @@ describe('describeAuthFailure', () => {
       statusCode: 400,
       error: 'Bad Request',
       message: 'Invalid input',
-      fields: [{ field: 'displayName', message: 'must not be empty' }, { field: 'captcha', message: 'is missing' }],
+      fields: [
+        { field: 'displayName', message: 'must not be empty' },
+        { field: 'captcha', message: 'is missing' },
+      ],
     });
     expect(describeAuthFailure(error, 'register', fields)).toEqual({
       fields: { displayName: 'Must not be empty' },

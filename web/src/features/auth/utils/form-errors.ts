@@ -9,7 +9,11 @@ export const EMAIL_TAKEN_MESSAGE = 'An account with this e-mail already exists. 
  * A failed sign-in or register call in words: the answers only these two calls give (throttled,
  * wrong password, e-mail taken), then the API's 400 fields as any form reads them.
  */
-export function describeAuthFailure<K extends string>(error: unknown, action: 'sign-in' | 'register', knownFields: readonly K[]): FormFailure<K> {
+export function describeAuthFailure<K extends string>(
+  error: unknown,
+  action: 'sign-in' | 'register',
+  knownFields: readonly K[],
+): FormFailure<K> {
   if (isApiRequestError(error)) {
     if (error.statusCode === 429) return { fields: {}, message: THROTTLED_MESSAGE };
     if (action === 'sign-in' && error.statusCode === 401) return { fields: {}, message: WRONG_CREDENTIALS_MESSAGE };

@@ -24,7 +24,10 @@ export function BloomStrip({ months, swatch }: { months: readonly number[]; swat
         return (
           <div key={month} className={inBloom ? `${styles.month} ${styles.inBloom}` : styles.month}>
             {MONTH_WORDS[month].initial}
-            <div className={inBloom ? `${styles.bar} ${styles.barInBloom}` : styles.bar} style={inBloom ? { backgroundColor: swatch.fill } : undefined} />
+            <div
+              className={inBloom ? `${styles.bar} ${styles.barInBloom}` : styles.bar}
+              style={inBloom ? { backgroundColor: swatch.fill } : undefined}
+            />
           </div>
         );
       })}

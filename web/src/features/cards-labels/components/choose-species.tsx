@@ -9,7 +9,12 @@ import { SpeciesSearch } from './species-search.js';
 
 const useStyles = makeStyles({
   card: { marginBottom: tokens.spacingVerticalXL },
-  ways: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(280px, 1fr))', gap: tokens.spacingHorizontalXXL, marginBottom: tokens.spacingVerticalXL },
+  ways: {
+    display: 'grid',
+    gridTemplateColumns: 'repeat(auto-fit, minmax(280px, 1fr))',
+    gap: tokens.spacingHorizontalXXL,
+    marginBottom: tokens.spacingVerticalXL,
+  },
 });
 
 export interface ChooseSpeciesProps {
@@ -26,7 +31,9 @@ export function ChooseSpecies({ slugs, entries, onAdd, onRemove, onClear }: Choo
   const headingId = useId();
   return (
     <ContentCard className={styles.card} aria-labelledby={headingId}>
-      <Heading level="section" id={headingId}>Choose species</Heading>
+      <Heading level="section" id={headingId}>
+        Choose species
+      </Heading>
       <div className={styles.ways}>
         <SpeciesSearch chosen={slugs} onAdd={(s) => onAdd([s.slug])} />
         <PastedNames onAdd={onAdd} />

@@ -12,7 +12,15 @@ const useStyles = makeStyles({
 });
 
 /** Fact cards, four to a printed page. */
-export function FactCardSheets({ species, paper, qr }: { species: readonly SpeciesDetail[]; paper: PaperSpec; qr: QrEncoderState }) {
+export function FactCardSheets({
+  species,
+  paper,
+  qr,
+}: {
+  species: readonly SpeciesDetail[];
+  paper: PaperSpec;
+  qr: QrEncoderState;
+}) {
   const styles = useStyles();
   const sheets = intoSheets(species, CARDS_PER_SHEET);
   return (

@@ -35,9 +35,15 @@ describe('fact card', () => {
     expect(c.getByText('Full sun or part shade')).toBeInTheDocument();
     expect(c.getByText('Dry or medium-moist soil')).toBeInTheDocument();
     expect(c.getByText('12–30 in (30–75 cm)')).toBeInTheDocument();
-    expect(c.getByText(/Asclepias hosts the caterpillars of 12 moth and butterfly species \(Tallamy & Shropshire 2009\)/)).toBeInTheDocument();
+    expect(
+      c.getByText(/Asclepias hosts the caterpillars of 12 moth and butterfly species \(Tallamy & Shropshire 2009\)/),
+    ).toBeInTheDocument();
     expect(c.getByText(/Monarch host plant/)).toBeInTheDocument();
-    expect(c.getByText(/^Cold-moist stratification, 30 days: mix the seed with damp sand in a sealed bag in the refrigerator\./)).toBeInTheDocument();
+    expect(
+      c.getByText(
+        /^Cold-moist stratification, 30 days: mix the seed with damp sand in a sealed bag in the refrigerator\./,
+      ),
+    ).toBeInTheDocument();
     expect(c.getByText('Sow 6 mm (¼ in) deep.')).toBeInTheDocument();
     expect(c.getByText(/Works with winter sowing in covered containers/)).toBeInTheDocument();
   });

@@ -4,7 +4,13 @@ import { ErrorState } from '../../../components/states/index.js';
 import { MAX_PASTED_NAMES, pastedNames, useNameResolver } from '../hooks/use-name-resolver.js';
 
 const useStyles = makeStyles({
-  actions: { marginTop: tokens.spacingVerticalS, display: 'flex', gap: tokens.spacingHorizontalM, alignItems: 'center', flexWrap: 'wrap' },
+  actions: {
+    marginTop: tokens.spacingVerticalS,
+    display: 'flex',
+    gap: tokens.spacingHorizontalM,
+    alignItems: 'center',
+    flexWrap: 'wrap',
+  },
   result: { margin: `${tokens.spacingVerticalS} 0 0`, paddingLeft: tokens.spacingHorizontalXL },
   scientific: { fontStyle: 'italic' },
   missing: { margin: `${tokens.spacingVerticalS} 0 0` },
@@ -29,7 +35,13 @@ export function PastedNames({ onAdd }: { onAdd: (slugs: string[]) => void }) {
   return (
     <div>
       <Field label="Or paste a list" hint={`One name per line, common or scientific; up to ${MAX_PASTED_NAMES} names.`}>
-        <Textarea value={text} onChange={(_, d) => setText(d.value)} rows={4} resize="vertical" placeholder={'wild bergamot\nbuterfly weed\nZizia aurea'} />
+        <Textarea
+          value={text}
+          onChange={(_, d) => setText(d.value)}
+          rows={4}
+          resize="vertical"
+          placeholder={'wild bergamot\nbuterfly weed\nZizia aurea'}
+        />
       </Field>
       <div className={styles.actions}>
         <Button disabled={names.length === 0 || state.status === 'working'} onClick={() => void submit()}>
@@ -37,19 +49,23 @@ export function PastedNames({ onAdd }: { onAdd: (slugs: string[]) => void }) {
         </Button>
       </div>
       <div aria-live="polite">
-        {state.status === 'failed' ? <ErrorState title="The list could not be looked up." message={state.message} /> : null}
+        {state.status === 'failed' ? (
+          <ErrorState title="The list could not be looked up." message={state.message} />
+        ) : null}
         {found.length > 0 ? (
           <ul className={styles.result} aria-label="Names found">
             {found.map((r) => (
               <li key={r.typed}>
-                “{r.typed}”: added {r.match!.commonName} (<span className={styles.scientific}>{r.match!.scientificName}</span>)
+                “{r.typed}”: added {r.match!.commonName} (
+                <span className={styles.scientific}>{r.match!.scientificName}</span>)
               </li>
             ))}
           </ul>
         ) : null}
         {notFound.length > 0 ? (
           <p className={styles.missing} role="status">
-            Not found in the catalogue, so not added: {notFound.map((r) => `“${r.typed}”`).join(', ')}. Check the spelling, or try the scientific name.
+            Not found in the catalogue, so not added: {notFound.map((r) => `“${r.typed}”`).join(', ')}. Check the
+            spelling, or try the scientific name.
           </p>
         ) : null}
       </div>

@@ -10,21 +10,31 @@ const useStyles = makeStyles({
 });
 
 /** Pot labels, `copies` of each species side by side, as many to a page as the paper holds. */
-export function PotLabelSheets({ species, paper, copies, sowDate }: {
+export function PotLabelSheets({
+  species,
+  paper,
+  copies,
+  sowDate,
+}: {
   species: readonly SpeciesDetail[];
   paper: PaperSpec;
   copies: number;
   sowDate: string;
 }) {
   const styles = useStyles();
-  const labels = species.flatMap((s) => Array.from({ length: copies }, (_, copy) => ({ species: s, key: `${s.slug}-${copy}` })));
+  const labels = species.flatMap((s) =>
+    Array.from({ length: copies }, (_, copy) => ({ species: s, key: `${s.slug}-${copy}` })),
+  );
   const sheets = intoSheets(labels, labelsPerSheet(paper));
   const { columns, labelWidth, labelHeight } = paper.labels;
   return (
     <PrintArea geometry={paper.labels} pageCount={sheets.length} label="Pot labels as they will print">
       {sheets.map((sheet, i) => (
         <Sheet key={i} geometry={paper.labels} index={i} total={sheets.length} className={styles.grid}>
-          <div className={styles.grid} style={{ gridTemplateColumns: `repeat(${columns}, ${labelWidth})`, gridAutoRows: labelHeight }}>
+          <div
+            className={styles.grid}
+            style={{ gridTemplateColumns: `repeat(${columns}, ${labelWidth})`, gridAutoRows: labelHeight }}
+          >
             {sheet.map((label) => (
               <PotLabel key={label.key} species={label.species} sowDate={sowDate} />
             ))}

@@ -28,14 +28,28 @@ function cssPx(length: string): number {
  * The pages exactly as they print, shrunk with a transform to fit a phone; the print stylesheet
  * (print-sheets.css) shows only this area on paper, one `.hg-sheet` per page.
  */
-export function PrintArea({ geometry, pageCount, label, children }: { geometry: SheetGeometry; pageCount: number; label: string; children: ReactNode }) {
+export function PrintArea({
+  geometry,
+  pageCount,
+  label,
+  children,
+}: {
+  geometry: SheetGeometry;
+  pageCount: number;
+  label: string;
+  children: ReactNode;
+}) {
   const styles = useStyles();
   const frameRef = useRef<HTMLDivElement>(null);
   const scale = usePreviewScale(frameRef, geometry.pageWidthPx);
   const fullHeight = pageCount * (cssPx(geometry.pageHeight) + PREVIEW_GAP_PX);
   const style: CSSProperties = { transform: scale < 1 ? `scale(${scale})` : undefined };
   return (
-    <div ref={frameRef} className={styles.frame} style={{ height: scale < 1 ? `${Math.ceil(fullHeight * scale)}px` : undefined }}>
+    <div
+      ref={frameRef}
+      className={styles.frame}
+      style={{ height: scale < 1 ? `${Math.ceil(fullHeight * scale)}px` : undefined }}
+    >
       <div className={mergeClasses('hg-print-area', styles.area)} style={style} role="region" aria-label={label}>
         {children}
       </div>
@@ -44,7 +58,13 @@ export function PrintArea({ geometry, pageCount, label, children }: { geometry: 
 }
 
 /** One printed page; on screen a sheet of paper with the page margin around its content. */
-export function Sheet({ geometry, index, total, className, children }: {
+export function Sheet({
+  geometry,
+  index,
+  total,
+  className,
+  children,
+}: {
   geometry: SheetGeometry;
   index: number;
   total: number;

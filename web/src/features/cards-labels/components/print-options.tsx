@@ -4,7 +4,12 @@ import { PAPERS, type PaperSize } from '../utils/paper-sizes.js';
 export type PrintKind = 'cards' | 'labels';
 
 const useStyles = makeStyles({
-  row: { display: 'flex', flexWrap: 'wrap', gap: `${tokens.spacingVerticalM} ${tokens.spacingHorizontalXXL}`, alignItems: 'flex-start' },
+  row: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    gap: `${tokens.spacingVerticalM} ${tokens.spacingHorizontalXXL}`,
+    alignItems: 'flex-start',
+  },
   narrow: { width: '12rem', maxWidth: '100%' },
 });
 
@@ -15,13 +20,25 @@ export interface PrintOptionsValue {
 }
 
 /** Paper for both layouts; sow date and labels per species for pot labels only. */
-export function PrintOptions({ kind, value, onChange }: { kind: PrintKind; value: PrintOptionsValue; onChange: (next: PrintOptionsValue) => void }) {
+export function PrintOptions({
+  kind,
+  value,
+  onChange,
+}: {
+  kind: PrintKind;
+  value: PrintOptionsValue;
+  onChange: (next: PrintOptionsValue) => void;
+}) {
   const styles = useStyles();
   const paper = PAPERS[value.paper];
   return (
     <div className={styles.row}>
       <Field label="Paper" hint={kind === 'labels' ? `Labels ${paper.labels.sizeWords}` : 'Four fact cards a page'}>
-        <RadioGroup layout="horizontal" value={value.paper} onChange={(_, d) => onChange({ ...value, paper: d.value as PaperSize })}>
+        <RadioGroup
+          layout="horizontal"
+          value={value.paper}
+          onChange={(_, d) => onChange({ ...value, paper: d.value as PaperSize })}
+        >
           {Object.values(PAPERS).map((p) => (
             <Radio key={p.id} value={p.id} label={p.label} />
           ))}
@@ -30,7 +47,12 @@ export function PrintOptions({ kind, value, onChange }: { kind: PrintKind; value
       {kind === 'labels' ? (
         <>
           <Field label="Sow date" hint="Printed on every label; leave empty to write it by hand.">
-            <Input className={styles.narrow} type="date" value={value.sowDate} onChange={(_, d) => onChange({ ...value, sowDate: d.value })} />
+            <Input
+              className={styles.narrow}
+              type="date"
+              value={value.sowDate}
+              onChange={(_, d) => onChange({ ...value, sowDate: d.value })}
+            />
           </Field>
           <Field label="Labels per species" hint="One for each pot or tray you sow.">
             <SpinButton
@@ -40,7 +62,8 @@ export function PrintOptions({ kind, value, onChange }: { kind: PrintKind; value
               value={value.copies}
               onChange={(_, d) => {
                 const next = d.value ?? Number.parseInt(d.displayValue ?? '', 10);
-                if (Number.isFinite(next)) onChange({ ...value, copies: Math.min(30, Math.max(1, Math.round(next as number))) });
+                if (Number.isFinite(next))
+                  onChange({ ...value, copies: Math.min(30, Math.max(1, Math.round(next as number))) });
               }}
             />
           </Field>

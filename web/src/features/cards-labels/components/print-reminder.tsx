@@ -29,8 +29,8 @@ export function PrintReminder({ species }: { species: readonly SpeciesDetail[] }
       <Info20Regular className={styles.icon} aria-hidden />
       <div>
         <p className={styles.text}>
-          Before you plant or share, check your state&apos;s noxious-weed list and any local rules: a plant native to one
-          county can be restricted in the next.
+          Before you plant or share, check your state&apos;s noxious-weed list and any local rules: a plant native to
+          one county can be restricted in the next.
         </p>
         <p className={styles.text}>
           {hasSap

@@ -16,7 +16,12 @@ import { PrintOptions, type PrintKind, type PrintOptionsValue } from './print-op
 import { PrintReminder } from './print-reminder.js';
 
 const useStyles = makeStyles({
-  controls: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL, marginBottom: tokens.spacingVerticalXL },
+  controls: {
+    display: 'flex',
+    flexDirection: 'column',
+    gap: tokens.spacingVerticalL,
+    marginBottom: tokens.spacingVerticalXL,
+  },
   actions: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalM },
   legend: { margin: 0, color: tokens.colorNeutralForeground2 },
 });
@@ -28,22 +33,39 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
   const tabsId = useId();
   const qr = useQrEncoder();
   const [kind, setKind] = useState<PrintKind>('cards');
-  const [options, setOptions] = useState<PrintOptionsValue>(() => ({ paper: 'letter', sowDate: todayIso(), copies: 1 }));
+  const [options, setOptions] = useState<PrintOptionsValue>(() => ({
+    paper: 'letter',
+    sowDate: todayIso(),
+    copies: 1,
+  }));
   const paper = PAPERS[options.paper];
   const geometry = kind === 'cards' ? paper.cards : paper.labels;
-  const pages = kind === 'cards' ? intoSheets(species, CARDS_PER_SHEET).length : intoSheets(species.flatMap((s) => Array(options.copies).fill(s)), labelsPerSheet(paper)).length;
-  const what = kind === 'cards' ? countOf(species.length, 'fact card') : countOf(species.length * options.copies, 'pot label');
+  const pages =
+    kind === 'cards'
+      ? intoSheets(species, CARDS_PER_SHEET).length
+      : intoSheets(
+          species.flatMap((s) => Array(options.copies).fill(s)),
+          labelsPerSheet(paper),
+        ).length;
+  const what =
+    kind === 'cards' ? countOf(species.length, 'fact card') : countOf(species.length * options.copies, 'pot label');
   const canPrint = species.length > 0 && !isLoading;
 
   return (
     <ContentCard aria-labelledby={headingId}>
       {/* The page's paper size and margin for the browser's print dialog and PDF. */}
       <style>{`@page { size: ${paper.cssSize}; margin: ${geometry.margin}; }`}</style>
-      <Heading level="section" id={headingId}>Print</Heading>
+      <Heading level="section" id={headingId}>
+        Print
+      </Heading>
       <div className={styles.controls}>
         <TabList selectedValue={kind} onTabSelect={(_, d) => setKind(d.value as PrintKind)} aria-label="What to print">
-          <Tab id={`${tabsId}-cards`} value="cards">Fact cards</Tab>
-          <Tab id={`${tabsId}-labels`} value="labels">Pot labels</Tab>
+          <Tab id={`${tabsId}-cards`} value="cards">
+            Fact cards
+          </Tab>
+          <Tab id={`${tabsId}-labels`} value="labels">
+            Pot labels
+          </Tab>
         </TabList>
         <PrintOptions kind={kind} value={options} onChange={setOptions} />
         {kind === 'labels' ? (
@@ -56,18 +78,32 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
           <Button appearance="primary" icon={<Print20Regular />} disabled={!canPrint} onClick={() => window.print()}>
             {kind === 'cards' ? 'Print fact cards' : 'Print pot labels'}
           </Button>
-          <span aria-live="polite">{canPrint ? `${what} on ${countOf(pages, 'page')}` : isLoading ? 'Getting the plant records…' : 'Choose at least one species to print.'}</span>
+          <span aria-live="polite">
+            {canPrint
+              ? `${what} on ${countOf(pages, 'page')}`
+              : isLoading
+                ? 'Getting the plant records…'
+                : 'Choose at least one species to print.'}
+          </span>
         </div>
       </div>
       <div role="tabpanel" aria-labelledby={`${tabsId}-${kind}`}>
         {isLoading && species.length === 0 ? (
           <LoadingState label="Getting the plant records" />
         ) : species.length === 0 ? (
-          <EmptyState title="Nothing to print yet">Search for a species or paste a list above, and its {kind === 'cards' ? 'fact card' : 'pot label'} appears here as it will print.</EmptyState>
+          <EmptyState title="Nothing to print yet">
+            Search for a species or paste a list above, and its {kind === 'cards' ? 'fact card' : 'pot label'} appears
+            here as it will print.
+          </EmptyState>
         ) : kind === 'cards' ? (
           <FactCardSheets species={species} paper={paper} qr={qr} />
         ) : (
-          <PotLabelSheets species={species} paper={paper} copies={options.copies} sowDate={sowDateWords(options.sowDate)} />
+          <PotLabelSheets
+            species={species}
+            paper={paper}
+            copies={options.copies}
+            sowDate={sowDateWords(options.sowDate)}
+          />
         )}
       </div>
     </ContentCard>

@@ -15,11 +15,24 @@ export function QrCode({ url, encoder }: { url: string; encoder: QrEncoderState 
   const styles = useStyles();
   const matrix = useMemo(() => (encoder.status === 'ready' ? encoder.encode(url) : null), [encoder, url]);
   if (!matrix) {
-    return <div className={styles.pending} role="img" aria-label={encoder.status === 'failed' ? `QR code could not be drawn; link: ${url}` : 'Drawing the QR code'} />;
+    return (
+      <div
+        className={styles.pending}
+        role="img"
+        aria-label={encoder.status === 'failed' ? `QR code could not be drawn; link: ${url}` : 'Drawing the QR code'}
+      />
+    );
   }
   const side = matrix.size + QUIET_ZONE * 2;
   return (
-    <svg className={styles.svg} viewBox={`0 0 ${side} ${side}`} role="img" aria-label={`QR code linking to ${url}`} data-url={url} shapeRendering="crispEdges">
+    <svg
+      className={styles.svg}
+      viewBox={`0 0 ${side} ${side}`}
+      role="img"
+      aria-label={`QR code linking to ${url}`}
+      data-url={url}
+      shapeRendering="crispEdges"
+    >
       <title>{`QR code linking to ${url}`}</title>
       <rect className={styles.light} width={side} height={side} />
       <path className={styles.dark} d={qrPathData(matrix)} />

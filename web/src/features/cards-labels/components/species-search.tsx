@@ -23,11 +23,20 @@ const useStyles = makeStyles({
 });
 
 /** Searches the catalogue (typo-tolerant) and adds a result to the chosen list. */
-export function SpeciesSearch({ chosen, onAdd }: { chosen: readonly string[]; onAdd: (species: SpeciesSummary) => void }) {
+export function SpeciesSearch({
+  chosen,
+  onAdd,
+}: {
+  chosen: readonly string[];
+  onAdd: (species: SpeciesSummary) => void;
+}) {
   const styles = useStyles();
   const [text, setText] = useState('');
   const q = useDebouncedValue(text.trim(), 300);
-  const search = useQuery({ ...speciesListQueryOptions({ q, pageSize: 8, sort: 'relevance' }), enabled: q.length >= 2 });
+  const search = useQuery({
+    ...speciesListQueryOptions({ q, pageSize: 8, sort: 'relevance' }),
+    enabled: q.length >= 2,
+  });
   const items = q.length >= 2 ? (search.data?.items ?? []) : [];
 
   return (
@@ -36,8 +45,18 @@ export function SpeciesSearch({ chosen, onAdd }: { chosen: readonly string[]; on
         <SearchBox value={text} onChange={(_, d) => setText(d.value)} placeholder="e.g. butterfly weed" />
       </Field>
       {search.isFetching && q.length >= 2 ? <Spinner className={styles.status} size="tiny" label="Searching" /> : null}
-      {search.isError ? <ErrorState title="The search did not answer." message={search.error.message} onRetry={() => void search.refetch()} /> : null}
-      {search.isSuccess && q.length >= 2 && items.length === 0 ? <p className={styles.status} role="status">No species match “{q}”.</p> : null}
+      {search.isError ? (
+        <ErrorState
+          title="The search did not answer."
+          message={search.error.message}
+          onRetry={() => void search.refetch()}
+        />
+      ) : null}
+      {search.isSuccess && q.length >= 2 && items.length === 0 ? (
+        <p className={styles.status} role="status">
+          No species match “{q}”.
+        </p>
+      ) : null}
       {items.length > 0 ? (
         <ul className={styles.list} aria-label="Search results">
           {items.map((s) => {

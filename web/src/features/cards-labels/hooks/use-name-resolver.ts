@@ -41,7 +41,9 @@ export function useNameResolver() {
       try {
         const results = await Promise.all(
           names.map(async (typed) => {
-            const page = await queryClient.fetchQuery(speciesListQueryOptions({ q: typed, pageSize: 1, sort: 'relevance' }));
+            const page = await queryClient.fetchQuery(
+              speciesListQueryOptions({ q: typed, pageSize: 1, sort: 'relevance' }),
+            );
             return { typed, match: page.items[0] ?? null };
           }),
         );

@@ -22,7 +22,10 @@ export function fakeSpeciesSearch(search: (q: string) => readonly SpeciesDetail[
     const q = url.searchParams.get('q') ?? '';
     queries.push(q);
     const items: SpeciesSummary[] = search(q).map(summaryOf);
-    return new Response(JSON.stringify({ items, total: items.length, page: 1, pageSize: 8 }), { status: 200, headers: { 'Content-Type': 'application/json' } });
+    return new Response(JSON.stringify({ items, total: items.length, page: 1, pageSize: 8 }), {
+      status: 200,
+      headers: { 'Content-Type': 'application/json' },
+    });
   });
   return { queries };
 }

@@ -5,8 +5,27 @@ import type { SpeciesDetail } from '../../../api/species/species.api.js';
 // monarda-fistulosa.json, zizia-aurea.json; each fact's source key is in those files). Only the
 // fields a fact card or pot label prints matter here.
 
-type Shared = 'synonyms' | 'lifespan' | 'growthForm' | 'soilTextures' | 'nativeStates' | 'habitats' | 'spreadHabit' | 'deerResistance' | 'tags' | 'sources' | 'reconciliations' | 'hasPhoto'
-  | 'ecoregions' | 'sunOptimum' | 'moistureOptimum' | 'wetlandIndicator' | 'needsAcidSoil' | 'selfSows' | 'commercialAvailability' | 'protectedIn';
+type Shared =
+  | 'synonyms'
+  | 'lifespan'
+  | 'growthForm'
+  | 'soilTextures'
+  | 'nativeStates'
+  | 'habitats'
+  | 'spreadHabit'
+  | 'deerResistance'
+  | 'tags'
+  | 'sources'
+  | 'reconciliations'
+  | 'hasPhoto'
+  | 'ecoregions'
+  | 'sunOptimum'
+  | 'moistureOptimum'
+  | 'wetlandIndicator'
+  | 'needsAcidSoil'
+  | 'selfSows'
+  | 'commercialAvailability'
+  | 'protectedIn';
 
 const COMMON: Pick<SpeciesDetail, Shared> = {
   synonyms: [],
@@ -47,9 +66,16 @@ export const butterflyMilkweed: SpeciesDetail = {
   flowerColours: ['orange'],
   sun: ['full', 'part'],
   moisture: ['dry', 'medium'],
-  wildlife: { lepidopteraGenusCount: 12, monarchHost: true, pollinators: 'Nectar for butterflies, bumble bees and many native bees in early to mid summer.', specialistBees: [] },
+  wildlife: {
+    lepidopteraGenusCount: 12,
+    monarchHost: true,
+    pollinators: 'Nectar for butterflies, bumble bees and many native bees in early to mid summer.',
+    specialistBees: [],
+  },
   germination: {
-    treatments: [{ kind: 'cold-moist', days: 30, note: 'Chill damp, never dry: dry chilling gives far poorer germination.' }],
+    treatments: [
+      { kind: 'cold-moist', days: 30, note: 'Chill damp, never dry: dry chilling gives far poorer germination.' },
+    ],
     needsLight: false,
     sowingDepthMm: 6,
     seedsPerPound: 70000,
@@ -57,8 +83,16 @@ export const butterflyMilkweed: SpeciesDetail = {
     methods: ['winter-sowing', 'outdoor-pot-winter', 'indoor-lights', 'direct-seed'],
   },
   cautions: [
-    { kind: 'sap-irritant', text: 'Milky sap can injure the eye hours after contact: keep it off your face and wash hands after handling stems and pods.', source: 'uf-milkweed-toxicity-2019' },
-    { kind: 'toxic-if-eaten', text: 'Contains cardiac glycosides; listed in an extension poisonous-plant manual. Keep away from grazing animals.', source: 'auburn-poisonous-plants' },
+    {
+      kind: 'sap-irritant',
+      text: 'Milky sap can injure the eye hours after contact: keep it off your face and wash hands after handling stems and pods.',
+      source: 'uf-milkweed-toxicity-2019',
+    },
+    {
+      kind: 'toxic-if-eaten',
+      text: 'Contains cardiac glycosides; listed in an extension poisonous-plant manual. Keep away from grazing animals.',
+      source: 'auburn-poisonous-plants',
+    },
   ],
 };
 
@@ -75,7 +109,12 @@ export const wildBergamot: SpeciesDetail = {
   flowerColours: ['lavender', 'pink'],
   sun: ['full', 'part'],
   moisture: ['dry', 'medium'],
-  wildlife: { lepidopteraGenusCount: 7, monarchHost: false, pollinators: 'Bumble bees, hummingbird moths and butterflies all summer.', specialistBees: [] },
+  wildlife: {
+    lepidopteraGenusCount: 7,
+    monarchHost: false,
+    pollinators: 'Bumble bees, hummingbird moths and butterflies all summer.',
+    specialistBees: [],
+  },
   germination: {
     treatments: [{ kind: 'none', note: 'No pretreatment needed; surface sow or barely cover, since light helps.' }],
     needsLight: true,
@@ -98,9 +137,27 @@ export const goldenAlexanders: SpeciesDetail = {
   bloomMonths: [5, 6],
   flowerColours: ['yellow'],
   moisture: ['medium', 'wet'],
-  wildlife: { lepidopteraGenusCount: 4, monarchHost: false, pollinators: 'Early nectar for small bees, flies and wasps.', specialistBees: [] },
-  germination: { treatments: [{ kind: 'cold-moist', days: 90 }], needsLight: false, sowingDepthMm: 3, seedsPerPound: null, germinationRatePct: 50, methods: ['winter-sowing'] },
-  cautions: [{ kind: 'look-alike', text: 'Carrot-family plants are hard to tell apart, and water hemlock and poison hemlock are deadly: never eat wild carrot-family plants.', source: 'from-memory' }],
+  wildlife: {
+    lepidopteraGenusCount: 4,
+    monarchHost: false,
+    pollinators: 'Early nectar for small bees, flies and wasps.',
+    specialistBees: [],
+  },
+  germination: {
+    treatments: [{ kind: 'cold-moist', days: 90 }],
+    needsLight: false,
+    sowingDepthMm: 3,
+    seedsPerPound: null,
+    germinationRatePct: 50,
+    methods: ['winter-sowing'],
+  },
+  cautions: [
+    {
+      kind: 'look-alike',
+      text: 'Carrot-family plants are hard to tell apart, and water hemlock and poison hemlock are deadly: never eat wild carrot-family plants.',
+      source: 'from-memory',
+    },
+  ],
 };
 
 /** `count` distinct records (slugs suffixed -2, -3 …) for paging tests. */

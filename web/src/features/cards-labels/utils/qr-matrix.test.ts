@@ -10,7 +10,14 @@ describe('QR matrix', () => {
     expect((matrix.size - 17) % 4).toBe(0);
     expect(matrix.size).toBeGreaterThanOrEqual(29);
     const last = matrix.size - 1;
-    for (const [r, c] of [[0, 0], [0, last], [last, 0], [6, 6], [0, last - 6], [last - 6, 0]]) {
+    for (const [r, c] of [
+      [0, 0],
+      [0, last],
+      [last, 0],
+      [6, 6],
+      [0, last - 6],
+      [last - 6, 0],
+    ]) {
       expect(matrix.isDark(r, c)).toBe(true);
     }
     // Just inside the finder's dark ring is its light ring.

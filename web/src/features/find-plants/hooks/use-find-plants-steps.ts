@@ -1,10 +1,22 @@
 import { useCallback, useEffect, useMemo, useRef } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { MAIN_CONTENT_ID } from '../../../components/app-shell/app-shell.js';
-import { type FindPlantsStep, type MixPlan, type MixRegion, paths, stepOf, withGround, withStep } from '../../../config/paths.js';
+import {
+  type FindPlantsStep,
+  type MixPlan,
+  type MixRegion,
+  paths,
+  stepOf,
+  withGround,
+  withStep,
+} from '../../../config/paths.js';
 import { useDocumentTitle } from '../../../lib/use-document-title.js';
 
-const STEP_TITLES: Record<FindPlantsStep, string> = { ground: 'Find plants: your ground', yard: 'Find plants: your yard', mix: 'Your yard mix' };
+const STEP_TITLES: Record<FindPlantsStep, string> = {
+  ground: 'Find plants: your ground',
+  yard: 'Find plants: your yard',
+  mix: 'Your yard mix',
+};
 
 /**
  * Find plants: your ground → your yard → your yard mix. The step and every answer live in the URL,
@@ -23,7 +35,8 @@ export function useFindPlantsSteps() {
   /** Your ground is chosen: on to the yard, keeping any yard answers but not a finished mix. */
   const confirmGround = (ground: MixRegion) => setParams(withGround(params, ground));
   const changePlan = useCallback(
-    (plan: MixPlan, options?: { replace?: boolean }) => setParams(paths.findPlants.search({ plan }), { replace: options?.replace ?? false }),
+    (plan: MixPlan, options?: { replace?: boolean }) =>
+      setParams(paths.findPlants.search({ plan }), { replace: options?.replace ?? false }),
     [setParams],
   );
 

@@ -11,7 +11,13 @@ import { MemberList } from './member-list.js';
 
 const useStyles = makeStyles({
   stack: { display: 'grid', gap: tokens.spacingVerticalXL, maxWidth: '880px' },
-  facts: { display: 'grid', gridTemplateColumns: 'max-content 1fr', columnGap: tokens.spacingHorizontalXL, rowGap: tokens.spacingVerticalS, margin: 0 },
+  facts: {
+    display: 'grid',
+    gridTemplateColumns: 'max-content 1fr',
+    columnGap: tokens.spacingHorizontalXL,
+    rowGap: tokens.spacingVerticalS,
+    margin: 0,
+  },
   value: { margin: 0 },
 });
 
@@ -28,7 +34,8 @@ export function GroupPage({ slug, myRole }: { slug: string; myRole: GroupRole | 
         <>
           <PageIntro title={g.name}>
             A community growing group in {g.town}, {stateName(g.state as StateCode)}
-            {g.ecoregionCode ? `, ecoregion ${g.ecoregionCode}` : ''}: {g.members} {g.members === 1 ? 'person' : 'people'}.
+            {g.ecoregionCode ? `, ecoregion ${g.ecoregionCode}` : ''}: {g.members}{' '}
+            {g.members === 1 ? 'person' : 'people'}.
           </PageIntro>
           <div className={styles.stack}>
             {myRole ? <Members slug={slug} canManage={myRole === 'organiser'} /> : null}

@@ -29,12 +29,32 @@ export function InviteForm({ slug, groupName }: { slug: string; groupName: strin
   });
 
   return (
-    <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-label={`Invite someone to ${groupName}`}>
-      {form.failure ? <p className={styles.failure} role="alert">{form.failure}</p> : null}
+    <form
+      ref={form.formRef}
+      className={styles.form}
+      onSubmit={submit}
+      noValidate
+      aria-label={`Invite someone to ${groupName}`}
+    >
+      {form.failure ? (
+        <p className={styles.failure} role="alert">
+          {form.failure}
+        </p>
+      ) : null}
       <Field label="Their e-mail" required {...form.validation('email')}>
-        <Input type="email" name="email" autoComplete="off" value={form.values.email} onChange={(_, d) => form.change('email', d.value)} />
+        <Input
+          type="email"
+          name="email"
+          autoComplete="off"
+          value={form.values.email}
+          onChange={(_, d) => form.change('email', d.value)}
+        />
       </Field>
-      <Field label="Role in the group" hint={GROUP_ROLE_WORDS[form.values.role as keyof typeof GROUP_ROLE_WORDS]?.does} {...form.validation('role')}>
+      <Field
+        label="Role in the group"
+        hint={GROUP_ROLE_WORDS[form.values.role as keyof typeof GROUP_ROLE_WORDS]?.does}
+        {...form.validation('role')}
+      >
         <Select name="role" value={form.values.role} onChange={(_, d) => form.change('role', d.value)}>
           {GROUP_ROLES.map((r) => (
             <option key={r} value={r}>

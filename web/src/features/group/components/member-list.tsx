@@ -1,6 +1,19 @@
 import {
-  Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, Table, TableBody,
-  TableCell, TableHeader, TableHeaderCell, TableRow, tokens,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogBody,
+  DialogContent,
+  DialogSurface,
+  DialogTitle,
+  makeStyles,
+  Table,
+  TableBody,
+  TableCell,
+  TableHeader,
+  TableHeaderCell,
+  TableRow,
+  tokens,
 } from '@fluentui/react-components';
 import { GROUP_ROLE_WORDS, type GroupMember } from '@homeground/shared';
 import { useState } from 'react';
@@ -38,7 +51,11 @@ export function MemberList({ slug, members, canManage }: { slug: string; members
               {showEmail ? <TableCell className={styles.email}>{m.email}</TableCell> : null}
               {canManage ? (
                 <TableCell>
-                  <Button size="small" onClick={() => setLeaving(m)} aria-label={`Remove ${m.displayName} from the group`}>
+                  <Button
+                    size="small"
+                    onClick={() => setLeaving(m)}
+                    aria-label={`Remove ${m.displayName} from the group`}
+                  >
                     Remove
                   </Button>
                 </TableCell>
@@ -47,7 +64,11 @@ export function MemberList({ slug, members, canManage }: { slug: string; members
           ))}
         </TableBody>
       </Table>
-      {remove.isError ? <p className={styles.failure} role="alert">{remove.error.message}</p> : null}
+      {remove.isError ? (
+        <p className={styles.failure} role="alert">
+          {remove.error.message}
+        </p>
+      ) : null}
       <Dialog open={leaving !== null} onOpenChange={(_, d) => !d.open && setLeaving(null)}>
         <DialogSurface>
           <DialogBody>

@@ -13,7 +13,8 @@ export function ApiStatusLine() {
   const styles = useStyles();
   const health = useQuery(healthQueryOptions());
   if (health.isPending) return <p className={styles.line}>Checking the API…</p>;
-  if (health.isError) return <p className={styles.line}>The API did not answer its health check: {health.error.message}</p>;
+  if (health.isError)
+    return <p className={styles.line}>The API did not answer its health check: {health.error.message}</p>;
   const { version, database } = health.data;
   return (
     <p className={styles.line}>

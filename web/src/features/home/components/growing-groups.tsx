@@ -37,7 +37,11 @@ export function GrowingGroups() {
         loading={<Spinner size="small" label="Loading the groups" />}
         error="The list of groups did not load."
         isEmpty={(data) => data.length === 0}
-        empty={() => <EmptyState title="No growing groups have joined yet.">When a group starts its first season, it shows here.</EmptyState>}
+        empty={() => (
+          <EmptyState title="No growing groups have joined yet.">
+            When a group starts its first season, it shows here.
+          </EmptyState>
+        )}
       >
         {(data) => (
           <ul className={styles.list}>

@@ -14,8 +14,8 @@ export function HomeHero() {
   return (
     <div className={styles.hero}>
       <PageIntro title="Grow the native plants that belong to your ground">
-        Homeground helps community growing groups choose the native plants of their ecoregion, grow them from seed
-        over winter, and share them with neighbours in spring.
+        Homeground helps community growing groups choose the native plants of their ecoregion, grow them from seed over
+        winter, and share them with neighbours in spring.
       </PageIntro>
       <RouterButton to={paths.findPlants.build()} appearance="primary" size="large" icon={<ArrowRight20Regular />}>
         Find plants for your ground

@@ -5,18 +5,15 @@ import { Heading } from '../../../components/page/page-heading.js';
 const STEPS = [
   {
     title: 'Choose',
-    text:
-      'Tell Homeground where your ground is: state, county or ecoregion. It suggests a yard mix of native plants that grow there, with something in bloom from spring to frost, and says why each one fits.',
+    text: 'Tell Homeground where your ground is: state, county or ecoregion. It suggests a yard mix of native plants that grow there, with something in bloom from spring to frost, and says why each one fits.',
   },
   {
     title: 'Grow',
-    text:
-      'Many native seeds need cold-moist stratification: a few weeks of cold, damp rest before they sprout. Homeground counts sowing dates back from your last spring frost, whether you winter-sow outdoors or start trays under lights.',
+    text: 'Many native seeds need cold-moist stratification: a few weeks of cold, damp rest before they sprout. Homeground counts sowing dates back from your last spring frost, whether you winter-sow outdoors or start trays under lights.',
   },
   {
     title: 'Share',
-    text:
-      'Your group hands the plants on at a plant share. Neighbours make a reservation and choose a pickup slot, so nobody waits in a long line and every plant finds a yard.',
+    text: 'Your group hands the plants on at a plant share. Neighbours make a reservation and choose a pickup slot, so nobody waits in a long line and every plant finds a yard.',
   },
 ] as const;
 
@@ -33,7 +30,7 @@ const useStyles = makeStyles({
 export function HowItWorks() {
   const styles = useStyles();
   return (
-    <section aria-labelledby="how-it-works" >
+    <section aria-labelledby="how-it-works">
       <Heading level="section" id="how-it-works">
         From seed to neighbour
       </Heading>

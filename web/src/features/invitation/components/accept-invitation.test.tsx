@@ -10,8 +10,15 @@ import { renderApp } from '../../../testing/render-app.js';
 const TOKEN = 'a'.repeat(43);
 const PREVIEW_PATH = `/api/invitations/${TOKEN}`;
 const preview = (over: Partial<InvitationPreview> = {}): InvitationPreview => ({
-  groupSlug: 'larkfield-commons-growers', groupName: 'Larkfield Commons Growers', town: 'Larkfield', state: 'WI',
-  role: 'grower', email: 'juniper.okafor@example.org', accountExists: false, expiresAt: '2027-01-15T00:00:00.000Z', ...over,
+  groupSlug: 'larkfield-commons-growers',
+  groupName: 'Larkfield Commons Growers',
+  town: 'Larkfield',
+  state: 'WI',
+  role: 'grower',
+  email: 'juniper.okafor@example.org',
+  accountExists: false,
+  expiresAt: '2027-01-15T00:00:00.000Z',
+  ...over,
 });
 
 describe('accepting an invitation', () => {
@@ -21,11 +28,23 @@ describe('accepting an invitation', () => {
       api: {
         [`GET ${PREVIEW_PATH}`]: { body: preview() },
         [`POST ${PREVIEW_PATH}/accept`]: { body: authFor(juniperGrower, 'juniper-token') },
-        'GET /api/groups/larkfield-commons-growers': { body: { id: 'g', slug: 'larkfield-commons-growers', name: 'Larkfield Commons Growers', town: 'Larkfield', state: 'WI', ecoregionCode: '52', members: 9 } },
+        'GET /api/groups/larkfield-commons-growers': {
+          body: {
+            id: 'g',
+            slug: 'larkfield-commons-growers',
+            name: 'Larkfield Commons Growers',
+            town: 'Larkfield',
+            state: 'WI',
+            ecoregionCode: '52',
+            members: 9,
+          },
+        },
         'GET /api/groups/larkfield-commons-growers/members': { body: [] },
       },
     });
-    expect(await screen.findByRole('heading', { level: 1, name: 'Join Larkfield Commons Growers' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Join Larkfield Commons Growers' }),
+    ).toBeInTheDocument();
     expect(screen.getByText(/raises a batch of plants over winter/)).toBeInTheDocument();
 
     await user.click(screen.getByRole('button', { name: 'Make my account and join' }));
@@ -38,11 +57,17 @@ describe('accepting an invitation', () => {
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Larkfield Commons Growers' })).toBeInTheDocument();
     expect(window.localStorage.getItem('homeground.accessToken')).toBe('juniper-token');
-    expect(api.callsTo('POST', `${PREVIEW_PATH}/accept`)[0].body).toEqual({ displayName: 'Juniper Okafor', password: 'winter-sowing-jugs' });
+    expect(api.callsTo('POST', `${PREVIEW_PATH}/accept`)[0].body).toEqual({
+      displayName: 'Juniper Okafor',
+      password: 'winter-sowing-jugs',
+    });
   });
 
   it('asks an existing account holder to sign in and come back', async () => {
-    renderApp({ path: `/invitations/${TOKEN}`, api: { [`GET ${PREVIEW_PATH}`]: { body: preview({ accountExists: true }) } } });
+    renderApp({
+      path: `/invitations/${TOKEN}`,
+      api: { [`GET ${PREVIEW_PATH}`]: { body: preview({ accountExists: true }) } },
+    });
     const link = await screen.findByRole('link', { name: 'Sign in to join' });
     expect(link).toHaveAttribute('href', `/sign-in?next=${encodeURIComponent(`/invitations/${TOKEN}`)}`);
   });
@@ -53,12 +78,17 @@ describe('accepting an invitation', () => {
       token: 'priya-token',
       api: { 'GET /api/me': { body: priyaMember }, [`GET ${PREVIEW_PATH}`]: { body: preview() } },
     });
-    expect(await screen.findByText(/was sent to juniper\.okafor@example\.org, but you are signed in as/)).toBeInTheDocument();
+    expect(
+      await screen.findByText(/was sent to juniper\.okafor@example\.org, but you are signed in as/),
+    ).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Join/ })).not.toBeInTheDocument();
   });
 
   it('says plainly when a link has been used', async () => {
-    renderApp({ path: `/invitations/${TOKEN}`, api: { [`GET ${PREVIEW_PATH}`]: apiError(410, 'This invitation has already been used.') } });
+    renderApp({
+      path: `/invitations/${TOKEN}`,
+      api: { [`GET ${PREVIEW_PATH}`]: apiError(410, 'This invitation has already been used.') },
+    });
     expect(await screen.findByText('This invitation cannot be used.')).toBeInTheDocument();
     expect(screen.getByText('This invitation has already been used.')).toBeInTheDocument();
   });

@@ -1,6 +1,11 @@
 import { Button, Field, Input, makeStyles, tokens } from '@fluentui/react-components';
 import {
-  acceptInvitationRequestSchema, type AuthResponse, GROUP_ROLE_WORDS, type InvitationPreview, PASSWORD_MIN_LENGTH, type User,
+  acceptInvitationRequestSchema,
+  type AuthResponse,
+  GROUP_ROLE_WORDS,
+  type InvitationPreview,
+  PASSWORD_MIN_LENGTH,
+  type User,
 } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { invitationPreviewQueryOptions } from '../../../api/invitations/invitations.queries.js';
@@ -52,27 +57,38 @@ function Invitation({ preview, token, user, onJoined }: AcceptInvitationProps & 
   return (
     <>
       <PageIntro title={`Join ${preview.groupName}`}>
-        You are invited to join {preview.groupName} in {preview.town}, {preview.state} as {role.title.toLowerCase()}: {role.does.toLowerCase()}
+        You are invited to join {preview.groupName} in {preview.town}, {preview.state} as {role.title.toLowerCase()}:{' '}
+        {role.does.toLowerCase()}
       </PageIntro>
       <ContentCard className={styles.card} aria-label="Accept the invitation">
         {user && user.email.toLowerCase() === preview.email ? (
           <>
             <p className={styles.lead}>You are signed in as {user.email}.</p>
-            {accept.isError ? <p className={styles.failure} role="alert">{accept.error.message}</p> : null}
+            {accept.isError ? (
+              <p className={styles.failure} role="alert">
+                {accept.error.message}
+              </p>
+            ) : null}
             <div>
-              <Button appearance="primary" disabled={accept.isPending} onClick={() => accept.mutate({}, { onSuccess: onJoined })}>
+              <Button
+                appearance="primary"
+                disabled={accept.isPending}
+                onClick={() => accept.mutate({}, { onSuccess: onJoined })}
+              >
                 Join {preview.groupName}
               </Button>
             </div>
           </>
         ) : user ? (
           <p className={styles.lead}>
-            This invitation was sent to {preview.email}, but you are signed in as {user.email}. Sign out, then open the link
-            again and sign in with {preview.email}.
+            This invitation was sent to {preview.email}, but you are signed in as {user.email}. Sign out, then open the
+            link again and sign in with {preview.email}.
           </p>
         ) : preview.accountExists ? (
           <>
-            <p className={styles.lead}>You already have an account with {preview.email}. Sign in, and you come straight back here.</p>
+            <p className={styles.lead}>
+              You already have an account with {preview.email}. Sign in, and you come straight back here.
+            </p>
             <div>
               <RouterButton appearance="primary" to={paths.signIn.build(here)}>
                 Sign in to join
@@ -87,7 +103,12 @@ function Invitation({ preview, token, user, onJoined }: AcceptInvitationProps & 
   );
 }
 
-function NewAccountForm({ email, groupName, accept, onJoined }: {
+function NewAccountForm({
+  email,
+  groupName,
+  accept,
+  onJoined,
+}: {
   email: string;
   groupName: string;
   accept: ReturnType<typeof useAcceptInvitationMutation>;
@@ -95,16 +116,44 @@ function NewAccountForm({ email, groupName, accept, onJoined }: {
 }) {
   const styles = useStyles();
   const form = useSchemaForm({ schema: newAccountSchema, initial: { displayName: '', password: '' } });
-  const submit = form.handleSubmit((body) => accept.mutate(body, { onSuccess: onJoined, onError: (error) => form.fail(error) }));
+  const submit = form.handleSubmit((body) =>
+    accept.mutate(body, { onSuccess: onJoined, onError: (error) => form.fail(error) }),
+  );
   return (
-    <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-label={`Make your account and join ${groupName}`}>
+    <form
+      ref={form.formRef}
+      className={styles.form}
+      onSubmit={submit}
+      noValidate
+      aria-label={`Make your account and join ${groupName}`}
+    >
       <p className={styles.lead}>Your account will use {email}. Choose the name your group sees and a password.</p>
-      {form.failure ? <p className={styles.failure} role="alert">{form.failure}</p> : null}
+      {form.failure ? (
+        <p className={styles.failure} role="alert">
+          {form.failure}
+        </p>
+      ) : null}
       <Field label="Your name" required {...form.validation('displayName')}>
-        <Input name="displayName" autoComplete="name" value={form.values.displayName} onChange={(_, d) => form.change('displayName', d.value)} />
+        <Input
+          name="displayName"
+          autoComplete="name"
+          value={form.values.displayName}
+          onChange={(_, d) => form.change('displayName', d.value)}
+        />
       </Field>
-      <Field label="Password" hint={`At least ${PASSWORD_MIN_LENGTH} characters. A short sentence is easy to remember.`} required {...form.validation('password')}>
-        <Input type="password" name="password" autoComplete="new-password" value={form.values.password} onChange={(_, d) => form.change('password', d.value)} />
+      <Field
+        label="Password"
+        hint={`At least ${PASSWORD_MIN_LENGTH} characters. A short sentence is easy to remember.`}
+        required
+        {...form.validation('password')}
+      >
+        <Input
+          type="password"
+          name="password"
+          autoComplete="new-password"
+          value={form.values.password}
+          onChange={(_, d) => form.change('password', d.value)}
+        />
       </Field>
       <div>
         <Button type="submit" appearance="primary" disabled={accept.isPending}>

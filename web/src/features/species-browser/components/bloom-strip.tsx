@@ -56,7 +56,11 @@ export function BloomStrip({ bloomMonths, flowerColours, size = 'compact', class
           return (
             <span
               key={month}
-              className={mergeClasses(styles.cell, isLarge ? styles.large : styles.compact, isBlooming && styles.blooming)}
+              className={mergeClasses(
+                styles.cell,
+                isLarge ? styles.large : styles.compact,
+                isBlooming && styles.blooming,
+              )}
               style={isBlooming ? { backgroundColor: swatch.fill, color: swatch.ink } : undefined}
               data-month={month}
               data-blooming={isBlooming || undefined}

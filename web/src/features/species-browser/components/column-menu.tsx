@@ -3,7 +3,13 @@ import { TableSettings20Regular } from '@fluentui/react-icons';
 import { COLUMN_LABELS, OPTIONAL_COLUMNS, type OptionalColumn } from '../hooks/use-column-choice.js';
 
 /** Show or hide table columns; the choice is remembered on this device. */
-export function ColumnMenu({ shown, onChange }: { shown: readonly OptionalColumn[]; onChange: (shown: OptionalColumn[]) => void }) {
+export function ColumnMenu({
+  shown,
+  onChange,
+}: {
+  shown: readonly OptionalColumn[];
+  onChange: (shown: OptionalColumn[]) => void;
+}) {
   return (
     <Menu
       checkedValues={{ columns: [...shown] }}

@@ -5,7 +5,11 @@ import { ecoregionListQueryOptions } from '../../../api/ecoregions/ecoregions.qu
 import { useSelectStyles } from './select-styles.js';
 
 /** EPA Level III ecoregions: those reaching into the chosen state, or all of them before one is chosen. */
-export function EcoregionSelect({ state, value, onChange }: {
+export function EcoregionSelect({
+  state,
+  value,
+  onChange,
+}: {
   state: StateCode | undefined;
   value: string | undefined;
   onChange: (code: string | undefined) => void;
@@ -15,7 +19,9 @@ export function EcoregionSelect({ state, value, onChange }: {
   const list = [...(ecoregions.data ?? [])].sort((a, b) => Number(a.code) - Number(b.code));
   const isKnown = value === undefined || list.some((e) => e.code === value);
 
-  let hint: string | undefined = state ? 'Ecoregions that reach into this state.' : 'Choose a state first to see only its ecoregions.';
+  let hint: string | undefined = state
+    ? 'Ecoregions that reach into this state.'
+    : 'Choose a state first to see only its ecoregions.';
   if (ecoregions.isPending) hint = 'Loading the ecoregions…';
   return (
     <Field
@@ -24,7 +30,13 @@ export function EcoregionSelect({ state, value, onChange }: {
       validationState={ecoregions.isError ? 'error' : 'none'}
       validationMessage={ecoregions.isError ? `The ecoregions did not load: ${ecoregions.error.message}` : undefined}
     >
-      <Select className={styles.root} select={{ className: styles.select }} value={value ?? ''} disabled={ecoregions.isPending} onChange={(_, d) => onChange(d.value || undefined)}>
+      <Select
+        className={styles.root}
+        select={{ className: styles.select }}
+        value={value ?? ''}
+        disabled={ecoregions.isPending}
+        onChange={(_, d) => onChange(d.value || undefined)}
+      >
         <option value="">Any ecoregion</option>
         {!isKnown ? <option value={value}>Ecoregion {value}</option> : null}
         {list.map((e) => (

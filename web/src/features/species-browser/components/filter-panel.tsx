@@ -1,6 +1,19 @@
 import {
-  capitaliseAll, GROWTH_FORM_WORDS, GROWTH_FORMS, type GrowthForm, MOISTURE_LEVELS, MOISTURE_WORDS, type Moisture, MONTH_NUMBERS,
-  MONTH_WORDS, STATE_NAMES, type StateCode, SUN_LEVELS, SUN_WORDS, type Sun, US_STATE_CODES,
+  capitaliseAll,
+  GROWTH_FORM_WORDS,
+  GROWTH_FORMS,
+  type GrowthForm,
+  MOISTURE_LEVELS,
+  MOISTURE_WORDS,
+  type Moisture,
+  MONTH_NUMBERS,
+  MONTH_WORDS,
+  STATE_NAMES,
+  type StateCode,
+  SUN_LEVELS,
+  SUN_WORDS,
+  type Sun,
+  US_STATE_CODES,
 } from '@homeground/shared';
 import { Button, Checkbox, Field, makeStyles, Select, tokens } from '@fluentui/react-components';
 import { Dismiss16Regular } from '@fluentui/react-icons';
@@ -31,7 +44,14 @@ const useStyles = makeStyles({
 /** States sorted by name, as people look for them, not by postal code. */
 const STATES_BY_NAME = [...US_STATE_CODES].sort((a, b) => STATE_NAMES[a].localeCompare(STATE_NAMES[b]));
 
-function OptionSelect<T extends string>({ label, anyLabel, value, options, labels, onChange }: {
+function OptionSelect<T extends string>({
+  label,
+  anyLabel,
+  value,
+  options,
+  labels,
+  onChange,
+}: {
   label: string;
   anyLabel: string;
   value: T | undefined;
@@ -42,7 +62,12 @@ function OptionSelect<T extends string>({ label, anyLabel, value, options, label
   const styles = useSelectStyles();
   return (
     <Field label={label}>
-      <Select className={styles.root} select={{ className: styles.select }} value={value ?? ''} onChange={(_, d) => onChange((d.value || undefined) as T | undefined)}>
+      <Select
+        className={styles.root}
+        select={{ className: styles.select }}
+        value={value ?? ''}
+        onChange={(_, d) => onChange((d.value || undefined) as T | undefined)}
+      >
         <option value="">{anyLabel}</option>
         {options.map((o) => (
           <option key={o} value={o}>
@@ -61,7 +86,11 @@ const MONTH_VALUES = MONTH_NUMBERS.map(String);
 const MONTH_LABELS = Object.fromEntries(MONTH_NUMBERS.map((m) => [String(m), MONTH_WORDS[m].long]));
 
 /** Every catalogue field the API filters on, each written to the URL as it changes. */
-export function FilterPanel({ state, onChange, onClear }: {
+export function FilterPanel({
+  state,
+  onChange,
+  onClear,
+}: {
   state: BrowserState;
   onChange: (change: Partial<BrowserState>) => void;
   onClear: () => void;
@@ -80,7 +109,14 @@ export function FilterPanel({ state, onChange, onClear }: {
           onChange={(v) => onChange({ state: v })}
         />
         <EcoregionSelect state={state.state} value={state.ecoregion} onChange={(v) => onChange({ ecoregion: v })} />
-        <OptionSelect<Sun> label="Sun" anyLabel="Any light" value={state.sun} options={SUN_LEVELS} labels={SUN_LABELS} onChange={(v) => onChange({ sun: v })} />
+        <OptionSelect<Sun>
+          label="Sun"
+          anyLabel="Any light"
+          value={state.sun}
+          options={SUN_LEVELS}
+          labels={SUN_LABELS}
+          onChange={(v) => onChange({ sun: v })}
+        />
         <OptionSelect<Moisture>
           label="Soil moisture"
           anyLabel="Any moisture"

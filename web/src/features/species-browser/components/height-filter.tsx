@@ -12,7 +12,11 @@ const useStyles = makeStyles({
   legend: { fontWeight: tokens.fontWeightSemibold, padding: 0, marginBottom: tokens.spacingVerticalXS },
   inputs: { display: 'grid', gridTemplateColumns: '1fr 1fr', gap: tokens.spacingHorizontalS },
   input: { minWidth: 0, width: '100%' },
-  echo: { color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200, margin: `${tokens.spacingVerticalXS} 0 0` },
+  echo: {
+    color: tokens.colorNeutralForeground2,
+    fontSize: tokens.fontSizeBase200,
+    margin: `${tokens.spacingVerticalXS} 0 0`,
+  },
 });
 
 /** A height in the chosen unit as the field shows it; empty when unset. */
@@ -28,7 +32,17 @@ function toCm(text: string, unit: Unit): number | undefined {
   return Math.round(unit === 'cm' ? n : inchesToCm(n * 12));
 }
 
-function HeightInput({ label, valueCm, unit, onCommit }: { label: string; valueCm?: number; unit: Unit; onCommit: (cm: number | undefined) => void }) {
+function HeightInput({
+  label,
+  valueCm,
+  unit,
+  onCommit,
+}: {
+  label: string;
+  valueCm?: number;
+  unit: Unit;
+  onCommit: (cm: number | undefined) => void;
+}) {
   const styles = useStyles();
   const { draft, setDraft, flush } = useDebouncedDraft(display(valueCm, unit), (text) => onCommit(toCm(text, unit)), {
     normalize: (text) => display(toCm(text, unit), unit),
@@ -49,7 +63,11 @@ function HeightInput({ label, valueCm, unit, onCommit }: { label: string; valueC
 }
 
 /** Height range, typed in feet or centimetres, always stored and sent as centimetres. */
-export function HeightFilter({ minCm, maxCm, onChange }: {
+export function HeightFilter({
+  minCm,
+  maxCm,
+  onChange,
+}: {
   minCm?: number;
   maxCm?: number;
   onChange: (change: { minHeightCm?: number; maxHeightCm?: number }) => void;
@@ -66,8 +84,15 @@ export function HeightFilter({ minCm, maxCm, onChange }: {
 
   return (
     <fieldset className={styles.root} aria-labelledby={legendId}>
-      <legend id={legendId} className={styles.legend}>Height</legend>
-      <RadioGroup layout="horizontal" aria-label="Height unit" value={unit} onChange={(_, d) => setUnit(d.value as Unit)}>
+      <legend id={legendId} className={styles.legend}>
+        Height
+      </legend>
+      <RadioGroup
+        layout="horizontal"
+        aria-label="Height unit"
+        value={unit}
+        onChange={(_, d) => setUnit(d.value as Unit)}
+      >
         <Radio value="ft" label="feet" />
         <Radio value="cm" label="centimetres" />
       </RadioGroup>

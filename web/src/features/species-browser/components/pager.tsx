@@ -17,7 +17,13 @@ const useStyles = makeStyles({
   size: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
 });
 
-export function Pager({ page, pageCount, pageSize, onPage, onPageSize }: {
+export function Pager({
+  page,
+  pageCount,
+  pageSize,
+  onPage,
+  onPageSize,
+}: {
   page: number;
   pageCount: number;
   pageSize: number;
@@ -26,7 +32,9 @@ export function Pager({ page, pageCount, pageSize, onPage, onPageSize }: {
 }) {
   const styles = useStyles();
   const id = useId();
-  const sizes = (PAGE_SIZES as readonly number[]).includes(pageSize) ? PAGE_SIZES : [...PAGE_SIZES, pageSize].sort((a, b) => a - b);
+  const sizes = (PAGE_SIZES as readonly number[]).includes(pageSize)
+    ? PAGE_SIZES
+    : [...PAGE_SIZES, pageSize].sort((a, b) => a - b);
   return (
     <nav className={styles.root} aria-label="Result pages">
       <div className={styles.pages}>
@@ -36,7 +44,12 @@ export function Pager({ page, pageCount, pageSize, onPage, onPageSize }: {
         <span className={styles.where}>
           Page {page} of {pageCount}
         </span>
-        <Button icon={<ChevronRight20Regular />} iconPosition="after" disabled={page >= pageCount} onClick={() => onPage(page + 1)}>
+        <Button
+          icon={<ChevronRight20Regular />}
+          iconPosition="after"
+          disabled={page >= pageCount}
+          onClick={() => onPage(page + 1)}
+        >
           Next
         </Button>
       </div>

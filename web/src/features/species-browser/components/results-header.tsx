@@ -27,34 +27,48 @@ export interface ResultsHeaderProps {
 }
 
 /** The result count (announced politely as it changes) and the tools that shape the table. */
-export const ResultsHeader = forwardRef<HTMLHeadingElement, ResultsHeaderProps>(function ResultsHeader(props, headingRef) {
-  const styles = useBrowserStyles();
-  const own = useStyles();
-  const heading = useHeadingStyles();
-  const { total, query } = props;
-  let title = 'Species';
-  // "Species" is both singular and plural; only the verb changes.
-  if (total !== undefined) title = `${count.format(total)} species${query ? ` ${total === 1 ? 'matches' : 'match'} “${query}”` : ''}`;
-  return (
-    <div className={styles.toolbar}>
-      <div aria-live="polite" className={styles.count}>
-        <h2 id={props.headingId} ref={headingRef} tabIndex={-1} className={mergeClasses(heading.base, heading.section, styles.heading)}>
-          {title}
-        </h2>
-        {total ? (
-          <p className={styles.range}>
-            Showing {count.format(props.first)}–{count.format(props.last)}
-          </p>
-        ) : null}
+export const ResultsHeader = forwardRef<HTMLHeadingElement, ResultsHeaderProps>(
+  function ResultsHeader(props, headingRef) {
+    const styles = useBrowserStyles();
+    const own = useStyles();
+    const heading = useHeadingStyles();
+    const { total, query } = props;
+    let title = 'Species';
+    // "Species" is both singular and plural; only the verb changes.
+    if (total !== undefined)
+      title = `${count.format(total)} species${query ? ` ${total === 1 ? 'matches' : 'match'} “${query}”` : ''}`;
+    return (
+      <div className={styles.toolbar}>
+        <div aria-live="polite" className={styles.count}>
+          <h2
+            id={props.headingId}
+            ref={headingRef}
+            tabIndex={-1}
+            className={mergeClasses(heading.base, heading.section, styles.heading)}
+          >
+            {title}
+          </h2>
+          {total ? (
+            <p className={styles.range}>
+              Showing {count.format(props.first)}–{count.format(props.last)}
+            </p>
+          ) : null}
+        </div>
+        <div className={styles.tools}>
+          {props.isUpdating ? <Spinner size="tiny" label="Updating" className={styles.updating} /> : null}
+          <SortSelect sort={props.sort} order={props.order} isSearching={query !== ''} onSort={props.onSort} />
+          <ColumnMenu shown={props.columns} onChange={props.onColumns} />
+          <Button
+            as="a"
+            href={SPECIES_EXPORT_URL}
+            download
+            icon={<ArrowDownload20Regular />}
+            className={own.exportLink}
+          >
+            Whole catalogue (CSV)
+          </Button>
+        </div>
       </div>
-      <div className={styles.tools}>
-        {props.isUpdating ? <Spinner size="tiny" label="Updating" className={styles.updating} /> : null}
-        <SortSelect sort={props.sort} order={props.order} isSearching={query !== ''} onSort={props.onSort} />
-        <ColumnMenu shown={props.columns} onChange={props.onColumns} />
-        <Button as="a" href={SPECIES_EXPORT_URL} download icon={<ArrowDownload20Regular />} className={own.exportLink}>
-          Whole catalogue (CSV)
-        </Button>
-      </div>
-    </div>
-  );
-});
+    );
+  },
+);

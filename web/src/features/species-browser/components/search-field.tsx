@@ -14,13 +14,23 @@ const normalize = (text: string) => text.trim().slice(0, 100);
  * Search as you type: the list follows 300 ms after the last key, and Enter searches at once.
  * The API forgives typos, so "buterfly weed" still finds butterfly milkweed.
  */
-export function SearchField({ value, onSearch }: { value: string; onSearch: (q: string, options: { replace: boolean }) => void }) {
+export function SearchField({
+  value,
+  onSearch,
+}: {
+  value: string;
+  onSearch: (q: string, options: { replace: boolean }) => void;
+}) {
   const styles = useStyles();
-  const { draft, setDraft, flush } = useDebouncedDraft(value, (text) => {
-    const next = normalize(text);
-    // Refining a search replaces the history entry; starting or clearing one adds an entry for Back.
-    onSearch(next, { replace: value !== '' && next !== '' });
-  }, { normalize });
+  const { draft, setDraft, flush } = useDebouncedDraft(
+    value,
+    (text) => {
+      const next = normalize(text);
+      // Refining a search replaces the history entry; starting or clearing one adds an entry for Back.
+      onSearch(next, { replace: value !== '' && next !== '' });
+    },
+    { normalize },
+  );
 
   const submit = (event: FormEvent) => {
     event.preventDefault();

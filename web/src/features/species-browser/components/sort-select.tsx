@@ -23,7 +23,12 @@ const CHOICES: { sort: SpeciesSort; order: SortOrder; label: string }[] = [
 ];
 
 /** The same orders as the column headers, as one control that also suits a phone. */
-export function SortSelect({ sort, order, isSearching, onSort }: {
+export function SortSelect({
+  sort,
+  order,
+  isSearching,
+  onSort,
+}: {
   sort: SpeciesSort;
   order: SortOrder;
   isSearching: boolean;

@@ -36,13 +36,18 @@ describe('species browser', () => {
     expect(await screen.findByRole('heading', { level: 2, name: '2 species' }, FIRST_PAINT)).toBeInTheDocument();
     const table = screen.getByRole('table');
     const row = within(table).getByRole('row', { name: /butterfly milkweed/ });
-    expect(within(row).getByRole('link', { name: 'butterfly milkweed' })).toHaveAttribute('href', '/species/asclepias-tuberosa');
+    expect(within(row).getByRole('link', { name: 'butterfly milkweed' })).toHaveAttribute(
+      'href',
+      '/species/asclepias-tuberosa',
+    );
     expect(within(row).getByText('Asclepias tuberosa').closest('i')).not.toBeNull();
     // 30–75 cm is 1–2.5 ft (1 in = 2.54 cm).
     expect(within(row).getByText('1–2.5 ft')).toBeInTheDocument();
     expect(within(row).getByText('30–75 cm')).toBeInTheDocument();
     expect(within(row).getByRole('img', { name: 'Blooms Jun–Aug; orange flowers' })).toBeInTheDocument();
-    expect(within(row).getByText('Irritating sap, Toxic if eaten, Has a look-alike, Harmful to livestock')).toBeInTheDocument();
+    expect(
+      within(row).getByText('Irritating sap, Toxic if eaten, Has a look-alike, Harmful to livestock'),
+    ).toBeInTheDocument();
     // Wildlife value in words, never the genus count: Asclepias 12 of the herbaceous list's top 115 (CHECK-VALUES §2, R).
     expect(within(row).getByText('a few caterpillars; monarch host')).toBeInTheDocument();
     expect(within(row).queryByText('12')).toBeNull();
@@ -56,14 +61,23 @@ describe('species browser', () => {
     expect(router.state.location.search).toBe('?q=buterfly+weed');
     // Debounced: not one request per key.
     expect(speciesQueries(api).length).toBeLessThan(6);
-    expect(await screen.findByRole('heading', { level: 2, name: '2 species match “buterfly weed”' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('heading', { level: 2, name: '2 species match “buterfly weed”' }),
+    ).toBeInTheDocument();
   });
 
   it('opens a shared link with its filters applied and shown', async () => {
     const { api } = openBrowser('/species?state=WI&ecoregion=52&sun=full&bloomMonth=7&monarchHost=true&minHeightCm=61');
     await screen.findByRole('table', {}, FIRST_PAINT);
     const q = lastQuery(api);
-    expect(Object.fromEntries(q)).toMatchObject({ state: 'WI', ecoregion: '52', sun: 'full', bloomMonth: '7', monarchHost: 'true', minHeightCm: '61' });
+    expect(Object.fromEntries(q)).toMatchObject({
+      state: 'WI',
+      ecoregion: '52',
+      sun: 'full',
+      bloomMonth: '7',
+      monarchHost: 'true',
+      minHeightCm: '61',
+    });
     expect(screen.getByRole('combobox', { name: 'Native to' })).toHaveValue('WI');
     await waitFor(() => expect(screen.getByRole('combobox', { name: 'Ecoregion (EPA Level III)' })).toHaveValue('52'));
     expect(screen.getByRole('checkbox', { name: 'Monarch caterpillar host plants only' })).toBeChecked();
@@ -79,7 +93,9 @@ describe('species browser', () => {
     await waitFor(() => expect(router.state.location.search).toBe('?state=WI'));
     await waitFor(() => expect(api.fetch.mock.calls.map(([i]) => String(i))).toContain('/api/ecoregions?state=WI'));
     const ecoregion = screen.getByRole('combobox', { name: 'Ecoregion (EPA Level III)' });
-    await waitFor(() => expect(within(ecoregion).getByRole('option', { name: '52 · Driftless Area' })).toBeInTheDocument());
+    await waitFor(() =>
+      expect(within(ecoregion).getByRole('option', { name: '52 · Driftless Area' })).toBeInTheDocument(),
+    );
     await user.selectOptions(ecoregion, '52');
     await user.selectOptions(screen.getByRole('combobox', { name: 'Growth form' }), 'forb');
     await waitFor(() => expect(router.state.location.search).toBe('?state=WI&ecoregion=52&growthForm=forb'));
@@ -101,7 +117,9 @@ describe('species browser', () => {
     await screen.findByRole('table', {}, FIRST_PAINT);
     await user.click(screen.getByRole('button', { name: 'Wildlife value' }));
     await waitFor(() => expect(Object.fromEntries(lastQuery(api))).toMatchObject({ sort: 'hostValue', order: 'desc' }));
-    await waitFor(() => expect(screen.getByRole('columnheader', { name: /Wildlife value/ })).toHaveAttribute('aria-sort', 'descending'));
+    await waitFor(() =>
+      expect(screen.getByRole('columnheader', { name: /Wildlife value/ })).toHaveAttribute('aria-sort', 'descending'),
+    );
   });
 
   it('hides a column and remembers the choice', async () => {
@@ -139,6 +157,9 @@ describe('species browser', () => {
     expect(await screen.findByText('Page 1 of 3', {}, FIRST_PAINT)).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Next' }));
     await waitFor(() => expect(lastQuery(api).get('page')).toBe('2'));
-    expect(screen.getByRole('link', { name: 'Whole catalogue (CSV)' })).toHaveAttribute('href', '/api/species/export.csv');
+    expect(screen.getByRole('link', { name: 'Whole catalogue (CSV)' })).toHaveAttribute(
+      'href',
+      '/api/species/export.csv',
+    );
   });
 });

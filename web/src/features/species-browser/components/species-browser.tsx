@@ -10,7 +10,13 @@ import { useBrowserState } from '../hooks/use-browser-state.js';
 import { useColumnChoice } from '../hooks/use-column-choice.js';
 import { useNameHighlights } from '../hooks/use-name-highlights.js';
 import {
-  browserStateToQuery, countActiveFilters, EMPTY_STATE, FILTER_KEYS, type BrowserState, type SortOrder, type SpeciesSort,
+  browserStateToQuery,
+  countActiveFilters,
+  EMPTY_STATE,
+  FILTER_KEYS,
+  type BrowserState,
+  type SortOrder,
+  type SpeciesSort,
 } from '../utils/browser-state.js';
 import { FilterPanel } from './filter-panel.js';
 import { Pager } from './pager.js';
@@ -82,7 +88,9 @@ export function SpeciesBrowser() {
           </EmptyState>
         ) : (
           <EmptyState title="No species match: try fewer filters">
-            {activeFilters > 0 ? 'Each filter narrows the list; clearing one or two usually brings species back.' : 'Check the spelling, or search by a shorter part of the name.'}
+            {activeFilters > 0
+              ? 'Each filter narrows the list; clearing one or two usually brings species back.'
+              : 'Check the spelling, or search by a shorter part of the name.'}
             {activeFilters > 0 ? (
               <>
                 <br />
@@ -97,7 +105,15 @@ export function SpeciesBrowser() {
     >
       {() => (
         <div className={mergeClasses(list.isPlaceholderData && styles.stale)}>
-          <SpeciesTable items={items} columns={columns.shown} highlights={highlights} sort={sort} order={state.order} onSort={onSort} captionId={headingId} />
+          <SpeciesTable
+            items={items}
+            columns={columns.shown}
+            highlights={highlights}
+            sort={sort}
+            order={state.order}
+            onSort={onSort}
+            captionId={headingId}
+          />
         </div>
       )}
     </QueryState>
@@ -107,7 +123,12 @@ export function SpeciesBrowser() {
     <>
       <SearchField value={state.q} onSearch={(q, options) => update({ q }, options)} />
       <div className={styles.filterToggle}>
-        <Button icon={<Filter20Regular />} aria-expanded={areFiltersOpen} aria-controls={filtersId} onClick={() => setFiltersOpen((o) => !o)}>
+        <Button
+          icon={<Filter20Regular />}
+          aria-expanded={areFiltersOpen}
+          aria-controls={filtersId}
+          onClick={() => setFiltersOpen((o) => !o)}
+        >
           {areFiltersOpen ? 'Hide filters' : 'Filters'}
           {activeFilters > 0 ? ` (${activeFilters} set)` : ''}
         </Button>
@@ -132,15 +153,27 @@ export function SpeciesBrowser() {
           columns={columns.shown}
           onColumns={columns.setShown}
         />
-        {list.isError && data ? <ErrorState title="The list could not be updated." message={list.error.message} onRetry={() => void list.refetch()} /> : null}
+        {list.isError && data ? (
+          <ErrorState
+            title="The list could not be updated."
+            message={list.error.message}
+            onRetry={() => void list.refetch()}
+          />
+        ) : null}
         {body}
         <p className={styles.notes}>
-          Host value: how many moth and butterfly species raise their caterpillars on plants of the genus (Tallamy &amp; Shropshire 2009).
-          Cautions are a summary; each species page says more. Rules differ from state to state, so check your state&apos;s noxious-weed
-          list and local rules before planting or sharing.
+          Host value: how many moth and butterfly species raise their caterpillars on plants of the genus (Tallamy &amp;
+          Shropshire 2009). Cautions are a summary; each species page says more. Rules differ from state to state, so
+          check your state&apos;s noxious-weed list and local rules before planting or sharing.
         </p>
         {data && data.total > 0 ? (
-          <Pager page={state.page} pageCount={pageCount} pageSize={state.pageSize} onPage={goToPage} onPageSize={(pageSize) => update({ pageSize })} />
+          <Pager
+            page={state.page}
+            pageCount={pageCount}
+            pageSize={state.pageSize}
+            onPage={goToPage}
+            onPageSize={(pageSize) => update({ pageSize })}
+          />
         ) : null}
       </section>
     </>

@@ -1,5 +1,12 @@
 import {
-  capitalise, CAUTION_WORDS, formatMonths, hostLevelOf, MOISTURE_WORDS, type SpeciesSummary, SUN_LEVELS, SUN_WORDS,
+  capitalise,
+  CAUTION_WORDS,
+  formatMonths,
+  hostLevelOf,
+  MOISTURE_WORDS,
+  type SpeciesSummary,
+  SUN_LEVELS,
+  SUN_WORDS,
 } from '@homeground/shared';
 import { Checkmark16Filled, Warning16Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
@@ -11,7 +18,6 @@ import { BloomStrip } from './bloom-strip.js';
 import { HighlightedText } from './highlighted-text.js';
 import { useTableStyles } from './species-table.styles.js';
 
-
 /** A dash for an empty cell, with words for a screen reader instead of "dash". */
 function Nothing({ spoken }: { spoken: string }) {
   const styles = useTableStyles();
@@ -22,7 +28,15 @@ function Nothing({ spoken }: { spoken: string }) {
   );
 }
 
-export function NameCell({ species, href, highlights }: { species: SpeciesSummary; href: string; highlights?: NameHighlights }) {
+export function NameCell({
+  species,
+  href,
+  highlights,
+}: {
+  species: SpeciesSummary;
+  href: string;
+  highlights?: NameHighlights;
+}) {
   const styles = useTableStyles();
   return (
     <RouterLink to={href} className={styles.nameLink}>
@@ -32,7 +46,15 @@ export function NameCell({ species, href, highlights }: { species: SpeciesSummar
 }
 
 /** The content of one optional cell; the table decides which columns show. */
-export function OptionalCell({ column, species, highlights }: { column: OptionalColumn; species: SpeciesSummary; highlights?: NameHighlights }): ReactNode {
+export function OptionalCell({
+  column,
+  species,
+  highlights,
+}: {
+  column: OptionalColumn;
+  species: SpeciesSummary;
+  highlights?: NameHighlights;
+}): ReactNode {
   const styles = useTableStyles();
   switch (column) {
     case 'scientificName':
@@ -65,7 +87,9 @@ export function OptionalCell({ column, species, highlights }: { column: Optional
         </span>
       );
     case 'sun':
-      return SUN_LEVELS.filter((s) => species.sun.includes(s)).map((s) => capitalise(SUN_WORDS[s])).join(', ');
+      return SUN_LEVELS.filter((s) => species.sun.includes(s))
+        .map((s) => capitalise(SUN_WORDS[s]))
+        .join(', ');
     case 'moisture':
       return species.moisture.map((m) => capitalise(MOISTURE_WORDS[m])).join(', ');
     case 'hostValue':
@@ -91,11 +115,20 @@ export function OptionalCell({ column, species, highlights }: { column: Optional
   }
 }
 
-const HOST_SHORT = { top: 'among the best caterpillar hosts', good: 'a good caterpillar host', some: 'a few caterpillars', none: '' } as const;
+const HOST_SHORT = {
+  top: 'among the best caterpillar hosts',
+  good: 'a good caterpillar host',
+  some: 'a few caterpillars',
+  none: '',
+} as const;
 
 /** Homeground's several-part wildlife summary in a few words (caterpillars within its layer, monarchs), never a count. */
 function wildlifeWords(species: SpeciesSummary): string {
-  const level = hostLevelOf({ growthForm: species.growthForm, scientificName: species.scientificName, wildlife: { lepidopteraGenusCount: species.lepidopteraGenusCount } as SpeciesSummaryWildlife });
+  const level = hostLevelOf({
+    growthForm: species.growthForm,
+    scientificName: species.scientificName,
+    wildlife: { lepidopteraGenusCount: species.lepidopteraGenusCount } as SpeciesSummaryWildlife,
+  });
   const parts = [HOST_SHORT[level], species.monarchHost ? 'monarch host' : ''].filter(Boolean);
   return parts.length > 0 ? parts.join('; ') : 'not recorded';
 }

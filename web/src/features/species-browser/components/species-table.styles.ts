@@ -56,7 +56,11 @@ export const useTableStyles = makeStyles({
     color: 'inherit',
     cursor: 'pointer',
     ':hover': { color: tokens.colorBrandForeground1, textDecorationLine: 'underline' },
-    ':focus-visible': { outline: `2px solid ${tokens.colorStrokeFocus2}`, outlineOffset: '2px', borderRadius: tokens.borderRadiusSmall },
+    ':focus-visible': {
+      outline: `2px solid ${tokens.colorStrokeFocus2}`,
+      outlineOffset: '2px',
+      borderRadius: tokens.borderRadiusSmall,
+    },
   },
   muted: { color: tokens.colorNeutralForeground3 },
   scientific: { fontStyle: 'italic' },

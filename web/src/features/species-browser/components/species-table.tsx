@@ -30,7 +30,14 @@ export interface SpeciesTableProps {
   captionId: string;
 }
 
-function HeaderCell({ column, label, sort, order, onSort, className }: {
+function HeaderCell({
+  column,
+  label,
+  sort,
+  order,
+  onSort,
+  className,
+}: {
   column: OptionalColumn | 'commonName';
   label: string;
   className?: string;
@@ -47,7 +54,11 @@ function HeaderCell({ column, label, sort, order, onSort, className }: {
   const isActive = sortable.sort === sort;
   const nextOrder: SortOrder = isActive ? (order === 'asc' ? 'desc' : 'asc') : sortable.first;
   return (
-    <th scope="col" className={mergeClasses(styles.th, className)} aria-sort={isActive ? (order === 'asc' ? 'ascending' : 'descending') : 'none'}>
+    <th
+      scope="col"
+      className={mergeClasses(styles.th, className)}
+      aria-sort={isActive ? (order === 'asc' ? 'ascending' : 'descending') : 'none'}
+    >
       <button type="button" className={styles.sortButton} onClick={() => onSort(sortable.sort, nextOrder)}>
         {label}
         {isActive ? order === 'asc' ? <ArrowUp12Regular aria-hidden /> : <ArrowDown12Regular aria-hidden /> : null}
@@ -64,9 +75,24 @@ export function SpeciesTable({ items, columns, highlights, sort, order, onSort, 
       <table className={styles.table} aria-labelledby={captionId}>
         <thead>
           <tr>
-            <HeaderCell column="commonName" label="Common name" className={styles.sticky} sort={sort} order={order} onSort={onSort} />
+            <HeaderCell
+              column="commonName"
+              label="Common name"
+              className={styles.sticky}
+              sort={sort}
+              order={order}
+              onSort={onSort}
+            />
             {columns.map((c) => (
-              <HeaderCell key={c} column={c} label={COLUMN_LABELS[c]} className={NUMERIC.has(c) ? styles.number : undefined} sort={sort} order={order} onSort={onSort} />
+              <HeaderCell
+                key={c}
+                column={c}
+                label={COLUMN_LABELS[c]}
+                className={NUMERIC.has(c) ? styles.number : undefined}
+                sort={sort}
+                order={order}
+                onSort={onSort}
+              />
             ))}
           </tr>
         </thead>

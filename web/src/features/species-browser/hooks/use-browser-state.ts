@@ -1,6 +1,11 @@
 import { useCallback, useMemo, useRef } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import { applyChange, browserStateToSearchParams, parseBrowserState, type BrowserState } from '../utils/browser-state.js';
+import {
+  applyChange,
+  browserStateToSearchParams,
+  parseBrowserState,
+  type BrowserState,
+} from '../utils/browser-state.js';
 
 export interface UpdateOptions {
   /** Replace the current history entry instead of adding one (used while a search is refined). */

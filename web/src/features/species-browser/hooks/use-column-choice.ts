@@ -2,7 +2,16 @@ import { useCallback, useState } from 'react';
 
 /** Columns a person may hide; the common name (the link to the detail page) always shows. */
 export const OPTIONAL_COLUMNS = [
-  'scientificName', 'family', 'growthForm', 'height', 'bloom', 'sun', 'moisture', 'hostValue', 'monarchHost', 'cautions',
+  'scientificName',
+  'family',
+  'growthForm',
+  'height',
+  'bloom',
+  'sun',
+  'moisture',
+  'hostValue',
+  'monarchHost',
+  'cautions',
 ] as const;
 export type OptionalColumn = (typeof OPTIONAL_COLUMNS)[number];
 

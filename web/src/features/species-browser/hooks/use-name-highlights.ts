@@ -31,7 +31,14 @@ function mergeRanges(ranges: RangeTuple[]): RangeTuple[] {
  */
 export function useNameHighlights(items: readonly SpeciesSummary[], query: string): Map<string, NameHighlights> {
   const [Fuse, setFuse] = useState<FuseClass | null>(null);
-  const words = useMemo(() => query.trim().split(/\s+/).filter((w) => w.length >= MIN_RUN), [query]);
+  const words = useMemo(
+    () =>
+      query
+        .trim()
+        .split(/\s+/)
+        .filter((w) => w.length >= MIN_RUN),
+    [query],
+  );
 
   useEffect(() => {
     if (Fuse || words.length === 0) return;

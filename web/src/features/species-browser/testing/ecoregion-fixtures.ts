@@ -11,7 +11,13 @@ function region(code: string, name: string, states: Ecoregion['states']): Ecoreg
     states,
     plantCommunities: ['savanna', 'prairie'],
     description: 'A test description of at least twenty characters.',
-    sources: { code: 'epa-ecoregions-l3', name: 'epa-ecoregions-l3', parents: 'from-memory', states: 'epa-ecoregions-l3', plantCommunities: 'from-memory' },
+    sources: {
+      code: 'epa-ecoregions-l3',
+      name: 'epa-ecoregions-l3',
+      parents: 'from-memory',
+      states: 'epa-ecoregions-l3',
+      plantCommunities: 'from-memory',
+    },
   };
 }
 

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import {
-  applyChange, browserStateToQuery, browserStateToSearchParams, DEFAULT_PAGE_SIZE, EMPTY_STATE, parseBrowserState,
+  applyChange,
+  browserStateToQuery,
+  browserStateToSearchParams,
+  DEFAULT_PAGE_SIZE,
+  EMPTY_STATE,
+  parseBrowserState,
 } from './browser-state.js';
 
 const parse = (qs: string) => parseBrowserState(new URLSearchParams(qs));
@@ -9,10 +14,24 @@ const parse = (qs: string) => parseBrowserState(new URLSearchParams(qs));
 // codes, EPA Level III codes 1–85, months 1–12, page size up to 200.
 describe('filters in the URL → API query', () => {
   it('reads every filter from a shared link and sends it to GET /api/species', () => {
-    const state = parse('q=buterfly+weed&state=WI&ecoregion=52&sun=full&moisture=dry&bloomMonth=7&growthForm=forb&minHeightCm=30&maxHeightCm=90&monarchHost=true&sort=height&order=desc&page=2&pageSize=100');
+    const state = parse(
+      'q=buterfly+weed&state=WI&ecoregion=52&sun=full&moisture=dry&bloomMonth=7&growthForm=forb&minHeightCm=30&maxHeightCm=90&monarchHost=true&sort=height&order=desc&page=2&pageSize=100',
+    );
     expect(browserStateToQuery(state)).toEqual({
-      q: 'buterfly weed', state: 'WI', ecoregion: '52', sun: 'full', moisture: 'dry', bloomMonth: 7, growthForm: 'forb',
-      minHeightCm: 30, maxHeightCm: 90, monarchHost: 'true', sort: 'height', order: 'desc', page: 2, pageSize: 100,
+      q: 'buterfly weed',
+      state: 'WI',
+      ecoregion: '52',
+      sun: 'full',
+      moisture: 'dry',
+      bloomMonth: 7,
+      growthForm: 'forb',
+      minHeightCm: 30,
+      maxHeightCm: 90,
+      monarchHost: 'true',
+      sort: 'height',
+      order: 'desc',
+      page: 2,
+      pageSize: 100,
     });
   });
 
@@ -51,12 +70,18 @@ describe('filters in the URL → API query', () => {
 
 describe('state → URL', () => {
   it('writes a short, stable query string without defaults', () => {
-    const qs = browserStateToSearchParams({ ...EMPTY_STATE, q: ' milkweed ', state: 'WI', monarchHost: true }).toString();
+    const qs = browserStateToSearchParams({
+      ...EMPTY_STATE,
+      q: ' milkweed ',
+      state: 'WI',
+      monarchHost: true,
+    }).toString();
     expect(qs).toBe('q=milkweed&state=WI&monarchHost=true');
   });
 
   it('round-trips a full state', () => {
-    const qs = 'q=aster&state=MN&ecoregion=51&sun=part&moisture=medium&bloomMonth=9&growthForm=forb&minHeightCm=30&maxHeightCm=120&monarchHost=true&sort=bloomStart&order=desc&page=3&pageSize=25';
+    const qs =
+      'q=aster&state=MN&ecoregion=51&sun=part&moisture=medium&bloomMonth=9&growthForm=forb&minHeightCm=30&maxHeightCm=120&monarchHost=true&sort=bloomStart&order=desc&page=3&pageSize=25';
     expect(browserStateToSearchParams(parse(qs)).toString()).toBe(qs);
   });
 });

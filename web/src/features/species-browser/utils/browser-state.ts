@@ -12,7 +12,15 @@ export const browserStateToSearchParams = paths.species.search;
 
 /** The filters that narrow the catalogue (not search, paging or order): what "Clear filters" resets. */
 export const FILTER_KEYS = [
-  'state', 'ecoregion', 'sun', 'moisture', 'bloomMonth', 'growthForm', 'minHeightCm', 'maxHeightCm', 'monarchHost',
+  'state',
+  'ecoregion',
+  'sun',
+  'moisture',
+  'bloomMonth',
+  'growthForm',
+  'minHeightCm',
+  'maxHeightCm',
+  'monarchHost',
 ] as const satisfies readonly (keyof BrowserState)[];
 
 /** True when the minimum height is above the maximum: the API refuses that, so neither is sent. */

@@ -13,7 +13,12 @@ const useStyles = makeStyles({
   heading: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
   icon: { color: tokens.colorStatusWarningForeground1, flexShrink: 0 },
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalM },
-  source: { display: 'block', fontSize: tokens.fontSizeBase200, color: hgTokens.hgColorLoam, marginTop: tokens.spacingVerticalXXS },
+  source: {
+    display: 'block',
+    fontSize: tokens.fontSizeBase200,
+    color: hgTokens.hgColorLoam,
+    marginTop: tokens.spacingVerticalXXS,
+  },
   none: { margin: 0 },
   rules: { margin: `${tokens.spacingVerticalL} 0 0`, color: tokens.colorNeutralForeground2 },
 });
@@ -42,7 +47,8 @@ export function CautionPanel({ species }: { species: SpeciesDetail }) {
         </ul>
       )}
       <p className={styles.rules}>
-        Rules differ from state to state: check your state&apos;s noxious-weed list and any local rules before you plant or share it.
+        Rules differ from state to state: check your state&apos;s noxious-weed list and any local rules before you plant
+        or share it.
       </p>
     </ContentCard>
   );

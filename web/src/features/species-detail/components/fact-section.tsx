@@ -9,13 +9,27 @@ const useStyles = makeStyles({
 });
 
 /** One group of facts on the species page: a white card with its heading and its sources. */
-export function FactSection({ title, icon, className, children }: { title: string; icon?: ReactNode; className?: string; children: ReactNode }) {
+export function FactSection({
+  title,
+  icon,
+  className,
+  children,
+}: {
+  title: string;
+  icon?: ReactNode;
+  className?: string;
+  children: ReactNode;
+}) {
   const styles = useStyles();
   const id = useId();
   return (
     <ContentCard aria-labelledby={id} className={className}>
       <Heading level="section" id={id} className={styles.heading}>
-        {icon ? <span className={styles.icon} aria-hidden>{icon}</span> : null}
+        {icon ? (
+          <span className={styles.icon} aria-hidden>
+            {icon}
+          </span>
+        ) : null}
         {title}
       </Heading>
       {children}

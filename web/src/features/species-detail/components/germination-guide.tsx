@@ -1,5 +1,10 @@
 import {
-  capitalise, GRAMS_PER_POUND, SOWING_METHOD_WORDS, SOWING_METHODS, type SowingMethod, sowingDepthSentence,
+  capitalise,
+  GRAMS_PER_POUND,
+  SOWING_METHOD_WORDS,
+  SOWING_METHODS,
+  type SowingMethod,
+  sowingDepthSentence,
 } from '@homeground/shared';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { Beaker20Regular, Checkmark20Regular, Dismiss20Regular } from '@fluentui/react-icons';
@@ -19,7 +24,12 @@ const useStyles = makeStyles({
   para: { margin: `${tokens.spacingVerticalM} 0 0` },
   subheading: { marginTop: tokens.spacingVerticalL, marginBottom: tokens.spacingVerticalS },
   methods: { listStyleType: 'none', margin: 0, padding: 0, display: 'grid', gap: tokens.spacingVerticalS },
-  method: { display: 'grid', gridTemplateColumns: '20px 1fr', columnGap: tokens.spacingHorizontalS, alignItems: 'start' },
+  method: {
+    display: 'grid',
+    gridTemplateColumns: '20px 1fr',
+    columnGap: tokens.spacingHorizontalS,
+    alignItems: 'start',
+  },
   suits: { color: tokens.colorBrandForeground1 },
   notSuited: { color: tokens.colorNeutralForeground3 },
   how: { display: 'block', fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground2 },
@@ -37,9 +47,14 @@ function MethodList({ methods }: { methods: readonly SowingMethod[] }) {
         const suits = methods.includes(m);
         return (
           <li key={m} className={styles.method}>
-            {suits ? <Checkmark20Regular className={styles.suits} aria-hidden /> : <Dismiss20Regular className={styles.notSuited} aria-hidden />}
+            {suits ? (
+              <Checkmark20Regular className={styles.suits} aria-hidden />
+            ) : (
+              <Dismiss20Regular className={styles.notSuited} aria-hidden />
+            )}
             <span>
-              <strong>{capitalise(SOWING_METHOD_WORDS[m].phrase)}</strong>: {suits ? 'suits it' : 'not the best way for this species'}
+              <strong>{capitalise(SOWING_METHOD_WORDS[m].phrase)}</strong>:{' '}
+              {suits ? 'suits it' : 'not the best way for this species'}
               {suits ? <span className={styles.how}>{SOWING_METHOD_WORDS[m].how}</span> : null}
             </span>
           </li>

@@ -1,6 +1,16 @@
 import {
-  capitalise, DEER_RESISTANCE_WORDS, formatHeightRangeCm, GROWTH_FORM_WORDS, HABITAT_WORDS, habitLine, joinWords,
-  LIFESPAN_WORDS, moisturePhrase, soilPhrase, SPREAD_HABIT_WORDS, sunPhrase,
+  capitalise,
+  DEER_RESISTANCE_WORDS,
+  formatHeightRangeCm,
+  GROWTH_FORM_WORDS,
+  HABITAT_WORDS,
+  habitLine,
+  joinWords,
+  LIFESPAN_WORDS,
+  moisturePhrase,
+  soilPhrase,
+  SPREAD_HABIT_WORDS,
+  sunPhrase,
 } from '@homeground/shared';
 import { Drop20Regular, Ruler20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';

@@ -44,7 +44,9 @@ const useStyles = makeStyles({
 export function NativeRange({ species }: { species: SpeciesDetail }) {
   const styles = useStyles();
   const native = new Set(species.nativeStates);
-  const names = US_STATE_CODES.filter((c) => native.has(c)).map((c) => STATE_NAMES[c]).sort((a, b) => a.localeCompare(b));
+  const names = US_STATE_CODES.filter((c) => native.has(c))
+    .map((c) => STATE_NAMES[c])
+    .sort((a, b) => a.localeCompare(b));
   return (
     <FactSection title="Native range" icon={<Map20Regular />}>
       <p className={styles.summary}>

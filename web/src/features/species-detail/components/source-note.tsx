@@ -8,7 +8,13 @@ const useStyles = makeStyles({
 });
 
 /** "Sources: USDA PLANTS Database (growth form, lifespan); …" for one section's facts. */
-export function SourceNote({ sources, fields }: { sources: Species['sources']; fields: readonly (keyof Species['sources'])[] }) {
+export function SourceNote({
+  sources,
+  fields,
+}: {
+  sources: Species['sources'];
+  fields: readonly (keyof Species['sources'])[];
+}) {
   const styles = useStyles();
   const lines = sectionSources(sources, fields);
   return (

@@ -18,7 +18,12 @@ import { SpeciesNotFound } from './species-not-found.js';
 import { WildlifeValue } from './wildlife-value.js';
 
 const useStyles = makeStyles({
-  back: { display: 'inline-flex', alignItems: 'center', gap: tokens.spacingHorizontalXS, marginBottom: tokens.spacingVerticalL },
+  back: {
+    display: 'inline-flex',
+    alignItems: 'center',
+    gap: tokens.spacingHorizontalXS,
+    marginBottom: tokens.spacingVerticalL,
+  },
   stack: { display: 'grid', gap: tokens.spacingVerticalXL },
   columns: {
     display: 'grid',
@@ -42,7 +47,15 @@ export function SpeciesDetail({ slug, renderBloomStrip, describeBloom }: Species
   const styles = useStyles();
   const detail = useQuery(speciesDetailQueryOptions(slug));
   const name = detail.data?.commonNames[0];
-  useDocumentTitle(detail.data ? (name ? `${name.charAt(0).toUpperCase()}${name.slice(1)}` : detail.data.scientificName) : detail.isError ? 'Species not found' : 'Species');
+  useDocumentTitle(
+    detail.data
+      ? name
+        ? `${name.charAt(0).toUpperCase()}${name.slice(1)}`
+        : detail.data.scientificName
+      : detail.isError
+        ? 'Species not found'
+        : 'Species',
+  );
 
   const back = (
     <RouterLink to={paths.species.build()} className={styles.back}>
@@ -66,7 +79,11 @@ export function SpeciesDetail({ slug, renderBloomStrip, describeBloom }: Species
         <>
           {back}
           <div className={styles.stack}>
-            <SpeciesHeader species={species} bloomStrip={renderBloomStrip(species)} bloomWords={describeBloom(species.bloomMonths)} />
+            <SpeciesHeader
+              species={species}
+              bloomStrip={renderBloomStrip(species)}
+              bloomWords={describeBloom(species.bloomMonths)}
+            />
             <CautionPanel species={species} />
             <div className={styles.columns}>
               <div className={styles.stack}>

@@ -22,7 +22,12 @@ const useStyles = makeStyles({
     '@media (max-width: 720px)': { gridTemplateColumns: '1fr' },
   },
   title: { marginBottom: tokens.spacingVerticalXXS },
-  scientific: { fontStyle: 'italic', fontSize: tokens.fontSizeBase500, margin: `0 0 ${tokens.spacingVerticalM}`, color: hgTokens.hgColorLoam },
+  scientific: {
+    fontStyle: 'italic',
+    fontSize: tokens.fontSizeBase500,
+    margin: `0 0 ${tokens.spacingVerticalM}`,
+    color: hgTokens.hgColorLoam,
+  },
   tags: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalS, marginBottom: tokens.spacingVerticalM },
   bloom: { margin: `${tokens.spacingVerticalL} 0` },
   bloomWords: { margin: `${tokens.spacingVerticalXS} 0 0` },
@@ -30,7 +35,15 @@ const useStyles = makeStyles({
 });
 
 /** Photo, names, bloom strip and the page's one primary action: making its fact card. */
-export function SpeciesHeader({ species, bloomStrip, bloomWords }: { species: SpeciesDetail; bloomStrip: ReactNode; bloomWords: string }) {
+export function SpeciesHeader({
+  species,
+  bloomStrip,
+  bloomWords,
+}: {
+  species: SpeciesDetail;
+  bloomStrip: ReactNode;
+  bloomWords: string;
+}) {
   const styles = useStyles();
   const [name, ...otherNames] = species.commonNames;
   const facts: [string, ReactNode][] = [];
@@ -38,7 +51,8 @@ export function SpeciesHeader({ species, bloomStrip, bloomWords }: { species: Sp
   facts.push(['Family', species.family]);
   if (species.synonyms.length > 0) facts.push(['Synonyms', <i key="syn">{species.synonyms.join(', ')}</i>]);
   facts.push(['USDA symbol', species.usdaSymbol]);
-  for (const r of species.reconciliations) facts.push([`Note on ${r.field === 'nativeStates' ? 'range' : r.field}`, r.note]);
+  for (const r of species.reconciliations)
+    facts.push([`Note on ${r.field === 'nativeStates' ? 'range' : r.field}`, r.note]);
   const colours = species.flowerColours.join(' and ');
 
   return (

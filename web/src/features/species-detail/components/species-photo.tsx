@@ -15,7 +15,11 @@ const useStyles = makeStyles({
     border: `1px solid ${tokens.colorNeutralStroke2}`,
   },
   img: { display: 'block', width: '100%', height: '100%', objectFit: 'cover' },
-  caption: { marginTop: tokens.spacingVerticalXS, fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground2 },
+  caption: {
+    marginTop: tokens.spacingVerticalXS,
+    fontSize: tokens.fontSizeBase200,
+    color: tokens.colorNeutralForeground2,
+  },
 });
 
 /** The species' photo at 800 px, or our drawing in its flower colour when there is none (or it fails). */
@@ -29,13 +33,23 @@ export function SpeciesPhoto({ species }: { species: SpeciesDetail }) {
     <figure className={styles.figure}>
       <div className={styles.frame}>
         {showPhoto ? (
-          <img className={styles.img} src={speciesPhotoUrl(species.slug, 800)} alt={`${name} (${species.scientificName})`} onError={() => setFailed(true)} />
+          <img
+            className={styles.img}
+            src={speciesPhotoUrl(species.slug, 800)}
+            alt={`${name} (${species.scientificName})`}
+            onError={() => setFailed(true)}
+          />
         ) : (
-          <PlantDrawing flowerColours={species.flowerColours} label={`Drawing of a flowering plant${colours ? ` with ${colours} flowers` : ''}`} />
+          <PlantDrawing
+            flowerColours={species.flowerColours}
+            label={`Drawing of a flowering plant${colours ? ` with ${colours} flowers` : ''}`}
+          />
         )}
       </div>
       <figcaption className={styles.caption}>
-        {showPhoto ? `${name}, photo from the catalogue.` : `No photo yet: a drawing in its flower colour${species.flowerColours.length > 1 ? 's' : ''}.`}
+        {showPhoto
+          ? `${name}, photo from the catalogue.`
+          : `No photo yet: a drawing in its flower colour${species.flowerColours.length > 1 ? 's' : ''}.`}
       </figcaption>
     </figure>
   );

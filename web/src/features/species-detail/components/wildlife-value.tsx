@@ -16,7 +16,8 @@ const useStyles = makeStyles({
  */
 export function hostSentence(species: SpeciesDetail, sourceKey: string | undefined): string {
   const cite = sourceKey ? ` — ${shortCitation(sourceKey)}` : '';
-  if (species.wildlife.lepidopteraGenusCount === null) return `Its genus is not listed in the caterpillar-host lists${cite}.`;
+  if (species.wildlife.lepidopteraGenusCount === null)
+    return `Its genus is not listed in the caterpillar-host lists${cite}.`;
   const words = caterpillarWords(species);
   if (words === null) return `No moth or butterfly caterpillars are recorded on its genus${cite}.`;
   return `${words.replace(/\.$/, '')}${cite}.`;
@@ -53,4 +54,3 @@ export function WildlifeValue({ species }: { species: SpeciesDetail }) {
     </FactSection>
   );
 }
-

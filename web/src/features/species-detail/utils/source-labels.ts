@@ -66,7 +66,11 @@ export function sectionSources(sources: Species['sources'], fields: readonly Sou
   const byKey = new Map<string, SourceLine>();
   for (const field of fields) {
     const key = sources[field] ?? 'unrecorded';
-    const line = byKey.get(key) ?? { key, citation: key === 'unrecorded' ? 'no source recorded' : shortCitation(key), fields: [] };
+    const line = byKey.get(key) ?? {
+      key,
+      citation: key === 'unrecorded' ? 'no source recorded' : shortCitation(key),
+      fields: [],
+    };
     line.fields.push(SOURCED_FIELD_WORDS[field]);
     byKey.set(key, line);
   }

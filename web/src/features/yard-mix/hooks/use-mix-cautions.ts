@@ -2,7 +2,6 @@ import { type Caution, CAUTION_WORDS, type SpeciesSummary } from '@homeground/sh
 import { useQueries } from '@tanstack/react-query';
 import { speciesDetailQueryOptions } from '../../../api/species/species.queries.js';
 
-
 export interface SpeciesCaution {
   kind: Caution['kind'];
   text: string;

@@ -6,7 +6,8 @@ import { balanceRequestFor, type MixPlan } from '../utils/mix-plan.js';
 
 export type PlanChange = (plan: MixPlan, options?: { replace?: boolean }) => void;
 
-const toggle = (list: readonly string[], slug: string) => (list.includes(slug) ? list.filter((s) => s !== slug) : [...list, slug]);
+const toggle = (list: readonly string[], slug: string) =>
+  list.includes(slug) ? list.filter((s) => s !== slug) : [...list, slug];
 
 /**
  * The mix for a plan, and the person's changes to it. Locks and exclusions are marks that wait
@@ -38,9 +39,15 @@ export function useMixPlan(plan: MixPlan, onPlanChange: PlanChange) {
     slugs,
     isUpdating: query.isFetching && query.isPlaceholderData,
     toggleLock: (slug: string) =>
-      onPlanChange({ ...known, locked: toggle(known.locked, slug), excluded: known.excluded.filter((s) => s !== slug) }, { replace: true }),
+      onPlanChange(
+        { ...known, locked: toggle(known.locked, slug), excluded: known.excluded.filter((s) => s !== slug) },
+        { replace: true },
+      ),
     toggleExclude: (slug: string) =>
-      onPlanChange({ ...known, excluded: toggle(known.excluded, slug), locked: known.locked.filter((s) => s !== slug) }, { replace: true }),
+      onPlanChange(
+        { ...known, excluded: toggle(known.excluded, slug), locked: known.locked.filter((s) => s !== slug) },
+        { replace: true },
+      ),
     /** Runs the balance again with the person's locks and exclusions, keeping the mix's size. */
     rebalance: () => {
       const next: MixPlan = { ...known, size: known.size ?? query.data?.palette.size };

@@ -24,7 +24,9 @@ type BloomSpecies = Pick<SpeciesSummary, 'commonName' | 'growthForm' | 'bloomMon
 export function monthlyBloom(species: readonly BloomSpecies[]): MonthBloom[] {
   return MONTH_NAMES.map((_, i) => {
     const month = i + 1;
-    const inBloom = species.filter((s) => isFloweringSpecies(s) && s.bloomMonths.includes(month)).map((s) => s.commonName);
+    const inBloom = species
+      .filter((s) => isFloweringSpecies(s) && s.bloomMonths.includes(month))
+      .map((s) => s.commonName);
     const isInSeason = CP42_SEASON_MONTHS.includes(month);
     return { month, inBloom, isInSeason, isGap: isInSeason && inBloom.length < MIN_IN_BLOOM };
   });

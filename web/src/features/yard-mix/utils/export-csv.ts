@@ -1,7 +1,16 @@
 import { roundTo } from '@homeground/shared';
 import type { MixRow } from './mix-rows.js';
 
-const HEADER = ['Scientific name', 'Common name', 'Plants', 'Spacing (in)', 'Spacing (cm)', 'Seeds to sow', 'Seed weight (g)', 'Seed weight (oz)'];
+const HEADER = [
+  'Scientific name',
+  'Common name',
+  'Plants',
+  'Spacing (in)',
+  'Spacing (cm)',
+  'Seeds to sow',
+  'Seed weight (g)',
+  'Seed weight (oz)',
+];
 
 /** RFC 4180 quoting: a field with a comma, quote or line break is quoted, quotes doubled. */
 function field(value: string | number | null | undefined): string {
@@ -22,7 +31,9 @@ export function mixCsv(rows: readonly MixRow[]): string {
       q?.seedsToSow,
       q?.seedWeight ? q.seedWeight.grams : undefined,
       q?.seedWeight ? q.seedWeight.ounces : undefined,
-    ].map(field).join(',');
+    ]
+      .map(field)
+      .join(',');
   });
   return [HEADER.map(field).join(','), ...lines].join('\r\n') + '\r\n';
 }

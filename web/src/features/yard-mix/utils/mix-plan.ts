@@ -19,7 +19,10 @@ export function balanceRequestFor(plan: MixPlan): PaletteRequest {
   if (plan.chosen && plan.chosen.length > 0) {
     return { ...base, options: { size: plan.chosen.length, locked: plan.chosen, excluded: [] } };
   }
-  return { ...base, options: { ...(plan.size !== undefined ? { size: plan.size } : {}), locked: plan.locked, excluded: plan.excluded } };
+  return {
+    ...base,
+    options: { ...(plan.size !== undefined ? { size: plan.size } : {}), locked: plan.locked, excluded: plan.excluded },
+  };
 }
 
 /** The request a saved mix or a swap should remember: the person's options, not the "keep all" form. */

@@ -10,13 +10,25 @@ export interface Choice<T extends string> {
 export const SUN_CHOICES: readonly Choice<Sun>[] = [
   { value: 'full', label: 'Full sun', line: '6 hours or more of direct sun on a summer day.' },
   { value: 'part', label: 'Part shade', line: 'About 3 to 6 hours of sun, or bright dappled shade all day.' },
-  { value: 'shade', label: 'Shade', line: 'Under 3 hours of direct sun, such as beneath trees or on the north side of a house.' },
+  {
+    value: 'shade',
+    label: 'Shade',
+    line: 'Under 3 hours of direct sun, such as beneath trees or on the north side of a house.',
+  },
 ];
 
 export const MOISTURE_CHOICES: readonly Choice<Moisture>[] = [
-  { value: 'dry', label: 'Dry', line: 'Rain drains away fast; the soil is dry a day after a shower (sand, slopes, bluffs).' },
+  {
+    value: 'dry',
+    label: 'Dry',
+    line: 'Rain drains away fast; the soil is dry a day after a shower (sand, slopes, bluffs).',
+  },
   { value: 'medium', label: 'Medium', line: 'Ordinary garden soil that stays slightly moist between rains.' },
-  { value: 'wet', label: 'Wet', line: 'Stays damp for days after rain, or holds water in spring (low spots, by a downspout).' },
+  {
+    value: 'wet',
+    label: 'Wet',
+    line: 'Stays damp for days after rain, or holds water in spring (low spots, by a downspout).',
+  },
 ];
 
 export const SOIL_CHOICES: readonly Choice<SoilTexture | ''>[] = [
@@ -39,5 +51,9 @@ export const GOAL_CHOICES: readonly Choice<Goal>[] = [
   { value: 'birds', label: 'Birds', line: 'Seeds, berries and caterpillars for birds to eat.' },
   { value: 'rain-garden', label: 'Rain garden', line: 'Soaks up water from a roof or driveway in a shallow dip.' },
   { value: 'shade-garden', label: 'Shade garden', line: 'Woodland plants for under trees.' },
-  { value: 'low-spreaders', label: 'Low spreaders', line: 'Plants that stay in their clump; fast spreaders move down the list.' },
+  {
+    value: 'low-spreaders',
+    label: 'Low spreaders',
+    line: 'Plants that stay in their clump; fast spreaders move down the list.',
+  },
 ];

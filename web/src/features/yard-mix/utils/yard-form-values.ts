@@ -1,6 +1,17 @@
 import {
-  type DeerPressure, type Goal, MAX_AREA_SQ_FT, type Moisture, SQUARE_METRES_PER_SQUARE_FOOT, type SiteRequest, type SoilTexture,
-  type Sun, cmToInches, inchesToCm, roundTo, siteRequestSchema, squareFeetToSquareMetres,
+  type DeerPressure,
+  type Goal,
+  MAX_AREA_SQ_FT,
+  type Moisture,
+  SQUARE_METRES_PER_SQUARE_FOOT,
+  type SiteRequest,
+  type SoilTexture,
+  type Sun,
+  cmToInches,
+  inchesToCm,
+  roundTo,
+  siteRequestSchema,
+  squareFeetToSquareMetres,
 } from '@homeground/shared';
 import type { AreaUnit } from './mix-plan.js';
 
@@ -27,8 +38,17 @@ export type YardField = 'sun' | 'moisture' | 'soilTexture' | 'area' | 'maxHeight
 export type YardErrors = Partial<Record<YardField, string>>;
 
 export const EMPTY_YARD: YardFormValues = {
-  sun: '', moisture: '', soilTexture: '', area: '', areaUnit: 'ft2', maxHeight: '', heightUnit: 'ft', deerPressure: '', goals: [],
-  woodyPlants: false, spreaders: false,
+  sun: '',
+  moisture: '',
+  soilTexture: '',
+  area: '',
+  areaUnit: 'ft2',
+  maxHeight: '',
+  heightUnit: 'ft',
+  deerPressure: '',
+  goals: [],
+  woodyPlants: false,
+  spreaders: false,
 };
 
 /** 10 acres in m² (the site schema's limit is in ft²). */
@@ -62,7 +82,9 @@ export function otherAreaUnit(values: Pick<YardFormValues, 'area' | 'areaUnit'>)
 export function otherHeightUnit(values: Pick<YardFormValues, 'maxHeight' | 'heightUnit'>): string {
   const cm = heightInCm(values);
   if (cm === null || Number.isNaN(cm) || cm <= 0) return '';
-  return values.heightUnit === 'ft' ? `That is ${Math.round(cm)} cm.` : `That is ${roundTo(cmToInches(cm) / 12, 1)} ft.`;
+  return values.heightUnit === 'ft'
+    ? `That is ${Math.round(cm)} cm.`
+    : `That is ${roundTo(cmToInches(cm) / 12, 1)} ft.`;
 }
 
 export type YardCheck = { ok: true; site: SiteRequest; areaUnit: AreaUnit } | { ok: false; errors: YardErrors };
@@ -86,9 +108,11 @@ export function checkYard(values: YardFormValues): YardCheck {
 
   const heightCm = heightInCm(values);
   if (heightCm !== null) {
-    if (Number.isNaN(heightCm)) errors.maxHeight = `Enter the height as a number of ${values.heightUnit}, or leave it empty.`;
+    if (Number.isNaN(heightCm))
+      errors.maxHeight = `Enter the height as a number of ${values.heightUnit}, or leave it empty.`;
     else if (heightCm < MIN_HEIGHT_CM) errors.maxHeight = 'The tallest plant must be at least 4 in (10 cm).';
-    else if (heightCm > MAX_HEIGHT_CM) errors.maxHeight = 'Leave the height empty if anything up to tree height is fine.';
+    else if (heightCm > MAX_HEIGHT_CM)
+      errors.maxHeight = 'Leave the height empty if anything up to tree height is fine.';
   }
 
   if (Object.keys(errors).length > 0) return { ok: false, errors };
@@ -107,8 +131,12 @@ export function checkYard(values: YardFormValues): YardCheck {
   const parsed = siteRequestSchema.safeParse(candidate);
   if (!parsed.success) {
     const first = parsed.error.issues[0];
-    const field = (first?.path[0] === 'areaSqFt' || first?.path[0] === 'areaSqM' ? 'area' : first?.path[0]) as YardField | undefined;
-    return { ok: false, errors: { [field ?? 'area']: `Please check this answer: ${first?.message ?? 'it is not valid'}.` } };
+    const field = (first?.path[0] === 'areaSqFt' || first?.path[0] === 'areaSqM' ? 'area' : first?.path[0]) as
+      YardField | undefined;
+    return {
+      ok: false,
+      errors: { [field ?? 'area']: `Please check this answer: ${first?.message ?? 'it is not valid'}.` },
+    };
   }
   return { ok: true, site: candidate as SiteRequest, areaUnit: values.areaUnit };
 }

@@ -23,12 +23,22 @@ const useStyles = makeStyles({
   checked: { border: `2px solid ${tokens.colorBrandStroke1}`, backgroundColor: tokens.colorBrandBackground2 },
   label: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXXS },
   name: { fontWeight: tokens.fontWeightSemibold },
-  description: { color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200, lineHeight: tokens.lineHeightBase200 },
+  description: {
+    color: tokens.colorNeutralForeground2,
+    fontSize: tokens.fontSizeBase200,
+    lineHeight: tokens.lineHeightBase200,
+  },
   question: { margin: `0 0 ${tokens.spacingVerticalS}`, fontWeight: tokens.fontWeightSemibold },
 });
 
 /** Radio cards: each ecoregion with its plain description, so people can recognise their own ground. */
-export function EcoregionChoice({ question, options, value, onChange, stateName }: {
+export function EcoregionChoice({
+  question,
+  options,
+  value,
+  onChange,
+  stateName,
+}: {
   question: string;
   options: readonly EcoregionOption[];
   value: string;
@@ -39,12 +49,26 @@ export function EcoregionChoice({ question, options, value, onChange, stateName 
   const styles = useStyles();
   const questionId = useId();
   const cards = stateName
-    ? [...options, { code: WHOLE_STATE, name: 'Not sure', description: `Use every species native to ${stateName}, without an ecoregion.` }]
+    ? [
+        ...options,
+        {
+          code: WHOLE_STATE,
+          name: 'Not sure',
+          description: `Use every species native to ${stateName}, without an ecoregion.`,
+        },
+      ]
     : options;
   return (
     <div>
-      <p id={questionId} className={styles.question}>{question}</p>
-      <RadioGroup aria-labelledby={questionId} value={value} onChange={(_, d) => onChange(d.value)} className={styles.group}>
+      <p id={questionId} className={styles.question}>
+        {question}
+      </p>
+      <RadioGroup
+        aria-labelledby={questionId}
+        value={value}
+        onChange={(_, d) => onChange(d.value)}
+        className={styles.group}
+      >
         {cards.map((o) => (
           <Radio
             key={o.code || 'whole-state'}
@@ -55,7 +79,9 @@ export function EcoregionChoice({ question, options, value, onChange, stateName 
                 <span className={styles.name}>
                   {o.name}
                   {o.code ? ` (ecoregion ${o.code})` : ''}
-                  {'share' in o && typeof o.share === 'number' ? `: about ${Math.round(o.share * 100)}% of your county` : ''}
+                  {'share' in o && typeof o.share === 'number'
+                    ? `: about ${Math.round(o.share * 100)}% of your county`
+                    : ''}
                 </span>
                 <span className={styles.description}>{o.description}</span>
               </span>

@@ -36,7 +36,11 @@ export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }
   const list = useQuery({ ...ecoregionListQueryOptions(state), enabled: showAll });
 
   const lookupOptions: EcoregionOption[] = lookup ? [lookup.ecoregion, ...lookup.otherEcoregions] : [];
-  const stateOptions: EcoregionOption[] = (list.data ?? []).map((e) => ({ code: e.code, name: e.name, description: e.description }));
+  const stateOptions: EcoregionOption[] = (list.data ?? []).map((e) => ({
+    code: e.code,
+    name: e.name,
+    description: e.description,
+  }));
   const selected = [...lookupOptions, ...stateOptions].find((o) => o.code === ecoregionCode);
   const isSplit = lookup !== undefined && lookup.otherEcoregions.length > 0;
 
@@ -44,16 +48,23 @@ export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }
     <div className={styles.root}>
       {lookup ? (
         <p className={styles.place} role="status">
-          Your ground is in <strong>{lookup.county.name} County, {stateName}</strong>
+          Your ground is in{' '}
+          <strong>
+            {lookup.county.name} County, {stateName}
+          </strong>
           {lookup.zip ? ` (ZIP ${lookup.zip.code}, ${lookup.zip.city})` : ''}.
         </p>
       ) : (
-        <p className={styles.place}>Your ground is in <strong>{stateName}</strong>.</p>
+        <p className={styles.place}>
+          Your ground is in <strong>{stateName}</strong>.
+        </p>
       )}
 
       {selected ? (
         <div className={styles.eco}>
-          <p className={styles.ecoName}>Ecoregion: {selected.name} ({selected.code})</p>
+          <p className={styles.ecoName}>
+            Ecoregion: {selected.name} ({selected.code})
+          </p>
           <p className={styles.text}>{selected.description}</p>
           {lookup && selected.code === lookup.ecoregion.code ? (
             <p className={styles.muted}>
@@ -76,7 +87,11 @@ export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }
       ) : null}
 
       {showAll ? (
-        <QueryState query={list} loading={`Loading the ecoregions of ${stateName}`} error={`Homeground could not load the ecoregions of ${stateName}`}>
+        <QueryState
+          query={list}
+          loading={`Loading the ecoregions of ${stateName}`}
+          error={`Homeground could not load the ecoregions of ${stateName}`}
+        >
           {() => (
             <EcoregionChoice
               question={`Which ecoregion of ${stateName} is your ground in?`}

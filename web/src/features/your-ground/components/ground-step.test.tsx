@@ -13,8 +13,13 @@ const viroqua: PlaceLookup = {
   state: 'WI',
   county: { fips: '55123', name: 'Vernon' },
   ecoregion: {
-    code: '52', name: 'Driftless Area', share: 1, description: 'Hills and deep valleys the glaciers missed.',
-    level1: 'Eastern Temperate Forests', level2: 'Mixed Wood Plains', method: 'county-crosswalk',
+    code: '52',
+    name: 'Driftless Area',
+    share: 1,
+    description: 'Hills and deep valleys the glaciers missed.',
+    level1: 'Eastern Temperate Forests',
+    level2: 'Mixed Wood Plains',
+    method: 'county-crosswalk',
   },
   otherEcoregions: [],
 };
@@ -22,15 +27,24 @@ const split: PlaceLookup = {
   ...viroqua,
   zip: null,
   ecoregion: { ...viroqua.ecoregion, share: 0.6 },
-  otherEcoregions: [{
-    code: '53', name: 'Southeastern Wisconsin Till Plains', share: 0.4, description: 'Gently rolling glacial till plains.',
-    level1: 'Eastern Temperate Forests', level2: 'Mixed Wood Plains',
-  }],
+  otherEcoregions: [
+    {
+      code: '53',
+      name: 'Southeastern Wisconsin Till Plains',
+      share: 0.4,
+      description: 'Gently rolling glacial till plains.',
+      level1: 'Eastern Temperate Forests',
+      level2: 'Mixed Wood Plains',
+    },
+  ],
 };
 
 describe('your ground', { timeout: 30_000 }, () => {
   it('checks the ZIP before asking, then shows state, county and ecoregion with its description', async () => {
-    const { user, api, router } = renderApp({ path: '/find-plants', api: { 'GET /api/places/lookup': { body: viroqua } } });
+    const { user, api, router } = renderApp({
+      path: '/find-plants',
+      api: { 'GET /api/places/lookup': { body: viroqua } },
+    });
     const zip = await screen.findByRole('textbox', { name: 'ZIP code' });
     await user.type(zip, '5466');
     await user.click(screen.getByRole('button', { name: 'Find my ground' }));
@@ -46,13 +60,21 @@ describe('your ground', { timeout: 30_000 }, () => {
 
     await user.click(screen.getByRole('button', { name: 'Next: your yard' }));
     expect(await screen.findByRole('heading', { name: 'Step 2 of 3: your yard' })).toBeInTheDocument();
-    expect(Object.fromEntries(new URLSearchParams(router.state.location.search))).toEqual({ step: 'yard', state: 'WI', eco: '52' });
+    expect(Object.fromEntries(new URLSearchParams(router.state.location.search))).toEqual({
+      step: 'yard',
+      state: 'WI',
+      eco: '52',
+    });
   });
 
   it('says an unknown ZIP in words beside the field', async () => {
     const { user } = renderApp({
       path: '/find-plants',
-      api: { 'GET /api/places/lookup': apiError(400, 'zip 00000 is not a US ZIP code we know', { fields: [{ field: 'zip', message: '00000 is not a US ZIP code we know' }] }) },
+      api: {
+        'GET /api/places/lookup': apiError(400, 'zip 00000 is not a US ZIP code we know', {
+          fields: [{ field: 'zip', message: '00000 is not a US ZIP code we know' }],
+        }),
+      },
     });
     await user.type(await screen.findByRole('textbox', { name: 'ZIP code' }), '00000');
     await user.click(screen.getByRole('button', { name: 'Find my ground' }));
@@ -69,7 +91,13 @@ describe('your ground', { timeout: 30_000 }, () => {
     await user.click(screen.getByRole('radio', { name: /Southeastern Wisconsin Till Plains/ }));
     expect(screen.getByText('Ecoregion: Southeastern Wisconsin Till Plains (53)')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Next: your yard' }));
-    await waitFor(() => expect(Object.fromEntries(new URLSearchParams(router.state.location.search))).toEqual({ step: 'yard', state: 'WI', eco: '53' }));
+    await waitFor(() =>
+      expect(Object.fromEntries(new URLSearchParams(router.state.location.search))).toEqual({
+        step: 'yard',
+        state: 'WI',
+        eco: '53',
+      }),
+    );
   });
 
   it('explains in words when the browser is not allowed to share the location', async () => {

@@ -24,9 +24,19 @@ const useStyles = makeStyles({
   },
   finders: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXL },
   or: { margin: 0, color: tokens.colorNeutralForeground2 },
-  mapHint: { margin: `${tokens.spacingVerticalS} 0 0`, color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200 },
+  mapHint: {
+    margin: `${tokens.spacingVerticalS} 0 0`,
+    color: tokens.colorNeutralForeground2,
+    fontSize: tokens.fontSizeBase200,
+  },
   result: { marginTop: tokens.spacingVerticalXL },
-  next: { marginTop: tokens.spacingVerticalL, display: 'flex', gap: tokens.spacingHorizontalM, alignItems: 'center', flexWrap: 'wrap' },
+  next: {
+    marginTop: tokens.spacingVerticalL,
+    display: 'flex',
+    gap: tokens.spacingHorizontalM,
+    alignItems: 'center',
+    flexWrap: 'wrap',
+  },
   nextError: { margin: 0, color: tokens.colorStatusDangerForeground1 },
 });
 
@@ -70,10 +80,12 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
   const isZipQuery = isLookup && 'zip' in source.query;
   // An unknown ZIP is said beside the ZIP field; a point outside coverage beside the map's own words.
   const zipError = isBadInput && isZipQuery ? (lookupError.fieldMessages().zip ?? lookupError.message) : undefined;
-  const pointError = isBadInput && !isZipQuery
-    ? 'That point is outside the 48 states and DC that Homeground covers. Click inside the lower 48, or enter a ZIP code.'
-    : undefined;
-  const state: StateCode | null = source.kind === 'state' ? source.state : isLookup && lookup.data ? lookup.data.state : null;
+  const pointError =
+    isBadInput && !isZipQuery
+      ? 'That point is outside the 48 states and DC that Homeground covers. Click inside the lower 48, or enter a ZIP code.'
+      : undefined;
+  const state: StateCode | null =
+    source.kind === 'state' ? source.state : isLookup && lookup.data ? lookup.data.state : null;
   const [nextError, setNextError] = useState<string | null>(null);
 
   const confirm = () => {
@@ -87,10 +99,17 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
 
   return (
     <ContentCard aria-labelledby="ground-heading">
-      <Heading level="section" id="ground-heading">Step 1 of 3: your ground</Heading>
+      <Heading level="section" id="ground-heading">
+        Step 1 of 3: your ground
+      </Heading>
       <div className={styles.layout}>
         <div className={styles.finders}>
-          <ZipForm onSubmit={(zip) => look({ zip })} serverError={zipError} isPending={isLookup && lookup.isFetching} isPrimary={!state} />
+          <ZipForm
+            onSubmit={(zip) => look({ zip })}
+            serverError={zipError}
+            isPending={isLookup && lookup.isFetching}
+            isPrimary={!state}
+          />
           <div>
             <Button icon={<Location20Regular />} onClick={geo.locate} disabled={geo.state.status === 'locating'}>
               {geo.state.status === 'locating' ? 'Finding your location…' : 'Use my location'}
@@ -123,7 +142,11 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
         {isLookup && lookup.isFetching && !lookup.data ? <LoadingState label="Finding your ground" /> : null}
         {pointError ? <ErrorState title="Homeground could not find that place" message={pointError} /> : null}
         {lookupError && !isBadInput ? (
-          <ErrorState title="Homeground could not find that place" message={lookupError.message} onRetry={() => void lookup.refetch()} />
+          <ErrorState
+            title="Homeground could not find that place"
+            message={lookupError.message}
+            onRetry={() => void lookup.refetch()}
+          />
         ) : null}
         {state ? (
           <>
@@ -138,10 +161,20 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
               }}
             />
             <div className={styles.next}>
-              <Button appearance="primary" size="large" icon={<ArrowRight20Regular />} iconPosition="after" onClick={confirm}>
+              <Button
+                appearance="primary"
+                size="large"
+                icon={<ArrowRight20Regular />}
+                iconPosition="after"
+                onClick={confirm}
+              >
                 Next: your yard
               </Button>
-              {nextError ? <p className={styles.nextError} role="alert">{nextError}</p> : null}
+              {nextError ? (
+                <p className={styles.nextError} role="alert">
+                  {nextError}
+                </p>
+              ) : null}
             </div>
           </>
         ) : null}

@@ -51,7 +51,11 @@ export function UsMap({ onPick, label, point }: UsMapProps) {
     const path = geoPath(proj);
     return {
       projection: proj,
-      shapes: lower48.features.map((f: StateFeature) => ({ id: String(f.id), name: f.properties.name, d: path(f) ?? '' })),
+      shapes: lower48.features.map((f: StateFeature) => ({
+        id: String(f.id),
+        name: f.properties.name,
+        d: path(f) ?? '',
+      })),
     };
   }, []);
 
@@ -68,7 +72,14 @@ export function UsMap({ onPick, label, point }: UsMapProps) {
   const marker = point ? projection([point.lon, point.lat]) : null;
 
   return (
-    <svg ref={svgRef} viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className={styles.svg} role="img" aria-label={label} onClick={click}>
+    <svg
+      ref={svgRef}
+      viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
+      className={styles.svg}
+      role="img"
+      aria-label={label}
+      onClick={click}
+    >
       {shapes.map((s) => (
         <path key={s.id} d={s.d} className={styles.state} data-state={s.name}>
           <title>{s.name}</title>

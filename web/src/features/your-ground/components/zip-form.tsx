@@ -11,7 +11,12 @@ const useStyles = makeStyles({
 const ZIP_SHAPE = /^\d{5}$/;
 
 /** A 5-digit ZIP checked before it is sent; the server's answer for an unknown ZIP shows in the same place. */
-export function ZipForm({ onSubmit, serverError, isPending, isPrimary = true }: {
+export function ZipForm({
+  onSubmit,
+  serverError,
+  isPending,
+  isPrimary = true,
+}: {
   onSubmit: (zip: string) => void;
   serverError?: string;
   isPending: boolean;
@@ -36,7 +41,12 @@ export function ZipForm({ onSubmit, serverError, isPending, isPrimary = true }: 
   const message = error ?? serverError;
   return (
     <form className={styles.form} onSubmit={submit} noValidate aria-label="Find your ground by ZIP code">
-      <Field className={styles.field} label="ZIP code" validationMessage={message} validationState={message ? 'error' : 'none'}>
+      <Field
+        className={styles.field}
+        label="ZIP code"
+        validationMessage={message}
+        validationState={message ? 'error' : 'none'}
+      >
         <Input
           name="zip"
           inputMode="numeric"
@@ -49,7 +59,13 @@ export function ZipForm({ onSubmit, serverError, isPending, isPrimary = true }: 
           }}
         />
       </Field>
-      <Button className={styles.button} type="submit" appearance={isPrimary ? 'primary' : 'secondary'} icon={<Search20Regular />} disabled={isPending}>
+      <Button
+        className={styles.button}
+        type="submit"
+        appearance={isPrimary ? 'primary' : 'secondary'}
+        icon={<Search20Regular />}
+        disabled={isPending}
+      >
         {isPending ? 'Looking up…' : 'Find my ground'}
       </Button>
     </form>

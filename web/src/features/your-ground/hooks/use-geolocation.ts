@@ -18,7 +18,10 @@ export function useGeolocation() {
   const [state, setState] = useState<GeolocationState>({ status: 'idle' });
   const locate = useCallback(() => {
     if (typeof navigator === 'undefined' || !navigator.geolocation) {
-      setState({ status: 'failed', message: 'This browser cannot share your location. Enter your ZIP code or click the map instead.' });
+      setState({
+        status: 'failed',
+        message: 'This browser cannot share your location. Enter your ZIP code or click the map instead.',
+      });
       return;
     }
     setState({ status: 'locating' });

@@ -24,7 +24,13 @@ export const useBloomChartStyles = makeStyles({
     lineHeight: tokens.lineHeightBase200,
   },
   notCounted: { display: 'block', color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase100 },
-  monthHead: { minWidth: '22px', textAlign: 'center', fontWeight: tokens.fontWeightSemibold, verticalAlign: 'bottom', padding: 0 },
+  monthHead: {
+    minWidth: '22px',
+    textAlign: 'center',
+    fontWeight: tokens.fontWeightSemibold,
+    verticalAlign: 'bottom',
+    padding: 0,
+  },
   monthLong: { '@media (max-width: 640px)': { display: 'none' } },
   monthShort: { display: 'none', '@media (max-width: 640px)': { display: 'inline' } },
   gapFlag: {
@@ -43,7 +49,11 @@ export const useBloomChartStyles = makeStyles({
     backgroundColor: tokens.colorNeutralBackground3,
     padding: 0,
   },
-  bloom: { fontWeight: tokens.fontWeightSemibold, fontSize: tokens.fontSizeBase100, border: `1px solid ${tokens.colorNeutralStroke1}` },
+  bloom: {
+    fontWeight: tokens.fontWeightSemibold,
+    fontSize: tokens.fontSizeBase100,
+    border: `1px solid ${tokens.colorNeutralStroke1}`,
+  },
   gap: { backgroundImage: GAP_HATCH },
   countHead: { textAlign: 'left', fontWeight: tokens.fontWeightSemibold, paddingTop: tokens.spacingVerticalXS },
   count: { textAlign: 'center', paddingTop: tokens.spacingVerticalXS, color: tokens.colorNeutralForeground2 },

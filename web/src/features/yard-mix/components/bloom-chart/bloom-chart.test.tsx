@@ -21,8 +21,15 @@ describe('bloom gaps', () => {
   });
 
   it('says there are no gaps when every season month has 3 in flower', () => {
-    const allSeason = ['a', 'b', 'c'].map((slug) => ({ ...fixtureSpecies[0], slug, commonName: slug, bloomMonths: [4, 5, 6, 7, 8, 9, 10] }));
-    expect(describeGaps(monthlyBloom(allSeason))).toBe('No gaps: every month from April to October has at least 3 species in flower.');
+    const allSeason = ['a', 'b', 'c'].map((slug) => ({
+      ...fixtureSpecies[0],
+      slug,
+      commonName: slug,
+      bloomMonths: [4, 5, 6, 7, 8, 9, 10],
+    }));
+    expect(describeGaps(monthlyBloom(allSeason))).toBe(
+      'No gaps: every month from April to October has at least 3 species in flower.',
+    );
   });
 });
 

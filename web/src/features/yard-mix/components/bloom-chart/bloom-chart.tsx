@@ -29,16 +29,26 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
           </caption>
           <thead>
             <tr>
-              <th scope="col" className={styles.nameHead}>Species</th>
+              <th scope="col" className={styles.nameHead}>
+                Species
+              </th>
               {months.map((m) => (
                 <th key={m.month} scope="col" className={styles.monthHead}>
                   <span className={styles.visuallyHidden}>
                     {MONTH_NAMES[m.month - 1]}
                     {m.isGap ? ', gap' : ''}
                   </span>
-                  <span aria-hidden className={styles.monthLong}>{MONTH_NAMES[m.month - 1].slice(0, 3)}</span>
-                  <span aria-hidden className={styles.monthShort}>{MONTH_NAMES[m.month - 1].charAt(0)}</span>
-                  {m.isGap ? <span aria-hidden className={styles.gapFlag}>gap</span> : null}
+                  <span aria-hidden className={styles.monthLong}>
+                    {MONTH_NAMES[m.month - 1].slice(0, 3)}
+                  </span>
+                  <span aria-hidden className={styles.monthShort}>
+                    {MONTH_NAMES[m.month - 1].charAt(0)}
+                  </span>
+                  {m.isGap ? (
+                    <span aria-hidden className={styles.gapFlag}>
+                      gap
+                    </span>
+                  ) : null}
                 </th>
               ))}
             </tr>
@@ -77,7 +87,9 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
           </tbody>
           <tfoot>
             <tr>
-              <th scope="row" className={styles.countHead}>Flowering species in bloom</th>
+              <th scope="row" className={styles.countHead}>
+                Flowering species in bloom
+              </th>
               {months.map((m) => (
                 <td key={m.month} className={mergeClasses(styles.count, m.isGap && styles.countGap)}>
                   {m.inBloom.length}
@@ -88,7 +100,9 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
         </table>
       </div>
       <BloomLegend species={species} />
-      <p className={styles.summary} data-testid="bloom-gap-summary">{summary}</p>
+      <p className={styles.summary} data-testid="bloom-gap-summary">
+        {summary}
+      </p>
     </div>
   );
 }

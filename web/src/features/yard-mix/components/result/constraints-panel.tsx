@@ -4,7 +4,12 @@ import type { PaletteConstraint } from '@homeground/shared';
 
 const useStyles = makeStyles({
   list: { listStyle: 'none', margin: 0, padding: 0, display: 'grid', gap: tokens.spacingVerticalM },
-  item: { display: 'grid', gridTemplateColumns: 'auto 1fr', gap: `0 ${tokens.spacingHorizontalS}`, alignItems: 'start' },
+  item: {
+    display: 'grid',
+    gridTemplateColumns: 'auto 1fr',
+    gap: `0 ${tokens.spacingHorizontalS}`,
+    alignItems: 'start',
+  },
   met: { color: tokens.colorStatusSuccessForeground1 },
   unmet: { color: tokens.colorStatusWarningForeground3 },
   na: { color: tokens.colorNeutralForeground3 },
@@ -37,7 +42,8 @@ export function ConstraintsPanel({ constraints }: { constraints: readonly Palett
     <ul className={styles.list} aria-label="How this mix is balanced">
       {ordered.map((c) => {
         const status = statusOf(c);
-        const Icon = status === 'met' ? CheckmarkCircle20Filled : status === 'unmet' ? DismissCircle20Regular : Info20Regular;
+        const Icon =
+          status === 'met' ? CheckmarkCircle20Filled : status === 'unmet' ? DismissCircle20Regular : Info20Regular;
         return (
           <li key={c.id} className={styles.item} data-constraint={c.id} data-status={status}>
             <Icon aria-hidden className={styles[status]} />

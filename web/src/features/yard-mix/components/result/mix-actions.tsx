@@ -1,5 +1,11 @@
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
-import { ArrowDownload20Regular, DocumentBulletList20Regular, Edit20Regular, Location20Regular, Print20Regular } from '@fluentui/react-icons';
+import {
+  ArrowDownload20Regular,
+  DocumentBulletList20Regular,
+  Edit20Regular,
+  Location20Regular,
+  Print20Regular,
+} from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
 import { RouterButton } from '../../../../components/links/router-link.js';
 import { CopyLinkButton } from './share-link.js';
@@ -21,18 +27,40 @@ export interface MixActionsProps {
 }
 
 /** Save first; sharing, files and printing as quieter buttons beside it. */
-export function MixActions({ save, shareUrl, cardsHref, onExportCsv, onPrint, onChangeYard, onChangeGround }: MixActionsProps) {
+export function MixActions({
+  save,
+  shareUrl,
+  cardsHref,
+  onExportCsv,
+  onPrint,
+  onChangeYard,
+  onChangeGround,
+}: MixActionsProps) {
   const styles = useStyles();
   return (
     <div className={styles.bar} data-print="hide">
       {save}
       <div className={styles.secondary}>
         <CopyLinkButton url={shareUrl} label="Copy link to this mix" />
-        <Button icon={<ArrowDownload20Regular />} onClick={onExportCsv}>Export CSV</Button>
-        <Button icon={<Print20Regular />} onClick={onPrint}>Print</Button>
-        <RouterButton to={cardsHref} icon={<DocumentBulletList20Regular />}>Make fact cards for this mix</RouterButton>
-        {onChangeYard ? <Button appearance="subtle" icon={<Edit20Regular />} onClick={onChangeYard}>Change your yard</Button> : null}
-        {onChangeGround ? <Button appearance="subtle" icon={<Location20Regular />} onClick={onChangeGround}>Change your ground</Button> : null}
+        <Button icon={<ArrowDownload20Regular />} onClick={onExportCsv}>
+          Export CSV
+        </Button>
+        <Button icon={<Print20Regular />} onClick={onPrint}>
+          Print
+        </Button>
+        <RouterButton to={cardsHref} icon={<DocumentBulletList20Regular />}>
+          Make fact cards for this mix
+        </RouterButton>
+        {onChangeYard ? (
+          <Button appearance="subtle" icon={<Edit20Regular />} onClick={onChangeYard}>
+            Change your yard
+          </Button>
+        ) : null}
+        {onChangeGround ? (
+          <Button appearance="subtle" icon={<Location20Regular />} onClick={onChangeGround}>
+            Change your ground
+          </Button>
+        ) : null}
       </div>
     </div>
   );

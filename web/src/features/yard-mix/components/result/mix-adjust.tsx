@@ -8,7 +8,14 @@ import { speciesListQueryOptions } from '../../../../api/species/species.queries
 const useStyles = makeStyles({
   root: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXL, alignItems: 'flex-end' },
   search: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS },
-  matches: { listStyle: 'none', margin: 0, padding: 0, display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalS },
+  matches: {
+    listStyle: 'none',
+    margin: 0,
+    padding: 0,
+    display: 'flex',
+    flexWrap: 'wrap',
+    gap: tokens.spacingHorizontalS,
+  },
 });
 
 export interface MixAdjustProps {
@@ -28,17 +35,27 @@ export function MixAdjust({ size, state, inMix, onSize, onAdd, isBusy }: MixAdju
   const styles = useStyles();
   const [count, setCount] = useState(size);
   const [text, setText] = useState('');
-  const search = useQuery({ ...speciesListQueryOptions({ q: text.trim(), state, pageSize: 8 }), enabled: text.trim().length >= 2 });
+  const search = useQuery({
+    ...speciesListQueryOptions({ q: text.trim(), state, pageSize: 8 }),
+    enabled: text.trim().length >= 2,
+  });
   const matches = (search.data?.items ?? []).filter((s) => !inMix.includes(s.slug));
   return (
     <div className={styles.root} data-print="hide">
       <Field label="Number of species">
-        <SpinButton value={count} min={1} max={MAX_MIX_SIZE} onChange={(_, d) => {
-          const v = d.value ?? Number(d.displayValue);
-          if (Number.isInteger(v) && v >= 1 && v <= MAX_MIX_SIZE) setCount(v);
-        }} />
+        <SpinButton
+          value={count}
+          min={1}
+          max={MAX_MIX_SIZE}
+          onChange={(_, d) => {
+            const v = d.value ?? Number(d.displayValue);
+            if (Number.isInteger(v) && v >= 1 && v <= MAX_MIX_SIZE) setCount(v);
+          }}
+        />
       </Field>
-      <Button disabled={isBusy || count === size} onClick={() => onSize(count)}>Use {count} species</Button>
+      <Button disabled={isBusy || count === size} onClick={() => onSize(count)}>
+        Use {count} species
+      </Button>
       <div className={styles.search}>
         <Field label="Add a species by name">
           <Input value={text} placeholder="e.g. prairie smoke" onChange={(_, d) => setText(d.value)} />
@@ -47,7 +64,15 @@ export function MixAdjust({ size, state, inMix, onSize, onAdd, isBusy }: MixAdju
           <ul className={styles.matches} aria-label="Species to add">
             {matches.map((s) => (
               <li key={s.slug}>
-                <Button size="small" icon={<Add20Regular />} disabled={isBusy} onClick={() => { onAdd(s.slug); setText(''); }}>
+                <Button
+                  size="small"
+                  icon={<Add20Regular />}
+                  disabled={isBusy}
+                  onClick={() => {
+                    onAdd(s.slug);
+                    setText('');
+                  }}
+                >
                   Add {s.commonName}
                 </Button>
               </li>

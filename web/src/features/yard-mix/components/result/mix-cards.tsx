@@ -29,7 +29,14 @@ const useStyles = makeStyles({
   title: { marginBottom: 0 },
   sci: { fontStyle: 'italic', color: tokens.colorNeutralForeground2, margin: 0 },
   meta: { margin: 0, color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200 },
-  roles: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS, listStyle: 'none', margin: 0, padding: 0 },
+  roles: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    gap: tokens.spacingHorizontalXS,
+    listStyle: 'none',
+    margin: 0,
+    padding: 0,
+  },
   role: {
     fontSize: tokens.fontSizeBase200,
     padding: `1px ${tokens.spacingHorizontalS}`,
@@ -37,12 +44,23 @@ const useStyles = makeStyles({
     border: `1px solid ${tokens.colorBrandStroke2}`,
     backgroundColor: tokens.colorBrandBackground2,
   },
-  figures: { display: 'grid', gridTemplateColumns: 'auto 1fr', gap: `0 ${tokens.spacingHorizontalM}`, margin: 0, fontSize: tokens.fontSizeBase200 },
+  figures: {
+    display: 'grid',
+    gridTemplateColumns: 'auto 1fr',
+    gap: `0 ${tokens.spacingHorizontalM}`,
+    margin: 0,
+    fontSize: tokens.fontSizeBase200,
+  },
   term: { color: tokens.colorNeutralForeground2 },
   def: { margin: 0, fontVariantNumeric: 'tabular-nums' },
   whyTitle: { margin: 0, fontWeight: tokens.fontWeightSemibold, fontSize: tokens.fontSizeBase200 },
   why: { margin: 0, paddingLeft: tokens.spacingHorizontalL, fontSize: tokens.fontSizeBase200 },
-  pending: { margin: 0, color: tokens.colorStatusWarningForeground3, fontWeight: tokens.fontWeightSemibold, fontSize: tokens.fontSizeBase200 },
+  pending: {
+    margin: 0,
+    color: tokens.colorStatusWarningForeground3,
+    fontWeight: tokens.fontWeightSemibold,
+    fontSize: tokens.fontSizeBase200,
+  },
   actions: { marginTop: 'auto' },
 });
 
@@ -55,14 +73,21 @@ export function MixCards({ rows, cautions, onToggleLock, onToggleExclude, onSwap
         const why = whyItFits(r.chosen.parts);
         return (
           <li key={r.slug} className={styles.card} data-slug={r.slug}>
-            <Heading level="card" className={styles.title}>{r.species.commonName}</Heading>
+            <Heading level="card" className={styles.title}>
+              {r.species.commonName}
+            </Heading>
             <p className={styles.sci}>{r.species.scientificName}</p>
             <p className={styles.meta}>
-              Flowers {bloomWords(r.species.bloomMonths)}; {formatHeightRangeCm(r.species.heightCm.min, r.species.heightCm.max)} tall
+              Flowers {bloomWords(r.species.bloomMonths)};{' '}
+              {formatHeightRangeCm(r.species.heightCm.min, r.species.heightCm.max)} tall
             </p>
             {r.isExcluded ? <p className={styles.pending}>Left out at the next rebalance</p> : null}
             <ul className={styles.roles} aria-label="Role in the mix">
-              {r.chosen.roles.map((role) => <li key={role} className={styles.role}>{role}</li>)}
+              {r.chosen.roles.map((role) => (
+                <li key={role} className={styles.role}>
+                  {role}
+                </li>
+              ))}
             </ul>
             <dl className={styles.figures}>
               <dt className={styles.term}>Plants</dt>
@@ -77,8 +102,12 @@ export function MixCards({ rows, cautions, onToggleLock, onToggleExclude, onSwap
             <SpeciesCautions name={r.species.commonName} cautions={cautions[r.slug]} />
             <p className={styles.whyTitle}>Why it fits</p>
             <ul className={styles.why}>
-              {why.fits.map((t) => <li key={t}>{t}</li>)}
-              {why.mindful.map((t) => <li key={t}>Worth knowing: {t}</li>)}
+              {why.fits.map((t) => (
+                <li key={t}>{t}</li>
+              ))}
+              {why.mindful.map((t) => (
+                <li key={t}>Worth knowing: {t}</li>
+              ))}
             </ul>
             <div className={styles.actions}>
               <SpeciesActions

@@ -12,17 +12,19 @@ export function MixNotes({ stateName, lossFactor }: { stateName: string; lossFac
   const styles = useStyles();
   return (
     <ContentCard aria-labelledby="mix-notes-heading">
-      <Heading level="section" id="mix-notes-heading">Before you sow and plant</Heading>
+      <Heading level="section" id="mix-notes-heading">
+        Before you sow and plant
+      </Heading>
       <p className={styles.text}>
-        Plant numbers fill the area at each species' spacing, in groups of the same species. {lossFactorWords(lossFactor)} Where
-        a seed weight is not known, ask your seed supplier for the count per packet.
+        Plant numbers fill the area at each species' spacing, in groups of the same species.{' '}
+        {lossFactorWords(lossFactor)} Where a seed weight is not known, ask your seed supplier for the count per packet.
       </p>
       <MessageBar intent="info" layout="multiline">
         <MessageBarBody>
           <MessageBarTitle>Check local rules</MessageBarTitle>
-          Look up {stateName}'s noxious-weed list and any town, county or homeowners' association rules on plant height and
-          “weeds” before you plant. Native species are rarely listed, but rules differ from place to place. Buy seed or plants
-          from a nursery; never dig plants from the wild.
+          Look up {stateName}'s noxious-weed list and any town, county or homeowners' association rules on plant height
+          and “weeds” before you plant. Native species are rarely listed, but rules differ from place to place. Buy seed
+          or plants from a nursery; never dig plants from the wild.
         </MessageBarBody>
       </MessageBar>
     </ContentCard>

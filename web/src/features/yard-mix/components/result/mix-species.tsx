@@ -9,9 +9,22 @@ import { MixTable } from './mix-table.js';
 import type { SpeciesCaution } from '../../hooks/use-mix-cautions.js';
 
 const useStyles = makeStyles({
-  head: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalL, alignItems: 'center', justifyContent: 'space-between', marginBottom: tokens.spacingVerticalM },
+  head: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    gap: tokens.spacingHorizontalL,
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    marginBottom: tokens.spacingVerticalM,
+  },
   title: { marginBottom: 0 },
-  rebalance: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalM, alignItems: 'center', marginBottom: tokens.spacingVerticalM },
+  rebalance: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    gap: tokens.spacingHorizontalM,
+    alignItems: 'center',
+    marginBottom: tokens.spacingVerticalM,
+  },
   hint: { margin: 0, color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200, maxWidth: '60ch' },
   notices: { display: 'grid', gap: tokens.spacingVerticalS, marginBottom: tokens.spacingVerticalM },
 });
@@ -37,22 +50,39 @@ export interface MixSpeciesProps {
 }
 
 /** The species of the mix, as a table or as cards, with the marks that wait for Rebalance. */
-export function MixSpecies({ rows, cautions, notices, pendingOut, lockedCount, onRebalance, isBusy, ...actions }: MixSpeciesProps) {
+export function MixSpecies({
+  rows,
+  cautions,
+  notices,
+  pendingOut,
+  lockedCount,
+  onRebalance,
+  isBusy,
+  ...actions
+}: MixSpeciesProps) {
   const styles = useStyles();
   const [view, setView] = useState<View>(initialView);
   const viewProps = { rows, cautions, isBusy, ...actions };
 
-  const hint = pendingOut > 0
-    ? `${pendingOut === 1 ? '1 species is' : `${pendingOut} species are`} marked to leave out. Rebalance to fill ${pendingOut === 1 ? 'its place' : 'their places'}.`
-    : lockedCount > 0
-      ? `${lockedCount === 1 ? '1 species is' : `${lockedCount} species are`} kept: they stay when you rebalance.`
-      : 'Keep the species you like and leave out the ones you do not, then rebalance.';
+  const hint =
+    pendingOut > 0
+      ? `${pendingOut === 1 ? '1 species is' : `${pendingOut} species are`} marked to leave out. Rebalance to fill ${pendingOut === 1 ? 'its place' : 'their places'}.`
+      : lockedCount > 0
+        ? `${lockedCount === 1 ? '1 species is' : `${lockedCount} species are`} kept: they stay when you rebalance.`
+        : 'Keep the species you like and leave out the ones you do not, then rebalance.';
 
   return (
     <ContentCard aria-labelledby="mix-species-heading">
       <div className={styles.head}>
-        <Heading level="section" id="mix-species-heading" className={styles.title}>Species in the mix</Heading>
-        <TabList selectedValue={view} onTabSelect={(_, d) => setView(d.value as View)} aria-label="Show the mix as" data-print="hide">
+        <Heading level="section" id="mix-species-heading" className={styles.title}>
+          Species in the mix
+        </Heading>
+        <TabList
+          selectedValue={view}
+          onTabSelect={(_, d) => setView(d.value as View)}
+          aria-label="Show the mix as"
+          data-print="hide"
+        >
           <Tab value="table">Table</Tab>
           <Tab value="cards">Cards</Tab>
         </TabList>
@@ -67,8 +97,12 @@ export function MixSpecies({ rows, cautions, notices, pendingOut, lockedCount, o
         </div>
       ) : null}
       <div className={styles.rebalance} data-print="hide">
-        <Button icon={<ArrowSync20Regular />} onClick={onRebalance} disabled={isBusy}>Rebalance</Button>
-        <p className={styles.hint} aria-live="polite">{hint}</p>
+        <Button icon={<ArrowSync20Regular />} onClick={onRebalance} disabled={isBusy}>
+          Rebalance
+        </Button>
+        <p className={styles.hint} aria-live="polite">
+          {hint}
+        </p>
       </div>
       {view === 'table' ? <MixTable {...viewProps} /> : <MixCards {...viewProps} />}
     </ContentCard>

@@ -9,17 +9,24 @@ const useStyles = makeStyles({
   reason: { margin: `${tokens.spacingVerticalXS} 0 0`, color: tokens.colorNeutralForeground2 },
 });
 
-
 /** The place's name in words: "the Driftless Area of Wisconsin", or just the state. */
 export function usePlaceWords(state: StateCode, ecoregionCode: string | undefined): string {
   const eco = useQuery({ ...ecoregionQueryOptions(ecoregionCode ?? ''), enabled: ecoregionCode !== undefined });
   const stateName = STATE_NAMES[state] ?? state;
   if (!ecoregionCode) return stateName;
-  return eco.data ? `the ${eco.data.name} (ecoregion ${ecoregionCode}) of ${stateName}` : `ecoregion ${ecoregionCode} of ${stateName}`;
+  return eco.data
+    ? `the ${eco.data.name} (ecoregion ${ecoregionCode}) of ${stateName}`
+    : `ecoregion ${ecoregionCode} of ${stateName}`;
 }
 
 /** One sentence naming the yard the mix is for, and why it has as many species as it has. */
-export function MixSummary({ site, state, ecoregionCode, count, sizeReason }: {
+export function MixSummary({
+  site,
+  state,
+  ecoregionCode,
+  count,
+  sizeReason,
+}: {
   site: Site;
   state: StateCode;
   ecoregionCode?: string;

@@ -17,8 +17,17 @@ const useStyles = makeStyles({
     verticalAlign: 'bottom',
   },
   num: { textAlign: 'right', whiteSpace: 'nowrap' },
-  td: { padding: `${tokens.spacingVerticalS} ${tokens.spacingHorizontalS}`, borderBottom: `1px solid ${tokens.colorNeutralStroke2}`, verticalAlign: 'top' },
-  caption: { textAlign: 'left', marginBottom: tokens.spacingVerticalS, color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200 },
+  td: {
+    padding: `${tokens.spacingVerticalS} ${tokens.spacingHorizontalS}`,
+    borderBottom: `1px solid ${tokens.colorNeutralStroke2}`,
+    verticalAlign: 'top',
+  },
+  caption: {
+    textAlign: 'left',
+    marginBottom: tokens.spacingVerticalS,
+    color: tokens.colorNeutralForeground2,
+    fontSize: tokens.fontSizeBase200,
+  },
   rowHead: { textAlign: 'left', fontWeight: tokens.fontWeightRegular, minWidth: '14rem' },
   name: { fontWeight: tokens.fontWeightSemibold, display: 'block' },
   sci: { fontStyle: 'italic', color: tokens.colorNeutralForeground2, display: 'block' },
@@ -26,7 +35,11 @@ const useStyles = makeStyles({
   roles: { margin: 0, paddingLeft: tokens.spacingHorizontalL, fontSize: tokens.fontSizeBase200 },
   why: { marginTop: tokens.spacingVerticalXS, fontSize: tokens.fontSizeBase200 },
   whyList: { margin: `${tokens.spacingVerticalXS} 0 0`, paddingLeft: tokens.spacingHorizontalL },
-  pending: { color: tokens.colorStatusWarningForeground3, fontWeight: tokens.fontWeightSemibold, fontSize: tokens.fontSizeBase200 },
+  pending: {
+    color: tokens.colorStatusWarningForeground3,
+    fontWeight: tokens.fontWeightSemibold,
+    fontSize: tokens.fontSizeBase200,
+  },
 });
 
 export interface MixViewProps {
@@ -44,18 +57,30 @@ export function MixTable({ rows, cautions, onToggleLock, onToggleExclude, onSwap
   return (
     <div className={styles.scroller}>
       <table className={styles.table}>
-        <caption className={styles.caption}>
-          Your yard mix, one species a row
-        </caption>
+        <caption className={styles.caption}>Your yard mix, one species a row</caption>
         <thead>
           <tr>
-            <th scope="col" className={styles.th}>Species</th>
-            <th scope="col" className={styles.th}>Role in the mix</th>
-            <th scope="col" className={mergeClasses(styles.th, styles.num)}>Plants</th>
-            <th scope="col" className={mergeClasses(styles.th, styles.num)}>Spacing</th>
-            <th scope="col" className={mergeClasses(styles.th, styles.num)}>Seeds to sow</th>
-            <th scope="col" className={mergeClasses(styles.th, styles.num)}>Seed weight</th>
-            <th scope="col" className={styles.th} data-print="hide">Change</th>
+            <th scope="col" className={styles.th}>
+              Species
+            </th>
+            <th scope="col" className={styles.th}>
+              Role in the mix
+            </th>
+            <th scope="col" className={mergeClasses(styles.th, styles.num)}>
+              Plants
+            </th>
+            <th scope="col" className={mergeClasses(styles.th, styles.num)}>
+              Spacing
+            </th>
+            <th scope="col" className={mergeClasses(styles.th, styles.num)}>
+              Seeds to sow
+            </th>
+            <th scope="col" className={mergeClasses(styles.th, styles.num)}>
+              Seed weight
+            </th>
+            <th scope="col" className={styles.th} data-print="hide">
+              Change
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -67,21 +92,28 @@ export function MixTable({ rows, cautions, onToggleLock, onToggleExclude, onSwap
                   <span className={styles.name}>{r.species.commonName}</span>
                   <span className={styles.sci}>{r.species.scientificName}</span>
                   <span className={styles.meta}>
-                    Flowers {bloomWords(r.species.bloomMonths)}; {formatHeightRangeCm(r.species.heightCm.min, r.species.heightCm.max)} tall
+                    Flowers {bloomWords(r.species.bloomMonths)};{' '}
+                    {formatHeightRangeCm(r.species.heightCm.min, r.species.heightCm.max)} tall
                   </span>
                   {r.isExcluded ? <span className={styles.pending}>Left out at the next rebalance</span> : null}
                   <SpeciesCautions name={r.species.commonName} cautions={cautions[r.slug]} />
                   <details className={styles.why}>
                     <summary>Why it fits</summary>
                     <ul className={styles.whyList}>
-                      {why.fits.map((t) => <li key={t}>{t}</li>)}
-                      {why.mindful.map((t) => <li key={t}>Worth knowing: {t}</li>)}
+                      {why.fits.map((t) => (
+                        <li key={t}>{t}</li>
+                      ))}
+                      {why.mindful.map((t) => (
+                        <li key={t}>Worth knowing: {t}</li>
+                      ))}
                     </ul>
                   </details>
                 </th>
                 <td className={styles.td}>
                   <ul className={styles.roles}>
-                    {r.chosen.roles.map((role) => <li key={role}>{role}</li>)}
+                    {r.chosen.roles.map((role) => (
+                      <li key={role}>{role}</li>
+                    ))}
                   </ul>
                 </td>
                 <td className={mergeClasses(styles.td, styles.num)}>{plantsWords(r.quantity)}</td>

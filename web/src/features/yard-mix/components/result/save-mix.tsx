@@ -66,7 +66,11 @@ export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: S
     const parsed = saveMixRequestSchema.safeParse(request);
     if (!parsed.success) {
       const issue = parsed.error.issues.find((i) => i.path[0] === 'name') ?? parsed.error.issues[0];
-      setError(issue?.path[0] === 'name' ? `The name ${issue.message}.` : 'This mix cannot be saved as it is; rebalance it and try again.');
+      setError(
+        issue?.path[0] === 'name'
+          ? `The name ${issue.message}.`
+          : 'This mix cannot be saved as it is; rebalance it and try again.',
+      );
       return;
     }
     setError(undefined);
@@ -75,7 +79,13 @@ export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: S
 
   return (
     <form className={styles.form} onSubmit={submit} noValidate aria-label="Save this mix">
-      <Field className={styles.name} label="Name of the mix" required validationMessage={error} validationState={error ? 'error' : 'none'}>
+      <Field
+        className={styles.name}
+        label="Name of the mix"
+        required
+        validationMessage={error}
+        validationState={error ? 'error' : 'none'}
+      >
         <Input value={name} maxLength={80} onChange={(_, d) => setName(d.value)} />
       </Field>
       <Button type="submit" appearance="primary" icon={<Save20Regular />} disabled={save.isPending}>

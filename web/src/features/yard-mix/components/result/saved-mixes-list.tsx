@@ -12,20 +12,30 @@ export function SavedMixesList() {
   const query = useQuery(myMixesQueryOptions());
   return (
     <ContentCard aria-labelledby="saved-mixes-heading">
-      <Heading level="section" id="saved-mixes-heading">Your saved mixes</Heading>
+      <Heading level="section" id="saved-mixes-heading">
+        Your saved mixes
+      </Heading>
       {query.isPending ? <LoadingState label="Loading your saved mixes" /> : null}
-      {query.isError ? <ErrorState title="Your saved mixes did not load." message={query.error.message} onRetry={() => void query.refetch()} /> : null}
+      {query.isError ? (
+        <ErrorState
+          title="Your saved mixes did not load."
+          message={query.error.message}
+          onRetry={() => void query.refetch()}
+        />
+      ) : null}
       {query.data && query.data.length === 0 ? (
         <EmptyState title="No saved mixes yet">Save a yard mix from Find plants and it will be listed here.</EmptyState>
       ) : null}
       {query.data && query.data.length > 0 ? (
         <ul aria-label="Your saved mixes">
-          {[...query.data].sort((a, b) => b.createdAt.localeCompare(a.createdAt)).map((m) => (
-            <li key={m.id}>
-              <RouterLink to={paths.savedMix.build(m.id)}>{m.name}</RouterLink>
-              {` — ${m.chosen.length} species for ${formatArea(m.request.site.areaSqFt)} in ${STATE_NAMES[m.request.region.state as StateCode] ?? m.request.region.state}`}
-            </li>
-          ))}
+          {[...query.data]
+            .sort((a, b) => b.createdAt.localeCompare(a.createdAt))
+            .map((m) => (
+              <li key={m.id}>
+                <RouterLink to={paths.savedMix.build(m.id)}>{m.name}</RouterLink>
+                {` — ${m.chosen.length} species for ${formatArea(m.request.site.areaSqFt)} in ${STATE_NAMES[m.request.region.state as StateCode] ?? m.request.region.state}`}
+              </li>
+            ))}
         </ul>
       ) : null}
     </ContentCard>

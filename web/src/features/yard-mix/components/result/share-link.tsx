@@ -8,7 +8,11 @@ const useStyles = makeStyles({
 });
 
 /** Copies a link to the clipboard; where the browser refuses, shows the link to copy by hand. */
-export function CopyLinkButton({ url, label = 'Copy link', appearance = 'secondary' }: {
+export function CopyLinkButton({
+  url,
+  label = 'Copy link',
+  appearance = 'secondary',
+}: {
   url: string;
   label?: string;
   appearance?: 'secondary' | 'primary' | 'subtle';

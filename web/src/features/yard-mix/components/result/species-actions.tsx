@@ -1,5 +1,10 @@
 import { Button, makeStyles, tokens, ToggleButton } from '@fluentui/react-components';
-import { ArrowSwap20Regular, LockClosed20Regular, LockOpen20Regular, SubtractCircle20Regular } from '@fluentui/react-icons';
+import {
+  ArrowSwap20Regular,
+  LockClosed20Regular,
+  LockOpen20Regular,
+  SubtractCircle20Regular,
+} from '@fluentui/react-icons';
 
 const useStyles = makeStyles({
   row: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS },
@@ -16,7 +21,15 @@ export interface SpeciesActionsProps {
 }
 
 /** Keep, leave out or swap one species; the pressed state is spoken and shown in words, not only in colour. */
-export function SpeciesActions({ name, isLocked, isExcluded, onToggleLock, onToggleExclude, onSwap, disabled }: SpeciesActionsProps) {
+export function SpeciesActions({
+  name,
+  isLocked,
+  isExcluded,
+  onToggleLock,
+  onToggleExclude,
+  onSwap,
+  disabled,
+}: SpeciesActionsProps) {
   const styles = useStyles();
   return (
     <div className={styles.row} role="group" aria-label={`Changes for ${name}`} data-print="hide">
@@ -40,7 +53,13 @@ export function SpeciesActions({ name, isLocked, isExcluded, onToggleLock, onTog
       >
         {isExcluded ? 'Left out' : 'Leave out'}
       </ToggleButton>
-      <Button size="small" icon={<ArrowSwap20Regular />} onClick={onSwap} disabled={disabled} aria-label={`Swap ${name}`}>
+      <Button
+        size="small"
+        icon={<ArrowSwap20Regular />}
+        onClick={onSwap}
+        disabled={disabled}
+        aria-label={`Swap ${name}`}
+      >
         Swap
       </Button>
     </div>

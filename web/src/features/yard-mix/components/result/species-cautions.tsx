@@ -3,8 +3,20 @@ import { Warning16Regular } from '@fluentui/react-icons';
 import type { SpeciesCaution } from '../../hooks/use-mix-cautions.js';
 
 const useStyles = makeStyles({
-  list: { listStyle: 'none', margin: `${tokens.spacingVerticalXS} 0 0`, padding: 0, display: 'grid', gap: tokens.spacingVerticalXXS },
-  item: { display: 'flex', gap: tokens.spacingHorizontalXS, alignItems: 'flex-start', fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground1 },
+  list: {
+    listStyle: 'none',
+    margin: `${tokens.spacingVerticalXS} 0 0`,
+    padding: 0,
+    display: 'grid',
+    gap: tokens.spacingVerticalXXS,
+  },
+  item: {
+    display: 'flex',
+    gap: tokens.spacingHorizontalXS,
+    alignItems: 'flex-start',
+    fontSize: tokens.fontSizeBase200,
+    color: tokens.colorNeutralForeground1,
+  },
   icon: { flexShrink: 0, marginTop: '2px', color: tokens.colorStatusWarningForeground3 },
 });
 

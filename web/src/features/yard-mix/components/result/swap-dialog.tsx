@@ -1,5 +1,13 @@
 import {
-  Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, tokens,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogBody,
+  DialogContent,
+  DialogSurface,
+  DialogTitle,
+  makeStyles,
+  tokens,
 } from '@fluentui/react-components';
 import type { AlternativesRequest, ScorePart, ScorePartName } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
@@ -29,7 +37,12 @@ const useStyles = makeStyles({
   name: { margin: 0, fontWeight: tokens.fontWeightSemibold },
   sci: { fontStyle: 'italic', fontWeight: tokens.fontWeightRegular, color: tokens.colorNeutralForeground2 },
   change: { margin: 0 },
-  reasons: { margin: 0, paddingLeft: tokens.spacingHorizontalL, color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200 },
+  reasons: {
+    margin: 0,
+    paddingLeft: tokens.spacingHorizontalL,
+    color: tokens.colorNeutralForeground2,
+    fontSize: tokens.fontSizeBase200,
+  },
 });
 
 /** What a swap does to the mix as a whole, in words with the number beside them. */
@@ -51,7 +64,10 @@ export interface SwapDialogProps {
 /** "Show me alternatives for this slot": the best few replacements with the change each makes and why it fits. */
 export function SwapDialog({ slot, request, onPick, onClose }: SwapDialogProps) {
   const styles = useStyles();
-  const query = useQuery({ ...alternativesQueryOptions({ ...request, slot: slot?.slug ?? '' }), enabled: slot !== null });
+  const query = useQuery({
+    ...alternativesQueryOptions({ ...request, slot: slot?.slug ?? '' }),
+    enabled: slot !== null,
+  });
   const options = query.data?.alternatives.slice(0, SHOWN) ?? [];
 
   return (
@@ -62,7 +78,11 @@ export function SwapDialog({ slot, request, onPick, onClose }: SwapDialogProps) 
           <DialogContent>
             {query.isPending ? <LoadingState label="Finding species that could take its place" /> : null}
             {query.isError ? (
-              <ErrorState title="Homeground could not find alternatives" message={query.error.message} onRetry={() => void query.refetch()} />
+              <ErrorState
+                title="Homeground could not find alternatives"
+                message={query.error.message}
+                onRetry={() => void query.refetch()}
+              />
             ) : null}
             {query.isSuccess && options.length === 0 ? (
               <EmptyState title="No other species fit this place in the mix">

@@ -11,7 +11,9 @@ function api(extra = {}) {
   return {
     'POST /api/mixes/balance': { body: fixtureMix() },
     'GET /api/ecoregions/52': { body: driftlessEcoregion },
-    'GET /api/species/test-late': { body: { ...fixtureSpecies[3], cautions: [{ kind: 'sap-irritant', text: CAUTION, source: 'test' }] } },
+    'GET /api/species/test-late': {
+      body: { ...fixtureSpecies[3], cautions: [{ kind: 'sap-irritant', text: CAUTION, source: 'test' }] },
+    },
     ...extra,
   };
 }
@@ -30,9 +32,13 @@ describe('your yard mix', { timeout: 30_000 }, () => {
     const rules = screen.getByRole('list', { name: 'How this mix is balanced' });
     const items = within(rules).getAllByRole('listitem');
     expect(items[0]).toHaveTextContent('Met: Spring (April to mid-June): at least 3 species in flower every month');
-    expect(items[1]).toHaveTextContent('Not met: Late summer and fall (August to October): at least 3 species in flower every month');
+    expect(items[1]).toHaveTextContent(
+      'Not met: Late summer and fall (August to October): at least 3 species in flower every month',
+    );
     // Program names only in the source note, never in the rule.
-    expect(within(items[0]).getByText(/^Source:/)).toHaveTextContent('Source: USDA NRCS pollinator habitat practice (CP42)');
+    expect(within(items[0]).getByText(/^Source:/)).toHaveTextContent(
+      'Source: USDA NRCS pollinator habitat practice (CP42)',
+    );
     expect(within(items[0]).getByText(/^Met:/).parentElement?.textContent).not.toMatch(/CP42/);
     expect(screen.getByTestId('total-footprint')).toHaveTextContent(/The plants take .* of your 200 ft²/);
     expect(items[1]).toHaveTextContent('Only 2 late bloomers suit your ground.');
@@ -43,7 +49,8 @@ describe('your yard mix', { timeout: 30_000 }, () => {
     expect(screen.getByText(/20% of seedlings lost/)).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Sign in to save' })).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Make fact cards for this mix' })).toHaveAttribute(
-      'href', `/cards-and-labels?species=${fixtureSpecies.map((s) => s.slug).join(',')}`,
+      'href',
+      `/cards-and-labels?species=${fixtureSpecies.map((s) => s.slug).join(',')}`,
     );
     expect(fake.callsTo('POST', '/api/mixes/balance')).toHaveLength(1);
     expect(fake.callsTo('POST', '/api/mixes/balance')[0].body).toEqual({
@@ -70,11 +77,25 @@ describe('your yard mix', { timeout: 30_000 }, () => {
 
   it('swaps one species for an alternative and shows the change it makes', async () => {
     const alt = { ...fixtureSpecies[0], slug: 'test-swap', commonName: 'swapped-in test violet', bloomMonths: [9] };
-    const { api: fake, user, router } = renderApp({
+    const {
+      api: fake,
+      user,
+      router,
+    } = renderApp({
       path: FIXTURE_MIX_PATH,
       api: api({
         'POST /api/mixes/alternatives': {
-          body: { alternatives: [{ slug: 'test-swap', objectiveChange: 0.25, score: 9, parts: [{ name: 'bloom-gap', points: 2, reason: 'Flowers in September, when your mix has least.' }], species: alt }] },
+          body: {
+            alternatives: [
+              {
+                slug: 'test-swap',
+                objectiveChange: 0.25,
+                score: 9,
+                parts: [{ name: 'bloom-gap', points: 2, reason: 'Flowers in September, when your mix has least.' }],
+                species: alt,
+              },
+            ],
+          },
         },
       }),
     });
@@ -88,7 +109,9 @@ describe('your yard mix', { timeout: 30_000 }, () => {
     // (A name filter on a hidden element never matches: testing-library/dom-testing-library#846.)
     const dialog = await screen.findByRole('dialog', { hidden: true }, { timeout: 5000 });
     expect(within(dialog).getByRole('heading', { hidden: true })).toHaveTextContent('Instead of test sedge');
-    expect(await within(dialog).findByText('Balances the mix better (+0.25).', {}, { timeout: 5000 })).toBeInTheDocument();
+    expect(
+      await within(dialog).findByText('Balances the mix better (+0.25).', {}, { timeout: 5000 }),
+    ).toBeInTheDocument();
     expect(within(dialog).getByText('Flowers in September, when your mix has least.')).toBeInTheDocument();
     await user.click(within(dialog).getByRole('button', { name: 'Use swapped-in test violet', hidden: true }));
 
@@ -97,6 +120,9 @@ describe('your yard mix', { timeout: 30_000 }, () => {
     expect(body.options.size).toBe(5);
     expect(body.options.locked).toContain('test-swap');
     expect(body.options.locked).not.toContain('test-sedge');
-    expect(fake.callsTo('POST', '/api/mixes/alternatives')[0].body).toMatchObject({ slot: 'test-sedge', chosen: fixtureSpecies.map((s) => s.slug) });
+    expect(fake.callsTo('POST', '/api/mixes/alternatives')[0].body).toMatchObject({
+      slot: 'test-sedge',
+      chosen: fixtureSpecies.map((s) => s.slug),
+    });
   });
 });

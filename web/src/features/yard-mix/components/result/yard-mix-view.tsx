@@ -40,9 +40,21 @@ export interface YardMixViewProps {
 }
 
 /** Step 3: the balanced yard mix with its bloom chart, design rules, quantities and the person's changes. */
-export function YardMixView({ plan, onPlanChange, isSignedIn, signInHref, title = 'Your yard mix', intro, onChangeYard, onChangeGround }: YardMixViewProps) {
+export function YardMixView({
+  plan,
+  onPlanChange,
+  isSignedIn,
+  signInHref,
+  title = 'Your yard mix',
+  intro,
+  onChangeYard,
+  onChangeGround,
+}: YardMixViewProps) {
   const styles = useStyles();
-  const { query, slugs, isUpdating, toggleLock, toggleExclude, rebalance, swap, addSpecies, setSize } = useMixPlan(plan, onPlanChange);
+  const { query, slugs, isUpdating, toggleLock, toggleExclude, rebalance, swap, addSpecies, setSize } = useMixPlan(
+    plan,
+    onPlanChange,
+  );
   const [swapSlot, setSwapSlot] = useState<string | null>(null);
   const mix = query.data;
   const speciesList = mix ? mix.palette.chosen.map((c) => mix.species[c.slug]).filter(Boolean) : [];
@@ -50,11 +62,7 @@ export function YardMixView({ plan, onPlanChange, isSignedIn, signInHref, title 
 
   if (query.isPending) return <LoadingState label="Working out your yard mix" />;
   if (mix && mix.palette.coverage && !mix.palette.coverage.covered) {
-    return (
-      <EmptyState title="Homeground does not cover this region yet">
-        {mix.palette.coverage.message}
-      </EmptyState>
-    );
+    return <EmptyState title="Homeground does not cover this region yet">{mix.palette.coverage.message}</EmptyState>;
   }
   if (query.isError || !mix) {
     return (
@@ -76,30 +84,55 @@ export function YardMixView({ plan, onPlanChange, isSignedIn, signInHref, title 
 
   const print = () => {
     // Closed <details> would print empty; open every "why it fits" first.
-    document.querySelectorAll<HTMLDetailsElement>('[data-print-root="yard-mix"] details').forEach((d) => (d.open = true));
+    document
+      .querySelectorAll<HTMLDetailsElement>('[data-print-root="yard-mix"] details')
+      .forEach((d) => (d.open = true));
     window.print();
   };
 
   return (
     <div className={styles.root} data-print-root="yard-mix" aria-busy={isUpdating}>
       <ContentCard aria-labelledby="yard-mix-heading" className={styles.head}>
-        <Heading level="section" id="yard-mix-heading">{title}</Heading>
+        <Heading level="section" id="yard-mix-heading">
+          {title}
+        </Heading>
         {intro}
-        <MixSummary site={mix.site} state={plan.region.state as StateCode} ecoregionCode={plan.region.ecoregionCode}
-          count={rows.length} sizeReason={mix.palette.sizeReason} />
+        <MixSummary
+          site={mix.site}
+          state={plan.region.state as StateCode}
+          ecoregionCode={plan.region.ecoregionCode}
+          count={rows.length}
+          sizeReason={mix.palette.sizeReason}
+        />
         {mix.palette.plantingMethod === 'seeding' ? (
           <p data-testid="seeding-plan">
-            A planting this size is sown as a meadow: about {Math.round((mix.seeding ?? []).reduce((sum, l) => sum + l.seedsPerSqFt, 0))} seeds per ft² in all, shared among the species below.
+            A planting this size is sown as a meadow: about{' '}
+            {Math.round((mix.seeding ?? []).reduce((sum, l) => sum + l.seedsPerSqFt, 0))} seeds per ft² in all, shared
+            among the species below.
           </p>
         ) : (
           <p data-testid="total-footprint">
-            The plants take {formatArea(mix.totalFootprintSqFt ?? 0)} of your {formatArea(mix.site.areaSqFt)} when grown (plants × spacing²).
+            The plants take {formatArea(mix.totalFootprintSqFt ?? 0)} of your {formatArea(mix.site.areaSqFt)} when grown
+            (plants × spacing²).
           </p>
         )}
-        <MixAdjust size={mix.palette.size} state={plan.region.state as StateCode} inMix={slugs} onSize={setSize} onAdd={addSpecies} isBusy={isUpdating} />
+        <MixAdjust
+          size={mix.palette.size}
+          state={plan.region.state as StateCode}
+          inMix={slugs}
+          onSize={setSize}
+          onAdd={addSpecies}
+          isBusy={isUpdating}
+        />
         <MixActions
-          save={<SaveMix isSignedIn={isSignedIn} signInHref={signInHref} defaultName={`${title === 'Your yard mix' ? 'Yard mix' : title}, ${stateName}`}
-            buildRequest={(name) => ({ name, request: paletteRequestOf(plan), chosen: slugs })} />}
+          save={
+            <SaveMix
+              isSignedIn={isSignedIn}
+              signInHref={signInHref}
+              defaultName={`${title === 'Your yard mix' ? 'Yard mix' : title}, ${stateName}`}
+              buildRequest={(name) => ({ name, request: paletteRequestOf(plan), chosen: slugs })}
+            />
+          }
           shareUrl={shareUrl}
           cardsHref={cardsHref}
           onExportCsv={() => downloadText(mixCsv(rows), 'homeground-yard-mix.csv')}
@@ -117,18 +150,31 @@ export function YardMixView({ plan, onPlanChange, isSignedIn, signInHref, title 
           Try a different sun or moisture answer, or a larger area.
         </EmptyState>
       ) : (
-        <MixSpecies rows={rows} cautions={cautions} pendingOut={pendingOut} lockedCount={plan.locked.length}
-          onRebalance={rebalance} onToggleLock={toggleLock} onToggleExclude={toggleExclude}
-          onSwap={setSwapSlot} isBusy={isUpdating} notices={mix.palette.notices} />
+        <MixSpecies
+          rows={rows}
+          cautions={cautions}
+          pendingOut={pendingOut}
+          lockedCount={plan.locked.length}
+          onRebalance={rebalance}
+          onToggleLock={toggleLock}
+          onToggleExclude={toggleExclude}
+          onSwap={setSwapSlot}
+          isBusy={isUpdating}
+          notices={mix.palette.notices}
+        />
       )}
 
       <ContentCard aria-labelledby="bloom-heading">
-        <Heading level="section" id="bloom-heading">Bloom chart</Heading>
+        <Heading level="section" id="bloom-heading">
+          Bloom chart
+        </Heading>
         <BloomChart species={speciesList} />
       </ContentCard>
 
       <ContentCard aria-labelledby="rules-heading">
-        <Heading level="section" id="rules-heading">How this mix is balanced</Heading>
+        <Heading level="section" id="rules-heading">
+          How this mix is balanced
+        </Heading>
         <ConstraintsPanel constraints={mix.palette.constraints} />
       </ContentCard>
 

@@ -4,7 +4,11 @@ import type { Choice } from '../../utils/yard-form-choices.js';
 const useStyles = makeStyles({
   label: { display: 'flex', flexDirection: 'column' },
   name: { fontWeight: tokens.fontWeightSemibold },
-  line: { color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200, lineHeight: tokens.lineHeightBase200 },
+  line: {
+    color: tokens.colorNeutralForeground2,
+    fontSize: tokens.fontSizeBase200,
+    lineHeight: tokens.lineHeightBase200,
+  },
 });
 
 export interface ChoiceFieldProps<T extends string> {
@@ -19,10 +23,25 @@ export interface ChoiceFieldProps<T extends string> {
 }
 
 /** A question answered by one of a few choices, each with its own explanatory line. */
-export function ChoiceField<T extends string>({ label, hint, choices, value, onChange, error, required, name }: ChoiceFieldProps<T>) {
+export function ChoiceField<T extends string>({
+  label,
+  hint,
+  choices,
+  value,
+  onChange,
+  error,
+  required,
+  name,
+}: ChoiceFieldProps<T>) {
   const styles = useStyles();
   return (
-    <Field label={label} hint={hint} required={required} validationMessage={error} validationState={error ? 'error' : 'none'}>
+    <Field
+      label={label}
+      hint={hint}
+      required={required}
+      validationMessage={error}
+      validationState={error ? 'error' : 'none'}
+    >
       <RadioGroup name={name} value={value} onChange={(_, d) => onChange(d.value as T)}>
         {choices.map((c) => (
           <Radio

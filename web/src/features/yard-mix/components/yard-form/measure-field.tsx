@@ -4,9 +4,19 @@ import { useId } from 'react';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXXS },
-  row: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: `${tokens.spacingVerticalXS} ${tokens.spacingHorizontalM}` },
+  row: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    gap: `${tokens.spacingVerticalXS} ${tokens.spacingHorizontalM}`,
+  },
   input: { width: '10rem' },
-  hint: { margin: 0, color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase200, lineHeight: tokens.lineHeightBase200 },
+  hint: {
+    margin: 0,
+    color: tokens.colorNeutralForeground3,
+    fontSize: tokens.fontSizeBase200,
+    lineHeight: tokens.lineHeightBase200,
+  },
   error: {
     margin: 0,
     display: 'flex',
@@ -76,7 +86,9 @@ export function MeasureField<U extends string>(props: MeasureFieldProps<U>) {
           {props.error}
         </p>
       ) : null}
-      <p id={hintId} className={styles.hint}>{props.other || props.hint}</p>
+      <p id={hintId} className={styles.hint}>
+        {props.other || props.hint}
+      </p>
     </div>
   );
 }

@@ -18,7 +18,11 @@ export const useYardFormStyles = makeStyles({
     marginBottom: tokens.spacingVerticalS,
   },
   groupLabel: { margin: `0 0 ${tokens.spacingVerticalXS}`, fontWeight: tokens.fontWeightSemibold },
-  goals: { display: 'grid', gap: tokens.spacingVerticalXS, gridTemplateColumns: 'repeat(auto-fill, minmax(260px, 1fr))' },
+  goals: {
+    display: 'grid',
+    gap: tokens.spacingVerticalXS,
+    gridTemplateColumns: 'repeat(auto-fill, minmax(260px, 1fr))',
+  },
   goalLine: { display: 'block', color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200 },
   goalName: { fontWeight: tokens.fontWeightSemibold },
   actions: { display: 'flex', gap: tokens.spacingHorizontalM, flexWrap: 'wrap', alignItems: 'center' },

@@ -66,6 +66,9 @@ describe('checkYard', () => {
     const base = { ...EMPTY_YARD, sun: 'full', moisture: 'dry', deerPressure: 'low', area: '200' } as const;
     // 3 ft = 36 in × 2.54 cm/in (exact) = 91.44 cm, rounded to 91.
     expect(checkYard({ ...base, maxHeight: '3' })).toMatchObject({ ok: true, site: { maxHeightCm: 91 } });
-    expect(checkYard({ ...base, maxHeight: '2', heightUnit: 'cm' })).toMatchObject({ ok: false, errors: { maxHeight: 'The tallest plant must be at least 4 in (10 cm).' } });
+    expect(checkYard({ ...base, maxHeight: '2', heightUnit: 'cm' })).toMatchObject({
+      ok: false,
+      errors: { maxHeight: 'The tallest plant must be at least 4 in (10 cm).' },
+    });
   });
 });

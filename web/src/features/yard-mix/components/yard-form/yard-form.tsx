@@ -5,9 +5,21 @@ import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import type { AreaUnit } from '../../utils/mix-plan.js';
 import { ChoiceField } from './choice-field.js';
 import { MeasureField } from './measure-field.js';
-import { DEER_CHOICES, GOAL_CHOICES, MOISTURE_CHOICES, SOIL_CHOICES, SUN_CHOICES } from '../../utils/yard-form-choices.js';
 import {
-  checkYard, type HeightUnit, otherAreaUnit, otherHeightUnit, type YardErrors, type YardField, type YardFormValues,
+  DEER_CHOICES,
+  GOAL_CHOICES,
+  MOISTURE_CHOICES,
+  SOIL_CHOICES,
+  SUN_CHOICES,
+} from '../../utils/yard-form-choices.js';
+import {
+  checkYard,
+  type HeightUnit,
+  otherAreaUnit,
+  otherHeightUnit,
+  type YardErrors,
+  type YardField,
+  type YardFormValues,
 } from '../../utils/yard-form-values.js';
 import { useYardFormStyles } from './yard-form.styles.js';
 
@@ -39,7 +51,8 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
   useEffect(() => {
     if (attempt === 0) return;
     const invalid = formRef.current?.querySelector<HTMLElement>('[aria-invalid="true"]');
-    const target = invalid && invalid.matches('input, select, textarea') ? invalid : invalid?.querySelector<HTMLElement>('input');
+    const target =
+      invalid && invalid.matches('input, select, textarea') ? invalid : invalid?.querySelector<HTMLElement>('input');
     target?.focus();
   }, [attempt]);
 
@@ -67,33 +80,78 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
     <form ref={formRef} className={styles.form} onSubmit={submit} noValidate aria-label="Your yard">
       <fieldset className={styles.group}>
         <legend className={styles.legend}>Light and soil</legend>
-        <ChoiceField name="sun" label="How much sun does the spot get?" required choices={SUN_CHOICES} value={values.sun}
-          onChange={(v) => set('sun', v, 'sun')} error={errors.sun} />
-        <ChoiceField name="moisture" label="How wet does the soil stay?" required choices={MOISTURE_CHOICES} value={values.moisture}
-          onChange={(v) => set('moisture', v, 'moisture')} error={errors.moisture} />
-        <ChoiceField name="soilTexture" label="What is the soil like? (optional)" choices={SOIL_CHOICES} value={values.soilTexture}
-          onChange={(v) => set('soilTexture', v, 'soilTexture')} error={errors.soilTexture} />
+        <ChoiceField
+          name="sun"
+          label="How much sun does the spot get?"
+          required
+          choices={SUN_CHOICES}
+          value={values.sun}
+          onChange={(v) => set('sun', v, 'sun')}
+          error={errors.sun}
+        />
+        <ChoiceField
+          name="moisture"
+          label="How wet does the soil stay?"
+          required
+          choices={MOISTURE_CHOICES}
+          value={values.moisture}
+          onChange={(v) => set('moisture', v, 'moisture')}
+          error={errors.moisture}
+        />
+        <ChoiceField
+          name="soilTexture"
+          label="What is the soil like? (optional)"
+          choices={SOIL_CHOICES}
+          value={values.soilTexture}
+          onChange={(v) => set('soilTexture', v, 'soilTexture')}
+          error={errors.soilTexture}
+        />
       </fieldset>
 
       <fieldset className={styles.group}>
         <legend className={styles.legend}>Size</legend>
-        <MeasureField<AreaUnit> name="area" label="Area to plant" required hint="Length times width of the bed."
-          value={values.area} onChange={(v) => set('area', v, 'area')}
-          unit={values.areaUnit} units={AREA_UNITS} onUnitChange={(u) => set('areaUnit', u, 'area')}
-          other={otherAreaUnit(values)} error={errors.area} />
-        <MeasureField<HeightUnit> name="maxHeight" label="Tallest plant you want (optional)"
+        <MeasureField<AreaUnit>
+          name="area"
+          label="Area to plant"
+          required
+          hint="Length times width of the bed."
+          value={values.area}
+          onChange={(v) => set('area', v, 'area')}
+          unit={values.areaUnit}
+          units={AREA_UNITS}
+          onUnitChange={(u) => set('areaUnit', u, 'area')}
+          other={otherAreaUnit(values)}
+          error={errors.area}
+        />
+        <MeasureField<HeightUnit>
+          name="maxHeight"
+          label="Tallest plant you want (optional)"
           hint="For under a window or beside a path; leave empty for any height."
-          value={values.maxHeight} onChange={(v) => set('maxHeight', v, 'maxHeight')}
-          unit={values.heightUnit} units={HEIGHT_UNITS} onUnitChange={(u) => set('heightUnit', u, 'maxHeight')}
-          other={otherHeightUnit(values)} error={errors.maxHeight} />
+          value={values.maxHeight}
+          onChange={(v) => set('maxHeight', v, 'maxHeight')}
+          unit={values.heightUnit}
+          units={HEIGHT_UNITS}
+          onUnitChange={(u) => set('heightUnit', u, 'maxHeight')}
+          other={otherHeightUnit(values)}
+          error={errors.maxHeight}
+        />
       </fieldset>
 
       <fieldset className={styles.group}>
         <legend className={styles.legend}>Deer and goals</legend>
-        <ChoiceField name="deerPressure" label="How often do deer visit?" required choices={DEER_CHOICES} value={values.deerPressure}
-          onChange={(v) => set('deerPressure', v, 'deerPressure')} error={errors.deerPressure} />
+        <ChoiceField
+          name="deerPressure"
+          label="How often do deer visit?"
+          required
+          choices={DEER_CHOICES}
+          value={values.deerPressure}
+          onChange={(v) => set('deerPressure', v, 'deerPressure')}
+          error={errors.deerPressure}
+        />
         <div role="group" aria-labelledby={goalsLabelId}>
-          <p id={goalsLabelId} className={styles.groupLabel}>What should the planting do? (choose any)</p>
+          <p id={goalsLabelId} className={styles.groupLabel}>
+            What should the planting do? (choose any)
+          </p>
           <div className={styles.goals}>
             {GOAL_CHOICES.map((g) => (
               <Checkbox
@@ -112,10 +170,18 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
             ))}
           </div>
         </div>
-        <Checkbox name="woodyPlants" checked={values.woodyPlants} onChange={(_, d) => set('woodyPlants', d.checked === true)}
-          label="Add shrubs and small trees (only those that fit your bed, in a share of it)" />
-        <Checkbox name="spreaders" checked={values.spreaders} onChange={(_, d) => set('spreaders', d.checked === true)}
-          label="Include plants that spread or seed themselves about (left out of beds under 500 ft² / 46 m² otherwise)" />
+        <Checkbox
+          name="woodyPlants"
+          checked={values.woodyPlants}
+          onChange={(_, d) => set('woodyPlants', d.checked === true)}
+          label="Add shrubs and small trees (only those that fit your bed, in a share of it)"
+        />
+        <Checkbox
+          name="spreaders"
+          checked={values.spreaders}
+          onChange={(_, d) => set('spreaders', d.checked === true)}
+          label="Include plants that spread or seed themselves about (left out of beds under 500 ft² / 46 m² otherwise)"
+        />
       </fieldset>
 
       <div className={styles.actions}>

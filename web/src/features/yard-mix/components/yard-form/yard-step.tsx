@@ -8,12 +8,23 @@ import { YardForm } from './yard-form.js';
 import type { YardFormValues } from '../../utils/yard-form-values.js';
 
 const useStyles = makeStyles({
-  ground: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalS, margin: `0 0 ${tokens.spacingVerticalXL}` },
+  ground: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    gap: tokens.spacingHorizontalS,
+    margin: `0 0 ${tokens.spacingVerticalXL}`,
+  },
   groundText: { margin: 0 },
 });
 
 /** Step 2: the yard questions, under a line that says which ground they are for. */
-export function YardStep({ region, initial, onSubmit, onChangeGround }: {
+export function YardStep({
+  region,
+  initial,
+  onSubmit,
+  onChangeGround,
+}: {
   region: MixRegion;
   initial: YardFormValues;
   onSubmit: (site: SiteRequest, areaUnit: AreaUnit) => void;
@@ -23,7 +34,9 @@ export function YardStep({ region, initial, onSubmit, onChangeGround }: {
   const place = usePlaceWords(region.state, region.ecoregionCode);
   return (
     <ContentCard aria-labelledby="yard-heading">
-      <Heading level="section" id="yard-heading">Step 2 of 3: your yard</Heading>
+      <Heading level="section" id="yard-heading">
+        Step 2 of 3: your yard
+      </Heading>
       <div className={styles.ground}>
         <p className={styles.groundText}>
           Your ground: <strong>{place.replace(/^the /, '')}</strong>.
