@@ -13,31 +13,35 @@ export type GroupRole = z.infer<typeof groupRoleSchema>;
 export const PASSWORD_MIN_LENGTH = 10;
 export const PASSWORD_MAX_LENGTH = 200;
 
+/** An e-mail address as every form takes it: trimmed, lower-cased, at most 254 characters (RFC 5321). */
+export const emailSchema = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .max(254, 'must be at most 254 characters')
+  .email('must be an e-mail address');
+
+/** A new password: the length rules above. */
+export const newPasswordSchema = z
+  .string()
+  .min(PASSWORD_MIN_LENGTH, `must be at least ${PASSWORD_MIN_LENGTH} characters`)
+  .max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`);
+
+/** The name a person's group sees. */
+export const displayNameSchema = z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters');
+
 export const registerRequestSchema = z
   .object({
-    email: z
-      .string()
-      .trim()
-      .toLowerCase()
-      .max(254, 'must be at most 254 characters')
-      .email('must be an e-mail address'),
-    password: z
-      .string()
-      .min(PASSWORD_MIN_LENGTH, `must be at least ${PASSWORD_MIN_LENGTH} characters`)
-      .max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
-    displayName: z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters'),
+    email: emailSchema,
+    password: newPasswordSchema,
+    displayName: displayNameSchema,
   })
   .strict();
 export type RegisterRequest = z.infer<typeof registerRequestSchema>;
 
 export const loginRequestSchema = z
   .object({
-    email: z
-      .string()
-      .trim()
-      .toLowerCase()
-      .max(254, 'must be at most 254 characters')
-      .email('must be an e-mail address'),
+    email: emailSchema,
     password: z
       .string()
       .min(1, 'must not be empty')
@@ -53,12 +57,7 @@ export type SetRoleRequest = z.infer<typeof setRoleRequestSchema>;
 /** `PUT /api/groups/:slug/members`: an organiser adds a person (by e-mail) or changes their role. */
 export const setMemberRequestSchema = z
   .object({
-    email: z
-      .string()
-      .trim()
-      .toLowerCase()
-      .max(254, 'must be at most 254 characters')
-      .email('must be an e-mail address'),
+    email: emailSchema,
     role: groupRoleSchema,
   })
   .strict();

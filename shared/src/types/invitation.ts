@@ -1,12 +1,12 @@
 import { z } from 'zod';
-import { groupRoleSchema, PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, type GroupRole } from './auth.js';
+import { displayNameSchema, emailSchema, groupRoleSchema, newPasswordSchema, type GroupRole } from './auth.js';
 
 /** Days an invitation link stays valid (common practice for e-mailed sign-up links: one to two weeks). */
 export const INVITATION_DAYS = 14;
 
 export const inviteRequestSchema = z
   .object({
-    email: z.string().trim().toLowerCase().email('must be an e-mail address').max(254),
+    email: emailSchema,
     role: groupRoleSchema,
   })
   .strict();
@@ -18,11 +18,8 @@ export const invitationTokenSchema = z.string().regex(/^[A-Za-z0-9_-]{43}$/, 'is
 /** Accepting with a new account names the person and sets a password; an account holder sends nothing. */
 export const acceptInvitationRequestSchema = z
   .object({
-    displayName: z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters'),
-    password: z
-      .string()
-      .min(PASSWORD_MIN_LENGTH, `must be at least ${PASSWORD_MIN_LENGTH} characters`)
-      .max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
+    displayName: displayNameSchema,
+    password: newPasswordSchema,
   })
   .strict()
   .partial();

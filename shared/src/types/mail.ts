@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { emailSchema } from './auth.js';
 
 /** A message in the local outbox, as organisers and admins read it. */
 export interface OutboxMessage {
@@ -20,7 +21,7 @@ export const outboxQuerySchema = z
       .string()
       .regex(/^[a-z-]{1,40}$/, 'lower-case words joined by hyphens')
       .optional(),
-    to: z.string().trim().toLowerCase().email('must be an e-mail address').max(254).optional(),
+    to: emailSchema.optional(),
   })
   .strict();
 export type OutboxQuery = z.infer<typeof outboxQuerySchema>;
