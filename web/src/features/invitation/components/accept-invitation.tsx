@@ -24,6 +24,9 @@ const useStyles = makeStyles({
   failure: { margin: 0, color: tokens.colorPaletteRedForeground1 },
 });
 
+/** "a grower", "an organiser". */
+const withArticle = (title: string) => `${/^[aeiou]/i.test(title) ? 'an' : 'a'} ${title.toLowerCase()}`;
+
 /** A new account needs both; the shared schema leaves them optional because an account holder sends none. */
 const newAccountSchema = acceptInvitationRequestSchema.required();
 
@@ -57,8 +60,8 @@ function Invitation({ preview, token, user, onJoined }: AcceptInvitationProps & 
   return (
     <>
       <PageIntro title={`Join ${preview.groupName}`}>
-        You are invited to join {preview.groupName} in {preview.town}, {preview.state} as {role.title.toLowerCase()}:{' '}
-        {role.does.toLowerCase()}
+        You are invited to join {preview.groupName} in {preview.town}, {preview.state} as {withArticle(role.title)}.
+        What {withArticle(role.title)} does: {role.does.charAt(0).toLowerCase() + role.does.slice(1)}
       </PageIntro>
       <ContentCard className={styles.card} aria-label="Accept the invitation">
         {user && user.email.toLowerCase() === preview.email ? (
