@@ -2,7 +2,8 @@ import { makeStyles, tokens } from '@fluentui/react-components';
 
 /** Styles the season page's cards share. */
 export const useSeasonStyles = makeStyles({
-  stack: { display: 'grid', gap: tokens.spacingVerticalXL },
+  // minmax(0, 1fr): a grid track otherwise grows to its widest table, widening the page on a phone.
+  stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalXL },
   /** Tables scroll sideways inside their card on a phone instead of widening the page. */
   scroller: { overflowX: 'auto', maxWidth: '100%' },
   table: { minWidth: '560px', fontVariantNumeric: 'tabular-nums' },
