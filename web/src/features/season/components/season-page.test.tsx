@@ -1,5 +1,5 @@
 import { screen, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { apiError, type FakeRoutes } from '../../../testing/fake-api.js';
 import { juniperGrower, maraOrganiser, priyaMember } from '../../../testing/fixtures.js';
 import { renderApp } from '../../../testing/render-app.js';
@@ -157,6 +157,19 @@ describe('the season page', () => {
     expect(screen.queryByRole('button', { name: 'Save targets' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Propose species' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /^Remove / })).not.toBeInTheDocument();
+  });
+
+  it('downloads the seed list CSV with the sign-in token, and prints', async () => {
+    const createObjectURL = vi.fn(() => 'blob:seed-list');
+    // jsdom has no object URLs; a stand-in URL class keeps the real one untouched for other tests.
+    vi.stubGlobal('URL', Object.assign(class extends URL {}, { createObjectURL, revokeObjectURL: vi.fn() }));
+    const print = vi.spyOn(window, 'print').mockImplementation(() => undefined);
+    const { user, api } = openSeason(maraOrganiser, { [`GET ${SEASON_PATH}/seed-list.csv`]: { body: 'csv' } });
+    await user.click(await screen.findByRole('button', { name: 'Download the seed list (CSV)' }));
+    await vi.waitFor(() => expect(createObjectURL).toHaveBeenCalledTimes(1));
+    expect(api.callsTo('GET', `${SEASON_PATH}/seed-list.csv`)[0].headers.authorization).toBe('Bearer token');
+    await user.click(screen.getByRole('button', { name: 'Print the seed list' }));
+    expect(print).toHaveBeenCalledTimes(1);
   });
 
   it('tells someone in no growing group what the page is for', async () => {
