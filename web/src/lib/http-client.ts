@@ -66,14 +66,36 @@ export function createHttpClient(config: HttpClientConfig) {
     return body as T;
   }
 
+  async function requestFile(path: string, options: Omit<RequestOptions, 'method' | 'body'> = {}): Promise<Blob> {
+    const headers: Record<string, string> = {};
+    const token = options.token === undefined ? config.getToken() : options.token;
+    if (token) headers.Authorization = `Bearer ${token}`;
+    let response: Response;
+    try {
+      response = await fetch(`${config.baseUrl}${path}`, { method: 'GET', headers, signal: options.signal });
+    } catch (cause) {
+      if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
+      throw new ApiRequestError({ statusCode: NETWORK_ERROR_STATUS, error: 'Network error', message: NETWORK_MESSAGE });
+    }
+    if (!response.ok) {
+      const body = await readJson(response);
+      throw new ApiRequestError(isApiErrorBody(body) ? body : fallbackError(response));
+    }
+    return response.blob();
+  }
+
   return {
     request,
     get: <T>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>
       request<T>(path, { ...options, method: 'GET' }),
     post: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
       request<T>(path, { ...options, method: 'POST', body }),
+    put: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+      request<T>(path, { ...options, method: 'PUT', body }),
     delete: <T = void>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>
       request<T>(path, { ...options, method: 'DELETE' }),
+    /** A file the API sends behind sign-in (e.g. a CSV), as a Blob; a plain link could not carry the token. */
+    file: (path: string, options?: Omit<RequestOptions, 'method' | 'body'>) => requestFile(path, options),
   };
 }
 

@@ -6,7 +6,6 @@ import { renderApp } from '../testing/render-app.js';
 // must say so instead of showing made-up data.
 describe('sections not built yet', () => {
   it.each([
-    ['/season', 'Season'],
     ['/my-batches', 'My batches'],
     ['/plant-share', 'Plant share'],
   ])('%s says what it will do and that it is not available yet', async (path, title) => {
