@@ -209,6 +209,8 @@ describe('place → your ground (e2e)', () => {
       });
       expect(before.body.ecoregion.share).toBeGreaterThan(0.5);
       expect(before.body.otherEcoregions.map((e: { code: string }) => e.code)).toContain('67');
+      const noOutline = await t.http.get('/api/ecoregions/67/outline').expect(200);
+      expect(noOutline.body).toEqual({ code: '67', outline: null });
 
       await t.http
         .post('/api/ecoregions/boundaries')
@@ -221,6 +223,12 @@ describe('place → your ground (e2e)', () => {
         ecoregion: { code: '67', name: 'Ridge and Valley', method: 'boundary' },
       });
       expect(after.body.otherEcoregions.map((e: { code: string }) => e.code)).toContain('62');
+      // The map's outline is simplified for drawing, yet still holds the point (10 km and more inside).
+      const drawn = await t.http.get('/api/ecoregions/67/outline').expect(200);
+      expect(drawn.body.code).toBe('67');
+      expect(['Polygon', 'MultiPolygon']).toContain(drawn.body.outline.type);
+      expect(booleanPointInPolygon([lon, lat], drawn.body.outline)).toBe(true);
+      expect(JSON.stringify(drawn.body).length).toBeLessThan(JSON.stringify(hits[0].geometry).length);
     },
     120_000,
   );

@@ -9,8 +9,6 @@ import { loadCountyOutlines } from '../geometry/us-counties.js';
 /** How far a point may sit outside every county outline and still take the nearest (coasts, lakes). */
 const NEAREST_COUNTY_KM = 8;
 
-const bad = (field: string, message: string) => badRequest([{ field, message }], `${field} ${message}`);
-
 const COVERED =
   'Homeground covers the 48 conterminous states and the District of Columbia, where the EPA maps its Level III ecoregions.';
 
@@ -58,7 +56,11 @@ export class PlacesService {
     let zip: PlaceLookup['zip'] = null;
     if (q.zip !== undefined) {
       const z = zipcodes.lookup(q.zip);
-      if (!z) throw bad('zip', `${q.zip} is not a US ZIP code we know`);
+      if (!z)
+        throw badRequest(
+          [{ field: 'zip', message: `${q.zip} is not a US ZIP code we know` }],
+          `${q.zip} is not a US ZIP code we know. Check the five digits, or click the map where your ground is.`,
+        );
       const place = OUTSIDE_BY_STATE[z.state];
       if (place)
         throw badRequest(
