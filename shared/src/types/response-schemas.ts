@@ -315,7 +315,7 @@ export const savedMixSchema = z.object({
   name: z.string(),
   request: paletteRequestSchema,
   chosen: z.array(z.string()),
-  ownerName: z.string(),
+  ownerFirstName: z.string().regex(/^\S*$/, 'must be a first name only'),
   createdAt: isoDateTime,
 }) satisfies z.ZodType<SavedMix, unknown>;
 

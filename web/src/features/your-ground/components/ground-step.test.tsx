@@ -178,4 +178,13 @@ describe('your ground', { timeout: 30_000 }, () => {
     expect(document.querySelector('path[data-chosen="true"]')?.getAttribute('data-state')).toBe('Wisconsin');
     expect(document.querySelector('path[data-ecoregion]')).toBeNull();
   });
+
+  it('lists the District of Columbia under D in the state picker', async () => {
+    renderApp({ path: '/find-plants' });
+    const select = await screen.findByRole('combobox', { name: /State/ });
+    const names = Array.from(select.querySelectorAll('option')).map((o) => o.textContent);
+    const at = names.indexOf('Delaware');
+    expect(names.slice(at, at + 3)).toEqual(['Delaware', 'District of Columbia', 'Florida']);
+    expect(names).not.toContain('the District of Columbia');
+  });
 });
