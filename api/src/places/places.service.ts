@@ -100,7 +100,7 @@ export class PlacesService {
       return badRequest([{ field, message: 'is outside the 48 conterminous states and DC' }], outsideSentence(place));
     return badRequest(
       [{ field, message: 'is not on land in a US county: at sea, on a large lake or outside the United States' }],
-      `That point (${lat.toFixed(3)}, ${lon.toFixed(3)}) is not on land in any US county: it is at sea, on one of the Great Lakes or outside the United States. ${COVERED}`,
+      `${field === 'zip' ? "That ZIP code's centre" : 'That point'} (${lat.toFixed(3)}, ${lon.toFixed(3)}) is not on land in any US county: it is at sea, on one of the Great Lakes or outside the United States. ${COVERED}`,
     );
   }
 }
