@@ -94,7 +94,10 @@ describe('recommendations, mixes, quantities and calendar (e2e)', () => {
       .send({ name: 'Front yard', request, chosen })
       .expect(201);
     const opened = await t.http.get(`/api/mixes/${saved.body.id}`).expect(200);
-    expect(opened.body).toMatchObject({ name: 'Front yard', chosen, ownerName: 'Priya Vantongeren' });
+    // Anyone with the link sees the saver's first name only, never the full name.
+    expect(opened.body).toMatchObject({ name: 'Front yard', chosen, ownerFirstName: 'Priya' });
+    expect(JSON.stringify(opened.body)).not.toMatch(/Vantongeren/);
+    expect(opened.body).not.toHaveProperty('ownerName');
     const sol = await registerUser(t, { email: 'sol.marchetti@example.org' });
     await t.http.delete(`/api/mixes/${saved.body.id}`).set('Authorization', `Bearer ${sol.token}`).expect(403);
     await t.http.delete(`/api/mixes/${saved.body.id}`).set('Authorization', `Bearer ${priya.token}`).expect(204);

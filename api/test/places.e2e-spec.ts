@@ -59,8 +59,8 @@ describe('place → your ground (e2e)', () => {
 
   it.each([
     ['an unknown ZIP', 'zip=00000', 'zip', /not a US ZIP code we know/],
-    ['a ZIP in Alaska', 'zip=99501', 'zip', /conterminous United States/],
-    ['a point in London', 'lat=51.5&lon=-0.12', 'lat', /conterminous United States/],
+    ['a ZIP in Alaska', 'zip=99501', 'zip', /outside the 48 conterminous states and DC/],
+    ['a point in London', 'lat=51.5&lon=-0.12', 'lat', /not on land in a US county/],
     ['a latitude off the globe', 'lat=95&lon=-90', 'lat', /−90 to 90/],
     ['nothing at all', '', 'zip', /give a zip, or both lat and lon/],
     ['a four-digit ZIP', 'zip=5466', 'zip', /5-digit/],
@@ -69,6 +69,30 @@ describe('place → your ground (e2e)', () => {
     expect(res.body.fields).toEqual(
       expect.arrayContaining([expect.objectContaining({ field, message: expect.stringMatching(message) })]),
     );
+  });
+
+  // Anchorage's ZIP is in Alaska, Honolulu's in Hawaii (zipcodes package, from the state of the ZIP); the
+  // points are Fairbanks, Alaska (64.84 N, 147.72 W) and Honolulu (21.31 N, 157.86 W). The EPA maps
+  // Level III ecoregions of the conterminous US only (EPA, Level III Ecoregions of the Conterminous US).
+  it.each([
+    ['a ZIP in Anchorage', 'zip=99501', 'zip', 'Alaska'],
+    ['a ZIP in Honolulu', 'zip=96813', 'zip', 'Hawaii'],
+    ['a ZIP in San Juan', 'zip=00901', 'zip', 'Puerto Rico'],
+    ['a point in Fairbanks', 'lat=64.84&lon=-147.72', 'lat', 'Alaska'],
+    ['a point in Honolulu', 'lat=21.31&lon=-157.86', 'lat', 'Hawaii'],
+  ])('answers %s with a whole sentence naming the place', async (_what, qs, field, place) => {
+    const res = await t.http.get(`/api/places/lookup?${qs}`).expect(400);
+    expect(res.body.message).toMatch(new RegExp(`^${place} is outside the area Homeground covers\\. .+\\.$`));
+    expect(res.body.message).toMatch(/48 conterminous states and the District of Columbia/);
+    expect(res.body.fields).toEqual([{ field, message: 'is outside the 48 conterminous states and DC' }]);
+  });
+
+  it('refuses a point at sea in words (the Atlantic, 250 km off Cape Cod)', async () => {
+    const res = await t.http.get('/api/places/lookup?lat=40.0&lon=-68.0').expect(400);
+    expect(res.body.message).toMatch(/^That point \(40\.000, -68\.000\) is not on land in any US county: it is at sea/);
+    expect(res.body.fields).toEqual([
+      { field: 'lat', message: 'is not on land in a US county: at sea, on a large lake or outside the United States' },
+    ]);
   });
 
   it('lists the ecoregions that reach into a state, with plain descriptions', async () => {
@@ -159,6 +183,52 @@ describe('place → your ground (e2e)', () => {
       console.log(
         `exact lookup after import: ${robust.length}/${robust.length} robust ZIP points matched their EPA polygon`,
       );
+    },
+    120_000,
+  );
+
+  // Williamsport, Pennsylvania (41.1943 N, 77.0547 W; the zipcodes package's point for ZIP 17702) lies in
+  // Lycoming County, which the county crosswalk puts mostly in 62 North Central Appalachians, while the
+  // reference EPA Level III GeoJSON puts the point in 67 Ridge and Valley, over 10 km from its boundary.
+  (haveReference ? it : it.skip)(
+    'resolves a point in a split county by its EPA polygon after the import and by county before it (EPA, reference copy)',
+    async () => {
+      const [lat, lon] = [41.1943, -77.0547];
+      const text = readFileSync(path.join(REFERENCE_DIR, EPA_FILE), 'utf8');
+      const regions = (JSON.parse(text) as { features: Region[] }).features;
+      const hits = regions.filter((r) => booleanPointInPolygon([lon, lat], r));
+      expect(hits.map((r) => r.properties.US_L3CODE)).toEqual(['67']); // EPA reference GeoJSON
+      expect(distanceToBoundaryKm(hits[0], lon, lat)).toBeGreaterThanOrEqual(10);
+
+      await t.http.delete('/api/ecoregions/boundaries').set('Authorization', `Bearer ${admin}`).expect(204);
+      const before = await t.http.get(`/api/places/lookup?lat=${lat}&lon=${lon}`).expect(200);
+      expect(before.body).toMatchObject({
+        state: 'PA',
+        county: { fips: '42081', name: 'Lycoming' },
+        ecoregion: { code: '62', method: 'county-crosswalk' },
+      });
+      expect(before.body.ecoregion.share).toBeGreaterThan(0.5);
+      expect(before.body.otherEcoregions.map((e: { code: string }) => e.code)).toContain('67');
+      const noOutline = await t.http.get('/api/ecoregions/67/outline').expect(200);
+      expect(noOutline.body).toEqual({ code: '67', outline: null });
+
+      await t.http
+        .post('/api/ecoregions/boundaries')
+        .set('Authorization', `Bearer ${admin}`)
+        .attach('file', Buffer.from(text), { filename: EPA_FILE, contentType: 'application/geo+json' })
+        .expect(200);
+      const after = await t.http.get(`/api/places/lookup?lat=${lat}&lon=${lon}`).expect(200);
+      expect(after.body).toMatchObject({
+        county: { fips: '42081' },
+        ecoregion: { code: '67', name: 'Ridge and Valley', method: 'boundary' },
+      });
+      expect(after.body.otherEcoregions.map((e: { code: string }) => e.code)).toContain('62');
+      // The map's outline is simplified for drawing, yet still holds the point (10 km and more inside).
+      const drawn = await t.http.get('/api/ecoregions/67/outline').expect(200);
+      expect(drawn.body.code).toBe('67');
+      expect(['Polygon', 'MultiPolygon']).toContain(drawn.body.outline.type);
+      expect(booleanPointInPolygon([lon, lat], drawn.body.outline)).toBe(true);
+      expect(JSON.stringify(drawn.body).length).toBeLessThan(JSON.stringify(hits[0].geometry).length);
     },
     120_000,
   );

@@ -4,6 +4,8 @@ import {
   boundaryImportResultSchema,
   type Ecoregion,
   ecoregionCodeParamSchema,
+  type EcoregionOutline,
+  ecoregionOutlineSchema,
   type EcoregionListQuery,
   ecoregionListQuerySchema,
   ecoregionListSchema,
@@ -33,6 +35,13 @@ export class EcoregionsController {
   @ZodResponse(ecoregionSchema)
   get(@ZodParam('code', ecoregionCodeParamSchema) code: string): Ecoregion {
     return this.ecoregions.get(code);
+  }
+
+  /** The region's EPA outline for the map, simplified; null until an admin has imported the boundaries. */
+  @Get(':code/outline')
+  @ZodResponse(ecoregionOutlineSchema)
+  outline(@ZodParam('code', ecoregionCodeParamSchema) code: string): EcoregionOutline {
+    return this.ecoregions.outline(code);
   }
 
   /** Admins import EPA Level III polygons (GeoJSON FeatureCollection with US_L3CODE / US_L3NAME) for exact lookups. */

@@ -1,6 +1,7 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { Ecoregion } from '@homeground/shared';
+import type { Ecoregion, EcoregionOutline, OutlineGeometry } from '@homeground/shared';
+import { simplify } from '@turf/turf';
 import { DataSource } from 'typeorm';
 import { parseBoundaryUpload } from '../geometry/boundary-upload.js';
 import { type AreaFeature, PolygonIndex } from '../geometry/polygon-index.js';
@@ -27,6 +28,8 @@ export class EcoregionsService {
   private regions = new Map<string, Ecoregion>();
   private counties = new Map<string, CountyRegions>();
   private boundaries = new PolygonIndex<{ code: string }>([]);
+  /** Outlines simplified for drawing, made on first ask and dropped when the boundaries change. */
+  private outlines = new Map<string, OutlineGeometry>();
 
   constructor(@InjectDataSource() private readonly db: DataSource) {}
 
@@ -46,6 +49,7 @@ export class EcoregionsService {
     this.counties = new Map(counties.map((c: Omit<CountyRegions, 'ecoregions'>) => [c.fips, { ...c, ecoregions: [] }]));
     for (const s of shares as { fips: string; code: string; share: number }[])
       this.counties.get(s.fips)?.ecoregions.push({ code: s.code, share: s.share });
+    this.outlines.clear();
     this.boundaries = new PolygonIndex(
       boundaries.map((b: { code: string; geometry: string }): AreaFeature<{ code: string }> => ({
         type: 'Feature',
@@ -82,6 +86,21 @@ export class EcoregionsService {
   /** The imported polygon holding the point, when boundaries have been imported. */
   boundaryAt(lon: number, lat: number): string | undefined {
     return this.boundaries.containing(lon, lat)?.properties.code;
+  }
+
+  /**
+   * The region's imported outline, simplified to about 1 km (0.01°) for a map a few hundred pixels
+   * wide, or null when no boundaries are loaded. An unknown code answers 404.
+   */
+  outline(code: string): EcoregionOutline {
+    this.get(code);
+    const cached = this.outlines.get(code);
+    if (cached) return { code, outline: cached };
+    const f = this.boundaries.find((p) => p.code === code);
+    if (!f) return { code, outline: null };
+    const g = simplify(f, { tolerance: 0.01, highQuality: false, mutate: false }).geometry as OutlineGeometry;
+    this.outlines.set(code, g);
+    return { code, outline: g };
   }
 
   /** Replaces all boundary polygons in one transaction; a bad file changes nothing. */

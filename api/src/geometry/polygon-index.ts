@@ -32,6 +32,11 @@ export class PolygonIndex<P extends Record<string, unknown>> {
     return this.features.length;
   }
 
+  /** The first feature whose properties match. */
+  find(match: (properties: P) => boolean): AreaFeature<P> | undefined {
+    return this.features.find((f) => match(f.properties));
+  }
+
   /** The first polygon containing the point (polygons of one layer do not overlap). */
   containing(lon: number, lat: number): AreaFeature<P> | undefined {
     if (!this.tree) return undefined;

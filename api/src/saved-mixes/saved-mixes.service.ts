@@ -1,6 +1,6 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import type { SavedMix } from '@homeground/shared';
+import { firstName, type SavedMix } from '@homeground/shared';
 import { Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
@@ -53,7 +53,7 @@ function toDto(row: SavedMixRow): SavedMix {
     name: row.name,
     request: row.request as SavedMix['request'],
     chosen: row.chosen,
-    ownerName: row.owner.displayName,
+    ownerFirstName: firstName(row.owner.displayName),
     createdAt: row.createdAt.toISOString(),
   };
 }

@@ -91,7 +91,8 @@ export interface SavedMix {
   name: string;
   request: z.infer<typeof paletteRequestSchema>;
   chosen: string[];
-  ownerName: string;
+  /** The saver's first name only (anyone with the link sees it). */
+  ownerFirstName: string;
   createdAt: string;
 }
 

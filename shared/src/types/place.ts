@@ -41,3 +41,13 @@ export interface PlaceLookup {
   /** Other regions the county overlaps, for the user to choose from when the county is split. */
   otherEcoregions: EcoregionBrief[];
 }
+
+/** An ecoregion's outline in WGS84 [longitude, latitude] positions (RFC 7946), simplified for drawing. */
+export type OutlineGeometry =
+  { type: 'Polygon'; coordinates: number[][][] } | { type: 'MultiPolygon'; coordinates: number[][][][] };
+
+/** `GET /api/ecoregions/:code/outline`: the region's imported EPA outline, or null when none is loaded. */
+export interface EcoregionOutline {
+  code: string;
+  outline: OutlineGeometry | null;
+}

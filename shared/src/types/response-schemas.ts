@@ -21,7 +21,7 @@ import { BLOOM_PERIODS, paletteRequestSchema, type PaletteResult, type ScoredSpe
 import type { Season, ShareList } from './season.js';
 import type { SeedList } from '../season-planning/seed-list.js';
 import type { AlternativesResponse, MixQuantity, MixResponse, RecommendationsResponse, SavedMix } from './mix-api.js';
-import type { PlaceLookup } from './place.js';
+import type { EcoregionOutline, PlaceLookup } from './place.js';
 import { siteSchema } from './site.js';
 import {
   CAUTION_KINDS,
@@ -134,6 +134,17 @@ export const photoUploadResultSchema = z.object({
 });
 
 export const ecoregionListSchema = z.array(ecoregionSchema);
+
+const ringSchema = z.array(z.array(z.number()));
+export const ecoregionOutlineSchema = z.object({
+  code: z.string(),
+  outline: z
+    .discriminatedUnion('type', [
+      z.object({ type: z.literal('Polygon'), coordinates: z.array(ringSchema) }),
+      z.object({ type: z.literal('MultiPolygon'), coordinates: z.array(z.array(ringSchema)) }),
+    ])
+    .nullable(),
+}) satisfies z.ZodType<EcoregionOutline>;
 
 export const boundaryImportResultSchema = z.object({ regions: z.number().int(), vertices: z.number().int() });
 
@@ -304,7 +315,7 @@ export const savedMixSchema = z.object({
   name: z.string(),
   request: paletteRequestSchema,
   chosen: z.array(z.string()),
-  ownerName: z.string(),
+  ownerFirstName: z.string().regex(/^\S*$/, 'must be a first name only'),
   createdAt: isoDateTime,
 }) satisfies z.ZodType<SavedMix, unknown>;
 

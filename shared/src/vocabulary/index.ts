@@ -7,3 +7,4 @@ export * from './seed-words.js';
 export * from './record-words.js';
 export * from './sowing-depth.js';
 export * from './people-words.js';
+export * from './place-words.js';

@@ -1,5 +1,13 @@
 import type { GlobalRole, GroupRole } from '../types/auth.js';
 
+/**
+ * The first name of a display name ("Priya Vantongeren" → "Priya"): what others see of a person
+ * where the full name is not needed, such as a mix opened by link.
+ */
+export function firstName(displayName: string): string {
+  return displayName.trim().split(/\s+/)[0] ?? '';
+}
+
 export interface RoleWords {
   /** "Grower" */
   title: string;

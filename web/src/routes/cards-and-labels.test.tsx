@@ -122,7 +122,7 @@ describe('cards & labels page', () => {
           name: 'Larkfield front yard',
           chosen: ['zizia-aurea', 'monarda-fistulosa'],
           request: {},
-          ownerName: 'Priya Vantongeren',
+          ownerFirstName: 'Priya',
           createdAt: '2026-03-01T12:00:00.000Z',
         },
       },

@@ -4,16 +4,28 @@ import { apiError } from '../testing/fake-api.js';
 import { renderApp } from '../testing/render-app.js';
 
 // The figures are whatever the fake API answers (src/testing/fixtures.ts: 412 species, 3 groups,
-// 7 ecoregions, version 0.1.0-test); the page must show those, not numbers of its own.
+// 7 ecoregions, version 0.1.0-test); the page must show those, not numbers of its own, and no developer text.
 describe('home page', () => {
-  it('shows the figures from /api/stats and the API version from /api/health', async () => {
+  it('shows the figures from /api/stats and no API version', async () => {
     renderApp();
     const figures = within(await screen.findByRole('region', { name: 'In the catalogue today' }));
     const species = await figures.findByText('412');
     expect(species.previousElementSibling ?? species.parentElement).toHaveTextContent(/native species/);
     expect(figures.getByText('3')).toBeInTheDocument();
     expect(figures.getByText('7')).toBeInTheDocument();
-    expect(await figures.findByText(/Homeground API version 0\.1\.0-test/)).toBeInTheDocument();
+    expect(document.body).not.toHaveTextContent(/0\.1\.0-test|API version|\bAPI\b/);
+  });
+
+  it('says calmly when the catalogue database is not answering', async () => {
+    renderApp({
+      api: {
+        'GET /api/health': {
+          body: { status: 'ok', version: '0.1.0-test', database: { status: 'down', migrations: 0 }, uptimeSeconds: 5 },
+        },
+      },
+    });
+    expect(await screen.findByText(/The catalogue is not answering right now/)).toBeInTheDocument();
+    expect(document.body).not.toHaveTextContent(/0\.1\.0-test|API version/);
   });
 
   it('says what Homeground does and offers one primary action', async () => {

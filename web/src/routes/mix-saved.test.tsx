@@ -22,7 +22,7 @@ const saved: SavedMix = {
     options: { locked: [], excluded: [] },
   },
   chosen: fixtureSpecies.map((s) => s.slug),
-  ownerName: 'Mara Ellsworth',
+  ownerFirstName: 'Mara',
   createdAt: '2026-03-14T15:00:00.000Z',
 };
 
@@ -68,7 +68,7 @@ describe('saving and sharing a mix', { timeout: 30_000 }, () => {
     expect(
       await screen.findByRole('heading', { level: 1, name: 'Front bed by the porch' }, { timeout: 5000 }),
     ).toBeInTheDocument();
-    expect(screen.getByText(/saved by Mara Ellsworth on March 14, 2026/)).toBeInTheDocument();
+    expect(screen.getByText(/saved by Mara on March 14, 2026/)).toBeInTheDocument();
     const table = await screen.findByRole('table', { name: /one species a row/ });
     expect(within(table).getAllByRole('rowheader')).toHaveLength(fixtureSpecies.length);
     await waitFor(() => expect(api.callsTo('POST', '/api/mixes/balance')).toHaveLength(1));

@@ -49,7 +49,7 @@ export function SavedMixRoute() {
       {(mix) => (
         <>
           <PageIntro title={mix.name}>
-            A yard mix saved by {mix.ownerName} on {formatSavedOn(mix.createdAt)}. Changing it opens a copy in Find
+            A yard mix saved by {mix.ownerFirstName} on {formatSavedOn(mix.createdAt)}. Changing it opens a copy in Find
             plants; this saved mix stays as it is.
           </PageIntro>
           {plan ? (

@@ -11,8 +11,7 @@ function signedInAs(user: User) {
 }
 
 async function mainNav() {
-  await screen.findByText(/Homeground API version/);
-  return within(screen.getByRole('navigation', { name: 'Main' }));
+  return within(await screen.findByRole('navigation', { name: 'Main' }));
 }
 
 describe('main navigation', () => {

@@ -5,7 +5,7 @@ import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { QueryState } from '../../../components/states/index.js';
 import { hgTokens } from '../../../theme/index.js';
-import { ApiStatusLine } from './api-status-line.js';
+import { CatalogueStatusNote } from './catalogue-status-note.js';
 
 const useStyles = makeStyles({
   list: {
@@ -29,7 +29,7 @@ const useStyles = makeStyles({
 
 const count = new Intl.NumberFormat('en-US');
 
-/** Live counts from GET /api/stats and the API version from GET /api/health. */
+/** Live counts from GET /api/stats, with a note when GET /api/health says the database is down. */
 export function CatalogueFigures() {
   const styles = useStyles();
   const stats = useQuery(statsQueryOptions());
@@ -63,7 +63,7 @@ export function CatalogueFigures() {
           </dl>
         )}
       </QueryState>
-      <ApiStatusLine />
+      <CatalogueStatusNote />
     </ContentCard>
   );
 }

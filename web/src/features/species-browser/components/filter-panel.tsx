@@ -8,7 +8,8 @@ import {
   type Moisture,
   MONTH_NUMBERS,
   MONTH_WORDS,
-  STATE_NAMES,
+  byStateListName,
+  stateListName,
   type StateCode,
   SUN_LEVELS,
   SUN_WORDS,
@@ -42,7 +43,12 @@ const useStyles = makeStyles({
 });
 
 /** States sorted by name, as people look for them, not by postal code. */
-const STATES_BY_NAME = [...US_STATE_CODES].sort((a, b) => STATE_NAMES[a].localeCompare(STATE_NAMES[b]));
+/** States by the names shown in the list: "District of Columbia" under D. */
+const STATES_BY_NAME = byStateListName(US_STATE_CODES);
+const STATE_LIST_NAMES = Object.fromEntries(US_STATE_CODES.map((c) => [c, stateListName(c)])) as Record<
+  StateCode,
+  string
+>;
 
 function OptionSelect<T extends string>({
   label,
@@ -105,7 +111,7 @@ export function FilterPanel({
           anyLabel="Any state"
           value={state.state}
           options={STATES_BY_NAME}
-          labels={STATE_NAMES}
+          labels={STATE_LIST_NAMES}
           onChange={(v) => onChange({ state: v })}
         />
         <EcoregionSelect state={state.state} value={state.ecoregion} onChange={(v) => onChange({ ecoregion: v })} />

@@ -1,4 +1,4 @@
-import { STATE_NAMES, US_STATE_CODES, joinWords } from '@homeground/shared';
+import { byStateListName, STATE_NAMES, US_STATE_CODES, joinWords } from '@homeground/shared';
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import { Map20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
@@ -44,9 +44,8 @@ const useStyles = makeStyles({
 export function NativeRange({ species }: { species: SpeciesDetail }) {
   const styles = useStyles();
   const native = new Set(species.nativeStates);
-  const names = US_STATE_CODES.filter((c) => native.has(c))
-    .map((c) => STATE_NAMES[c])
-    .sort((a, b) => a.localeCompare(b));
+  // Alphabetical by list name, so "the District of Columbia" sorts under D.
+  const names = byStateListName(US_STATE_CODES.filter((c) => native.has(c))).map((c) => STATE_NAMES[c]);
   return (
     <FactSection title="Native range" icon={<Map20Regular />}>
       <p className={styles.summary}>

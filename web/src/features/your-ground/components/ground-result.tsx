@@ -1,5 +1,5 @@
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
-import { type PlaceLookup, type StateCode, STATE_NAMES } from '@homeground/shared';
+import { ecoregionFoundWords, type PlaceLookup, type StateCode, STATE_NAMES } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { ecoregionListQueryOptions } from '../../../api/ecoregions/ecoregions.queries.js';
@@ -68,10 +68,7 @@ export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }
           <p className={styles.text}>{selected.description}</p>
           {lookup && selected.code === lookup.ecoregion.code ? (
             <p className={styles.muted}>
-              {lookup.ecoregion.level2} · {lookup.ecoregion.level1}.{' '}
-              {lookup.ecoregion.method === 'county-crosswalk'
-                ? 'Matched from the ecoregion that covers most of your county.'
-                : 'Matched from the ecoregion boundary at your point.'}
+              {lookup.ecoregion.level2} · {lookup.ecoregion.level1}. {ecoregionFoundWords(lookup)}
             </p>
           ) : null}
         </div>

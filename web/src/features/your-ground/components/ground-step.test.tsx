@@ -71,14 +71,14 @@ describe('your ground', { timeout: 30_000 }, () => {
     const { user } = renderApp({
       path: '/find-plants',
       api: {
-        'GET /api/places/lookup': apiError(400, 'zip 00000 is not a US ZIP code we know', {
+        'GET /api/places/lookup': apiError(400, '00000 is not a US ZIP code we know. Check the five digits.', {
           fields: [{ field: 'zip', message: '00000 is not a US ZIP code we know' }],
         }),
       },
     });
     await user.type(await screen.findByRole('textbox', { name: 'ZIP code' }), '00000');
     await user.click(screen.getByRole('button', { name: 'Find my ground' }));
-    expect(await screen.findByText('00000 is not a US ZIP code we know')).toBeInTheDocument();
+    expect(await screen.findByText('00000 is not a US ZIP code we know. Check the five digits.')).toBeInTheDocument();
   });
 
   it('asks which ecoregion when the county is split, with radio cards and descriptions', async () => {
@@ -88,6 +88,9 @@ describe('your ground', { timeout: 30_000 }, () => {
     const group = await screen.findByRole('radiogroup', { name: /more than one ecoregion/ });
     expect(group).toHaveTextContent('Driftless Area (ecoregion 52): about 60% of your county');
     expect(group).toHaveTextContent('Gently rolling glacial till plains.');
+    expect(
+      screen.getByText(/By county: your county is mostly in Driftless Area \(about 60%\)\./, { exact: false }),
+    ).toBeInTheDocument();
     await user.click(screen.getByRole('radio', { name: /Southeastern Wisconsin Till Plains/ }));
     expect(screen.getByText('Ecoregion: Southeastern Wisconsin Till Plains (53)')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Next: your yard' }));
@@ -109,5 +112,79 @@ describe('your ground', { timeout: 30_000 }, () => {
     const { user } = renderApp({ path: '/find-plants' });
     await user.click(await screen.findByRole('button', { name: 'Use my location' }));
     expect(await screen.findByText(/was not allowed to use your location/)).toBeInTheDocument();
+  });
+
+  it('says in a whole sentence when the located point is outside the 48 states and DC', async () => {
+    // Fairbanks, Alaska (64.84 N, 147.72 W): the EPA maps Level III ecoregions of the conterminous US only.
+    vi.stubGlobal('navigator', {
+      ...navigator,
+      geolocation: {
+        getCurrentPosition: (ok: (p: { coords: { latitude: number; longitude: number } }) => void) =>
+          ok({ coords: { latitude: 64.84, longitude: -147.72 } }),
+      },
+    });
+    const sentence =
+      'Alaska is outside the area Homeground covers. Homeground covers the 48 conterminous states and the District of Columbia, where the EPA maps its Level III ecoregions.';
+    const { user, api } = renderApp({
+      path: '/find-plants',
+      api: {
+        'GET /api/places/lookup': apiError(400, sentence, {
+          fields: [{ field: 'lat', message: 'is outside the 48 conterminous states and DC' }],
+        }),
+      },
+    });
+    await user.click(await screen.findByRole('button', { name: 'Use my location' }));
+    expect(await screen.findByText(new RegExp(`^${sentence} Click on land in the lower 48`))).toBeInTheDocument();
+    expect(api.callsTo('GET', '/api/places/lookup')).toHaveLength(1);
+  });
+
+  it("draws the chosen ecoregion's EPA outline on the map when the boundaries are loaded", async () => {
+    // A made-up square over western Wisconsin stands in for the EPA outline of 52 (only its code is EPA's).
+    const square = [
+      [
+        [-91.5, 43],
+        [-90, 43],
+        [-90, 44.5],
+        [-91.5, 44.5],
+        [-91.5, 43],
+      ],
+    ];
+    const { user } = renderApp({
+      path: '/find-plants',
+      api: {
+        'GET /api/places/lookup': { body: viroqua },
+        'GET /api/ecoregions/52/outline': { body: { code: '52', outline: { type: 'Polygon', coordinates: square } } },
+      },
+    });
+    await user.type(await screen.findByRole('textbox', { name: 'ZIP code' }), '54665');
+    await user.click(screen.getByRole('button', { name: 'Find my ground' }));
+    await screen.findByText('Ecoregion: Driftless Area (52)');
+    await waitFor(() => expect(document.querySelector('path[data-ecoregion="Driftless Area"]')).not.toBeNull());
+    expect(document.querySelector('path[data-chosen="true"]')).toBeNull();
+  });
+
+  it('shades the chosen state on the map when no ecoregion outline is loaded', async () => {
+    const { user } = renderApp({
+      path: '/find-plants',
+      api: {
+        'GET /api/places/lookup': { body: viroqua },
+        'GET /api/ecoregions/52/outline': { body: { code: '52', outline: null } },
+      },
+    });
+    await user.type(await screen.findByRole('textbox', { name: 'ZIP code' }), '54665');
+    await user.click(screen.getByRole('button', { name: 'Find my ground' }));
+    await screen.findByText('Ecoregion: Driftless Area (52)');
+    await waitFor(() => expect(document.querySelector('path[data-chosen="true"]')).not.toBeNull());
+    expect(document.querySelector('path[data-chosen="true"]')?.getAttribute('data-state')).toBe('Wisconsin');
+    expect(document.querySelector('path[data-ecoregion]')).toBeNull();
+  });
+
+  it('lists the District of Columbia under D in the state picker', async () => {
+    renderApp({ path: '/find-plants' });
+    const select = await screen.findByRole('combobox', { name: /State/ });
+    const names = Array.from(select.querySelectorAll('option')).map((o) => o.textContent);
+    const at = names.indexOf('Delaware');
+    expect(names.slice(at, at + 3)).toEqual(['Delaware', 'District of Columbia', 'Florida']);
+    expect(names).not.toContain('the District of Columbia');
   });
 });

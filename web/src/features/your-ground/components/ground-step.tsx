@@ -1,8 +1,9 @@
 import { Button, makeStyles, MessageBar, MessageBarBody, tokens } from '@fluentui/react-components';
 import { ArrowRight20Regular, Location20Regular } from '@fluentui/react-icons';
-import type { StateCode } from '@homeground/shared';
+import { type StateCode, STATE_NAMES } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
+import { ecoregionOutlineQueryOptions } from '../../../api/ecoregions/ecoregions.queries.js';
 import { placeLookupQueryOptions } from '../../../api/places/places.queries.js';
 import type { PlaceQuery } from '../../../api/places/places.api.js';
 import { ContentCard } from '../../../components/page/content-card.js';
@@ -78,15 +79,23 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
   const lookupError = isLookup && lookup.isError ? lookup.error : null;
   const isBadInput = lookupError !== null && isApiRequestError(lookupError) && lookupError.statusCode === 400;
   const isZipQuery = isLookup && 'zip' in source.query;
-  // An unknown ZIP is said beside the ZIP field; a point outside coverage beside the map's own words.
-  const zipError = isBadInput && isZipQuery ? (lookupError.fieldMessages().zip ?? lookupError.message) : undefined;
+  // The API says every place it cannot use in a whole sentence (an unknown ZIP, Alaska, a point at sea):
+  // a ZIP's beside the ZIP field, a point's below the map. The ZIP form checks the format itself first.
+  const zipError = isBadInput && isZipQuery ? lookupError.message : undefined;
   const pointError =
     isBadInput && !isZipQuery
-      ? 'That point is outside the 48 states and DC that Homeground covers. Click inside the lower 48, or enter a ZIP code.'
+      ? `${lookupError.message} Click on land in the lower 48, or enter a ZIP code.`
       : undefined;
   const state: StateCode | null =
     source.kind === 'state' ? source.state : isLookup && lookup.data ? lookup.data.state : null;
   const [nextError, setNextError] = useState<string | null>(null);
+  // The map shows the chosen ecoregion's EPA outline when the boundaries are loaded, else the state.
+  const chosenCode = ecoregionCode && ecoregionCode !== '-' ? ecoregionCode : '';
+  const outline = useQuery({ ...ecoregionOutlineQueryOptions(chosenCode), enabled: chosenCode !== '' });
+  const outlineGeometry = chosenCode && outline.data?.code === chosenCode ? outline.data.outline : null;
+  const chosenName =
+    (lookup.data ? [lookup.data.ecoregion, ...lookup.data.otherEcoregions] : []).find((e) => e.code === chosenCode)
+      ?.name ?? `Ecoregion ${chosenCode}`;
 
   const confirm = () => {
     if (!state) return;
@@ -132,6 +141,8 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
           <LazyUsMap
             onPick={look}
             point={lookup.data?.point ?? (isLookup && 'lat' in source.query ? source.query : null)}
+            state={state ? STATE_NAMES[state] : null}
+            outline={outlineGeometry ? { name: chosenName, geometry: outlineGeometry } : null}
             label="Map of the 48 states. Click where your ground is; keyboard users can use the ZIP code or the state list."
           />
           <p className={styles.mapHint}>Or click the map where your ground is. The map works offline.</p>

@@ -1,5 +1,6 @@
-import { makeStyles, tokens } from '@fluentui/react-components';
+import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import { geoAlbersUsa, geoPath } from 'd3-geo';
+import type { OutlineGeometry } from '@homeground/shared';
 import type { Feature, FeatureCollection, Geometry } from 'geojson';
 import { useMemo, useRef, type MouseEvent } from 'react';
 import { feature } from 'topojson-client';
@@ -19,6 +20,14 @@ const useStyles = makeStyles({
     strokeWidth: '1',
     ':hover': { fill: tokens.colorBrandBackground2Hover },
   },
+  chosenState: { fill: tokens.colorBrandBackground, ':hover': { fill: tokens.colorBrandBackgroundHover } },
+  outline: {
+    fill: tokens.colorPaletteMarigoldBackground2,
+    fillOpacity: 0.75,
+    stroke: tokens.colorPaletteMarigoldBorderActive,
+    strokeWidth: '1.5',
+    pointerEvents: 'none',
+  },
   marker: { fill: tokens.colorPaletteMarigoldBackground3, stroke: tokens.colorNeutralForeground1, strokeWidth: '2' },
 });
 
@@ -34,13 +43,17 @@ export interface UsMapProps {
   label: string;
   /** The place found or clicked, marked on the map. */
   point?: { lat: number; lon: number } | null;
+  /** The chosen state's name, shaded when no ecoregion outline is drawn. */
+  state?: string | null;
+  /** The chosen ecoregion's EPA outline, drawn over the states when the boundaries are loaded. */
+  outline?: { name: string; geometry: OutlineGeometry } | null;
 }
 
-export function UsMap({ onPick, label, point }: UsMapProps) {
+export function UsMap({ onPick, label, point, state, outline }: UsMapProps) {
   const styles = useStyles();
   const svgRef = useRef<SVGSVGElement>(null);
 
-  const { projection, shapes } = useMemo(() => {
+  const { projection, path, shapes } = useMemo(() => {
     const topo = statesTopology as unknown as Topology<{ states: GeometryCollection<{ name: string }> }>;
     const all = feature(topo, topo.objects.states) as FeatureCollection<Geometry, { name: string }>;
     const lower48: FeatureCollection<Geometry, { name: string }> = {
@@ -51,6 +64,7 @@ export function UsMap({ onPick, label, point }: UsMapProps) {
     const path = geoPath(proj);
     return {
       projection: proj,
+      path,
       shapes: lower48.features.map((f: StateFeature) => ({
         id: String(f.id),
         name: f.properties.name,
@@ -70,6 +84,10 @@ export function UsMap({ onPick, label, point }: UsMapProps) {
   };
 
   const marker = point ? projection([point.lon, point.lat]) : null;
+  const outlinePath = useMemo(
+    () => (outline ? path({ type: 'Feature', properties: {}, geometry: outline.geometry }) : null),
+    [outline, path],
+  );
 
   return (
     <svg
@@ -81,10 +99,21 @@ export function UsMap({ onPick, label, point }: UsMapProps) {
       onClick={click}
     >
       {shapes.map((s) => (
-        <path key={s.id} d={s.d} className={styles.state} data-state={s.name}>
+        <path
+          key={s.id}
+          d={s.d}
+          className={mergeClasses(styles.state, !outlinePath && s.name === state && styles.chosenState)}
+          data-state={s.name}
+          data-chosen={!outlinePath && s.name === state ? 'true' : undefined}
+        >
           <title>{s.name}</title>
         </path>
       ))}
+      {outlinePath ? (
+        <path d={outlinePath} className={styles.outline} data-ecoregion={outline?.name}>
+          <title>{outline?.name}</title>
+        </path>
+      ) : null}
       {marker ? <circle cx={marker[0]} cy={marker[1]} r={9} className={styles.marker} /> : null}
     </svg>
   );
