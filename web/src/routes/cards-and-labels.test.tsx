@@ -103,6 +103,10 @@ describe('cards & labels page', () => {
     expect(labels[0]).toHaveTextContent('Butterfly milkweed');
     expect(labels[0]).toHaveTextContent('Sown Mar 2, 2026');
     expect(labels[0]).toHaveTextContent('CMS 30 d');
+    // Light, soil and height from the fixtures (card-fixtures.ts, after species-data/species/asclepias-tuberosa.json):
+    // 30–75 cm is 12–30 in at 2.54 cm to the inch.
+    expect(labels[0]).toHaveTextContent('full sun/part shade · dry/medium-moist');
+    expect(labels[0]).toHaveTextContent('12–30 in (30–75 cm) tall');
     expect(labels[1]).toHaveTextContent('no treatment · surface sow');
 
     const copies = screen.getByRole('spinbutton', { name: /Labels per species/ });
