@@ -7,9 +7,9 @@
 import assert from 'node:assert/strict';
 import { spawnSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import path from 'node:path';
 import { test } from 'node:test';
-import jsQR from 'jsqr';
 import type { Page } from 'playwright-core';
 import { openGuardedPage, RESULTS_DIR, screenshot } from './support/browser.js';
 import { useAppInBrowser } from './support/app-in-browser.js';
@@ -30,6 +30,10 @@ const SLUGS = [
 // The invented scenario's public address; the server itself runs on a free local port.
 const PUBLIC_URL = 'https://plants.larkfield.example';
 const app = useAppInBrowser({ PUBLIC_URL });
+
+// jsQR is CommonJS whose module.exports is the decoder itself; its types describe a default export.
+type QrReader = (data: Uint8ClampedArray, width: number, height: number) => { data: string } | null;
+const jsQR = createRequire(import.meta.url)('jsqr') as QrReader;
 
 /** What a phone reads from a drawn QR code: its picture as printed, decoded by jsQR. */
 async function readQr(page: Page, index: number): Promise<string | null> {
