@@ -1,10 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { createTestApp, type TestApp } from './support/test-app.js';
 
+// The invented scenario's site; the trailing slash given in the setting is dropped in the answer.
+const PUBLIC_URL = 'https://plants.larkfield.example';
+
 describe('health, stats and docs (e2e)', () => {
   let t: TestApp;
   beforeAll(async () => {
-    t = await createTestApp({ DEMO_DATA: 'true' });
+    t = await createTestApp({ DEMO_DATA: 'true', PUBLIC_URL: `${PUBLIC_URL}/` });
   });
   afterAll(() => t.close());
 
@@ -16,6 +19,14 @@ describe('health, stats and docs (e2e)', () => {
       database: { status: 'up' },
     });
     expect(res.body.database.migrations).toBeGreaterThanOrEqual(1);
+  });
+
+  it('publishes the configured public address for printed links, cacheable', async () => {
+    const res = await t.http.get('/api/site').expect(200);
+    expect(res.body).toEqual({ publicUrl: PUBLIC_URL });
+    expect(res.headers['cache-control']).toBe('public, max-age=3600');
+    const spec = await t.http.get('/api/docs/openapi.json').expect(200);
+    expect(spec.body.paths['/api/site']).toBeDefined();
   });
 
   it('counts the demo group and people', async () => {

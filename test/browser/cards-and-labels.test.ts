@@ -1,12 +1,13 @@
 /**
  * Fact cards and pot labels in Debian's Chromium: eight catalogue species open from a link, their
  * cards print to a Letter PDF of exactly two pages (four cards a page), nothing is cut off, each QR
- * code points at the species page on this server, the pot labels preview, and no request leaves
- * localhost.
+ * code decodes to the species page at the configured public address (PUBLIC_URL, not this local
+ * server), the pot labels fit their labels, and no request leaves localhost.
  */
 import assert from 'node:assert/strict';
 import { spawnSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import path from 'node:path';
 import { test } from 'node:test';
 import type { Page } from 'playwright-core';
@@ -26,7 +27,32 @@ const SLUGS = [
   'adiantum-pedatum',
 ];
 
-const app = useAppInBrowser();
+// The invented scenario's public address; the server itself runs on a free local port.
+const PUBLIC_URL = 'https://plants.larkfield.example';
+const app = useAppInBrowser({ PUBLIC_URL });
+
+// jsQR is CommonJS whose module.exports is the decoder itself; its types describe a default export.
+type QrReader = (data: Uint8ClampedArray, width: number, height: number) => { data: string } | null;
+const jsQR = createRequire(import.meta.url)('jsqr') as QrReader;
+
+/** What a phone reads from a drawn QR code: its picture as printed, decoded by jsQR. */
+async function readQr(page: Page, index: number): Promise<string | null> {
+  const qr = page.locator('svg[data-url]').nth(index);
+  const png = (await qr.screenshot()).toString('base64');
+  const { width, height, data } = await page.evaluate(async (b64) => {
+    const img = new Image();
+    img.src = `data:image/png;base64,${b64}`;
+    await img.decode();
+    const canvas = document.createElement('canvas');
+    canvas.width = img.naturalWidth;
+    canvas.height = img.naturalHeight;
+    const ctx = canvas.getContext('2d')!;
+    ctx.drawImage(img, 0, 0);
+    const pixels = ctx.getImageData(0, 0, canvas.width, canvas.height);
+    return { width: pixels.width, height: pixels.height, data: Array.from(pixels.data) };
+  }, png);
+  return jsQR(Uint8ClampedArray.from(data), width, height)?.data ?? null;
+}
 
 /** Page objects in a PDF: `/Type /Page` but not the `/Type /Pages` tree node (PDF 32000-1 §7.7.3). */
 function pdfPageCount(pdf: Buffer): number {
@@ -62,13 +88,19 @@ test('eight species print as two Letter pages of fact cards, with working QR lin
     await page.getByText('8 fact cards on 2 pages').waitFor();
     assert.equal(await preview.getByRole('group', { name: /^Page \d of 2$/ }).count(), 2);
 
+    // Until the site's answer arrives a code may point at this page's own origin; then it moves.
+    await preview
+      .locator(`svg[data-url^="${PUBLIC_URL}/"]`)
+      .nth(SLUGS.length - 1)
+      .waitFor();
     const urls = await preview
       .locator('svg[data-url]')
       .evaluateAll((svgs) => svgs.map((s) => s.getAttribute('data-url')));
     assert.deepEqual(
       urls,
-      SLUGS.map((s) => `${app.server.baseUrl}/species/${s}`),
+      SLUGS.map((s) => `${PUBLIC_URL}/species/${s}`),
     );
+    assert.equal(await readQr(page, 0), `${PUBLIC_URL}/species/${SLUGS[0]}`, 'the printed code itself says so');
     await screenshot(page, 'cards-preview');
 
     // On paper: nothing but the sheets, and no card's words cut off at its edge.
@@ -122,8 +154,20 @@ test('eight species print as two Letter pages of fact cards, with working QR lin
     await labels.nth(SLUGS.length - 1).waitFor();
     assert.match(
       await labels.first().innerText(),
-      /Butterfly milkweed[\s\S]*Sown [A-Z][a-z]{2} \d{1,2}, \d{4}[\s\S]*CMS 30 d/,
+      /Butterfly milkweed[\s\S]*Sown [A-Z][a-z]{2} \d{1,2}, \d{4}[\s\S]*full sun\/part shade · dry\/medium-moist[\s\S]*12–30 in \(30–75 cm\) tall[\s\S]*CMS 30 d/,
     );
+    // On paper no label's lines are cut: every line fits the label's height and width.
+    await page.emulateMedia({ media: 'print' });
+    const cut = await labels.evaluateAll((all) =>
+      all.flatMap((label) => [
+        ...(label.scrollHeight > label.clientHeight + 1 ? [`${label.textContent} (too tall)`] : []),
+        ...[...label.querySelectorAll('p')]
+          .filter((p) => p.scrollWidth > p.clientWidth + 1)
+          .map((p) => `${p.textContent} (too wide)`),
+      ]),
+    );
+    await page.emulateMedia({ media: null });
+    assert.deepEqual(cut, [], 'every pot label line fits');
     await screenshot(page, 'pot-labels');
     const labelPdf = await page.pdf({ format: 'Letter', printBackground: true });
     writeFileSync(path.join(RESULTS_DIR, 'pot-labels.pdf'), labelPdf);

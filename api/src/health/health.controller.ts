@@ -1,15 +1,17 @@
-import { Controller, Get } from '@nestjs/common';
+import { Controller, Get, Header, Inject } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { InjectDataSource } from '@nestjs/typeorm';
 import {
   coveredEcoregionCodes,
   type HealthResponse,
   healthResponseSchema,
+  type SiteInfoResponse,
+  siteInfoResponseSchema,
   type StatsResponse,
   statsResponseSchema,
 } from '@homeground/shared';
 import { DataSource } from 'typeorm';
-import { API_VERSION } from '../config/app-config.js';
+import { API_VERSION, APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { ZodResponse } from '../common/decorators/zod.decorators.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 
@@ -21,7 +23,16 @@ export class HealthController {
   constructor(
     @InjectDataSource() private readonly db: DataSource,
     private readonly ctx: MixContextService,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
+
+  /** The site's public address (PUBLIC_URL), for QR codes and links that are printed or shared. */
+  @Get('site')
+  @Header('Cache-Control', 'public, max-age=3600')
+  @ZodResponse(siteInfoResponseSchema)
+  site(): SiteInfoResponse {
+    return { publicUrl: this.config.publicUrl };
+  }
 
   /** Liveness plus a real database round trip and the count of applied migrations. */
   @Get('health')

@@ -105,6 +105,12 @@ export interface HealthResponse {
   uptimeSeconds: number;
 }
 
+/** Public facts about this site that the web needs, e.g. the address printed on paper. */
+export interface SiteInfoResponse {
+  /** The public address of the site (no trailing slash); QR codes and printed links point here. */
+  publicUrl: string;
+}
+
 /** Live counts for the home page. */
 export interface StatsResponse {
   species: number;

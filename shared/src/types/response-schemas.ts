@@ -12,6 +12,7 @@ import {
   type GroupMember,
   type HealthResponse,
   type StatsResponse,
+  type SiteInfoResponse,
   type User,
 } from './auth.js';
 import { ecoregionSchema } from './ecoregion.js';
@@ -86,6 +87,10 @@ export const healthResponseSchema = z.object({
   database: z.object({ status: z.enum(['up', 'down']), migrations: z.number().int() }),
   uptimeSeconds: z.number(),
 }) satisfies z.ZodType<HealthResponse>;
+
+export const siteInfoResponseSchema = z.object({
+  publicUrl: z.string().url(),
+}) satisfies z.ZodType<SiteInfoResponse>;
 
 export const statsResponseSchema = z.object({
   species: z.number().int(),

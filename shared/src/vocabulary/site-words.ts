@@ -77,3 +77,18 @@ export function soilPhrase(soils: readonly SoilTexture[]): string {
 export function describeGround(sun: Sun, moisture: Moisture): string {
   return `${MOISTURE_WORDS[moisture]} ${SUN_WORDS[sun]}`;
 }
+
+/**
+ * Light and soil in the fewest words, for a pot label: ['part', 'full'], ['medium', 'dry'] →
+ * "full sun/part shade · dry/medium-moist". Same words as everywhere else, brightest and driest first.
+ */
+export function siteShortWords(sun: readonly Sun[], moisture: readonly Moisture[]): string {
+  const inOrder = <T extends string>(values: readonly T[], order: readonly T[], words: Record<T, string>) =>
+    order
+      .filter((v) => values.includes(v))
+      .map((v) => words[v])
+      .join('/');
+  return [inOrder(sun, SUN_LEVELS, SUN_WORDS), inOrder(moisture, MOISTURE_LEVELS, MOISTURE_WORDS)]
+    .filter((part) => part !== '')
+    .join(' · ');
+}

@@ -10,12 +10,12 @@ export interface AppInBrowser {
 
 /**
  * One built app (with demo data, on a free port) and one Chromium for a test file: started before
- * its tests, stopped after them. Read `server` and `browser` inside tests, once `before` has run.
+ * its tests, stopped after them. `env` adds settings for the server (e.g. PUBLIC_URL). Read `server` and `browser` inside tests, once `before` has run.
  */
-export function useAppInBrowser(): AppInBrowser {
+export function useAppInBrowser(env: Record<string, string> = {}): AppInBrowser {
   const session = {} as { server: RunningServer; browser: Browser };
   before(async () => {
-    session.server = await startServer();
+    session.server = await startServer(env);
     session.browser = await launchBrowser();
   });
   after(async () => {

@@ -7,6 +7,7 @@ import {
   wildBergamot,
 } from '../features/cards-labels/testing/card-fixtures.js';
 import { detailRoutes, fakeSpeciesSearch } from '../features/cards-labels/testing/card-api.js';
+import { decodeQrSvg } from '../features/cards-labels/testing/decode-qr.js';
 import { apiError } from '../testing/fake-api.js';
 import { renderApp } from '../testing/render-app.js';
 
@@ -33,6 +34,15 @@ describe('cards & labels page', () => {
     expect(pages.map((p) => within(p).getAllByRole('article').length)).toEqual([4, 4, 1]);
     expect(screen.getByText('9 fact cards on 3 pages')).toBeInTheDocument();
     expect(screen.getByText('9 species chosen')).toBeInTheDocument();
+  });
+
+  it('points each fact card’s QR code at the public address the site publishes', async () => {
+    // What the API answers when PUBLIC_URL is set to the invented scenario's address.
+    const publicUrl = 'https://plants.larkfield.example';
+    open('/cards-and-labels?species=asclepias-tuberosa', three, { 'GET /api/site': { body: { publicUrl } } });
+    const url = `${publicUrl}/species/asclepias-tuberosa`;
+    const qr = await screen.findByRole('img', { name: `QR code linking to ${url}` });
+    expect(decodeQrSvg(qr)).toBe(url);
   });
 
   it('lists the chosen species with a count, removes one, and says which slug is not in the catalogue', async () => {
@@ -93,6 +103,10 @@ describe('cards & labels page', () => {
     expect(labels[0]).toHaveTextContent('Butterfly milkweed');
     expect(labels[0]).toHaveTextContent('Sown Mar 2, 2026');
     expect(labels[0]).toHaveTextContent('CMS 30 d');
+    // Light, soil and height from the fixtures (card-fixtures.ts, after species-data/species/asclepias-tuberosa.json):
+    // 30–75 cm is 12–30 in at 2.54 cm to the inch.
+    expect(labels[0]).toHaveTextContent('full sun/part shade · dry/medium-moist');
+    expect(labels[0]).toHaveTextContent('12–30 in (30–75 cm) tall');
     expect(labels[1]).toHaveTextContent('no treatment · surface sow');
 
     const copies = screen.getByRole('spinbutton', { name: /Labels per species/ });

@@ -16,10 +16,12 @@ export function FactCardSheets({
   species,
   paper,
   qr,
+  origin,
 }: {
   species: readonly SpeciesDetail[];
   paper: PaperSpec;
   qr: QrEncoderState;
+  origin: string;
 }) {
   const styles = useStyles();
   const sheets = intoSheets(species, CARDS_PER_SHEET);
@@ -28,7 +30,7 @@ export function FactCardSheets({
       {sheets.map((sheet, i) => (
         <Sheet key={i} geometry={paper.cards} index={i} total={sheets.length} className={styles.grid}>
           {sheet.map((s) => (
-            <FactCard key={s.slug} species={s} qr={qr} layoutKey={paper.id} />
+            <FactCard key={s.slug} species={s} qr={qr} layoutKey={paper.id} origin={origin} />
           ))}
         </Sheet>
       ))}

@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { homegroundTheme } from '../../../theme/index.js';
 import { useQrEncoder } from '../hooks/use-qr-encoder.js';
 import { butterflyMilkweed, wildBergamot } from '../testing/card-fixtures.js';
+import { decodeQrSvg } from '../testing/decode-qr.js';
 import { FactCard } from './fact-card.js';
 
 /** Renders and waits for the QR encoder, so every later state update has happened. */
@@ -12,11 +13,14 @@ async function renderCard(species: typeof butterflyMilkweed) {
   await screen.findByRole('img', { name: /^QR code linking to/ });
 }
 
+// The invented scenario's public address, as PUBLIC_URL would set it.
+const PUBLIC_ORIGIN = 'https://plants.larkfield.example';
+
 function Card({ species }: { species: typeof butterflyMilkweed }) {
   const qr = useQrEncoder();
   return (
     <FluentProvider theme={homegroundTheme}>
-      <FactCard species={species} qr={qr} layoutKey="letter" />
+      <FactCard species={species} qr={qr} layoutKey="letter" origin={PUBLIC_ORIGIN} />
     </FluentProvider>
   );
 }
@@ -58,13 +62,15 @@ describe('fact card', () => {
     expect(card.getByText(/noxious-weed list and local rules/)).toBeInTheDocument();
   });
 
-  it('draws a QR code whose name is the absolute species page URL', async () => {
+  it('draws a QR code that decodes to the species page at the public address, not the serving origin', async () => {
     render(<Card species={butterflyMilkweed} />);
-    const url = `${window.location.origin}/species/asclepias-tuberosa`;
+    const url = `${PUBLIC_ORIGIN}/species/asclepias-tuberosa`;
     const qr = await screen.findByRole('img', { name: `QR code linking to ${url}` });
     expect(qr.tagName.toLowerCase()).toBe('svg');
     expect(qr.getAttribute('data-url')).toBe(url);
     expect(qr.querySelector('path')?.getAttribute('d')).toMatch(/^M\d+ \d+h1v1h-1z/);
+    expect(decodeQrSvg(qr)).toBe(url);
+    expect(window.location.origin).not.toBe(PUBLIC_ORIGIN);
   });
 
   it('says when light is needed, has no caution section without cautions, and names both flower colours', async () => {

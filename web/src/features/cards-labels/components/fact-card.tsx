@@ -36,10 +36,13 @@ export function FactCard({
   species,
   qr,
   layoutKey,
+  origin,
 }: {
   species: SpeciesDetail;
   qr: QrEncoderState;
   layoutKey: string;
+  /** The site's public address the QR code points at (not necessarily where this page is served). */
+  origin: string;
 }) {
   const styles = useFactCardStyles();
   const ref = useRef<HTMLElement>(null);
@@ -47,7 +50,7 @@ export function FactCard({
   const fit = useFitLevel(ref, FIT_CLASSES.length - 1, `${layoutKey}:${qr.status}`);
   const swatches =
     species.flowerColours.length > 0 ? species.flowerColours.map(flowerSwatch) : [flowerSwatch(undefined)];
-  const url = speciesPageUrl(species.slug);
+  const url = speciesPageUrl(species.slug, origin);
   const { germination, wildlife } = species;
 
   return (

@@ -1,4 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
+import { formatHeightRangeCm, siteShortWords } from '@homeground/shared';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { flowerSwatch } from '../../../theme/flower-colours.js';
 import { treatmentShort } from '../utils/treatment-words.js';
@@ -14,8 +15,9 @@ const useStyles = makeStyles({
     outline: `1px dashed ${tokens.colorNeutralStroke1}`,
     outlineOffset: '-0.5px',
     fontFamily: tokens.fontFamilyBase,
-    fontSize: '8pt',
-    lineHeight: 1.25,
+    // Six short lines in a 1 in (25 mm) label: 10.5 pt name plus five 7.5 pt lines stay under 0.8 in.
+    fontSize: '7.5pt',
+    lineHeight: 1.15,
     breakInside: 'avoid',
   },
   band: {
@@ -27,7 +29,7 @@ const useStyles = makeStyles({
   body: {
     minWidth: 0,
     flexGrow: 1,
-    padding: '0.05in 0.08in',
+    padding: '0.04in 0.08in',
     display: 'flex',
     flexDirection: 'column',
     justifyContent: 'center',
@@ -38,7 +40,7 @@ const useStyles = makeStyles({
   treatment: { fontWeight: 700 },
 });
 
-/** A pot label: names, sow date and the seed treatment in a few letters. */
+/** A pot label: names, sow date, light and soil, height, and the seed treatment in a few letters. */
 export function PotLabel({ species, sowDate }: { species: SpeciesDetail; sowDate: string }) {
   const styles = useStyles();
   const swatch = flowerSwatch(species.flowerColours[0]);
@@ -51,6 +53,8 @@ export function PotLabel({ species, sowDate }: { species: SpeciesDetail; sowDate
         </p>
         <p className={`${styles.line} ${styles.scientific}`}>{species.scientificName}</p>
         <p className={styles.line}>Sown {sowDate}</p>
+        <p className={styles.line}>{siteShortWords(species.sun, species.moisture)}</p>
+        <p className={styles.line}>{formatHeightRangeCm(species.heightCm.min, species.heightCm.max)} tall</p>
         <p className={`${styles.line} ${styles.treatment}`}>{treatmentShort(species.germination)}</p>
       </div>
     </div>

@@ -3,6 +3,7 @@ import { Print20Regular } from '@fluentui/react-icons';
 import { countOf } from '@homeground/shared';
 import { useId, useState } from 'react';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
+import { usePublicOrigin } from '../../../api/system/system.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { EmptyState, LoadingState } from '../../../components/states/index.js';
@@ -32,6 +33,7 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
   const headingId = useId();
   const tabsId = useId();
   const qr = useQrEncoder();
+  const origin = usePublicOrigin();
   const [kind, setKind] = useState<PrintKind>('cards');
   const [options, setOptions] = useState<PrintOptionsValue>(() => ({
     paper: 'letter',
@@ -96,7 +98,7 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
             here as it will print.
           </EmptyState>
         ) : kind === 'cards' ? (
-          <FactCardSheets species={species} paper={paper} qr={qr} />
+          <FactCardSheets species={species} paper={paper} qr={qr} origin={origin} />
         ) : (
           <PotLabelSheets
             species={species}

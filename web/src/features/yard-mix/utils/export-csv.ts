@@ -1,9 +1,13 @@
-import { roundTo } from '@homeground/shared';
+import { cmToInches, formatMonths, roundTo } from '@homeground/shared';
 import type { MixRow } from './mix-rows.js';
 
 const HEADER = [
   'Scientific name',
   'Common name',
+  'Role in the mix',
+  'Bloom months',
+  'Height (in)',
+  'Height (cm)',
   'Plants',
   'Spacing (in)',
   'Spacing (cm)',
@@ -18,6 +22,11 @@ function field(value: string | number | null | undefined): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
+/** A height range as "12–30"; one number when both ends agree. */
+function range(min: number, max: number): string {
+  return min === max ? String(min) : `${min}–${max}`;
+}
+
 /** The mix as CSV, one species a line, built in the browser (no request needed). */
 export function mixCsv(rows: readonly MixRow[]): string {
   const lines = rows.map((r) => {
@@ -25,6 +34,10 @@ export function mixCsv(rows: readonly MixRow[]): string {
     return [
       r.species.scientificName,
       r.species.commonName,
+      r.chosen.roles.join('; '),
+      formatMonths(r.species.bloomMonths),
+      range(roundTo(cmToInches(r.species.heightCm.min), 0), roundTo(cmToInches(r.species.heightCm.max), 0)),
+      range(r.species.heightCm.min, r.species.heightCm.max),
       q?.plants,
       q?.spacingIn,
       q ? roundTo(q.spacingCm, 0) : undefined,

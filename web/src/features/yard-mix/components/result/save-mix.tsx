@@ -2,6 +2,7 @@ import { Button, Field, Input, makeStyles, MessageBar, MessageBarBody, tokens } 
 import { Save20Regular } from '@fluentui/react-icons';
 import { type SaveMixRequest, saveMixRequestSchema } from '@homeground/shared';
 import { useState, type FormEvent } from 'react';
+import { usePublicOrigin } from '../../../../api/system/system.queries.js';
 import { useSaveMixMutation } from '../../../../api/mixes/mixes.mutations.js';
 import { RouterButton, RouterLink } from '../../../../components/links/router-link.js';
 import { paths } from '../../../../config/paths.js';
@@ -26,6 +27,7 @@ export interface SaveMixProps {
 export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: SaveMixProps) {
   const styles = useStyles();
   const save = useSaveMixMutation();
+  const origin = usePublicOrigin();
   const [isOpen, setIsOpen] = useState(false);
   const [name, setName] = useState(defaultName);
   const [error, setError] = useState<string | undefined>();
@@ -47,7 +49,7 @@ export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: S
             Saved as “{save.data.name}”. Anyone with its link can open it: <RouterLink to={href}>{href}</RouterLink>
           </MessageBarBody>
         </MessageBar>
-        <CopyLinkButton url={`${window.location.origin}${href}`} label="Copy the saved mix's link" />
+        <CopyLinkButton url={`${origin}${href}`} label="Copy the saved mix's link" />
       </div>
     );
   }

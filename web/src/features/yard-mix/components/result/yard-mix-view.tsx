@@ -1,6 +1,7 @@
 import { makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import { STATE_NAMES, type StateCode, formatArea } from '@homeground/shared';
 import { useState, type ReactNode } from 'react';
+import { usePublicOrigin } from '../../../../api/system/system.queries.js';
 import { ContentCard } from '../../../../components/page/content-card.js';
 import { Heading } from '../../../../components/page/page-heading.js';
 import { EmptyState, ErrorState, LoadingState } from '../../../../components/states/index.js';
@@ -55,6 +56,7 @@ export function YardMixView({
     plan,
     onPlanChange,
   );
+  const origin = usePublicOrigin();
   const [swapSlot, setSwapSlot] = useState<string | null>(null);
   const mix = query.data;
   const speciesList = mix ? mix.palette.chosen.map((c) => mix.species[c.slug]).filter(Boolean) : [];
@@ -77,7 +79,7 @@ export function YardMixView({
   const rows = mixRows(mix, plan.locked, plan.excluded);
   const stateName = STATE_NAMES[plan.region.state as StateCode] ?? plan.region.state;
   const sharePlan: MixPlan = { ...plan, chosen: slugs };
-  const shareUrl = `${window.location.origin}${paths.findPlants.build({ plan: sharePlan })}`;
+  const shareUrl = `${origin}${paths.findPlants.build({ plan: sharePlan })}`;
   const cardsHref = `${paths.cardsLabels.build()}?species=${slugs.join(',')}`;
   const pendingOut = rows.filter((r) => r.isExcluded).length;
   const swapRow = rows.find((r) => r.slug === swapSlot);
