@@ -1,4 +1,3 @@
-import { Field, Input } from '@fluentui/react-components';
 import { loginRequestSchema, type AuthResponse } from '@homeground/shared';
 import { useLoginMutation } from '../../../api/auth/auth.mutations.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
@@ -6,6 +5,7 @@ import { describeAuthFailure } from '../utils/form-errors.js';
 import { useAuthFormStyles } from './auth-form.styles.js';
 import { FormFailure } from './form-failure.js';
 import { SubmitButton } from './submit-button.js';
+import { SchemaTextField } from '../../../components/forms/schema-text-field.js';
 
 /** E-mail and password, checked with the shared schema before anything is sent. */
 export function SignInForm({ onSignedIn }: { onSignedIn: (auth: AuthResponse) => void }) {
@@ -23,24 +23,15 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (auth: AuthResponse) =>
   return (
     <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-label="Sign in">
       <FormFailure message={form.failure} />
-      <Field label="E-mail" required {...form.validation('email')}>
-        <Input
-          type="email"
-          name="email"
-          autoComplete="email"
-          value={form.values.email}
-          onChange={(_, d) => form.change('email', d.value)}
-        />
-      </Field>
-      <Field label="Password" required {...form.validation('password')}>
-        <Input
-          type="password"
-          name="password"
-          autoComplete="current-password"
-          value={form.values.password}
-          onChange={(_, d) => form.change('password', d.value)}
-        />
-      </Field>
+      <SchemaTextField form={form} name="email" label="E-mail" required type="email" autoComplete="email" />
+      <SchemaTextField
+        form={form}
+        name="password"
+        label="Password"
+        required
+        type="password"
+        autoComplete="current-password"
+      />
       <div className={styles.actions}>
         <SubmitButton isPending={login.isPending} label="Sign in" pendingLabel="Signing in…" />
       </div>

@@ -1,10 +1,9 @@
-import { Button, Field, Input, makeStyles, tokens } from '@fluentui/react-components';
+import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import {
   acceptInvitationRequestSchema,
   type AuthResponse,
   GROUP_ROLE_WORDS,
   type InvitationPreview,
-  PASSWORD_MIN_LENGTH,
   type User,
 } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
@@ -16,6 +15,7 @@ import { PageIntro } from '../../../components/page/page-intro.js';
 import { ErrorState, QueryState } from '../../../components/states/index.js';
 import { paths } from '../../../config/paths.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
+import { NEW_PASSWORD_HINT, SchemaTextField } from '../../../components/forms/schema-text-field.js';
 
 const useStyles = makeStyles({
   card: { maxWidth: '560px', display: 'grid', gap: tokens.spacingVerticalM },
@@ -136,28 +136,16 @@ function NewAccountForm({
           {form.failure}
         </p>
       ) : null}
-      <Field label="Your name" required {...form.validation('displayName')}>
-        <Input
-          name="displayName"
-          autoComplete="name"
-          value={form.values.displayName}
-          onChange={(_, d) => form.change('displayName', d.value)}
-        />
-      </Field>
-      <Field
+      <SchemaTextField form={form} name="displayName" label="Your name" required autoComplete="name" />
+      <SchemaTextField
+        form={form}
+        name="password"
         label="Password"
-        hint={`At least ${PASSWORD_MIN_LENGTH} characters. A short sentence is easy to remember.`}
+        hint={NEW_PASSWORD_HINT}
         required
-        {...form.validation('password')}
-      >
-        <Input
-          type="password"
-          name="password"
-          autoComplete="new-password"
-          value={form.values.password}
-          onChange={(_, d) => form.change('password', d.value)}
-        />
-      </Field>
+        type="password"
+        autoComplete="new-password"
+      />
       <div>
         <Button type="submit" appearance="primary" disabled={accept.isPending}>
           {accept.isPending ? 'Joining…' : `Make my account and join`}
