@@ -15,7 +15,9 @@ import { setUpOpenApi } from './docs/openapi.js';
  */
 export function configureApp(app: NestExpressApplication): INestApplication {
   app.setGlobalPrefix('api');
-  app.set('trust proxy', 'loopback');
+  // Forwarding headers are believed only from the proxies the configuration names (none by default), so
+  // the sign-in limits cannot be dodged by sending a made-up X-Forwarded-For.
+  app.set('trust proxy', app.get<AppConfig>(APP_CONFIG).trustProxy);
   app.disable('x-powered-by');
   // Security headers come first, so every answer carries them, including the species list cache's
   // (a module middleware, which Nest mounts after these).

@@ -21,4 +21,23 @@ describe('sign-in throttling (e2e)', () => {
       message: expect.stringMatching(/wait a minute/),
     });
   });
+
+  // A client must not buy a fresh allowance by making up a forwarding header (TRUST_PROXY unset: no
+  // proxy is believed). OWASP Authentication Cheat Sheet: limits keyed on what the client controls fail.
+  it('ignores a made-up X-Forwarded-For, so changing it gives no fresh allowance', async () => {
+    const fresh = await createTestApp({ LOGIN_THROTTLE_LIMIT: '3', LOGIN_THROTTLE_TTL_SECONDS: '60' });
+    try {
+      const statuses: number[] = [];
+      for (let i = 0; i < 4; i++) {
+        const res = await fresh.http
+          .post('/api/auth/login')
+          .set('X-Forwarded-For', `203.0.113.${i + 1}`)
+          .send({ email: `someone${i}@example.org`, password: 'guess-guess' });
+        statuses.push(res.status);
+      }
+      expect(statuses).toEqual([401, 401, 401, 429]);
+    } finally {
+      await fresh.close();
+    }
+  });
 });

@@ -4,6 +4,7 @@ export * from './types/auth.js';
 export * from './types/species-query.js';
 export * from './catalogue/region-match.js';
 export * from './catalogue/species-csv.js';
+export * from './csv/csv-cell.js';
 export * from './types/place.js';
 export * from './types/request-params.js';
 export * from './types/site.js';

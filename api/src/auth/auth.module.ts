@@ -2,15 +2,19 @@ import { Inject, type MiddlewareConsumer, Module, type NestModule, RequestMethod
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
+import { TypeOrmModule } from '@nestjs/typeorm';
 import { UsersModule } from '../users/users.module.js';
 import { AuthController } from './auth.controller.js';
 import { AuthService } from './auth.service.js';
 import { JwtStrategy } from './jwt.strategy.js';
+import { SignInBackoffService } from './sign-in-backoff.service.js';
+import { SignInFailureRow } from './sign-in-failure.entity.js';
 import { signInRateLimit } from './sign-in-rate-limit.js';
 
 @Module({
   imports: [
     UsersModule,
+    TypeOrmModule.forFeature([SignInFailureRow]),
     PassportModule,
     JwtModule.registerAsync({
       inject: [APP_CONFIG],
@@ -21,7 +25,7 @@ import { signInRateLimit } from './sign-in-rate-limit.js';
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy],
+  providers: [AuthService, JwtStrategy, SignInBackoffService],
   exports: [AuthService],
 })
 export class AuthModule implements NestModule {

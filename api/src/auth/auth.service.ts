@@ -4,6 +4,8 @@ import type { AuthResponse, LoginRequest, RegisterRequest } from '@homeground/sh
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { UsersService } from '../users/users.service.js';
 import type { JwtPayload } from './authenticated-user.js';
+import { assertStrongPassword } from './password-strength.js';
+import { SignInBackoffService } from './sign-in-backoff.service.js';
 import { DUMMY_HASH_PROMISE, hashPassword, verifyPassword } from './password.js';
 
 @Injectable()
@@ -11,10 +13,12 @@ export class AuthService {
   constructor(
     private readonly users: UsersService,
     private readonly jwt: JwtService,
+    private readonly backoff: SignInBackoffService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
   async register(dto: RegisterRequest): Promise<AuthResponse> {
+    assertStrongPassword(dto.password, dto);
     const user = await this.users.create({
       email: dto.email,
       displayName: dto.displayName,
@@ -24,11 +28,17 @@ export class AuthService {
   }
 
   async login(dto: LoginRequest): Promise<AuthResponse> {
+    await this.backoff.assertAllowed(dto.email);
     const user = await this.users.findByEmail(dto.email);
     // Verify against a dummy hash for unknown e-mails so timing does not reveal who has an account.
     const ok = await verifyPassword(dto.password, user?.passwordHash ?? (await DUMMY_HASH_PROMISE));
     const demoBlocked = user?.isDemo && this.config.isProduction;
-    if (!user || !ok || demoBlocked) throw new UnauthorizedException('E-mail or password is wrong.');
+    if (!user || !ok || demoBlocked) {
+      await this.backoff.recordFailure(dto.email);
+      throw new UnauthorizedException('E-mail or password is wrong.');
+    }
+    await this.backoff.recordSuccess(dto.email);
+    await this.users.recordSignIn(user.id);
     return this.issueToken(user.id);
   }
 

@@ -14,6 +14,8 @@ export function signInRateLimit(config: Pick<AppConfig, 'loginThrottle'>, multip
     limit: config.loginThrottle.limit * multiplier,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    // A forwarding header from an untrusted client is expected and ignored (see TRUST_PROXY), not a mistake.
+    validate: { xForwardedForHeader: false },
     handler: (_req, res) => {
       const body: ApiError = {
         statusCode: 429,

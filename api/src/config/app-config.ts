@@ -25,6 +25,8 @@ export interface AppConfig {
   jwtExpiresInSeconds: number;
   demoData: boolean;
   loginThrottle: { limit: number; ttlMs: number };
+  /** Express's `trust proxy` setting: which forwarding headers to believe (false: none). */
+  trustProxy: boolean | number | string[];
   logLevel: Env['LOG_LEVEL'];
   /** Outgoing mail: a real SMTP server, or null to keep mail in the local outbox. */
   smtpUrl: string | null;
@@ -62,6 +64,7 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     JWT_EXPIRES_IN_SECONDS: config.get('JWT_EXPIRES_IN_SECONDS', { infer: true }),
     DEMO_DATA: config.get('DEMO_DATA', { infer: true }),
     WEB_DIST: config.get('WEB_DIST', { infer: true }),
+    TRUST_PROXY: config.get('TRUST_PROXY', { infer: true }),
     LOGIN_THROTTLE_LIMIT: config.get('LOGIN_THROTTLE_LIMIT', { infer: true }),
     LOGIN_THROTTLE_TTL_SECONDS: config.get('LOGIN_THROTTLE_TTL_SECONDS', { infer: true }),
     LOG_LEVEL: config.get('LOG_LEVEL', { infer: true }),
@@ -84,6 +87,7 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     // Demo sign-ins must never exist in production, whatever the variable says.
     demoData: !isProduction && (env.DEMO_DATA ?? true),
     loginThrottle: { limit: env.LOGIN_THROTTLE_LIMIT, ttlMs: env.LOGIN_THROTTLE_TTL_SECONDS * 1000 },
+    trustProxy: env.TRUST_PROXY,
     logLevel: env.LOG_LEVEL,
     smtpUrl: env.SMTP_URL ?? null,
     mailFrom: env.MAIL_FROM,

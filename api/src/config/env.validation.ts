@@ -24,6 +24,19 @@ export const envSchema = z.object({
   DEMO_DATA: booleanish.optional(),
   /** The built web app to serve; relative paths are from the project root. */
   WEB_DIST: z.string().min(1).default('web/dist'),
+  /**
+   * Which proxies' X-Forwarded-For to believe when keying rate limits on the client's address. `false`
+   * (the default) believes none, so a client cannot buy a fresh allowance by sending the header; behind a
+   * load balancer set its address(es) or subnet, e.g. `10.0.0.0/8`, or a hop count such as `1`.
+   */
+  TRUST_PROXY: z
+    .string()
+    .trim()
+    .default('false')
+    .refine((v) => v !== 'true', 'must name the proxies (addresses, subnets or a hop count), not "true"')
+    .transform((v): boolean | number | string[] =>
+      v === 'false' ? false : /^\d+$/.test(v) ? Number(v) : v.split(',').map((x) => x.trim()),
+    ),
   LOGIN_THROTTLE_LIMIT: z.coerce.number().int().min(1).default(5),
   LOGIN_THROTTLE_TTL_SECONDS: z.coerce.number().int().min(1).default(60),
   LOG_LEVEL: z.enum(['error', 'warn', 'log', 'debug', 'verbose']).default('warn'),

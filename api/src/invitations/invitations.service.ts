@@ -29,6 +29,7 @@ import { MailService } from '../mail/mail.service.js';
 import { User } from '../users/user.entity.js';
 import { invitationEmail } from './invitation-email.js';
 import { InvitationRow } from './invitation.entity.js';
+import { assertStrongPassword } from '../auth/password-strength.js';
 
 const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
 
@@ -145,6 +146,7 @@ export class InvitationsService {
           'To join, give your name and choose a password.',
         );
       }
+      assertStrongPassword(req.password!, { email: row.email, displayName: req.displayName });
       userId = '';
     }
     const passwordHash = caller ? null : await hashPassword(req.password!);

@@ -1,4 +1,4 @@
-import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { firstName, type SavedMix } from '@homeground/shared';
 import { Repository } from 'typeorm';
@@ -7,6 +7,9 @@ import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SavedMixRow } from './saved-mix.entity.js';
 
 type SaveInput = Pick<SavedMix, 'name' | 'request' | 'chosen'>;
+
+/** Enough for every bed of a large garden; a cap keeps one account from filling the database. */
+export const MAX_SAVED_MIXES_PER_PERSON = 200;
 
 @Injectable()
 export class SavedMixesService {
@@ -17,6 +20,11 @@ export class SavedMixesService {
 
   async save(user: AuthenticatedUser, input: SaveInput): Promise<SavedMix> {
     this.ctx.assertKnown(input.chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })));
+    const kept = await this.mixes.count({ where: { ownerId: user.id } });
+    if (kept >= MAX_SAVED_MIXES_PER_PERSON)
+      throw new ConflictException(
+        `You already keep ${MAX_SAVED_MIXES_PER_PERSON} saved mixes: delete one you no longer need, then save this one.`,
+      );
     const row = await this.mixes.save(
       this.mixes.create({ ownerId: user.id, name: input.name, request: input.request, chosen: input.chosen }),
     );

@@ -28,6 +28,7 @@ import {
   ZodQuery,
   ZodResponse,
 } from '../common/decorators/zod.decorators.js';
+import { utf8Text } from '../common/http/utf8-text.js';
 import { MAX_PHOTO_BYTES, SpeciesPhotosService } from './species-photos.service.js';
 import { SpeciesStore } from './species-store.service.js';
 import { SpeciesService } from './species.service.js';
@@ -95,7 +96,7 @@ export class SpeciesController {
     @ZodFile('file', MAX_CSV_BYTES, "CSV with the export's columns") file: UploadedBlob,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<CsvImportResult> {
-    return this.species.importCsv(file.buffer.toString('utf8'), user.id);
+    return this.species.importCsv(utf8Text(file.buffer, 'file'), user.id);
   }
 
   @Post(':slug/photo')

@@ -106,7 +106,8 @@ export class SpeciesService {
   exportCsv(): string {
     return Papa.unparse(
       { fields: [...SPECIES_CSV_COLUMNS], data: this.store.all().map(speciesToCsvRow) },
-      { newline: '\r\n' },
+      // Cells starting with = + - @ get a leading ' so spreadsheet programs show them as text (OWASP CSV injection).
+      { newline: '\r\n', escapeFormulae: true },
     );
   }
 

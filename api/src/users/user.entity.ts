@@ -26,6 +26,10 @@ export class User {
   @Column({ type: 'boolean', name: 'is_demo', default: false })
   isDemo: boolean;
 
+  /** The last successful sign-in, for the admin's people page. */
+  @Column({ type: 'datetime', name: 'last_sign_in_at', nullable: true })
+  lastSignInAt: Date | null;
+
   @CreateDateColumn({ name: 'created_at' })
   createdAt: Date;
 

@@ -15,6 +15,11 @@ export class UsersService {
     return user && toUserCredentials(user);
   }
 
+  /** Notes a successful sign-in (shown on the admin's people page). */
+  async recordSignIn(id: string, at = new Date()): Promise<void> {
+    await this.users.update({ id }, { lastSignInAt: at });
+  }
+
   /** The account with this id, for checking a token; null when it was deleted. */
   async findById(id: string): Promise<UserCredentials | null> {
     const user = await this.users.findOne({ where: { id } });

@@ -1,3 +1,4 @@
+import { formulaCellProblem } from '../csv/csv-cell.js';
 import type { CsvRowError } from '../types/species-query.js';
 import { type Species, speciesSchema, type TreatmentStep } from '../types/species.js';
 
@@ -166,6 +167,11 @@ export function csvRowToSpecies(
   line: number,
 ): { species?: Species; errors: CsvRowError[] } {
   const errors: CsvRowError[] = [];
+  // Refused before anything else: a formula-like cell is never stored, whatever the column.
+  for (const column of SPECIES_CSV_COLUMNS) {
+    const problem = formulaCellProblem(row[column] ?? '');
+    if (problem) errors.push({ row: line, field: column, message: problem });
+  }
   const json = (column: SpeciesCsvColumn, fallback: unknown) => {
     const cell = row[column];
     if (cell === undefined || cell.trim() === '') return fallback;

@@ -1,4 +1,4 @@
-import { csvField } from '../sowing-calendar/calendar-csv.js';
+import { csvField } from '../csv/csv-cell.js';
 import type { SeedList } from './seed-list.js';
 
 const COLUMNS = [

@@ -1,3 +1,4 @@
+import { csvField } from '../csv/csv-cell.js';
 import type { SowingCalendar } from './calendar-types.js';
 
 /** Names shown in the CSV for a species slug. */
@@ -7,11 +8,6 @@ export interface CsvNames {
 }
 
 const CSV_FIELDS = ['date', 'species', 'scientificName', 'kind', 'title', 'detail'] as const;
-
-/** RFC 4180 field: quoted when it holds a comma, quote or line break; quotes doubled. */
-export function csvField(value: string): string {
-  return /[",\r\n]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
-}
 
 /**
  * The calendar as CSV (RFC 4180, CRLF): one row per event in date order, then one row per warning

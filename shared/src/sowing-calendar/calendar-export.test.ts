@@ -1,7 +1,8 @@
 import ICAL from 'ical.js';
 import { describe, expect, it } from 'vitest';
 import { F } from '../scoring/__tests__/species-fixtures.js';
-import { calendarToCsv, csvField } from './calendar-csv.js';
+import { csvField } from '../csv/csv-cell.js';
+import { calendarToCsv } from './calendar-csv.js';
 import { calendarToIcs, escapeText, foldLine } from './calendar-ics.js';
 import type { SowingPlan } from './calendar-types.js';
 import { buildSowingCalendar } from './sowing-calendar.js';

@@ -1,4 +1,4 @@
-import { cmToInches, formatMonths, roundTo } from '@homeground/shared';
+import { cmToInches, csvField as field, formatMonths, roundTo } from '@homeground/shared';
 import type { MixRow } from './mix-rows.js';
 
 const HEADER = [
@@ -15,12 +15,6 @@ const HEADER = [
   'Seed weight (g)',
   'Seed weight (oz)',
 ];
-
-/** RFC 4180 quoting: a field with a comma, quote or line break is quoted, quotes doubled. */
-function field(value: string | number | null | undefined): string {
-  const text = value === null || value === undefined ? '' : String(value);
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
 
 /** A height range as "12–30"; one number when both ends agree. */
 function range(min: number, max: number): string {
