@@ -16,6 +16,7 @@ import { PlanningModule } from './planning/planning.module.js';
 import { RecommendationsModule } from './recommendations/recommendations.module.js';
 import { SavedMixesModule } from './saved-mixes/saved-mixes.module.js';
 import { UsersModule } from './users/users.module.js';
+import { PeopleModule } from './people/people.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { InvitationsModule } from './invitations/invitations.module.js';
 import { SeasonsModule } from './seasons/seasons.module.js';
@@ -39,6 +40,7 @@ function webApp(): DynamicModule[] {
     MailModule,
     AuthModule,
     UsersModule,
+    PeopleModule,
     GroupsModule,
     InvitationsModule,
     HealthModule,

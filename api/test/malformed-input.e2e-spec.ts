@@ -151,6 +151,13 @@ const cases: Case[] = [
     field: 'email',
   },
   {
+    what: 'switching an account off with a word instead of true or false',
+    method: 'patch',
+    url: `/api/users/${UUID}/access`,
+    body: { disabled: 'yes' },
+    field: 'disabled',
+  },
+  {
     what: 'a member with a 100,000-character e-mail',
     method: 'put',
     url: '/api/groups/larkfield-commons-growers/members',
@@ -514,6 +521,7 @@ describe('malformed input on every writing route (e2e)', () => {
     );
     expect([...routes].sort()).toEqual([
       'delete /api/ecoregions/boundaries',
+      'patch /api/users/:id/access',
       'patch /api/users/:id/role',
       'post /api/auth/login',
       'post /api/auth/register',

@@ -26,7 +26,7 @@ import { signInRateLimit } from './sign-in-rate-limit.js';
   ],
   controllers: [AuthController],
   providers: [AuthService, JwtStrategy, SignInBackoffService],
-  exports: [AuthService],
+  exports: [AuthService, SignInBackoffService],
 })
 export class AuthModule implements NestModule {
   constructor(@Inject(APP_CONFIG) private readonly config: AppConfig) {}

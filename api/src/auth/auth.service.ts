@@ -1,4 +1,4 @@
-import { Inject, Injectable, UnauthorizedException } from '@nestjs/common';
+import { ForbiddenException, Inject, Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import type { AuthResponse, LoginRequest, RegisterRequest } from '@homeground/shared';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
@@ -38,6 +38,8 @@ export class AuthService {
       throw new UnauthorizedException('E-mail or password is wrong.');
     }
     await this.backoff.recordSuccess(dto.email);
+    // Said only to someone who knows the password, so it tells a stranger nothing.
+    if (user.disabled) throw new ForbiddenException('This account is switched off: ask a Homeground admin.');
     await this.users.recordSignIn(user.id);
     return this.issueToken(user.id);
   }

@@ -22,7 +22,8 @@ export class JwtStrategy extends PassportStrategy(Strategy, 'jwt') {
 
   async validate(payload: JwtPayload): Promise<AuthenticatedUser | null> {
     const user = await this.users.findById(payload.sub);
-    if (!user || (user.isDemo && this.config.isProduction)) return null;
+    // A switched-off account's tokens stop working on the next request, not when they expire.
+    if (!user || user.disabled || (user.isDemo && this.config.isProduction)) return null;
     return { id: user.id, email: user.email, role: user.role };
   }
 }

@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import { HttpException, HttpStatus, Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { ApiError } from '@homeground/shared';
-import { Repository } from 'typeorm';
+import { IsNull, Not, Repository } from 'typeorm';
 import { SignInFailureRow } from './sign-in-failure.entity.js';
 
 /** Failures allowed before an address is held back (OWASP Authentication Cheat Sheet: a handful). */
@@ -52,6 +52,20 @@ export class SignInBackoffService {
   /** A right password clears the count. */
   async recordSuccess(email: string): Promise<void> {
     await this.rows.delete({ emailKey: keyFor(email) });
+  }
+
+  /** Which of these addresses are held back now (for the admin's people page), in one query. */
+  async heldEmails(emails: readonly string[], now = new Date()): Promise<Set<string>> {
+    const byKey = new Map(emails.map((e) => [keyFor(e), e]));
+    // Compared here rather than in SQL: the drivers store datetimes in different text forms, and the
+    // table only ever holds the addresses with recent failures.
+    const rows = await this.rows.find({ where: { lockedUntil: Not(IsNull()) } });
+    return new Set(
+      rows
+        .filter((r) => r.lockedUntil !== null && r.lockedUntil > now)
+        .map((r) => byKey.get(r.emailKey))
+        .filter((e): e is string => e !== undefined),
+    );
   }
 
   /** Whether the address is held back now (for the admin's people page). */

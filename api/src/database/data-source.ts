@@ -14,6 +14,7 @@ import { AllowGroupMembers1765022400000 } from './migrations/1765022400000-allow
 import { CreateGroupInvitations1765065600000 } from './migrations/1765065600000-create-group-invitations.js';
 import { CreateSeasons1765152000000 } from './migrations/1765152000000-create-seasons.js';
 import { AddSignInActivity1765411200000 } from './migrations/1765411200000-add-sign-in-activity.js';
+import { AddAccountDisabled1765497600000 } from './migrations/1765497600000-add-account-disabled.js';
 import { SignInFailureRow } from '../auth/sign-in-failure.entity.js';
 import { InvitationRow } from '../invitations/invitation.entity.js';
 import { OutboxMessageRow } from '../mail/outbox-message.entity.js';
@@ -46,6 +47,7 @@ export const MIGRATIONS = [
   CreateGroupInvitations1765065600000,
   CreateSeasons1765152000000,
   AddSignInActivity1765411200000,
+  AddAccountDisabled1765497600000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

@@ -26,6 +26,10 @@ export class User {
   @Column({ type: 'boolean', name: 'is_demo', default: false })
   isDemo: boolean;
 
+  /** When an admin switched the account off; null while it works. */
+  @Column({ type: 'datetime', name: 'disabled_at', nullable: true })
+  disabledAt: Date | null;
+
   /** The last successful sign-in, for the admin's people page. */
   @Column({ type: 'datetime', name: 'last_sign_in_at', nullable: true })
   lastSignInAt: Date | null;

@@ -48,20 +48,6 @@ export class UsersService {
     return this.getDto(saved.id);
   }
 
-  async list(): Promise<UserDto[]> {
-    const all = await this.users.find({
-      relations: { memberships: { group: true } },
-      order: { createdAt: 'ASC', email: 'ASC' },
-    });
-    return all.map(toUserDto);
-  }
-
-  async setRole(id: string, role: GlobalRole): Promise<UserDto> {
-    const result = await this.users.update({ id }, { role });
-    if (!result.affected) throw new NotFoundException('No such user.');
-    return this.getDto(id);
-  }
-
   count(): Promise<number> {
     return this.users.count();
   }

@@ -18,6 +18,7 @@ import {
 import { ecoregionSchema } from './ecoregion.js';
 import type { Invitation, InvitationPreview } from './invitation.js';
 import type { OutboxMessage } from './mail.js';
+import type { PersonAccount } from './people.js';
 import { BLOOM_PERIODS, paletteRequestSchema, type PaletteResult, type ScoredSpecies } from './recommendation.js';
 import type { Season, ShareList } from './season.js';
 import type { SeedList } from '../season-planning/seed-list.js';
@@ -55,6 +56,12 @@ export const userResponseSchema = z.object({
   ),
   createdAt: isoDateTime,
 }) satisfies z.ZodType<User>;
+
+export const personAccountResponseSchema = userResponseSchema.extend({
+  disabledAt: isoDateTime.nullable(),
+  lastSignInAt: isoDateTime.nullable(),
+  signInHeld: z.boolean().describe('sign-in for this address is held back after too many wrong passwords'),
+}) satisfies z.ZodType<PersonAccount>;
 
 export const authResponseSchema = z.object({
   accessToken: z.string().describe('a JWT to send as Authorization: Bearer <token>'),

@@ -60,6 +60,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             page(paths.invitation.path, async () => ({
               Component: (await import('../routes/invitation.js')).InvitationRoute,
             })),
+            page(paths.people.path, async () => ({ Component: (await import('../routes/people.js')).PeopleRoute })),
             page(paths.season.path, async () => ({ Component: (await import('../routes/season.js')).SeasonRoute })),
             page(paths.myBatches.path, async () => ({
               Component: (await import('../routes/my-batches.js')).MyBatchesRoute,

@@ -64,6 +64,8 @@ export const paths = {
   season: { path: '/season', build: () => '/season' },
   myBatches: { path: '/my-batches', build: () => '/my-batches' },
   plantShare: { path: '/plant-share', build: () => '/plant-share' },
+  /** Admins: every account, its role, switch-off and sign-in activity. */
+  people: { path: '/people', build: () => '/people' },
 } as const;
 
 /**

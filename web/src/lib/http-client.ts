@@ -92,6 +92,8 @@ export function createHttpClient(config: HttpClientConfig) {
       request<T>(path, { ...options, method: 'POST', body }),
     put: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
       request<T>(path, { ...options, method: 'PUT', body }),
+    patch: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+      request<T>(path, { ...options, method: 'PATCH', body }),
     delete: <T = void>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>
       request<T>(path, { ...options, method: 'DELETE' }),
     /** A file the API sends behind sign-in (e.g. a CSV), as a Blob; a plain link could not carry the token. */

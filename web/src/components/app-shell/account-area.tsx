@@ -10,7 +10,7 @@ import {
   Spinner,
   tokens,
 } from '@fluentui/react-components';
-import { Person20Regular, SignOut20Regular } from '@fluentui/react-icons';
+import { People20Regular, Person20Regular, SignOut20Regular } from '@fluentui/react-icons';
 import type { User } from '@homeground/shared';
 import { useLocation, useNavigate } from 'react-router-dom';
 import { paths } from '../../config/paths.js';
@@ -72,6 +72,11 @@ export function AccountArea({ status, user, onSignOut }: AccountAreaProps) {
           <MenuItem icon={<Person20Regular />} onClick={() => navigate(paths.account.build())}>
             Your account
           </MenuItem>
+          {user?.role === 'admin' ? (
+            <MenuItem icon={<People20Regular />} onClick={() => navigate(paths.people.build())}>
+              People
+            </MenuItem>
+          ) : null}
           <MenuItem icon={<SignOut20Regular />} onClick={onSignOut}>
             Sign out
           </MenuItem>

@@ -1,0 +1,1 @@
+export { PeoplePage, signInWords } from './components/people-page.js';
