@@ -404,6 +404,13 @@ const cases: Case[] = [
     upload: { field: 'photo', contents: 'x' },
     field: 'slug',
   },
+  {
+    what: 'a revert of a change id that is not a UUID',
+    method: 'post',
+    url: `/api/species/${record.slug}/history/not-a-uuid/revert`,
+    body: {},
+    field: 'changeId',
+  },
   // boundary polygons
   {
     what: 'a boundary without coordinates',
@@ -515,6 +522,7 @@ describe('malformed input on every writing route (e2e)', () => {
             `${c.method} ${c.url
               .split('?')[0]
               .replace(/\/species\/(?!import)[^/]+/, '/species/:slug')
+              .replace(/\/history\/[^/]+/, '/history/:changeId')
               .replace(/\/users\/[^/]+/, '/users/:id')
               .replace(/\/groups\/[^/]+/, '/groups/:slug')}`,
         ),
@@ -535,6 +543,7 @@ describe('malformed input on every writing route (e2e)', () => {
       'post /api/quantities',
       'post /api/recommendations',
       'post /api/species',
+      'post /api/species/:slug/history/:changeId/revert',
       'post /api/species/:slug/photo',
       'post /api/species/import',
       'put /api/groups/:slug/members',

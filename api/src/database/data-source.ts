@@ -15,6 +15,8 @@ import { CreateGroupInvitations1765065600000 } from './migrations/1765065600000-
 import { CreateSeasons1765152000000 } from './migrations/1765152000000-create-seasons.js';
 import { AddSignInActivity1765411200000 } from './migrations/1765411200000-add-sign-in-activity.js';
 import { AddAccountDisabled1765497600000 } from './migrations/1765497600000-add-account-disabled.js';
+import { CreateSpeciesChanges1765584000000 } from './migrations/1765584000000-create-species-changes.js';
+import { SpeciesChangeRow } from '../species/species-change.entity.js';
 import { SignInFailureRow } from '../auth/sign-in-failure.entity.js';
 import { InvitationRow } from '../invitations/invitation.entity.js';
 import { OutboxMessageRow } from '../mail/outbox-message.entity.js';
@@ -36,6 +38,7 @@ export const ENTITIES = [
   SeasonRow,
   SeasonTargetRow,
   SignInFailureRow,
+  SpeciesChangeRow,
 ];
 export const MIGRATIONS = [
   CreateUsersAndGroups1764633600000,
@@ -48,6 +51,7 @@ export const MIGRATIONS = [
   CreateSeasons1765152000000,
   AddSignInActivity1765411200000,
   AddAccountDisabled1765497600000,
+  CreateSpeciesChanges1765584000000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

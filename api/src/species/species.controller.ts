@@ -4,16 +4,22 @@ import {
   type CsvImportResult,
   csvImportResultSchema,
   type PhotoQuery,
+  type RevertChangeRequest,
+  revertChangeRequestSchema,
   photoQuerySchema,
   photoUploadResultSchema,
   slugParamSchema,
   type Species,
+  type SpeciesChange,
+  speciesChangeResponseSchema,
   speciesDetailSchema,
   speciesPageSchema,
   type SpeciesQuery,
   speciesQuerySchema,
   speciesSchema,
+  uuidParamSchema,
 } from '@homeground/shared';
+import { z } from 'zod';
 import type { Request, Response } from 'express';
 import { createReadStream } from 'node:fs';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
@@ -30,6 +36,7 @@ import {
 } from '../common/decorators/zod.decorators.js';
 import { utf8Text } from '../common/http/utf8-text.js';
 import { MAX_PHOTO_BYTES, SpeciesPhotosService } from './species-photos.service.js';
+import { SpeciesHistoryService } from './species-history.service.js';
 import { SpeciesStore } from './species-store.service.js';
 import { SpeciesService } from './species.service.js';
 
@@ -42,6 +49,7 @@ export class SpeciesController {
     private readonly species: SpeciesService,
     private readonly store: SpeciesStore,
     private readonly photos: SpeciesPhotosService,
+    private readonly history_: SpeciesHistoryService,
   ) {}
 
   /** Filtered, sorted, paged catalogue; `q` is typo-tolerant over common and scientific names and synonyms. */
@@ -96,7 +104,29 @@ export class SpeciesController {
     @ZodFile('file', MAX_CSV_BYTES, "CSV with the export's columns") file: UploadedBlob,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<CsvImportResult> {
-    return this.species.importCsv(utf8Text(file.buffer, 'file'), user.id);
+    return this.species.importCsv(utf8Text(file.buffer, 'file'), user.id, displayFileName(file.originalname));
+  }
+
+  /** Every change to the record, newest first: who, when, how, and each field before and after. */
+  @Get(':slug/history')
+  @ZodResponse(z.array(speciesChangeResponseSchema))
+  @Auth('curator')
+  history(@ZodParam('slug', slugParamSchema) slug: string): Promise<SpeciesChange[]> {
+    return this.history_.history(slug);
+  }
+
+  /** Puts the record back as it was before one change; the undo is itself a change in the history. */
+  @Post(':slug/history/:changeId/revert')
+  @ZodResponse(speciesSchema)
+  @HttpCode(200)
+  @Auth('curator')
+  revert(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @ZodParam('changeId', uuidParamSchema) changeId: string,
+    @ZodBody(revertChangeRequestSchema) _body: RevertChangeRequest,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<Species> {
+    return this.history_.revert(slug, changeId, user.id);
   }
 
   @Post(':slug/photo')
@@ -122,4 +152,15 @@ export class SpeciesController {
     res.setHeader('Cache-Control', 'public, max-age=3600');
     return new StreamableFile(createReadStream(file.path), { type: file.mime });
   }
+}
+
+/** A file name fit to show in the history: no folders, no control characters, at most 120 characters. */
+function displayFileName(name: string | undefined): string | null {
+  const base = (name ?? '').split(/[\\/]/).pop() ?? '';
+  const clean = [...base]
+    .filter((ch) => ch.charCodeAt(0) >= 0x20 && ch.charCodeAt(0) !== 0x7f)
+    .join('')
+    .trim()
+    .slice(0, 120);
+  return clean || null;
 }

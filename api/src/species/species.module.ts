@@ -8,6 +8,9 @@ import {
 } from '@nestjs/common';
 import { CATALOGUE_LOADED, CatalogueModule } from '../catalogue/catalogue.module.js';
 import { EcoregionsModule } from '../ecoregions/ecoregions.module.js';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { SpeciesChangeRow } from './species-change.entity.js';
+import { SpeciesHistoryService } from './species-history.service.js';
 import { SpeciesListCacheMiddleware } from './species-list-cache.middleware.js';
 import { SpeciesPhotosService } from './species-photos.service.js';
 import { SpeciesStore } from './species-store.service.js';
@@ -15,9 +18,9 @@ import { SpeciesController } from './species.controller.js';
 import { SpeciesService } from './species.service.js';
 
 @Module({
-  imports: [CatalogueModule, EcoregionsModule],
+  imports: [CatalogueModule, EcoregionsModule, TypeOrmModule.forFeature([SpeciesChangeRow])],
   controllers: [SpeciesController],
-  providers: [SpeciesService, SpeciesStore, SpeciesPhotosService, SpeciesListCacheMiddleware],
+  providers: [SpeciesService, SpeciesHistoryService, SpeciesStore, SpeciesPhotosService, SpeciesListCacheMiddleware],
   exports: [SpeciesStore],
 })
 export class SpeciesModule implements OnModuleInit, NestModule {

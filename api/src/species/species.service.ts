@@ -12,6 +12,7 @@ import Papa from 'papaparse';
 import { DataSource } from 'typeorm';
 import { writeSpecies } from '../catalogue/catalogue-writer.js';
 import { badRequest } from '../common/validation/bad-request.js';
+import { recordChange } from './species-change-recorder.js';
 import { SpeciesStore } from './species-store.service.js';
 
 /** At most this many bad rows are listed in one answer; the count says how many there were. */
@@ -36,19 +37,26 @@ export class SpeciesService {
     await this.db.transaction(async (tx) => {
       await this.assertUnique(tx, record, null);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId });
+      await recordChange(tx, { kind: 'create', before: null, after: record, userId });
     });
     await this.store.reload();
     return this.get(record.slug);
   }
 
   /** Replaces a record; a curator's edit is kept over later catalogue-file changes (seed hash cleared). */
-  async replace(slug: string, record: Species, userId: string): Promise<Species> {
-    this.get(slug);
+  async replace(
+    slug: string,
+    record: Species,
+    userId: string,
+    how: { kind: 'edit' | 'revert'; revertOf?: string } = { kind: 'edit' },
+  ): Promise<Species> {
+    const before = this.get(slug);
     if (record.slug !== slug && this.store.get(record.slug))
       throw new ConflictException(`Species "${record.slug}" already exists.`);
     await this.db.transaction(async (tx) => {
       await this.assertUnique(tx, record, slug);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId, previousSlug: slug });
+      await recordChange(tx, { kind: how.kind, before, after: record, userId, revertOf: how.revertOf });
     });
     await this.store.reload();
     return this.get(record.slug);
@@ -59,7 +67,7 @@ export class SpeciesService {
    * if any row is bad, the answer lists each bad row with its line number and field and nothing is
    * written. Otherwise all rows are written in one transaction (existing slugs are replaced).
    */
-  async importCsv(text: string, userId: string): Promise<CsvImportResult> {
+  async importCsv(text: string, userId: string, fileName: string | null = null): Promise<CsvImportResult> {
     const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
       header: true,
       skipEmptyLines: 'greedy',
@@ -95,8 +103,10 @@ export class SpeciesService {
     let created = 0;
     await this.db.transaction(async (tx) => {
       for (const r of records) {
-        if (!this.store.get(r.slug)) created++;
+        const before = this.store.get(r.slug) ?? null;
+        if (!before) created++;
         await writeSpecies(tx, r, { seedHash: null, editedBy: userId });
+        await recordChange(tx, { kind: 'import', before, after: r, userId, fileName });
       }
     });
     await this.store.reload();

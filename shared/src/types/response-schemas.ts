@@ -19,6 +19,7 @@ import { ecoregionSchema } from './ecoregion.js';
 import type { Invitation, InvitationPreview } from './invitation.js';
 import type { OutboxMessage } from './mail.js';
 import type { PersonAccount } from './people.js';
+import { SPECIES_CHANGE_KINDS, type SpeciesChange } from './species-history.js';
 import { BLOOM_PERIODS, paletteRequestSchema, type PaletteResult, type ScoredSpecies } from './recommendation.js';
 import type { Season, ShareList } from './season.js';
 import type { SeedList } from '../season-planning/seed-list.js';
@@ -62,6 +63,24 @@ export const personAccountResponseSchema = userResponseSchema.extend({
   lastSignInAt: isoDateTime.nullable(),
   signInHeld: z.boolean().describe('sign-in for this address is held back after too many wrong passwords'),
 }) satisfies z.ZodType<PersonAccount>;
+
+export const speciesChangeResponseSchema = z.object({
+  id: z.string(),
+  slug: z.string(),
+  kind: z.enum(SPECIES_CHANGE_KINDS),
+  changedAt: isoDateTime,
+  changedBy: z.object({ id: z.string(), displayName: z.string() }).nullable(),
+  fileName: z.string().nullable(),
+  revertOf: z.string().nullable(),
+  changes: z.array(
+    z.object({
+      field: z.string(),
+      before: z.string().nullable().describe('the value before, as JSON text'),
+      after: z.string().nullable().describe('the value after, as JSON text'),
+      source: z.string().nullable().describe('the source the record gives for this field after the change'),
+    }),
+  ),
+}) satisfies z.ZodType<SpeciesChange>;
 
 export const authResponseSchema = z.object({
   accessToken: z.string().describe('a JWT to send as Authorization: Bearer <token>'),

@@ -77,6 +77,8 @@ export function ZodParam(name: string, schema: z.ZodType): ParameterDecorator {
 export interface UploadedBlob {
   buffer: Buffer;
   size: number;
+  /** The file's name on the sender's machine, as the browser gave it (untrusted; for display only). */
+  originalname?: string;
 }
 
 /** Refuses a request without the file, naming the form field. */
