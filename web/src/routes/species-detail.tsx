@@ -3,7 +3,9 @@ import { type LoaderFunctionArgs, useParams } from 'react-router-dom';
 import { speciesDetailQueryOptions } from '../api/species/species.queries.js';
 import { bloomWords } from '@homeground/shared';
 import { BloomStrip } from '../features/species-browser/index.js';
+import { useSession } from '../features/auth/index.js';
 import { SpeciesDetail } from '../features/species-detail/index.js';
+import { SpeciesHistoryPanel } from '../features/species-history/index.js';
 
 /** Starts the record's request while the page's code arrives; the page shows loading, 404 and errors itself. */
 export function speciesDetailLoader(queryClient: QueryClient) {
@@ -15,13 +17,20 @@ export function speciesDetailLoader(queryClient: QueryClient) {
 
 export function SpeciesDetailRoute() {
   const { slug = '' } = useParams();
+  const role = useSession().user?.role;
+  const curates = role === 'curator' || role === 'admin';
   return (
-    <SpeciesDetail
-      // A new slug is a new page: start its state (photo fallback, open details) afresh.
-      key={slug}
-      slug={slug}
-      describeBloom={bloomWords}
-      renderBloomStrip={(s) => <BloomStrip bloomMonths={s.bloomMonths} flowerColours={s.flowerColours} size="large" />}
-    />
+    <>
+      <SpeciesDetail
+        // A new slug is a new page: start its state (photo fallback, open details) afresh.
+        key={slug}
+        slug={slug}
+        describeBloom={bloomWords}
+        renderBloomStrip={(s) => (
+          <BloomStrip bloomMonths={s.bloomMonths} flowerColours={s.flowerColours} size="large" />
+        )}
+      />
+      {curates ? <SpeciesHistoryPanel key={`history-${slug}`} slug={slug} /> : null}
+    </>
   );
 }

@@ -1,0 +1,1 @@
+export { changeHeadline, SpeciesHistoryPanel } from './components/species-history-panel.js';
