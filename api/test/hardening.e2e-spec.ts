@@ -52,7 +52,8 @@ describe('hardening: passwords, CSV cells and encodings, caps (e2e)', () => {
     const slug = 'asclepias-tuberosa';
     const record = (await t.http.get(`/api/species/${slug}`).expect(200)).body;
     const edited = { ...record, commonNames: ['@SUM(1+1)', ...record.commonNames] };
-    delete edited.hasPhoto; // an answer-only field
+    delete edited.hasPhoto; // answer-only fields
+    delete edited.photoCredit;
     await t.http.put(`/api/species/${slug}`).set('Authorization', `Bearer ${curator}`).send(edited).expect(200);
     const csv = (await t.http.get('/api/species/export.csv').expect(200)).text;
     const row = csv.split('\r\n').find((l) => l.startsWith(`${slug},`)) ?? '';

@@ -3,6 +3,13 @@ import { loadCatalogue } from '@homeground/species-data';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
 
+/** A photo's required credit (photographer from the invented demo scenario), so the photo cases test one thing. */
+const PHOTO_CREDIT = {
+  photographer: 'Ines Calder',
+  licence: 'CC-BY-4.0',
+  sourceUrl: 'https://example.org/photos/1',
+};
+
 /**
  * Every writing route (and the main queries) refuses malformed input with a 400 that names the
  * field, and writes nothing. The inputs are what a careless or hostile client sends: deep nesting,
@@ -21,6 +28,8 @@ interface Case {
   form?: string;
   /** A multipart upload: form field name and file contents. */
   upload?: { field: string; contents: string };
+  /** Text fields sent with a multipart form (with or without a file). */
+  formFields?: Record<string, string>;
   /** The field the 400 must name. */
   field: string;
 }
@@ -394,15 +403,24 @@ const cases: Case[] = [
     what: 'a photo without a file',
     method: 'post',
     url: `/api/species/${record.slug}/photo`,
-    body: {},
+    formFields: PHOTO_CREDIT,
     field: 'photo',
   },
   {
     what: 'a photo for a malformed slug',
     method: 'post',
     url: '/api/species/..%2F..%2Fetc/photo',
+    formFields: PHOTO_CREDIT,
     upload: { field: 'photo', contents: 'x' },
     field: 'slug',
+  },
+  {
+    what: 'a photo with a source link that is not a web address',
+    method: 'post',
+    url: `/api/species/${record.slug}/photo`,
+    formFields: { ...PHOTO_CREDIT, sourceUrl: 'javascript:alert(1)' },
+    upload: { field: 'photo', contents: 'x' },
+    field: 'sourceUrl',
   },
   {
     what: 'a revert of a change id that is not a UUID',
@@ -558,12 +576,14 @@ describe('malformed input on every writing route (e2e)', () => {
       let req = t.http[c.method](c.url).set('Authorization', `Bearer ${admin}`);
       if (c.raw !== undefined) req = req.set('Content-Type', 'application/json').send(c.raw);
       else if (c.form !== undefined) req = req.set('Content-Type', 'application/x-www-form-urlencoded').send(c.form);
-      else if (c.upload)
-        req = req.attach(c.upload.field, Buffer.from(c.upload.contents), {
-          filename: 'upload.txt',
-          contentType: 'text/plain',
-        });
-      else if (c.body !== undefined) req = req.send(c.body as object);
+      else if (c.upload || c.formFields) {
+        for (const [k, v] of Object.entries(c.formFields ?? {})) req = req.field(k, v);
+        if (c.upload)
+          req = req.attach(c.upload.field, Buffer.from(c.upload.contents), {
+            filename: 'upload.txt',
+            contentType: 'text/plain',
+          });
+      } else if (c.body !== undefined) req = req.send(c.body as object);
       const res = await req;
       expect({ status: res.status, body: res.body }).toMatchObject({
         status: 400,

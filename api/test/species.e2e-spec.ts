@@ -86,6 +86,7 @@ describe('species catalogue API (e2e)', () => {
     expect(before.body.items[0].commonName).toBe('butterfly milkweed');
     const record = (await t.http.get('/api/species/asclepias-tuberosa').expect(200)).body;
     delete record.hasPhoto;
+    delete record.photoCredit;
     const edited = { ...record, commonNames: ['orange butterfly milkweed', ...record.commonNames] };
     await t.http
       .put('/api/species/asclepias-tuberosa')
@@ -152,9 +153,18 @@ describe('species catalogue API (e2e)', () => {
     const up = await t.http
       .post('/api/species/asclepias-tuberosa/photo')
       .set('Authorization', `Bearer ${curator}`)
+      .field('photographer', 'Ines Calder')
+      .field('licence', 'CC-BY-4.0')
+      .field('sourceUrl', 'https://example.org/photos/asclepias-tuberosa')
       .attach('photo', png, { filename: 'milkweed.png', contentType: 'image/png' })
       .expect(201);
-    expect(up.body).toMatchObject({ mime: 'image/png', width: 900, height: 600 });
+    expect(up.body).toMatchObject({ mime: 'image/png', width: 900, height: 600, photographer: 'Ines Calder' });
+    const detail = await t.http.get('/api/species/asclepias-tuberosa').expect(200);
+    expect(detail.body.photoCredit).toEqual({
+      photographer: 'Ines Calder',
+      licence: 'CC-BY-4.0',
+      sourceUrl: 'https://example.org/photos/asclepias-tuberosa',
+    });
     const small = await t.http
       .get('/api/species/asclepias-tuberosa/photo?w=400')
       .expect(200)
@@ -165,6 +175,9 @@ describe('species catalogue API (e2e)', () => {
     const fake = await t.http
       .post('/api/species/asclepias-tuberosa/photo')
       .set('Authorization', `Bearer ${curator}`)
+      .field('photographer', 'Ines Calder')
+      .field('licence', 'CC-BY-4.0')
+      .field('sourceUrl', 'https://example.org/photos/asclepias-tuberosa')
       .attach('photo', Buffer.from('this is not an image at all'), { filename: 'x.jpg', contentType: 'image/jpeg' })
       .expect(415);
     expect(fake.body.message).toMatch(/JPEG, PNG or WebP/);
@@ -173,10 +186,44 @@ describe('species catalogue API (e2e)', () => {
     const big = await t.http
       .post('/api/species/asclepias-tuberosa/photo')
       .set('Authorization', `Bearer ${curator}`)
+      .field('photographer', 'Ines Calder')
+      .field('licence', 'CC-BY-4.0')
+      .field('sourceUrl', 'https://example.org/photos/asclepias-tuberosa')
       .attach('photo', huge, { filename: 'huge.png', contentType: 'image/png' })
       .expect(413);
     expect(big.body).toMatchObject({ statusCode: 413 });
     const list = await t.http.get('/api/species?q=asclepias%20tuberosa&pageSize=1').expect(200);
     expect(list.body.items[0].hasPhoto).toBe(true);
+  });
+
+  it('refuses a photo without its credit (who took it, licence, source), naming each field, and stores nothing', async () => {
+    const png = await sharp({ create: { width: 300, height: 200, channels: 3, background: { r: 200, g: 90, b: 40 } } })
+      .png()
+      .toBuffer();
+    const res = await t.http
+      .post('/api/species/monarda-fistulosa/photo')
+      .set('Authorization', `Bearer ${curator}`)
+      .field('licence', 'all rights reserved')
+      .field('sourceUrl', 'javascript:alert(1)')
+      .attach('photo', png, { filename: 'bergamot.png', contentType: 'image/png' })
+      .expect(400);
+    expect(res.body.fields.map((f: { field: string }) => f.field).sort()).toEqual([
+      'licence',
+      'photographer',
+      'sourceUrl',
+    ]);
+    const [{ n }] = await t.app
+      .get(DataSource)
+      .query(`SELECT COUNT(*) AS n FROM species_photos WHERE slug = ?`, ['monarda-fistulosa']);
+    expect(Number(n)).toBe(0);
+    const extra = await t.http
+      .post('/api/species/monarda-fistulosa/photo')
+      .set('Authorization', `Bearer ${curator}`)
+      .field('photographer', 'Ines Calder')
+      .field('licence', 'CC0-1.0')
+      .field('sourceUrl', 'https://example.org/p/1')
+      .field('caption', 'one field too many')
+      .attach('photo', png, { filename: 'bergamot.png', contentType: 'image/png' });
+    expect(extra.status).toBe(400);
   });
 });

@@ -44,6 +44,7 @@ export * from './types/mix-api.js';
 export * from './types/mail.js';
 export * from './types/invitation.js';
 export * from './types/people.js';
+export * from './types/photo-credit.js';
 export * from './types/species-history.js';
 export * from './vocabulary/index.js';
 export * from './types/response-schemas.js';

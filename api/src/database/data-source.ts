@@ -16,6 +16,7 @@ import { CreateSeasons1765152000000 } from './migrations/1765152000000-create-se
 import { AddSignInActivity1765411200000 } from './migrations/1765411200000-add-sign-in-activity.js';
 import { AddAccountDisabled1765497600000 } from './migrations/1765497600000-add-account-disabled.js';
 import { CreateSpeciesChanges1765584000000 } from './migrations/1765584000000-create-species-changes.js';
+import { AddPhotoCredits1765670400000 } from './migrations/1765670400000-add-photo-credits.js';
 import { SpeciesChangeRow } from '../species/species-change.entity.js';
 import { SignInFailureRow } from '../auth/sign-in-failure.entity.js';
 import { InvitationRow } from '../invitations/invitation.entity.js';
@@ -52,6 +53,7 @@ export const MIGRATIONS = [
   AddSignInActivity1765411200000,
   AddAccountDisabled1765497600000,
   CreateSpeciesChanges1765584000000,
+  AddPhotoCredits1765670400000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

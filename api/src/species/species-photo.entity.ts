@@ -1,3 +1,4 @@
+import type { PhotoLicence } from '@homeground/shared';
 import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
 
 @Entity({ name: 'species_photos' })
@@ -20,6 +21,16 @@ export class SpeciesPhoto {
 
   @Column({ type: 'integer' })
   height: number;
+
+  /** Who took the photo; null only for uploads from before credits were asked for. */
+  @Column({ type: 'text', nullable: true })
+  photographer: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  licence: PhotoLicence | null;
+
+  @Column({ type: 'text', name: 'source_url', nullable: true })
+  sourceUrl: string | null;
 
   @Column({ type: 'text', name: 'uploaded_by', nullable: true })
   uploadedBy: string | null;

@@ -2,7 +2,7 @@ import { existsSync, mkdirSync } from 'node:fs';
 import { rename, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { Inject, Injectable, NotFoundException, UnsupportedMediaTypeException } from '@nestjs/common';
-import { PHOTO_WIDTHS } from '@homeground/shared';
+import { PHOTO_WIDTHS, type PhotoCredit } from '@homeground/shared';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp, { type Metadata } from 'sharp';
@@ -36,7 +36,7 @@ export class SpeciesPhotosService {
   }
 
   /** Stores a photo after checking its real type from its bytes (the name and the browser's word are not trusted). */
-  async save(slug: string, bytes: Buffer, userId: string): Promise<SpeciesPhoto> {
+  async save(slug: string, bytes: Buffer, credit: PhotoCredit, userId: string): Promise<SpeciesPhoto> {
     if (!this.store.get(slug)) throw new NotFoundException(`No species "${slug}" in the catalogue.`);
     const type = await fileTypeFromBuffer(bytes);
     const ext = type && ACCEPTED.get(type.mime);
@@ -66,6 +66,9 @@ export class SpeciesPhotosService {
           bytes: bytes.length,
           width: meta.width ?? 0,
           height: meta.height ?? 0,
+          photographer: credit.photographer,
+          licence: credit.licence,
+          sourceUrl: credit.sourceUrl,
           uploadedBy: userId,
         }),
       );

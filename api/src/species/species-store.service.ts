@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { Species, SpeciesPage, SpeciesQuery } from '@homeground/shared';
+import type { PhotoCredit, PhotoLicence, Species, SpeciesPage, SpeciesQuery } from '@homeground/shared';
 import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { DataSource } from 'typeorm';
 import { SpeciesSearchIndex, type NameEntry } from './search/species-search-index.js';
@@ -19,6 +19,7 @@ export class SpeciesStore {
   private species: Species[] = [];
   private bySlug = new Map<string, Species>();
   private photos = new Set<string>();
+  private credits = new Map<string, PhotoCredit>();
   private index = new SpeciesSearchIndex([]);
   private generation = 0;
   /** List answers keyed by the raw request URL, as bytes, for the fast path in species-list-cache.middleware. */
@@ -33,11 +34,24 @@ export class SpeciesStore {
   async reload(): Promise<void> {
     const [rows, photoRows] = await Promise.all([
       this.db.query(`SELECT record FROM species ORDER BY slug`),
-      this.db.query(`SELECT slug FROM species_photos`),
+      this.db.query(`SELECT slug, photographer, licence, source_url FROM species_photos`),
     ]);
+    type PhotoRow = {
+      slug: string;
+      photographer: string | null;
+      licence: PhotoLicence | null;
+      source_url: string | null;
+    };
     this.replace(
       rows.map((r: { record: string }) => JSON.parse(r.record) as Species),
-      photoRows.map((r: { slug: string }) => r.slug),
+      photoRows.map((r: PhotoRow) => r.slug),
+    );
+    this.credits = new Map(
+      (photoRows as PhotoRow[]).flatMap((r) =>
+        r.photographer && r.licence && r.source_url
+          ? [[r.slug, { photographer: r.photographer, licence: r.licence, sourceUrl: r.source_url }] as const]
+          : [],
+      ),
     );
   }
 
@@ -75,6 +89,11 @@ export class SpeciesStore {
 
   hasPhoto(slug: string): boolean {
     return this.photos.has(slug);
+  }
+
+  /** The photo's credit line facts; null without a photo or for an upload from before credits were asked for. */
+  photoCredit(slug: string): PhotoCredit | null {
+    return this.credits.get(slug) ?? null;
   }
 
   cachedForUrl(url: string): Buffer | undefined {

@@ -3,6 +3,8 @@ import { ApiTags } from '@nestjs/swagger';
 import {
   type CsvImportResult,
   csvImportResultSchema,
+  type PhotoCredit,
+  photoCreditSchema,
   type PhotoQuery,
   type RevertChangeRequest,
   revertChangeRequestSchema,
@@ -12,6 +14,7 @@ import {
   type Species,
   type SpeciesChange,
   speciesChangeResponseSchema,
+  type SpeciesDetail,
   speciesDetailSchema,
   speciesPageSchema,
   type SpeciesQuery,
@@ -30,6 +33,7 @@ import {
   type UploadedBlob,
   ZodBody,
   ZodFile,
+  ZodFormFields,
   ZodParam,
   ZodQuery,
   ZodResponse,
@@ -73,8 +77,12 @@ export class SpeciesController {
 
   @Get(':slug')
   @ZodResponse(speciesDetailSchema)
-  get(@ZodParam('slug', slugParamSchema) slug: string): Species & { hasPhoto: boolean } {
-    return { ...this.species.get(slug), hasPhoto: this.store.hasPhoto(slug) };
+  get(@ZodParam('slug', slugParamSchema) slug: string): SpeciesDetail {
+    return {
+      ...this.species.get(slug),
+      hasPhoto: this.store.hasPhoto(slug),
+      photoCredit: this.store.photoCredit(slug),
+    };
   }
 
   @Post()
@@ -134,11 +142,27 @@ export class SpeciesController {
   @Auth('curator')
   async uploadPhoto(
     @ZodParam('slug', slugParamSchema) slug: string,
-    @ZodFile('photo', MAX_PHOTO_BYTES, 'JPEG, PNG or WebP') file: UploadedBlob,
+    @ZodFile(
+      'photo',
+      MAX_PHOTO_BYTES,
+      'JPEG, PNG or WebP, with who took it, its licence and its source',
+      photoCreditSchema,
+    )
+    file: UploadedBlob,
+    @ZodFormFields(photoCreditSchema) credit: PhotoCredit,
     @CurrentUser() user: AuthenticatedUser,
   ) {
-    const p = await this.photos.save(slug, file.buffer, user.id);
-    return { slug: p.slug, mime: p.mime, bytes: p.bytes, width: p.width, height: p.height };
+    const p = await this.photos.save(slug, file.buffer, credit, user.id);
+    return {
+      slug: p.slug,
+      photographer: credit.photographer,
+      licence: credit.licence,
+      sourceUrl: credit.sourceUrl,
+      mime: p.mime,
+      bytes: p.bytes,
+      width: p.width,
+      height: p.height,
+    };
   }
 
   @Get(':slug/photo')

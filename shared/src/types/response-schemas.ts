@@ -19,6 +19,7 @@ import { ecoregionSchema } from './ecoregion.js';
 import type { Invitation, InvitationPreview } from './invitation.js';
 import type { OutboxMessage } from './mail.js';
 import type { PersonAccount } from './people.js';
+import { PHOTO_LICENCES } from './photo-credit.js';
 import { SPECIES_CHANGE_KINDS, type SpeciesChange } from './species-history.js';
 import { BLOOM_PERIODS, paletteRequestSchema, type PaletteResult, type ScoredSpecies } from './recommendation.js';
 import type { Season, ShareList } from './season.js';
@@ -149,7 +150,13 @@ export const speciesPageSchema = z.object({
   pageSize: z.number().int(),
 }) satisfies z.ZodType<SpeciesPage>;
 
-export const speciesDetailSchema = speciesSchema.extend({ hasPhoto: z.boolean() });
+export const speciesDetailSchema = speciesSchema.extend({
+  hasPhoto: z.boolean(),
+  /** Who took the photo, its licence and source; null when there is no photo or it predates credits. */
+  photoCredit: z
+    .object({ photographer: z.string(), licence: z.enum(PHOTO_LICENCES), sourceUrl: z.string() })
+    .nullable(),
+});
 
 export const csvImportResultSchema = z.object({
   created: z.number().int(),
@@ -158,6 +165,9 @@ export const csvImportResultSchema = z.object({
 
 export const photoUploadResultSchema = z.object({
   slug: z.string(),
+  photographer: z.string(),
+  licence: z.enum(PHOTO_LICENCES),
+  sourceUrl: z.string(),
   mime: z.string(),
   bytes: z.number().int(),
   width: z.number().int(),

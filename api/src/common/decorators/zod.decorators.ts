@@ -97,29 +97,50 @@ class RequiredFilePipe implements PipeTransform<UploadedBlob | undefined, Upload
 
 /**
  * One uploaded file in a multipart form field (at most `maxBytes`), required; documents the form
- * in OpenAPI. Other form fields and other files are refused by multer with a 400.
+ * in OpenAPI. With `fields`, the form may also carry those text fields (read them with
+ * `@ZodFormFields(fields)`); any other field, or another file, is refused by multer with a 400.
  */
-export function ZodFile(name: string, maxBytes: number, description?: string): ParameterDecorator {
+export function ZodFile(
+  name: string,
+  maxBytes: number,
+  description?: string,
+  fields?: z.ZodObject,
+): ParameterDecorator {
   return (target, key, index) => {
     UploadedFile(new RequiredFilePipe(name))(target, key!, index);
     markReads(target, key, 'body');
+    const extra = fields ? openApiProperties(fields) : [];
     onMethod(
       target,
       key,
-      UseInterceptors(FileInterceptor(name, { limits: { fileSize: maxBytes, files: 1, fields: 0 } })),
+      UseInterceptors(FileInterceptor(name, { limits: { fileSize: maxBytes, files: 1, fields: extra.length } })),
       ApiConsumes('multipart/form-data'),
       ApiBody({
         required: true,
         description,
         schema: {
           type: 'object',
-          required: [name],
+          required: [name, ...extra.filter((p) => p.required).map((p) => p.name)],
           additionalProperties: false,
-          properties: { [name]: { type: 'string', format: 'binary' } },
+          properties: {
+            [name]: { type: 'string', format: 'binary' },
+            ...Object.fromEntries(extra.map((p) => [p.name, p.schema])),
+          },
         },
       }),
       badRequestDoc,
     );
+  };
+}
+
+/**
+ * The text fields of a multipart form (documented by the route's `@ZodFile(…, fields)`), parsed with
+ * `schema`: a missing or bad field answers 400 naming it.
+ */
+export function ZodFormFields(schema: z.ZodType): ParameterDecorator {
+  return (target, key, index) => {
+    Body(new ZodValidationPipe(schema))(target, key!, index);
+    markReads(target, key, 'body');
   };
 }
 

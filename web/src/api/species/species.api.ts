@@ -1,8 +1,7 @@
-import type { Species, SpeciesPage, SpeciesQueryInput } from '@homeground/shared';
+import type { SpeciesDetail, SpeciesPage, SpeciesQueryInput } from '@homeground/shared';
 import { httpClient } from '../../lib/http-client.js';
 
-/** A species record as the detail endpoint returns it. */
-export type SpeciesDetail = Species & { hasPhoto: boolean };
+export type { SpeciesDetail };
 
 /** Query string for the list: only the filters that are set, in a stable order. */
 export function speciesSearchParams(query: SpeciesQueryInput): string {

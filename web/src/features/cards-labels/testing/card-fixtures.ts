@@ -18,6 +18,7 @@ type Shared =
   | 'sources'
   | 'reconciliations'
   | 'hasPhoto'
+  | 'photoCredit'
   | 'ecoregions'
   | 'sunOptimum'
   | 'moistureOptimum'
@@ -50,6 +51,7 @@ const COMMON: Pick<SpeciesDetail, Shared> = {
   sources: {} as SpeciesDetail['sources'],
   reconciliations: [],
   hasPhoto: false,
+  photoCredit: null,
 };
 
 export const butterflyMilkweed: SpeciesDetail = {

@@ -1,4 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
+import { photoCreditLine } from '@homeground/shared';
 import { useState } from 'react';
 import { speciesPhotoUrl, type SpeciesDetail } from '../../../api/species/species.api.js';
 import { hgTokens } from '../../../theme/index.js';
@@ -47,9 +48,24 @@ export function SpeciesPhoto({ species }: { species: SpeciesDetail }) {
         )}
       </div>
       <figcaption className={styles.caption}>
-        {showPhoto
-          ? `${name}, photo from the catalogue.`
-          : `No photo yet: a drawing in its flower colour${species.flowerColours.length > 1 ? 's' : ''}.`}
+        {showPhoto && species.photoCredit ? (
+          <>
+            {name}. {photoCreditLine(species.photoCredit)} (
+            <a
+              href={species.photoCredit.sourceUrl}
+              rel="noopener noreferrer"
+              target="_blank"
+              aria-label="source of the photo (opens in a new tab)"
+            >
+              source
+            </a>
+            ).
+          </>
+        ) : showPhoto ? (
+          `${name}, photo from the catalogue.`
+        ) : (
+          `No photo yet: a drawing in its flower colour${species.flowerColours.length > 1 ? 's' : ''}.`
+        )}
       </figcaption>
     </figure>
   );

@@ -198,4 +198,5 @@ export const butterflyMilkweedRecord: SpeciesDetail = {
   },
   reconciliations: [],
   hasPhoto: false,
+  photoCredit: null,
 };
