@@ -1,8 +1,14 @@
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
+import { ShareMailQueue } from '../src/plant-share/share-mail-queue.js';
 import { bearer, demoTokens, PUBLIC, PUBLIC_URL, SHARE } from './support/plant-share.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
+
+interface Answer {
+  status: number;
+  body: { message: string; fields: { field: string; message: string }[]; waitlist: { speciesSlugs: string[] } };
+}
 
 /**
  * Many households reserving at once over real sockets: every reservation is one transaction of
@@ -19,7 +25,11 @@ describe('plant share under concurrent reservations (e2e, demo data)', () => {
     await t.app.listen(0, '127.0.0.1');
     base = `http://127.0.0.1:${(t.app.getHttpServer().address() as AddressInfo).port}`;
   });
-  afterAll(() => t.close());
+  afterAll(async () => {
+    // Confirmation e-mails go out after the answers: let the last ones reach the local server first.
+    await t.app.get(ShareMailQueue).idle();
+    await t.close();
+  });
 
   /** Adds a slot on share day and answers its id. */
   async function addSlot(start: string, end: string, capacity: number): Promise<string> {
@@ -28,7 +38,7 @@ describe('plant share under concurrent reservations (e2e, demo data)', () => {
   }
 
   /** `n` households at once, each asking for one plant of `slug` in `slotId`. */
-  function race(n: number, tag: string, slug: string, slotId: string): Promise<{ status: number; body: any }[]> {
+  function race(n: number, tag: string, slug: string, slotId: string): Promise<Answer[]> {
     return Promise.all(
       Array.from({ length: n }, async (_v, i) => {
         const res = await fetch(`${base}${PUBLIC}/reservations`, {
@@ -42,7 +52,7 @@ describe('plant share under concurrent reservations (e2e, demo data)', () => {
             lines: [{ speciesSlug: slug, count: 1 }],
           }),
         });
-        return { status: res.status, body: await res.json() };
+        return { status: res.status, body: (await res.json()) as Answer['body'] };
       }),
     );
   }
@@ -85,6 +95,7 @@ describe('plant share under concurrent reservations (e2e, demo data)', () => {
     expect(await count('SELECT booked AS n FROM share_slots WHERE id = ?', slotId)).toBe(50);
     expect(await count('SELECT COUNT(*) AS n FROM share_stock WHERE remaining < 0')).toBe(0);
     // Each confirmed household got its e-mail.
+    await t.app.get(ShareMailQueue).idle();
     expect(
       await count(
         `SELECT COUNT(*) AS n FROM outbox_messages WHERE kind = 'plant-share-reservation' AND "to" LIKE '%stock-%'`,
