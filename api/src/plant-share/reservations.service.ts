@@ -21,7 +21,6 @@ import {
   wildlifeSummary,
 } from '@homeground/shared';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
-import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { Clock } from './clock.js';
 import { ShareDb } from './share-db.js';
@@ -45,7 +44,6 @@ export class ReservationsService {
     private readonly db: ShareDb,
     private readonly ledger: ShareLedger,
     private readonly views: ShareViews,
-    private readonly groups: GroupsService,
     private readonly ctx: MixContextService,
     private readonly mail: ShareMailQueue,
     private readonly clock: Clock,
@@ -53,7 +51,7 @@ export class ReservationsService {
 
   /** The group's share as anyone sees it; with a yard, ranked by how well each plant fits it. */
   async publicShare(slug: string, yard: ShareFitQuery): Promise<PublicPlantShare> {
-    const group = await this.groups.getDto(slug);
+    const group = await this.views.group(slug);
     const share = this.views.requireShare(group);
     const nowMs = this.clock.now().getTime();
     const stock = this.views.stock(share.id).filter((s) => s.offered > 0);
@@ -118,7 +116,7 @@ export class ReservationsService {
    * 409 and writes nothing.
    */
   async reserve(slug: string, req: ParsedReservationRequest): Promise<ReservationCreated> {
-    const group = await this.groups.getDto(slug);
+    const group = await this.views.group(slug);
     const share = this.views.requireShare(group);
     assertOpen(share);
     const now = this.clock.now();
@@ -253,7 +251,7 @@ export class ReservationsService {
     slug: string,
     req: { name: string; email: string; zip: string; lines: PlantLine[] },
   ): Promise<WaitlistJoined> {
-    const group = await this.groups.getDto(slug);
+    const group = await this.views.group(slug);
     const share = this.views.requireShare(group);
     if (share.status === 'closed') throw new ConflictException('This plant share is closed.');
     this.checkLines(share, req.lines);
@@ -306,7 +304,7 @@ export class ReservationsService {
     if (entry.status !== 'offered') throw new GoneException('These plants have been claimed already.');
     if (!entry.email || !entry.name) throw new GoneException('This offer was kept no longer than the share allows.');
     const share = this.views.shareById(entry.share_id);
-    const group = await this.groups.getDtoById(share.group_id);
+    const group = await this.views.groupById(share.group_id);
     assertOpen(share);
     const now = this.clock.now();
     const existing = this.db.get<ReservationRow>(
@@ -393,7 +391,7 @@ export class ReservationsService {
     if (!row) throw new ForbiddenException('This link is not one we sent: use the link in your confirmation e-mail.');
     const share = this.views.shareById(row.share_id);
     if (row.name === null) throw new GoneException('This reservation was kept no longer than the share allows.');
-    const group = await this.groups.getDtoById(share.group_id);
+    const group = await this.views.groupById(share.group_id);
     return { group, share, row };
   }
 
