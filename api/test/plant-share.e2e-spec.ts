@@ -350,6 +350,15 @@ describe('the plant share (e2e, demo data)', () => {
       remaining: 0,
       waitlisted: 1,
     });
+    const offerView = await t.http.get(`/api/waitlist-offers/${linkSecret(offer!.text, 'offers')}`).expect(200);
+    expect(offerView.body).toMatchObject({
+      speciesSlug: 'packera-aurea',
+      count: 1,
+      status: 'offered',
+      joinsReservation: false,
+    });
+    expect(offerView.body.slots).toHaveLength(slots.length + 1);
+    await t.http.get(`/api/waitlist-offers/${'B'.repeat(43)}`).expect(403);
     const claimed = await t.http
       .post(`/api/waitlist-offers/${linkSecret(offer!.text, 'offers')}/claim`)
       .send({ slotId: slots[5].id })

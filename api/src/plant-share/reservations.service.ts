@@ -16,6 +16,7 @@ import {
   type StateCode,
   type TakerReservation,
   type WaitlistJoined,
+  type WaitlistOfferView,
   bloomWords,
   CAUTION_WORDS,
   wildlifeSummary,
@@ -291,18 +292,58 @@ export class ReservationsService {
     return { entries };
   }
 
+  /** What a waitlist offer's link shows: the plants held for the household and the slots left. */
+  async offer(token: string): Promise<WaitlistOfferView> {
+    const entry = this.offerEntry(token);
+    const share = this.views.shareById(entry.share_id);
+    const group = await this.views.groupById(share.group_id);
+    const nowMs = this.clock.now().getTime();
+    const joins = Boolean(
+      entry.email &&
+      this.db.get(
+        `SELECT id FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
+        share.id,
+        entry.email,
+      ),
+    );
+    return {
+      speciesSlug: entry.slug,
+      ...this.views.names(entry.slug),
+      count: entry.held,
+      status: entry.status === 'claimed' ? 'claimed' : 'offered',
+      joinsReservation: joins,
+      share: {
+        groupSlug: group.slug,
+        groupName: group.name,
+        date: share.share_date,
+        place: this.views.place(share),
+        status: share.status,
+      },
+      slots: this.views.slots(share.id).map((s) => ({
+        id: s.id,
+        start: s.starts_at,
+        end: s.ends_at,
+        left: s.capacity - s.booked,
+        past: s.starts_at_ms <= nowMs,
+      })),
+    };
+  }
+
+  /** The waitlist entry a private offer link opens; an unknown link is refused as forged. */
+  private offerEntry(token: string): WaitlistRow {
+    const entry = this.db.get<WaitlistRow>('SELECT * FROM share_waitlist WHERE token_hash = ?', hashToken(token));
+    if (!entry) throw new ForbiddenException('This link is not one we sent.');
+    if (!entry.email || !entry.name) throw new GoneException('This offer was kept no longer than the share allows.');
+    return entry;
+  }
+
   /**
    * Takes the plants a waitlist offer holds: added to the household's reservation if it has one, else
    * a new reservation in the slot chosen (booked the same conditional way).
    */
   async claimOffer(token: string, req: ClaimOfferRequest): Promise<ReservationCreated> {
-    const entry = this.db.get<WaitlistRow & { token_hash: string }>(
-      'SELECT * FROM share_waitlist WHERE token_hash = ?',
-      hashToken(token),
-    );
-    if (!entry) throw new ForbiddenException('This link is not one we sent.');
+    const entry = this.offerEntry(token);
     if (entry.status !== 'offered') throw new GoneException('These plants have been claimed already.');
-    if (!entry.email || !entry.name) throw new GoneException('This offer was kept no longer than the share allows.');
     const share = this.views.shareById(entry.share_id);
     const group = await this.views.groupById(share.group_id);
     assertOpen(share);
