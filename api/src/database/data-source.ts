@@ -13,6 +13,7 @@ import { CreateOutbox1764979200000 } from './migrations/1764979200000-create-out
 import { AllowGroupMembers1765022400000 } from './migrations/1765022400000-allow-group-members.js';
 import { CreateGroupInvitations1765065600000 } from './migrations/1765065600000-create-group-invitations.js';
 import { CreateSeasons1765152000000 } from './migrations/1765152000000-create-seasons.js';
+import { CreatePlantShares1765238400000 } from './migrations/1765238400000-create-plant-shares.js';
 import { AddSignInActivity1765411200000 } from './migrations/1765411200000-add-sign-in-activity.js';
 import { AddAccountDisabled1765497600000 } from './migrations/1765497600000-add-account-disabled.js';
 import { CreateSpeciesChanges1765584000000 } from './migrations/1765584000000-create-species-changes.js';
@@ -50,6 +51,7 @@ export const MIGRATIONS = [
   AllowGroupMembers1765022400000,
   CreateGroupInvitations1765065600000,
   CreateSeasons1765152000000,
+  CreatePlantShares1765238400000,
   AddSignInActivity1765411200000,
   AddAccountDisabled1765497600000,
   CreateSpeciesChanges1765584000000,
