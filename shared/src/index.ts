@@ -51,3 +51,6 @@ export * from './scoring/layers.js';
 export * from './scoring/wildlife-value.js';
 export * from './scoring/coverage.js';
 export * from './scoring/species-traits.js';
+export * from './types/batch.js';
+export * from './batch-planning/index.js';
+export * from './types/batch-answers.js';
