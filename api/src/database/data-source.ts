@@ -13,6 +13,10 @@ import { CreateOutbox1764979200000 } from './migrations/1764979200000-create-out
 import { AllowGroupMembers1765022400000 } from './migrations/1765022400000-allow-group-members.js';
 import { CreateGroupInvitations1765065600000 } from './migrations/1765065600000-create-group-invitations.js';
 import { CreateSeasons1765152000000 } from './migrations/1765152000000-create-seasons.js';
+import { CreateBatches1765324800000 } from './migrations/1765324800000-create-batches.js';
+import { BatchLogEntryRow } from '../batches/batch-log-entry.entity.js';
+import { BatchRow } from '../batches/batch.entity.js';
+import { SeasonGrowerRow } from '../batches/season-grower.entity.js';
 import { InvitationRow } from '../invitations/invitation.entity.js';
 import { OutboxMessageRow } from '../mail/outbox-message.entity.js';
 import { SavedMixRow } from '../saved-mixes/saved-mix.entity.js';
@@ -32,6 +36,9 @@ export const ENTITIES = [
   InvitationRow,
   SeasonRow,
   SeasonTargetRow,
+  SeasonGrowerRow,
+  BatchRow,
+  BatchLogEntryRow,
 ];
 export const MIGRATIONS = [
   CreateUsersAndGroups1764633600000,
@@ -42,6 +49,7 @@ export const MIGRATIONS = [
   AllowGroupMembers1765022400000,
   CreateGroupInvitations1765065600000,
   CreateSeasons1765152000000,
+  CreateBatches1765324800000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

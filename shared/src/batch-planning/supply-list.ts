@@ -28,7 +28,7 @@ export interface SupplyLine {
 
 export interface SupplyList {
   lines: SupplyLine[];
-  cautions: readonly string[];
+  cautions: string[];
 }
 
 /** A batch as its supplies see it. */
@@ -116,5 +116,5 @@ export function supplyList(batches: readonly SupplyBatch[]): SupplyList {
     ),
     piece('bags', 'Sealable bags', fridgeBatches, 'One per batch stratified in the refrigerator.'),
   ];
-  return { lines: lines.filter((l) => (l.count ?? l.litres ?? 0) > 0), cautions: BATCH_CAUTIONS };
+  return { lines: lines.filter((l) => (l.count ?? l.litres ?? 0) > 0), cautions: [...BATCH_CAUTIONS] };
 }

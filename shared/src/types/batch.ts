@@ -78,6 +78,17 @@ export const batchSplitRequestSchema = z
   });
 export type BatchSplitRequest = z.infer<typeof batchSplitRequestSchema>;
 
+/** Asks for a proposed split; `growerIds` narrows it to some growers (all who stated methods by default). */
+export const splitProposalRequestSchema = z
+  .object({
+    growerIds: z
+      .array(z.uuidv4({ message: 'must be a UUID' }))
+      .max(200)
+      .optional(),
+  })
+  .strict();
+export type SplitProposalRequest = z.infer<typeof splitProposalRequestSchema>;
+
 /** What a batch log entry records. */
 export const LOG_KINDS = ['sown', 'germinated', 'potted-up', 'lost', 'ready'] as const;
 export type LogKind = (typeof LOG_KINDS)[number];
