@@ -131,3 +131,29 @@ export const logEntryRequestSchema = z
     path: ['reason'],
   });
 export type LogEntryRequest = z.infer<typeof logEntryRequestSchema>;
+
+/**
+ * The batch-log form as a phone sends it: every field is text. Empty reason and note are left out,
+ * then the entry is checked by `logEntryRequestSchema`, so the form says what the API would.
+ */
+export const logEntryFormSchema = z
+  .object({
+    kind: z.string().max(20),
+    count: z
+      .string()
+      .trim()
+      .regex(/^-?\d+$/, 'must be a whole number')
+      .max(12),
+    date: z.string().max(10),
+    reason: z.string().max(40),
+    note: z.string().max(500, 'must be at most 500 characters'),
+  })
+  .strict()
+  .transform((f) => ({
+    kind: f.kind,
+    count: Number(f.count),
+    date: f.date,
+    ...(f.reason !== '' && { reason: f.reason }),
+    ...(f.note.trim() !== '' && { note: f.note.trim() }),
+  }))
+  .pipe(logEntryRequestSchema);
