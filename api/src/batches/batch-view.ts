@@ -3,6 +3,7 @@ import {
   batchForecast,
   batchSchedule,
   CAUTION_WORDS,
+  frostWarning,
   logTotals,
   seedsToSow,
   UNIT_OF,
@@ -71,6 +72,12 @@ export function toBatch(row: BatchRow, log: readonly BatchLogEntryRow[], c: Batc
     nextStep: schedule.steps.find((s) => s.date >= c.today) ?? null,
     behind: behindWords(row, c, totals.sown, totals.germinated, schedule),
     warnings: schedule.warnings,
+    frostWarning: frostWarning({
+      method: row.method,
+      lastFrost: c.season.lastFrost,
+      today: c.today,
+      seedlingsUp: totals.alive > 0,
+    }),
     cautions: (c.species?.cautions ?? []).map((x) => ({ title: CAUTION_WORDS[x.kind].title, text: x.text })),
     log: entries.map((e) => ({
       id: e.id,

@@ -5,3 +5,4 @@ export * from './batch-schedule.js';
 export * from './batch-log.js';
 export * from './ready-forecast.js';
 export * from './supply-list.js';
+export * from './frost-watch.js';

@@ -85,6 +85,8 @@ export const batchSchema = z.object({
   /** Plain words when the batch is behind its usual dates (e.g. not sown yet), else null. */
   behind: z.string().nullable(),
   warnings: z.array(z.string()),
+  /** What to do on frosty nights while the frost watch applies to this batch's seedlings, else null. */
+  frostWarning: z.string().nullable(),
   /** The species' cautions, in words. */
   cautions: z.array(z.object({ title: z.string(), text: z.string() })),
   log: z.array(batchLogEntrySchema),

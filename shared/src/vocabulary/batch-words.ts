@@ -141,3 +141,11 @@ export const BATCH_CAUTIONS: readonly string[] = [
   'Milkweed sap irritates eyes: keep it off your face and wash your hands after handling the plants.',
   'Keep seed stratifying in the refrigerator sealed and labelled, away from food and out of reach of children.',
 ];
+
+/** What to do on a frosty night, per method (common practice, from memory; CHECK-VALUES §4 for venting). */
+export const FROST_NIGHT_WORDS = {
+  'winter-sowing': 'close the container tops before evening',
+  'outdoor-pot-winter': 'cover the pots with frost cloth or an old sheet, or move them against the house',
+  'indoor-lights': 'bring seedlings that are hardening off indoors for the night',
+  'soil-blocks': 'bring blocks that are hardening off indoors for the night',
+} as const satisfies Record<GrowerMethod, string>;

@@ -35,6 +35,11 @@ export function BatchCard({ slug, batch, today }: { slug: string; batch: Batch; 
           <MessageBarBody>{batch.behind}</MessageBarBody>
         </MessageBar>
       ) : null}
+      {batch.frostWarning ? (
+        <MessageBar intent="warning">
+          <MessageBarBody>{batch.frostWarning}</MessageBarBody>
+        </MessageBar>
+      ) : null}
       {batch.readyAfterShare ? (
         <MessageBar intent="info">
           <MessageBarBody>{MY_BATCHES_WORDS.readyAfterShare}</MessageBarBody>

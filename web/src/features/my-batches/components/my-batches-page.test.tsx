@@ -35,6 +35,7 @@ describe('My batches', () => {
     expect(m.getByText(/\(outdoors, by winter\)/)).toBeInTheDocument();
     expect(m.getByRole('button', { name: 'Outdoor pots over winter' })).toBeInTheDocument(); // how-to
     expect(m.getByText(/Milky sap irritates eyes/)).toBeInTheDocument();
+    expect(m.getByText(/Frost watch until 2027-05-24: .* cover the pots with frost cloth/)).toBeInTheDocument();
     expect(m.getByText('Sown 150 · came up 0 · potted up 0 · lost 0 · ready 0')).toBeInTheDocument();
     expect(m.getByText('Three seeds a pot.')).toBeInTheDocument();
 

@@ -41,6 +41,7 @@ export const bergamot: Batch = {
   nextStep: { kind: 'sprouts-expected', date: '2027-04-10', title: 'Sprouts expected', detail: 'Keep them damp.' },
   behind: 'Not sown yet: the usual start (sow) was 2026-11-20. Start as soon as you can.',
   warnings: [],
+  frostWarning: null,
   cautions: [],
   log: [],
   totals: { sown: 0, germinated: 0, pottedUp: 0, lost: 0, ready: 0, alive: 0 },
@@ -63,6 +64,8 @@ export const milkweed: Batch = {
     },
   ],
   behind: null,
+  frostWarning:
+    'Frost watch until 2027-05-24: a late frost is still possible. On clear, still nights when frost is forecast, cover the pots with frost cloth or an old sheet, or move them against the house. Check your local forecast.',
   cautions: [{ title: 'Milky sap', text: 'Milky sap irritates eyes: wash hands after handling.' }],
   log: [
     {

@@ -22,6 +22,7 @@ export const bergamotBatch: Batch = {
   nextStep: null,
   behind: null,
   warnings: [],
+  frostWarning: null,
   cautions: [],
   log: [
     {
