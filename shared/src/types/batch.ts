@@ -157,3 +157,31 @@ export const logEntryFormSchema = z
     ...(f.note.trim() !== '' && { note: f.note.trim() }),
   }))
   .pipe(logEntryRequestSchema);
+
+const capacityText = z
+  .string()
+  .trim()
+  .max(6, `must be at most ${MAX_GROWER_CAPACITY}`)
+  .regex(/^([1-9]\d*)?$/, 'must be a whole number from 1, or empty if you do not use this method')
+  .refine((v) => v === '' || Number(v) <= MAX_GROWER_CAPACITY, `must be at most ${MAX_GROWER_CAPACITY}`);
+
+/**
+ * A grower's methods as a form sends them: one text box per method, empty when the grower does not
+ * use it. Becomes a `growerSetupRequestSchema` body.
+ */
+export const growerSetupFormSchema = z
+  .object({
+    'outdoor-pot-winter': capacityText,
+    'winter-sowing': capacityText,
+    'indoor-lights': capacityText,
+    'soil-blocks': capacityText,
+  })
+  .strict()
+  .refine((f) => GROWER_METHODS.some((m) => f[m] !== ''), {
+    message: 'fill in at least one method',
+    path: [GROWER_METHODS[0]],
+  })
+  .transform((f) => ({
+    methods: GROWER_METHODS.filter((m) => f[m] !== '').map((method) => ({ method, capacity: Number(f[method]) })),
+  }))
+  .pipe(growerSetupRequestSchema);

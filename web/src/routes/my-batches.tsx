@@ -26,5 +26,5 @@ export function MyBatchesRoute() {
   }
   const membership = user.groups.find((g) => g.role === 'grower') ?? user.groups.find((g) => g.role === 'organiser');
   if (!membership) return <PageIntro title={MY_BATCHES_WORDS.title}>{MY_BATCHES_WORDS.notGrower}</PageIntro>;
-  return <MyBatchesPage key={membership.groupSlug} slug={membership.groupSlug} />;
+  return <MyBatchesPage key={membership.groupSlug} slug={membership.groupSlug} userId={user.id} />;
 }

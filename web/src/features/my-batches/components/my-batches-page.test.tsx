@@ -3,7 +3,14 @@ import { describe, expect, it } from 'vitest';
 import { apiError, type FakeRoutes } from '../../../testing/fake-api.js';
 import { juniperGrower, priyaMember } from '../../../testing/fixtures.js';
 import { renderApp } from '../../../testing/render-app.js';
-import { BATCHES_PATH, bergamot, milkweed, seasonBatches } from '../testing/batch-fixtures.js';
+import {
+  amaraGrower,
+  BATCHES_PATH,
+  bergamot,
+  GROWERS_PATH,
+  milkweed,
+  seasonBatches,
+} from '../testing/batch-fixtures.js';
 
 // What a grower may do follows the batches API (api/src/batches): a grower reads and logs their own
 // batches. The log checks are the shared logEntryRequestSchema's; the dates are the fixtures'.
@@ -13,7 +20,12 @@ function openMyBatches(me = amara, over: FakeRoutes = {}) {
   return renderApp({
     path: '/my-batches',
     token: 'token',
-    api: { 'GET /api/me': { body: me }, [`GET ${BATCHES_PATH}`]: { body: seasonBatches }, ...over },
+    api: {
+      'GET /api/me': { body: me },
+      [`GET ${BATCHES_PATH}`]: { body: seasonBatches },
+      [`GET ${GROWERS_PATH}`]: { body: [amaraGrower] },
+      ...over,
+    },
   });
 }
 
@@ -93,6 +105,40 @@ describe('My batches', () => {
     await user.click(form.getByRole('button', { name: 'Add to the log' }));
     expect(await form.findByText('Would make more seedlings (5) than seeds sown (0)')).toBeInTheDocument();
     expect(form.queryByText('Saved to the log.')).not.toBeInTheDocument();
+  });
+
+  it('lets the grower say how they grow, one box per method, and refuses an empty form', async () => {
+    const { user, api } = openMyBatches(amara, {
+      [`PUT ${GROWERS_PATH}/u-amara`]: { body: amaraGrower },
+    });
+    const form = within(await screen.findByRole('form', { name: 'How I grow' }));
+    const pots = form.getByRole('textbox', { name: 'outdoor pots over winter: pots' });
+    expect(pots).toHaveValue('120');
+    await user.clear(pots);
+    await user.click(form.getByRole('button', { name: 'Save how I grow' }));
+    expect(await form.findByText('Fill in at least one method')).toBeInTheDocument();
+    await user.type(
+      form.getByRole('textbox', { name: 'winter sowing in covered containers: covered containers' }),
+      '0',
+    );
+    await user.click(form.getByRole('button', { name: 'Save how I grow' }));
+    expect(await form.findByText(/Must be a whole number from 1/)).toBeInTheDocument();
+    expect(api.callsTo('PUT', `${GROWERS_PATH}/u-amara`)).toHaveLength(0);
+
+    await user.clear(form.getByRole('textbox', { name: 'winter sowing in covered containers: covered containers' }));
+    await user.type(
+      form.getByRole('textbox', { name: 'winter sowing in covered containers: covered containers' }),
+      '12',
+    );
+    await user.type(pots, '100');
+    await user.click(form.getByRole('button', { name: 'Save how I grow' }));
+    expect(await form.findByText(/^Saved\./)).toBeInTheDocument();
+    expect(api.callsTo('PUT', `${GROWERS_PATH}/u-amara`)[0].body).toEqual({
+      methods: [
+        { method: 'outdoor-pot-winter', capacity: 100 },
+        { method: 'winter-sowing', capacity: 12 },
+      ],
+    });
   });
 
   it('tells someone who is not a grower what the page is for, without asking for batches', async () => {

@@ -8,10 +8,12 @@ import { QueryState } from '../../../components/states/index.js';
 import { SupplyTable } from '../../../components/supplies/supply-table.js';
 import { localToday, MY_BATCHES_WORDS } from '../utils/my-batches-words.js';
 import { BatchCard } from './batch-card.js';
+import { GrowerSetupCard } from './grower-setup-card.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
 /** A grower's batches in one group's season, with their own supply list. */
-export function MyBatchesPage({ slug }: { slug: string }) {
+export function MyBatchesPage({ slug, userId }: { slug: string; userId: string }) {
+  const styles = useMyBatchesStyles();
   const batches = useQuery(batchesQueryOptions(slug));
   return (
     <>
@@ -25,6 +27,9 @@ export function MyBatchesPage({ slug }: { slug: string }) {
       >
         {(d) => <BatchList slug={slug} answer={d} />}
       </QueryState>
+      <div className={styles.after}>
+        <GrowerSetupCard slug={slug} userId={userId} />
+      </div>
     </>
   );
 }

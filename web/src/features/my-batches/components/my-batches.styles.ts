@@ -17,6 +17,7 @@ export const useMyBatchesStyles = makeStyles({
   next: { borderLeft: `4px solid ${tokens.colorBrandStroke1}`, paddingLeft: tokens.spacingHorizontalS },
   detail: { margin: 0, color: tokens.colorNeutralForeground2 },
   section: { marginTop: tokens.spacingVerticalL },
+  after: { marginTop: tokens.spacingVerticalXL },
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalXS },
   kinds: {
     display: 'grid',

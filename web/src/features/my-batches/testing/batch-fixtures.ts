@@ -1,4 +1,4 @@
-import type { Batch, SeasonBatches } from '@homeground/shared';
+import type { Batch, SeasonBatches, SeasonGrower } from '@homeground/shared';
 
 // The invented demo group (shared/DESIGN.md beside the project, "Demo scenario"): Amara Reyes grows
 // outdoor pots over winter for the Larkfield Commons Growers. Dates follow the sowing calendar for a
@@ -6,6 +6,15 @@ import type { Batch, SeasonBatches } from '@homeground/shared';
 
 export const SLUG = 'larkfield-commons-growers';
 export const BATCHES_PATH = `/api/groups/${SLUG}/season/batches`;
+export const GROWERS_PATH = `/api/groups/${SLUG}/season/growers`;
+
+export const amaraGrower: SeasonGrower = {
+  userId: 'u-amara',
+  displayName: 'Amara Reyes',
+  role: 'grower',
+  methods: [{ method: 'outdoor-pot-winter', capacity: 120 }],
+  used: [{ method: 'outdoor-pot-winter', units: 70 }],
+};
 
 export const bergamot: Batch = {
   id: '7b0f5d62-2f7c-4c1e-9a57-6d3f1c2b8e01',

@@ -22,6 +22,11 @@ export const MY_BATCHES_WORDS = {
   supplies: 'What you need',
   cautions: 'Take care',
   readyAfterShare: 'This species will be ready only after the plant share.',
+  howIGrow: 'How I grow',
+  howIGrowLead:
+    'Fill in the methods you use and how many pots, covered containers or soil blocks you can tend; leave the others empty. The organiser splits the batches by this.',
+  saveHowIGrow: 'Save how I grow',
+  savedHowIGrow: 'Saved. The organiser sees it when splitting the batches.',
 } as const;
 
 /** "50 plants in 5 covered containers" */
