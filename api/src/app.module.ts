@@ -21,6 +21,7 @@ import { MailModule } from './mail/mail.module.js';
 import { InvitationsModule } from './invitations/invitations.module.js';
 import { SeasonsModule } from './seasons/seasons.module.js';
 import { PlantShareModule } from './plant-share/plant-share.module.js';
+import { BatchesModule } from './batches/batches.module.js';
 
 /** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
 function webApp(): DynamicModule[] {
@@ -53,6 +54,7 @@ function webApp(): DynamicModule[] {
     PlanningModule,
     SeasonsModule,
     PlantShareModule,
+    BatchesModule,
     DemoModule,
   ],
 })

@@ -599,6 +599,63 @@ const cases: Case[] = [
     field: 'slotId',
   },
   // queries
+  // growers, batches and batch logs
+  {
+    what: 'a grower capacity of text',
+    method: 'put',
+    url: `/api/groups/larkfield-commons-growers/season/growers/${UUID}`,
+    body: { methods: [{ method: 'winter-sowing', capacity: 'lots' }] },
+    field: 'methods.0.capacity',
+  },
+  {
+    what: 'a grower id that is not a UUID',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/season/growers/42',
+    body: { methods: [{ method: 'winter-sowing', capacity: 5 }] },
+    field: 'userId',
+  },
+  {
+    what: 'a split proposal with an unknown field',
+    method: 'post',
+    url: '/api/groups/larkfield-commons-growers/season/batches/propose',
+    body: { growers: 'all' },
+    field: 'growers',
+  },
+  {
+    what: 'a split of 501 batches',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/season/batches',
+    body: {
+      batches: Array.from({ length: 501 }, () => ({
+        growerId: UUID,
+        slug: 'zizia-aurea',
+        method: 'winter-sowing',
+        plants: 1,
+      })),
+    },
+    field: 'batches',
+  },
+  {
+    what: 'a split batch with a __proto__ key',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/season/batches',
+    raw: `{"batches":[{"growerId":"${UUID}","slug":"zizia-aurea","method":"winter-sowing","plants":1,"__proto__":{"x":1}}]}`,
+    field: 'batches.0.__proto__',
+  },
+  {
+    what: 'a batch log count below zero',
+    method: 'post',
+    url: `/api/groups/larkfield-commons-growers/season/batches/${UUID}/log`,
+    body: { kind: 'sown', count: -1, date: '2026-11-01' },
+    field: 'count',
+  },
+  {
+    what: 'a batch log note of 100,000 characters',
+    method: 'post',
+    url: `/api/groups/larkfield-commons-growers/season/batches/${UUID}/log`,
+    body: { kind: 'sown', count: 1, date: '2026-11-01', note: huge },
+    field: 'note',
+  },
   { what: 'a page size of a billion', method: 'get', url: '/api/species?pageSize=1000000000', field: 'pageSize' },
   { what: 'a 5,000-character search', method: 'get', url: `/api/species?q=${huge.slice(0, 5000)}`, field: 'q' },
   { what: 'an unknown species filter', method: 'get', url: '/api/species?colour=blue', field: 'colour' },
@@ -638,7 +695,10 @@ describe('malformed input on every writing route (e2e)', () => {
       (SELECT COUNT(*) FROM share_stock) AS shareStock,
       (SELECT COUNT(*) FROM share_reservations) AS reservations,
       (SELECT COUNT(*) FROM share_waitlist) AS waitlist,
-      (SELECT COUNT(*) FROM share_walk_ups) AS walkUps`);
+      (SELECT COUNT(*) FROM share_walk_ups) AS walkUps,
+      (SELECT COUNT(*) FROM season_growers) AS growers,
+      (SELECT COUNT(*) FROM batches) AS batches,
+      (SELECT COUNT(*) FROM batch_log_entries) AS batchLog`);
   }
 
   beforeAll(async () => {
@@ -665,7 +725,9 @@ describe('malformed input on every writing route (e2e)', () => {
               .replace(/\/reservations\/[^/]+/, '/reservations/:id')
               .replace(/\/plant-shares\/[^/]+/, '/plant-shares/:slug')
               .replace(/\/waitlist-offers\/[^/]+/, '/waitlist-offers/:token')
-              .replace(/\/groups\/[^/]+/, '/groups/:slug')}`,
+              .replace(/\/groups\/[^/]+/, '/groups/:slug')
+              .replace(/\/batches\/(?!propose)[^/]+/, '/batches/:id')
+              .replace(/\/growers\/[^/]+/, '/growers/:id')}`,
         ),
     );
     expect([...routes].sort()).toEqual([
@@ -685,6 +747,8 @@ describe('malformed input on every writing route (e2e)', () => {
       'post /api/groups/:slug/plant-share/slots',
       'post /api/groups/:slug/plant-share/stock/add',
       'post /api/groups/:slug/plant-share/walk-ups',
+      'post /api/groups/:slug/season/batches/:id/log',
+      'post /api/groups/:slug/season/batches/propose',
       'post /api/mixes',
       'post /api/mixes/alternatives',
       'post /api/mixes/balance',
@@ -701,6 +765,8 @@ describe('malformed input on every writing route (e2e)', () => {
       'put /api/groups/:slug/plant-share/slots/:slotId',
       'put /api/groups/:slug/plant-share/status',
       'put /api/groups/:slug/plant-share/stock',
+      'put /api/groups/:slug/season/batches',
+      'put /api/groups/:slug/season/growers/:id',
       'put /api/reservations/:id',
       'put /api/species/:slug',
     ]);

@@ -57,3 +57,6 @@ export * from './scoring/wildlife-value.js';
 export * from './scoring/coverage.js';
 export * from './scoring/species-traits.js';
 export * from './plant-share/index.js';
+export * from './types/batch.js';
+export * from './batch-planning/index.js';
+export * from './types/batch-answers.js';

@@ -20,6 +20,10 @@ import { CreateSpeciesChanges1765584000000 } from './migrations/1765584000000-cr
 import { AddPhotoCredits1765670400000 } from './migrations/1765670400000-add-photo-credits.js';
 import { SpeciesChangeRow } from '../species/species-change.entity.js';
 import { SignInFailureRow } from '../auth/sign-in-failure.entity.js';
+import { CreateBatches1765324800000 } from './migrations/1765324800000-create-batches.js';
+import { BatchLogEntryRow } from '../batches/batch-log-entry.entity.js';
+import { BatchRow } from '../batches/batch.entity.js';
+import { SeasonGrowerRow } from '../batches/season-grower.entity.js';
 import { InvitationRow } from '../invitations/invitation.entity.js';
 import { OutboxMessageRow } from '../mail/outbox-message.entity.js';
 import { SavedMixRow } from '../saved-mixes/saved-mix.entity.js';
@@ -41,6 +45,9 @@ export const ENTITIES = [
   SeasonTargetRow,
   SignInFailureRow,
   SpeciesChangeRow,
+  SeasonGrowerRow,
+  BatchRow,
+  BatchLogEntryRow,
 ];
 export const MIGRATIONS = [
   CreateUsersAndGroups1764633600000,
@@ -56,6 +63,7 @@ export const MIGRATIONS = [
   AddAccountDisabled1765497600000,
   CreateSpeciesChanges1765584000000,
   AddPhotoCredits1765670400000,
+  CreateBatches1765324800000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

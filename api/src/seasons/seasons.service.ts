@@ -17,6 +17,7 @@ import {
   type StateCode,
   type TargetsRequest,
   type Group,
+  type GroupRole,
 } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
@@ -36,6 +37,15 @@ export interface SeasonPlan {
   year: number;
   plantShareDate: string;
   targets: { slug: string; targetPlants: number }[];
+}
+
+/** A season as other modules see it (plain values, never the entity), with the caller's role in its group. */
+export interface SeasonContext {
+  group: Group;
+  /** The caller's role in the group; admins act as organisers. */
+  role: GroupRole;
+  season: { id: string; year: number; lastFrost: string; plantShareDate: string; lossFactor: number };
+  targets: { slug: string; targetPlants: number; germinationRatePct: number | null }[];
 }
 
 /** A seed list with the season it belongs to. */
@@ -148,6 +158,55 @@ export class SeasonsService {
       seedsPerPacket: season.seedsPerPacket,
     });
     return { groupSlug: group.slug, year: season.year, ...list };
+  }
+
+  /**
+   * The group's newest season for another module (batches), when the caller has a role in the group;
+   * 403 otherwise, 404 when the group or its season does not exist.
+   */
+  async context(slug: string, user: AuthenticatedUser): Promise<SeasonContext> {
+    const group = await this.groups.getDto(slug);
+    const role = await this.groups.roleOf(user, group.id);
+    if (!role) throw new ForbiddenException('Only people in this group can see its season.');
+    const season = await this.latest(group);
+    const targets = await this.targetsOf(season);
+    return {
+      group,
+      role,
+      season: {
+        id: season.id,
+        year: season.year,
+        lastFrost: season.lastFrost,
+        plantShareDate: season.plantShareDate,
+        lossFactor: season.lossFactor,
+      },
+      targets: targets.map((t) => ({
+        slug: t.slug,
+        targetPlants: t.targetPlants,
+        germinationRatePct: t.germinationRatePct,
+      })),
+    };
+  }
+
+  /** The same, by season id (for the plant share's stock); null when there is no such season. */
+  async contextById(seasonId: string): Promise<Omit<SeasonContext, 'group' | 'role'> | null> {
+    const season = await this.seasons.findOne({ where: { id: seasonId } });
+    if (!season) return null;
+    const targets = await this.targetsOf(season);
+    return {
+      season: {
+        id: season.id,
+        year: season.year,
+        lastFrost: season.lastFrost,
+        plantShareDate: season.plantShareDate,
+        lossFactor: season.lossFactor,
+      },
+      targets: targets.map((t) => ({
+        slug: t.slug,
+        targetPlants: t.targetPlants,
+        germinationRatePct: t.germinationRatePct,
+      })),
+    };
   }
 
   async seedListCsv(slug: string, user: AuthenticatedUser): Promise<string> {

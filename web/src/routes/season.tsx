@@ -3,6 +3,7 @@ import { ErrorState, LoadingState } from '../components/states/index.js';
 import { paths } from '../config/paths.js';
 import { useSession } from '../features/auth/index.js';
 import { NoSeasonGroup, SeasonPage } from '../features/season/index.js';
+import { SeasonBatchesPanel } from '../features/season-batches/index.js';
 import { useDocumentTitle } from '../lib/use-document-title.js';
 
 /**
@@ -29,5 +30,11 @@ export function SeasonRoute() {
   const membership = user.groups.find((g) => g.role === 'organiser') ?? user.groups[0];
   if (!membership) return <NoSeasonGroup />;
   const canEdit = membership.role === 'organiser' || user.role === 'admin';
-  return <SeasonPage key={membership.groupSlug} slug={membership.groupSlug} canEdit={canEdit} />;
+  return (
+    <>
+      <SeasonPage key={membership.groupSlug} slug={membership.groupSlug} canEdit={canEdit} />
+      {/* Growers, batches and progress are the organisers' (the API answers 403 to others). */}
+      {canEdit ? <SeasonBatchesPanel key={`batches-${membership.groupSlug}`} slug={membership.groupSlug} /> : null}
+    </>
+  );
 }

@@ -1,0 +1,72 @@
+import { describe, expect, it } from 'vitest';
+import { daysBetween } from '../sowing-calendar/calendar-date.js';
+import { seasonSpecies as sp } from '../season-planning/season-fixtures.js';
+import { batchSchedule } from './batch-schedule.js';
+import { frostWarning } from './frost-watch.js';
+
+// Season: last frost 2027-05-10, plant share 2027-06-12 (the invented demo season); planned well
+// ahead (today 2026-09-01) so no step is a late start.
+const season = { lastFrost: '2027-05-10', plantShareDate: '2027-06-12', today: '2026-09-01' };
+const milkweed = sp({
+  slug: 'asclepias-incarnata',
+  scientificName: 'Asclepias incarnata',
+  germination: { treatments: [{ kind: 'cold-moist', days: 30 }] },
+});
+const indigo = sp({
+  slug: 'baptisia-australis',
+  scientificName: 'Baptisia australis',
+  germination: { treatments: [{ kind: 'scarification' }], methods: ['indoor-lights'] },
+});
+
+describe('batchSchedule', () => {
+  it('indoors: start stratifying in the refrigerator = sowing date − CMS days (IPN, CHECK-VALUES §4, D)', () => {
+    const s = batchSchedule({ ...season, species: milkweed, method: 'indoor-lights' });
+    const start = s.steps.find((x) => x.kind === 'start-stratifying')!;
+    expect(daysBetween(start.date, s.sowDate)).toBe(30);
+    // Sown 8 weeks before the last frost (M, from memory): 2027-05-10 − 56 d.
+    expect(s.sowDate).toBe('2027-03-15');
+    expect(s.treatments[0]).toMatchObject({ kind: 'cold-moist', days: 30, where: 'refrigerator' });
+    expect(s.steps.map((x) => x.kind)).toEqual(
+      expect.arrayContaining(['start-stratifying', 'sow', 'pot-up', 'harden-off', 'frost-watch', 'ready']),
+    );
+    // Hardening off takes about 10 days (7–14 d, M) before plants are ready.
+    const harden = s.steps.find((x) => x.kind === 'harden-off')!;
+    expect(daysBetween(harden.date, s.readyDate!)).toBe(10);
+    expect(s.readyAfterShare).toBe(false);
+  });
+
+  it('winter sowing: winter does the cold, containers are vented in spring, no hardening off', () => {
+    const s = batchSchedule({ ...season, species: milkweed, method: 'winter-sowing' });
+    expect(s.treatments[0]).toMatchObject({ where: 'outdoors' });
+    expect(s.steps.map((x) => x.kind)).toContain('vent-containers');
+    expect(s.steps.map((x) => x.kind)).not.toContain('harden-off');
+    // Winter sowing runs December to February (M, from memory).
+    expect(s.sowDate >= '2026-12-01' && s.sowDate <= '2027-02-28').toBe(true);
+  });
+
+  it('scarification is a treatment with no days and no refrigerator', () => {
+    const s = batchSchedule({ ...season, species: indigo, method: 'indoor-lights' });
+    expect(s.treatments).toEqual([expect.objectContaining({ kind: 'scarification', days: null, where: null })]);
+    expect(s.steps.map((x) => x.kind)).not.toContain('start-stratifying');
+  });
+});
+
+describe('frostWarning', () => {
+  // The calendar's frost watch: the average last frost is a 50 % date, frost stays possible for about
+  // two weeks after it (M, from memory); Homeground starts warning a week before.
+  it.each([
+    ['2027-05-02', null],
+    ['2027-05-03', 'close the container tops'],
+    ['2027-05-24', 'close the container tops'],
+    ['2027-05-25', null],
+  ])('on %s for winter-sown seedlings → %s', (today, words) => {
+    const w = frostWarning({ method: 'winter-sowing', lastFrost: '2027-05-10', today, seedlingsUp: true });
+    if (words === null) expect(w).toBeNull();
+    else expect(w).toContain(words);
+  });
+  it('says nothing before anything is up', () => {
+    expect(
+      frostWarning({ method: 'outdoor-pot-winter', lastFrost: '2027-05-10', today: '2027-05-10', seedlingsUp: false }),
+    ).toBeNull();
+  });
+});

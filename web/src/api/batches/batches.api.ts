@@ -1,0 +1,49 @@
+import type {
+  Batch,
+  BatchSplitProposalAnswer,
+  BatchSplitRequest,
+  GrowerSetupRequest,
+  LogEntryRequest,
+  SeasonBatches,
+  SeasonGrower,
+  SeasonProgress,
+  SplitProposalRequest,
+} from '@homeground/shared';
+import { httpClient } from '../../lib/http-client.js';
+
+const seasonPath = (slug: string) => `/api/groups/${encodeURIComponent(slug)}/season`;
+
+/** Organisers: every grower with methods and capacity; a grower: themself. */
+export function getGrowers(slug: string, signal?: AbortSignal): Promise<SeasonGrower[]> {
+  return httpClient.get<SeasonGrower[]>(`${seasonPath(slug)}/growers`, { signal });
+}
+
+/** A grower's methods and capacity (the grower themself, or an organiser). */
+export function putGrower(slug: string, userId: string, body: GrowerSetupRequest): Promise<SeasonGrower> {
+  return httpClient.put<SeasonGrower>(`${seasonPath(slug)}/growers/${encodeURIComponent(userId)}`, body);
+}
+
+/** Batches with dates, logs and supplies: all for organisers, their own for a grower. */
+export function getBatches(slug: string, signal?: AbortSignal): Promise<SeasonBatches> {
+  return httpClient.get<SeasonBatches>(`${seasonPath(slug)}/batches`, { signal });
+}
+
+/** Proposes a split of the targets over the growers' capacity; the API writes nothing. */
+export function proposeSplit(slug: string, body: SplitProposalRequest): Promise<BatchSplitProposalAnswer> {
+  return httpClient.post<BatchSplitProposalAnswer>(`${seasonPath(slug)}/batches/propose`, body);
+}
+
+/** Replaces the split (organisers). */
+export function putSplit(slug: string, body: BatchSplitRequest): Promise<SeasonBatches> {
+  return httpClient.put<SeasonBatches>(`${seasonPath(slug)}/batches`, body);
+}
+
+/** Adds a batch-log entry (the batch's grower); answers the batch as it now stands. */
+export function postLogEntry(slug: string, batchId: string, body: LogEntryRequest): Promise<Batch> {
+  return httpClient.post<Batch>(`${seasonPath(slug)}/batches/${encodeURIComponent(batchId)}/log`, body);
+}
+
+/** Targets against sown, up and ready, with the ready forecast (organisers). */
+export function getProgress(slug: string, signal?: AbortSignal): Promise<SeasonProgress> {
+  return httpClient.get<SeasonProgress>(`${seasonPath(slug)}/progress`, { signal });
+}

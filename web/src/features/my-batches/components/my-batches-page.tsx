@@ -1,0 +1,56 @@
+import type { SeasonBatches } from '@homeground/shared';
+import { useQuery } from '@tanstack/react-query';
+import { batchesQueryOptions } from '../../../api/batches/batches.queries.js';
+import { ContentCard } from '../../../components/page/content-card.js';
+import { Heading } from '../../../components/page/page-heading.js';
+import { PageIntro } from '../../../components/page/page-intro.js';
+import { QueryState } from '../../../components/states/index.js';
+import { SupplyTable } from '../../../components/supplies/supply-table.js';
+import { localToday, MY_BATCHES_WORDS } from '../utils/my-batches-words.js';
+import { BatchCard } from './batch-card.js';
+import { GrowerSetupCard } from './grower-setup-card.js';
+import { useMyBatchesStyles } from './my-batches.styles.js';
+
+/** A grower's batches in one group's season, with their own supply list. */
+export function MyBatchesPage({ slug, userId }: { slug: string; userId: string }) {
+  const styles = useMyBatchesStyles();
+  const batches = useQuery(batchesQueryOptions(slug));
+  return (
+    <>
+      <PageIntro title={MY_BATCHES_WORDS.title}>{MY_BATCHES_WORDS.lead}</PageIntro>
+      <QueryState
+        query={batches}
+        loading={MY_BATCHES_WORDS.loading}
+        error={MY_BATCHES_WORDS.failed}
+        isEmpty={(d) => d.batches.length === 0}
+        empty={MY_BATCHES_WORDS.none}
+      >
+        {(d) => <BatchList slug={slug} answer={d} />}
+      </QueryState>
+      <div className={styles.after}>
+        <GrowerSetupCard slug={slug} userId={userId} />
+      </div>
+    </>
+  );
+}
+
+function BatchList({ slug, answer }: { slug: string; answer: SeasonBatches }) {
+  const styles = useMyBatchesStyles();
+  const today = localToday();
+  const mine = answer.supplies.byGrower[0];
+  return (
+    <div className={styles.stack}>
+      {answer.batches.map((b) => (
+        <BatchCard key={b.id} slug={slug} batch={b} today={today} />
+      ))}
+      {mine ? (
+        <ContentCard aria-labelledby="my-supplies">
+          <Heading level="section" id="my-supplies">
+            {MY_BATCHES_WORDS.supplies}
+          </Heading>
+          <SupplyTable list={mine.list} label="My supply list" />
+        </ContentCard>
+      ) : null}
+    </div>
+  );
+}

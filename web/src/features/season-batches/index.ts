@@ -1,0 +1,1 @@
+export { SeasonBatchesPanel } from './components/season-batches-panel.js';

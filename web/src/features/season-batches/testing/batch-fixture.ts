@@ -1,0 +1,41 @@
+import type { Batch } from '@homeground/shared';
+
+/** Amara's wild bergamot with a log entry, so the split must keep it (invented demo data). */
+export const bergamotBatch: Batch = {
+  id: '7b0f5d62-2f7c-4c1e-9a57-6d3f1c2b8e01',
+  growerId: '3f6b3a00-0000-4000-8000-00000000a3a1',
+  growerName: 'Amara Reyes',
+  slug: 'monarda-fistulosa',
+  commonName: 'Wild bergamot',
+  scientificName: 'Monarda fistulosa',
+  method: 'outdoor-pot-winter',
+  unit: 'pot',
+  plants: 40,
+  units: 40,
+  seedsToSow: 67,
+  germinationRatePct: 75,
+  sowDate: '2026-12-02',
+  readyDate: '2027-05-24',
+  readyAfterShare: false,
+  treatments: [],
+  steps: [],
+  nextStep: null,
+  behind: null,
+  warnings: [],
+  frostWarning: null,
+  cautions: [],
+  log: [
+    {
+      id: 'e1',
+      kind: 'sown',
+      count: 60,
+      date: '2026-12-01',
+      reason: null,
+      note: null,
+      clientId: null,
+      createdAt: '2026-12-01T15:00:00.000Z',
+    },
+  ],
+  totals: { sown: 60, germinated: 40, pottedUp: 0, lost: 5, ready: 0, alive: 35 },
+  forecast: { expected: 36, low: 29, high: 45, basis: 'germinated' },
+};
