@@ -1,0 +1,2 @@
+export { AvailablePage } from './components/available-page.js';
+export { MyReservation } from './components/my-reservation.js';
