@@ -51,3 +51,4 @@ export * from './scoring/layers.js';
 export * from './scoring/wildlife-value.js';
 export * from './scoring/coverage.js';
 export * from './scoring/species-traits.js';
+export * from './plant-share/index.js';

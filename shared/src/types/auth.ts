@@ -96,6 +96,8 @@ export interface ApiError {
   fields?: { field: string; message: string }[];
   /** For CSV imports: each bad row with its line number (header = line 1), field and reason. */
   rows?: { row: number; field: string; message: string }[];
+  /** For a plant share's 409 "all taken": the species that ran out and where to join their waitlist. */
+  waitlist?: { speciesSlugs: string[]; path: string };
 }
 
 export interface HealthResponse {

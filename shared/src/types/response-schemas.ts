@@ -361,6 +361,7 @@ export const apiErrorSchema = z.object({
   message: z.string(),
   fields: z.array(z.object({ field: z.string(), message: z.string() })).optional(),
   rows: z.array(z.object({ row: z.number().int(), field: z.string(), message: z.string() })).optional(),
+  waitlist: z.object({ speciesSlugs: z.array(z.string()), path: z.string() }).optional(),
 });
 
 export const outboxMessageSchema = z.object({
