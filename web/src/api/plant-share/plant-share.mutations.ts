@@ -1,34 +1,103 @@
+import type {
+  AddStockRequest,
+  ChangeReservationRequest,
+  CheckInRequest,
+  EditShareRequest,
+  OpenShareRequest,
+  PlantShare,
+  ReservationRequest,
+  SetStockRequest,
+  ShareStatus,
+  WaitlistRequest,
+  WalkUpRequest,
+} from '@homeground/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { cancelReservation, changeReservation, joinWaitlist, reservePlants } from './plant-share.api.js';
+import {
+  addStock,
+  cancelReservation,
+  changeReservation,
+  checkIn,
+  editShare,
+  joinWaitlist,
+  openShare,
+  recordWalkUp,
+  reservePlants,
+  setShareStatus,
+  setStock,
+} from './plant-share.api.js';
 import { plantShareKeys } from './plant-share.queries.js';
-import type { ReservationRequest } from './plant-share.types.js';
 
 /** Reserves plants; what is left changes for everyone, so the share is read again (also after a 409). */
 export function useReserveMutation(groupSlug: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: ReservationRequest) => reservePlants(groupSlug, body),
-    onSettled: () => queryClient.invalidateQueries({ queryKey: plantShareKeys.public(groupSlug) }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: plantShareKeys.group(groupSlug) }),
   });
 }
 
-export function useWaitlistMutation(groupSlug: string) {
-  return useMutation({ mutationFn: (body: ReservationRequest) => joinWaitlist(groupSlug, body) });
+export function useWaitlistMutation() {
+  return useMutation({
+    mutationFn: ({ path, body }: { path: string; body: WaitlistRequest }) => joinWaitlist(path, body),
+  });
 }
 
 /** Changes counts or slot by the private link; the answer replaces the reservation shown. */
-export function useChangeReservationMutation(token: string) {
+export function useChangeReservationMutation(token: string, groupSlug: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: Pick<ReservationRequest, 'slotId' | 'items'>) => changeReservation(token, body),
+    mutationFn: (body: ChangeReservationRequest) => changeReservation(token, body),
     onSuccess: (r) => queryClient.setQueryData(plantShareKeys.reservation(token), r),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: plantShareKeys.group(groupSlug) }),
   });
 }
 
-export function useCancelReservationMutation(token: string) {
+export function useCancelReservationMutation(token: string, groupSlug: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => cancelReservation(token),
     onSuccess: (r) => queryClient.setQueryData(plantShareKeys.reservation(token), r),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: plantShareKeys.group(groupSlug) }),
+  });
+}
+
+/** Every organiser write answers the whole share: it replaces the cached one and the rest is read again. */
+function useShareWrite<B>(groupSlug: string, write: (body: B) => Promise<PlantShare>) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: write,
+    onSuccess: (share) => {
+      queryClient.setQueryData(plantShareKeys.organiser(groupSlug), share);
+      void queryClient.invalidateQueries({ queryKey: plantShareKeys.group(groupSlug) });
+    },
+  });
+}
+
+export const useOpenShareMutation = (groupSlug: string) =>
+  useShareWrite(groupSlug, (body: OpenShareRequest) => openShare(groupSlug, body));
+export const useEditShareMutation = (groupSlug: string) =>
+  useShareWrite(groupSlug, (body: EditShareRequest) => editShare(groupSlug, body));
+export const useSetStockMutation = (groupSlug: string) =>
+  useShareWrite(groupSlug, (body: SetStockRequest) => setStock(groupSlug, body));
+export const useAddStockMutation = (groupSlug: string) =>
+  useShareWrite(groupSlug, (body: AddStockRequest) => addStock(groupSlug, body));
+export const useShareStatusMutation = (groupSlug: string) =>
+  useShareWrite(groupSlug, (status: ShareStatus) => setShareStatus(groupSlug, status));
+
+/** Check-in changes the slot's list, the stock and the report. */
+export function useCheckInMutation(groupSlug: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ reservationId, body }: { reservationId: string; body: CheckInRequest }) =>
+      checkIn(groupSlug, reservationId, body),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: plantShareKeys.group(groupSlug) }),
+  });
+}
+
+export function useWalkUpMutation(groupSlug: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: WalkUpRequest) => recordWalkUp(groupSlug, body),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: plantShareKeys.group(groupSlug) }),
   });
 }

@@ -1,14 +1,17 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { apiError, type FakeRoutes } from '../../../testing/fake-api.js';
+import { apiError, type FakeRequest, type FakeRoutes } from '../../../testing/fake-api.js';
 import { renderApp } from '../../../testing/render-app.js';
-import { dryFullSunFit, GROUP, reservation, SHARE_PATH, share } from '../testing/share-fixtures.js';
+import { GROUP, rankedForDrySun, reservation, SHARE_PATH, share, SLOT_1 } from '../testing/share-fixtures.js';
 
 // What the taker sees follows the public plant-share answer in ../testing/share-fixtures.ts (the
 // invented demo group); sun, soil, height and bloom of each species are as USDA PLANTS lists them.
 function openShare(over: FakeRoutes = {}) {
-  return renderApp({ path: `/share/${GROUP}`, api: { [`GET ${SHARE_PATH}`]: { body: share }, ...over } });
+  return renderApp({ path: `/share/${GROUP}`, api: { [`GET ${SHARE_PATH}`]: shareAnswer, ...over } });
 }
+
+/** The share, ranked for dry full sun when the query asks for a yard (as the API does). */
+const shareAnswer = (req: FakeRequest) => ({ body: req.search.includes('sun=') ? rankedForDrySun : share });
 
 const card = (name: string) => within(screen.getByRole('article', { name }));
 
@@ -46,30 +49,35 @@ describe('what is available', () => {
   });
 
   it('ranks by fit for the taker’s sun and soil, with why, and keeps the others below', async () => {
-    const { user, api } = openShare({ [`POST ${SHARE_PATH}/fit`]: { body: dryFullSunFit } });
+    const { user, api } = openShare();
     await screen.findByRole('article', { name: 'Butterfly milkweed' });
     await user.click(screen.getByRole('radio', { name: 'Full sun' }));
     await user.click(screen.getByRole('radio', { name: 'Dry' }));
     await user.click(screen.getByRole('button', { name: 'Show what fits' }));
 
     expect(await card('Butterfly milkweed').findByText('Thrives in dry soil and full sun.')).toBeInTheDocument();
-    expect(api.callsTo('POST', `${SHARE_PATH}/fit`)[0].body).toEqual({ sun: 'full', moisture: 'dry' });
+    expect(card('Butterfly milkweed').getByText('Thrives in your spot')).toBeInTheDocument();
+    expect(card('Wild bergamot').getByText('Grows in your spot')).toBeInTheDocument();
+    expect(screen.getByText('Ranked for dry full sun.')).toBeInTheDocument();
+    expect(api.callsTo('GET', SHARE_PATH).map((c) => c.search)).toContain('?sun=full&moisture=dry');
     const names = screen.getAllByRole('article').map((a) => a.getAttribute('aria-label'));
     expect(names).toEqual(['Butterfly milkweed', 'Wild bergamot', 'Southern blue flag']);
     expect(screen.getByRole('heading', { name: 'Less suited to your spot' })).toBeInTheDocument();
     expect(card('Southern blue flag').getByText('Needs wet soil.')).toBeInTheDocument();
   });
 
-  it('asks for sun and soil or a ZIP before ranking', async () => {
+  it('asks for both sun and soil before ranking', async () => {
     const { user, api } = openShare();
     await screen.findByRole('article', { name: 'Butterfly milkweed' });
+    await user.click(screen.getByRole('radio', { name: 'Full sun' }));
     await user.click(screen.getByRole('button', { name: 'Show what fits' }));
-    expect(screen.getByText('Choose sun and soil, or enter a ZIP code.')).toBeInTheDocument();
-    expect(api.callsTo('POST', `${SHARE_PATH}/fit`)).toHaveLength(0);
+    expect(screen.getByText('Choose both the sun and the soil of your spot.')).toBeInTheDocument();
+    expect(api.callsTo('GET', SHARE_PATH).every((c) => c.search === '')).toBe(true);
   });
 
   it('keeps counts within the limits shown, reserves, and confirms with the pickup and care sheet', async () => {
     const { user, api } = openShare({ [`POST ${SHARE_PATH}/reservations`]: { status: 201, body: reservation } });
+    // The list shows the share's order: Southern blue flag (none left) first, as the API answered it.
     await screen.findByRole('article', { name: 'Wild bergamot' });
     const more = (name: string) => card(name).getByRole('button', { name: `One more: Plants of ${name}` });
     // Wild bergamot has 2 left, under the limit of 3 per species: the stepper stops at 2.
@@ -92,16 +100,18 @@ describe('what is available', () => {
       screen.getByText(/We sent a confirmation to priya.vantongeren@example.org with a private link/),
     ).toBeVisible();
     expect(screen.getByText('Saturday, June 12, 2027, 9:00 am – 9:30 am')).toBeInTheDocument();
-    expect(screen.getByText('A box or tray for the pots.')).toBeInTheDocument();
-    expect(screen.getByText(/Water weekly until it is settled/)).toBeInTheDocument();
+    expect(screen.getByText('Larkfield Commons Hall, 1 Commons Lane, Larkfield, WI')).toBeInTheDocument();
+    expect(screen.getByText('Stay in your car; volunteers bring the plants to you.')).toBeInTheDocument();
+    expect(screen.getByText('Plant 18 in (46 cm) apart.')).toBeInTheDocument();
+    expect(screen.getByRole('list', { name: 'Cautions for Butterfly milkweed' })).toHaveTextContent(/Milky sap/);
     expect(api.callsTo('POST', `${SHARE_PATH}/reservations`)[0].body).toEqual({
       name: 'Priya Vantongeren',
       email: 'priya.vantongeren@example.org',
       zip: '53597',
-      slotId: 'slot-1',
-      items: [
-        { slug: 'asclepias-tuberosa', count: 3 },
-        { slug: 'monarda-fistulosa', count: 2 },
+      slotId: SLOT_1,
+      lines: [
+        { speciesSlug: 'asclepias-tuberosa', count: 3 },
+        { speciesSlug: 'monarda-fistulosa', count: 2 },
       ],
     });
   });
@@ -113,8 +123,9 @@ describe('what is available', () => {
     await user.click(screen.getByRole('button', { name: 'Reserve these plants' }));
     expect(screen.getByText('Choose at least one plant first.')).toBeInTheDocument();
     expect(screen.getByText('Choose a pickup slot.')).toBeInTheDocument();
-    expect(screen.getByText('Enter your name')).toBeInTheDocument();
-    expect(screen.getByText('Enter a 5-digit ZIP code')).toBeInTheDocument();
+    // The shared reservation schema's own words (shared/src/plant-share/requests.ts).
+    expect(screen.getByText('Must not be empty')).toBeInTheDocument();
+    expect(screen.getByText('Must be a 5-digit ZIP code')).toBeInTheDocument();
     expect(api.callsTo('POST', `${SHARE_PATH}/reservations`)).toHaveLength(0);
   });
 
@@ -122,9 +133,12 @@ describe('what is available', () => {
     const { user, api } = openShare({
       [`POST ${SHARE_PATH}/reservations`]: apiError(409, 'All taken: Wild bergamot', {
         error: 'Conflict',
-        fields: [{ field: 'items.monarda-fistulosa', message: 'all taken' }],
+        waitlist: { speciesSlugs: ['monarda-fistulosa'], path: `${SHARE_PATH}/waitlist` },
       }),
-      [`POST ${SHARE_PATH}/waitlist`]: { status: 201, body: {} },
+      [`POST ${SHARE_PATH}/waitlist`]: {
+        status: 201,
+        body: { entries: [{ speciesSlug: 'monarda-fistulosa', commonName: 'Wild bergamot', count: 1, position: 1 }] },
+      },
     });
     await screen.findByRole('article', { name: 'Wild bergamot' });
     await user.click(card('Wild bergamot').getByRole('button', { name: /One more/ }));
@@ -135,7 +149,12 @@ describe('what is available', () => {
     expect(await screen.findByText(/Join the waitlist for Wild bergamot\?/)).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Join the waitlist' }));
     expect(await screen.findByText(/You are on the waitlist/)).toBeInTheDocument();
-    expect(api.callsTo('POST', `${SHARE_PATH}/waitlist`)).toHaveLength(1);
+    expect(api.callsTo('POST', `${SHARE_PATH}/waitlist`)[0].body).toEqual({
+      name: 'Priya Vantongeren',
+      email: 'priya.vantongeren@example.org',
+      zip: '53597',
+      lines: [{ speciesSlug: 'monarda-fistulosa', count: 1 }],
+    });
     // What is left changed for everyone, so the list is read again.
     expect(api.callsTo('GET', SHARE_PATH).length).toBeGreaterThanOrEqual(2);
   });

@@ -1,4 +1,13 @@
-import { Button, Field, Input, makeStyles, Radio, RadioGroup, tokens } from '@fluentui/react-components';
+import {
+  Button,
+  Field,
+  MessageBar,
+  MessageBarBody,
+  makeStyles,
+  Radio,
+  RadioGroup,
+  tokens,
+} from '@fluentui/react-components';
 import {
   capitalise,
   MOISTURE_LEVELS,
@@ -24,8 +33,8 @@ const useStyles = makeStyles({
   actions: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalM, marginTop: tokens.spacingVerticalL },
 });
 
-/** The taker's answer: sun and soil of the spot, or a ZIP code for their ground. */
-export type YardAnswer = { sun: Sun; moisture: Moisture } | { zip: string };
+/** The taker's answer: sun and soil of the spot they will plant. */
+export type YardAnswer = { sun: Sun; moisture: Moisture };
 
 export interface FitFilterProps {
   onApply: (answer: YardAnswer) => void;
@@ -34,20 +43,23 @@ export interface FitFilterProps {
   isPending?: boolean;
 }
 
-/** "Fits my yard": two quick questions (or a ZIP) that rank the list by the engine's fit. */
+/** "Fits my yard": two quick questions that rank the list by the engine's fit for that spot. */
 export function FitFilter({ onApply, onClear, isActive, isPending = false }: FitFilterProps) {
   const styles = useStyles();
   const [sun, setSun] = useState<Sun | ''>('');
   const [moisture, setMoisture] = useState<Moisture | ''>('');
-  const [zip, setZip] = useState('');
   const [error, setError] = useState<string | null>(null);
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const trimmed = zip.trim();
     if (sun && moisture) return onApply({ sun, moisture });
-    if (/^\d{5}$/.test(trimmed)) return onApply({ zip: trimmed });
-    setError(trimmed ? 'Enter a 5-digit ZIP code' : W.fitNeedsAnswer);
+    setError(W.fitNeedsAnswer);
+  };
+
+  const clear = () => {
+    setSun('');
+    setMoisture('');
+    onClear();
   };
 
   return (
@@ -76,26 +88,17 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
               ))}
             </RadioGroup>
           </Field>
-          <Field
-            label={W.fitZip}
-            hint={W.fitZipHint}
-            validationMessage={error ?? undefined}
-            validationState={error ? 'error' : 'none'}
-          >
-            <Input
-              inputMode="numeric"
-              autoComplete="postal-code"
-              maxLength={5}
-              value={zip}
-              onChange={(_, d) => (setZip(d.value), setError(null))}
-            />
-          </Field>
         </div>
+        {error ? (
+          <MessageBar intent="error">
+            <MessageBarBody>{error}</MessageBarBody>
+          </MessageBar>
+        ) : null}
         <div className={styles.actions}>
           <Button type="submit" disabled={isPending}>
             {isPending ? W.fitting : W.fitApply}
           </Button>
-          {isActive ? <Button onClick={onClear}>{W.fitClear}</Button> : null}
+          {isActive ? <Button onClick={clear}>{W.fitClear}</Button> : null}
         </div>
       </form>
     </ContentCard>

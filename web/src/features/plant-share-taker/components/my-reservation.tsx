@@ -1,4 +1,5 @@
 import { Button, MessageBar, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
+import type { PublicPlantShare, TakerReservation } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import {
@@ -6,7 +7,6 @@ import {
   useChangeReservationMutation,
 } from '../../../api/plant-share/plant-share.mutations.js';
 import { publicShareQueryOptions, reservationQueryOptions } from '../../../api/plant-share/plant-share.queries.js';
-import type { PublicShare, Reservation } from '../../../api/plant-share/plant-share.types.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
@@ -45,26 +45,35 @@ export function MyReservation({ token }: { token: string }) {
   );
 }
 
-function ReservationView({ token, reservation }: { token: string; reservation: Reservation }) {
+function ReservationView({ token, reservation }: { token: string; reservation: TakerReservation }) {
   const styles = useStyles();
-  const share = useQuery(publicShareQueryOptions(reservation.groupSlug));
-  const canChange = reservation.status === 'confirmed';
+  const share = useQuery({ ...publicShareQueryOptions(reservation.share.groupSlug), enabled: reservation.canChange });
   return (
     <>
-      <PageIntro title={W.myReservationTitle}>{reservation.groupName}</PageIntro>
+      <PageIntro title={W.myReservationTitle}>{reservation.share.groupName}</PageIntro>
       <div className={styles.stack}>
         {reservation.status === 'cancelled' ? (
           <MessageBar intent="info">
             <MessageBarBody>{W.cancelled}</MessageBarBody>
           </MessageBar>
         ) : null}
-        {reservation.status === 'checked-in' ? (
+        {reservation.status === 'picked-up' ? (
           <MessageBar intent="success">
             <MessageBarBody>{W.pickedUp}</MessageBarBody>
           </MessageBar>
         ) : null}
+        {reservation.status === 'no-show' ? (
+          <MessageBar intent="info">
+            <MessageBarBody>{W.noShow}</MessageBarBody>
+          </MessageBar>
+        ) : null}
+        {reservation.status === 'confirmed' && !reservation.canChange ? (
+          <MessageBar intent="info">
+            <MessageBarBody>{W.cannotChange}</MessageBarBody>
+          </MessageBar>
+        ) : null}
         {reservation.status === 'cancelled' ? null : <ReservationSummary reservation={reservation} />}
-        {canChange && share.data ? (
+        {reservation.canChange && share.data ? (
           <ChangeReservation token={token} reservation={reservation} share={share.data} />
         ) : null}
       </div>
@@ -72,19 +81,18 @@ function ReservationView({ token, reservation }: { token: string; reservation: R
   );
 }
 
-function ChangeReservation({
-  token,
-  reservation,
-  share,
-}: {
+interface ChangeProps {
   token: string;
-  reservation: Reservation;
-  share: PublicShare;
-}) {
+  reservation: TakerReservation;
+  share: PublicPlantShare;
+}
+
+/** New counts and another slot, saved in one request; or cancel after saying yes twice. */
+function ChangeReservation({ token, reservation, share }: ChangeProps) {
   const styles = useStyles();
-  const change = useChangeReservationMutation(token);
-  const cancel = useCancelReservationMutation(token);
-  const mine = Object.fromEntries(reservation.items.map((i) => [i.slug, i.count]));
+  const change = useChangeReservationMutation(token, share.groupSlug);
+  const cancel = useCancelReservationMutation(token, share.groupSlug);
+  const mine = Object.fromEntries(reservation.lines.map((l) => [l.speciesSlug, l.count]));
   const [counts, setCounts] = useState<Record<string, number>>(mine);
   const [slotId, setSlotId] = useState(reservation.slot.id);
   const [asking, setAsking] = useState(false);
@@ -94,16 +102,16 @@ function ChangeReservation({
 
   const save = () => {
     setSaved(false);
-    const items = Object.entries(counts)
+    const lines = Object.entries(counts)
       .filter(([, n]) => n > 0)
-      .map(([slug, count]) => ({ slug, count }));
-    change.mutate({ slotId, items }, { onSuccess: () => setSaved(true) });
+      .map(([speciesSlug, count]) => ({ speciesSlug, count }));
+    change.mutate({ slotId, lines }, { onSuccess: () => setSaved(true) });
   };
 
   return (
     <ContentCard aria-labelledby="change-heading">
       <Heading level="section" id="change-heading">
-        {W.saveChanges}
+        {W.changeHeading}
       </Heading>
       <div className={styles.stack}>
         <ul className={styles.rows}>
@@ -111,8 +119,8 @@ function ChangeReservation({
             const held = mine[s.slug] ?? 0;
             const value = counts[s.slug] ?? 0;
             // Plants this reservation already holds count as available to it.
-            const max = Math.min(share.limitPerSpecies, s.left + held, value + share.limitTotal - total);
-            if (held === 0 && s.left === 0) return null;
+            const max = Math.min(share.limits.perSpecies, s.remaining + held, value + share.limits.total - total);
+            if (held === 0 && s.remaining === 0) return null;
             return (
               <li key={s.slug} className={styles.row}>
                 <span>{s.commonName}</span>
@@ -127,6 +135,7 @@ function ChangeReservation({
           })}
         </ul>
         <SlotPicker
+          // The taker's own slot stays choosable even when it is full: they hold one of its places.
           slots={share.slots.map((s) => (s.id === reservation.slot.id ? { ...s, left: Math.max(1, s.left) } : s))}
           value={slotId}
           onChange={setSlotId}

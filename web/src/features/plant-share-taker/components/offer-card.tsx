@@ -42,14 +42,14 @@ export interface OfferCardProps {
   wildlife: readonly string[];
   cautions: readonly { kind: string; text: string }[];
   left: number;
-  /** "Why it fits" sentences when the taker has described their yard. */
-  why?: readonly string[];
+  /** How it suits the taker's yard, in words, with why (when they described their yard). */
+  fit?: { words: string; why: readonly string[] } | null;
   /** The count chosen and its limit; without it the card only reads. */
   count?: { value: number; max: number; onChange: (value: number) => void };
 }
 
 /** One species on offer: its fact-card summary, wildlife value in words, cautions and how many are left. */
-export function OfferCard({ commonName, scientificName, facts, wildlife, cautions, left, why, count }: OfferCardProps) {
+export function OfferCard({ commonName, scientificName, facts, wildlife, cautions, left, fit, count }: OfferCardProps) {
   const styles = useStyles();
   return (
     <article className={styles.card} aria-label={commonName}>
@@ -74,11 +74,11 @@ export function OfferCard({ commonName, scientificName, facts, wildlife, caution
           ))}
         </ul>
       ) : null}
-      {why && why.length > 0 ? (
+      {fit ? (
         <div>
-          <p className={styles.whyTitle}>{W.whyItFits}</p>
-          <ul className={styles.list}>
-            {why.map((w) => (
+          <p className={styles.whyTitle}>{fit.words}</p>
+          <ul className={styles.list} aria-label={`${W.whyItFits}: ${commonName}`}>
+            {fit.why.map((w) => (
               <li key={w} className={styles.item}>
                 <CheckmarkCircle16Regular className={styles.fit} aria-hidden />
                 <span>{w}</span>

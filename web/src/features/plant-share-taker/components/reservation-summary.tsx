@@ -1,4 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
+import type { TakerReservation } from '@homeground/shared';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { shareDateWords, slotWords } from '../utils/share-facts.js';
@@ -19,21 +20,14 @@ const useStyles = makeStyles({
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalXS },
   count: { fontVariantNumeric: 'tabular-nums', fontWeight: tokens.fontWeightSemibold },
   care: { display: 'grid', gap: tokens.spacingVerticalM },
-  careName: { margin: 0 },
+  careName: { margin: `0 0 ${tokens.spacingVerticalS}` },
+  scientific: { fontStyle: 'italic', fontWeight: tokens.fontWeightRegular, color: tokens.colorNeutralForeground3 },
 });
 
-/** What a reservation holds, as the confirmation, the e-mail and the private page all say it. */
-export interface ReservationView {
-  date: string;
-  place: string;
-  whatToBring: string;
-  slot: { start: string; end: string };
-  items: readonly { slug: string; commonName: string; count: number; careSheet: readonly string[] }[];
-}
-
-/** Pickup (when, where, what to bring), the plants, and a care sheet for each species. */
-export function ReservationSummary({ reservation }: { reservation: ReservationView }) {
+/** Pickup (when, where, how, what to bring), the plants, and a care sheet for each species. */
+export function ReservationSummary({ reservation }: { reservation: TakerReservation }) {
   const styles = useStyles();
+  const { share, slot } = reservation;
   return (
     <div className={styles.stack}>
       <ContentCard aria-labelledby="pickup-heading">
@@ -43,12 +37,20 @@ export function ReservationSummary({ reservation }: { reservation: ReservationVi
         <dl className={styles.facts}>
           <dt className={styles.term}>{W.whenWords}</dt>
           <dd className={styles.value}>
-            {shareDateWords(reservation.date)}, {slotWords(reservation.slot)}
+            {shareDateWords(share.date)}, {slotWords(slot)}
           </dd>
           <dt className={styles.term}>{W.whereWords}</dt>
-          <dd className={styles.value}>{reservation.place}</dd>
+          <dd className={styles.value}>
+            {share.place.name}, {share.place.address}
+          </dd>
+          {share.place.directions ? (
+            <>
+              <dt className={styles.term}>{W.howWords}</dt>
+              <dd className={styles.value}>{share.place.directions}</dd>
+            </>
+          ) : null}
           <dt className={styles.term}>{W.bringWords}</dt>
-          <dd className={styles.value}>{reservation.whatToBring}</dd>
+          <dd className={styles.value}>{W.bringAdvice}</dd>
         </dl>
       </ContentCard>
       <ContentCard aria-labelledby="plants-heading">
@@ -56,9 +58,9 @@ export function ReservationSummary({ reservation }: { reservation: ReservationVi
           {W.plantsHeading}
         </Heading>
         <ul className={styles.list}>
-          {reservation.items.map((i) => (
-            <li key={i.slug}>
-              <span className={styles.count}>{i.count}</span> × {i.commonName}
+          {reservation.lines.map((l) => (
+            <li key={l.speciesSlug}>
+              <span className={styles.count}>{l.count}</span> × {l.commonName}
             </li>
           ))}
         </ul>
@@ -68,16 +70,28 @@ export function ReservationSummary({ reservation }: { reservation: ReservationVi
           {W.careHeading}
         </Heading>
         <div className={styles.care}>
-          {reservation.items.map((i) => (
-            <section key={i.slug} aria-label={`${W.careHeading}: ${i.commonName}`}>
+          {reservation.careSheet.map((c) => (
+            <section key={c.speciesSlug} aria-label={`${W.careHeading}: ${c.commonName}`}>
               <Heading level="card" className={styles.careName}>
-                {i.commonName}
+                {c.commonName} <span className={styles.scientific}>{c.scientificName}</span>
               </Heading>
-              <ul className={styles.list}>
-                {i.careSheet.map((line) => (
-                  <li key={line}>{line}</li>
-                ))}
-              </ul>
+              <dl className={styles.facts}>
+                <dt className={styles.term}>{W.careSun}</dt>
+                <dd className={styles.value}>{c.sun}</dd>
+                <dt className={styles.term}>{W.careSoil}</dt>
+                <dd className={styles.value}>{c.moisture}</dd>
+                <dt className={styles.term}>{W.careSpacing}</dt>
+                <dd className={styles.value}>{c.spacing}</dd>
+              </dl>
+              {c.cautions.length > 0 ? (
+                <ul className={styles.list} aria-label={W.cautionsFor(c.commonName)}>
+                  {c.cautions.map((line) => (
+                    <li key={line}>
+                      <strong>{W.cautionLabel}</strong> {line}
+                    </li>
+                  ))}
+                </ul>
+              ) : null}
             </section>
           ))}
         </div>

@@ -1,5 +1,5 @@
-import { Button, MessageBar, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
-import { joinWords } from '@homeground/shared';
+import { Button, MessageBar, MessageBarActions, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
+import { joinWords, type ReservationRequest, type WaitlistRequest } from '@homeground/shared';
 import { type FormEvent, useState } from 'react';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
@@ -24,14 +24,8 @@ export interface ChosenPlant {
   count: number;
 }
 
-/** What the panel sends: the taker's details, the slot and the plants. */
-export interface ReserveInput {
-  name: string;
-  email: string;
-  zip: string;
-  slotId: string;
-  items: { slug: string; count: number }[];
-}
+/** What the panel sends: the taker's details, the slot and the plants (a shared `ReservationRequest`). */
+export type ReserveInput = ReservationRequest;
 
 export interface ReservePanelProps {
   slots: readonly SlotChoice[];
@@ -40,8 +34,8 @@ export interface ReservePanelProps {
   isPending: boolean;
   /** Sends the reservation; rejects with the API's error (a 409 when plants ran out). */
   onReserve: (input: ReserveInput) => Promise<unknown>;
-  /** Puts the taker on the waitlist for the plants that ran out. */
-  onWaitlist: (input: ReserveInput) => Promise<unknown>;
+  /** Puts the taker on the waitlist for the plants that ran out, at the path the 409 offered. */
+  onWaitlist: (path: string, body: WaitlistRequest) => Promise<unknown>;
 }
 
 /** The pickup slot and the taker's name, e-mail and ZIP, then one button to reserve. */
@@ -51,7 +45,7 @@ export function ReservePanel({ slots, chosen, limitTotal, isPending, onReserve, 
   const [slotId, setSlotId] = useState('');
   const [slotError, setSlotError] = useState<string | undefined>();
   const [plantsError, setPlantsError] = useState<string | null>(null);
-  const [waitlist, setWaitlist] = useState<{ input: ReserveInput; names: string[] } | null>(null);
+  const [waitlist, setWaitlist] = useState<{ path: string; body: WaitlistRequest; names: string[] } | null>(null);
   const [waitlisted, setWaitlisted] = useState(false);
   const total = chosen.reduce((n, p) => n + p.count, 0);
 
@@ -63,16 +57,18 @@ export function ReservePanel({ slots, chosen, limitTotal, isPending, onReserve, 
     setWaitlist(null);
     form.handleSubmit((details) => {
       if (noPlants || noSlot || total > limitTotal) return;
-      const input: ReserveInput = {
-        ...details,
-        slotId,
-        items: chosen.filter((p) => p.count > 0).map((p) => ({ slug: p.slug, count: p.count })),
-      };
+      const lines = chosen.filter((p) => p.count > 0).map((p) => ({ speciesSlug: p.slug, count: p.count }));
+      const input: ReserveInput = { ...details, slotId, lines };
       onReserve(input).catch((error: unknown) => {
-        if (isApiRequestError(error) && error.statusCode === 409) {
-          const slugs = new Set(Object.keys(error.fieldMessages()).map((f) => f.replace(/^items\.|\.count$/g, '')));
-          const names = chosen.filter((p) => p.count > 0 && (slugs.size === 0 || slugs.has(p.slug)));
-          setWaitlist({ input, names: names.map((p) => p.commonName) });
+        // A 409 with an offer: nothing was reserved; the taker may wait for the species that ran out.
+        if (isApiRequestError(error) && error.statusCode === 409 && error.waitlist) {
+          const out = new Set(error.waitlist.speciesSlugs);
+          const ranOut = chosen.filter((p) => p.count > 0 && out.has(p.slug));
+          setWaitlist({
+            path: error.waitlist.path,
+            body: { ...details, lines: lines.filter((l) => out.has(l.speciesSlug)) },
+            names: ranOut.map((p) => p.commonName),
+          });
           return;
         }
         form.fail(error);
@@ -82,7 +78,7 @@ export function ReservePanel({ slots, chosen, limitTotal, isPending, onReserve, 
 
   const joinList = () => {
     if (!waitlist) return;
-    onWaitlist(waitlist.input)
+    onWaitlist(waitlist.path, waitlist.body)
       .then(() => (setWaitlisted(true), setWaitlist(null)))
       .catch((error: unknown) => form.fail(error));
   };
@@ -122,9 +118,11 @@ export function ReservePanel({ slots, chosen, limitTotal, isPending, onReserve, 
         {waitlist ? (
           <MessageBar intent="warning" layout="multiline">
             <MessageBarBody>
-              {W.allTaken} {W.waitlistOffer(joinWords(waitlist.names))}{' '}
-              <Button onClick={joinList}>{W.joinWaitlist}</Button>
+              {W.allTaken} {W.waitlistOffer(joinWords(waitlist.names))}
             </MessageBarBody>
+            <MessageBarActions>
+              <Button onClick={joinList}>{W.joinWaitlist}</Button>
+            </MessageBarActions>
           </MessageBar>
         ) : null}
         {waitlisted ? (

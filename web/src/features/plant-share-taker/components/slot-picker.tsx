@@ -14,6 +14,8 @@ export interface SlotChoice {
   end: string;
   /** Households the slot can still take. */
   left: number;
+  /** Started already: it can no longer be chosen. */
+  past?: boolean;
 }
 
 /** The pickup slots as radio choices; a full slot is shown but cannot be chosen. */
@@ -36,11 +38,13 @@ export function SlotPicker({
           <Radio
             key={s.id}
             value={s.id}
-            disabled={s.left <= 0}
+            disabled={s.left <= 0 || s.past === true}
             label={
               <span className={styles.label}>
                 <span className={styles.time}>{slotWords(s)}</span>
-                <span className={styles.line}>{s.left <= 0 ? W.slotFull : W.slotLeft(s.left)}</span>
+                <span className={styles.line}>
+                  {s.past ? W.slotPast : s.left <= 0 ? W.slotFull : W.slotLeft(s.left)}
+                </span>
               </span>
             }
           />

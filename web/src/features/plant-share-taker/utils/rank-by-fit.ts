@@ -1,27 +1,28 @@
-import type { FitResult } from '../../../api/plant-share/plant-share.types.js';
+import type { ShareSpecies } from '@homeground/shared';
 
-export interface RankedGroup<S> {
-  /** `all` before the taker answers; then `fits` (best first) and `less-suited`. */
+export interface RankedGroup {
+  /** `all` before the taker describes their yard; then `fits` (best first) and `less-suited`. */
   group: 'all' | 'fits' | 'less-suited';
-  items: { species: S; why?: readonly string[] }[];
+  species: ShareSpecies[];
 }
 
 /**
- * The species on offer in the engine's order for the taker's spot, each with its "why it fits";
- * species the engine left out follow under their own heading, so nothing on offer disappears.
+ * The species on offer in the engine's order for the taker's yard (the API's `fit.rank`); those that
+ * only nearly suit, or do not, follow under their own heading, so nothing on offer disappears.
  */
-export function rankByFit<S extends { slug: string }>(species: readonly S[], fit: FitResult | null): RankedGroup<S>[] {
-  if (!fit) return [{ group: 'all', items: species.map((s) => ({ species: s })) }];
-  const bySlug = new Map(species.map((s) => [s.slug, s]));
-  const fits = fit.ranked.flatMap((r) => {
-    const s = bySlug.get(r.slug);
-    return s ? [{ species: s, why: r.why }] : [];
-  });
-  const placed = new Set(fits.map((f) => f.species.slug));
-  const reasons = new Map(fit.notSuited.map((n) => [n.slug, [n.why]]));
-  const rest = species.filter((s) => !placed.has(s.slug)).map((s) => ({ species: s, why: reasons.get(s.slug) }));
+export function rankByFit(species: readonly ShareSpecies[]): RankedGroup[] {
+  if (species.every((s) => s.fit === null)) return [{ group: 'all', species: [...species] }];
+  const ranked = [...species].sort((a, b) => (a.fit?.rank ?? Infinity) - (b.fit?.rank ?? Infinity));
+  const suits = (s: ShareSpecies) => s.fit?.fit === 'thrives' || s.fit?.fit === 'grows';
   return [
-    { group: 'fits' as const, items: fits },
-    { group: 'less-suited' as const, items: rest },
-  ].filter((g) => g.items.length > 0);
+    { group: 'fits' as const, species: ranked.filter(suits) },
+    { group: 'less-suited' as const, species: ranked.filter((s) => !suits(s)) },
+  ].filter((g) => g.species.length > 0);
+}
+
+/** The wildlife value's parts that have words, in the order caterpillars, bees, monarchs, birds. */
+export function wildlifeLines(wildlife: ShareSpecies['wildlife']): string[] {
+  return [wildlife.caterpillars, wildlife.bees, wildlife.monarchs, wildlife.birds].filter(
+    (w): w is string => typeof w === 'string' && w.length > 0,
+  );
 }
