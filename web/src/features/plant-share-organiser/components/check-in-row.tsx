@@ -1,5 +1,6 @@
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import { CheckmarkRegular, DismissRegular } from '@fluentui/react-icons';
+import type { CheckInRequest, ReservationStatus } from '@homeground/shared';
 import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
 
 const useStyles = makeStyles({
@@ -20,18 +21,16 @@ const useStyles = makeStyles({
   big: { minHeight: '56px', minWidth: '8.5rem', fontSize: tokens.fontSizeBase400 },
 });
 
-export type PickupState = 'confirmed' | 'checked-in' | 'no-show' | 'cancelled';
-
 export interface CheckInRowProps {
   name: string;
   /** The plants as a line, e.g. "2 × Wild bergamot, 1 × Butterfly milkweed". */
   plantsLine: string;
-  state: PickupState;
+  state: ReservationStatus;
   isPending: boolean;
-  onMark: (state: 'checked-in' | 'no-show' | 'confirmed') => void;
+  onMark: (outcome: CheckInRequest['outcome']) => void;
 }
 
-/** One household at check-in: who, what, and two big buttons (checked in / no-show), or undo. */
+/** One household at check-in: who, what, and two big buttons (checked in / no-show) until one is tapped. */
 export function CheckInRow({ name, plantsLine, state, isPending, onMark }: CheckInRowProps) {
   const styles = useStyles();
   return (
@@ -52,7 +51,7 @@ export function CheckInRow({ name, plantsLine, state, isPending, onMark }: Check
               icon={<CheckmarkRegular />}
               aria-label={W.checkInFor(name)}
               disabled={isPending}
-              onClick={() => onMark('checked-in')}
+              onClick={() => onMark('picked-up')}
             >
               {W.checkedIn}
             </Button>
@@ -66,11 +65,7 @@ export function CheckInRow({ name, plantsLine, state, isPending, onMark }: Check
               {W.noShow}
             </Button>
           </>
-        ) : state === 'cancelled' ? null : (
-          <Button className={styles.big} disabled={isPending} onClick={() => onMark('confirmed')}>
-            {W.undo}
-          </Button>
-        )}
+        ) : null}
       </div>
     </li>
   );
