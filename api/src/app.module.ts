@@ -19,6 +19,7 @@ import { UsersModule } from './users/users.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { InvitationsModule } from './invitations/invitations.module.js';
 import { SeasonsModule } from './seasons/seasons.module.js';
+import { PlantShareModule } from './plant-share/plant-share.module.js';
 
 /** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
 function webApp(): DynamicModule[] {
@@ -49,6 +50,7 @@ function webApp(): DynamicModule[] {
     SavedMixesModule,
     PlanningModule,
     SeasonsModule,
+    PlantShareModule,
     DemoModule,
   ],
 })

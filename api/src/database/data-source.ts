@@ -13,6 +13,7 @@ import { CreateOutbox1764979200000 } from './migrations/1764979200000-create-out
 import { AllowGroupMembers1765022400000 } from './migrations/1765022400000-allow-group-members.js';
 import { CreateGroupInvitations1765065600000 } from './migrations/1765065600000-create-group-invitations.js';
 import { CreateSeasons1765152000000 } from './migrations/1765152000000-create-seasons.js';
+import { CreatePlantShares1765238400000 } from './migrations/1765238400000-create-plant-shares.js';
 import { InvitationRow } from '../invitations/invitation.entity.js';
 import { OutboxMessageRow } from '../mail/outbox-message.entity.js';
 import { SavedMixRow } from '../saved-mixes/saved-mix.entity.js';
@@ -42,6 +43,7 @@ export const MIGRATIONS = [
   AllowGroupMembers1765022400000,
   CreateGroupInvitations1765065600000,
   CreateSeasons1765152000000,
+  CreatePlantShares1765238400000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

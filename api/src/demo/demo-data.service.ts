@@ -10,6 +10,7 @@ import { SeasonRow } from '../seasons/season.entity.js';
 import { User } from '../users/user.entity.js';
 import { DEMO_GROUP, DEMO_PEOPLE } from './demo-people.js';
 import { DEMO_SEASON, DEMO_TARGETS } from './demo-season.js';
+import { loadDemoShare } from './demo-share.js';
 
 /** Loads the invented Larkfield group, people and season at start (idempotent); never in production. */
 @Injectable()
@@ -70,6 +71,9 @@ export class DemoDataService implements OnApplicationBootstrap {
           ),
         );
       }
+      // The season's plant share, open with slots and a few reservations, so the share pages have something to show.
+      const season = await tx.findOneOrFail(SeasonRow, { where: { groupId: group.id, year: DEMO_SEASON.year } });
+      await loadDemoShare(tx, group.id, season.id);
       return missing.length;
     });
   }

@@ -45,6 +45,13 @@ export class GroupsService {
     return this.toDto(group, await this.memberships.count({ where: { groupId: group.id } }));
   }
 
+  /** The shared `Group` by its id (for records that name their group by id, e.g. a plant share). */
+  async getDtoById(id: string): Promise<GroupDto> {
+    const group = await this.groups.findOne({ where: { id } });
+    if (!group) throw new NotFoundException('No such group.');
+    return this.toDto(group, await this.memberships.count({ where: { groupId: group.id } }));
+  }
+
   /** The caller's role in a group, or null. Admins act as organisers everywhere. */
   async roleOf(user: AuthenticatedUser, groupId: string): Promise<GroupRole | null> {
     if (user.role === 'admin') return 'organiser';

@@ -50,6 +50,14 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     await this.closeLocalServer?.();
   }
 
+  /**
+   * Forgets what the local outbox kept of a group's messages of one kind family (e.g. a plant share's
+   * confirmations once takers' names and e-mails are past their retention). Real SMTP keeps nothing here.
+   */
+  forgetOutbox(groupId: string, kindPrefix: string): Promise<void> {
+    return this.outbox.forget(groupId, kindPrefix);
+  }
+
   /** Sends one message and resolves once the server has accepted it. */
   async send(message: MailMessage): Promise<{ messageId: string }> {
     const headers: Record<string, string> = { [KIND_HEADER]: message.kind };

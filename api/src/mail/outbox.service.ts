@@ -35,6 +35,15 @@ export class OutboxService {
     if (stale.length) await this.rows.delete({ id: In(stale.map((r) => r.id)) });
   }
 
+  /** Deletes a group's kept messages whose kind starts with `kindPrefix` (personal data past its retention). */
+  async forget(groupId: string, kindPrefix: string): Promise<void> {
+    await this.rows
+      .createQueryBuilder()
+      .delete()
+      .where('group_id = :groupId AND kind LIKE :kind', { groupId, kind: `${kindPrefix}%` })
+      .execute();
+  }
+
   /** Admins read every message; organisers read the messages about the groups they organise. */
   async list(caller: AuthenticatedUser, filter: { kind?: string; to?: string } = {}): Promise<OutboxMessage[]> {
     const groups = await this.readableGroups(caller);

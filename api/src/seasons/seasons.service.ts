@@ -30,6 +30,14 @@ import { toSeason } from './season.mapper.js';
 /** Species a share list proposes when the organiser does not say: a dozen makes a plant share worth the trip. */
 const DEFAULT_SHARE_LIST_COUNT = 12;
 
+/** A season's plan as other modules read it: its id, year, share date and targets. */
+export interface SeasonPlan {
+  id: string;
+  year: number;
+  plantShareDate: string;
+  targets: { slug: string; targetPlants: number }[];
+}
+
 /** A seed list with the season it belongs to. */
 export type SeasonSeedList = SeedList & { groupSlug: string; year: number };
 
@@ -144,6 +152,22 @@ export class SeasonsService {
 
   async seedListCsv(slug: string, user: AuthenticatedUser): Promise<string> {
     return seedListToCsv(await this.seedList(slug, user));
+  }
+
+  /**
+   * The group's newest season as a plain object with its targets, for modules that build on the plan
+   * (the plant share); null when the group has none. No access check: the caller has made its own.
+   */
+  async latestPlan(groupId: string): Promise<SeasonPlan | null> {
+    const season = await this.seasons.findOne({ where: { groupId }, order: { year: 'DESC' } });
+    if (!season) return null;
+    const targets = await this.targetsOf(season);
+    return {
+      id: season.id,
+      year: season.year,
+      plantShareDate: season.plantShareDate,
+      targets: targets.map((t) => ({ slug: t.slug, targetPlants: t.targetPlants })),
+    };
   }
 
   /** The group, when the caller has any role in it (member, grower, organiser; admins act as organisers). */

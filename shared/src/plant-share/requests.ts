@@ -254,3 +254,10 @@ export type ShareFitQuery = z.infer<typeof shareFitQuerySchema>;
 
 /** The secret of a reservation's private link: 43 base64url characters (32 random bytes). */
 export const reservationTokenSchema = z.string().regex(/^[A-Za-z0-9_-]{43}$/, 'is not a reservation link we sent');
+
+/** The secret of a waitlist offer's private link: 43 base64url characters (32 random bytes). */
+export const waitlistOfferTokenSchema = z.string().regex(/^[A-Za-z0-9_-]{43}$/, 'is not a waitlist link we sent');
+
+/** Takes plants a waitlist offer holds: a pickup slot (ignored when the household already has a reservation). */
+export const claimOfferRequestSchema = z.object({ slotId: z.uuid({ message: 'must be a pickup slot id' }) }).strict();
+export type ClaimOfferRequest = z.infer<typeof claimOfferRequestSchema>;

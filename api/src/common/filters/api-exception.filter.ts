@@ -46,11 +46,17 @@ export class ApiExceptionFilter implements ExceptionFilter {
       const response = exception.getResponse();
       const base: ApiError = { statusCode, error: REASON[statusCode] ?? 'Error', message: exception.message };
       if (typeof response === 'object' && response !== null) {
-        const r = response as { message?: unknown; fields?: ApiError['fields']; rows?: ApiError['rows'] };
+        const r = response as {
+          message?: unknown;
+          fields?: ApiError['fields'];
+          rows?: ApiError['rows'];
+          waitlist?: ApiError['waitlist'];
+        };
         if (typeof r.message === 'string') base.message = r.message;
         else if (Array.isArray(r.message)) base.message = r.message.join('; ');
         if (r.fields) base.fields = r.fields;
         if (r.rows) base.rows = r.rows;
+        if (r.waitlist) base.waitlist = r.waitlist;
       }
       const cause = exception.cause;
       // The Express adapter maps body-parser's SyntaxError to a 400 with the parser's words; say it plainly.

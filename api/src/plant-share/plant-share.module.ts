@@ -1,0 +1,22 @@
+import { Module } from '@nestjs/common';
+import { GroupsModule } from '../groups/groups.module.js';
+import { MixContextModule } from '../mix-context/mix-context.module.js';
+import { SeasonsModule } from '../seasons/seasons.module.js';
+import { Clock } from './clock.js';
+import { PlantShareController } from './plant-share.controller.js';
+import { PlantShareService } from './plant-share.service.js';
+import { PublicShareController } from './public-share.controller.js';
+import { ReservationsService } from './reservations.service.js';
+import { ShareDb } from './share-db.js';
+import { ShareLedger } from './share-ledger.js';
+import { SharePurgeService } from './share-purge.service.js';
+import { ShareViews } from './share-views.js';
+
+/** The plant share: what is on offer, reservations with limits and slots, pickup day, the season report. */
+@Module({
+  imports: [GroupsModule, SeasonsModule, MixContextModule],
+  controllers: [PlantShareController, PublicShareController],
+  providers: [Clock, ShareDb, ShareLedger, ShareViews, PlantShareService, ReservationsService, SharePurgeService],
+  exports: [ShareDb, ShareLedger],
+})
+export class PlantShareModule {}

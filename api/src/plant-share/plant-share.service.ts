@@ -1,0 +1,442 @@
+import { randomUUID } from 'node:crypto';
+import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import {
+  type AddStockRequest,
+  type CheckInRequest,
+  type CheckInResult,
+  DEFAULT_RETENTION_DAYS,
+  type EditShareRequest,
+  type Group,
+  type OpenShareRequest,
+  type PickupList,
+  type PickupSlotRequest,
+  type PlantShare,
+  type SetStockRequest,
+  seasonReport,
+  type ShareReport,
+  shareReportToCsv,
+  type ShareStatusRequest,
+  type Species,
+  type StockLine,
+  type WalkUpGift,
+  type PlantLine,
+} from '@homeground/shared';
+import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
+import { GroupsService } from '../groups/groups.service.js';
+import { MixContextService } from '../mix-context/mix-context.service.js';
+import { type SeasonPlan, SeasonsService } from '../seasons/seasons.service.js';
+import { Clock } from './clock.js';
+import { ShareDb } from './share-db.js';
+import { type Released, ShareLedger, type WaitlistOfferMade } from './share-ledger.js';
+import type { LineRow, ReservationRow, SlotRow } from './share-rows.js';
+import { ShareViews } from './share-views.js';
+
+/** The organiser's side of the plant share: open it, slots, stock, status, pickup day and the report. */
+@Injectable()
+export class PlantShareService {
+  constructor(
+    private readonly db: ShareDb,
+    private readonly ledger: ShareLedger,
+    private readonly views: ShareViews,
+    private readonly groups: GroupsService,
+    private readonly seasons: SeasonsService,
+    private readonly ctx: MixContextService,
+    private readonly clock: Clock,
+  ) {}
+
+  /**
+   * The stock a new share starts with. For now the season's targets; once growers log batches, their
+   * ready counts replace this (the one place to change).
+   */
+  initialStockFor(season: SeasonPlan): StockLine[] {
+    return season.targets.map((t) => ({ speciesSlug: t.slug, count: t.targetPlants }));
+  }
+
+  async open(slug: string, user: AuthenticatedUser, req: OpenShareRequest): Promise<PlantShare> {
+    const group = await this.managed(slug, user);
+    const season = await this.seasons.latestPlan(group.id);
+    if (!season) throw new NotFoundException(`${group.name} has no season plan yet: set the season's dates first.`);
+    const now = this.clock.now();
+    const problems: FieldProblem[] = [];
+    if (req.date < now.toISOString().slice(0, 10)) problems.push({ field: 'date', message: 'is in the past' });
+    req.slots.forEach((s, i) => problems.push(...slotProblems(s, req.date, now, `slots.${i}`)));
+    const stock = req.stock ?? this.initialStockFor(season);
+    if (req.stock)
+      this.ctx.assertKnown(req.stock.map((l, i) => ({ field: `stock.${i}.speciesSlug`, slug: l.speciesSlug })));
+    if (problems.length) throw badRequest(problems);
+    const id = randomUUID();
+    this.db.atomically(() => {
+      if (this.db.get('SELECT id FROM plant_shares WHERE season_id = ?', season.id))
+        throw new ConflictException(`${group.name}'s ${season.year} plant share is open already: change it instead.`);
+      this.db.run(
+        `INSERT INTO plant_shares (id, group_id, season_id, share_date, place_name, place_address, place_directions, status,
+           per_species_limit, total_limit, retention_days) VALUES (?, ?, ?, ?, ?, ?, ?, 'open', ?, ?, ?)`,
+        id,
+        group.id,
+        season.id,
+        req.date,
+        req.place.name,
+        req.place.address,
+        req.place.directions ?? null,
+        req.limits.perSpecies,
+        req.limits.total,
+        req.retentionDays ?? DEFAULT_RETENTION_DAYS,
+      );
+      for (const s of req.slots) this.insertSlot(id, s);
+      stock.forEach((l, position) =>
+        this.db.run(
+          'INSERT INTO share_stock (id, share_id, slug, offered, remaining, position) VALUES (?, ?, ?, ?, ?, ?)',
+          randomUUID(),
+          id,
+          l.speciesSlug,
+          l.count,
+          l.count,
+          position,
+        ),
+      );
+    });
+    return this.views.organiserView(group, this.views.shareById(id));
+  }
+
+  async get(slug: string, user: AuthenticatedUser): Promise<PlantShare> {
+    const group = await this.managed(slug, user);
+    return this.views.organiserView(group, this.views.requireShare(group));
+  }
+
+  async edit(slug: string, user: AuthenticatedUser, req: EditShareRequest): Promise<PlantShare> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    const now = this.clock.now();
+    if (req.date !== undefined) {
+      const problems: FieldProblem[] = [];
+      if (req.date < now.toISOString().slice(0, 10)) problems.push({ field: 'date', message: 'is in the past' });
+      // Moving the day moves every slot's day: slots on the old day would point people to the wrong day.
+      if (req.date !== share.share_date && this.views.slots(share.id).length > 0)
+        problems.push({ field: 'date', message: 'cannot move while the share has pickup slots on its old day' });
+      if (problems.length) throw badRequest(problems);
+    }
+    this.db.atomically(() => {
+      this.db.run(
+        `UPDATE plant_shares SET share_date = ?, place_name = ?, place_address = ?, place_directions = ?,
+           per_species_limit = ?, total_limit = ?, retention_days = ?, updated_at = datetime('now') WHERE id = ?`,
+        req.date ?? share.share_date,
+        req.place?.name ?? share.place_name,
+        req.place?.address ?? share.place_address,
+        req.place ? (req.place.directions ?? null) : share.place_directions,
+        req.limits?.perSpecies ?? share.per_species_limit,
+        req.limits?.total ?? share.total_limit,
+        req.retentionDays ?? share.retention_days,
+        share.id,
+      );
+    });
+    return this.views.organiserView(group, this.views.shareById(share.id));
+  }
+
+  async addSlot(slug: string, user: AuthenticatedUser, req: PickupSlotRequest): Promise<PlantShare> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    const problems = slotProblems(req, share.share_date, this.clock.now(), '');
+    if (problems.length) throw badRequest(problems);
+    this.db.atomically(() => {
+      const n = this.db.get<{ n: number }>('SELECT COUNT(*) AS n FROM share_slots WHERE share_id = ?', share.id)!;
+      if (Number(n.n) >= 60) throw new ConflictException('This share has 60 pickup slots, the most it can have.');
+      this.insertSlot(share.id, req);
+    });
+    return this.views.organiserView(group, share);
+  }
+
+  async editSlot(slug: string, user: AuthenticatedUser, slotId: string, req: PickupSlotRequest): Promise<PlantShare> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    const problems = slotProblems(req, share.share_date, this.clock.now(), '');
+    if (problems.length) throw badRequest(problems);
+    this.db.atomically(() => {
+      const slot = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ? AND share_id = ?', slotId, share.id);
+      if (!slot) throw new NotFoundException('No such pickup slot in this share.');
+      // Never below the households already booked: they were promised their place.
+      const changed = this.db.run(
+        `UPDATE share_slots SET starts_at = ?, ends_at = ?, starts_at_ms = ?, ends_at_ms = ?, capacity = ?
+         WHERE id = ? AND booked <= ?`,
+        req.start,
+        req.end,
+        Date.parse(req.start),
+        Date.parse(req.end),
+        req.capacity,
+        slotId,
+        req.capacity,
+      );
+      if (changed !== 1)
+        throw badRequest([
+          {
+            field: 'capacity',
+            message: `must be at least ${slot.booked}: that many households are booked in this slot`,
+          },
+        ]);
+    });
+    return this.views.organiserView(group, share);
+  }
+
+  /** Sets the plants still on offer of each species listed; an increase goes to the waitlist first. */
+  async setStock(slug: string, user: AuthenticatedUser, req: SetStockRequest): Promise<PlantShare> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    this.ctx.assertKnown(req.stock.map((l, i) => ({ field: `stock.${i}.speciesSlug`, slug: l.speciesSlug })));
+    const offers = this.db.atomically(() => {
+      const made: WaitlistOfferMade[] = [];
+      for (const l of req.stock) {
+        this.ledger.ensureStockRow(share.id, l.speciesSlug);
+        const row = this.db.get<{ remaining: number }>(
+          'SELECT remaining FROM share_stock WHERE share_id = ? AND slug = ?',
+          share.id,
+          l.speciesSlug,
+        )!;
+        const delta = l.count - row.remaining;
+        if (delta > 0) {
+          this.db.run(
+            'UPDATE share_stock SET offered = offered + ? WHERE share_id = ? AND slug = ?',
+            delta,
+            share.id,
+            l.speciesSlug,
+          );
+          made.push(...this.ledger.release(share.id, l.speciesSlug, delta).offers);
+        } else if (delta < 0) {
+          this.db.run(
+            'UPDATE share_stock SET offered = offered + ?, remaining = ? WHERE share_id = ? AND slug = ?',
+            delta,
+            l.count,
+            share.id,
+            l.speciesSlug,
+          );
+        }
+      }
+      return made;
+    });
+    await this.views.sendOffers(group, share, offers);
+    return this.views.organiserView(group, share);
+  }
+
+  /** Adds plants that became ready; the waitlist is offered them first, in order. */
+  async addStock(slug: string, user: AuthenticatedUser, req: AddStockRequest): Promise<PlantShare> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    this.ctx.assertKnown(req.lines.map((l, i) => ({ field: `lines.${i}.speciesSlug`, slug: l.speciesSlug })));
+    const offers = this.db.atomically(() =>
+      req.lines.flatMap((l) => {
+        this.ledger.ensureStockRow(share.id, l.speciesSlug);
+        this.db.run(
+          'UPDATE share_stock SET offered = offered + ? WHERE share_id = ? AND slug = ?',
+          l.count,
+          share.id,
+          l.speciesSlug,
+        );
+        return this.ledger.release(share.id, l.speciesSlug, l.count).offers;
+      }),
+    );
+    await this.views.sendOffers(group, share, offers);
+    return this.views.organiserView(group, share);
+  }
+
+  async setStatus(slug: string, user: AuthenticatedUser, req: ShareStatusRequest): Promise<PlantShare> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    this.db.atomically(() =>
+      this.db.run(
+        `UPDATE plant_shares SET status = ?, updated_at = datetime('now') WHERE id = ?`,
+        req.status,
+        share.id,
+      ),
+    );
+    return this.views.organiserView(group, this.views.shareById(share.id));
+  }
+
+  /** The printable list of one slot: households, their plants, and check boxes (the web prints it). */
+  async pickupList(slug: string, user: AuthenticatedUser, slotId: string): Promise<PickupList> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    const slot = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ? AND share_id = ?', slotId, share.id);
+    if (!slot) throw new NotFoundException('No such pickup slot in this share.');
+    const rows = this.db.all<ReservationRow>(
+      `SELECT * FROM share_reservations WHERE slot_id = ? AND status != 'cancelled' ORDER BY name COLLATE NOCASE, created_at`,
+      slotId,
+    );
+    const lines = this.views.linesOf(rows.map((r) => r.id));
+    const households = rows.map((r) => this.views.household(r, lines.get(r.id) ?? []));
+    const bySpecies = new Map<string, number>();
+    for (const h of households)
+      if (h.status !== 'no-show')
+        for (const l of h.lines) bySpecies.set(l.speciesSlug, (bySpecies.get(l.speciesSlug) ?? 0) + l.count);
+    return {
+      slot: this.views.slot(slot),
+      households,
+      totals: {
+        households: households.filter((h) => h.status !== 'no-show').length,
+        plants: [...bySpecies.values()].reduce((n, c) => n + c, 0),
+        bySpecies: [...bySpecies].map(([s, count]) => ({
+          speciesSlug: s,
+          commonName: this.views.names(s).commonName,
+          count,
+        })),
+      },
+    };
+  }
+
+  /** Pickup day: the household came, or did not (their plants go to the waitlist, else back on offer). */
+  async checkIn(
+    slug: string,
+    user: AuthenticatedUser,
+    reservationId: string,
+    req: CheckInRequest,
+  ): Promise<CheckInResult> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    const { row, released } = this.db.atomically(() => {
+      const r = this.db.get<ReservationRow>(
+        'SELECT * FROM share_reservations WHERE id = ? AND share_id = ?',
+        reservationId,
+        share.id,
+      );
+      if (!r) throw new NotFoundException('No such reservation in this share.');
+      const changed = this.db.run(
+        `UPDATE share_reservations SET status = ?, updated_at = ? WHERE id = ? AND status = 'confirmed'`,
+        req.outcome,
+        this.clock.now().toISOString(),
+        r.id,
+      );
+      if (changed !== 1) throw new ConflictException(`This reservation is ${r.status} already.`);
+      const out: Released[] = [];
+      if (req.outcome === 'no-show') {
+        this.ledger.freeSlot(r.slot_id);
+        for (const l of this.linesOfOne(r.id)) out.push(this.ledger.release(share.id, l.slug, l.count));
+      }
+      return { row: { ...r, status: req.outcome }, released: out };
+    });
+    await this.views.sendOffers(
+      group,
+      share,
+      released.flatMap((r) => r.offers),
+    );
+    return {
+      household: this.views.household(row, this.linesOfOne(row.id)),
+      released: released.map((r) => ({ speciesSlug: r.slug, toWaitlist: r.toWaitlist, toStock: r.toStock })),
+    };
+  }
+
+  /** Records plants given without a reservation; they come off the stock the same way. */
+  async walkUp(slug: string, user: AuthenticatedUser, req: { lines: PlantLine[]; zip?: string }): Promise<WalkUpGift> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    const id = randomUUID();
+    const givenAt = this.clock.now().toISOString();
+    this.db.atomically(() => {
+      const short: FieldProblem[] = [];
+      req.lines.forEach((l, i) => {
+        if (!this.ledger.takeStock(share.id, l.speciesSlug, l.count)) {
+          const left = this.db.get<{ remaining: number }>(
+            'SELECT remaining FROM share_stock WHERE share_id = ? AND slug = ?',
+            share.id,
+            l.speciesSlug,
+          );
+          short.push({
+            field: `lines.${i}.count`,
+            message: left ? `only ${left.remaining} left on offer` : 'is not a species on offer at this share',
+          });
+        }
+      });
+      if (short.length)
+        throw new ConflictException({ message: 'Not enough plants left for this walk-up.', fields: short });
+      this.db.run(
+        'INSERT INTO share_walk_ups (id, share_id, zip_area, given_at) VALUES (?, ?, ?, ?)',
+        id,
+        share.id,
+        req.zip ? req.zip.slice(0, 3) : null,
+        givenAt,
+      );
+      for (const l of req.lines)
+        this.db.run(
+          'INSERT INTO share_walk_up_lines (id, walk_up_id, slug, count) VALUES (?, ?, ?, ?)',
+          randomUUID(),
+          id,
+          l.speciesSlug,
+          l.count,
+        );
+    });
+    return { id, lines: req.lines.map((l) => this.views.line({ slug: l.speciesSlug, count: l.count })), givenAt };
+  }
+
+  async report(slug: string, user: AuthenticatedUser): Promise<ShareReport> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    const season = await this.seasons.latestPlan(group.id);
+    const given = [...this.views.givenBySlug(share.id)].map(([speciesSlug, count]) => ({ speciesSlug, count }));
+    const picked = this.db.all<{ zip: string }>(
+      `SELECT zip FROM share_reservations WHERE share_id = ? AND status = 'picked-up'`,
+      share.id,
+    );
+    const walkUps = this.db.all<{ zip_area: string | null }>(
+      'SELECT zip_area FROM share_walk_ups WHERE share_id = ?',
+      share.id,
+    );
+    const targets = season && season.id === share.season_id ? season.targets : [];
+    const slugs = new Set([...given.map((g) => g.speciesSlug), ...targets.map((t) => t.slug)]);
+    const species = new Map<string, Species>();
+    for (const s of slugs) {
+      const record = this.ctx.get(s);
+      if (record) species.set(s, record);
+    }
+    return seasonReport({
+      groupSlug: group.slug,
+      groupName: group.name,
+      seasonYear: season?.year ?? Number(share.share_date.slice(0, 4)),
+      shareDate: share.share_date,
+      given,
+      reservedHouseholds: picked.length,
+      walkUps: walkUps.length,
+      zips: [...picked.map((p) => p.zip), ...walkUps.flatMap((w) => (w.zip_area ? [w.zip_area] : []))],
+      targets: targets.map((t) => ({ speciesSlug: t.slug, targetPlants: t.targetPlants })),
+      species,
+      // Germination by method and grower arrives with batch logs.
+      germination: null,
+    });
+  }
+
+  async reportCsv(slug: string, user: AuthenticatedUser): Promise<string> {
+    return shareReportToCsv(await this.report(slug, user));
+  }
+
+  private linesOfOne(reservationId: string): LineRow[] {
+    return this.views.linesOf([reservationId]).get(reservationId) ?? [];
+  }
+
+  private insertSlot(shareId: string, s: PickupSlotRequest): void {
+    this.db.run(
+      `INSERT INTO share_slots (id, share_id, starts_at, ends_at, starts_at_ms, ends_at_ms, capacity, booked)
+       VALUES (?, ?, ?, ?, ?, ?, ?, 0)`,
+      randomUUID(),
+      shareId,
+      s.start,
+      s.end,
+      Date.parse(s.start),
+      Date.parse(s.end),
+      s.capacity,
+    );
+  }
+
+  /** The group, when the caller organises it (admins act as organisers). */
+  private async managed(slug: string, user: AuthenticatedUser): Promise<Group> {
+    const group = await this.groups.getDto(slug);
+    if ((await this.groups.roleOf(user, group.id)) !== 'organiser')
+      throw new ForbiddenException('Only an organiser of this group can run its plant share and see its takers.');
+    return group;
+  }
+}
+
+/** A slot must be on the share's day (by the organiser's own clock) and not have started. */
+function slotProblems(s: PickupSlotRequest, shareDate: string, now: Date, prefix: string): FieldProblem[] {
+  const field = (f: string) => (prefix ? `${prefix}.${f}` : f);
+  const problems: FieldProblem[] = [];
+  if (s.start.slice(0, 10) !== shareDate)
+    problems.push({ field: field('start'), message: `must be on the share day, ${shareDate}` });
+  if (Date.parse(s.start) <= now.getTime()) problems.push({ field: field('start'), message: 'is in the past' });
+  return problems;
+}

@@ -1,0 +1,483 @@
+import { randomUUID } from 'node:crypto';
+import { ConflictException, ForbiddenException, GoneException, Injectable, Logger } from '@nestjs/common';
+import {
+  type ChangeReservationRequest,
+  checkHouseholdLimits,
+  type ClaimOfferRequest,
+  type Group,
+  isNativeMilkweed,
+  type ParsedReservationRequest,
+  type PlantLine,
+  type PublicPlantShare,
+  rankForYard,
+  type ReservationCreated,
+  type ShareFitQuery,
+  type ShareSpecies,
+  type StateCode,
+  type TakerReservation,
+  type WaitlistJoined,
+  bloomWords,
+  CAUTION_WORDS,
+  wildlifeSummary,
+} from '@homeground/shared';
+import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
+import { GroupsService } from '../groups/groups.service.js';
+import { MailService } from '../mail/mail.service.js';
+import { MixContextService } from '../mix-context/mix-context.service.js';
+import { Clock } from './clock.js';
+import { ShareDb } from './share-db.js';
+import { type Released, ShareLedger } from './share-ledger.js';
+import { reservationEmail } from './share-emails.js';
+import type { LineRow, ReservationRow, ShareRow, SlotRow, StockRow, WaitlistRow } from './share-rows.js';
+import { hashToken, newToken } from './share-tokens.js';
+import { ShareViews } from './share-views.js';
+
+/** General words under the list of plants: the usual cautions, and local rules first. */
+const SHARE_NOTES = [
+  'Cautions are shown with each plant, as on its fact card: wear gloves for plants with irritating sap and wash your hands after handling them.',
+  'Before you dig, call 811 so buried lines are marked; your town’s rules for planting by streets, sidewalks and drains come first.',
+];
+
+/** The taker's side: the public page, reservations by private link, and the waitlist. */
+@Injectable()
+export class ReservationsService {
+  private readonly logger = new Logger('PlantShare');
+
+  constructor(
+    private readonly db: ShareDb,
+    private readonly ledger: ShareLedger,
+    private readonly views: ShareViews,
+    private readonly groups: GroupsService,
+    private readonly ctx: MixContextService,
+    private readonly mail: MailService,
+    private readonly clock: Clock,
+  ) {}
+
+  /** The group's share as anyone sees it; with a yard, ranked by how well each plant fits it. */
+  async publicShare(slug: string, yard: ShareFitQuery): Promise<PublicPlantShare> {
+    const group = await this.groups.getDto(slug);
+    const share = this.views.requireShare(group);
+    const nowMs = this.clock.now().getTime();
+    const stock = this.views.stock(share.id).filter((s) => s.offered > 0);
+    const records = stock.flatMap((s) => {
+      const r = this.ctx.get(s.slug);
+      return r ? [{ stock: s, record: r }] : [];
+    });
+    const fits =
+      yard.sun && yard.moisture
+        ? rankForYard(
+            records.map((r) => r.record),
+            { sun: yard.sun, moisture: yard.moisture },
+            { state: group.state as StateCode, ...(group.ecoregionCode ? { ecoregionCode: group.ecoregionCode } : {}) },
+          )
+        : null;
+    const species: ShareSpecies[] = records.map(({ stock: s, record }) => {
+      const w = wildlifeSummary(record);
+      return {
+        slug: s.slug,
+        commonName: record.commonNames[0],
+        scientificName: record.scientificName,
+        growthForm: record.growthForm,
+        heightCm: { min: record.heightCm.min, max: record.heightCm.max },
+        bloomMonths: record.bloomMonths,
+        bloomWords: bloomWords(record.bloomMonths),
+        flowerColours: record.flowerColours,
+        sun: record.sun,
+        moisture: record.moisture,
+        isMilkweed: isNativeMilkweed(record),
+        remaining: s.remaining,
+        wildlife: { caterpillars: w.caterpillars, bees: w.bees, monarchs: w.monarchs, birds: w.birds },
+        cautions: record.cautions.map((c) => ({ kind: c.kind, title: CAUTION_WORDS[c.kind].title, text: c.text })),
+        fit: fits?.get(s.slug) ?? null,
+      };
+    });
+    if (fits) species.sort((a, b) => a.fit!.rank - b.fit!.rank);
+    return {
+      groupSlug: group.slug,
+      groupName: group.name,
+      town: group.town,
+      state: group.state,
+      date: share.share_date,
+      place: this.views.place(share),
+      status: share.status,
+      limits: { perSpecies: share.per_species_limit, total: share.total_limit },
+      slots: this.views.slots(share.id).map((s) => ({
+        id: s.id,
+        start: s.starts_at,
+        end: s.ends_at,
+        left: s.capacity - s.booked,
+        past: s.starts_at_ms <= nowMs,
+      })),
+      species,
+      yard: yard.sun && yard.moisture ? { sun: yard.sun, moisture: yard.moisture } : null,
+      notes: SHARE_NOTES,
+    };
+  }
+
+  /**
+   * Takes a reservation: the slot and every line in one transaction of conditional decrements, so
+   * concurrent requests can never take more plants or places than there are. Anything short answers
+   * 409 and writes nothing.
+   */
+  async reserve(slug: string, req: ParsedReservationRequest): Promise<ReservationCreated> {
+    const group = await this.groups.getDto(slug);
+    const share = this.views.requireShare(group);
+    assertOpen(share);
+    const now = this.clock.now();
+    this.checkLines(share, req.lines);
+    const slot = this.slotOf(share, req.slotId, now.getTime(), 'slotId');
+    const { token, hash } = newToken();
+    const id = randomUUID();
+    const stamp = now.toISOString();
+    this.db.atomically(() => {
+      assertOpen(this.views.shareById(share.id));
+      if (
+        this.db.get(
+          `SELECT id FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
+          share.id,
+          req.email,
+        )
+      )
+        throw new ConflictException({
+          message: `${req.email} has a reservation at this share already: change it with the link in its e-mail.`,
+          fields: [{ field: 'email', message: 'has a reservation at this share already' }],
+        });
+      this.bookOrExplain(slot, now.getTime(), 'slotId');
+      this.takeOrExplain(share, group, req.lines);
+      this.db.run(
+        `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at)
+         VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?)`,
+        id,
+        share.id,
+        slot.id,
+        hash,
+        req.name,
+        req.email,
+        req.zip,
+        stamp,
+        stamp,
+      );
+      this.insertLines(id, req.lines);
+    });
+    const row = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', id)!;
+    const view = this.views.takerView(group, share, row, now.getTime());
+    const manageUrl = this.manageUrl(token);
+    await this.sendConfirmation(group, view, manageUrl, false);
+    return { ...view, manageUrl };
+  }
+
+  async byToken(token: string): Promise<TakerReservation> {
+    const { group, share, row } = await this.open(token);
+    return this.views.takerView(group, share, row, this.clock.now().getTime());
+  }
+
+  /** Changes the slot, the plants or both; all of it or nothing. */
+  async change(token: string, req: ChangeReservationRequest): Promise<TakerReservation> {
+    const { group, share, row } = await this.open(token);
+    assertOpen(share);
+    const now = this.clock.now();
+    const current = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', row.slot_id)!;
+    if (row.status !== 'confirmed')
+      throw new ConflictException(`This reservation is ${row.status}: it can no longer change.`);
+    if (current.starts_at_ms <= now.getTime())
+      throw new ConflictException('Your pickup slot has started: ask the volunteers at the share.');
+    if (req.lines) this.checkLines(share, req.lines);
+    const next =
+      req.slotId && req.slotId !== row.slot_id ? this.slotOf(share, req.slotId, now.getTime(), 'slotId') : null;
+    const released = this.db.atomically(() => {
+      const again = this.db.get<ReservationRow>('SELECT status FROM share_reservations WHERE id = ?', row.id)!;
+      if (again.status !== 'confirmed')
+        throw new ConflictException(`This reservation is ${again.status}: it can no longer change.`);
+      if (next) {
+        this.bookOrExplain(next, now.getTime(), 'slotId');
+        this.ledger.freeSlot(row.slot_id);
+      }
+      const out: Released[] = [];
+      if (req.lines) {
+        const old = new Map(this.linesOf(row.id).map((l) => [l.slug, l.count]));
+        const want = new Map(req.lines.map((l) => [l.speciesSlug, l.count]));
+        // Take the extra plants first: if any is short, nothing has been given back yet.
+        const more = req.lines
+          .map((l, i) => ({ ...l, index: i, count: l.count - (old.get(l.speciesSlug) ?? 0) }))
+          .filter((l) => l.count > 0);
+        this.takeOrExplain(share, group, more, (_l, i) => `lines.${more[i].index}.count`);
+        for (const [slug, had] of old) {
+          const fewer = had - (want.get(slug) ?? 0);
+          if (fewer > 0) out.push(this.ledger.release(share.id, slug, fewer));
+        }
+        this.db.run('DELETE FROM share_reservation_lines WHERE reservation_id = ?', row.id);
+        this.insertLines(row.id, req.lines);
+      }
+      this.db.run(
+        'UPDATE share_reservations SET slot_id = ?, updated_at = ? WHERE id = ?',
+        next?.id ?? row.slot_id,
+        now.toISOString(),
+        row.id,
+      );
+      return out;
+    });
+    await this.views.sendOffers(
+      group,
+      share,
+      released.flatMap((r) => r.offers),
+    );
+    const fresh = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', row.id)!;
+    const view = this.views.takerView(group, share, fresh, now.getTime());
+    await this.sendConfirmation(group, view, this.manageUrl(token), true);
+    return view;
+  }
+
+  /** Cancels: the place in the slot comes free and the plants go to the waitlist, else back on offer. */
+  async cancel(token: string): Promise<TakerReservation> {
+    const { group, share, row } = await this.open(token);
+    const now = this.clock.now();
+    const released = this.db.atomically(() => {
+      const changed = this.db.run(
+        `UPDATE share_reservations SET status = 'cancelled', updated_at = ? WHERE id = ? AND status = 'confirmed'`,
+        now.toISOString(),
+        row.id,
+      );
+      if (changed !== 1) throw new ConflictException(`This reservation is ${row.status}: there is nothing to cancel.`);
+      this.ledger.freeSlot(row.slot_id);
+      return this.linesOf(row.id).map((l) => this.ledger.release(share.id, l.slug, l.count));
+    });
+    await this.views.sendOffers(
+      group,
+      share,
+      released.flatMap((r) => r.offers),
+    );
+    const fresh = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', row.id)!;
+    return this.views.takerView(group, share, fresh, now.getTime());
+  }
+
+  /** Joins the waitlist of species that ran out; each line keeps its place in the order joined. */
+  async joinWaitlist(
+    slug: string,
+    req: { name: string; email: string; zip: string; lines: PlantLine[] },
+  ): Promise<WaitlistJoined> {
+    const group = await this.groups.getDto(slug);
+    const share = this.views.requireShare(group);
+    if (share.status === 'closed') throw new ConflictException('This plant share is closed.');
+    this.checkLines(share, req.lines);
+    const stamp = this.clock.now().toISOString();
+    const entries = this.db.atomically(() =>
+      req.lines.map((l) => {
+        const seq = this.db.get<{ s: number | null }>(
+          'SELECT MAX(seq) AS s FROM share_waitlist WHERE share_id = ?',
+          share.id,
+        )!;
+        this.db.run(
+          `INSERT INTO share_waitlist (id, share_id, slug, count, held, status, token_hash, name, email, zip, seq, created_at)
+           VALUES (?, ?, ?, ?, 0, 'waiting', NULL, ?, ?, ?, ?, ?)`,
+          randomUUID(),
+          share.id,
+          l.speciesSlug,
+          l.count,
+          req.name,
+          req.email,
+          req.zip,
+          (seq.s ?? 0) + 1,
+          stamp,
+        );
+        const ahead = this.db.get<{ n: number }>(
+          `SELECT COUNT(*) AS n FROM share_waitlist WHERE share_id = ? AND slug = ? AND status = 'waiting'`,
+          share.id,
+          l.speciesSlug,
+        )!;
+        return {
+          speciesSlug: l.speciesSlug,
+          commonName: this.views.names(l.speciesSlug).commonName,
+          count: l.count,
+          position: Number(ahead.n),
+        };
+      }),
+    );
+    return { entries };
+  }
+
+  /**
+   * Takes the plants a waitlist offer holds: added to the household's reservation if it has one, else
+   * a new reservation in the slot chosen (booked the same conditional way).
+   */
+  async claimOffer(token: string, req: ClaimOfferRequest): Promise<ReservationCreated> {
+    const entry = this.db.get<WaitlistRow & { token_hash: string }>(
+      'SELECT * FROM share_waitlist WHERE token_hash = ?',
+      hashToken(token),
+    );
+    if (!entry) throw new ForbiddenException('This link is not one we sent.');
+    if (entry.status !== 'offered') throw new GoneException('These plants have been claimed already.');
+    if (!entry.email || !entry.name) throw new GoneException('This offer was kept no longer than the share allows.');
+    const share = this.views.shareById(entry.share_id);
+    const group = await this.groups.getDtoById(share.group_id);
+    assertOpen(share);
+    const now = this.clock.now();
+    const existing = this.db.get<ReservationRow>(
+      `SELECT * FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
+      share.id,
+      entry.email,
+    );
+    const slot = existing ? null : this.slotOf(share, req.slotId, now.getTime(), 'slotId');
+    const fresh = newToken();
+    const reservationId = this.db.atomically(() => {
+      if (
+        this.db.run(`UPDATE share_waitlist SET status = 'claimed' WHERE id = ? AND status = 'offered'`, entry.id) !== 1
+      )
+        throw new GoneException('These plants have been claimed already.');
+      if (existing) {
+        const had = this.db.get<{ count: number }>(
+          'SELECT count FROM share_reservation_lines WHERE reservation_id = ? AND slug = ?',
+          existing.id,
+          entry.slug,
+        );
+        if (had)
+          this.db.run(
+            'UPDATE share_reservation_lines SET count = count + ? WHERE reservation_id = ? AND slug = ?',
+            entry.held,
+            existing.id,
+            entry.slug,
+          );
+        else this.insertLines(existing.id, [{ speciesSlug: entry.slug, count: entry.held }]);
+        // A new link for the household: the old one still works, this one is the one the e-mail carries.
+        this.db.run(
+          'UPDATE share_reservations SET token_hash = ?, updated_at = ? WHERE id = ?',
+          fresh.hash,
+          now.toISOString(),
+          existing.id,
+        );
+        return existing.id;
+      }
+      this.bookOrExplain(slot!, now.getTime(), 'slotId');
+      const id = randomUUID();
+      this.db.run(
+        `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at)
+         VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?)`,
+        id,
+        share.id,
+        slot!.id,
+        fresh.hash,
+        entry.name,
+        entry.email,
+        entry.zip,
+        now.toISOString(),
+        now.toISOString(),
+      );
+      this.insertLines(id, [{ speciesSlug: entry.slug, count: entry.held }]);
+      return id;
+    });
+    const row = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', reservationId)!;
+    const view = this.views.takerView(group, share, row, now.getTime());
+    const manageUrl = this.manageUrl(fresh.token);
+    await this.sendConfirmation(group, view, manageUrl, Boolean(existing));
+    return { ...view, manageUrl };
+  }
+
+  private manageUrl(token: string): string {
+    return `${this.views.publicUrl()}/plant-share/reservations/${token}`;
+  }
+
+  private async sendConfirmation(group: Group, view: TakerReservation, link: string, changed: boolean): Promise<void> {
+    const message = reservationEmail({
+      name: view.name,
+      groupName: group.name,
+      place: view.share.place,
+      slot: view.slot,
+      lines: view.lines,
+      careSheet: view.careSheet,
+      link,
+      changed,
+    });
+    // The reservation stands if the mail fails; the confirmation page shows the same link.
+    await this.mail
+      .send({ to: view.email, ...message, kind: 'plant-share-reservation', groupId: group.id })
+      .catch((e: unknown) => this.logger.error(`Reservation e-mail failed: ${String(e)}`));
+  }
+
+  /** The reservation a private link opens; an unknown link is refused as forged. */
+  private async open(token: string): Promise<{ group: Group; share: ShareRow; row: ReservationRow }> {
+    const row = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE token_hash = ?', hashToken(token));
+    if (!row) throw new ForbiddenException('This link is not one we sent: use the link in your confirmation e-mail.');
+    const share = this.views.shareById(row.share_id);
+    if (row.name === null) throw new GoneException('This reservation was kept no longer than the share allows.');
+    const group = await this.groups.getDtoById(share.group_id);
+    return { group, share, row };
+  }
+
+  /** Each species must be on offer here, and the lines within the household limits (400 naming the line). */
+  private checkLines(share: ShareRow, lines: readonly PlantLine[]): void {
+    const offered = new Set(
+      this.views
+        .stock(share.id)
+        .filter((s) => s.offered > 0)
+        .map((s) => s.slug),
+    );
+    const problems: FieldProblem[] = lines.flatMap((l, i) =>
+      offered.has(l.speciesSlug) ? [] : [{ field: `lines.${i}.speciesSlug`, message: 'is not offered at this share' }],
+    );
+    problems.push(...checkHouseholdLimits(lines, { perSpecies: share.per_species_limit, total: share.total_limit }));
+    if (problems.length) throw badRequest(problems);
+  }
+
+  private slotOf(share: ShareRow, slotId: string, nowMs: number, field: string): SlotRow {
+    const slot = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ? AND share_id = ?', slotId, share.id);
+    if (!slot) throw badRequest([{ field, message: 'is not a pickup slot of this share' }]);
+    if (slot.starts_at_ms <= nowMs) throw badRequest([{ field, message: 'is in the past: choose a later slot' }]);
+    return slot;
+  }
+
+  private bookOrExplain(slot: SlotRow, nowMs: number, field: string): void {
+    if (this.ledger.bookSlot(slot.id, nowMs)) return;
+    const now = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', slot.id)!;
+    if (now.starts_at_ms <= nowMs) throw badRequest([{ field, message: 'is in the past: choose a later slot' }]);
+    throw new ConflictException({
+      message: 'That pickup slot is full: choose another.',
+      fields: [{ field, message: 'is full' }],
+    });
+  }
+
+  /** Takes every line or none; when any ran out, 409 names each short line and offers the waitlist. */
+  private takeOrExplain(
+    share: ShareRow,
+    group: Group,
+    lines: readonly (PlantLine & { index?: number })[],
+    fieldOf: (l: PlantLine, i: number) => string = (_l, i) => `lines.${i}.count`,
+  ): void {
+    const short: { field: string; slug: string; left: number }[] = [];
+    lines.forEach((l, i) => {
+      if (this.ledger.takeStock(share.id, l.speciesSlug, l.count)) return;
+      const row = this.db.get<StockRow>(
+        'SELECT * FROM share_stock WHERE share_id = ? AND slug = ?',
+        share.id,
+        l.speciesSlug,
+      );
+      short.push({ field: fieldOf(l, i), slug: l.speciesSlug, left: row?.remaining ?? 0 });
+    });
+    if (short.length === 0) return;
+    const names = short.map((s) => this.views.names(s.slug).commonName);
+    throw new ConflictException({
+      message: `All taken: ${names.join(', ')} ${short.length === 1 ? 'has' : 'have'} no plants left for this request. Join the waitlist and we will e-mail you if plants come free.`,
+      fields: short.map((s) => ({ field: s.field, message: s.left === 0 ? 'all taken' : `only ${s.left} left` })),
+      waitlist: { speciesSlugs: short.map((s) => s.slug), path: `/api/plant-shares/${group.slug}/waitlist` },
+    });
+  }
+
+  private linesOf(reservationId: string): LineRow[] {
+    return this.views.linesOf([reservationId]).get(reservationId) ?? [];
+  }
+
+  private insertLines(reservationId: string, lines: readonly PlantLine[]): void {
+    for (const l of lines)
+      this.db.run(
+        'INSERT INTO share_reservation_lines (id, reservation_id, slug, count) VALUES (?, ?, ?, ?)',
+        randomUUID(),
+        reservationId,
+        l.speciesSlug,
+        l.count,
+      );
+  }
+}
+
+/** Reservations are taken only while the share is open. */
+function assertOpen(share: ShareRow): void {
+  if (share.status === 'paused') throw new ConflictException('Reservations are paused for now: try again later.');
+  if (share.status === 'closed') throw new ConflictException('This plant share is closed.');
+}

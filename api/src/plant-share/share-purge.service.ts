@@ -1,0 +1,69 @@
+import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
+import { MailService } from '../mail/mail.service.js';
+import { Clock } from './clock.js';
+import { ShareDb } from './share-db.js';
+import { addDays } from './share-views.js';
+
+/** How often the purge runs after the one at start: hourly is well inside a retention counted in days. */
+export const PURGE_INTERVAL_MS = 60 * 60 * 1000;
+
+/**
+ * Keeps takers' names and e-mails no longer than the share's retention: once `retention_days` have
+ * passed after the share date, reservations and waitlist entries lose their name and e-mail, their
+ * ZIP is cut to its 3-digit area and their private links stop working; the share's e-mails leave the
+ * local outbox. Counts for the report stay. Runs at start and then every hour.
+ */
+@Injectable()
+export class SharePurgeService implements OnApplicationBootstrap, OnModuleDestroy {
+  private readonly logger = new Logger('PlantSharePurge');
+  private timer: NodeJS.Timeout | null = null;
+
+  constructor(
+    private readonly db: ShareDb,
+    private readonly mail: MailService,
+    private readonly clock: Clock,
+  ) {}
+
+  async onApplicationBootstrap(): Promise<void> {
+    await this.purge();
+    this.timer = setInterval(() => {
+      this.purge().catch((e: unknown) => this.logger.error(`Purge failed: ${String(e)}`));
+    }, PURGE_INTERVAL_MS);
+    this.timer.unref();
+  }
+
+  onModuleDestroy(): void {
+    if (this.timer) clearInterval(this.timer);
+  }
+
+  /** Purges every share whose retention has run out by now; answers how many shares were purged. */
+  async purge(): Promise<number> {
+    const today = this.clock.now().toISOString().slice(0, 10);
+    const due = this.db
+      .all<{ id: string; group_id: string; share_date: string; retention_days: number }>(
+        'SELECT id, group_id, share_date, retention_days FROM plant_shares WHERE personal_data_purged_at IS NULL',
+      )
+      .filter((s) => addDays(s.share_date, s.retention_days) < today);
+    for (const s of due) {
+      this.db.atomically(() => {
+        this.db.run(
+          `UPDATE share_reservations SET name = NULL, email = NULL, zip = substr(zip, 1, 3),
+             token_hash = 'purged:' || id WHERE share_id = ?`,
+          s.id,
+        );
+        this.db.run(
+          `UPDATE share_waitlist SET name = NULL, email = NULL, zip = substr(zip, 1, 3), token_hash = NULL WHERE share_id = ?`,
+          s.id,
+        );
+        this.db.run(
+          `UPDATE plant_shares SET personal_data_purged_at = ? WHERE id = ?`,
+          this.clock.now().toISOString(),
+          s.id,
+        );
+      });
+      await this.mail.forgetOutbox(s.group_id, 'plant-share-');
+    }
+    if (due.length) this.logger.log(`Deleted takers' names and e-mails of ${due.length} plant share(s)`);
+    return due.length;
+  }
+}

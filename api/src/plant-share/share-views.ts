@@ -1,0 +1,254 @@
+import { Inject, Injectable, Logger, NotFoundException } from '@nestjs/common';
+import {
+  careSheetFor,
+  type CareSheetEntry,
+  type Group,
+  type PickupHousehold,
+  type PickupSlot,
+  type PlantShare,
+  type ReservationLine,
+  RESERVATION_STATUSES,
+  type ReservationStatus,
+  type ShareStockLine,
+  type TakerReservation,
+} from '@homeground/shared';
+import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
+import { MailService } from '../mail/mail.service.js';
+import { MixContextService } from '../mix-context/mix-context.service.js';
+import { ShareDb } from './share-db.js';
+import { waitlistOfferEmail } from './share-emails.js';
+import type { WaitlistOfferMade } from './share-ledger.js';
+import {
+  type LineRow,
+  type ReservationRow,
+  SHARE_COLUMNS,
+  type ShareRow,
+  type SlotRow,
+  type StockRow,
+} from './share-rows.js';
+
+/** Adds `days` to an ISO date (UTC calendar arithmetic). */
+export function addDays(date: string, days: number): string {
+  return new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+}
+
+/**
+ * Reads a share and turns rows into the shared answer shapes; sends the waitlist offers that moves
+ * made. Names and e-mails leave here only in the organiser's pickup list and the taker's own view.
+ */
+@Injectable()
+export class ShareViews {
+  private readonly logger = new Logger('PlantShare');
+
+  constructor(
+    private readonly db: ShareDb,
+    private readonly ctx: MixContextService,
+    private readonly mail: MailService,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {}
+
+  /** The group's share for its newest season, or null. */
+  shareOf(groupId: string): ShareRow | null {
+    return (
+      this.db.get<ShareRow>(
+        `SELECT ${SHARE_COLUMNS} FROM plant_shares WHERE group_id = ? ORDER BY share_date DESC LIMIT 1`,
+        groupId,
+      ) ?? null
+    );
+  }
+
+  requireShare(group: Group): ShareRow {
+    const share = this.shareOf(group.id);
+    if (!share) throw new NotFoundException(`${group.name} has no plant share yet.`);
+    return share;
+  }
+
+  shareById(id: string): ShareRow {
+    return this.db.get<ShareRow>(`SELECT ${SHARE_COLUMNS} FROM plant_shares WHERE id = ?`, id)!;
+  }
+
+  slots(shareId: string): SlotRow[] {
+    return this.db.all<SlotRow>('SELECT * FROM share_slots WHERE share_id = ? ORDER BY starts_at_ms, id', shareId);
+  }
+
+  stock(shareId: string): StockRow[] {
+    return this.db.all<StockRow>('SELECT * FROM share_stock WHERE share_id = ? ORDER BY position', shareId);
+  }
+
+  linesOf(reservationIds: readonly string[]): Map<string, LineRow[]> {
+    const out = new Map<string, LineRow[]>();
+    if (reservationIds.length === 0) return out;
+    // Chunks keep the statement under SQLite's 999-parameter limit.
+    for (let i = 0; i < reservationIds.length; i += 500) {
+      const chunk = reservationIds.slice(i, i + 500);
+      const rows = this.db.all<LineRow>(
+        `SELECT reservation_id, slug, count FROM share_reservation_lines WHERE reservation_id IN (${chunk.map(() => '?').join(',')}) ORDER BY rowid`,
+        ...chunk,
+      );
+      for (const r of rows) out.set(r.reservation_id, [...(out.get(r.reservation_id) ?? []), r]);
+    }
+    return out;
+  }
+
+  names(slug: string): { commonName: string; scientificName: string } {
+    const s = this.ctx.get(slug);
+    return s
+      ? { commonName: s.commonNames[0], scientificName: s.scientificName }
+      : { commonName: slug, scientificName: slug };
+  }
+
+  line(l: { slug: string; count: number }): ReservationLine {
+    return { speciesSlug: l.slug, ...this.names(l.slug), count: l.count };
+  }
+
+  careSheet(slugs: readonly string[]): CareSheetEntry[] {
+    return slugs.flatMap((slug) => {
+      const s = this.ctx.get(slug);
+      return s ? [careSheetFor(s)] : [];
+    });
+  }
+
+  slot(s: SlotRow): PickupSlot {
+    return {
+      id: s.id,
+      start: s.starts_at,
+      end: s.ends_at,
+      capacity: s.capacity,
+      booked: s.booked,
+      left: s.capacity - s.booked,
+    };
+  }
+
+  /** The share as its organisers see it. */
+  organiserView(group: Group, share: ShareRow): PlantShare {
+    const season = this.db.get<{ year: number }>('SELECT year FROM seasons WHERE id = ?', share.season_id);
+    const counts = this.db.all<{ status: ReservationStatus; n: number }>(
+      'SELECT status, COUNT(*) AS n FROM share_reservations WHERE share_id = ? GROUP BY status',
+      share.id,
+    );
+    const households = Object.fromEntries(RESERVATION_STATUSES.map((s) => [s, 0])) as Record<ReservationStatus, number>;
+    for (const c of counts) households[c.status] = Number(c.n);
+    const reserved = this.sumBySlug(
+      `SELECT l.slug, SUM(l.count) AS n FROM share_reservation_lines l JOIN share_reservations r ON r.id = l.reservation_id
+       WHERE r.share_id = ? AND r.status = 'confirmed' GROUP BY l.slug`,
+      share.id,
+    );
+    const given = this.givenBySlug(share.id);
+    const waitlisted = this.sumBySlug(
+      `SELECT slug, SUM(count) AS n FROM share_waitlist WHERE share_id = ? AND status = 'waiting' GROUP BY slug`,
+      share.id,
+    );
+    const stock: ShareStockLine[] = this.stock(share.id).map((s) => ({
+      speciesSlug: s.slug,
+      ...this.names(s.slug),
+      offered: s.offered,
+      remaining: s.remaining,
+      reserved: reserved.get(s.slug) ?? 0,
+      given: given.get(s.slug) ?? 0,
+      waitlisted: waitlisted.get(s.slug) ?? 0,
+    }));
+    const walkUps = this.db.get<{ n: number }>('SELECT COUNT(*) AS n FROM share_walk_ups WHERE share_id = ?', share.id);
+    return {
+      id: share.id,
+      groupSlug: group.slug,
+      groupName: group.name,
+      seasonYear: season?.year ?? Number(share.share_date.slice(0, 4)),
+      date: share.share_date,
+      place: this.place(share),
+      status: share.status,
+      limits: { perSpecies: share.per_species_limit, total: share.total_limit },
+      retentionDays: share.retention_days,
+      personalDataKeptUntil: addDays(share.share_date, share.retention_days),
+      slots: this.slots(share.id).map((s) => this.slot(s)),
+      stock,
+      households,
+      walkUps: Number(walkUps?.n ?? 0),
+    };
+  }
+
+  /** Plants handed over by species: picked-up reservations and walk-ups. */
+  givenBySlug(shareId: string): Map<string, number> {
+    const picked = this.sumBySlug(
+      `SELECT l.slug, SUM(l.count) AS n FROM share_reservation_lines l JOIN share_reservations r ON r.id = l.reservation_id
+       WHERE r.share_id = ? AND r.status = 'picked-up' GROUP BY l.slug`,
+      shareId,
+    );
+    const walked = this.sumBySlug(
+      `SELECT l.slug, SUM(l.count) AS n FROM share_walk_up_lines l JOIN share_walk_ups w ON w.id = l.walk_up_id
+       WHERE w.share_id = ? GROUP BY l.slug`,
+      shareId,
+    );
+    for (const [slug, n] of walked) picked.set(slug, (picked.get(slug) ?? 0) + n);
+    return picked;
+  }
+
+  private sumBySlug(sql: string, shareId: string): Map<string, number> {
+    return new Map(this.db.all<{ slug: string; n: number }>(sql, shareId).map((r) => [r.slug, Number(r.n)]));
+  }
+
+  place(share: ShareRow) {
+    return {
+      name: share.place_name,
+      address: share.place_address,
+      ...(share.place_directions ? { directions: share.place_directions } : {}),
+    };
+  }
+
+  household(r: ReservationRow, lines: readonly LineRow[]): PickupHousehold {
+    return {
+      reservationId: r.id,
+      name: r.name,
+      email: r.email,
+      zip: r.zip,
+      status: r.status,
+      plants: lines.reduce((n, l) => n + l.count, 0),
+      lines: lines.map((l) => this.line(l)),
+    };
+  }
+
+  /** A reservation as its taker sees it. */
+  takerView(group: Group, share: ShareRow, r: ReservationRow, nowMs: number): TakerReservation {
+    const slot = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', r.slot_id)!;
+    const lines = this.linesOf([r.id]).get(r.id) ?? [];
+    return {
+      id: r.id,
+      status: r.status,
+      name: r.name ?? '',
+      email: r.email ?? '',
+      zip: r.zip,
+      slot: { id: slot.id, start: slot.starts_at, end: slot.ends_at },
+      lines: lines.map((l) => this.line(l)),
+      share: {
+        groupSlug: group.slug,
+        groupName: group.name,
+        date: share.share_date,
+        place: this.place(share),
+        status: share.status,
+      },
+      canChange: r.status === 'confirmed' && share.status === 'open' && slot.starts_at_ms > nowMs,
+      careSheet: this.careSheet(lines.map((l) => l.slug)),
+    };
+  }
+
+  /** E-mails each household a waitlist offer was made to; a failed send is logged, the hold stands. */
+  async sendOffers(group: Group, share: ShareRow, offers: readonly WaitlistOfferMade[]): Promise<void> {
+    for (const o of offers) {
+      if (!o.email) continue;
+      const message = waitlistOfferEmail({
+        name: o.name ?? 'there',
+        groupName: group.name,
+        commonName: this.names(o.slug).commonName,
+        count: o.count,
+        place: this.place(share),
+        link: `${this.config.publicUrl}/plant-share/offers/${o.token}`,
+      });
+      await this.mail
+        .send({ to: o.email, ...message, kind: 'plant-share-waitlist-offer', groupId: group.id })
+        .catch((e: unknown) => this.logger.error(`Waitlist offer e-mail failed: ${String(e)}`));
+    }
+  }
+
+  publicUrl(): string {
+    return this.config.publicUrl;
+  }
+}
