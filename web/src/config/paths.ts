@@ -74,8 +74,11 @@ export const paths = {
     path: '/share/:groupSlug',
     build: (groupSlug: string) => `/share/${encodeURIComponent(groupSlug)}`,
   },
-  /** A reservation, opened by the private link in its confirmation e-mail. */
-  reservation: { path: '/reservations/:token', build: (token: string) => `/reservations/${encodeURIComponent(token)}` },
+  /** A reservation, opened by the private link in its confirmation e-mail (the API writes that link). */
+  reservation: {
+    path: '/plant-share/reservations/:token',
+    build: (token: string) => `/plant-share/reservations/${encodeURIComponent(token)}`,
+  },
 } as const;
 
 /**

@@ -28,4 +28,13 @@ export const useOrganiserStyles = makeStyles({
   value: { margin: 0 },
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalXS },
   big: { minHeight: '44px' },
+  rows: {
+    listStyle: 'none',
+    margin: `0 0 ${tokens.spacingVerticalL}`,
+    padding: 0,
+    display: 'grid',
+    gap: tokens.spacingVerticalS,
+  },
+  row: { display: 'flex', justifyContent: 'space-between', alignItems: 'center', gap: tokens.spacingHorizontalM },
+  muted: { color: tokens.colorNeutralForeground3 },
 });

@@ -90,6 +90,8 @@ export const ORGANISER_WORDS = {
   noReservations: 'No reservations in this slot.',
   walkUpHeading: 'Walk-up',
   walkUpLead: 'Plants given to people who came without a reservation. Only the counts and a ZIP are kept.',
+  walkUpOf: (name: string) => `Plants of ${name} given`,
+  remainingWords: (n: number) => `${n} left`,
   walkUpZip: 'ZIP code (if they say)',
   walkUpRecord: 'Record what was given',
   walkUpRecorded: (n: number) => `Recorded ${n} plants given at walk-up.`,

@@ -13,7 +13,7 @@ import { PageIntro } from '../../../components/page/page-intro.js';
 import { EmptyState, ErrorState, QueryState } from '../../../components/states/index.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
 import { TAKER_WORDS as W } from '../utils/taker-words.js';
-import { CountStepper } from './count-stepper.js';
+import { CountStepper } from '../../../components/forms/count-stepper.js';
 import { ReservationSummary } from './reservation-summary.js';
 import { SlotPicker } from './slot-picker.js';
 

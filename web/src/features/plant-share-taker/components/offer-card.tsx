@@ -3,7 +3,7 @@ import { CheckmarkCircle16Regular, Warning16Regular } from '@fluentui/react-icon
 import { Heading } from '../../../components/page/page-heading.js';
 import { type SummaryFacts, summaryLines } from '../utils/share-facts.js';
 import { TAKER_WORDS as W } from '../utils/taker-words.js';
-import { CountStepper } from './count-stepper.js';
+import { CountStepper } from '../../../components/forms/count-stepper.js';
 
 const useStyles = makeStyles({
   card: {

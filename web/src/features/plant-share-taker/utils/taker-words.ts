@@ -92,5 +92,9 @@ export const TAKER_WORDS = {
   keep: 'Keep it',
   cancelQuestion: 'Cancel this reservation? The plants go to the next household on the waitlist.',
   pickedUp: 'You picked these plants up. Enjoy them!',
+  directoryLead:
+    'Growing groups give their native plants away each spring. Choose your group to see what is available and reserve a pickup slot; no account needed.',
+  directoryEmpty: 'No growing group has a plant share yet.',
+  directoryLabel: 'Growing groups',
   somethingWrong: 'Something went wrong. Try again.',
 } as const;
