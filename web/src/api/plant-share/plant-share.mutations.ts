@@ -61,14 +61,21 @@ export function useCancelReservationMutation(token: string, groupSlug: string) {
   });
 }
 
-/** Every organiser write answers the whole share: it replaces the cached one and the rest is read again. */
+/**
+ * Every organiser write answers the whole share: it replaces the cached one (no second read), and the
+ * public page, pickup lists and report that hang on it are read again.
+ */
 function useShareWrite<B>(groupSlug: string, write: (body: B) => Promise<PlantShare>) {
   const queryClient = useQueryClient();
+  const organiserKey = plantShareKeys.organiser(groupSlug);
   return useMutation({
     mutationFn: write,
     onSuccess: (share) => {
-      queryClient.setQueryData(plantShareKeys.organiser(groupSlug), share);
-      void queryClient.invalidateQueries({ queryKey: plantShareKeys.group(groupSlug) });
+      queryClient.setQueryData(organiserKey, share);
+      void queryClient.invalidateQueries({
+        queryKey: plantShareKeys.group(groupSlug),
+        predicate: (q) => q.queryKey[organiserKey.length - 1] !== organiserKey[organiserKey.length - 1],
+      });
     },
   });
 }

@@ -6,6 +6,8 @@ export const useOrganiserStyles = makeStyles({
   stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalXL },
   scroller: { overflowX: 'auto', maxWidth: '100%' },
   table: { minWidth: '560px', fontVariantNumeric: 'tabular-nums' },
+  /** Three short columns fit a phone; the tick box column stays narrow. */
+  pickupTable: { fontVariantNumeric: 'tabular-nums', '& th:first-child, & td:first-child': { width: '4rem' } },
   scientific: { fontStyle: 'italic', color: tokens.colorNeutralForeground3, display: 'block' },
   number: { width: '6.5rem' },
   actions: {

@@ -16,8 +16,8 @@ export function PickupListTable({ list }: { list: PickupListAnswer }) {
   const caption = `${W.pickupHeading}, ${slotWords(list.slot)}: ${W.totalsLine(list.totals.households, list.totals.plants)}`;
   return (
     <div className={styles.scroller} role="region" aria-label="Pickup list table" tabIndex={0} data-print-root="pickup">
-      <Table className={styles.table}>
-        <caption className="pickup-caption">{caption}</caption>
+      <p className="pickup-caption">{caption}</p>
+      <Table className={styles.pickupTable}>
         <TableHeader>
           <TableRow>
             <TableHeaderCell>{W.given}</TableHeaderCell>

@@ -84,7 +84,8 @@ export const ORGANISER_WORDS = {
   slotLine: (booked: number, capacity: number) => `${booked} of ${capacity} households`,
   nameGone: 'Name deleted (kept for the set number of days only)',
   released: (n: number) => `${n} plants went back to the waitlist or the share.`,
-  totalsLine: (households: number, plants: number) => `${households} households, ${plants} plants`,
+  totalsLine: (households: number, plants: number) =>
+    `${households} ${households === 1 ? 'household' : 'households'}, ${plants} ${plants === 1 ? 'plant' : 'plants'}`,
   checkInFor: (name: string) => `Checked in: ${name}`,
   noShowFor: (name: string) => `No-show: ${name}`,
   noReservations: 'No reservations in this slot.',

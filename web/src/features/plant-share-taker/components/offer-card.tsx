@@ -1,5 +1,6 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { CheckmarkCircle16Regular, Warning16Regular } from '@fluentui/react-icons';
+import { capitalise } from '@homeground/shared';
 import { Heading } from '../../../components/page/page-heading.js';
 import { type SummaryFacts, summaryLines } from '../utils/share-facts.js';
 import { TAKER_WORDS as W } from '../utils/taker-words.js';
@@ -55,7 +56,7 @@ export function OfferCard({ commonName, scientificName, facts, wildlife, caution
     <article className={styles.card} aria-label={commonName}>
       <div className={styles.head}>
         <Heading level="card" className={styles.name}>
-          {commonName}
+          {capitalise(commonName)}
           <span className={styles.scientific}>{scientificName}</span>
         </Heading>
         <span className={left === 0 ? styles.none : styles.left}>{W.left(left)}</span>
