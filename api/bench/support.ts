@@ -9,21 +9,28 @@ import autocannon from 'autocannon';
 const API_DIR = path.resolve(import.meta.dirname, '..');
 
 /** Starts the built API (dist/main.js) on a free port with a throwaway database. */
-export async function startBuiltApi(): Promise<{ baseUrl: string; stop: () => Promise<void> }> {
+export async function startBuiltApi(
+  env: Record<string, string> = {},
+): Promise<{ baseUrl: string; stop: () => Promise<void> }> {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'homeground-bench-'));
-  const child: ChildProcess = spawn(process.execPath, ['dist/main.js'], {
-    cwd: API_DIR,
-    env: {
-      ...process.env,
-      PORT: '0',
-      DATA_DIR: dataDir,
-      DATABASE: path.join(dataDir, 'bench.sqlite'),
-      DEMO_DATA: 'false',
-      NODE_ENV: 'test',
-      LOG_LEVEL: 'error',
+  const child: ChildProcess = spawn(
+    process.execPath,
+    [...(process.env.BENCH_NODE_ARGS?.split(' ') ?? []), 'dist/main.js'],
+    {
+      cwd: API_DIR,
+      env: {
+        ...process.env,
+        PORT: '0',
+        DATA_DIR: dataDir,
+        DATABASE: path.join(dataDir, 'bench.sqlite'),
+        DEMO_DATA: 'false',
+        NODE_ENV: 'test',
+        LOG_LEVEL: 'error',
+        ...env,
+      },
+      stdio: ['ignore', 'pipe', 'inherit'],
     },
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
+  );
   const baseUrl = await new Promise<string>((resolve, reject) => {
     let out = '';
     child.stdout!.on('data', (d) => {

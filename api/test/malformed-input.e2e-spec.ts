@@ -37,6 +37,14 @@ const calendar = {
   plans: [{ slug: 'zizia-aurea', method: 'winter-sowing' }],
 };
 const record = loadCatalogue().species[0];
+const shareSlot = { start: '2027-06-12T09:00:00-05:00', end: '2027-06-12T09:30:00-05:00', capacity: 12 };
+const reservation = {
+  name: 'Priya Vantongeren',
+  email: 'priya.vantongeren@example.org',
+  zip: '54665',
+  slotId: UUID,
+  lines: [{ speciesSlug: 'zizia-aurea', count: 1 }],
+};
 const newRecord = { ...record, slug: 'malformed-test-species' };
 const square = [
   [-90, 43],
@@ -453,6 +461,111 @@ const cases: Case[] = [
     upload: { field: 'file', contents: '{"type":"FeatureCollection","features":[null]}' },
     field: 'features[0].geometry',
   },
+  // the plant share
+  {
+    what: 'a share with 61 pickup slots',
+    method: 'post',
+    url: '/api/groups/larkfield-commons-growers/plant-share',
+    body: {
+      date: '2027-06-12',
+      place: { name: 'Larkfield Commons Hall', address: '12 Commons Lane' },
+      slots: Array.from({ length: 61 }, () => shareSlot),
+      limits: { perSpecies: 4, total: 12 },
+    },
+    field: 'slots',
+  },
+  {
+    what: 'a share kept for 1,000 days',
+    method: 'patch',
+    url: '/api/groups/larkfield-commons-growers/plant-share',
+    body: { retentionDays: 1000 },
+    field: 'retentionDays',
+  },
+  {
+    what: 'a slot capacity as text',
+    method: 'post',
+    url: '/api/groups/larkfield-commons-growers/plant-share/slots',
+    body: { ...shareSlot, capacity: 'ten' },
+    field: 'capacity',
+  },
+  {
+    what: 'a slot id that is not a UUID',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/plant-share/slots/1',
+    body: shareSlot,
+    field: 'slotId',
+  },
+  {
+    what: 'a stock of minus one',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/plant-share/stock',
+    body: { stock: [{ speciesSlug: 'zizia-aurea', count: -1 }] },
+    field: 'stock.0.count',
+  },
+  {
+    what: 'stock added for no species',
+    method: 'post',
+    url: '/api/groups/larkfield-commons-growers/plant-share/stock/add',
+    body: { lines: [] },
+    field: 'lines',
+  },
+  {
+    what: 'a share status that does not exist',
+    method: 'put',
+    url: '/api/groups/larkfield-commons-growers/plant-share/status',
+    body: { status: 'archived' },
+    field: 'status',
+  },
+  {
+    what: 'a check-in outcome that does not exist',
+    method: 'post',
+    url: `/api/groups/larkfield-commons-growers/plant-share/reservations/${UUID}/check-in`,
+    body: { outcome: 'late' },
+    field: 'outcome',
+  },
+  {
+    what: 'a walk-up of 1,000 plants',
+    method: 'post',
+    url: '/api/groups/larkfield-commons-growers/plant-share/walk-ups',
+    body: { lines: [{ speciesSlug: 'zizia-aurea', count: 1000 }] },
+    field: 'lines.0.count',
+  },
+  {
+    what: 'a reservation of 0 plants',
+    method: 'post',
+    url: '/api/plant-shares/larkfield-commons-growers/reservations',
+    body: { ...reservation, lines: [{ speciesSlug: 'zizia-aurea', count: 0 }] },
+    field: 'lines.0.count',
+  },
+  {
+    what: 'a reservation with a __proto__ key',
+    method: 'post',
+    url: '/api/plant-shares/larkfield-commons-growers/reservations',
+    raw: JSON.stringify(reservation).replace(/^\{/, '{"__proto__":{"status":"picked-up"},'),
+    field: '__proto__',
+  },
+  {
+    what: 'a waitlist request with a 100,000-character e-mail',
+    method: 'post',
+    url: '/api/plant-shares/larkfield-commons-growers/waitlist',
+    body: { name: 'A', email: `${huge}@example.org`, zip: '54665', lines: [{ speciesSlug: 'zizia-aurea', count: 1 }] },
+    field: 'email',
+  },
+  {
+    what: 'a change link that is not one we sent',
+    method: 'put',
+    url: '/api/reservations/not-a-link',
+    body: { slotId: UUID },
+    field: 'token',
+  },
+  { what: 'a cancel link that is not one we sent', method: 'delete', url: '/api/reservations/x', field: 'token' },
+  {
+    what: 'a waitlist claim with a slot that is not a UUID',
+    method: 'post',
+    url: `/api/waitlist-offers/${'A'.repeat(43)}/claim`,
+    body: { slotId: 'first' },
+    field: 'slotId',
+  },
   // queries
   { what: 'a page size of a billion', method: 'get', url: '/api/species?pageSize=1000000000', field: 'pageSize' },
   { what: 'a 5,000-character search', method: 'get', url: `/api/species?q=${huge.slice(0, 5000)}`, field: 'q' },
@@ -487,7 +600,13 @@ describe('malformed input on every writing route (e2e)', () => {
       (SELECT COUNT(*) FROM species) AS species,
       (SELECT SUM(LENGTH(record)) FROM species) AS catalogueBytes,
       (SELECT COUNT(*) FROM species_photos) AS photos,
-      (SELECT COUNT(*) FROM ecoregion_boundaries) AS boundaries`);
+      (SELECT COUNT(*) FROM ecoregion_boundaries) AS boundaries,
+      (SELECT COUNT(*) FROM plant_shares) AS shares,
+      (SELECT COUNT(*) FROM share_slots) AS shareSlots,
+      (SELECT COUNT(*) FROM share_stock) AS shareStock,
+      (SELECT COUNT(*) FROM share_reservations) AS reservations,
+      (SELECT COUNT(*) FROM share_waitlist) AS waitlist,
+      (SELECT COUNT(*) FROM share_walk_ups) AS walkUps`);
   }
 
   beforeAll(async () => {
@@ -509,11 +628,17 @@ describe('malformed input on every writing route (e2e)', () => {
               .split('?')[0]
               .replace(/\/species\/(?!import)[^/]+/, '/species/:slug')
               .replace(/\/users\/[^/]+/, '/users/:id')
+              .replace(/\/slots\/[^/]+/, '/slots/:slotId')
+              .replace(/\/reservations\/[^/]+/, '/reservations/:id')
+              .replace(/\/plant-shares\/[^/]+/, '/plant-shares/:slug')
+              .replace(/\/waitlist-offers\/[^/]+/, '/waitlist-offers/:token')
               .replace(/\/groups\/[^/]+/, '/groups/:slug')}`,
         ),
     );
     expect([...routes].sort()).toEqual([
       'delete /api/ecoregions/boundaries',
+      'delete /api/reservations/:id',
+      'patch /api/groups/:slug/plant-share',
       'patch /api/users/:id/role',
       'post /api/auth/login',
       'post /api/auth/register',
@@ -521,15 +646,27 @@ describe('malformed input on every writing route (e2e)', () => {
       'post /api/calendar.csv',
       'post /api/calendar.ics',
       'post /api/ecoregions/boundaries',
+      'post /api/groups/:slug/plant-share',
+      'post /api/groups/:slug/plant-share/reservations/:id/check-in',
+      'post /api/groups/:slug/plant-share/slots',
+      'post /api/groups/:slug/plant-share/stock/add',
+      'post /api/groups/:slug/plant-share/walk-ups',
       'post /api/mixes',
       'post /api/mixes/alternatives',
       'post /api/mixes/balance',
+      'post /api/plant-shares/:slug/reservations',
+      'post /api/plant-shares/:slug/waitlist',
       'post /api/quantities',
       'post /api/recommendations',
       'post /api/species',
       'post /api/species/:slug/photo',
       'post /api/species/import',
+      'post /api/waitlist-offers/:token/claim',
       'put /api/groups/:slug/members',
+      'put /api/groups/:slug/plant-share/slots/:slotId',
+      'put /api/groups/:slug/plant-share/status',
+      'put /api/groups/:slug/plant-share/stock',
+      'put /api/reservations/:id',
       'put /api/species/:slug',
     ]);
   });

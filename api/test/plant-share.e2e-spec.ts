@@ -1,5 +1,6 @@
 import { afterAll, afterEach, beforeAll, describe, expect, it, jest } from '@jest/globals';
 import { Clock } from '../src/plant-share/clock.js';
+import { ShareMailQueue } from '../src/plant-share/share-mail-queue.js';
 import { SharePurgeService } from '../src/plant-share/share-purge.service.js';
 import { DEMO_RESERVATIONS, DEMO_SHARE } from '../src/demo/demo-share.js';
 import { DEMO_TARGETS } from '../src/demo/demo-season.js';
@@ -40,7 +41,10 @@ describe('the plant share (e2e, demo data)', () => {
     tokens = await demoTokens(t);
     slots = (await t.http.get(PUBLIC).expect(200)).body.slots;
   });
-  afterAll(() => t.close());
+  afterAll(async () => {
+    await t.app.get(ShareMailQueue).idle();
+    await t.close();
+  });
   afterEach(() => {
     jest.restoreAllMocks();
   });
@@ -421,6 +425,7 @@ describe('the plant share (e2e, demo data)', () => {
   });
 
   it('deletes names and e-mails once the retention has passed; the report keeps its counts', async () => {
+    await t.app.get(ShareMailQueue).idle();
     const reportBefore = (await t.http.get(`${SHARE}/report`).set(bearer(tokens.organiser)).expect(200)).body;
     const purge = t.app.get(SharePurgeService);
     // The day the retention ends (share date + 30 days): nothing yet.

@@ -9,6 +9,7 @@ import { PublicShareController } from './public-share.controller.js';
 import { ReservationsService } from './reservations.service.js';
 import { ShareDb } from './share-db.js';
 import { ShareLedger } from './share-ledger.js';
+import { ShareMailQueue } from './share-mail-queue.js';
 import { SharePurgeService } from './share-purge.service.js';
 import { ShareViews } from './share-views.js';
 
@@ -16,7 +17,16 @@ import { ShareViews } from './share-views.js';
 @Module({
   imports: [GroupsModule, SeasonsModule, MixContextModule],
   controllers: [PlantShareController, PublicShareController],
-  providers: [Clock, ShareDb, ShareLedger, ShareViews, PlantShareService, ReservationsService, SharePurgeService],
+  providers: [
+    Clock,
+    ShareDb,
+    ShareMailQueue,
+    ShareLedger,
+    ShareViews,
+    PlantShareService,
+    ReservationsService,
+    SharePurgeService,
+  ],
   exports: [ShareDb, ShareLedger],
 })
 export class PlantShareModule {}

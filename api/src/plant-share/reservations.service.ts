@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { ConflictException, ForbiddenException, GoneException, Injectable, Logger } from '@nestjs/common';
+import { ConflictException, ForbiddenException, GoneException, Injectable } from '@nestjs/common';
 import {
   type ChangeReservationRequest,
   checkHouseholdLimits,
@@ -22,10 +22,10 @@ import {
 } from '@homeground/shared';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
-import { MailService } from '../mail/mail.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { Clock } from './clock.js';
 import { ShareDb } from './share-db.js';
+import { ShareMailQueue } from './share-mail-queue.js';
 import { type Released, ShareLedger } from './share-ledger.js';
 import { reservationEmail } from './share-emails.js';
 import type { LineRow, ReservationRow, ShareRow, SlotRow, StockRow, WaitlistRow } from './share-rows.js';
@@ -41,15 +41,13 @@ const SHARE_NOTES = [
 /** The taker's side: the public page, reservations by private link, and the waitlist. */
 @Injectable()
 export class ReservationsService {
-  private readonly logger = new Logger('PlantShare');
-
   constructor(
     private readonly db: ShareDb,
     private readonly ledger: ShareLedger,
     private readonly views: ShareViews,
     private readonly groups: GroupsService,
     private readonly ctx: MixContextService,
-    private readonly mail: MailService,
+    private readonly mail: ShareMailQueue,
     private readonly clock: Clock,
   ) {}
 
@@ -386,10 +384,7 @@ export class ReservationsService {
       link,
       changed,
     });
-    // The reservation stands if the mail fails; the confirmation page shows the same link.
-    await this.mail
-      .send({ to: view.email, ...message, kind: 'plant-share-reservation', groupId: group.id })
-      .catch((e: unknown) => this.logger.error(`Reservation e-mail failed: ${String(e)}`));
+    this.mail.send({ to: view.email, ...message, kind: 'plant-share-reservation', groupId: group.id });
   }
 
   /** The reservation a private link opens; an unknown link is refused as forged. */

@@ -1,4 +1,4 @@
-import { Inject, Injectable, Logger, NotFoundException } from '@nestjs/common';
+import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import {
   careSheetFor,
   type CareSheetEntry,
@@ -13,7 +13,7 @@ import {
   type TakerReservation,
 } from '@homeground/shared';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
-import { MailService } from '../mail/mail.service.js';
+import { ShareMailQueue } from './share-mail-queue.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { ShareDb } from './share-db.js';
 import { waitlistOfferEmail } from './share-emails.js';
@@ -38,12 +38,10 @@ export function addDays(date: string, days: number): string {
  */
 @Injectable()
 export class ShareViews {
-  private readonly logger = new Logger('PlantShare');
-
   constructor(
     private readonly db: ShareDb,
     private readonly ctx: MixContextService,
-    private readonly mail: MailService,
+    private readonly mail: ShareMailQueue,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
@@ -242,9 +240,7 @@ export class ShareViews {
         place: this.place(share),
         link: `${this.config.publicUrl}/plant-share/offers/${o.token}`,
       });
-      await this.mail
-        .send({ to: o.email, ...message, kind: 'plant-share-waitlist-offer', groupId: group.id })
-        .catch((e: unknown) => this.logger.error(`Waitlist offer e-mail failed: ${String(e)}`));
+      this.mail.send({ to: o.email, ...message, kind: 'plant-share-waitlist-offer', groupId: group.id });
     }
   }
 

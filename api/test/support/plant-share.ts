@@ -1,5 +1,6 @@
 import { expect } from '@jest/globals';
 import { DataSource } from 'typeorm';
+import { ShareMailQueue } from '../../src/plant-share/share-mail-queue.js';
 import type { TestApp } from './test-app.js';
 
 export const GROUP_SLUG = 'larkfield-commons-growers';
@@ -33,6 +34,8 @@ export async function mailTo(
   kind: string,
   to: string,
 ): Promise<{ subject: string; text: string; html: string | null } | undefined> {
+  // Plant-share mail goes out after the answer: wait until the queue has handed it to the SMTP server.
+  await t.app.get(ShareMailQueue).idle();
   const res = await t.http.get('/api/outbox').query({ kind, to }).set(bearer(organiser)).expect(200);
   return res.body[0];
 }
