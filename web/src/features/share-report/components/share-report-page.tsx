@@ -19,8 +19,10 @@ const useStyles = makeStyles({
     gridTemplateColumns: 'repeat(auto-fit, minmax(10rem, 1fr))',
     gap: tokens.spacingHorizontalL,
     margin: 0,
+    padding: 0,
+    listStyle: 'none',
   },
-  figure: { margin: 0 },
+  figure: { margin: 0, display: 'flex', flexDirection: 'column' },
   number: {
     fontSize: tokens.fontSizeHero700,
     lineHeight: tokens.lineHeightHero700,
@@ -89,14 +91,14 @@ function Report({ report }: { report: ShareReport }) {
           <Heading level="section" id="report-impact">
             {W.impactHeading}
           </Heading>
-          <dl className={styles.figures} aria-label={W.figures}>
+          <ul className={styles.figures} aria-label={W.figures}>
             {figures.map(([n, label]) => (
-              <div key={label} className={styles.figure}>
-                <dd className={styles.number}>{n.toLocaleString('en-US')}</dd>
-                <dt className={styles.label}>{label}</dt>
-              </div>
+              <li key={label} className={styles.figure}>
+                <span className={styles.number}>{n.toLocaleString('en-US')}</span>{' '}
+                <span className={styles.label}>{label}</span>
+              </li>
             ))}
-          </dl>
+          </ul>
           <p>
             {t.shareOfTargets === null ? W.noTargets : W.ofTargets(Math.round(t.shareOfTargets * 100), t.targetPlants)}
           </p>
