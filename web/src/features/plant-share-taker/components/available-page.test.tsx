@@ -2,7 +2,7 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { apiError, type FakeRequest, type FakeRoutes } from '../../../testing/fake-api.js';
 import { renderApp } from '../../../testing/render-app.js';
-import { GROUP, rankedForDrySun, reservation, SHARE_PATH, share, SLOT_1 } from '../testing/share-fixtures.js';
+import { GROUP, rankedForDrySun, reservation, SHARE_PATH, share, SLOT_1, TOKEN } from '../testing/share-fixtures.js';
 
 // What the taker sees follows the public plant-share answer in ../testing/share-fixtures.ts (the
 // invented demo group); sun, soil, height and bloom of each species are as USDA PLANTS lists them.
@@ -100,6 +100,10 @@ describe('what is available', () => {
       screen.getByText(/We sent a confirmation to priya.vantongeren@example.org with a private link/),
     ).toBeVisible();
     expect(screen.getByText('Saturday, June 12, 2027, 9:00 am – 9:30 am')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Change or cancel this reservation' })).toHaveAttribute(
+      'href',
+      `/plant-share/reservations/${TOKEN}`,
+    );
     expect(screen.getByText('Larkfield Commons Hall, 1 Commons Lane, Larkfield, WI')).toBeInTheDocument();
     expect(screen.getByText('Stay in your car; volunteers bring the plants to you.')).toBeInTheDocument();
     expect(screen.getByText('Plant 18 in (46 cm) apart.')).toBeInTheDocument();

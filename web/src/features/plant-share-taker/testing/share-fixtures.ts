@@ -6,6 +6,8 @@ import type { PublicPlantShare, ReservationCreated, ShareSpecies } from '@homegr
 
 export const GROUP = 'larkfield-commons-growers';
 export const SHARE_PATH = `/api/plant-shares/${GROUP}`;
+/** A private link's secret: 43 base64url characters, as reservationTokenSchema wants. */
+export const TOKEN = 'Pq7xW2mZ4tR8vN1kL5hJ9gF3dS6aQ0eY2uI4oP7cB8n';
 export const SLOT_1 = '0b6b6c1e-2f0a-4a4e-9d51-6f1f3b1d9a01';
 export const SLOT_2 = '0b6b6c1e-2f0a-4a4e-9d51-6f1f3b1d9a02';
 
@@ -124,5 +126,5 @@ export const reservation: ReservationCreated = {
       cautions: ['Irritating sap: Milky sap irritates eyes: wash hands after handling.'],
     },
   ],
-  manageUrl: `http://localhost/reservations/${'a'.repeat(43)}`,
+  manageUrl: `http://localhost/plant-share/reservations/${TOKEN}`,
 };

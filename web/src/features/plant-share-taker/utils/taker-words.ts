@@ -64,6 +64,7 @@ export const TAKER_WORDS = {
   confirmedTitle: 'Your plants are reserved',
   confirmedEmail: (email: string) =>
     `We sent a confirmation to ${email} with a private link to change or cancel this reservation. Keep that e-mail.`,
+  manageLink: 'Change or cancel this reservation',
   pickupHeading: 'Pickup',
   whenWords: 'When',
   whereWords: 'Where',
