@@ -34,12 +34,12 @@ function PickupDay({ share }: { share: PlantShare }) {
   return (
     <>
       <div data-print="hide">
-        <PageIntro title={`${W.pickupHeading}: ${shareDateWords(share.date)}`}>{W.pickupLead}</PageIntro>
+        <PageIntro title={`${W.pickupDayTitle}: ${shareDateWords(share.date)}`}>{W.pickupLead}</PageIntro>
       </div>
       <div className={styles.stack} data-pickup-cards>
         <ContentCard aria-labelledby="pickup-slot">
           <Heading level="section" id="pickup-slot">
-            {W.slotChoice}
+            {W.pickupHeading}
           </Heading>
           <div data-print="hide">
             <Field label={W.slotChoice}>

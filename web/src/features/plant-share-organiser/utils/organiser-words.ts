@@ -70,6 +70,7 @@ export const ORGANISER_WORDS = {
   saving: 'Saving…',
   saved: 'The share is saved.',
   pickupHeading: 'Pickup list',
+  pickupDayTitle: 'Pickup day',
   pickupLead: 'One list per slot: households, their plants and boxes to tick as cars come through.',
   print: 'Print the pickup list',
   household: 'Household',
