@@ -1,3 +1,4 @@
+import { cpus, loadavg } from 'node:os';
 import { DEMO_PEOPLE } from '../src/demo/demo-people.js';
 import { percentile, startBuiltApi } from './support.js';
 
@@ -69,6 +70,8 @@ try {
     (s) => s.speciesSlug === SLUG,
   )!.remaining;
   console.log(`${REQUESTS} concurrent reservations for ${PLANTS} plants (one plant each, loopback, SQLite):`);
+  // Latency on a shared machine depends on what else runs: print the load beside the figures.
+  console.log(`  machine: ${cpus().length} cores, load average ${loadavg()[0].toFixed(1)} (1 min)`);
   console.log(`  confirmed (201): ${byStatus.get(201) ?? 0}  (exactly ${PLANTS} expected)`);
   console.log(`  all taken (409): ${byStatus.get(409) ?? 0}`);
   const other = [...byStatus].filter(([s]) => s !== 201 && s !== 409);

@@ -123,8 +123,14 @@ describe('the plant share (e2e, demo data)', () => {
     expect(stockOf('monarda-fistulosa').remaining).toBe(48);
     expect(after.slots[3].booked).toBe(0);
     expect(after.slots[4].booked).toBe(1);
-    const changedMail = await mailTo(t, tokens.organiser, 'plant-share-reservation', 'amara.reyes@example.org');
-    expect(changedMail!.subject).toMatch(/has changed/);
+    const changedMail = await mailTo(
+      t,
+      tokens.organiser,
+      'plant-share-reservation',
+      'amara.reyes@example.org',
+      /has changed/,
+    );
+    expect(changedMail).toBeDefined();
     expect(changedMail!.text).toContain('11:00–11:30');
 
     const list = await t.http
@@ -344,6 +350,15 @@ describe('the plant share (e2e, demo data)', () => {
       remaining: 0,
       waitlisted: 1,
     });
+    const offerView = await t.http.get(`/api/waitlist-offers/${linkSecret(offer!.text, 'offers')}`).expect(200);
+    expect(offerView.body).toMatchObject({
+      speciesSlug: 'packera-aurea',
+      count: 1,
+      status: 'offered',
+      joinsReservation: false,
+    });
+    expect(offerView.body.slots).toHaveLength(slots.length + 1);
+    await t.http.get(`/api/waitlist-offers/${'B'.repeat(43)}`).expect(403);
     const claimed = await t.http
       .post(`/api/waitlist-offers/${linkSecret(offer!.text, 'offers')}/claim`)
       .send({ slotId: slots[5].id })
@@ -353,6 +368,49 @@ describe('the plant share (e2e, demo data)', () => {
       .post(`/api/waitlist-offers/${linkSecret(offer!.text, 'offers')}/claim`)
       .send({ slotId: slots[5].id })
       .expect(410);
+  });
+
+  it('releases the plants of a no-show: to the waitlist first, the rest back on offer', async () => {
+    const list = await t.http
+      .get(`${SHARE}/slots/${slots[2].id}/pickup-list`)
+      .set(bearer(tokens.organiser))
+      .expect(200);
+    const sol = list.body.households.find((h: { name: string }) => h.name === 'Sol Marchetti');
+    expect(sol.lines.map((l: { speciesSlug: string; count: number }) => [l.speciesSlug, l.count])).toEqual([
+      ['asclepias-incarnata', 2],
+      ['symphyotrichum-lateriflorum', 4],
+      ['carex-vulpinoidea', 2],
+    ]);
+    // One household waits for a fox sedge: it gets one of Sol's two; the other goes back on offer.
+    await t.http
+      .put(`${SHARE}/stock`)
+      .set(bearer(tokens.organiser))
+      .send({ stock: [{ speciesSlug: 'carex-vulpinoidea', count: 0 }] })
+      .expect(200);
+    await t.http
+      .post(`${PUBLIC}/waitlist`)
+      .send({
+        name: 'Theo Lindqvist',
+        email: 'theo.lindqvist@example.org',
+        zip: '54665',
+        lines: [{ speciesSlug: 'carex-vulpinoidea', count: 1 }],
+      })
+      .expect(201);
+    const res = await t.http
+      .post(`${SHARE}/reservations/${sol.reservationId}/check-in`)
+      .set(bearer(tokens.organiser))
+      .send({ outcome: 'no-show' })
+      .expect(200);
+    expect(res.body.household.status).toBe('no-show');
+    expect(res.body.released).toEqual([
+      { speciesSlug: 'asclepias-incarnata', toWaitlist: 0, toStock: 2 },
+      { speciesSlug: 'symphyotrichum-lateriflorum', toWaitlist: 0, toStock: 4 },
+      { speciesSlug: 'carex-vulpinoidea', toWaitlist: 1, toStock: 1 },
+    ]);
+    const share = (await t.http.get(SHARE).set(bearer(tokens.organiser)).expect(200)).body;
+    expect(share.stock.find((s: { speciesSlug: string }) => s.speciesSlug === 'carex-vulpinoidea').remaining).toBe(1);
+    const offer = await mailTo(t, tokens.organiser, 'plant-share-waitlist-offer', 'theo.lindqvist@example.org');
+    expect(offer?.text).toMatch(/1 × fox sedge/i);
   });
 
   it('keeps the share, its takers and their e-mails to the group organisers and admins (role matrix)', async () => {

@@ -22,6 +22,8 @@ import {
   type WaitlistJoined,
   waitlistJoinedSchema,
   waitlistOfferTokenSchema,
+  type WaitlistOfferView,
+  waitlistOfferViewSchema,
   waitlistRequestSchema,
 } from '@homeground/shared';
 import { ZodBody, ZodParam, ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
@@ -100,6 +102,14 @@ export class PublicShareController {
   @ZodResponse(takerReservationSchema)
   cancel(@ZodParam('token', reservationTokenSchema) token: string): Promise<TakerReservation> {
     return this.reservations.cancel(token);
+  }
+
+  /** What a waitlist offer's link shows: the plants held and the slots to choose from. */
+  @Get('waitlist-offers/:token')
+  @forgedDoc
+  @ZodResponse(waitlistOfferViewSchema)
+  offer(@ZodParam('token', waitlistOfferTokenSchema) token: string): Promise<WaitlistOfferView> {
+    return this.reservations.offer(token);
   }
 
   /** Takes the plants a waitlist offer holds. */

@@ -16,12 +16,12 @@ import {
   type StateCode,
   type TakerReservation,
   type WaitlistJoined,
+  type WaitlistOfferView,
   bloomWords,
   CAUTION_WORDS,
   wildlifeSummary,
 } from '@homeground/shared';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
-import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { Clock } from './clock.js';
 import { ShareDb } from './share-db.js';
@@ -45,7 +45,6 @@ export class ReservationsService {
     private readonly db: ShareDb,
     private readonly ledger: ShareLedger,
     private readonly views: ShareViews,
-    private readonly groups: GroupsService,
     private readonly ctx: MixContextService,
     private readonly mail: ShareMailQueue,
     private readonly clock: Clock,
@@ -53,7 +52,7 @@ export class ReservationsService {
 
   /** The group's share as anyone sees it; with a yard, ranked by how well each plant fits it. */
   async publicShare(slug: string, yard: ShareFitQuery): Promise<PublicPlantShare> {
-    const group = await this.groups.getDto(slug);
+    const group = await this.views.group(slug);
     const share = this.views.requireShare(group);
     const nowMs = this.clock.now().getTime();
     const stock = this.views.stock(share.id).filter((s) => s.offered > 0);
@@ -118,7 +117,7 @@ export class ReservationsService {
    * 409 and writes nothing.
    */
   async reserve(slug: string, req: ParsedReservationRequest): Promise<ReservationCreated> {
-    const group = await this.groups.getDto(slug);
+    const group = await this.views.group(slug);
     const share = this.views.requireShare(group);
     assertOpen(share);
     const now = this.clock.now();
@@ -253,7 +252,7 @@ export class ReservationsService {
     slug: string,
     req: { name: string; email: string; zip: string; lines: PlantLine[] },
   ): Promise<WaitlistJoined> {
-    const group = await this.groups.getDto(slug);
+    const group = await this.views.group(slug);
     const share = this.views.requireShare(group);
     if (share.status === 'closed') throw new ConflictException('This plant share is closed.');
     this.checkLines(share, req.lines);
@@ -293,20 +292,60 @@ export class ReservationsService {
     return { entries };
   }
 
+  /** What a waitlist offer's link shows: the plants held for the household and the slots left. */
+  async offer(token: string): Promise<WaitlistOfferView> {
+    const entry = this.offerEntry(token);
+    const share = this.views.shareById(entry.share_id);
+    const group = await this.views.groupById(share.group_id);
+    const nowMs = this.clock.now().getTime();
+    const joins = Boolean(
+      entry.email &&
+      this.db.get(
+        `SELECT id FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
+        share.id,
+        entry.email,
+      ),
+    );
+    return {
+      speciesSlug: entry.slug,
+      ...this.views.names(entry.slug),
+      count: entry.held,
+      status: entry.status === 'claimed' ? 'claimed' : 'offered',
+      joinsReservation: joins,
+      share: {
+        groupSlug: group.slug,
+        groupName: group.name,
+        date: share.share_date,
+        place: this.views.place(share),
+        status: share.status,
+      },
+      slots: this.views.slots(share.id).map((s) => ({
+        id: s.id,
+        start: s.starts_at,
+        end: s.ends_at,
+        left: s.capacity - s.booked,
+        past: s.starts_at_ms <= nowMs,
+      })),
+    };
+  }
+
+  /** The waitlist entry a private offer link opens; an unknown link is refused as forged. */
+  private offerEntry(token: string): WaitlistRow {
+    const entry = this.db.get<WaitlistRow>('SELECT * FROM share_waitlist WHERE token_hash = ?', hashToken(token));
+    if (!entry) throw new ForbiddenException('This link is not one we sent.');
+    if (!entry.email || !entry.name) throw new GoneException('This offer was kept no longer than the share allows.');
+    return entry;
+  }
+
   /**
    * Takes the plants a waitlist offer holds: added to the household's reservation if it has one, else
    * a new reservation in the slot chosen (booked the same conditional way).
    */
   async claimOffer(token: string, req: ClaimOfferRequest): Promise<ReservationCreated> {
-    const entry = this.db.get<WaitlistRow & { token_hash: string }>(
-      'SELECT * FROM share_waitlist WHERE token_hash = ?',
-      hashToken(token),
-    );
-    if (!entry) throw new ForbiddenException('This link is not one we sent.');
+    const entry = this.offerEntry(token);
     if (entry.status !== 'offered') throw new GoneException('These plants have been claimed already.');
-    if (!entry.email || !entry.name) throw new GoneException('This offer was kept no longer than the share allows.');
     const share = this.views.shareById(entry.share_id);
-    const group = await this.groups.getDtoById(share.group_id);
+    const group = await this.views.groupById(share.group_id);
     assertOpen(share);
     const now = this.clock.now();
     const existing = this.db.get<ReservationRow>(
@@ -393,7 +432,7 @@ export class ReservationsService {
     if (!row) throw new ForbiddenException('This link is not one we sent: use the link in your confirmation e-mail.');
     const share = this.views.shareById(row.share_id);
     if (row.name === null) throw new GoneException('This reservation was kept no longer than the share allows.');
-    const group = await this.groups.getDtoById(share.group_id);
+    const group = await this.views.groupById(share.group_id);
     return { group, share, row };
   }
 

@@ -13,6 +13,7 @@ import {
   type TakerReservation,
 } from '@homeground/shared';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
+import { GroupsService } from '../groups/groups.service.js';
 import { ShareMailQueue } from './share-mail-queue.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { ShareDb } from './share-db.js';
@@ -36,14 +37,40 @@ export function addDays(date: string, days: number): string {
  * Reads a share and turns rows into the shared answer shapes; sends the waitlist offers that moves
  * made. Names and e-mails leave here only in the organiser's pickup list and the taker's own view.
  */
+/** How long a looked-up group is reused. */
+const GROUP_CACHE_MS = 5000;
+
 @Injectable()
 export class ShareViews {
+  private readonly groupCache = new Map<string, { group: Group; until: number }>();
   constructor(
     private readonly db: ShareDb,
     private readonly ctx: MixContextService,
     private readonly mail: ShareMailQueue,
+    private readonly groups: GroupsService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
+
+  /**
+   * The group by slug, remembered for a few seconds: a burst of reservations the moment a share opens
+   * would otherwise look the same group up hundreds of times. A renamed group shows within seconds.
+   */
+  async group(slug: string): Promise<Group> {
+    const now = Date.now();
+    const hit = this.groupCache.get(slug);
+    if (hit && hit.until > now) return hit.group;
+    const group = await this.groups.getDto(slug);
+    this.groupCache.set(slug, { group, until: now + GROUP_CACHE_MS });
+    return group;
+  }
+
+  /** The group by id, through the same cache. */
+  async groupById(id: string): Promise<Group> {
+    for (const hit of this.groupCache.values()) if (hit.group.id === id && hit.until > Date.now()) return hit.group;
+    const group = await this.groups.getDtoById(id);
+    this.groupCache.set(group.slug, { group, until: Date.now() + GROUP_CACHE_MS });
+    return group;
+  }
 
   /** The group's share for its newest season, or null. */
   shareOf(groupId: string): ShareRow | null {

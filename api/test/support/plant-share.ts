@@ -27,17 +27,19 @@ export async function demoTokens(
   };
 }
 
-/** Newest message of `kind` to `to`, as the local SMTP server received it into the outbox. */
+/** Newest message of `kind` to `to` (with a subject matching `subject` when given), as the local SMTP server received it into the outbox. */
 export async function mailTo(
   t: TestApp,
   organiser: string,
   kind: string,
   to: string,
+  subject?: RegExp,
 ): Promise<{ subject: string; text: string; html: string | null } | undefined> {
   // Plant-share mail goes out after the answer: wait until the queue has handed it to the SMTP server.
   await t.app.get(ShareMailQueue).idle();
   const res = await t.http.get('/api/outbox').query({ kind, to }).set(bearer(organiser)).expect(200);
-  return res.body[0];
+  // Messages received within the same second have no order between them: pick by subject when asked.
+  return subject ? res.body.find((m: { subject: string }) => subject.test(m.subject)) : res.body[0];
 }
 
 /** The private link's secret in a message. */

@@ -479,3 +479,35 @@ export const shareReportSchema = z.object({
     .nullable(),
   summary: z.array(z.string()),
 }) satisfies z.ZodType<ShareReport>;
+
+/** What a waitlist offer's private link shows: the plants held, and the slots to choose from. */
+export interface WaitlistOfferView {
+  speciesSlug: string;
+  commonName: string;
+  scientificName: string;
+  count: number;
+  status: 'offered' | 'claimed';
+  /** True when the household has a reservation already: the plants join it and no slot is needed. */
+  joinsReservation: boolean;
+  share: { groupSlug: string; groupName: string; date: string; place: SharePlace; status: ShareStatus };
+  slots: PublicPickupSlot[];
+}
+
+export const waitlistOfferViewSchema = z.object({
+  speciesSlug: z.string(),
+  commonName: z.string(),
+  scientificName: z.string(),
+  count: z.number().int(),
+  status: z.enum(['offered', 'claimed']),
+  joinsReservation: z.boolean(),
+  share: z.object({
+    groupSlug: z.string(),
+    groupName: z.string(),
+    date: isoDate,
+    place: sharePlaceAnswer,
+    status: z.enum(SHARE_STATUSES),
+  }),
+  slots: z.array(
+    z.object({ id: z.string(), start: isoDateTime, end: isoDateTime, left: z.number().int(), past: z.boolean() }),
+  ),
+}) satisfies z.ZodType<WaitlistOfferView>;
