@@ -68,6 +68,18 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             page(paths.plantShare.path, async () => ({
               Component: (await import('../routes/plant-share.js')).PlantShareRoute,
             })),
+            page(paths.plantSharePickup.path, async () => ({
+              Component: (await import('../routes/plant-share-pickup.js')).PlantSharePickupRoute,
+            })),
+            page(paths.plantShareReport.path, async () => ({
+              Component: (await import('../routes/plant-share-report.js')).PlantShareReportRoute,
+            })),
+            page(paths.shareAvailable.path, async () => ({
+              Component: (await import('../routes/share-available.js')).ShareAvailableRoute,
+            })),
+            page(paths.reservation.path, async () => ({
+              Component: (await import('../routes/reservation.js')).ReservationRoute,
+            })),
             page('*', async () => ({ Component: (await import('../routes/not-found.js')).NotFoundRoute })),
           ],
         },

@@ -63,7 +63,22 @@ export const paths = {
   invitation: { path: '/invitations/:token', build: (token: string) => `/invitations/${encodeURIComponent(token)}` },
   season: { path: '/season', build: () => '/season' },
   myBatches: { path: '/my-batches', build: () => '/my-batches' },
+  /** The organiser's plant share: the day, slots, limits and stock; open, pause, close. */
   plantShare: { path: '/plant-share', build: () => '/plant-share' },
+  /** Pickup day: the printable list per slot, check-in and walk-up. */
+  plantSharePickup: { path: '/plant-share/pickup', build: () => '/plant-share/pickup' },
+  /** The season report: what the share gave, against the season's targets. */
+  plantShareReport: { path: '/plant-share/report', build: () => '/plant-share/report' },
+  /** What a group's plant share offers; public, the link organisers hand out. */
+  shareAvailable: {
+    path: '/share/:groupSlug',
+    build: (groupSlug: string) => `/share/${encodeURIComponent(groupSlug)}`,
+  },
+  /** A reservation, opened by the private link in its confirmation e-mail (the API writes that link). */
+  reservation: {
+    path: '/plant-share/reservations/:token',
+    build: (token: string) => `/plant-share/reservations/${encodeURIComponent(token)}`,
+  },
   /** Admins: every account, its role, switch-off and sign-in activity. */
   people: { path: '/people', build: () => '/people' },
 } as const;

@@ -9,12 +9,15 @@ export class ApiRequestError extends Error implements ApiError {
   readonly statusCode: number;
   readonly error: string;
   readonly fields?: { field: string; message: string }[];
+  /** A plant share's 409 "all taken": the species that ran out and where to join their waitlist. */
+  readonly waitlist?: ApiError['waitlist'];
 
   constructor(body: ApiError) {
     super(body.message);
     this.statusCode = body.statusCode;
     this.error = body.error;
     if (body.fields) this.fields = body.fields;
+    if (body.waitlist) this.waitlist = body.waitlist;
   }
 
   get isNetworkError(): boolean {

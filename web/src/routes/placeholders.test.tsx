@@ -2,19 +2,9 @@ import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { renderApp } from '../testing/render-app.js';
 
-// Section names: the product design guide (shared/DESIGN.md beside the project) "Layout"; the sections are not built yet, so each page
-// must say so instead of showing made-up data.
-describe('sections not built yet', () => {
-  it.each([['/plant-share', 'Plant share']])(
-    '%s says what it will do and that it is not available yet',
-    async (path, title) => {
-      renderApp({ path });
-      expect(await screen.findByRole('heading', { level: 1, name: title })).toBeInTheDocument();
-      expect(screen.getByText('It is not available yet.')).toBeInTheDocument();
-      expect(screen.getByText(/^Here /)).toBeInTheDocument();
-    },
-  );
-
+// Every section of the product design guide (shared/DESIGN.md beside the project) "Layout" is built now; what stays
+// here is how the shell answers an unknown address and its skip link.
+describe('the shell around every page', () => {
   it('answers an unknown address with a page-not-found page inside the shell', async () => {
     renderApp({ path: '/no-such-page' });
     expect(await screen.findByRole('heading', { level: 1, name: 'Page not found' })).toBeInTheDocument();

@@ -1,12 +1,28 @@
-import { SectionPlaceholder } from '../components/page/section-placeholder.js';
+import { ErrorState, LoadingState } from '../components/states/index.js';
+import { useSession } from '../features/auth/index.js';
+import { OrganiserSharePage } from '../features/plant-share-organiser/index.js';
+import { ShareDirectory } from '../features/plant-share-taker/index.js';
 import { useDocumentTitle } from '../lib/use-document-title.js';
+import { organisedGroup } from './plant-share-session.js';
 
+/**
+ * Plant share from the navigation: an organiser runs their group's share here; everyone else (signed
+ * in or not) finds a group's public page to reserve from.
+ */
 export function PlantShareRoute() {
+  const session = useSession();
   useDocumentTitle('Plant share');
-  return (
-    <SectionPlaceholder
-      title="Plant share"
-      willDo="Here your group will run its plant share: neighbours reserve plants and choose a pickup slot, and organisers see who takes what home."
-    />
-  );
+  if (session.status === 'loading') return <LoadingState label="Loading the plant share" />;
+  if (session.status === 'signed-in' && !session.user) {
+    return (
+      <ErrorState
+        title="Your account details did not load."
+        message={session.profileError?.message}
+        onRetry={session.retryProfile}
+      />
+    );
+  }
+  const group = organisedGroup(session.user);
+  if (!group) return <ShareDirectory />;
+  return <OrganiserSharePage key={group.slug} groupSlug={group.slug} groupName={group.name} />;
 }

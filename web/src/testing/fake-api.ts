@@ -5,6 +5,8 @@ import { groups, health, stats } from './fixtures.js';
 export interface FakeRequest {
   method: string;
   path: string;
+  /** The query string with its "?", or "" (routes are keyed by path alone). */
+  search: string;
   body: unknown;
   headers: Record<string, string>;
 }
@@ -52,6 +54,7 @@ export function installFakeApi(routes: FakeRoutes = {}) {
     const request: FakeRequest = {
       method,
       path: url.pathname,
+      search: url.search,
       body: typeof init?.body === 'string' ? JSON.parse(init.body) : undefined,
       headers: headersOf(init),
     };

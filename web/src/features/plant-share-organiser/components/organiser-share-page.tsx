@@ -1,0 +1,52 @@
+import { useQuery } from '@tanstack/react-query';
+import { shareQueryOptions } from '../../../api/plant-share/plant-share.queries.js';
+import { RouterButton } from '../../../components/links/router-link.js';
+import { PageIntro } from '../../../components/page/page-intro.js';
+import { ErrorState, QueryState } from '../../../components/states/index.js';
+import { paths } from '../../../config/paths.js';
+import { isApiRequestError } from '../../../lib/api-request-error.js';
+import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { OpenShareForm } from './open-share-form.js';
+import { useOrganiserStyles } from './organiser.styles.js';
+import { ShareDayCard } from './share-day-card.js';
+import { ShareStatusCard } from './share-status-card.js';
+import { StockCard } from './stock-card.js';
+
+/**
+ * The organiser's plant share: before it is opened, the form that opens it; afterwards its status,
+ * its day, and the plants on offer, with the way to pickup day and the season report.
+ */
+export function OrganiserSharePage({ groupSlug, groupName }: { groupSlug: string; groupName: string }) {
+  const styles = useOrganiserStyles();
+  const share = useQuery(shareQueryOptions(groupSlug));
+  return (
+    <>
+      <PageIntro title={W.title}>{W.lead(groupName)}</PageIntro>
+      <QueryState
+        query={share}
+        loading={W.loading}
+        error={(error, retry) =>
+          isApiRequestError(error) && error.statusCode === 404 ? (
+            <OpenShareForm groupSlug={groupSlug} />
+          ) : (
+            <ErrorState title={W.loadFailed} message={error.message} onRetry={retry} />
+          )
+        }
+      >
+        {(s) => (
+          <div className={styles.stack}>
+            <div className={styles.actions}>
+              <RouterButton to={paths.plantSharePickup.build()} appearance="primary">
+                {W.pickupLink}
+              </RouterButton>
+              <RouterButton to={paths.plantShareReport.build()}>{W.reportLink}</RouterButton>
+            </div>
+            <ShareStatusCard share={s} />
+            <ShareDayCard share={s} publicHref={paths.shareAvailable.build(s.groupSlug)} />
+            <StockCard key={s.id} share={s} />
+          </div>
+        )}
+      </QueryState>
+    </>
+  );
+}

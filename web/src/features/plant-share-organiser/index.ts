@@ -1,0 +1,2 @@
+export { OrganiserSharePage } from './components/organiser-share-page.js';
+export { PickupPage } from './components/pickup-page.js';

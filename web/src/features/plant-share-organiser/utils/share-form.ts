@@ -1,0 +1,83 @@
+import {
+  householdLimitsSchema,
+  isoDateSchema,
+  MAX_SLOTS,
+  type OpenShareRequest,
+  pickupSlotRequestSchema,
+  sharePlaceSchema,
+} from '@homeground/shared';
+import { z } from 'zod';
+import { slotTime } from './slot-time.js';
+
+/** A number typed into a text box: empty is "missing", anything else goes to the shared rule. */
+const typedNumber = (rule: z.ZodNumber) =>
+  z.preprocess((v) => (v === '' ? undefined : Number(v)), z.number({ error: 'must be a number' }).pipe(rule));
+
+const limits = householdLimitsSchema.shape;
+
+/**
+ * The share's day, place and limits as text boxes, each checked by the shared request schema's own
+ * rule for that field, so the form says what the API would (`toOpenShare` builds the body).
+ */
+export const shareSettingsSchema = z
+  .object({
+    date: isoDateSchema,
+    placeName: sharePlaceSchema.shape.name,
+    address: sharePlaceSchema.shape.address,
+    directions: sharePlaceSchema.shape.directions,
+    perSpecies: typedNumber(limits.perSpecies),
+    total: typedNumber(limits.total),
+  })
+  .refine((v) => v.total >= v.perSpecies, { message: 'must be at least the limit per species', path: ['total'] });
+export type ShareSettings = z.output<typeof shareSettingsSchema>;
+
+/** One pickup slot row as typed: clock times on the share's date and a number of households. */
+export interface SlotRow {
+  start: string;
+  end: string;
+  capacity: string;
+}
+
+export type SlotRowErrors = Partial<Record<keyof SlotRow, string>>;
+
+/** The slot rows as the API's slots, or each bad row's messages (field by field) and nothing else. */
+export function checkSlots(
+  date: string,
+  rows: readonly SlotRow[],
+): { slots: OpenShareRequest['slots'] } | { errors: SlotRowErrors[]; message?: string } {
+  if (rows.length === 0) return { errors: [], message: 'Add at least one pickup slot.' };
+  if (rows.length > MAX_SLOTS) return { errors: [], message: `A share may have at most ${MAX_SLOTS} slots.` };
+  const slots: OpenShareRequest['slots'] = [];
+  const errors: SlotRowErrors[] = rows.map((row) => {
+    const start = slotTime(date, row.start);
+    const end = slotTime(date, row.end);
+    const out: SlotRowErrors = {};
+    if (!start) out.start = 'Enter a start time';
+    if (!end) out.end = 'Enter an end time';
+    const parsed = pickupSlotRequestSchema.safeParse({
+      start: start ?? '',
+      end: end ?? '',
+      capacity: row.capacity.trim() === '' ? Number.NaN : Number(row.capacity),
+    });
+    if (parsed.success) slots.push(parsed.data);
+    else
+      for (const issue of parsed.error.issues) {
+        const key = issue.path[0] as keyof SlotRow;
+        const text = key === 'capacity' && row.capacity.trim() === '' ? 'Enter a number of households' : issue.message;
+        out[key] ??= text.charAt(0).toUpperCase() + text.slice(1);
+      }
+    return out;
+  });
+  return errors.some((e) => Object.keys(e).length > 0) ? { errors } : { slots };
+}
+
+/** The open-share body from the checked settings and slots; stock is left to the API (the season's ready counts). */
+export function toOpenShare(settings: ShareSettings, slots: OpenShareRequest['slots']): OpenShareRequest {
+  const directions = settings.directions?.trim();
+  return {
+    date: settings.date,
+    place: { name: settings.placeName, address: settings.address, ...(directions ? { directions } : {}) },
+    slots,
+    limits: { perSpecies: settings.perSpecies, total: settings.total },
+  };
+}

@@ -1,0 +1,155 @@
+import { MessageBar, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
+import { describeGround, type PublicPlantShare, type ReservationCreated, type ShareSpecies } from '@homeground/shared';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import type { Yard } from '../../../api/plant-share/plant-share.api.js';
+import { useReserveMutation, useWaitlistMutation } from '../../../api/plant-share/plant-share.mutations.js';
+import { publicShareQueryOptions } from '../../../api/plant-share/plant-share.queries.js';
+import { Heading } from '../../../components/page/page-heading.js';
+import { PageIntro } from '../../../components/page/page-intro.js';
+import { EmptyState, ErrorState, QueryState } from '../../../components/states/index.js';
+import { isApiRequestError } from '../../../lib/api-request-error.js';
+import { rankByFit, wildlifeLines } from '../utils/rank-by-fit.js';
+import { shareDateWords } from '../utils/share-facts.js';
+import { TAKER_WORDS as W } from '../utils/taker-words.js';
+import { Confirmation } from './confirmation.js';
+import { FitFilter } from './fit-filter.js';
+import { OfferCard } from './offer-card.js';
+import { ReservePanel } from './reserve-panel.js';
+
+const useStyles = makeStyles({
+  stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalXL },
+  grid: {
+    display: 'grid',
+    gridTemplateColumns: 'repeat(auto-fill, minmax(min(100%, 18rem), 1fr))',
+    gap: tokens.spacingHorizontalL,
+  },
+  heading: { margin: 0 },
+  notes: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, color: tokens.colorNeutralForeground2 },
+});
+
+/** What a group's plant share offers, the "fits my yard" ranking, and reserving. Nobody needs to sign in. */
+export function AvailablePage({ groupSlug }: { groupSlug: string }) {
+  const [yard, setYard] = useState<Yard>(null);
+  const [confirmed, setConfirmed] = useState<ReservationCreated | null>(null);
+  const share = useQuery(publicShareQueryOptions(groupSlug, yard));
+  if (confirmed) return <Confirmation reservation={confirmed} />;
+  return (
+    <QueryState
+      query={share}
+      loading={W.loading}
+      error={(error, retry) =>
+        isApiRequestError(error) && error.statusCode === 404 ? (
+          <EmptyState title={W.notFound} />
+        ) : (
+          <ErrorState title={W.loadFailed} message={error.message} onRetry={retry} />
+        )
+      }
+    >
+      {(s) => (
+        <Available
+          share={s}
+          yard={yard}
+          onYard={setYard}
+          isRanking={share.isPlaceholderData}
+          onReserved={setConfirmed}
+        />
+      )}
+    </QueryState>
+  );
+}
+
+interface AvailableProps {
+  share: PublicPlantShare;
+  yard: Yard;
+  onYard: (yard: Yard) => void;
+  /** True while the list for a new yard answer is on its way (the old one stays on screen). */
+  isRanking: boolean;
+  onReserved: (reservation: ReservationCreated) => void;
+}
+
+function Available({ share, yard, onYard, isRanking, onReserved }: AvailableProps) {
+  const styles = useStyles();
+  const [counts, setCounts] = useState<Record<string, number>>({});
+  const reserve = useReserveMutation(share.groupSlug);
+  const waitlist = useWaitlistMutation();
+
+  const isOpen = share.status === 'open';
+  const total = Object.values(counts).reduce((n, c) => n + c, 0);
+  const chosen = share.species.map((s) => ({ slug: s.slug, commonName: s.commonName, count: counts[s.slug] ?? 0 }));
+  const place = `${share.place.name}, ${share.place.address}`;
+
+  const card = (s: ShareSpecies) => (
+    <OfferCard
+      key={s.slug}
+      commonName={s.commonName}
+      scientificName={s.scientificName}
+      facts={{ ...s, heightMinCm: s.heightCm.min, heightMaxCm: s.heightCm.max }}
+      wildlife={wildlifeLines(s.wildlife)}
+      cautions={s.cautions}
+      left={s.remaining}
+      fit={s.fit ? { words: W.fitWords[s.fit.fit], why: s.fit.why } : null}
+      count={
+        isOpen
+          ? {
+              value: counts[s.slug] ?? 0,
+              // The stepper stops at the tightest of the species limit, what is left and the household total.
+              max: Math.min(share.limits.perSpecies, s.remaining, (counts[s.slug] ?? 0) + share.limits.total - total),
+              onChange: (n) => setCounts((c) => ({ ...c, [s.slug]: n })),
+            }
+          : undefined
+      }
+    />
+  );
+
+  return (
+    <>
+      <PageIntro title={W.availableTitle(share.groupName)}>
+        {W.availableLead(shareDateWords(share.date), place)} {W.limits(share.limits.perSpecies, share.limits.total)}
+      </PageIntro>
+      <div className={styles.stack}>
+        {share.status === 'open' ? null : (
+          <MessageBar intent="info">
+            <MessageBarBody>{W.notOpen[share.status]}</MessageBarBody>
+          </MessageBar>
+        )}
+        <FitFilter onApply={onYard} onClear={() => onYard(null)} isActive={yard !== null} isPending={isRanking} />
+        <section aria-labelledby="on-offer" className={styles.stack} aria-busy={isRanking}>
+          <Heading level="section" id="on-offer" className={styles.heading}>
+            {W.onOfferHeading}
+          </Heading>
+          {share.yard ? (
+            <p className={styles.heading}>{W.fitFor(describeGround(share.yard.sun, share.yard.moisture))}</p>
+          ) : null}
+          {rankByFit(share.species).map(({ group, species }) => (
+            <div key={group} className={styles.stack}>
+              {group === 'less-suited' ? <Heading level="card">{W.notSuited}</Heading> : null}
+              <div className={styles.grid}>{species.map(card)}</div>
+            </div>
+          ))}
+          {share.notes.length > 0 ? (
+            <div>
+              <Heading level="card">{W.safetyHeading}</Heading>
+              <ul className={styles.notes}>
+                {share.notes.map((n) => (
+                  <li key={n}>{n}</li>
+                ))}
+              </ul>
+            </div>
+          ) : null}
+        </section>
+        {isOpen ? (
+          <ReservePanel
+            slots={share.slots}
+            chosen={chosen}
+            limitTotal={share.limits.total}
+            isPending={reserve.isPending}
+            // The confirmation focuses its heading, which also brings it into view.
+            onReserve={(input) => reserve.mutateAsync(input).then(onReserved)}
+            onWaitlist={(path, body) => waitlist.mutateAsync({ path, body })}
+          />
+        ) : null}
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,3 @@
+export { AvailablePage } from './components/available-page.js';
+export { MyReservation } from './components/my-reservation.js';
+export { ShareDirectory } from './components/share-directory.js';

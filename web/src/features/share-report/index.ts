@@ -1,0 +1,1 @@
+export { ShareReportPage } from './components/share-report-page.js';

@@ -1,0 +1,42 @@
+/**
+ * Every sentence the season report shows, in one place, so it can move into a message catalogue.
+ * The report holds counts only: no names, e-mails or full ZIP codes ever reach it.
+ */
+export const REPORT_WORDS = {
+  title: (year: number) => `Season report ${year}`,
+  lead: (groupName: string, date: string) => `What ${groupName}’s plant share on ${date} gave, in counts only.`,
+  loading: 'Loading the season report',
+  loadFailed: 'The season report did not load.',
+  noShare: 'There is no plant share to report on yet. Open one on the Plant share page first.',
+  impactHeading: 'What the share gave',
+  figures: 'Figures',
+  plantsGiven: 'Plants given',
+  households: 'Households served',
+  walkUps: 'of them walk-ups',
+  milkweeds: 'Milkweed plants for monarchs',
+  species: 'Species given',
+  ofTargets: (pct: number, target: number) =>
+    `${pct}% of the season’s target of ${target.toLocaleString('en-US')} plants`,
+  noTargets: 'The season has no targets to compare with.',
+  bySpeciesHeading: 'Plants given by species',
+  bySpeciesCaption: 'Plants given by species, beside the season’s targets',
+  plantsUnit: 'plants',
+  householdsUnit: 'households',
+  floweringHeading: 'Flowering spread',
+  floweringLead: 'Plants given that flower in each month: a long spread feeds pollinators from spring to fall.',
+  floweringCaption: 'Plants given in flower, by month',
+  hostsHeading: 'Caterpillar host value',
+  layer: { herbaceous: 'Wildflowers, grasses and ferns', woody: 'Shrubs and trees' },
+  layerPlants: (n: number) => `${n.toLocaleString('en-US')} plants`,
+  zipHeading: 'Areas reached',
+  zipLead: 'Households by the first three digits of their ZIP code; no addresses are kept.',
+  zipCaption: 'Households by ZIP area',
+  zipArea: (area: string) => `ZIP area ${area}xx`,
+  noZips: 'No ZIP codes were given.',
+  germinationHeading: 'Germination by method and grower',
+  germinatedUnit: '% germinated',
+  germinationLater: 'Germination figures appear here once the growers’ batch logs are recorded.',
+  csv: 'Download the report (CSV)',
+  print: 'Print the report',
+  downloadFailed: 'The CSV did not download.',
+} as const;

@@ -1,0 +1,10 @@
+import { useParams } from 'react-router-dom';
+import { MyReservation } from '../features/plant-share-taker/index.js';
+import { useDocumentTitle } from '../lib/use-document-title.js';
+
+/** A reservation by its private link; no account needed. */
+export function ReservationRoute() {
+  const { token = '' } = useParams();
+  useDocumentTitle('Your reservation');
+  return <MyReservation key={token} token={token} />;
+}
