@@ -8,3 +8,4 @@ export * from './record-words.js';
 export * from './sowing-depth.js';
 export * from './people-words.js';
 export * from './place-words.js';
+export * from './locale/index.js';
