@@ -1,4 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
+import { useTranslation } from 'react-i18next';
 import { RouterLink } from '../links/router-link.js';
 import { paths } from '../../config/paths.js';
 import { ContentCard } from './content-card.js';
@@ -12,13 +13,14 @@ const useStyles = makeStyles({
 /** An honest stand-in for a section still being built: what it will do, and that it is not here yet. */
 export function SectionPlaceholder({ title, willDo }: { title: string; willDo: string }) {
   const styles = useStyles();
+  const { t } = useTranslation();
   return (
     <>
       <PageIntro title={title} />
       <ContentCard className={styles.card}>
         <p className={styles.text}>{willDo}</p>
-        <p className={styles.text}>It is not available yet.</p>
-        <RouterLink to={paths.home.build()}>Back to the home page</RouterLink>
+        <p className={styles.text}>{t('placeholder.notYet')}</p>
+        <RouterLink to={paths.home.build()}>{t('placeholder.backHome')}</RouterLink>
       </ContentCard>
     </>
   );
