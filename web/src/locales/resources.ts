@@ -2,9 +2,11 @@ import { common as enCommon } from './en/common.js';
 import { common as esCommon } from './es/common.js';
 import { home as enHome } from './en/home.js';
 import { home as esHome } from './es/home.js';
+import { ground as enGround } from './en/ground.js';
+import { ground as esGround } from './es/ground.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
-  en: { common: enCommon, home: enHome },
-  es: { common: esCommon, home: esHome },
+  en: { common: enCommon, home: enHome, ground: enGround },
+  es: { common: esCommon, home: esHome, ground: esGround },
 } as const;

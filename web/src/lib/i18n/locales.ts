@@ -42,7 +42,10 @@ function readStored(): string | null {
 export function initialLocale(): Locale {
   const stored = readStored();
   if (isLocale(stored)) return stored;
-  const languages = navigator.languages?.length ? navigator.languages : [navigator.language];
+  // Some browsers (and stubs) give only `language`, or neither.
+  const languages = [...(navigator.languages ?? []), navigator.language].filter(
+    (tag): tag is string => typeof tag === 'string',
+  );
   return localeFromBrowser(languages);
 }
 
