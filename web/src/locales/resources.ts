@@ -4,9 +4,11 @@ import { home as enHome } from './en/home.js';
 import { home as esHome } from './es/home.js';
 import { ground as enGround } from './en/ground.js';
 import { ground as esGround } from './es/ground.js';
+import { forms as enForms } from './en/forms.js';
+import { forms as esForms } from './es/forms.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
-  en: { common: enCommon, home: enHome, ground: enGround },
-  es: { common: esCommon, home: esHome, ground: esGround },
+  en: { common: enCommon, home: enHome, ground: enGround, forms: enForms },
+  es: { common: esCommon, home: esHome, ground: esGround, forms: esForms },
 } as const;
