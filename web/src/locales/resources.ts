@@ -6,9 +6,11 @@ import { ground as enGround } from './en/ground.js';
 import { ground as esGround } from './es/ground.js';
 import { forms as enForms } from './en/forms.js';
 import { forms as esForms } from './es/forms.js';
+import { species as enSpecies } from './en/species.js';
+import { species as esSpecies } from './es/species.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
-  en: { common: enCommon, home: enHome, ground: enGround, forms: enForms },
-  es: { common: esCommon, home: esHome, ground: esGround, forms: esForms },
+  en: { common: enCommon, home: enHome, ground: enGround, forms: enForms, species: enSpecies },
+  es: { common: esCommon, home: esHome, ground: esGround, forms: esForms, species: esSpecies },
 } as const;
