@@ -8,9 +8,11 @@ import { forms as enForms } from './en/forms.js';
 import { forms as esForms } from './es/forms.js';
 import { species as enSpecies } from './en/species.js';
 import { species as esSpecies } from './es/species.js';
+import { detail as enDetail } from './en/detail.js';
+import { detail as esDetail } from './es/detail.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
-  en: { common: enCommon, home: enHome, ground: enGround, forms: enForms, species: enSpecies },
-  es: { common: esCommon, home: esHome, ground: esGround, forms: esForms, species: esSpecies },
+  en: { common: enCommon, home: enHome, ground: enGround, forms: enForms, species: enSpecies, detail: enDetail },
+  es: { common: esCommon, home: esHome, ground: esGround, forms: esForms, species: esSpecies, detail: esDetail },
 } as const;

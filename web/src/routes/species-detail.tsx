@@ -1,7 +1,7 @@
+import { useWords } from '../lib/i18n/index.js';
 import type { QueryClient } from '@tanstack/react-query';
 import { type LoaderFunctionArgs, useParams } from 'react-router-dom';
 import { speciesDetailQueryOptions } from '../api/species/species.queries.js';
-import { bloomWords } from '@homeground/shared';
 import { BloomStrip } from '../features/species-browser/index.js';
 import { SpeciesDetail } from '../features/species-detail/index.js';
 
@@ -15,12 +15,13 @@ export function speciesDetailLoader(queryClient: QueryClient) {
 
 export function SpeciesDetailRoute() {
   const { slug = '' } = useParams();
+  const words = useWords();
   return (
     <SpeciesDetail
       // A new slug is a new page: start its state (photo fallback, open details) afresh.
       key={slug}
       slug={slug}
-      describeBloom={bloomWords}
+      describeBloom={words.bloomWords}
       renderBloomStrip={(s) => <BloomStrip bloomMonths={s.bloomMonths} flowerColours={s.flowerColours} size="large" />}
     />
   );
