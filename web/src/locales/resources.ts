@@ -10,9 +10,27 @@ import { species as enSpecies } from './en/species.js';
 import { species as esSpecies } from './es/species.js';
 import { detail as enDetail } from './en/detail.js';
 import { detail as esDetail } from './es/detail.js';
+import { cards as enCards } from './en/cards.js';
+import { cards as esCards } from './es/cards.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
-  en: { common: enCommon, home: enHome, ground: enGround, forms: enForms, species: enSpecies, detail: enDetail },
-  es: { common: esCommon, home: esHome, ground: esGround, forms: esForms, species: esSpecies, detail: esDetail },
+  en: {
+    common: enCommon,
+    home: enHome,
+    ground: enGround,
+    forms: enForms,
+    species: enSpecies,
+    detail: enDetail,
+    cards: enCards,
+  },
+  es: {
+    common: esCommon,
+    home: esHome,
+    ground: esGround,
+    forms: esForms,
+    species: esSpecies,
+    detail: esDetail,
+    cards: esCards,
+  },
 } as const;
