@@ -93,7 +93,7 @@ describe('cards & labels page', () => {
     const print = vi.spyOn(window, 'print').mockImplementation(() => {});
     const { user } = open('/cards-and-labels?species=asclepias-tuberosa,monarda-fistulosa');
     await screen.findByRole('article', { name: 'Butterfly milkweed' });
-    await user.click(screen.getByRole('tab', { name: 'Pot labels' }));
+    await user.click(screen.getByRole('button', { name: 'Pot labels' }));
     const date = screen.getByLabelText(/Sow date/);
     await user.clear(date);
     await user.type(date, '2026-03-02');
@@ -175,7 +175,7 @@ describe('cards & labels in Spanish', () => {
     expect(card.getByRole('heading', { name: 'Precauciones' })).toBeInTheDocument();
     expect(card.getByText('Savia irritante:')).toBeInTheDocument();
 
-    await user.click(screen.getByRole('tab', { name: 'Etiquetas para macetas' }));
+    await user.click(screen.getByRole('button', { name: 'Etiquetas para macetas' }));
     const date = screen.getByLabelText(/Fecha de siembra/);
     await user.clear(date);
     await user.type(date, '2026-03-02');

@@ -1,6 +1,7 @@
 import { LOCALE_TAGS, useLocale } from '../../../lib/i18n/index.js';
 import { useTranslation } from 'react-i18next';
-import { Button, makeStyles, Tab, TabList, tokens } from '@fluentui/react-components';
+import { Button, makeStyles, tokens } from '@fluentui/react-components';
+import { ViewSwitch } from '../../../components/view-switch/view-switch.js';
 import { Print20Regular } from '@fluentui/react-icons';
 import { useId, useState } from 'react';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
@@ -34,7 +35,6 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
   const { t } = useTranslation('cards');
   const { locale } = useLocale();
   const headingId = useId();
-  const tabsId = useId();
   const qr = useQrEncoder();
   const origin = usePublicOrigin();
   const [kind, setKind] = useState<PrintKind>('cards');
@@ -66,18 +66,15 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
         {t('print.title')}
       </Heading>
       <div className={styles.controls}>
-        <TabList
-          selectedValue={kind}
-          onTabSelect={(_, d) => setKind(d.value as PrintKind)}
-          aria-label={t('print.what')}
-        >
-          <Tab id={`${tabsId}-cards`} value="cards">
-            {t('print.cards')}
-          </Tab>
-          <Tab id={`${tabsId}-labels`} value="labels">
-            {t('print.labels')}
-          </Tab>
-        </TabList>
+        <ViewSwitch<PrintKind>
+          label={t('print.what')}
+          value={kind}
+          onChange={setKind}
+          options={[
+            { value: 'cards', label: t('print.cards') },
+            { value: 'labels', label: t('print.labels') },
+          ]}
+        />
         <PrintOptions kind={kind} value={options} onChange={setOptions} />
         {kind === 'labels' ? <p className={styles.legend}>{t('print.legend')}</p> : null}
         <PrintReminder species={species} />
@@ -94,7 +91,7 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
           </span>
         </div>
       </div>
-      <div role="tabpanel" aria-labelledby={`${tabsId}-${kind}`}>
+      <div>
         {isLoading && species.length === 0 ? (
           <LoadingState label={t('print.loading')} />
         ) : species.length === 0 ? (
