@@ -148,7 +148,7 @@ test('eight species print as two Letter pages of fact cards, with working QR lin
     await waitForCards(page, SLUGS.length);
     assert.equal(pdfPageCount(await page.pdf({ format: 'A4', printBackground: true })), 2, 'A4: two pages too');
 
-    await page.getByRole('tab', { name: 'Pot labels' }).click();
+    await page.getByRole('button', { name: 'Pot labels' }).click();
     await page.getByRole('radio', { name: /US Letter/ }).check();
     const labels = page.getByRole('region', { name: 'Pot labels as they will print' }).getByTestId('pot-label');
     await labels.nth(SLUGS.length - 1).waitFor();

@@ -9,3 +9,4 @@ export * from './sowing-depth.js';
 export * from './people-words.js';
 export * from './place-words.js';
 export * from './batch-words.js';
+export * from './locale/index.js';

@@ -35,8 +35,13 @@ export interface GuardedPage {
 }
 
 /** A page that aborts and records any request to a host other than localhost. */
-export async function openGuardedPage(browser: Browser, viewport = { width: 1280, height: 900 }): Promise<GuardedPage> {
-  const context = await browser.newContext({ viewport });
+export async function openGuardedPage(
+  browser: Browser,
+  viewport = { width: 1280, height: 900 },
+  /** The browser's language (navigator.languages), e.g. "es-MX"; Playwright's default otherwise. */
+  options: { locale?: string } = {},
+): Promise<GuardedPage> {
+  const context = await browser.newContext({ viewport, ...options });
   const offHostRequests: string[] = [];
   const pageErrors: string[] = [];
   const consoleErrors: string[] = [];

@@ -1,7 +1,9 @@
 import { FluentProvider } from '@fluentui/react-components';
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import type { i18n } from 'i18next';
 import type { ReactNode } from 'react';
 import { SessionProvider } from '../features/auth/components/session-provider.js';
+import { I18nProvider } from '../lib/i18n/index.js';
 import { homegroundTheme, useGlobalStyles } from '../theme/index.js';
 
 function GlobalStyles() {
@@ -9,14 +11,25 @@ function GlobalStyles() {
   return null;
 }
 
-/** Theme, server-state cache and session for everything below; tests wrap pages in the same. */
-export function AppProviders({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
+/** Language, theme, server-state cache and session for everything below; tests wrap pages in the same. */
+export function AppProviders({
+  queryClient,
+  i18n,
+  children,
+}: {
+  queryClient: QueryClient;
+  /** A language instance of the caller's (tests); by default the remembered or browser language. */
+  i18n?: i18n;
+  children: ReactNode;
+}) {
   return (
-    <FluentProvider theme={homegroundTheme} applyStylesToPortals>
-      <GlobalStyles />
-      <QueryClientProvider client={queryClient}>
-        <SessionProvider>{children}</SessionProvider>
-      </QueryClientProvider>
-    </FluentProvider>
+    <I18nProvider instance={i18n}>
+      <FluentProvider theme={homegroundTheme} applyStylesToPortals>
+        <GlobalStyles />
+        <QueryClientProvider client={queryClient}>
+          <SessionProvider>{children}</SessionProvider>
+        </QueryClientProvider>
+      </FluentProvider>
+    </I18nProvider>
   );
 }

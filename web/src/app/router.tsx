@@ -1,4 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
+import { useTranslation } from 'react-i18next';
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { LoadingState } from '../components/states/index.js';
 import { paths } from '../config/paths.js';
@@ -10,7 +11,11 @@ import { RouteErrorPage } from '../routes/route-error.js';
  * A lazy route needs its own fallback: without one the router blanks the whole shell while the
  * first page's code arrives (react-router renders from the nearest route that has a fallback).
  */
-const pageFallback = <LoadingState label="Loading the page" />;
+function PageFallback() {
+  const { t } = useTranslation();
+  return <LoadingState label={t('shell.loadingPage')} />;
+}
+const pageFallback = <PageFallback />;
 
 type LazyRoute = NonNullable<RouteObject['lazy']>;
 

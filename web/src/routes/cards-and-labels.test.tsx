@@ -93,7 +93,7 @@ describe('cards & labels page', () => {
     const print = vi.spyOn(window, 'print').mockImplementation(() => {});
     const { user } = open('/cards-and-labels?species=asclepias-tuberosa,monarda-fistulosa');
     await screen.findByRole('article', { name: 'Butterfly milkweed' });
-    await user.click(screen.getByRole('tab', { name: 'Pot labels' }));
+    await user.click(screen.getByRole('button', { name: 'Pot labels' }));
     const date = screen.getByLabelText(/Sow date/);
     await user.clear(date);
     await user.type(date, '2026-03-02');
@@ -151,5 +151,39 @@ describe('cards & labels page', () => {
     expect(await screen.findByRole('heading', { level: 1, name: 'Cards & labels' })).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Print fact cards' })).toBeDisabled();
     expect(screen.getByText('Nothing to print yet')).toBeInTheDocument();
+  });
+});
+
+// Spanish words on the printed card and label: locales/es/cards.ts and the shared Spanish tables
+// (from-memory); the date through Intl in es-US (CLDR). No published Spanish name: the English
+// common name prints with the scientific name.
+describe('cards & labels in Spanish', () => {
+  beforeAll(async () => {
+    await import('./cards-and-labels.js');
+  }, 20_000);
+
+  it('prints the fact card and pot label in Spanish, cautions included', async () => {
+    const { user } = renderApp({
+      path: '/cards-and-labels?species=asclepias-tuberosa',
+      locale: 'es',
+      api: detailRoutes(three),
+    });
+    const card = within(await screen.findByRole('article', { name: 'Butterfly milkweed' }));
+    expect(card.getByText('Asclepias tuberosa')).toBeInTheDocument();
+    expect(card.getByText('Florece jun–ago')).toBeInTheDocument();
+    expect(card.getByText('Pleno sol o media sombra')).toBeInTheDocument();
+    expect(card.getByRole('heading', { name: 'Precauciones' })).toBeInTheDocument();
+    expect(card.getByText('Savia irritante:')).toBeInTheDocument();
+
+    await user.click(screen.getByRole('button', { name: 'Etiquetas para macetas' }));
+    const date = screen.getByLabelText(/Fecha de siembra/);
+    await user.clear(date);
+    await user.type(date, '2026-03-02');
+    const preview = await screen.findByRole('region', { name: 'Las etiquetas como se van a imprimir' });
+    const label = within(preview).getAllByTestId('pot-label')[0];
+    expect(label).toHaveTextContent('Sembrada el 2 mar 2026');
+    expect(label).toHaveTextContent('pleno sol/media sombra · seco/fresco');
+    expect(label).toHaveTextContent('estrat. fría 30 d');
+    expect(label).toHaveTextContent('12–30 in (30–75 cm) de alto');
   });
 });

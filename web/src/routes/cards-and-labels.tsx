@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { PageIntro } from '../components/page/page-intro.js';
 import { ChooseSpecies, PrintWorkspace, useCardSelection, useChosenSpecies } from '../features/cards-labels/index.js';
@@ -9,20 +10,18 @@ const useStyles = makeStyles({
 
 /** /cards-and-labels?species=slug1,slug2 or ?mix=<saved mix id>: choose species, then print (see `useCardSelection`). */
 export function CardsLabelsRoute() {
-  useDocumentTitle('Cards & labels');
+  const { t } = useTranslation('cards');
+  useDocumentTitle(t('page.title'));
   const styles = useStyles();
   const selection = useCardSelection();
   const chosen = useChosenSpecies(selection.slugs);
 
   return (
     <>
-      <PageIntro title="Cards & labels">
-        Print fact cards (four to a page) and pot labels for the plants you grow: black on white with a thin band of
-        flower colour, so they stay readable when photocopied.
-      </PageIntro>
+      <PageIntro title={t('page.title')}>{t('page.intro')}</PageIntro>
       {selection.isMixMissing ? (
         <p className={styles.note} role="status">
-          The saved mix in this link could not be opened, so its species were not added.
+          {t('page.mixMissing')}
         </p>
       ) : null}
       <ChooseSpecies

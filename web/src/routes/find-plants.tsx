@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { useLocation } from 'react-router-dom';
 import { PageIntro } from '../components/page/page-intro.js';
 import { ErrorState } from '../components/states/index.js';
@@ -9,16 +10,14 @@ import { GroundStep } from '../features/your-ground/index.js';
 
 /** Find plants: your ground → your yard → your yard mix, one step at a time (see `useFindPlantsSteps`). */
 export function FindPlantsRoute() {
+  const { t } = useTranslation('ground');
   const location = useLocation();
   const session = useSession();
   const { step, region, plan, goTo, confirmGround, changePlan } = useFindPlantsSteps();
 
   return (
     <>
-      <PageIntro title="Find plants">
-        Tell Homeground where your ground is and what your yard is like, and get a yard mix of native plants that belong
-        there, with why each one fits and how many to grow.
-      </PageIntro>
+      <PageIntro title={t('page.title')}>{t('page.intro')}</PageIntro>
       {step === 'ground' ? <GroundStep onConfirm={confirmGround} /> : null}
       {step === 'yard' && region ? (
         <YardStep
@@ -30,8 +29,8 @@ export function FindPlantsRoute() {
       ) : null}
       {step === 'mix' && plan.kind === 'invalid' ? (
         <ErrorState
-          title="This link's yard answers are incomplete"
-          message={`Answer the yard questions again to see a mix. (${plan.problems.join('; ')})`}
+          title={t('page.badLinkTitle')}
+          message={t('page.badLinkMessage', { problems: plan.problems.join('; ') })}
           onRetry={() => goTo('yard')}
         />
       ) : null}

@@ -48,4 +48,15 @@ describe('home page', () => {
     await user.click(within(alert).getByRole('button', { name: 'Try again' }));
     expect(api.callsTo('GET', '/api/stats').length).toBeGreaterThanOrEqual(2);
   });
+
+  // Spanish written for this page (from-memory, plain "tú" voice); thousands in es-US per CLDR.
+  it('speaks Spanish when Spanish is chosen, plurals included', async () => {
+    renderApp({ locale: 'es' });
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Cultiva las plantas nativas que son de tu terreno' }),
+    ).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Busca plantas para tu terreno' })).toHaveAttribute('href', '/find-plants');
+    expect(await screen.findByText(/Larkfield, WI · ecorregión 52 · 7 miembros/)).toBeInTheDocument();
+    expect(within(screen.getByRole('region', { name: 'Hoy en el catálogo' })).getByText('412')).toBeInTheDocument();
+  });
 });

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { RouterButton } from '../components/links/router-link.js';
 import { ContentCard } from '../components/page/content-card.js';
 import { PageIntro } from '../components/page/page-intro.js';
@@ -5,15 +6,14 @@ import { paths } from '../config/paths.js';
 import { useDocumentTitle } from '../lib/use-document-title.js';
 
 export function NotFoundRoute() {
-  useDocumentTitle('Page not found');
+  const { t } = useTranslation();
+  useDocumentTitle(t('notFound.title'));
   return (
     <>
-      <PageIntro title="Page not found">
-        There is no page at this address. It may have moved, or the link has a typo.
-      </PageIntro>
+      <PageIntro title={t('notFound.title')}>{t('notFound.body')}</PageIntro>
       <ContentCard>
         <RouterButton to={paths.home.build()} appearance="primary">
-          Go to the home page
+          {t('notFound.home')}
         </RouterButton>
       </ContentCard>
     </>

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Navigate } from 'react-router-dom';
 import { RouterLink } from '../components/links/router-link.js';
 import { ContentCard } from '../components/page/content-card.js';
@@ -10,22 +11,21 @@ import { useNextPath } from './use-next-path.js';
 
 export function RegisterRoute() {
   const styles = useAuthPageStyles();
+  const { t } = useTranslation('forms');
   const session = useSession();
   const next = useNextPath();
-  useDocumentTitle('Create an account');
+  useDocumentTitle(t('register.title'));
 
   if (session.status === 'signed-in') return <Navigate to={next ?? paths.home.build()} replace />;
 
   return (
     <div className={styles.column}>
-      <PageIntro title="Create an account">
-        An account lets you join a growing group, keep your batch log and reserve plants.
-      </PageIntro>
+      <PageIntro title={t('register.title')}>{t('register.intro')}</PageIntro>
       <ContentCard>
         <RegisterForm onRegistered={session.signIn} />
       </ContentCard>
       <p className={styles.switch}>
-        Already have an account? <RouterLink to={paths.signIn.build(next)}>Sign in</RouterLink>
+        {t('register.haveAccount')} <RouterLink to={paths.signIn.build(next)}>{t('register.signIn')}</RouterLink>
       </p>
     </div>
   );

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Navigate } from 'react-router-dom';
 import { RouterLink } from '../components/links/router-link.js';
 import { ContentCard } from '../components/page/content-card.js';
@@ -10,23 +11,22 @@ import { useNextPath } from './use-next-path.js';
 
 export function SignInRoute() {
   const styles = useAuthPageStyles();
+  const { t } = useTranslation('forms');
   const session = useSession();
   const next = useNextPath();
-  useDocumentTitle('Sign in');
+  useDocumentTitle(t('signIn.title'));
 
   // Covers both a fresh sign-in (the session flips to signed-in) and a signed-in visit.
   if (session.status === 'signed-in') return <Navigate to={next ?? paths.home.build()} replace />;
 
   return (
     <div className={styles.column}>
-      <PageIntro title="Sign in">
-        Plan your season, keep your batch log and reserve plants at the plant share.
-      </PageIntro>
+      <PageIntro title={t('signIn.title')}>{t('signIn.intro')}</PageIntro>
       <ContentCard>
         <SignInForm onSignedIn={session.signIn} />
       </ContentCard>
       <p className={styles.switch}>
-        New to Homeground? <RouterLink to={paths.register.build(next)}>Create an account</RouterLink>
+        {t('signIn.newHere')} <RouterLink to={paths.register.build(next)}>{t('signIn.create')}</RouterLink>
       </p>
     </div>
   );

@@ -1,7 +1,7 @@
+import { useWords } from '../lib/i18n/index.js';
 import type { QueryClient } from '@tanstack/react-query';
 import { type LoaderFunctionArgs, useParams } from 'react-router-dom';
 import { speciesDetailQueryOptions } from '../api/species/species.queries.js';
-import { bloomWords } from '@homeground/shared';
 import { BloomStrip } from '../features/species-browser/index.js';
 import { useSession } from '../features/auth/index.js';
 import { SpeciesDetail } from '../features/species-detail/index.js';
@@ -17,6 +17,7 @@ export function speciesDetailLoader(queryClient: QueryClient) {
 
 export function SpeciesDetailRoute() {
   const { slug = '' } = useParams();
+  const words = useWords();
   const role = useSession().user?.role;
   const curates = role === 'curator' || role === 'admin';
   return (
@@ -25,7 +26,7 @@ export function SpeciesDetailRoute() {
         // A new slug is a new page: start its state (photo fallback, open details) afresh.
         key={slug}
         slug={slug}
-        describeBloom={bloomWords}
+        describeBloom={words.bloomWords}
         renderBloomStrip={(s) => (
           <BloomStrip bloomMonths={s.bloomMonths} flowerColours={s.flowerColours} size="large" />
         )}

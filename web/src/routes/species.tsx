@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import type { QueryClient } from '@tanstack/react-query';
 import { PageIntro } from '../components/page/page-intro.js';
 import { SpeciesBrowser, speciesBrowserLoader } from '../features/species-browser/index.js';
@@ -8,13 +9,11 @@ export function speciesLoader(queryClient: QueryClient) {
 }
 
 export function SpeciesRoute() {
-  useDocumentTitle('Species');
+  const { t } = useTranslation('species');
+  useDocumentTitle(t('page.title'));
   return (
     <>
-      <PageIntro title="Species">
-        Every native species in the catalogue: when it blooms, how tall it grows, what it feeds, and how to raise it
-        from seed. Search by name or narrow the list to your ground.
-      </PageIntro>
+      <PageIntro title={t('page.title')}>{t('page.intro')}</PageIntro>
       <SpeciesBrowser />
     </>
   );

@@ -5,6 +5,7 @@ import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { AppProviders } from '../app/providers.js';
 import { createRoutes } from '../app/router.js';
 import { writeAccessToken } from '../lib/access-token.js';
+import { createI18n, type Locale } from '../lib/i18n/index.js';
 import { installFakeApi, type FakeRoutes } from './fake-api.js';
 
 export interface RenderAppOptions {
@@ -13,17 +14,19 @@ export interface RenderAppOptions {
   /** A token already stored, as if the person signed in on an earlier visit. */
   token?: string;
   api?: FakeRoutes;
+  /** Start in this language; by default the browser's (jsdom says en-US), as a first visit would. */
+  locale?: Locale;
 }
 
 /** The whole app (real routes, providers and shell) over the fake API, as a person would meet it. */
-export function renderApp({ path = '/', token, api }: RenderAppOptions = {}) {
+export function renderApp({ path = '/', token, api, locale }: RenderAppOptions = {}) {
   const fakeApi = installFakeApi(api);
   if (token) writeAccessToken(token);
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
   const router = createMemoryRouter(createRoutes(queryClient), { initialEntries: [path] });
   const user = userEvent.setup();
   const view = render(
-    <AppProviders queryClient={queryClient}>
+    <AppProviders queryClient={queryClient} i18n={locale ? createI18n(locale) : undefined}>
       <RouterProvider router={router} />
     </AppProviders>,
   );

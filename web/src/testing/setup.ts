@@ -1,6 +1,7 @@
 import '@testing-library/jest-dom/vitest';
 import { cleanup, configure } from '@testing-library/react';
 import { afterEach, beforeEach } from 'vitest';
+import { createI18n } from '../lib/i18n/create-i18n.js';
 
 // Lazy routes load their chunk on first render; on a busy 2-core CI machine that can take longer
 // than Testing Library's default 1 s for findBy* queries.
@@ -16,6 +17,8 @@ globalThis.ResizeObserver ??= NoLayoutResizeObserver as unknown as typeof Resize
 
 beforeEach(() => {
   window.localStorage.clear();
+  // Components rendered on their own (without AppProviders) read the global instance: English.
+  createI18n('en');
 });
 
 afterEach(() => {

@@ -12,6 +12,7 @@ import {
 } from '@fluentui/react-components';
 import { People20Regular, Person20Regular, SignOut20Regular } from '@fluentui/react-icons';
 import type { User } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
 import { useLocation, useNavigate } from 'react-router-dom';
 import { paths } from '../../config/paths.js';
 import { RouterButton } from '../links/router-link.js';
@@ -45,6 +46,7 @@ interface AccountAreaProps {
 /** Sign-in link when signed out; otherwise the person's name opening an account menu. */
 export function AccountArea({ status, user, onSignOut }: AccountAreaProps) {
   const styles = useStyles();
+  const { t } = useTranslation();
   const navigate = useNavigate();
   const { pathname, search } = useLocation();
 
@@ -52,17 +54,17 @@ export function AccountArea({ status, user, onSignOut }: AccountAreaProps) {
     const onAuthPage = pathname === paths.signIn.path || pathname === paths.register.path;
     return (
       <RouterButton to={onAuthPage ? paths.signIn.build() : paths.signIn.build(pathname + search)} appearance="outline">
-        Sign in
+        {t('account.signIn')}
       </RouterButton>
     );
   }
-  if (status === 'loading') return <Spinner size="tiny" label="Checking your sign-in" labelPosition="after" />;
+  if (status === 'loading') return <Spinner size="tiny" label={t('account.checking')} labelPosition="after" />;
 
-  const name = user?.displayName ?? 'Your account';
+  const name = user?.displayName ?? t('account.yourAccount');
   return (
     <Menu>
       <MenuTrigger disableButtonEnhancement>
-        <Button appearance="subtle" className={styles.trigger} aria-label={`Your account: ${name}`}>
+        <Button appearance="subtle" className={styles.trigger} aria-label={t('account.menuLabel', { name })}>
           <Avatar name={user?.displayName} size={28} color="brand" aria-hidden />
           <span className={styles.name}>{name}</span>
         </Button>
@@ -70,7 +72,7 @@ export function AccountArea({ status, user, onSignOut }: AccountAreaProps) {
       <MenuPopover>
         <MenuList>
           <MenuItem icon={<Person20Regular />} onClick={() => navigate(paths.account.build())}>
-            Your account
+            {t('account.yourAccount')}
           </MenuItem>
           {user?.role === 'admin' ? (
             <MenuItem icon={<People20Regular />} onClick={() => navigate(paths.people.build())}>
@@ -78,7 +80,7 @@ export function AccountArea({ status, user, onSignOut }: AccountAreaProps) {
             </MenuItem>
           ) : null}
           <MenuItem icon={<SignOut20Regular />} onClick={onSignOut}>
-            Sign out
+            {t('account.signOut')}
           </MenuItem>
         </MenuList>
       </MenuPopover>

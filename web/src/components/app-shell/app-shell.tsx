@@ -1,5 +1,6 @@
 import { makeStyles, ProgressBar, tokens } from '@fluentui/react-components';
 import type { ReactNode } from 'react';
+import { useTranslation } from 'react-i18next';
 import { hgTokens } from '../../theme/index.js';
 import { SkipLink } from './skip-link.js';
 import { TopBar, type TopBarProps } from './top-bar.js';
@@ -46,19 +47,18 @@ interface AppShellProps extends TopBarProps {
 /** The frame around every page: skip link, top bar, a 1200 px column of content on paper. */
 export function AppShell({ isNavigating, children, ...topBar }: AppShellProps) {
   const styles = useStyles();
+  const { t } = useTranslation();
   return (
     <div className={styles.root}>
       <SkipLink targetId={MAIN_CONTENT_ID} />
       <TopBar {...topBar} />
       <div className={styles.progress}>
-        {isNavigating ? <ProgressBar thickness="medium" aria-label="Loading the page" /> : null}
+        {isNavigating ? <ProgressBar thickness="medium" aria-label={t('shell.loadingPage')} /> : null}
       </div>
       <main id={MAIN_CONTENT_ID} tabIndex={-1} className={styles.main}>
         {children}
       </main>
-      <footer className={styles.footer}>
-        Homeground: native plants for your ground, grown and shared by neighbours.
-      </footer>
+      <footer className={styles.footer}>{t('shell.footer')}</footer>
     </div>
   );
 }

@@ -1,4 +1,5 @@
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
+import { useTranslation } from 'react-i18next';
 import { NavLink } from 'react-router-dom';
 import { NARROW_MEDIA } from './breakpoints.js';
 import type { NavItem } from './nav-items.js';
@@ -27,13 +28,14 @@ const useStyles = makeStyles({
 /** The inline main navigation on wide screens; NavLink marks the current page with aria-current. */
 export function MainNav({ items }: { items: NavItem[] }) {
   const styles = useStyles();
+  const { t } = useTranslation();
   return (
-    <nav aria-label="Main" className={styles.nav}>
+    <nav aria-label={t('nav.main')} className={styles.nav}>
       <ul className={styles.list}>
         {items.map((item) => (
           <li key={item.to}>
             <NavLink to={item.to} className={({ isActive }) => mergeClasses(styles.link, isActive && styles.active)}>
-              {item.label}
+              {t(`nav.${item.labelKey}`)}
             </NavLink>
           </li>
         ))}

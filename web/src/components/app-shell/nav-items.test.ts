@@ -1,10 +1,12 @@
 import { describe, expect, it } from 'vitest';
+import { common } from '../../locales/en/common.js';
 import { juniperGrower, maraOrganiser, priyaMember } from '../../testing/fixtures.js';
 import { visibleNavItems } from './nav-items.js';
 
 // Expected entries and audiences: the product design guide (shared/DESIGN.md beside the project) "Layout" (Season for organisers,
 // My batches for growers, the rest for everyone).
-const labels = (user: Parameters<typeof visibleNavItems>[0]) => visibleNavItems(user).map((i) => i.label);
+const labels = (user: Parameters<typeof visibleNavItems>[0]) =>
+  visibleNavItems(user).map((i) => common.nav[i.labelKey]);
 
 describe('visibleNavItems', () => {
   it('shows the everyone entries when signed out', () => {

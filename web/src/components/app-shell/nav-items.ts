@@ -1,23 +1,25 @@
 import type { User } from '@homeground/shared';
 import { paths } from '../../config/paths.js';
+import type { common } from '../../locales/en/common.js';
 
 /** Who sees a main-navigation entry; group roles come from GET /api/me `groups`. */
 export type NavAudience = 'everyone' | 'organisers' | 'growers';
 
 export interface NavItem {
-  label: string;
+  /** Its words under `nav.` in the common catalogue. */
+  labelKey: keyof typeof common.nav;
   to: string;
   audience: NavAudience;
 }
 
 /** The main navigation in the order of the work (DESIGN.md "Layout"). */
 export const NAV_ITEMS: readonly NavItem[] = [
-  { label: 'Find plants', to: paths.findPlants.build(), audience: 'everyone' },
-  { label: 'Species', to: paths.species.build(), audience: 'everyone' },
-  { label: 'Cards & labels', to: paths.cardsLabels.build(), audience: 'everyone' },
-  { label: 'Season', to: paths.season.build(), audience: 'organisers' },
-  { label: 'My batches', to: paths.myBatches.build(), audience: 'growers' },
-  { label: 'Plant share', to: paths.plantShare.build(), audience: 'everyone' },
+  { labelKey: 'findPlants', to: paths.findPlants.build(), audience: 'everyone' },
+  { labelKey: 'species', to: paths.species.build(), audience: 'everyone' },
+  { labelKey: 'cardsLabels', to: paths.cardsLabels.build(), audience: 'everyone' },
+  { labelKey: 'season', to: paths.season.build(), audience: 'organisers' },
+  { labelKey: 'myBatches', to: paths.myBatches.build(), audience: 'growers' },
+  { labelKey: 'plantShare', to: paths.plantShare.build(), audience: 'everyone' },
 ];
 
 /** The entries this person sees: Season for organisers of any group, My batches for growers. */

@@ -1,5 +1,6 @@
 import { Button, makeStyles, Menu, MenuItem, MenuList, MenuPopover, MenuTrigger } from '@fluentui/react-components';
 import { Navigation24Regular } from '@fluentui/react-icons';
+import { useTranslation } from 'react-i18next';
 import { useLocation, useNavigate } from 'react-router-dom';
 import { NARROW_MEDIA } from './breakpoints.js';
 import type { NavItem } from './nav-items.js';
@@ -11,12 +12,18 @@ const useStyles = makeStyles({
 /** The main navigation folded into one button for narrow screens (down to 360 px wide). */
 export function NavMenuButton({ items }: { items: NavItem[] }) {
   const styles = useStyles();
+  const { t } = useTranslation();
   const navigate = useNavigate();
   const { pathname } = useLocation();
   return (
     <Menu>
       <MenuTrigger disableButtonEnhancement>
-        <Button className={styles.trigger} appearance="subtle" icon={<Navigation24Regular />} aria-label="Main menu" />
+        <Button
+          className={styles.trigger}
+          appearance="subtle"
+          icon={<Navigation24Regular />}
+          aria-label={t('nav.menu')}
+        />
       </MenuTrigger>
       <MenuPopover>
         <MenuList>
@@ -26,7 +33,7 @@ export function NavMenuButton({ items }: { items: NavItem[] }) {
               aria-current={pathname.startsWith(item.to) ? 'page' : undefined}
               onClick={() => navigate(item.to)}
             >
-              {item.label}
+              {t(`nav.${item.labelKey}`)}
             </MenuItem>
           ))}
         </MenuList>

@@ -1,4 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   link: {
@@ -19,9 +20,10 @@ const useStyles = makeStyles({
 /** First stop for keyboard users: jumps past the top bar (WCAG 2.4.1 Bypass Blocks). */
 export function SkipLink({ targetId }: { targetId: string }) {
   const styles = useStyles();
+  const { t } = useTranslation();
   return (
     <a href={`#${targetId}`} className={styles.link}>
-      Skip to content
+      {t('shell.skip')}
     </a>
   );
 }

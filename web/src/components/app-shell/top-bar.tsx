@@ -1,6 +1,7 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import type { User } from '@homeground/shared';
 import { AccountArea, type AccountAreaStatus } from './account-area.js';
+import { LanguageSwitch } from './language-switch.js';
 import { MainNav } from './main-nav.js';
 import { NavMenuButton } from './nav-menu-button.js';
 import { visibleNavItems } from './nav-items.js';
@@ -35,7 +36,7 @@ export interface TopBarProps {
   onSignOut: () => void;
 }
 
-/** Wordmark, main navigation (or its menu button on narrow screens) and the account area. */
+/** Wordmark, main navigation (or its menu button on narrow screens), the language switch and the account area. */
 export function TopBar({ status, user, onSignOut }: TopBarProps) {
   const styles = useStyles();
   const items = visibleNavItems(user);
@@ -46,6 +47,7 @@ export function TopBar({ status, user, onSignOut }: TopBarProps) {
         <Wordmark />
         <MainNav items={items} />
         <div className={styles.spacer} />
+        <LanguageSwitch />
         <AccountArea status={status} user={user} onSignOut={onSignOut} />
       </div>
     </header>

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Field, Input, type InputProps } from '@fluentui/react-components';
 import { PASSWORD_MIN_LENGTH } from '@homeground/shared';
 import type { FieldValidation } from '../../lib/forms/use-schema-form.js';
@@ -19,8 +20,11 @@ export interface SchemaTextFieldProps<F extends string> {
   autoComplete?: string;
 }
 
-/** The hint every new-password field gives, beside the shared length rule. */
-export const NEW_PASSWORD_HINT = `At least ${PASSWORD_MIN_LENGTH} characters. A short sentence is easy to remember.`;
+/** The hint every new-password field gives, beside the shared length rule, in the page's language. */
+export function useNewPasswordHint(): string {
+  const { t } = useTranslation('forms');
+  return t('fields.newPasswordHint', { count: PASSWORD_MIN_LENGTH });
+}
 
 /**
  * One labelled text input bound to a schema form: its value, its change, and the message and state

@@ -1,6 +1,7 @@
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import { ArrowClockwise20Regular, ErrorCircle24Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   root: {
@@ -21,6 +22,7 @@ const useStyles = makeStyles({
 /** Says what failed and why in words, with a retry when one can help. */
 export function ErrorState({ title, message, onRetry }: { title: string; message?: ReactNode; onRetry?: () => void }) {
   const styles = useStyles();
+  const { t } = useTranslation();
   return (
     <div role="alert" className={styles.root}>
       <ErrorCircle24Regular className={styles.icon} aria-hidden />
@@ -29,7 +31,7 @@ export function ErrorState({ title, message, onRetry }: { title: string; message
         {message ? <p className={styles.message}>{message}</p> : null}
         {onRetry ? (
           <Button className={styles.retry} icon={<ArrowClockwise20Regular />} onClick={onRetry}>
-            Try again
+            {t('states.tryAgain')}
           </Button>
         ) : null}
       </div>

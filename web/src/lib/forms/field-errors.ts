@@ -1,3 +1,4 @@
+import { forms } from '../../locales/en/forms.js';
 import type { z } from 'zod';
 import { isApiRequestError } from '../api-request-error.js';
 
@@ -29,7 +30,7 @@ export function fieldErrorsFromZod<K extends string>(error: z.ZodError): FieldEr
  * form does not have, and failures without fields, are said above the form.
  */
 export function failureFromApi<K extends string>(error: unknown, knownFields: readonly K[]): FormFailure<K> {
-  if (!isApiRequestError(error)) return { fields: {}, message: 'Something went wrong. Try again.' };
+  if (!isApiRequestError(error)) return { fields: {}, message: forms.messages.somethingWrong };
   const fields: Record<string, string> = {};
   const loose: string[] = [];
   for (const [field, message] of Object.entries(error.fieldMessages())) {

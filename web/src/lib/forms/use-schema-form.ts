@@ -1,3 +1,4 @@
+import { useSchemaMessage } from './schema-messages.js';
 import { type FormEvent, useEffect, useRef, useState } from 'react';
 import type { z } from 'zod';
 import { failureFromApi, type FieldErrors, fieldErrorsFromZod, type FormFailure } from './field-errors.js';
@@ -27,6 +28,7 @@ export function useSchemaForm<S extends z.ZodType>({ schema, initial }: SchemaFo
   type Field = keyof TextValues<S> & string;
   const fields = Object.keys(initial) as Field[];
   const formRef = useRef<HTMLFormElement>(null);
+  const say = useSchemaMessage();
   const [values, setValues] = useState<TextValues<S>>(initial);
   const [errors, setErrors] = useState<FieldErrors<Field>>({});
   const [failure, setFailure] = useState<string | null>(null);
@@ -55,8 +57,8 @@ export function useSchemaForm<S extends z.ZodType>({ schema, initial }: SchemaFo
     describe: (error: unknown, fields: readonly Field[]) => FormFailure<Field> = failureFromApi,
   ) => {
     const described = describe(error, fields);
-    setErrors(described.fields);
-    setFailure(described.message);
+    setErrors(sayEach(described.fields, say));
+    setFailure(described.message === null ? null : say(described.message));
     focusFirstInvalid();
   };
 
@@ -66,7 +68,7 @@ export function useSchemaForm<S extends z.ZodType>({ schema, initial }: SchemaFo
     setFailure(null);
     const parsed = schema.safeParse(values);
     if (!parsed.success) {
-      setErrors(fieldErrorsFromZod<Field>(parsed.error));
+      setErrors(sayEach(fieldErrorsFromZod<Field>(parsed.error), say));
       focusFirstInvalid();
       return;
     }
@@ -75,4 +77,14 @@ export function useSchemaForm<S extends z.ZodType>({ schema, initial }: SchemaFo
   };
 
   return { formRef, values, errors, failure, fields, change, validation, fail, handleSubmit };
+}
+
+/** Each field's message in the page's language. */
+function sayEach<K extends string>(errors: FieldErrors<K>, say: (message: string) => string): FieldErrors<K> {
+  const out: FieldErrors<K> = {};
+  for (const key of Object.keys(errors) as K[]) {
+    const message = errors[key];
+    if (message) out[key] = say(message);
+  }
+  return out;
 }

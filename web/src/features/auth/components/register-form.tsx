@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { registerRequestSchema, type AuthResponse } from '@homeground/shared';
 import { useRegisterMutation } from '../../../api/auth/auth.mutations.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
@@ -5,11 +6,13 @@ import { describeAuthFailure } from '../utils/form-errors.js';
 import { useAuthFormStyles } from './auth-form.styles.js';
 import { FormFailure } from './form-failure.js';
 import { SubmitButton } from './submit-button.js';
-import { NEW_PASSWORD_HINT, SchemaTextField } from '../../../components/forms/schema-text-field.js';
+import { SchemaTextField, useNewPasswordHint } from '../../../components/forms/schema-text-field.js';
 
 /** Name, e-mail and password, checked with the shared schema; a taken e-mail shows beside its field. */
 export function RegisterForm({ onRegistered }: { onRegistered: (auth: AuthResponse) => void }) {
   const styles = useAuthFormStyles();
+  const { t } = useTranslation('forms');
+  const newPasswordHint = useNewPasswordHint();
   const registerAccount = useRegisterMutation();
   const form = useSchemaForm({ schema: registerRequestSchema, initial: { displayName: '', email: '', password: '' } });
 
@@ -21,22 +24,22 @@ export function RegisterForm({ onRegistered }: { onRegistered: (auth: AuthRespon
   );
 
   return (
-    <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-label="Create an account">
+    <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-label={t('register.title')}>
       <FormFailure message={form.failure} />
       <SchemaTextField
         form={form}
         name="displayName"
-        label="Your name"
-        hint="Your group sees this name."
+        label={t('fields.name')}
+        hint={t('fields.nameHint')}
         required
         autoComplete="name"
       />
-      <SchemaTextField form={form} name="email" label="E-mail" required type="email" autoComplete="email" />
+      <SchemaTextField form={form} name="email" label={t('fields.email')} required type="email" autoComplete="email" />
       <SchemaTextField
         form={form}
         name="password"
-        label="Password"
-        hint={NEW_PASSWORD_HINT}
+        label={t('fields.password')}
+        hint={newPasswordHint}
         required
         type="password"
         autoComplete="new-password"
@@ -44,8 +47,8 @@ export function RegisterForm({ onRegistered }: { onRegistered: (auth: AuthRespon
       <div className={styles.actions}>
         <SubmitButton
           isPending={registerAccount.isPending}
-          label="Create account"
-          pendingLabel="Creating your account…"
+          label={t('register.submit')}
+          pendingLabel={t('register.pending')}
         />
       </div>
     </form>

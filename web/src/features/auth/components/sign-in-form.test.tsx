@@ -87,3 +87,26 @@ describe('sign-in form', () => {
     expect(router.state.location.pathname).toBe('/');
   });
 });
+
+// Spanish words for the same checks: this project's forms catalogue (locales/es/forms.ts), from-memory.
+describe('sign-in form in Spanish', () => {
+  it('says the schema checks and the server answers in Spanish', async () => {
+    const { user } = renderApp({
+      path: '/sign-in',
+      locale: 'es',
+      api: { 'POST /api/auth/login': apiError(401, 'Unauthorized') },
+    });
+    await screen.findByRole('heading', { level: 1, name: 'Entrar' });
+    await user.type(screen.getByLabelText(/Correo electrónico/), 'mara.ellsworth-at-example.org');
+    await user.click(screen.getByRole('button', { name: 'Entrar' }));
+    expect(await screen.findByText(/^Escribe una dirección de correo electrónico/)).toBeInTheDocument();
+    expect(screen.getByText('No puede quedar vacío')).toBeInTheDocument();
+
+    await user.clear(screen.getByLabelText(/Correo electrónico/));
+    await user.type(screen.getByLabelText(/Correo electrónico/), 'mara.ellsworth@example.org');
+    await user.type(screen.getByLabelText(/Contraseña/), 'not-her-password');
+    await user.click(screen.getByRole('button', { name: 'Entrar' }));
+    const alert = await screen.findByRole('alert');
+    expect(await within(alert).findByText('El correo o la contraseña no son correctos')).toBeInTheDocument();
+  });
+});

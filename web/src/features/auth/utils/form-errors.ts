@@ -1,9 +1,11 @@
+import { forms } from '../../../locales/en/forms.js';
 import { failureFromApi, type FieldErrors, type FormFailure } from '../../../lib/forms/field-errors.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
 
-export const WRONG_CREDENTIALS_MESSAGE = 'E-mail or password is wrong';
-export const THROTTLED_MESSAGE = 'Too many attempts: wait a minute and try again';
-export const EMAIL_TAKEN_MESSAGE = 'An account with this e-mail already exists. Sign in instead.';
+// English here; the form says them in the page's language (lib/forms/schema-messages.ts).
+export const WRONG_CREDENTIALS_MESSAGE = forms.messages.wrongCredentials;
+export const THROTTLED_MESSAGE = forms.messages.throttled;
+export const EMAIL_TAKEN_MESSAGE = forms.messages.emailTaken;
 
 /**
  * A failed sign-in or register call in words: the answers only these two calls give (throttled,

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { useId } from 'react';
 import { ContentCard } from '../../../components/page/content-card.js';
@@ -28,11 +29,12 @@ export interface ChooseSpeciesProps {
 /** The three ways in: search, a pasted list, or a link that already names the species. */
 export function ChooseSpecies({ slugs, entries, onAdd, onRemove, onClear }: ChooseSpeciesProps) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
   const headingId = useId();
   return (
     <ContentCard className={styles.card} aria-labelledby={headingId}>
       <Heading level="section" id={headingId}>
-        Choose species
+        {t('choose.title')}
       </Heading>
       <div className={styles.ways}>
         <SpeciesSearch chosen={slugs} onAdd={(s) => onAdd([s.slug])} />

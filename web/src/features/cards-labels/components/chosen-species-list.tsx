@@ -1,6 +1,6 @@
+import { useTranslation } from 'react-i18next';
 import { Button, makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import { ArrowClockwise16Regular, Dismiss16Regular } from '@fluentui/react-icons';
-import { countOf } from '@homeground/shared';
 import { useId } from 'react';
 import { EmptyState } from '../../../components/states/index.js';
 import type { ChosenEntry } from '../hooks/use-chosen-species.js';
@@ -45,22 +45,19 @@ export function ChosenSpeciesList({
   onClear: () => void;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
   const countId = useId();
   if (entries.length === 0) {
-    return (
-      <EmptyState title="No species chosen yet">
-        Add plants by searching or pasting a list; each gets a fact card and a pot label.
-      </EmptyState>
-    );
+    return <EmptyState title={t('choose.noneTitle')}>{t('choose.noneText')}</EmptyState>;
   }
   return (
     <div>
       <div className={styles.head}>
         <p id={countId} className={styles.count} aria-live="polite">
-          {countOf(entries.length, 'species', 'species')} chosen
+          {t('choose.chosen', { count: entries.length })}
         </p>
         <Button appearance="subtle" onClick={onClear}>
-          Remove all
+          {t('choose.removeAll')}
         </Button>
       </div>
       <ul className={styles.list} aria-labelledby={countId}>
@@ -74,12 +71,12 @@ export function ChosenSpeciesList({
                     {name} <span className={styles.scientific}>{entry.species.scientificName}</span>
                   </>
                 ) : entry.status === 'loading' ? (
-                  <Spinner size="extra-tiny" label={`Getting ${entry.slug}`} labelPosition="after" />
+                  <Spinner size="extra-tiny" label={t('choose.getting', { slug: entry.slug })} labelPosition="after" />
                 ) : entry.status === 'missing' ? (
-                  <span className={styles.problem}>“{entry.slug}” is not in the catalogue, so it has no card.</span>
+                  <span className={styles.problem}>{t('choose.missing', { slug: entry.slug })}</span>
                 ) : (
                   <span className={styles.problem}>
-                    “{entry.slug}” did not load: {entry.message}
+                    {t('choose.failed', { slug: entry.slug, message: entry.message })}
                   </span>
                 )}
               </span>
@@ -89,7 +86,7 @@ export function ChosenSpeciesList({
                   appearance="subtle"
                   icon={<ArrowClockwise16Regular />}
                   onClick={entry.retry}
-                  aria-label={`Try ${entry.slug} again`}
+                  aria-label={t('choose.retry', { slug: entry.slug })}
                 />
               ) : null}
               <Button
@@ -97,7 +94,7 @@ export function ChosenSpeciesList({
                 appearance="subtle"
                 icon={<Dismiss16Regular />}
                 onClick={() => onRemove(entry.slug)}
-                aria-label={`Remove ${name}`}
+                aria-label={t('choose.remove', { name })}
               />
             </li>
           );

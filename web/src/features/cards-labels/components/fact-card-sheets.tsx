@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles } from '@fluentui/react-components';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import type { QrEncoderState } from '../hooks/use-qr-encoder.js';
@@ -24,9 +25,10 @@ export function FactCardSheets({
   origin: string;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
   const sheets = intoSheets(species, CARDS_PER_SHEET);
   return (
-    <PrintArea geometry={paper.cards} pageCount={sheets.length} label="Fact cards as they will print">
+    <PrintArea geometry={paper.cards} pageCount={sheets.length} label={t('print.cardsPreview')}>
       {sheets.map((sheet, i) => (
         <Sheet key={i} geometry={paper.cards} index={i} total={sheets.length} className={styles.grid}>
           {sheet.map((s) => (

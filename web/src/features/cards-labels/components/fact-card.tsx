@@ -1,3 +1,5 @@
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
 import { mergeClasses } from '@fluentui/react-components';
 import {
   ArrowAutofitHeight20Regular,
@@ -6,24 +8,14 @@ import {
   Warning16Regular,
   WeatherSunny16Regular,
 } from '@fluentui/react-icons';
-import {
-  bloomWords,
-  capitalise,
-  CAUTION_WORDS,
-  formatHeightRangeCm,
-  genusOf,
-  moisturePhrase,
-  sowingDepthSentence,
-  sowingMethodsPhrase,
-  sunPhrase,
-} from '@homeground/shared';
+import { capitalise, formatHeightRangeCm, genusOf } from '@homeground/shared';
 import { useId, useRef } from 'react';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { flowerSwatch } from '../../../theme/flower-colours.js';
 import { useFitLevel } from '../hooks/use-fit-level.js';
 import type { QrEncoderState } from '../hooks/use-qr-encoder.js';
-import { flowerColourWords, hostWords } from '../utils/card-words.js';
 import { speciesPageUrl } from '../utils/species-url.js';
+import { hostWords } from '../utils/card-words.js';
 import { treatmentSentences } from '../utils/treatment-words.js';
 import { BloomStrip } from './bloom-strip.js';
 import { useFactCardStyles } from './fact-card.styles.js';
@@ -45,6 +37,8 @@ export function FactCard({
   origin: string;
 }) {
   const styles = useFactCardStyles();
+  const { t } = useTranslation('cards');
+  const words = useWords();
   const ref = useRef<HTMLElement>(null);
   const titleId = useId();
   const fit = useFitLevel(ref, FIT_CLASSES.length - 1, `${layoutKey}:${qr.status}`);
@@ -65,7 +59,9 @@ export function FactCard({
           <span key={s.name} className={styles.bandSwatch} style={{ backgroundColor: s.fill }} />
         ))}
         <span className={styles.bandLabel}>
-          {flowerColourWords(species.flowerColours.map((c) => flowerSwatch(c).name))}
+          {species.flowerColours.length === 0
+            ? t('card.noColour')
+            : t('card.flowers', { colours: words.join(species.flowerColours.map((c) => words.flowerColour[c])) })}
         </span>
       </div>
 
@@ -78,77 +74,82 @@ export function FactCard({
           <p className={styles.family}>{species.family}</p>
           <div className={styles.bloom}>
             <BloomStrip months={species.bloomMonths} swatch={swatches[0]} />
-            <p className={styles.text}>{bloomWords(species.bloomMonths)}</p>
+            <p className={styles.text}>{words.bloomWords(species.bloomMonths)}</p>
           </div>
         </div>
         <div className={styles.qr}>
           <QrCode url={url} encoder={qr} />
-          Scan for more
+          {t('card.scan')}
         </div>
       </div>
 
       <dl className={styles.facts}>
         <div className={styles.fact}>
           <dt className={styles.term}>
-            <WeatherSunny16Regular aria-hidden /> Light
+            <WeatherSunny16Regular aria-hidden /> {t('card.light')}
           </dt>
-          <dd className={styles.detail}>{sunPhrase(species.sun)}</dd>
+          <dd className={styles.detail}>{words.sunPhrase(species.sun)}</dd>
         </div>
         <div className={styles.fact}>
           <dt className={styles.term}>
-            <Drop16Regular aria-hidden /> Soil
+            <Drop16Regular aria-hidden /> {t('card.soil')}
           </dt>
-          <dd className={styles.detail}>{moisturePhrase(species.moisture)}</dd>
+          <dd className={styles.detail}>{words.moisturePhrase(species.moisture)}</dd>
         </div>
         <div className={styles.fact}>
           <dt className={styles.term}>
-            <ArrowAutofitHeight20Regular aria-hidden /> Height
+            <ArrowAutofitHeight20Regular aria-hidden /> {t('card.height')}
           </dt>
           <dd className={styles.detail}>{formatHeightRangeCm(species.heightCm.min, species.heightCm.max)}</dd>
         </div>
       </dl>
 
       <section className={styles.section}>
-        <h4 className={styles.sectionTitle}>Wildlife</h4>
+        <h4 className={styles.sectionTitle}>{t('card.wildlife')}</h4>
         {wildlife.monarchHost ? (
           <p className={styles.text}>
-            <strong>Monarch host plant:</strong> monarch caterpillars feed on its leaves.
+            <strong>{t('card.monarchLead')}</strong> {t('card.monarchText')}
           </p>
         ) : null}
-        <p className={styles.text}>{hostWords(genusOf(species), wildlife.lepidopteraGenusCount)}</p>
-        <p className={styles.text}>{wildlife.pollinators}</p>
+        <p className={styles.text}>{hostWords(genusOf(species), wildlife.lepidopteraGenusCount, t)}</p>
+        {/* The record's pollinator note is written in English. */}
+        {words.locale === 'en' ? <p className={styles.text}>{wildlife.pollinators}</p> : null}
       </section>
 
       <section className={styles.section}>
         <h4 className={styles.sectionTitle}>
-          <LeafTwo16Regular aria-hidden /> Grow from seed
+          <LeafTwo16Regular aria-hidden /> {t('card.grow')}
         </h4>
         <ol className={styles.steps}>
-          {treatmentSentences(germination).map((sentence, i) => (
+          {treatmentSentences(germination, words).map((sentence, i) => (
             <li key={i}>{sentence}</li>
           ))}
-          <li>{sowingDepthSentence(germination)}</li>
+          <li>{words.sowingDepthSentence(germination)}</li>
         </ol>
-        <p className={styles.text}>Works with {sowingMethodsPhrase(germination.methods)}.</p>
+        <p className={styles.text}>
+          {t('card.worksWith', { methods: words.sowingMethodsPhrase(germination.methods) })}
+        </p>
       </section>
 
       {species.cautions.length > 0 ? (
         <section className={styles.section}>
           <h4 className={styles.sectionTitle}>
-            <Warning16Regular aria-hidden /> Cautions
+            <Warning16Regular aria-hidden /> {t('card.cautions')}
           </h4>
           {species.cautions.map((c) => (
             <p key={c.kind} className={styles.caution}>
               <Warning16Regular className={styles.cautionIcon} aria-hidden />
               <span>
-                <strong>{CAUTION_WORDS[c.kind].title}:</strong> {c.text}
+                <strong>{t('card.cautionLine', { title: words.caution[c.kind].title })}</strong>{' '}
+                {/* The record's own sentence is English; a Spanish card prints the Spanish caution. */}
+                {words.locale === 'en' ? c.text : words.caution[c.kind].sentence}
               </span>
             </p>
           ))}
         </section>
       ) : null}
 
-      <p className={styles.footer}>Check your state&apos;s noxious-weed list and local rules before planting out.</p>
+      <p className={styles.footer}>{t('card.footer')}</p>
     </article>
   );
 }

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Button, Field, makeStyles, Textarea, tokens } from '@fluentui/react-components';
 import { useState } from 'react';
 import { ErrorState } from '../../../components/states/index.js';
@@ -19,6 +20,7 @@ const useStyles = makeStyles({
 /** A list typed or pasted, one name per line; each line is found by search and added. */
 export function PastedNames({ onAdd }: { onAdd: (slugs: string[]) => void }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
   const [text, setText] = useState('');
   const { state, resolve } = useNameResolver();
   const names = pastedNames(text);
@@ -34,7 +36,7 @@ export function PastedNames({ onAdd }: { onAdd: (slugs: string[]) => void }) {
 
   return (
     <div>
-      <Field label="Or paste a list" hint={`One name per line, common or scientific; up to ${MAX_PASTED_NAMES} names.`}>
+      <Field label={t('choose.pasteLabel')} hint={t('choose.pasteHint', { count: MAX_PASTED_NAMES })}>
         <Textarea
           value={text}
           onChange={(_, d) => setText(d.value)}
@@ -45,13 +47,11 @@ export function PastedNames({ onAdd }: { onAdd: (slugs: string[]) => void }) {
       </Field>
       <div className={styles.actions}>
         <Button disabled={names.length === 0 || state.status === 'working'} onClick={() => void submit()}>
-          {state.status === 'working' ? `Finding ${state.total} names…` : 'Find and add these'}
+          {state.status === 'working' ? t('choose.pasteFinding', { count: state.total }) : t('choose.pasteAdd')}
         </Button>
       </div>
       <div aria-live="polite">
-        {state.status === 'failed' ? (
-          <ErrorState title="The list could not be looked up." message={state.message} />
-        ) : null}
+        {state.status === 'failed' ? <ErrorState title={t('choose.pasteError')} message={state.message} /> : null}
         {found.length > 0 ? (
           <ul className={styles.result} aria-label="Names found">
             {found.map((r) => (

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles } from '@fluentui/react-components';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { intoSheets } from '../utils/paging.js';
@@ -22,13 +23,14 @@ export function PotLabelSheets({
   sowDate: string;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
   const labels = species.flatMap((s) =>
     Array.from({ length: copies }, (_, copy) => ({ species: s, key: `${s.slug}-${copy}` })),
   );
   const sheets = intoSheets(labels, labelsPerSheet(paper));
   const { columns, labelWidth, labelHeight } = paper.labels;
   return (
-    <PrintArea geometry={paper.labels} pageCount={sheets.length} label="Pot labels as they will print">
+    <PrintArea geometry={paper.labels} pageCount={sheets.length} label={t('print.labelsPreview')}>
       {sheets.map((sheet, i) => (
         <Sheet key={i} geometry={paper.labels} index={i} total={sheets.length} className={styles.grid}>
           <div

@@ -1,5 +1,7 @@
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { formatHeightRangeCm, siteShortWords } from '@homeground/shared';
+import { formatHeightRangeCm } from '@homeground/shared';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { flowerSwatch } from '../../../theme/flower-colours.js';
 import { treatmentShort } from '../utils/treatment-words.js';
@@ -43,6 +45,8 @@ const useStyles = makeStyles({
 /** A pot label: names, sow date, light and soil, height, and the seed treatment in a few letters. */
 export function PotLabel({ species, sowDate }: { species: SpeciesDetail; sowDate: string }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
+  const words = useWords();
   const swatch = flowerSwatch(species.flowerColours[0]);
   return (
     <div className={styles.label} data-testid="pot-label">
@@ -52,10 +56,14 @@ export function PotLabel({ species, sowDate }: { species: SpeciesDetail; sowDate
           {species.commonNames[0].charAt(0).toUpperCase() + species.commonNames[0].slice(1)}
         </p>
         <p className={`${styles.line} ${styles.scientific}`}>{species.scientificName}</p>
-        <p className={styles.line}>Sown {sowDate}</p>
-        <p className={styles.line}>{siteShortWords(species.sun, species.moisture)}</p>
-        <p className={styles.line}>{formatHeightRangeCm(species.heightCm.min, species.heightCm.max)} tall</p>
-        <p className={`${styles.line} ${styles.treatment}`}>{treatmentShort(species.germination)}</p>
+        <p className={styles.line}>{t('label.sown', { date: sowDate })}</p>
+        <p className={styles.line}>{words.siteShortWords(species.sun, species.moisture)}</p>
+        <p className={styles.line}>
+          {t('label.tall', { height: formatHeightRangeCm(species.heightCm.min, species.heightCm.max) })}
+        </p>
+        <p className={`${styles.line} ${styles.treatment}`}>
+          {treatmentShort(species.germination, words, t('label.surface'))}
+        </p>
       </div>
     </div>
   );

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Field, Input, makeStyles, Radio, RadioGroup, SpinButton, tokens } from '@fluentui/react-components';
 import { PAPERS, type PaperSize } from '../utils/paper-sizes.js';
 
@@ -30,10 +31,14 @@ export function PrintOptions({
   onChange: (next: PrintOptionsValue) => void;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
   const paper = PAPERS[value.paper];
   return (
     <div className={styles.row}>
-      <Field label="Paper" hint={kind === 'labels' ? `Labels ${paper.labels.sizeWords}` : 'Four fact cards a page'}>
+      <Field
+        label={t('print.paper')}
+        hint={kind === 'labels' ? t('print.labelsHint', { size: paper.labels.sizeWords }) : t('print.cardsHint')}
+      >
         <RadioGroup
           layout="horizontal"
           value={value.paper}
@@ -46,7 +51,7 @@ export function PrintOptions({
       </Field>
       {kind === 'labels' ? (
         <>
-          <Field label="Sow date" hint="Printed on every label; leave empty to write it by hand.">
+          <Field label={t('print.sowDate')} hint={t('print.sowDateHint')}>
             <Input
               className={styles.narrow}
               type="date"
@@ -54,7 +59,7 @@ export function PrintOptions({
               onChange={(_, d) => onChange({ ...value, sowDate: d.value })}
             />
           </Field>
-          <Field label="Labels per species" hint="One for each pot or tray you sow.">
+          <Field label={t('print.perSpecies')} hint={t('print.perSpeciesHint')}>
             <SpinButton
               className={styles.narrow}
               min={1}

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { Info20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
@@ -22,21 +23,16 @@ const useStyles = makeStyles({
 /** Before-you-plant words: the rules that differ by place, and handling care for the chosen plants. */
 export function PrintReminder({ species }: { species: readonly SpeciesDetail[] }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
   const withCautions = species.filter((s) => s.cautions.length > 0);
   const hasSap = species.some((s) => s.cautions.some((c) => c.kind === 'sap-irritant'));
   return (
-    <aside className={styles.root} aria-label="Before you plant">
+    <aside className={styles.root} aria-label={t('reminder.label')}>
       <Info20Regular className={styles.icon} aria-hidden />
       <div>
+        <p className={styles.text}>{t('reminder.rules')}</p>
         <p className={styles.text}>
-          Before you plant or share, check your state&apos;s noxious-weed list and any local rules: a plant native to
-          one county can be restricted in the next.
-        </p>
-        <p className={styles.text}>
-          {hasSap
-            ? 'Milkweed and other plants with milky sap can sting eyes and skin: wear gloves when you clean seed or pot them up, and wash your hands after.'
-            : 'Wear gloves when cleaning seed of plants with sap or bristles, and wash your hands after.'}{' '}
-          Keep seed of plants marked toxic away from children, pets and livestock.
+          {hasSap ? t('reminder.sap') : t('reminder.gloves')} {t('reminder.toxic')}
         </p>
         {withCautions.length > 0 ? (
           <ul className={styles.list} aria-label="Cautions among your plants">

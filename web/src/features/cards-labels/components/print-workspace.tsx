@@ -1,6 +1,8 @@
-import { Button, makeStyles, Tab, TabList, tokens } from '@fluentui/react-components';
+import { LOCALE_TAGS, useLocale } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
+import { Button, makeStyles, tokens } from '@fluentui/react-components';
+import { ViewSwitch } from '../../../components/view-switch/view-switch.js';
 import { Print20Regular } from '@fluentui/react-icons';
-import { countOf } from '@homeground/shared';
 import { useId, useState } from 'react';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { usePublicOrigin } from '../../../api/system/system.queries.js';
@@ -30,8 +32,9 @@ const useStyles = makeStyles({
 /** Choose cards or labels and paper, preview the pages, print. */
 export function PrintWorkspace({ species, isLoading }: { species: readonly SpeciesDetail[]; isLoading: boolean }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
+  const { locale } = useLocale();
   const headingId = useId();
-  const tabsId = useId();
   const qr = useQrEncoder();
   const origin = usePublicOrigin();
   const [kind, setKind] = useState<PrintKind>('cards');
@@ -50,7 +53,9 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
           labelsPerSheet(paper),
         ).length;
   const what =
-    kind === 'cards' ? countOf(species.length, 'fact card') : countOf(species.length * options.copies, 'pot label');
+    kind === 'cards'
+      ? t('print.cardCount', { count: species.length })
+      : t('print.labelCount', { count: species.length * options.copies });
   const canPrint = species.length > 0 && !isLoading;
 
   return (
@@ -58,44 +63,40 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
       {/* The page's paper size and margin for the browser's print dialog and PDF. */}
       <style>{`@page { size: ${paper.cssSize}; margin: ${geometry.margin}; }`}</style>
       <Heading level="section" id={headingId}>
-        Print
+        {t('print.title')}
       </Heading>
       <div className={styles.controls}>
-        <TabList selectedValue={kind} onTabSelect={(_, d) => setKind(d.value as PrintKind)} aria-label="What to print">
-          <Tab id={`${tabsId}-cards`} value="cards">
-            Fact cards
-          </Tab>
-          <Tab id={`${tabsId}-labels`} value="labels">
-            Pot labels
-          </Tab>
-        </TabList>
+        <ViewSwitch<PrintKind>
+          label={t('print.what')}
+          value={kind}
+          onChange={setKind}
+          options={[
+            { value: 'cards', label: t('print.cards') },
+            { value: 'labels', label: t('print.labels') },
+          ]}
+        />
         <PrintOptions kind={kind} value={options} onChange={setOptions} />
-        {kind === 'labels' ? (
-          <p className={styles.legend}>
-            On labels, CMS means cold-moist stratification and WMS warm-moist stratification, each with its days (d).
-          </p>
-        ) : null}
+        {kind === 'labels' ? <p className={styles.legend}>{t('print.legend')}</p> : null}
         <PrintReminder species={species} />
         <div className={styles.actions}>
           <Button appearance="primary" icon={<Print20Regular />} disabled={!canPrint} onClick={() => window.print()}>
-            {kind === 'cards' ? 'Print fact cards' : 'Print pot labels'}
+            {kind === 'cards' ? t('print.printCards') : t('print.printLabels')}
           </Button>
           <span aria-live="polite">
             {canPrint
-              ? `${what} on ${countOf(pages, 'page')}`
+              ? t('print.pages', { what, count: pages })
               : isLoading
-                ? 'Getting the plant records…'
-                : 'Choose at least one species to print.'}
+                ? t('print.getting')
+                : t('print.chooseFirst')}
           </span>
         </div>
       </div>
-      <div role="tabpanel" aria-labelledby={`${tabsId}-${kind}`}>
+      <div>
         {isLoading && species.length === 0 ? (
-          <LoadingState label="Getting the plant records" />
+          <LoadingState label={t('print.loading')} />
         ) : species.length === 0 ? (
-          <EmptyState title="Nothing to print yet">
-            Search for a species or paste a list above, and its {kind === 'cards' ? 'fact card' : 'pot label'} appears
-            here as it will print.
+          <EmptyState title={t('print.nothingTitle')}>
+            {kind === 'cards' ? t('print.nothingCards') : t('print.nothingLabels')}
           </EmptyState>
         ) : kind === 'cards' ? (
           <FactCardSheets species={species} paper={paper} qr={qr} origin={origin} />
@@ -104,7 +105,7 @@ export function PrintWorkspace({ species, isLoading }: { species: readonly Speci
             species={species}
             paper={paper}
             copies={options.copies}
-            sowDate={sowDateWords(options.sowDate)}
+            sowDate={sowDateWords(options.sowDate, LOCALE_TAGS[locale])}
           />
         )}
       </div>

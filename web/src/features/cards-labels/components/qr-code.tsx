@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { useMemo } from 'react';
 import type { QrEncoderState } from '../hooks/use-qr-encoder.js';
@@ -13,13 +14,14 @@ const useStyles = makeStyles({
 /** A scannable QR code for `url`, drawn as SVG; the link's words are its accessible name. */
 export function QrCode({ url, encoder }: { url: string; encoder: QrEncoderState }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
   const matrix = useMemo(() => (encoder.status === 'ready' ? encoder.encode(url) : null), [encoder, url]);
   if (!matrix) {
     return (
       <div
         className={styles.pending}
         role="img"
-        aria-label={encoder.status === 'failed' ? `QR code could not be drawn; link: ${url}` : 'Drawing the QR code'}
+        aria-label={encoder.status === 'failed' ? t('card.qrFailed', { url }) : t('card.qrDrawing')}
       />
     );
   }
@@ -29,11 +31,11 @@ export function QrCode({ url, encoder }: { url: string; encoder: QrEncoderState 
       className={styles.svg}
       viewBox={`0 0 ${side} ${side}`}
       role="img"
-      aria-label={`QR code linking to ${url}`}
+      aria-label={t('card.qrLink', { url })}
       data-url={url}
       shapeRendering="crispEdges"
     >
-      <title>{`QR code linking to ${url}`}</title>
+      <title>{t('card.qrLink', { url })}</title>
       <rect className={styles.light} width={side} height={side} />
       <path className={styles.dark} d={qrPathData(matrix)} />
     </svg>

@@ -1,6 +1,8 @@
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
 import { Button, Field, makeStyles, SearchBox, Spinner, tokens } from '@fluentui/react-components';
 import { Add16Regular, Checkmark16Regular } from '@fluentui/react-icons';
-import { type SpeciesSummary, cautionList } from '@homeground/shared';
+import type { SpeciesSummary } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { speciesListQueryOptions } from '../../../api/species/species.queries.js';
@@ -31,6 +33,8 @@ export function SpeciesSearch({
   onAdd: (species: SpeciesSummary) => void;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('cards');
+  const words = useWords();
   const [text, setText] = useState('');
   const q = useDebouncedValue(text.trim(), 300);
   const search = useQuery({
@@ -41,24 +45,26 @@ export function SpeciesSearch({
 
   return (
     <div>
-      <Field label="Search the catalogue" hint="Common or scientific name; small typos are fine.">
-        <SearchBox value={text} onChange={(_, d) => setText(d.value)} placeholder="e.g. butterfly weed" />
+      <Field label={t('choose.searchLabel')} hint={t('choose.searchHint')}>
+        <SearchBox value={text} onChange={(_, d) => setText(d.value)} placeholder={t('choose.searchPlaceholder')} />
       </Field>
-      {search.isFetching && q.length >= 2 ? <Spinner className={styles.status} size="tiny" label="Searching" /> : null}
+      {search.isFetching && q.length >= 2 ? (
+        <Spinner className={styles.status} size="tiny" label={t('choose.searching')} />
+      ) : null}
       {search.isError ? (
         <ErrorState
-          title="The search did not answer."
+          title={t('choose.searchError')}
           message={search.error.message}
           onRetry={() => void search.refetch()}
         />
       ) : null}
       {search.isSuccess && q.length >= 2 && items.length === 0 ? (
         <p className={styles.status} role="status">
-          No species match “{q}”.
+          {t('choose.noMatch', { query: q })}
         </p>
       ) : null}
       {items.length > 0 ? (
-        <ul className={styles.list} aria-label="Search results">
+        <ul className={styles.list} aria-label={t('choose.results')}>
           {items.map((s) => {
             const added = chosen.includes(s.slug);
             return (
@@ -66,7 +72,9 @@ export function SpeciesSearch({
                 <span className={styles.names}>
                   {s.commonName} <span className={styles.scientific}>{s.scientificName}</span>
                   {s.cautionKinds.length > 0 ? (
-                    <span className={styles.caution}>Cautions: {cautionList(s.cautionKinds)}</span>
+                    <span className={styles.caution}>
+                      {t('choose.cautions', { list: words.cautionList(s.cautionKinds) })}
+                    </span>
                   ) : null}
                 </span>
                 <Button
@@ -74,9 +82,11 @@ export function SpeciesSearch({
                   icon={added ? <Checkmark16Regular /> : <Add16Regular />}
                   disabled={added}
                   onClick={() => onAdd(s)}
-                  aria-label={added ? `${s.commonName} is on your list` : `Add ${s.commonName}`}
+                  aria-label={
+                    added ? t('choose.isAdded', { name: s.commonName }) : t('choose.addName', { name: s.commonName })
+                  }
                 >
-                  {added ? 'Added' : 'Add'}
+                  {added ? t('choose.added') : t('choose.add')}
                 </Button>
               </li>
             );

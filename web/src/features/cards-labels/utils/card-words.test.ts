@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { bloomWords, moisturePhrase, sunPhrase } from '@homeground/shared';
+import { createI18n } from '../../../lib/i18n/index.js';
 import { hostWords, sowDateWords, todayIso } from './card-words.js';
+
+const t = createI18n('en').getFixedT('en', 'cards');
 
 // Host counts are per genus from Tallamy & Shropshire 2009 (the records' tallamy-shropshire-2009
 // key): Asclepias 12; a fern genus 0; a genus missing from the table is null.
@@ -10,7 +13,7 @@ describe('card words', () => {
     ['Adiantum', 0, 'No moth or butterfly caterpillars are recorded on Adiantum (Tallamy & Shropshire 2009).'],
     ['Zizia', null, 'Zizia is not in the caterpillar host counts (Tallamy & Shropshire 2009).'],
   ])('%s with %s hosts', (genus, count, expected) => {
-    expect(hostWords(genus, count)).toBe(expected);
+    expect(hostWords(genus, count, t)).toBe(expected);
   });
 
   it('names light and soil in the order a grower reads them', () => {

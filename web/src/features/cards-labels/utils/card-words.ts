@@ -1,17 +1,12 @@
-import { joinWords } from '@homeground/shared';
+import type { TFunction } from 'i18next';
 
-/** Sun, moisture, bloom and caution words come from the shared vocabulary (`sunPhrase`, `bloomWords` …). */
+/** Sun, moisture, bloom and caution words come from the shared vocabulary (`useWords()`). */
 
 /** Caterpillar host value of the genus, always with its source (Tallamy & Shropshire 2009). */
-export function hostWords(genus: string, count: number | null): string {
-  if (count === null) return `${genus} is not in the caterpillar host counts (Tallamy & Shropshire 2009).`;
-  if (count === 0) return `No moth or butterfly caterpillars are recorded on ${genus} (Tallamy & Shropshire 2009).`;
-  return `${genus} hosts the caterpillars of ${count} moth and butterfly species (Tallamy & Shropshire 2009).`;
-}
-
-/** "Flowers orange", "Flowers lavender and pink": the band's words, so grey copies keep the colour. */
-export function flowerColourWords(names: readonly string[]): string {
-  return names.length === 0 ? 'Flower colour not recorded' : `Flowers ${joinWords(names)}`;
+export function hostWords(genus: string, count: number | null, t: TFunction<'cards'>): string {
+  if (count === null) return t('card.hostNotListed', { genus });
+  if (count === 0) return t('card.hostNone', { genus });
+  return t('card.hosts', { genus, count });
 }
 
 /** Today as YYYY-MM-DD in the person's own time zone (what a date input holds). */
@@ -21,9 +16,9 @@ export function todayIso(now: Date = new Date()): string {
 }
 
 /** "2026-03-02" → "Mar 2, 2026"; an empty or bad date prints a blank line to fill in by hand. */
-export function sowDateWords(iso: string): string {
+export function sowDateWords(iso: string, localeTag = 'en-US'): string {
   if (!/^\d{4}-\d{2}-\d{2}$/.test(iso)) return '____________';
   const date = new Date(`${iso}T00:00:00Z`);
   if (Number.isNaN(date.getTime())) return '____________';
-  return date.toLocaleDateString('en-US', { timeZone: 'UTC', month: 'short', day: 'numeric', year: 'numeric' });
+  return date.toLocaleDateString(localeTag, { timeZone: 'UTC', month: 'short', day: 'numeric', year: 'numeric' });
 }

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { useCallback, useEffect, useMemo, useRef } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { MAIN_CONTENT_ID } from '../../../components/app-shell/app-shell.js';
@@ -12,11 +13,11 @@ import {
 } from '../../../config/paths.js';
 import { useDocumentTitle } from '../../../lib/use-document-title.js';
 
-const STEP_TITLES: Record<FindPlantsStep, string> = {
-  ground: 'Find plants: your ground',
-  yard: 'Find plants: your yard',
-  mix: 'Your yard mix',
-};
+const STEP_TITLES = {
+  ground: 'page.titleGround',
+  yard: 'page.titleYard',
+  mix: 'page.titleMix',
+} as const satisfies Record<FindPlantsStep, string>;
 
 /**
  * Find plants: your ground → your yard → your yard mix. The step and every answer live in the URL,
@@ -25,10 +26,11 @@ const STEP_TITLES: Record<FindPlantsStep, string> = {
  * moves between steps; the route only lays the steps out.
  */
 export function useFindPlantsSteps() {
+  const { t } = useTranslation('ground');
   const [params, setParams] = useSearchParams();
   const search = useMemo(() => paths.findPlants.parse(params), [params]);
   const step = stepOf(search);
-  useDocumentTitle(STEP_TITLES[step]);
+  useDocumentTitle(t(STEP_TITLES[step]));
   useFocusOnNewStep(step);
 
   const goTo = (next: FindPlantsStep) => setParams(withStep(params, next));

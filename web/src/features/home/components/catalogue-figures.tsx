@@ -1,3 +1,5 @@
+import { useTranslation } from 'react-i18next';
+import { useFormatters } from '../../../lib/i18n/index.js';
 import { makeStyles, SkeletonItem, Skeleton, tokens } from '@fluentui/react-components';
 import { useQuery } from '@tanstack/react-query';
 import { statsQueryOptions } from '../../../api/system/system.queries.js';
@@ -27,37 +29,37 @@ const useStyles = makeStyles({
   label: { color: hgTokens.hgColorLoam },
 });
 
-const count = new Intl.NumberFormat('en-US');
-
 /** Live counts from GET /api/stats, with a note when GET /api/health says the database is down. */
 export function CatalogueFigures() {
   const styles = useStyles();
+  const { t } = useTranslation('home');
+  const format = useFormatters();
   const stats = useQuery(statsQueryOptions());
 
   return (
     <ContentCard aria-labelledby="catalogue-today">
       <Heading level="section" id="catalogue-today">
-        In the catalogue today
+        {t('figures.title')}
       </Heading>
       <QueryState
         query={stats}
         loading={
-          <Skeleton aria-label="Loading the catalogue figures">
+          <Skeleton aria-label={t('figures.loading')}>
             <SkeletonItem size={48} />
           </Skeleton>
         }
-        error="The catalogue figures did not load."
+        error={t('figures.error')}
       >
         {(data) => (
           <dl className={styles.list}>
             {[
-              { label: 'native species in the catalogue', value: data.species },
-              { label: 'growing groups', value: data.groups },
-              { label: 'ecoregions covered', value: data.ecoregions },
+              { label: t('figures.species'), value: data.species },
+              { label: t('figures.groups'), value: data.groups },
+              { label: t('figures.ecoregions'), value: data.ecoregions },
             ].map((f) => (
               <div key={f.label} className={styles.figure}>
                 <dt className={styles.label}>{f.label}</dt>
-                <dd className={styles.value}>{count.format(f.value)}</dd>
+                <dd className={styles.value}>{format.number(f.value)}</dd>
               </div>
             ))}
           </dl>

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { useQuery } from '@tanstack/react-query';
 import { healthQueryOptions } from '../../../api/system/system.queries.js';
@@ -12,11 +13,12 @@ const useStyles = makeStyles({
  */
 export function CatalogueStatusNote() {
   const styles = useStyles();
+  const { t } = useTranslation('home');
   const health = useQuery(healthQueryOptions());
   if (health.data?.database.status !== 'down') return null;
   return (
     <p className={styles.note} role="status">
-      The catalogue is not answering right now, so these figures may be out of date.
+      {t('figures.down')}
     </p>
   );
 }

@@ -1,3 +1,5 @@
+import type { TFunction } from 'i18next';
+import { useTranslation } from 'react-i18next';
 import { makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import type { Group } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
@@ -15,33 +17,34 @@ const useStyles = makeStyles({
   meta: { color: hgTokens.hgColorLoam, fontVariantNumeric: 'tabular-nums' },
 });
 
-function describeGroup(group: Group): string {
-  const place = `${group.town}, ${group.state}`;
-  const ecoregion = group.ecoregionCode ? ` · ecoregion ${group.ecoregionCode}` : '';
-  const people = `${group.members} ${group.members === 1 ? 'member' : 'members'}`;
-  return `${place}${ecoregion} · ${people}`;
+/** Town, ecoregion and size as separate phrases joined by a middle dot (a list, not a sentence). */
+function describeGroup(group: Group, t: TFunction<'home'>): string {
+  return [
+    t('groups.place', { town: group.town, state: group.state }),
+    group.ecoregionCode ? t('groups.ecoregion', { code: group.ecoregionCode }) : null,
+    t('groups.members', { count: group.members }),
+  ]
+    .filter(Boolean)
+    .join(' · ');
 }
 
 /** The groups growing with Homeground (GET /api/groups, public). */
 export function GrowingGroups() {
   const styles = useStyles();
+  const { t } = useTranslation('home');
   const groups = useQuery(groupsQueryOptions());
 
   return (
     <ContentCard aria-labelledby="growing-groups">
       <Heading level="section" id="growing-groups">
-        Groups growing with Homeground
+        {t('groups.title')}
       </Heading>
       <QueryState
         query={groups}
-        loading={<Spinner size="small" label="Loading the groups" />}
-        error="The list of groups did not load."
+        loading={<Spinner size="small" label={t('groups.loading')} />}
+        error={t('groups.error')}
         isEmpty={(data) => data.length === 0}
-        empty={() => (
-          <EmptyState title="No growing groups have joined yet.">
-            When a group starts its first season, it shows here.
-          </EmptyState>
-        )}
+        empty={() => <EmptyState title={t('groups.emptyTitle')}>{t('groups.emptyText')}</EmptyState>}
       >
         {(data) => (
           <ul className={styles.list}>
@@ -50,7 +53,7 @@ export function GrowingGroups() {
                 <div className={styles.name}>
                   <RouterLink to={paths.group.build(g.slug)}>{g.name}</RouterLink>
                 </div>
-                <div className={styles.meta}>{describeGroup(g)}</div>
+                <div className={styles.meta}>{describeGroup(g, t)}</div>
               </li>
             ))}
           </ul>

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { ArrowRight20Regular } from '@fluentui/react-icons';
 import { RouterButton } from '../../../components/links/router-link.js';
@@ -11,14 +12,12 @@ const useStyles = makeStyles({
 /** What Homeground does, in one breath, and the screen's one primary action. */
 export function HomeHero() {
   const styles = useStyles();
+  const { t } = useTranslation('home');
   return (
     <div className={styles.hero}>
-      <PageIntro title="Grow the native plants that belong to your ground">
-        Homeground helps community growing groups choose the native plants of their ecoregion, grow them from seed over
-        winter, and share them with neighbours in spring.
-      </PageIntro>
+      <PageIntro title={t('hero.title')}>{t('hero.intro')}</PageIntro>
       <RouterButton to={paths.findPlants.build()} appearance="primary" size="large" icon={<ArrowRight20Regular />}>
-        Find plants for your ground
+        {t('hero.action')}
       </RouterButton>
     </div>
   );

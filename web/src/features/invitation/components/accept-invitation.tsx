@@ -15,7 +15,7 @@ import { PageIntro } from '../../../components/page/page-intro.js';
 import { ErrorState, QueryState } from '../../../components/states/index.js';
 import { paths } from '../../../config/paths.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
-import { NEW_PASSWORD_HINT, SchemaTextField } from '../../../components/forms/schema-text-field.js';
+import { SchemaTextField, useNewPasswordHint } from '../../../components/forms/schema-text-field.js';
 
 const useStyles = makeStyles({
   card: { maxWidth: '560px', display: 'grid', gap: tokens.spacingVerticalM },
@@ -118,6 +118,7 @@ function NewAccountForm({
   onJoined: (auth: AuthResponse) => void;
 }) {
   const styles = useStyles();
+  const newPasswordHint = useNewPasswordHint();
   const form = useSchemaForm({ schema: newAccountSchema, initial: { displayName: '', password: '' } });
   const submit = form.handleSubmit((body) =>
     accept.mutate(body, { onSuccess: onJoined, onError: (error) => form.fail(error) }),
@@ -141,7 +142,7 @@ function NewAccountForm({
         form={form}
         name="password"
         label="Password"
-        hint={NEW_PASSWORD_HINT}
+        hint={newPasswordHint}
         required
         type="password"
         autoComplete="new-password"

@@ -1,4 +1,6 @@
-import { bloomWords, type FlowerColour, MONTH_NUMBERS, MONTH_WORDS } from '@homeground/shared';
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
+import { type FlowerColour, MONTH_NUMBERS } from '@homeground/shared';
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import { flowerSwatch } from '../../../theme/flower-colours.js';
 
@@ -43,10 +45,12 @@ export interface BloomStripProps {
  */
 export function BloomStrip({ bloomMonths, flowerColours, size = 'compact', className }: BloomStripProps) {
   const styles = useStyles();
+  const { t } = useTranslation('species');
+  const words = useWords();
   const swatch = flowerSwatch(flowerColours[0]);
-  const label = bloomWords(bloomMonths);
-  const colours = flowerColours.map((c) => flowerSwatch(c).name).join(' and ');
-  const spoken = bloomMonths.length > 0 && colours ? `${label}; ${colours} flowers` : label;
+  const label = words.bloomWords(bloomMonths);
+  const colours = words.join(flowerColours.map((c) => words.flowerColour[c]));
+  const spoken = bloomMonths.length > 0 && colours ? t('cells.flowers', { months: label, colours }) : label;
   const isLarge = size === 'large';
   return (
     <span role="img" aria-label={spoken} title={spoken} className={mergeClasses(styles.root, className)}>
@@ -72,7 +76,7 @@ export function BloomStrip({ bloomMonths, flowerColours, size = 'compact', class
         <span className={styles.initials} aria-hidden>
           {MONTH_NUMBERS.map((month) => (
             <span key={month} className={styles.initial}>
-              {MONTH_WORDS[month].initial}
+              {words.month[month].initial}
             </span>
           ))}
         </span>

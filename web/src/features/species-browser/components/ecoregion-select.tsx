@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import type { StateCode } from '@homeground/shared';
 import { Field, Select } from '@fluentui/react-components';
 import { useQuery } from '@tanstack/react-query';
@@ -15,20 +16,21 @@ export function EcoregionSelect({
   onChange: (code: string | undefined) => void;
 }) {
   const styles = useSelectStyles();
+  const { t } = useTranslation('species');
   const ecoregions = useQuery(ecoregionListQueryOptions(state));
   const list = [...(ecoregions.data ?? [])].sort((a, b) => Number(a.code) - Number(b.code));
   const isKnown = value === undefined || list.some((e) => e.code === value);
 
-  let hint: string | undefined = state
-    ? 'Ecoregions that reach into this state.'
-    : 'Choose a state first to see only its ecoregions.';
-  if (ecoregions.isPending) hint = 'Loading the ecoregions…';
+  let hint: string = state ? t('filters.ecoregionInState') : t('filters.ecoregionChooseState');
+  if (ecoregions.isPending) hint = t('filters.ecoregionLoading');
   return (
     <Field
-      label="Ecoregion (EPA Level III)"
+      label={t('filters.ecoregion')}
       hint={ecoregions.isError ? undefined : hint}
       validationState={ecoregions.isError ? 'error' : 'none'}
-      validationMessage={ecoregions.isError ? `The ecoregions did not load: ${ecoregions.error.message}` : undefined}
+      validationMessage={
+        ecoregions.isError ? t('filters.ecoregionError', { message: ecoregions.error.message }) : undefined
+      }
     >
       <Select
         className={styles.root}
@@ -37,8 +39,8 @@ export function EcoregionSelect({
         disabled={ecoregions.isPending}
         onChange={(_, d) => onChange(d.value || undefined)}
       >
-        <option value="">Any ecoregion</option>
-        {!isKnown ? <option value={value}>Ecoregion {value}</option> : null}
+        <option value="">{t('filters.anyEcoregion')}</option>
+        {!isKnown ? <option value={value}>{t('filters.ecoregionCode', { code: value })}</option> : null}
         {list.map((e) => (
           <option key={e.code} value={e.code}>
             {e.code} · {e.name}

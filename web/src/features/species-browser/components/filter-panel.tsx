@@ -1,18 +1,17 @@
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
 import {
+  capitalise,
   capitaliseAll,
-  GROWTH_FORM_WORDS,
   GROWTH_FORMS,
   type GrowthForm,
   MOISTURE_LEVELS,
-  MOISTURE_WORDS,
   type Moisture,
   MONTH_NUMBERS,
-  MONTH_WORDS,
   byStateListName,
   stateListName,
   type StateCode,
   SUN_LEVELS,
-  SUN_WORDS,
   type Sun,
   US_STATE_CODES,
 } from '@homeground/shared';
@@ -85,11 +84,7 @@ function OptionSelect<T extends string>({
   );
 }
 
-const SUN_LABELS = capitaliseAll(SUN_WORDS);
-const MOISTURE_LABELS = capitaliseAll(MOISTURE_WORDS);
-const GROWTH_FORM_LABELS = capitaliseAll(GROWTH_FORM_WORDS);
 const MONTH_VALUES = MONTH_NUMBERS.map(String);
-const MONTH_LABELS = Object.fromEntries(MONTH_NUMBERS.map((m) => [String(m), MONTH_WORDS[m].long]));
 
 /** Every catalogue field the API filters on, each written to the URL as it changes. */
 export function FilterPanel({
@@ -102,13 +97,16 @@ export function FilterPanel({
   onClear: () => void;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('species');
+  const words = useWords();
+  const monthLabels = Object.fromEntries(MONTH_NUMBERS.map((m) => [String(m), capitalise(words.month[m].long)]));
   const active = countActiveFilters(state);
   return (
     <>
       <div className={styles.grid}>
         <OptionSelect<StateCode>
-          label="Native to"
-          anyLabel="Any state"
+          label={t('filters.nativeTo')}
+          anyLabel={t('filters.anyState')}
           value={state.state}
           options={STATES_BY_NAME}
           labels={STATE_LIST_NAMES}
@@ -116,35 +114,35 @@ export function FilterPanel({
         />
         <EcoregionSelect state={state.state} value={state.ecoregion} onChange={(v) => onChange({ ecoregion: v })} />
         <OptionSelect<Sun>
-          label="Sun"
-          anyLabel="Any light"
+          label={t('filters.sun')}
+          anyLabel={t('filters.anySun')}
           value={state.sun}
           options={SUN_LEVELS}
-          labels={SUN_LABELS}
+          labels={capitaliseAll(words.sun)}
           onChange={(v) => onChange({ sun: v })}
         />
         <OptionSelect<Moisture>
-          label="Soil moisture"
-          anyLabel="Any moisture"
+          label={t('filters.moisture')}
+          anyLabel={t('filters.anyMoisture')}
           value={state.moisture}
           options={MOISTURE_LEVELS}
-          labels={MOISTURE_LABELS}
+          labels={capitaliseAll(words.moisture)}
           onChange={(v) => onChange({ moisture: v })}
         />
         <OptionSelect<string>
-          label="Blooming in"
-          anyLabel="Any month"
+          label={t('filters.blooming')}
+          anyLabel={t('filters.anyMonth')}
           value={state.bloomMonth === undefined ? undefined : String(state.bloomMonth)}
           options={MONTH_VALUES}
-          labels={MONTH_LABELS}
+          labels={monthLabels}
           onChange={(v) => onChange({ bloomMonth: v === undefined ? undefined : Number(v) })}
         />
         <OptionSelect<GrowthForm>
-          label="Growth form"
-          anyLabel="Any form"
+          label={t('filters.growthForm')}
+          anyLabel={t('filters.anyForm')}
           value={state.growthForm}
           options={GROWTH_FORMS}
-          labels={GROWTH_FORM_LABELS}
+          labels={capitaliseAll(words.growthForm)}
           onChange={(v) => onChange({ growthForm: v })}
         />
         <div className={styles.wide}>
@@ -153,12 +151,12 @@ export function FilterPanel({
       </div>
       <div className={styles.footer}>
         <Checkbox
-          label="Monarch caterpillar host plants only"
+          label={t('filters.monarchOnly')}
           checked={state.monarchHost}
           onChange={(_, d) => onChange({ monarchHost: d.checked === true })}
         />
         <Button appearance="subtle" icon={<Dismiss16Regular />} disabled={active === 0} onClick={onClear}>
-          Clear filters
+          {t('filters.clear')}
         </Button>
       </div>
     </>

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Field, Input, makeStyles, Radio, RadioGroup, tokens } from '@fluentui/react-components';
 import { cmToInches, inchesToCm, roundTo } from '@homeground/shared';
 import { useId, useState } from 'react';
@@ -38,18 +39,19 @@ function HeightInput({
   unit,
   onCommit,
 }: {
-  label: string;
+  label: 'from' | 'to';
   valueCm?: number;
   unit: Unit;
   onCommit: (cm: number | undefined) => void;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('species');
   const { draft, setDraft, flush } = useDebouncedDraft(display(valueCm, unit), (text) => onCommit(toCm(text, unit)), {
     normalize: (text) => display(toCm(text, unit), unit),
     delayMs: 600,
   });
   return (
-    <Field label={`${label} (${unit})`}>
+    <Field label={t(`height.${label}`, { unit })}>
       <Input
         className={styles.input}
         inputMode="decimal"
@@ -73,35 +75,36 @@ export function HeightFilter({
   onChange: (change: { minHeightCm?: number; maxHeightCm?: number }) => void;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('species');
   const legendId = useId();
   const [unit, setUnit] = useState<Unit>('ft');
   const inverted = isHeightRangeInverted({ minHeightCm: minCm, maxHeightCm: maxCm });
   const other = (cm: number) => (unit === 'ft' ? formatCm(cm) : formatFeet(cm));
-  let echo = 'Any height';
-  if (minCm !== undefined && maxCm !== undefined) echo = `${other(minCm)} to ${other(maxCm)}`;
-  else if (minCm !== undefined) echo = `At least ${other(minCm)}`;
-  else if (maxCm !== undefined) echo = `Up to ${other(maxCm)}`;
+  let echo: string = t('height.any');
+  if (minCm !== undefined && maxCm !== undefined) echo = t('height.between', { min: other(minCm), max: other(maxCm) });
+  else if (minCm !== undefined) echo = t('height.atLeast', { min: other(minCm) });
+  else if (maxCm !== undefined) echo = t('height.upTo', { max: other(maxCm) });
 
   return (
     <fieldset className={styles.root} aria-labelledby={legendId}>
       <legend id={legendId} className={styles.legend}>
-        Height
+        {t('height.legend')}
       </legend>
       <RadioGroup
         layout="horizontal"
-        aria-label="Height unit"
+        aria-label={t('height.unit')}
         value={unit}
         onChange={(_, d) => setUnit(d.value as Unit)}
       >
-        <Radio value="ft" label="feet" />
-        <Radio value="cm" label="centimetres" />
+        <Radio value="ft" label={t('height.feet')} />
+        <Radio value="cm" label={t('height.centimetres')} />
       </RadioGroup>
       <div className={styles.inputs}>
-        <HeightInput label="From" valueCm={minCm} unit={unit} onCommit={(cm) => onChange({ minHeightCm: cm })} />
-        <HeightInput label="To" valueCm={maxCm} unit={unit} onCommit={(cm) => onChange({ maxHeightCm: cm })} />
+        <HeightInput label="from" valueCm={minCm} unit={unit} onCommit={(cm) => onChange({ minHeightCm: cm })} />
+        <HeightInput label="to" valueCm={maxCm} unit={unit} onCommit={(cm) => onChange({ maxHeightCm: cm })} />
       </div>
       <p className={styles.echo} role={inverted ? 'alert' : undefined} aria-live={inverted ? undefined : 'polite'}>
-        {inverted ? 'The lower height is above the upper one, so height is not filtering yet.' : echo}
+        {inverted ? t('height.inverted') : echo}
       </p>
     </fieldset>
   );

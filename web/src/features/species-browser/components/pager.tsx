@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Button, Label, makeStyles, Select, tokens } from '@fluentui/react-components';
 import { useId } from 'react';
 import { ChevronLeft20Regular, ChevronRight20Regular } from '@fluentui/react-icons';
@@ -31,30 +32,29 @@ export function Pager({
   onPageSize: (size: number) => void;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('species');
   const id = useId();
   const sizes = (PAGE_SIZES as readonly number[]).includes(pageSize)
     ? PAGE_SIZES
     : [...PAGE_SIZES, pageSize].sort((a, b) => a - b);
   return (
-    <nav className={styles.root} aria-label="Result pages">
+    <nav className={styles.root} aria-label={t('pager.label')}>
       <div className={styles.pages}>
         <Button icon={<ChevronLeft20Regular />} disabled={page <= 1} onClick={() => onPage(page - 1)}>
-          Previous
+          {t('pager.previous')}
         </Button>
-        <span className={styles.where}>
-          Page {page} of {pageCount}
-        </span>
+        <span className={styles.where}>{t('pager.where', { page, count: pageCount })}</span>
         <Button
           icon={<ChevronRight20Regular />}
           iconPosition="after"
           disabled={page >= pageCount}
           onClick={() => onPage(page + 1)}
         >
-          Next
+          {t('pager.next')}
         </Button>
       </div>
       <div className={styles.size}>
-        <Label htmlFor={id}>Species per page</Label>
+        <Label htmlFor={id}>{t('pager.size')}</Label>
         <Select id={id} value={String(pageSize)} onChange={(_, d) => onPageSize(Number(d.value))}>
           {sizes.map((n) => (
             <option key={n} value={n}>

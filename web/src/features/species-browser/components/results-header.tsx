@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Button, makeStyles, mergeClasses, Spinner } from '@fluentui/react-components';
 import { ArrowDownload20Regular } from '@fluentui/react-icons';
 import { forwardRef } from 'react';
@@ -10,7 +11,6 @@ import { useBrowserStyles } from './species-browser.styles.js';
 import { SortSelect } from './sort-select.js';
 
 const useStyles = makeStyles({ exportLink: { textDecorationLine: 'none' } });
-const count = new Intl.NumberFormat('en-US');
 
 export interface ResultsHeaderProps {
   headingId: string;
@@ -33,10 +33,10 @@ export const ResultsHeader = forwardRef<HTMLHeadingElement, ResultsHeaderProps>(
     const own = useStyles();
     const heading = useHeadingStyles();
     const { total, query } = props;
-    let title = 'Species';
-    // "Species" is both singular and plural; only the verb changes.
+    const { t } = useTranslation('species');
+    let title: string = t('results.title');
     if (total !== undefined)
-      title = `${count.format(total)} species${query ? ` ${total === 1 ? 'matches' : 'match'} “${query}”` : ''}`;
+      title = query ? t('results.matches', { count: total, query }) : t('results.count', { count: total });
     return (
       <div className={styles.toolbar}>
         <div aria-live="polite" className={styles.count}>
@@ -49,13 +49,11 @@ export const ResultsHeader = forwardRef<HTMLHeadingElement, ResultsHeaderProps>(
             {title}
           </h2>
           {total ? (
-            <p className={styles.range}>
-              Showing {count.format(props.first)}–{count.format(props.last)}
-            </p>
+            <p className={styles.range}>{t('results.showing', { first: props.first, last: props.last })}</p>
           ) : null}
         </div>
         <div className={styles.tools}>
-          {props.isUpdating ? <Spinner size="tiny" label="Updating" className={styles.updating} /> : null}
+          {props.isUpdating ? <Spinner size="tiny" label={t('results.updating')} className={styles.updating} /> : null}
           <SortSelect sort={props.sort} order={props.order} isSearching={query !== ''} onSort={props.onSort} />
           <ColumnMenu shown={props.columns} onChange={props.onColumns} />
           <Button
@@ -65,7 +63,7 @@ export const ResultsHeader = forwardRef<HTMLHeadingElement, ResultsHeaderProps>(
             icon={<ArrowDownload20Regular />}
             className={own.exportLink}
           >
-            Whole catalogue (CSV)
+            {t('results.exportAll')}
           </Button>
         </div>
       </div>

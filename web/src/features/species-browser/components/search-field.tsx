@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Field, Input, makeStyles, tokens } from '@fluentui/react-components';
 import { Search20Regular } from '@fluentui/react-icons';
 import type { FormEvent } from 'react';
@@ -21,6 +22,7 @@ export function SearchField({
   value: string;
   onSearch: (q: string, options: { replace: boolean }) => void;
 }) {
+  const { t } = useTranslation('species');
   const styles = useStyles();
   const { draft, setDraft, flush } = useDebouncedDraft(
     value,
@@ -38,14 +40,14 @@ export function SearchField({
   };
 
   return (
-    <form role="search" aria-label="Species" className={styles.form} onSubmit={submit}>
-      <Field label="Search by name" hint="Common or scientific name. Spelling need not be exact.">
+    <form role="search" aria-label={t('search.form')} className={styles.form} onSubmit={submit}>
+      <Field label={t('search.label')} hint={t('search.hint')}>
         <Input
           className={styles.input}
           type="search"
           size="large"
           contentBefore={<Search20Regular aria-hidden />}
-          placeholder="e.g. butterfly weed"
+          placeholder={t('search.placeholder')}
           value={draft}
           maxLength={100}
           onChange={(_, data) => setDraft(data.value)}

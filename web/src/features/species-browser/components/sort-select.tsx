@@ -1,3 +1,5 @@
+import type { species } from '../../../locales/en/species.js';
+import { useTranslation } from 'react-i18next';
 import { Label, makeStyles, Select, tokens } from '@fluentui/react-components';
 import { useId } from 'react';
 import type { SortOrder, SpeciesSort } from '../utils/browser-state.js';
@@ -8,18 +10,20 @@ const useStyles = makeStyles({
   select: { minWidth: '13em' },
 });
 
-const CHOICES: { sort: SpeciesSort; order: SortOrder; label: string }[] = [
-  { sort: 'relevance', order: 'asc', label: 'Best match' },
-  { sort: 'name', order: 'asc', label: 'Common name, A to Z' },
-  { sort: 'name', order: 'desc', label: 'Common name, Z to A' },
-  { sort: 'scientificName', order: 'asc', label: 'Scientific name, A to Z' },
-  { sort: 'scientificName', order: 'desc', label: 'Scientific name, Z to A' },
-  { sort: 'height', order: 'asc', label: 'Shortest first' },
-  { sort: 'height', order: 'desc', label: 'Tallest first' },
-  { sort: 'bloomStart', order: 'asc', label: 'Earliest bloom first' },
-  { sort: 'bloomStart', order: 'desc', label: 'Latest bloom first' },
-  { sort: 'hostValue', order: 'desc', label: 'Most caterpillar hosts first' },
-  { sort: 'hostValue', order: 'asc', label: 'Fewest caterpillar hosts first' },
+type SortLabel = Exclude<keyof (typeof species)['sort'], 'label'>;
+
+const CHOICES: { sort: SpeciesSort; order: SortOrder; label: SortLabel }[] = [
+  { sort: 'relevance', order: 'asc', label: 'relevance' },
+  { sort: 'name', order: 'asc', label: 'nameAsc' },
+  { sort: 'name', order: 'desc', label: 'nameDesc' },
+  { sort: 'scientificName', order: 'asc', label: 'scientificAsc' },
+  { sort: 'scientificName', order: 'desc', label: 'scientificDesc' },
+  { sort: 'height', order: 'asc', label: 'heightAsc' },
+  { sort: 'height', order: 'desc', label: 'heightDesc' },
+  { sort: 'bloomStart', order: 'asc', label: 'bloomAsc' },
+  { sort: 'bloomStart', order: 'desc', label: 'bloomDesc' },
+  { sort: 'hostValue', order: 'desc', label: 'hostDesc' },
+  { sort: 'hostValue', order: 'asc', label: 'hostAsc' },
 ];
 
 /** The same orders as the column headers, as one control that also suits a phone. */
@@ -36,12 +40,13 @@ export function SortSelect({
 }) {
   // "Best match" only means something while searching; without a search the API falls back to names.
   const styles = useStyles();
+  const { t } = useTranslation('species');
   const id = useId();
   const choices = CHOICES.filter((c) => isSearching || c.sort !== 'relevance');
   const value = `${sort}:${sort === 'relevance' ? 'asc' : order}`;
   return (
     <div className={styles.inline}>
-      <Label htmlFor={id}>Sort by</Label>
+      <Label htmlFor={id}>{t('sort.label')}</Label>
       <Select
         id={id}
         className={styles.select}
@@ -53,7 +58,7 @@ export function SortSelect({
       >
         {choices.map((c) => (
           <option key={`${c.sort}:${c.order}`} value={`${c.sort}:${c.order}`}>
-            {c.label}
+            {t(`sort.${c.label}`)}
           </option>
         ))}
       </Select>

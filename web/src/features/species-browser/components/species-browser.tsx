@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import type { SpeciesSummary } from '@homeground/shared';
 import { Button, mergeClasses, Skeleton, SkeletonItem } from '@fluentui/react-components';
 import { Filter20Regular } from '@fluentui/react-icons';
@@ -37,6 +38,7 @@ function effectiveSort(state: BrowserState): SpeciesSort {
 
 /** Search, filter, sort and page the catalogue; every choice lives in the URL. */
 export function SpeciesBrowser() {
+  const { t } = useTranslation('species');
   const styles = useBrowserStyles();
   const { state, update } = useBrowserState();
   const query = useMemo(() => browserStateToQuery(state), [state]);
@@ -70,32 +72,30 @@ export function SpeciesBrowser() {
       keepDataOnError
       loading={
         <ContentCard>
-          <Skeleton aria-label="Loading the species">
+          <Skeleton aria-label={t('results.loading')}>
             {Array.from({ length: 6 }, (_, i) => (
               <SkeletonItem key={i} size={24} className={styles.skeletonRow} />
             ))}
           </Skeleton>
         </ContentCard>
       }
-      error="The species list did not load."
+      error={t('results.error')}
       isEmpty={(d) => d.items.length === 0}
       empty={(d) =>
         d.total > 0 ? (
-          <EmptyState title={`There is no page ${state.page} for this search.`}>
+          <EmptyState title={t('results.noPage', { page: state.page })}>
             <Button className={styles.emptyAction} onClick={() => goToPage(pageCount)}>
-              Go to the last page ({pageCount})
+              {t('results.lastPage', { count: pageCount })}
             </Button>
           </EmptyState>
         ) : (
-          <EmptyState title="No species match: try fewer filters">
-            {activeFilters > 0
-              ? 'Each filter narrows the list; clearing one or two usually brings species back.'
-              : 'Check the spelling, or search by a shorter part of the name.'}
+          <EmptyState title={t('results.none')}>
+            {activeFilters > 0 ? t('results.noneFilters') : t('results.noneSearch')}
             {activeFilters > 0 ? (
               <>
                 <br />
                 <Button className={styles.emptyAction} onClick={() => update(CLEARED)}>
-                  Clear filters
+                  {t('filters.clear')}
                 </Button>
               </>
             ) : null}
@@ -129,12 +129,18 @@ export function SpeciesBrowser() {
           aria-controls={filtersId}
           onClick={() => setFiltersOpen((o) => !o)}
         >
-          {areFiltersOpen ? 'Hide filters' : 'Filters'}
-          {activeFilters > 0 ? ` (${activeFilters} set)` : ''}
+          {activeFilters > 0
+            ? t('filters.setCount', {
+                label: areFiltersOpen ? t('filters.hide') : t('filters.show'),
+                count: activeFilters,
+              })
+            : areFiltersOpen
+              ? t('filters.hide')
+              : t('filters.show')}
         </Button>
       </div>
       <div id={filtersId} className={mergeClasses(styles.filters, !areFiltersOpen && styles.filtersFolded)}>
-        <ContentCard aria-label="Filters">
+        <ContentCard aria-label={t('filters.title')}>
           <FilterPanel state={state} onChange={(change) => update(change)} onClear={() => update(CLEARED)} />
         </ContentCard>
       </div>
@@ -155,17 +161,13 @@ export function SpeciesBrowser() {
         />
         {list.isError && data ? (
           <ErrorState
-            title="The list could not be updated."
+            title={t('results.updateError')}
             message={list.error.message}
             onRetry={() => void list.refetch()}
           />
         ) : null}
         {body}
-        <p className={styles.notes}>
-          Host value: how many moth and butterfly species raise their caterpillars on plants of the genus (Tallamy &amp;
-          Shropshire 2009). Cautions are a summary; each species page says more. Rules differ from state to state, so
-          check your state&apos;s noxious-weed list and local rules before planting or sharing.
-        </p>
+        <p className={styles.notes}>{t('results.notes')}</p>
         {data && data.total > 0 ? (
           <Pager
             page={state.page}

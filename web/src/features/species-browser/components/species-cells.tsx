@@ -1,13 +1,7 @@
-import {
-  capitalise,
-  CAUTION_WORDS,
-  formatMonths,
-  hostLevelOf,
-  MOISTURE_WORDS,
-  type SpeciesSummary,
-  SUN_LEVELS,
-  SUN_WORDS,
-} from '@homeground/shared';
+import type { TFunction } from 'i18next';
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
+import { capitalise, hostLevelOf, type SpeciesSummary, SUN_LEVELS } from '@homeground/shared';
 import { Checkmark16Filled, Warning16Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
 import { RouterLink } from '../../../components/links/router-link.js';
@@ -56,6 +50,8 @@ export function OptionalCell({
   highlights?: NameHighlights;
 }): ReactNode {
   const styles = useTableStyles();
+  const { t } = useTranslation('species');
+  const words = useWords();
   switch (column) {
     case 'scientificName':
       return (
@@ -66,7 +62,7 @@ export function OptionalCell({
     case 'family':
       return species.family;
     case 'growthForm':
-      return capitalise(species.growthForm);
+      return capitalise(words.growthForm[species.growthForm]);
     case 'height': {
       const { feet, metric } = heightRangeParts(species.heightCm.min, species.heightCm.max);
       return (
@@ -82,54 +78,55 @@ export function OptionalCell({
         <span className={styles.bloomCell}>
           <BloomStrip bloomMonths={species.bloomMonths} flowerColours={species.flowerColours} />
           <span className={styles.small} aria-hidden>
-            {formatMonths(species.bloomMonths) || 'not recorded'}
+            {words.formatMonths(species.bloomMonths) || t('cells.notRecorded')}
           </span>
         </span>
       );
     case 'sun':
       return SUN_LEVELS.filter((s) => species.sun.includes(s))
-        .map((s) => capitalise(SUN_WORDS[s]))
+        .map((s) => capitalise(words.sun[s]))
         .join(', ');
     case 'moisture':
-      return species.moisture.map((m) => capitalise(MOISTURE_WORDS[m])).join(', ');
+      return species.moisture.map((m) => capitalise(words.moisture[m])).join(', ');
     case 'hostValue':
-      return wildlifeWords(species);
+      return wildlifeWords(species, t);
     case 'monarchHost':
       return species.monarchHost ? (
         <span className={styles.yes}>
           <Checkmark16Filled className={styles.yesIcon} aria-hidden />
-          Yes
+          {t('cells.yes')}
         </span>
       ) : (
-        <span className={styles.muted}>No</span>
+        <span className={styles.muted}>{t('cells.no')}</span>
       );
     case 'cautions':
       return species.cautionKinds.length === 0 ? (
-        <Nothing spoken="No cautions recorded" />
+        <Nothing spoken={t('cells.noCautions')} />
       ) : (
         <span className={styles.caution}>
-          <Warning16Regular className={styles.cautionIcon} aria-label="Caution:" role="img" />
-          <span>{species.cautionKinds.map((k) => CAUTION_WORDS[k].title).join(', ')}</span>
+          <Warning16Regular className={styles.cautionIcon} aria-label={t('cells.caution')} role="img" />
+          <span>{species.cautionKinds.map((k) => words.caution[k].title).join(', ')}</span>
         </span>
       );
   }
 }
 
 const HOST_SHORT = {
-  top: 'among the best caterpillar hosts',
-  good: 'a good caterpillar host',
-  some: 'a few caterpillars',
-  none: '',
+  top: 'cells.hostTop',
+  good: 'cells.hostGood',
+  some: 'cells.hostSome',
+  none: null,
 } as const;
 
 /** Homeground's several-part wildlife summary in a few words (caterpillars within its layer, monarchs), never a count. */
-function wildlifeWords(species: SpeciesSummary): string {
+function wildlifeWords(species: SpeciesSummary, t: TFunction<'species'>): string {
   const level = hostLevelOf({
     growthForm: species.growthForm,
     scientificName: species.scientificName,
     wildlife: { lepidopteraGenusCount: species.lepidopteraGenusCount } as SpeciesSummaryWildlife,
   });
-  const parts = [HOST_SHORT[level], species.monarchHost ? 'monarch host' : ''].filter(Boolean);
-  return parts.length > 0 ? parts.join('; ') : 'not recorded';
+  const host = HOST_SHORT[level];
+  const parts = [host ? t(host) : '', species.monarchHost ? t('cells.monarchHost') : ''].filter(Boolean);
+  return parts.length > 0 ? parts.join('; ') : t('cells.notRecorded');
 }
 type SpeciesSummaryWildlife = Parameters<typeof hostLevelOf>[0]['wildlife'];

@@ -1,8 +1,9 @@
+import { useTranslation } from 'react-i18next';
 import type { SpeciesSummary } from '@homeground/shared';
 import { mergeClasses } from '@fluentui/react-components';
 import { ArrowDown12Regular, ArrowUp12Regular } from '@fluentui/react-icons';
 import { paths } from '../../../config/paths.js';
-import { COLUMN_LABELS, type OptionalColumn } from '../hooks/use-column-choice.js';
+import type { OptionalColumn } from '../hooks/use-column-choice.js';
 import type { NameHighlights } from '../hooks/use-name-highlights.js';
 import type { SortOrder, SpeciesSort } from '../utils/browser-state.js';
 import { NameCell, OptionalCell } from './species-cells.js';
@@ -70,14 +71,16 @@ function HeaderCell({
 /** The catalogue as a table: one row per species, sortable headers, optional columns. */
 export function SpeciesTable({ items, columns, highlights, sort, order, onSort, captionId }: SpeciesTableProps) {
   const styles = useTableStyles();
+  const { t } = useTranslation('species');
   return (
-    <div className={styles.scroller} role="region" aria-labelledby={captionId} tabIndex={0}>
+    // Its own name, not the section heading's: two regions with one name are one landmark twice.
+    <div className={styles.scroller} role="region" aria-label={t('results.tableRegion')} tabIndex={0}>
       <table className={styles.table} aria-labelledby={captionId}>
         <thead>
           <tr>
             <HeaderCell
               column="commonName"
-              label="Common name"
+              label={t('columns.commonName')}
               className={styles.sticky}
               sort={sort}
               order={order}
@@ -87,7 +90,7 @@ export function SpeciesTable({ items, columns, highlights, sort, order, onSort, 
               <HeaderCell
                 key={c}
                 column={c}
-                label={COLUMN_LABELS[c]}
+                label={t(`columns.${c}`)}
                 className={NUMERIC.has(c) ? styles.number : undefined}
                 sort={sort}
                 order={order}

@@ -15,19 +15,6 @@ export const OPTIONAL_COLUMNS = [
 ] as const;
 export type OptionalColumn = (typeof OPTIONAL_COLUMNS)[number];
 
-export const COLUMN_LABELS: Record<OptionalColumn, string> = {
-  scientificName: 'Scientific name',
-  family: 'Family',
-  growthForm: 'Growth form',
-  height: 'Height',
-  bloom: 'Bloom',
-  sun: 'Sun',
-  moisture: 'Moisture',
-  hostValue: 'Wildlife value',
-  monarchHost: 'Monarch host',
-  cautions: 'Cautions',
-};
-
 export const COLUMNS_STORAGE_KEY = 'homeground.species-browser.hidden-columns';
 /** Family is one click away on the detail page; hiding it first keeps the table readable on a laptop. */
 const DEFAULT_HIDDEN: readonly OptionalColumn[] = ['family'];

@@ -1,4 +1,5 @@
-import { CAUTION_WORDS } from '@homeground/shared';
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { Warning24Regular } from '@fluentui/react-icons';
 import { useId } from 'react';
@@ -26,30 +27,38 @@ const useStyles = makeStyles({
 /** Cautions first and in full, calm and specific, each with where it comes from. */
 export function CautionPanel({ species }: { species: SpeciesDetail }) {
   const styles = useStyles();
+  const { t } = useTranslation('detail');
+  const words = useWords();
   const id = useId();
   const cautions = species.cautions;
   return (
     <ContentCard aria-labelledby={id} className={styles.card}>
       <Heading level="section" id={id} className={styles.heading}>
         <Warning24Regular className={styles.icon} aria-hidden />
-        Cautions
+        {t('cautions.title')}
       </Heading>
       {cautions.length === 0 ? (
-        <p className={styles.none}>No cautions are recorded for this species.</p>
+        <p className={styles.none}>{t('cautions.none')}</p>
       ) : (
         <ul className={styles.list}>
           {cautions.map((c) => (
             <li key={`${c.kind}-${c.text}`}>
-              <strong>{CAUTION_WORDS[c.kind].title}.</strong> {c.text}
-              <span className={styles.source}>Source: {shortCitation(c.source)}</span>
+              <strong>{words.caution[c.kind].title}.</strong>{' '}
+              {words.locale === 'en' ? (
+                c.text
+              ) : (
+                // The record's own sentence is written in English: the general caution in the reader's
+                // language comes first, then the record's, marked as English for screen readers.
+                <>
+                  {words.caution[c.kind].sentence} {t('cautions.recordLead')} <span lang="en">{c.text}</span>
+                </>
+              )}
+              <span className={styles.source}>{t('cautions.source', { citation: shortCitation(c.source) })}</span>
             </li>
           ))}
         </ul>
       )}
-      <p className={styles.rules}>
-        Rules differ from state to state: check your state&apos;s noxious-weed list and any local rules before you plant
-        or share it.
-      </p>
+      <p className={styles.rules}>{t('cautions.rules')}</p>
     </ContentCard>
   );
 }

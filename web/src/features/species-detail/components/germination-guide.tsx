@@ -1,11 +1,6 @@
-import {
-  capitalise,
-  GRAMS_PER_POUND,
-  SOWING_METHOD_WORDS,
-  SOWING_METHODS,
-  type SowingMethod,
-  sowingDepthSentence,
-} from '@homeground/shared';
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
+import { capitalise, GRAMS_PER_POUND, SOWING_METHODS, type SowingMethod } from '@homeground/shared';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { Beaker20Regular, Checkmark20Regular, Dismiss20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
@@ -35,11 +30,11 @@ const useStyles = makeStyles({
   how: { display: 'block', fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground2 },
 });
 
-const count = new Intl.NumberFormat('en-US');
-
 /** Which of the five ways to raise it suit this species, suited ones first, each said in words. */
 function MethodList({ methods }: { methods: readonly SowingMethod[] }) {
   const styles = useStyles();
+  const { t } = useTranslation('detail');
+  const words = useWords();
   const ordered = [...SOWING_METHODS].sort((a, b) => Number(methods.includes(b)) - Number(methods.includes(a)));
   return (
     <ul className={styles.methods}>
@@ -53,9 +48,9 @@ function MethodList({ methods }: { methods: readonly SowingMethod[] }) {
               <Dismiss20Regular className={styles.notSuited} aria-hidden />
             )}
             <span>
-              <strong>{capitalise(SOWING_METHOD_WORDS[m].phrase)}</strong>:{' '}
-              {suits ? 'suits it' : 'not the best way for this species'}
-              {suits ? <span className={styles.how}>{SOWING_METHOD_WORDS[m].how}</span> : null}
+              <strong>{capitalise(words.sowingMethod[m].phrase)}</strong>:{' '}
+              {suits ? t('seed.suits') : t('seed.notSuited')}
+              {suits ? <span className={styles.how}>{words.sowingMethod[m].how}</span> : null}
             </span>
           </li>
         );
@@ -67,28 +62,33 @@ function MethodList({ methods }: { methods: readonly SowingMethod[] }) {
 /** Raising it from seed: treatments as steps in plain words, depth, expected germination, methods. */
 export function GerminationGuide({ species }: { species: SpeciesDetail }) {
   const styles = useStyles();
+  const { t } = useTranslation('detail');
+  const words = useWords();
   const g = species.germination;
-  const steps = g.treatments.map(treatmentWords);
+  const steps = g.treatments.map((step) => treatmentWords(step, words));
   return (
-    <FactSection title="Growing from seed" icon={<Beaker20Regular />}>
-      <ol className={styles.steps} aria-label="Seed treatment, in order">
+    <FactSection title={t('seed.title')} icon={<Beaker20Regular />}>
+      <ol className={styles.steps} aria-label={t('seed.steps')}>
         {steps.map((s, i) => (
           <li key={i}>
             <span className={styles.stepTitle}>{s.title}</span>
             <p className={styles.stepBody}>{s.body}</p>
-            {s.note ? <p className={styles.note}>Curator&apos;s note: {s.note}</p> : null}
+            {s.note ? <p className={styles.note}>{t('seed.note', { note: s.note })}</p> : null}
           </li>
         ))}
       </ol>
-      <p className={styles.para}>{sowingDepthSentence(g)}</p>
+      <p className={styles.para}>{words.sowingDepthSentence(g)}</p>
       <p className={styles.para}>
-        A good seed lot usually germinates about {g.germinationRatePct}% after treatment
         {g.seedsPerPound
-          ? `; there are about ${count.format(g.seedsPerPound)} seeds in a pound (${count.format(Math.round(g.seedsPerPound / GRAMS_PER_POUND))} per gram).`
-          : '.'}
+          ? t('seed.rateSeeds', {
+              rate: g.germinationRatePct,
+              perPound: g.seedsPerPound,
+              perGram: Math.round(g.seedsPerPound / GRAMS_PER_POUND),
+            })
+          : t('seed.rate', { rate: g.germinationRatePct })}
       </p>
       <Heading level="card" className={styles.subheading}>
-        Ways to raise it
+        {t('seed.ways')}
       </Heading>
       <MethodList methods={g.methods} />
       <SourceNote sources={species.sources} fields={SECTION_FIELDS.germination} />

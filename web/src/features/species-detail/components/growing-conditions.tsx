@@ -1,17 +1,6 @@
-import {
-  capitalise,
-  DEER_RESISTANCE_WORDS,
-  formatHeightRangeCm,
-  GROWTH_FORM_WORDS,
-  HABITAT_WORDS,
-  habitLine,
-  joinWords,
-  LIFESPAN_WORDS,
-  moisturePhrase,
-  soilPhrase,
-  SPREAD_HABIT_WORDS,
-  sunPhrase,
-} from '@homeground/shared';
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
+import { capitalise, formatHeightRangeCm } from '@homeground/shared';
 import { Drop20Regular, Ruler20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { SECTION_FIELDS } from '../utils/source-labels.js';
@@ -21,14 +10,16 @@ import { SourceNote } from './source-note.js';
 
 /** Where it grows: light, moisture, soil and the plant communities it belongs to. */
 export function GrowingConditions({ species }: { species: SpeciesDetail }) {
+  const { t } = useTranslation('detail');
+  const words = useWords();
   return (
-    <FactSection title="Where it grows" icon={<Drop20Regular />}>
+    <FactSection title={t('conditions.title')} icon={<Drop20Regular />}>
       <FactList
         facts={[
-          ['Sun', sunPhrase(species.sun)],
-          ['Moisture', moisturePhrase(species.moisture)],
-          ['Soil', soilPhrase(species.soilTextures)],
-          ['Habitats', capitalise(joinWords(species.habitats.map((h) => HABITAT_WORDS[h])))],
+          [t('conditions.sun'), words.sunPhrase(species.sun)],
+          [t('conditions.moisture'), words.moisturePhrase(species.moisture)],
+          [t('conditions.soil'), words.soilPhrase(species.soilTextures)],
+          [t('conditions.habitats'), capitalise(words.join(species.habitats.map((h) => words.habitat[h])))],
         ]}
       />
       <SourceNote sources={species.sources} fields={SECTION_FIELDS.conditions} />
@@ -38,16 +29,18 @@ export function GrowingConditions({ species }: { species: SpeciesDetail }) {
 
 /** Size and habit: height and spread in both unit systems, form, lifespan, spread and deer. */
 export function SizeAndHabit({ species }: { species: SpeciesDetail }) {
+  const { t } = useTranslation('detail');
+  const words = useWords();
   return (
-    <FactSection title="Size and habit" icon={<Ruler20Regular />}>
+    <FactSection title={t('size.title')} icon={<Ruler20Regular />}>
       <FactList
         facts={[
-          ['Height', formatHeightRangeCm(species.heightCm.min, species.heightCm.max)],
-          ['Spread', formatHeightRangeCm(species.spreadCm.min, species.spreadCm.max)],
-          ['Growth form', capitalise(GROWTH_FORM_WORDS[species.growthForm])],
-          ['Lifespan', capitalise(LIFESPAN_WORDS[species.lifespan])],
-          ['Spread habit', habitLine(SPREAD_HABIT_WORDS[species.spreadHabit])],
-          ['Deer resistance', habitLine(DEER_RESISTANCE_WORDS[species.deerResistance])],
+          [t('size.height'), formatHeightRangeCm(species.heightCm.min, species.heightCm.max)],
+          [t('size.spread'), formatHeightRangeCm(species.spreadCm.min, species.spreadCm.max)],
+          [t('size.growthForm'), capitalise(words.growthForm[species.growthForm])],
+          [t('size.lifespan'), capitalise(words.lifespan[species.lifespan])],
+          [t('size.spreadHabit'), words.habitLine(words.spreadHabit[species.spreadHabit])],
+          [t('size.deer'), words.habitLine(words.deerResistance[species.deerResistance])],
         ]}
       />
       <SourceNote sources={species.sources} fields={SECTION_FIELDS.size} />

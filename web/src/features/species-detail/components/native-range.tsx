@@ -1,4 +1,6 @@
-import { byStateListName, STATE_NAMES, US_STATE_CODES, joinWords } from '@homeground/shared';
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
+import { byStateListName, STATE_NAMES, US_STATE_CODES } from '@homeground/shared';
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import { Map20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
@@ -43,13 +45,17 @@ const useStyles = makeStyles({
 /** The states it is native to (USDA PLANTS), as a small tile grid and as words. */
 export function NativeRange({ species }: { species: SpeciesDetail }) {
   const styles = useStyles();
+  const { t } = useTranslation('detail');
+  const words = useWords();
   const native = new Set(species.nativeStates);
   // Alphabetical by list name, so "the District of Columbia" sorts under D.
   const names = byStateListName(US_STATE_CODES.filter((c) => native.has(c))).map((c) => STATE_NAMES[c]);
   return (
-    <FactSection title="Native range" icon={<Map20Regular />}>
+    <FactSection title={t('range.title')} icon={<Map20Regular />}>
       <p className={styles.summary}>
-        Native to {names.length} of the 48 conterminous states and DC{names.length <= 6 ? `: ${joinWords(names)}` : ''}.
+        {names.length <= 6
+          ? t('range.summaryNames', { count: names.length, names: words.join(names) })
+          : t('range.summary', { count: names.length })}
       </p>
       <div className={styles.grid} aria-hidden>
         {US_STATE_CODES.map((code) => {
@@ -59,7 +65,7 @@ export function NativeRange({ species }: { species: SpeciesDetail }) {
               key={code}
               className={mergeClasses(styles.tile, native.has(code) && styles.native)}
               style={{ gridColumn: col + 1, gridRow: row + 1 }}
-              title={`${STATE_NAMES[code]}${native.has(code) ? ': native' : ''}`}
+              title={native.has(code) ? t('range.tileNative', { state: STATE_NAMES[code] }) : STATE_NAMES[code]}
             >
               {code}
             </span>
@@ -68,8 +74,8 @@ export function NativeRange({ species }: { species: SpeciesDetail }) {
       </div>
       {names.length > 6 ? (
         <details>
-          <summary className={styles.toggle}>List the {names.length} states</summary>
-          <p className={styles.names}>{joinWords(names)}.</p>
+          <summary className={styles.toggle}>{t('range.list', { count: names.length })}</summary>
+          <p className={styles.names}>{words.join(names)}.</p>
         </details>
       ) : null}
       <SourceNote sources={species.sources} fields={SECTION_FIELDS.range} />

@@ -1,4 +1,6 @@
-import { type Species, joinWords } from '@homeground/shared';
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
+import type { Species } from '@homeground/shared';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { hgTokens } from '../../../theme/index.js';
 import { sectionSources } from '../utils/source-labels.js';
@@ -16,17 +18,13 @@ export function SourceNote({
   fields: readonly (keyof Species['sources'])[];
 }) {
   const styles = useStyles();
-  const lines = sectionSources(sources, fields);
+  const { t } = useTranslation('detail');
+  const words = useWords();
+  const lines = sectionSources(sources, fields, words.sourcedField, t('sources.unrecorded'));
+  const text = lines.map((l) => t('sources.line', { citation: l.citation, fields: words.join(l.fields) })).join('; ');
   return (
     <p className={styles.note}>
-      {lines.length === 1 ? 'Source: ' : 'Sources: '}
-      {lines.map((l, i) => (
-        <span key={l.key}>
-          {i > 0 ? '; ' : ''}
-          {l.citation} ({joinWords(l.fields)})
-        </span>
-      ))}
-      .
+      {lines.length === 1 ? t('sources.one', { lines: text }) : t('sources.many', { lines: text })}
     </p>
   );
 }

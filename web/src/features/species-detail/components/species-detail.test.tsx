@@ -102,3 +102,26 @@ describe('species page', () => {
     expect(api.callsTo('GET', '/api/species/asclepias-tuberosa').length).toBeGreaterThanOrEqual(2);
   });
 });
+
+// Spanish words: this project's catalogues (locales/es/detail.ts) and the shared Spanish word tables
+// (shared/src/vocabulary/locale/spanish-words.ts), from-memory. The common name stays English with the
+// scientific name: the catalogue has no published Spanish name for butterfly milkweed.
+describe('species page in Spanish', () => {
+  it('says the facts and cautions in Spanish and keeps the English common name with the scientific one', async () => {
+    renderApp({
+      path: '/species/asclepias-tuberosa',
+      locale: 'es',
+      api: { 'GET /api/species/asclepias-tuberosa': { body: butterflyMilkweedRecord } },
+    });
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Butterfly milkweed' }, FIRST_PAINT),
+    ).toBeInTheDocument();
+    expect(screen.getByText('Asclepias tuberosa')).toBeInTheDocument();
+    expect(screen.getByRole('img', { name: 'Florece jun–ago; flores de color naranja' })).toBeInTheDocument();
+    const cautions = section('Precauciones');
+    expect(within(cautions).getByText('Savia irritante.')).toBeInTheDocument();
+    expect(cautions).toHaveTextContent('Su savia puede irritar la piel y los ojos.');
+    expect(within(section('Dónde crece')).getByText('Pleno sol o media sombra')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Hacer la ficha' })).toBeInTheDocument();
+  });
+});

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { ArrowLeft20Regular } from '@fluentui/react-icons';
 import { useQuery } from '@tanstack/react-query';
@@ -45,6 +46,7 @@ export interface SpeciesDetailProps {
 /** Everything the catalogue knows about one species, grouped as a grower reads it, each group sourced. */
 export function SpeciesDetail({ slug, renderBloomStrip, describeBloom }: SpeciesDetailProps) {
   const styles = useStyles();
+  const { t } = useTranslation('detail');
   const detail = useQuery(speciesDetailQueryOptions(slug));
   const name = detail.data?.commonNames[0];
   useDocumentTitle(
@@ -53,13 +55,13 @@ export function SpeciesDetail({ slug, renderBloomStrip, describeBloom }: Species
         ? `${name.charAt(0).toUpperCase()}${name.slice(1)}`
         : detail.data.scientificName
       : detail.isError
-        ? 'Species not found'
-        : 'Species',
+        ? t('page.notFound')
+        : t('page.species'),
   );
 
   const back = (
     <RouterLink to={paths.species.build()} className={styles.back}>
-      <ArrowLeft20Regular aria-hidden /> All species
+      <ArrowLeft20Regular aria-hidden /> {t('page.allSpecies')}
     </RouterLink>
   );
 
@@ -69,12 +71,12 @@ export function SpeciesDetail({ slug, renderBloomStrip, describeBloom }: Species
     ) : (
       <>
         {back}
-        <ErrorState title="This species did not load." message={error.message} onRetry={retry} />
+        <ErrorState title={t('page.loadError')} message={error.message} onRetry={retry} />
       </>
     );
 
   return (
-    <QueryState query={detail} loading="Loading the species" error={failed}>
+    <QueryState query={detail} loading={t('page.loading')} error={failed}>
       {(species) => (
         <>
           {back}

@@ -1,4 +1,6 @@
-import { capitalise, SPECIES_TAG_WORDS } from '@homeground/shared';
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
+import { capitalise, type SourcedField } from '@homeground/shared';
 import { Badge, makeStyles, tokens } from '@fluentui/react-components';
 import { DocumentText20Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
@@ -45,18 +47,23 @@ export function SpeciesHeader({
   bloomWords: string;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('detail');
+  const words = useWords();
   const [name, ...otherNames] = species.commonNames;
   const facts: [string, ReactNode][] = [];
-  if (otherNames.length > 0) facts.push(['Also called', otherNames.join(', ')]);
-  facts.push(['Family', species.family]);
-  if (species.synonyms.length > 0) facts.push(['Synonyms', <i key="syn">{species.synonyms.join(', ')}</i>]);
-  facts.push(['USDA symbol', species.usdaSymbol]);
+  if (otherNames.length > 0) facts.push([t('header.alsoCalled'), otherNames.join(', ')]);
+  facts.push([t('header.family'), species.family]);
+  if (species.synonyms.length > 0) facts.push([t('header.synonyms'), <i key="syn">{species.synonyms.join(', ')}</i>]);
+  facts.push([t('header.usdaSymbol'), species.usdaSymbol]);
   for (const r of species.reconciliations)
-    facts.push([`Note on ${r.field === 'nativeStates' ? 'range' : r.field}`, r.note]);
-  const colours = species.flowerColours.join(' and ');
+    facts.push([t('header.noteOn', { field: words.sourcedField[r.field as SourcedField] ?? r.field }), r.note]);
+  const colours = words.join(species.flowerColours.map((c) => words.flowerColour[c]));
 
   return (
-    <ContentCard className={styles.card} aria-label={`${capitalise(name ?? species.scientificName)} at a glance`}>
+    <ContentCard
+      className={styles.card}
+      aria-label={t('header.atAGlance', { name: capitalise(name ?? species.scientificName) })}
+    >
       <SpeciesPhoto species={species} />
       <div>
         <Heading level="page" className={styles.title}>
@@ -67,9 +74,9 @@ export function SpeciesHeader({
         </p>
         {species.tags.length > 0 ? (
           <div className={styles.tags}>
-            {species.tags.map((t) => (
-              <Badge key={t} appearance="tint" color="brand" shape="rounded">
-                {SPECIES_TAG_WORDS[t]}
+            {species.tags.map((tag) => (
+              <Badge key={tag} appearance="tint" color="brand" shape="rounded">
+                {words.speciesTag[tag]}
               </Badge>
             ))}
           </div>
@@ -79,8 +86,9 @@ export function SpeciesHeader({
         <div className={styles.bloom}>
           {bloomStrip}
           <p className={styles.bloomWords}>
-            {bloomWords}
-            {colours ? `; ${colours} flowers` : ''}.
+            {colours
+              ? t('header.bloomWithColours', { bloom: bloomWords, colours })
+              : t('header.bloomOnly', { bloom: bloomWords })}
           </p>
           <SourceNote sources={species.sources} fields={SECTION_FIELDS.bloom} />
         </div>
@@ -90,7 +98,7 @@ export function SpeciesHeader({
           icon={<DocumentText20Regular />}
           className={styles.action}
         >
-          Make fact card
+          {t('header.makeCard')}
         </RouterButton>
       </div>
     </ContentCard>

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { RouterButton } from '../../../components/links/router-link.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
@@ -5,14 +6,13 @@ import { paths } from '../../../config/paths.js';
 
 /** An unknown slug: say so plainly and offer the way back to the whole catalogue. */
 export function SpeciesNotFound({ slug }: { slug: string }) {
+  const { t } = useTranslation('detail');
   return (
     <>
-      <PageIntro title="Species not found">
-        The catalogue has no species at “{slug}”. The link may have a typo, or the species may have been renamed.
-      </PageIntro>
+      <PageIntro title={t('page.notFound')}>{t('page.notFoundText', { slug })}</PageIntro>
       <ContentCard>
         <RouterButton to={paths.species.build()} appearance="primary">
-          Search all species
+          {t('page.searchAll')}
         </RouterButton>
       </ContentCard>
     </>

@@ -1,3 +1,5 @@
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { photoCreditLine } from '@homeground/shared';
 import { useState } from 'react';
@@ -26,10 +28,12 @@ const useStyles = makeStyles({
 /** The species' photo at 800 px, or our drawing in its flower colour when there is none (or it fails). */
 export function SpeciesPhoto({ species }: { species: SpeciesDetail }) {
   const styles = useStyles();
+  const { t } = useTranslation('detail');
+  const words = useWords();
   const [hasFailed, setFailed] = useState(false);
   const name = species.commonNames[0] ?? species.scientificName;
   const showPhoto = species.hasPhoto && !hasFailed;
-  const colours = species.flowerColours.join(' and ');
+  const colours = words.join(species.flowerColours.map((c) => words.flowerColour[c]));
   return (
     <figure className={styles.figure}>
       <div className={styles.frame}>
@@ -37,13 +41,13 @@ export function SpeciesPhoto({ species }: { species: SpeciesDetail }) {
           <img
             className={styles.img}
             src={speciesPhotoUrl(species.slug, 800)}
-            alt={`${name} (${species.scientificName})`}
+            alt={t('header.photoAlt', { name, scientific: species.scientificName })}
             onError={() => setFailed(true)}
           />
         ) : (
           <PlantDrawing
             flowerColours={species.flowerColours}
-            label={`Drawing of a flowering plant${colours ? ` with ${colours} flowers` : ''}`}
+            label={colours ? t('header.drawingColours', { colours }) : t('header.drawing')}
           />
         )}
       </div>

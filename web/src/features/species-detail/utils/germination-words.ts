@@ -1,4 +1,4 @@
-import { treatmentHow, treatmentTitle, type TreatmentStep } from '@homeground/shared';
+import { type TreatmentStep, type Vocabulary, wordsFor } from '@homeground/shared';
 
 export interface GuidanceStep {
   title: string;
@@ -8,6 +8,6 @@ export interface GuidanceStep {
 }
 
 /** One treatment step as the species page lists it: the shared title and how-to, then the record's note. */
-export function treatmentWords(step: TreatmentStep): GuidanceStep {
-  return { title: treatmentTitle(step), body: treatmentHow(step), note: step.note };
+export function treatmentWords(step: TreatmentStep, words: Vocabulary = wordsFor('en')): GuidanceStep {
+  return { title: words.treatmentTitle(step), body: words.treatmentHow(step), note: step.note };
 }

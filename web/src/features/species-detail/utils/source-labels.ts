@@ -62,16 +62,22 @@ export interface SourceLine {
 }
 
 /** A section's sources, each with the facts it backs; facts with no recorded source are listed too. */
-export function sectionSources(sources: Species['sources'], fields: readonly SourcedField[]): SourceLine[] {
+export function sectionSources(
+  sources: Species['sources'],
+  fields: readonly SourcedField[],
+  /** The facts' names in the page's language (English by default). */
+  fieldWords: Record<SourcedField, string> = SOURCED_FIELD_WORDS,
+  unrecorded = 'no source recorded',
+): SourceLine[] {
   const byKey = new Map<string, SourceLine>();
   for (const field of fields) {
     const key = sources[field] ?? 'unrecorded';
     const line = byKey.get(key) ?? {
       key,
-      citation: key === 'unrecorded' ? 'no source recorded' : shortCitation(key),
+      citation: key === 'unrecorded' ? unrecorded : shortCitation(key),
       fields: [],
     };
-    line.fields.push(SOURCED_FIELD_WORDS[field]);
+    line.fields.push(fieldWords[field]);
     byKey.set(key, line);
   }
   return [...byKey.values()];

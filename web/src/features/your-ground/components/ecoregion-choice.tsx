@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles, mergeClasses, Radio, RadioGroup, tokens } from '@fluentui/react-components';
 import { useId } from 'react';
 
@@ -47,14 +48,15 @@ export function EcoregionChoice({
   stateName?: string;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('ground');
   const questionId = useId();
   const cards = stateName
     ? [
         ...options,
         {
           code: WHOLE_STATE,
-          name: 'Not sure',
-          description: `Use every species native to ${stateName}, without an ecoregion.`,
+          name: t('result.notSure'),
+          description: t('result.notSureText', { state: stateName }),
         },
       ]
     : options;
@@ -77,11 +79,11 @@ export function EcoregionChoice({
             label={
               <span className={styles.label}>
                 <span className={styles.name}>
-                  {o.name}
-                  {o.code ? ` (ecoregion ${o.code})` : ''}
-                  {'share' in o && typeof o.share === 'number'
-                    ? `: about ${Math.round(o.share * 100)}% of your county`
-                    : ''}
+                  {!o.code
+                    ? o.name
+                    : 'share' in o && typeof o.share === 'number'
+                      ? t('result.optionShare', { name: o.name, code: o.code, share: Math.round(o.share * 100) })
+                      : t('result.optionCode', { name: o.name, code: o.code })}
                 </span>
                 <span className={styles.description}>{o.description}</span>
               </span>

@@ -1,5 +1,7 @@
+import { useWords } from '../../../lib/i18n/index.js';
+import { Trans, useTranslation } from 'react-i18next';
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
-import { ecoregionFoundWords, type PlaceLookup, type StateCode, STATE_NAMES } from '@homeground/shared';
+import { type PlaceLookup, type StateCode, STATE_NAMES } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { ecoregionListQueryOptions } from '../../../api/ecoregions/ecoregions.queries.js';
@@ -31,6 +33,8 @@ export interface GroundResultProps {
 /** Your ground in words: state, county and ecoregion with its description, and the choice when there is one. */
 export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }: GroundResultProps) {
   const styles = useStyles();
+  const { t } = useTranslation('ground');
+  const words = useWords();
   const stateName = STATE_NAMES[state];
   const [showAll, setShowAll] = useState(!lookup);
   const list = useQuery({ ...ecoregionListQueryOptions(state), enabled: showAll });
@@ -48,27 +52,35 @@ export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }
     <div className={styles.root}>
       {lookup ? (
         <p className={styles.place} role="status">
-          Your ground is in{' '}
-          <strong>
-            {lookup.county.name} County, {stateName}
-          </strong>
-          {lookup.zip ? ` (ZIP ${lookup.zip.code}, ${lookup.zip.city})` : ''}.
+          {lookup.zip ? (
+            <Trans
+              t={t}
+              i18nKey="result.inCountyZip"
+              values={{ county: lookup.county.name, state: stateName, zip: lookup.zip.code, city: lookup.zip.city }}
+              components={{ strong: <strong /> }}
+            />
+          ) : (
+            <Trans
+              t={t}
+              i18nKey="result.inCounty"
+              values={{ county: lookup.county.name, state: stateName }}
+              components={{ strong: <strong /> }}
+            />
+          )}
         </p>
       ) : (
         <p className={styles.place}>
-          Your ground is in <strong>{stateName}</strong>.
+          <Trans t={t} i18nKey="result.inState" values={{ state: stateName }} components={{ strong: <strong /> }} />
         </p>
       )}
 
       {selected ? (
         <div className={styles.eco}>
-          <p className={styles.ecoName}>
-            Ecoregion: {selected.name} ({selected.code})
-          </p>
+          <p className={styles.ecoName}>{t('result.ecoregion', { name: selected.name, code: selected.code })}</p>
           <p className={styles.text}>{selected.description}</p>
           {lookup && selected.code === lookup.ecoregion.code ? (
             <p className={styles.muted}>
-              {lookup.ecoregion.level2} · {lookup.ecoregion.level1}. {ecoregionFoundWords(lookup)}
+              {lookup.ecoregion.level2} · {lookup.ecoregion.level1}. {words.ecoregionFoundWords(lookup)}
             </p>
           ) : null}
         </div>
@@ -76,7 +88,7 @@ export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }
 
       {isSplit && !showAll ? (
         <EcoregionChoice
-          question="Your county reaches into more than one ecoregion. Which one is your ground in?"
+          question={t('result.splitQuestion')}
           options={lookupOptions}
           value={ecoregionCode}
           onChange={onEcoregionChange}
@@ -86,12 +98,12 @@ export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }
       {showAll ? (
         <QueryState
           query={list}
-          loading={`Loading the ecoregions of ${stateName}`}
-          error={`Homeground could not load the ecoregions of ${stateName}`}
+          loading={t('result.loadingState', { state: stateName })}
+          error={t('result.errorState', { state: stateName })}
         >
           {() => (
             <EcoregionChoice
-              question={`Which ecoregion of ${stateName} is your ground in?`}
+              question={t('result.stateQuestion', { state: stateName })}
               options={stateOptions}
               value={ecoregionCode}
               onChange={onEcoregionChange}
@@ -102,7 +114,7 @@ export function GroundResult({ state, lookup, ecoregionCode, onEcoregionChange }
       ) : (
         <div>
           <Button appearance="subtle" onClick={() => setShowAll(true)}>
-            Choose another ecoregion of {stateName}
+            {t('result.another', { state: stateName })}
           </Button>
         </div>
       )}

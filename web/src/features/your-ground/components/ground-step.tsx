@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Button, makeStyles, MessageBar, MessageBarBody, tokens } from '@fluentui/react-components';
 import { ArrowRight20Regular, Location20Regular } from '@fluentui/react-icons';
 import { type StateCode, STATE_NAMES } from '@homeground/shared';
@@ -53,6 +54,7 @@ type Source = { kind: 'none' } | { kind: 'lookup'; query: PlaceQuery } | { kind:
 /** Step 1: where the ground is, by ZIP, by a click on the map, by the device's location, or by state. */
 export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) => void }) {
   const styles = useStyles();
+  const { t } = useTranslation('ground');
   const [source, setSource] = useState<Source>({ kind: 'none' });
   const [ecoregionCode, setEcoregionCode] = useState<string | null>(null);
   const geo = useGeolocation();
@@ -82,10 +84,7 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
   // The API says every place it cannot use in a whole sentence (an unknown ZIP, Alaska, a point at sea):
   // a ZIP's beside the ZIP field, a point's below the map. The ZIP form checks the format itself first.
   const zipError = isBadInput && isZipQuery ? lookupError.message : undefined;
-  const pointError =
-    isBadInput && !isZipQuery
-      ? `${lookupError.message} Click on land in the lower 48, or enter a ZIP code.`
-      : undefined;
+  const pointError = isBadInput && !isZipQuery ? t('step.pointHint', { message: lookupError.message }) : undefined;
   const state: StateCode | null =
     source.kind === 'state' ? source.state : isLookup && lookup.data ? lookup.data.state : null;
   const [nextError, setNextError] = useState<string | null>(null);
@@ -95,12 +94,12 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
   const outlineGeometry = chosenCode && outline.data?.code === chosenCode ? outline.data.outline : null;
   const chosenName =
     (lookup.data ? [lookup.data.ecoregion, ...lookup.data.otherEcoregions] : []).find((e) => e.code === chosenCode)
-      ?.name ?? `Ecoregion ${chosenCode}`;
+      ?.name ?? t('step.ecoregionFallback', { code: chosenCode });
 
   const confirm = () => {
     if (!state) return;
     if (ecoregionCode === null) {
-      setNextError('Choose the ecoregion your ground is in, or “Not sure”.');
+      setNextError(t('step.chooseEcoregion'));
       return;
     }
     onConfirm({ state, ...(ecoregionCode ? { ecoregionCode } : {}) });
@@ -109,7 +108,7 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
   return (
     <ContentCard aria-labelledby="ground-heading">
       <Heading level="section" id="ground-heading">
-        Step 1 of 3: your ground
+        {t('step.heading')}
       </Heading>
       <div className={styles.layout}>
         <div className={styles.finders}>
@@ -121,11 +120,11 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
           />
           <div>
             <Button icon={<Location20Regular />} onClick={geo.locate} disabled={geo.state.status === 'locating'}>
-              {geo.state.status === 'locating' ? 'Finding your location…' : 'Use my location'}
+              {geo.state.status === 'locating' ? t('step.locating') : t('step.useLocation')}
             </Button>
             {geo.state.status === 'failed' ? (
               <MessageBar intent="warning" layout="multiline" role="alert">
-                <MessageBarBody>{geo.state.message}</MessageBarBody>
+                <MessageBarBody>{t(`geo.${geo.state.reason}`)}</MessageBarBody>
               </MessageBar>
             ) : null}
           </div>
@@ -143,21 +142,17 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
             point={lookup.data?.point ?? (isLookup && 'lat' in source.query ? source.query : null)}
             state={state ? STATE_NAMES[state] : null}
             outline={outlineGeometry ? { name: chosenName, geometry: outlineGeometry } : null}
-            label="Map of the 48 states. Click where your ground is; keyboard users can use the ZIP code or the state list."
+            label={t('step.mapLabel')}
           />
-          <p className={styles.mapHint}>Or click the map where your ground is. The map works offline.</p>
+          <p className={styles.mapHint}>{t('step.mapHint')}</p>
         </div>
       </div>
 
       <div className={styles.result}>
-        {isLookup && lookup.isFetching && !lookup.data ? <LoadingState label="Finding your ground" /> : null}
-        {pointError ? <ErrorState title="Homeground could not find that place" message={pointError} /> : null}
+        {isLookup && lookup.isFetching && !lookup.data ? <LoadingState label={t('step.finding')} /> : null}
+        {pointError ? <ErrorState title={t('step.notFound')} message={pointError} /> : null}
         {lookupError && !isBadInput ? (
-          <ErrorState
-            title="Homeground could not find that place"
-            message={lookupError.message}
-            onRetry={() => void lookup.refetch()}
-          />
+          <ErrorState title={t('step.notFound')} message={lookupError.message} onRetry={() => void lookup.refetch()} />
         ) : null}
         {state ? (
           <>
@@ -179,7 +174,7 @@ export function GroundStep({ onConfirm }: { onConfirm: (ground: ChosenGround) =>
                 iconPosition="after"
                 onClick={confirm}
               >
-                Next: your yard
+                {t('step.next')}
               </Button>
               {nextError ? (
                 <p className={styles.nextError} role="alert">

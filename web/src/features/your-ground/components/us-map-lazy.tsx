@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { makeStyles, Skeleton, SkeletonItem } from '@fluentui/react-components';
 import { lazy, Suspense } from 'react';
 import type { UsMapProps } from './us-map.js';
@@ -9,10 +10,11 @@ const useStyles = makeStyles({ placeholder: { width: '100%', aspectRatio: '975 /
 
 export function LazyUsMap(props: UsMapProps) {
   const styles = useStyles();
+  const { t } = useTranslation('ground');
   return (
     <Suspense
       fallback={
-        <Skeleton aria-label="Loading the map">
+        <Skeleton aria-label={t('step.mapLoading')}>
           <SkeletonItem className={styles.placeholder} />
         </Skeleton>
       }

@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Button, Field, Input, makeStyles, tokens } from '@fluentui/react-components';
 import { Search20Regular } from '@fluentui/react-icons';
 import { useState, type FormEvent } from 'react';
@@ -24,6 +25,7 @@ export function ZipForm({
   isPrimary?: boolean;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('ground');
   const [zip, setZip] = useState('');
   const [error, setError] = useState<string | undefined>();
 
@@ -31,7 +33,7 @@ export function ZipForm({
     event.preventDefault();
     const value = zip.trim();
     if (!ZIP_SHAPE.test(value)) {
-      setError('Enter a 5-digit ZIP code, such as 54665.');
+      setError(t('zip.shape'));
       return;
     }
     setError(undefined);
@@ -40,10 +42,10 @@ export function ZipForm({
 
   const message = error ?? serverError;
   return (
-    <form className={styles.form} onSubmit={submit} noValidate aria-label="Find your ground by ZIP code">
+    <form className={styles.form} onSubmit={submit} noValidate aria-label={t('zip.form')}>
       <Field
         className={styles.field}
-        label="ZIP code"
+        label={t('zip.label')}
         validationMessage={message}
         validationState={message ? 'error' : 'none'}
       >
@@ -66,7 +68,7 @@ export function ZipForm({
         icon={<Search20Regular />}
         disabled={isPending}
       >
-        {isPending ? 'Looking up…' : 'Find my ground'}
+        {isPending ? t('zip.pending') : t('zip.submit')}
       </Button>
     </form>
   );

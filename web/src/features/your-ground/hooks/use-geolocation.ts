@@ -4,30 +4,26 @@ export type GeolocationState =
   | { status: 'idle' }
   | { status: 'locating' }
   | { status: 'found'; lat: number; lon: number }
-  | { status: 'failed'; message: string };
+  | { status: 'failed'; reason: GeolocationFailure };
+
+/** Why no position came back; the page says each in words. */
+export type GeolocationFailure = 'denied' | 'unavailable' | 'timeout' | 'unsupported';
 
 /** GeolocationPositionError codes (W3C Geolocation API): 1 denied, 2 unavailable, 3 timeout. */
-const FAILURE_WORDS: Record<number, string> = {
-  1: 'Homeground was not allowed to use your location. Enter your ZIP code or click the map instead.',
-  2: 'Your device could not tell where it is right now. Enter your ZIP code or click the map instead.',
-  3: 'Finding your location took too long. Try again, or enter your ZIP code.',
-};
+const FAILURES: Record<number, GeolocationFailure> = { 1: 'denied', 2: 'unavailable', 3: 'timeout' };
 
 /** "Use my location": asks the browser once, only when the person presses the button. */
 export function useGeolocation() {
   const [state, setState] = useState<GeolocationState>({ status: 'idle' });
   const locate = useCallback(() => {
     if (typeof navigator === 'undefined' || !navigator.geolocation) {
-      setState({
-        status: 'failed',
-        message: 'This browser cannot share your location. Enter your ZIP code or click the map instead.',
-      });
+      setState({ status: 'failed', reason: 'unsupported' });
       return;
     }
     setState({ status: 'locating' });
     navigator.geolocation.getCurrentPosition(
       (pos) => setState({ status: 'found', lat: round(pos.coords.latitude), lon: round(pos.coords.longitude) }),
-      (err) => setState({ status: 'failed', message: FAILURE_WORDS[err.code] ?? FAILURE_WORDS[2] }),
+      (err) => setState({ status: 'failed', reason: FAILURES[err.code] ?? 'unavailable' }),
       // A coarse fix is enough to find a county; it is faster and kinder to the battery.
       { enableHighAccuracy: false, timeout: 15_000, maximumAge: 10 * 60_000 },
     );

@@ -1,0 +1,2 @@
+export * from './vocabulary.js';
+export * from './words-for.js';

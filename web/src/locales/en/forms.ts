@@ -1,0 +1,40 @@
+/**
+ * Words of the forms: sign-in, register, and the messages the shared schemas and the API give. The
+ * `messages` are the schemas' English sentences as a field shows them; other languages translate them
+ * by matching these (see lib/forms/schema-messages.ts).
+ */
+export const forms = {
+  messages: {
+    empty: 'Must not be empty',
+    tooShort: 'Must be at least {{count}} characters',
+    tooLong: 'Must be at most {{count}} characters',
+    email: 'Must be an e-mail address',
+    wrongCredentials: 'E-mail or password is wrong',
+    throttled: 'Too many attempts: wait a minute and try again',
+    emailTaken: 'An account with this e-mail already exists. Sign in instead.',
+    somethingWrong: 'Something went wrong. Try again.',
+  },
+  fields: {
+    email: 'E-mail',
+    password: 'Password',
+    name: 'Your name',
+    nameHint: 'Your group sees this name.',
+    newPasswordHint: 'At least {{count}} characters. A short sentence is easy to remember.',
+  },
+  signIn: {
+    title: 'Sign in',
+    intro: 'Plan your season, keep your batch log and reserve plants at the plant share.',
+    submit: 'Sign in',
+    pending: 'Signing in…',
+    newHere: 'New to Homeground?',
+    create: 'Create an account',
+  },
+  register: {
+    title: 'Create an account',
+    intro: 'An account lets you join a growing group, keep your batch log and reserve plants.',
+    submit: 'Create account',
+    pending: 'Creating your account…',
+    haveAccount: 'Already have an account?',
+    signIn: 'Sign in',
+  },
+} as const;

@@ -1,0 +1,61 @@
+/** Find plants, step 1: your ground (ZIP, map, location or state; the ecoregion). */
+export const ground = {
+  page: {
+    title: 'Find plants',
+    intro:
+      'Tell Homeground where your ground is and what your yard is like, and get a yard mix of native plants that belong there, with why each one fits and how many to grow.',
+    titleGround: 'Find plants: your ground',
+    titleYard: 'Find plants: your yard',
+    titleMix: 'Your yard mix',
+    badLinkTitle: "This link's yard answers are incomplete",
+    badLinkMessage: 'Answer the yard questions again to see a mix. ({{problems}})',
+  },
+  step: {
+    heading: 'Step 1 of 3: your ground',
+    useLocation: 'Use my location',
+    locating: 'Finding your location…',
+    mapLabel:
+      'Map of the 48 states. Click where your ground is; keyboard users can use the ZIP code or the state list.',
+    mapHint: 'Or click the map where your ground is. The map works offline.',
+    mapLoading: 'Loading the map',
+    finding: 'Finding your ground',
+    notFound: 'Homeground could not find that place',
+    pointHint: '{{message}} Click on land in the lower 48, or enter a ZIP code.',
+    chooseEcoregion: 'Choose the ecoregion your ground is in, or “Not sure”.',
+    next: 'Next: your yard',
+    ecoregionFallback: 'Ecoregion {{code}}',
+  },
+  geo: {
+    denied: 'Homeground was not allowed to use your location. Enter your ZIP code or click the map instead.',
+    unavailable: 'Your device could not tell where it is right now. Enter your ZIP code or click the map instead.',
+    timeout: 'Finding your location took too long. Try again, or enter your ZIP code.',
+    unsupported: 'This browser cannot share your location. Enter your ZIP code or click the map instead.',
+  },
+  zip: {
+    form: 'Find your ground by ZIP code',
+    label: 'ZIP code',
+    shape: 'Enter a 5-digit ZIP code, such as 54665.',
+    submit: 'Find my ground',
+    pending: 'Looking up…',
+  },
+  state: {
+    label: 'State',
+    hint: 'Then choose the ecoregion from its list.',
+    placeholder: 'Choose a state',
+  },
+  result: {
+    inCounty: 'Your ground is in <strong>{{county}} County, {{state}}</strong>.',
+    inCountyZip: 'Your ground is in <strong>{{county}} County, {{state}}</strong> (ZIP {{zip}}, {{city}}).',
+    inState: 'Your ground is in <strong>{{state}}</strong>.',
+    ecoregion: 'Ecoregion: {{name}} ({{code}})',
+    splitQuestion: 'Your county reaches into more than one ecoregion. Which one is your ground in?',
+    stateQuestion: 'Which ecoregion of {{state}} is your ground in?',
+    loadingState: 'Loading the ecoregions of {{state}}',
+    errorState: 'Homeground could not load the ecoregions of {{state}}',
+    another: 'Choose another ecoregion of {{state}}',
+    notSure: 'Not sure',
+    notSureText: 'Use every species native to {{state}}, without an ecoregion.',
+    optionCode: '{{name}} (ecoregion {{code}})',
+    optionShare: '{{name}} (ecoregion {{code}}): about {{share, number}}% of your county',
+  },
+} as const;

@@ -1,0 +1,38 @@
+import type { Catalogue } from '../catalogue.js';
+import type { forms as en } from '../en/forms.js';
+
+export const forms = {
+  messages: {
+    empty: 'No puede quedar vacío',
+    tooShort: 'Escribe al menos {{count}} caracteres',
+    tooLong: 'Escribe como máximo {{count}} caracteres',
+    email: 'Escribe una dirección de correo electrónico, como nombre@example.org',
+    wrongCredentials: 'El correo o la contraseña no son correctos',
+    throttled: 'Demasiados intentos: espera un minuto y vuelve a intentarlo',
+    emailTaken: 'Ya existe una cuenta con este correo. Mejor entra con ella.',
+    somethingWrong: 'Algo salió mal. Inténtalo de nuevo.',
+  },
+  fields: {
+    email: 'Correo electrónico',
+    password: 'Contraseña',
+    name: 'Tu nombre',
+    nameHint: 'Tu grupo ve este nombre.',
+    newPasswordHint: 'Al menos {{count}} caracteres. Una frase corta es fácil de recordar.',
+  },
+  signIn: {
+    title: 'Entrar',
+    intro: 'Planea tu temporada, lleva el registro de tus tandas y reserva plantas en el reparto.',
+    submit: 'Entrar',
+    pending: 'Entrando…',
+    newHere: '¿Eres nuevo en Homeground?',
+    create: 'Crea una cuenta',
+  },
+  register: {
+    title: 'Crear una cuenta',
+    intro: 'Con una cuenta puedes unirte a un grupo de cultivo, llevar el registro de tus tandas y reservar plantas.',
+    submit: 'Crear la cuenta',
+    pending: 'Creando tu cuenta…',
+    haveAccount: '¿Ya tienes una cuenta?',
+    signIn: 'Entra',
+  },
+} as const satisfies Catalogue<typeof en>;
