@@ -468,9 +468,21 @@ describe('the plant share (e2e, demo data)', () => {
         expect({ what, role, status: res.status }).toEqual({ what, role, status: expected });
       }
     }
-    // The public routes need no account, and show no one's name or e-mail.
-    const open = await t.http.get(PUBLIC).expect(200);
-    expect(JSON.stringify(open.body)).not.toMatch(/@/);
+    // The public routes need no account and answer everyone alike, showing no one's name or e-mail;
+    // a reservation or an offer opens by its private link only, whoever asks.
+    for (const token of [undefined, ...Object.values(tokens)]) {
+      const auth = token ? bearer(token) : {};
+      const open = await t.http.get(PUBLIC).set(auth).expect(200);
+      expect(JSON.stringify(open.body)).not.toMatch(/@/);
+      await t.http
+        .get(`/api/reservations/${'C'.repeat(43)}`)
+        .set(auth)
+        .expect(403);
+      await t.http
+        .get(`/api/waitlist-offers/${'C'.repeat(43)}`)
+        .set(auth)
+        .expect(403);
+    }
     // E-mails of takers: in the organiser's pickup list only.
     const list = await t.http
       .get(`${SHARE}/slots/${slots[0].id}/pickup-list`)
