@@ -119,7 +119,7 @@ export class PlantShareService {
     this.db.atomically(() => {
       this.db.run(
         `UPDATE plant_shares SET share_date = ?, place_name = ?, place_address = ?, place_directions = ?,
-           per_species_limit = ?, total_limit = ?, retention_days = ?, updated_at = datetime('now') WHERE id = ?`,
+           per_species_limit = ?, total_limit = ?, retention_days = ?, updated_at = ? WHERE id = ?`,
         req.date ?? share.share_date,
         req.place?.name ?? share.place_name,
         req.place?.address ?? share.place_address,
@@ -127,6 +127,7 @@ export class PlantShareService {
         req.limits?.perSpecies ?? share.per_species_limit,
         req.limits?.total ?? share.total_limit,
         req.retentionDays ?? share.retention_days,
+        now.toISOString(),
         share.id,
       );
     });
@@ -242,8 +243,9 @@ export class PlantShareService {
     const share = this.views.requireShare(group);
     this.db.atomically(() =>
       this.db.run(
-        `UPDATE plant_shares SET status = ?, updated_at = datetime('now') WHERE id = ?`,
+        `UPDATE plant_shares SET status = ?, updated_at = ? WHERE id = ?`,
         req.status,
+        this.clock.now().toISOString(),
         share.id,
       ),
     );
