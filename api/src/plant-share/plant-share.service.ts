@@ -183,6 +183,7 @@ export class PlantShareService {
     const group = await this.managed(slug, user);
     const share = this.views.requireShare(group);
     this.ctx.assertKnown(req.stock.map((l, i) => ({ field: `stock.${i}.speciesSlug`, slug: l.speciesSlug })));
+    const nowMs = this.clock.now().getTime();
     const offers = this.db.atomically(() => {
       const made: WaitlistOfferMade[] = [];
       for (const l of req.stock) {
@@ -200,7 +201,7 @@ export class PlantShareService {
             share.id,
             l.speciesSlug,
           );
-          made.push(...this.ledger.release(share.id, l.speciesSlug, delta).offers);
+          made.push(...this.ledger.release(share.id, l.speciesSlug, delta, nowMs).offers);
         } else if (delta < 0) {
           this.db.run(
             'UPDATE share_stock SET offered = offered + ?, remaining = ? WHERE share_id = ? AND slug = ?',
@@ -222,6 +223,7 @@ export class PlantShareService {
     const group = await this.managed(slug, user);
     const share = this.views.requireShare(group);
     this.ctx.assertKnown(req.lines.map((l, i) => ({ field: `lines.${i}.speciesSlug`, slug: l.speciesSlug })));
+    const nowMs = this.clock.now().getTime();
     const offers = this.db.atomically(() =>
       req.lines.flatMap((l) => {
         this.ledger.ensureStockRow(share.id, l.speciesSlug);
@@ -231,7 +233,7 @@ export class PlantShareService {
           share.id,
           l.speciesSlug,
         );
-        return this.ledger.release(share.id, l.speciesSlug, l.count).offers;
+        return this.ledger.release(share.id, l.speciesSlug, l.count, nowMs).offers;
       }),
     );
     await this.views.sendOffers(group, share, offers);
@@ -292,6 +294,7 @@ export class PlantShareService {
   ): Promise<CheckInResult> {
     const group = await this.managed(slug, user);
     const share = this.views.requireShare(group);
+    const nowMs = this.clock.now().getTime();
     const { row, released } = this.db.atomically(() => {
       const r = this.db.get<ReservationRow>(
         'SELECT * FROM share_reservations WHERE id = ? AND share_id = ?',
@@ -309,7 +312,7 @@ export class PlantShareService {
       const out: Released[] = [];
       if (req.outcome === 'no-show') {
         this.ledger.freeSlot(r.slot_id);
-        for (const l of this.linesOfOne(r.id)) out.push(this.ledger.release(share.id, l.slug, l.count));
+        for (const l of this.linesOfOne(r.id)) out.push(this.ledger.release(share.id, l.slug, l.count, nowMs));
       }
       return { row: { ...r, status: req.outcome }, released: out };
     });
