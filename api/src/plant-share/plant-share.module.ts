@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { BatchesModule } from '../batches/batches.module.js';
 import { GroupsModule } from '../groups/groups.module.js';
 import { MixContextModule } from '../mix-context/mix-context.module.js';
 import { SeasonsModule } from '../seasons/seasons.module.js';
@@ -15,7 +16,7 @@ import { ShareViews } from './share-views.js';
 
 /** The plant share: what is on offer, reservations with limits and slots, pickup day, the season report. */
 @Module({
-  imports: [GroupsModule, SeasonsModule, MixContextModule],
+  imports: [GroupsModule, SeasonsModule, MixContextModule, BatchesModule],
   controllers: [PlantShareController, PublicShareController],
   providers: [
     Clock,

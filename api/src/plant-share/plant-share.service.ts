@@ -25,6 +25,7 @@ import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
+import { BatchesService } from '../batches/batches.service.js';
 import { type SeasonPlan, SeasonsService } from '../seasons/seasons.service.js';
 import { Clock } from './clock.js';
 import { ShareDb } from './share-db.js';
@@ -43,13 +44,17 @@ export class PlantShareService {
     private readonly seasons: SeasonsService,
     private readonly ctx: MixContextService,
     private readonly clock: Clock,
+    private readonly batches: BatchesService,
   ) {}
 
   /**
-   * The stock a new share starts with. For now the season's targets; once growers log batches, their
-   * ready counts replace this (the one place to change).
+   * The stock a new share starts with: the plants growers have logged ready, per species
+   * (BatchesService.readyCountsBySpecies). Until any batch has logged a ready plant (a group that does
+   * not track batches, or a share opened early) it is the season's targets, for the organiser to edit.
    */
-  initialStockFor(season: SeasonPlan): StockLine[] {
+  async initialStockFor(season: SeasonPlan): Promise<StockLine[]> {
+    const ready = await this.batches.readyCountsBySpecies(season.id);
+    if (ready.some((r) => r.readyPlants > 0)) return ready.map((r) => ({ speciesSlug: r.slug, count: r.readyPlants }));
     return season.targets.map((t) => ({ speciesSlug: t.slug, count: t.targetPlants }));
   }
 
@@ -61,7 +66,7 @@ export class PlantShareService {
     const problems: FieldProblem[] = [];
     if (req.date < now.toISOString().slice(0, 10)) problems.push({ field: 'date', message: 'is in the past' });
     req.slots.forEach((s, i) => problems.push(...slotProblems(s, req.date, now, `slots.${i}`)));
-    const stock = req.stock ?? this.initialStockFor(season);
+    const stock = req.stock ?? (await this.initialStockFor(season));
     if (req.stock)
       this.ctx.assertKnown(req.stock.map((l, i) => ({ field: `stock.${i}.speciesSlug`, slug: l.speciesSlug })));
     if (problems.length) throw badRequest(problems);
