@@ -31,7 +31,9 @@ const useStyles = makeStyles({
   email: { overflowWrap: 'anywhere' },
   off: { color: tokens.colorPaletteRedForeground1, fontWeight: tokens.fontWeightSemibold },
   failure: { color: tokens.colorPaletteRedForeground1 },
-  roleCell: { minWidth: '9rem' },
+  roleCell: { width: '10rem' },
+  // Fluent's dropdown asks for 250 px by default; the role words are short.
+  role: { minWidth: 'unset', width: '100%' },
 });
 
 const dateTime = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
@@ -90,6 +92,7 @@ export function PeoplePage({ myId }: { myId: string }) {
                       <TableCell className={styles.email}>{p.email}</TableCell>
                       <TableCell className={styles.roleCell}>
                         <Dropdown
+                          className={styles.role}
                           size="small"
                           aria-label={`Role of ${p.displayName}`}
                           value={GLOBAL_ROLE_WORDS[p.role].title}
