@@ -146,8 +146,13 @@ export function layeredHostPart(species: Species): ScorePart | null {
 }
 
 export function beesPart(species: Species, site: Site): ScorePart | null {
-  if (!site.goals.includes('pollinators') || (layerOf(species) !== 'herbaceous' && species.growthForm !== 'shrub'))
-    return null;
+  if (!site.goals.includes('pollinators')) return null;
+  return beePartOf(species);
+}
+
+/** beesPart when pollinators are a goal: it depends on the species alone, so species-facts keeps it. */
+export function beePartOf(species: Species): ScorePart | null {
+  if (layerOf(species) !== 'herbaceous' && species.growthForm !== 'shrub') return null;
   if (!hostsSpecialistBees(species)) return null;
   const named = species.wildlife.specialistBees;
   const key = named.length === 0 ? '' : named.slice(0, 3).join('|');
