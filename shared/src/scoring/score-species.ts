@@ -11,7 +11,7 @@ import { compareScored, rankOfKey, scoreKey, slugOrder } from './scored-order.js
 export { compareScored } from './scored-order.js';
 import { checkHeight, checkMoisture, checkNative, checkRoom, checkSun, type CheckResult } from './hard-checks.js';
 import { birdsPart, monarchPart } from './wildlife-parts.js';
-import { scalePart } from './practice-parts.js';
+import { gardenUsePart, scalePart, unknownAvailabilityPart } from './practice-parts.js';
 import { catalogueFacts, factsOf, type SpeciesFacts } from './species-facts.js';
 import { checkEcoregion, checkLayer, checkLifespan, checkSpreader } from './practice-checks.js';
 import { acidSoilPart, communityPart, fernPart, regionalPart, thrivesPart, wetlandPart } from './site-fit-parts.js';
@@ -110,7 +110,8 @@ function tallySpecies(
   add(regionalPart(species, region));
   addHost(facts.hostPart);
   add(forPollinators ? facts.beePart : null, TIE_WILDLIFE);
-  add(facts.availabilityPart);
+  add(facts.availabilityPart ?? unknownAvailabilityPart(site));
+  add(facts.lawnOrPath ? gardenUsePart(species, site) : null);
   add(facts.seedEasePart);
   add(scalePart(species, site));
   addHost(monarchPart(species, site));

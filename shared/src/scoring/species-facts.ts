@@ -11,7 +11,7 @@ import {
 import { bloomPeriodsOf, isFloweringSpecies } from './bloom-periods.js';
 import { genusOf, isNativeMilkweed } from './genus.js';
 import { isStructural, layerOf, matureFootprintSqFt, type PlantLayer } from './layers.js';
-import { availabilityPart, beePartOf, layeredHostPart, seedEasePart } from './practice-parts.js';
+import { availabilityPart, beePartOf, isLawnOrPathPlant, layeredHostPart, seedEasePart } from './practice-parts.js';
 import { ecoregionsOf, moistureOptimumOf, selfSows, sunOptimumOf } from './species-traits.js';
 import { flowersPartOf } from './wildlife-parts.js';
 import { hostValueOnHerbaceousScale } from './wildlife-value.js';
@@ -76,6 +76,8 @@ export interface SpeciesFacts {
   hostPart: ScorePart | null;
   availabilityPart: ScorePart | null;
   seedEasePart: ScorePart | null;
+  /** A plant for paths and lawns (isLawnOrPathPlant). */
+  lawnOrPath: boolean;
   /** beesPart and pollinatorPart when pollinators are a goal. */
   beePart: ScorePart | null;
   flowersPart: ScorePart | null;
@@ -249,6 +251,7 @@ function workOut(species: Species): SpeciesFacts {
     hostPart: layeredHostPart(species),
     availabilityPart: availabilityPart(species),
     seedEasePart: seedEasePart(species),
+    lawnOrPath: isLawnOrPathPlant(species),
     beePart: beePartOf(species),
     flowersPart: flowersPartOf(species),
     flowering,

@@ -30,6 +30,7 @@ export type ScorePartName =
   | 'bees'
   | 'availability'
   | 'seed-ease'
+  | 'garden-use'
   | 'fern'
   | 'ecoregion';
 

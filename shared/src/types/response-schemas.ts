@@ -195,6 +195,7 @@ const scorePartSchema = z.object({
     'bees',
     'availability',
     'seed-ease',
+    'garden-use',
     'fern',
     'ecoregion',
   ]),
