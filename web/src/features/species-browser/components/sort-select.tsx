@@ -18,8 +18,8 @@ const CHOICES: { sort: SpeciesSort; order: SortOrder; label: string }[] = [
   { sort: 'height', order: 'desc', label: 'Tallest first' },
   { sort: 'bloomStart', order: 'asc', label: 'Earliest bloom first' },
   { sort: 'bloomStart', order: 'desc', label: 'Latest bloom first' },
-  { sort: 'hostValue', order: 'desc', label: 'Most caterpillar hosts first' },
-  { sort: 'hostValue', order: 'asc', label: 'Fewest caterpillar hosts first' },
+  { sort: 'hostValue', order: 'desc', label: 'Most wildlife value first' },
+  { sort: 'hostValue', order: 'asc', label: 'Least wildlife value first' },
 ];
 
 /** The same orders as the column headers, as one control that also suits a phone. */
