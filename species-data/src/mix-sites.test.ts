@@ -366,6 +366,26 @@ describe('yard mixes against published plant lists (8+ sites in 6 states)', () =
     }
   });
 
+  // Something in flower from spring to frost (Homeground's rule after NRCS CP42, CHECK-VALUES §3): a
+  // part of the season is met when each of its months has 3 species of the mix in flower, counted
+  // from the records' bloom months as the bloom chart counts them. The objective weighs month gaps,
+  // so more of these small mixes meet it: 9 of the 30 parts here (8 at half the month weight).
+  it('the season rule agrees with the bloom chart, and the mixes meet at least 9 of its 30 parts', () => {
+    const MONTHS = { early: [4, 5, 6], mid: [6, 7], late: [8, 9, 10] } as const;
+    let met = 0;
+    for (const id of Object.keys(PUBLISHED)) {
+      const { result, chosen } = mixFor(id);
+      const flowering = chosen.filter((s) => s.growthForm !== 'graminoid' && s.growthForm !== 'fern');
+      for (const [period, months] of Object.entries(MONTHS)) {
+        const rule = result.constraints.find((c) => c.id === `cp42-${period}`)!;
+        const chart = months.every((m) => flowering.filter((s) => s.bloomMonths.includes(m)).length >= 3);
+        if (rule.met) expect(chart, `${id} ${period}: the rule says met, the chart disagrees`).toBe(true);
+        if (rule.met) met++;
+      }
+    }
+    expect(met).toBeGreaterThanOrEqual(9);
+  });
+
   it('the Sonoran Desert is not covered: no eastern plants offered, and the answer says so', () => {
     const { result } = mixFor('az-sonoran');
     expect(result.chosen).toEqual([]);

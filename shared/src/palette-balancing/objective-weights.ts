@@ -14,7 +14,7 @@ export const OBJECTIVE_WEIGHTS = {
    * Per species in flower in each month from April to October, up to 3 a month: the bloom chart
    * and the design rules judge months, so the mix is balanced on them too (Homeground's weight).
    */
-  perMonthSpecies: 0.25,
+  perMonthSpecies: 0.5,
   monthTarget: 3,
   /** Per flowering species up to CP42's 9 in a full mix (CP42-IN, R). */
   perFloweringSpecies: 1,
