@@ -325,6 +325,67 @@ describe('yard mixes against published plant lists (8+ sites in 6 states)', () =
     expect(totalFootprintSqFt(plantsPerSpecies(chosen, site.areaSqFt))).toBeLessThanOrEqual(site.areaSqFt);
   });
 
+  // Picks a local gardener would question, each kept out by a fact or a rule of the record.
+  it.each(['mn-medium-sun', 'il-medium-sun'])(
+    '%s: milkweeds known to be sold lead, not oval-leaf milkweed (USDA PLANTS gives it no commercial availability)',
+    (id) => {
+      // Source: USDA PLANTS characteristics, commercial_availability (ASOV has none; ASIN and ASTU are
+      // "Routinely Available"), as derived into the records' commercialAvailability.
+      const { chosen } = mixFor(id);
+      const milkweeds = chosen.filter((s) => isNativeMilkweed(s));
+      expect(milkweeds.map((s) => s.scientificName)).not.toContain('Asclepias ovalifolia');
+      expect(milkweeds.some((s) => s.commercialAvailability === 'routine')).toBe(true);
+    },
+  );
+
+  it.each(MIX_SITES.filter((s) => s.site.sun === 'full' && (s.site.areaSqFt ?? 0) < 21_780).map((s) => s.id))(
+    "%s: no path rush among a sunny bed's species (a rush of trampled paths and lawns)",
+    (id) => {
+      // Source: common practice, from memory (path rush is the rush of footpaths, lawns and field tracks).
+      const { chosen } = mixFor(id);
+      expect(chosen.map((s) => s.scientificName)).not.toContain('Juncus tenuis');
+    },
+  );
+
+  it('wi-dry-sun: no buffalograss in a Driftless Area bed (a shortgrass-plains turf grass)', () => {
+    // Source: range limits from memory (species-data/ecoregions/range-limits.json), reconciled in the record.
+    const { chosen } = mixFor('wi-dry-sun');
+    expect(chosen.map((s) => s.scientificName)).not.toContain('Bouteloua dactyloides');
+    expect(bySlug.get('bouteloua-dactyloides')?.ecoregions).not.toContain('52');
+  });
+
+  it('Maximilian sunflower is not offered as native to Wisconsin (introduced east of the plains)', () => {
+    // Source: state floras, from memory; USDA PLANTS lists it native in Wisconsin, and the record's
+    // nativeStates reconciliation says why it differs (the reference test checks that note exists).
+    const s = bySlug.get('helianthus-maximiliani')!;
+    expect(s.nativeStates).not.toContain('WI');
+    expect(s.nativeStates).toContain('KS');
+    expect(s.reconciliations.map((r) => r.field)).toContain('nativeStates');
+    for (const id of MIX_SITES.filter((x) => x.region.state === 'WI').map((x) => x.id)) {
+      expect(mixFor(id).chosen.map((c) => c.slug)).not.toContain('helianthus-maximiliani');
+    }
+  });
+
+  // Something in flower from spring to frost (Homeground's rule after NRCS CP42, CHECK-VALUES §3): a
+  // part of the season is met when each of its months has 3 species of the mix in flower, counted
+  // from the records' bloom months as the bloom chart counts them. The objective weighs month gaps,
+  // so more of these small mixes meet it: 9 of the 30 parts here (8 at half the month weight).
+  it('the season rule agrees with the bloom chart, and the mixes meet at least 9 of its 30 parts', () => {
+    const MONTHS = { early: [4, 5, 6], mid: [6, 7], late: [8, 9, 10] } as const;
+    let met = 0;
+    for (const id of Object.keys(PUBLISHED)) {
+      const { result, chosen } = mixFor(id);
+      const flowering = chosen.filter((s) => s.growthForm !== 'graminoid' && s.growthForm !== 'fern');
+      for (const [period, months] of Object.entries(MONTHS)) {
+        const rule = result.constraints.find((c) => c.id === `cp42-${period}`)!;
+        const chart = months.every((m) => flowering.filter((s) => s.bloomMonths.includes(m)).length >= 3);
+        if (rule.met) expect(chart, `${id} ${period}: the rule says met, the chart disagrees`).toBe(true);
+        if (rule.met) met++;
+      }
+    }
+    expect(met).toBeGreaterThanOrEqual(9);
+  });
+
   it('the Sonoran Desert is not covered: no eastern plants offered, and the answer says so', () => {
     const { result } = mixFor('az-sonoran');
     expect(result.chosen).toEqual([]);

@@ -8,15 +8,13 @@ import {
   mixPlanting,
   type PaletteOptions,
   recommend,
+  RECOMMENDATION_LIST_LIMITS,
   type RecommendationsResponse,
   type RegionContext,
   type Site,
 } from '@homeground/shared';
 import { AnswerCache } from './answer-cache.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
-
-const MAX_RANKED = 60;
-const MAX_ALSO_CONSIDER = 20;
 
 /** Recommendations, balanced mixes and swap suggestions: the shared engine over the live catalogue. */
 @Injectable()
@@ -27,13 +25,13 @@ export class MixesService {
 
   recommend(site: Site, regionIn: RegionContext): RecommendationsResponse {
     const region = this.ctx.region(regionIn);
-    const r = recommend(this.ctx.species(), site, region);
+    const r = recommend(this.ctx.species(), site, region, {}, RECOMMENDATION_LIST_LIMITS);
     const withSpecies = <T extends { slug: string }>(list: T[]) =>
       list.map((x) => ({ ...x, species: this.ctx.summary(x.slug) }));
     return {
       site,
-      ranked: withSpecies(r.ranked.slice(0, MAX_RANKED)),
-      alsoConsider: withSpecies(r.alsoConsider.slice(0, MAX_ALSO_CONSIDER)),
+      ranked: withSpecies(r.ranked),
+      alsoConsider: withSpecies(r.alsoConsider),
       coverage: r.coverage,
     };
   }

@@ -1,4 +1,10 @@
-import { belongsToEcoregion, type Ecoregion, type Species, type SpeciesQuery } from '@homeground/shared';
+import {
+  belongsToEcoregion,
+  compareWildlifeValue,
+  type Ecoregion,
+  type Species,
+  type SpeciesQuery,
+} from '@homeground/shared';
 
 /** Applies every filter of `GET /api/species` except the text search. */
 export function matchesFilters(s: Species, q: SpeciesQuery, ecoregion: Ecoregion | undefined): boolean {
@@ -27,8 +33,8 @@ const COMPARATORS: Record<
   scientificName: (a, b) => a.scientificName.localeCompare(b.scientificName),
   height: (a, b) => a.heightCm.max - b.heightCm.max || byName(a, b),
   bloomStart: (a, b) => Math.min(...a.bloomMonths, 13) - Math.min(...b.bloomMonths, 13) || byName(a, b),
-  hostValue: (a, b) =>
-    (a.wildlife.lepidopteraGenusCount ?? -1) - (b.wildlife.lepidopteraGenusCount ?? -1) || byName(a, b),
+  // Homeground's several-part wildlife value (compareWildlifeValue), never one host count.
+  hostValue: (a, b) => compareWildlifeValue(a, b) || byName(a, b),
 };
 
 /** Sorts in place; `relevance` keeps the search order (or falls back to name without a search). */
@@ -41,6 +47,8 @@ export function sortSpecies(
   const key = sort ?? (hasSearch ? 'relevance' : 'name');
   if (key === 'relevance')
     return hasSearch ? (order === 'desc' ? list.reverse() : list) : sortSpecies(list, 'name', order, false);
+  // Most wildlife value first still lists equals by name, A to Z.
+  if (key === 'hostValue' && order === 'desc') return list.sort((a, b) => compareWildlifeValue(b, a) || byName(a, b));
   const cmp = COMPARATORS[key];
   return list.sort(order === 'desc' ? (a, b) => cmp(b, a) : cmp);
 }

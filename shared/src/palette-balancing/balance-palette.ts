@@ -88,9 +88,7 @@ export function balancePalette(input: PaletteInput): PaletteResult {
         locked: c.locked.includes(item.slug),
       };
     })
-    .sort((a, b) =>
-      compareScored({ ...a, eligible: true, nearMiss: false }, { ...b, eligible: true, nearMiss: false }),
-    );
+    .sort(compareScored);
 
   const milkweedNearMisses = c.milkweedNearMisses.map((r) => ({
     name: c.species.get(r.slug)!.commonNames[0],

@@ -33,18 +33,20 @@ function inFlower(items: readonly PaletteItem[], month: number): PaletteItem[] {
 function periodConstraint(input: ConstraintInput, period: BloomPeriod): PaletteConstraint {
   const p = PERIOD[period];
   const inMix = input.chosen.filter((i) => i.periods.includes(period));
-  const available = input.candidates.filter((i) => i.periods.includes(period));
+  // Counted, not listed: the candidates may be 10,000.
+  let available = 0;
+  for (const i of input.candidates) if (i.periods.includes(period)) available++;
   const thin = monthsOf(period).filter((m) => inFlower(input.chosen, m).length < PER_PERIOD);
   const met = inMix.length >= PER_PERIOD && thin.length === 0;
   const has = inMix.length === 0 ? 'The mix has none' : `The mix has ${inMix.length}: ${joinWords(names(inMix))}`;
   const thinWords = thin.map((m) => `${monthName(m)} has ${inFlower(input.chosen, m).length}`);
   let detail =
     thin.length > 0 && inMix.length >= PER_PERIOD ? `${has}, but ${joinWords(thinWords)} in flower.` : `${has}.`;
-  if (!met && available.length < PER_PERIOD) {
-    const only = onlyAvailable(available.length, p.one, p.many, groundWords(input));
+  if (!met && available < PER_PERIOD) {
+    const only = onlyAvailable(available, p.one, p.many, groundWords(input));
     detail = `${has}. ${only}; a species from another part of the season may take its place.`;
   } else if (!met && inMix.length < PER_PERIOD) {
-    detail = `${has}. ${lostOut(input, `${available.length - inMix.length} more ${p.many} suit your ground but`)}`;
+    detail = `${has}. ${lostOut(input, `${available - inMix.length} more ${p.many} suit your ground but`)}`;
   } else if (!met) {
     detail += ' Keep or add a species that flowers then, or choose a larger mix.';
   }
@@ -60,7 +62,8 @@ function periodConstraint(input: ConstraintInput, period: BloomPeriod): PaletteC
 
 function floweringConstraint(input: ConstraintInput): PaletteConstraint {
   const inMix = input.chosen.filter((i) => i.flowering).length;
-  const available = input.candidates.filter((i) => i.flowering).length;
+  let available = 0;
+  for (const i of input.candidates) if (i.flowering) available++;
   const met = inMix >= FLOWERING;
   let detail = `The mix has ${inMix} flowering species.`;
   if (!met && input.size < FLOWERING) {

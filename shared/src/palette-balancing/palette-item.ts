@@ -1,9 +1,6 @@
 import type { BloomPeriod, ScoredSpecies } from '../types/recommendation.js';
 import type { FlowerColour, Species } from '../types/species.js';
-import { bloomPeriodsOf, isFloweringSpecies } from '../scoring/bloom-periods.js';
-import { genusOf, isNativeMilkweed } from '../scoring/genus.js';
-import { isStructural } from '../scoring/layers.js';
-import { hostValueOnHerbaceousScale } from '../scoring/wildlife-value.js';
+import { factsOf } from '../scoring/species-facts.js';
 
 /** Rows of a bed by mature height (Homeground's rule, on the middle of the record's height range). */
 export type HeightTier = 'front' | 'middle' | 'back';
@@ -29,9 +26,9 @@ export interface PaletteItem {
    * returns, so neither is counted twice.
    */
   fit: number;
-  periods: BloomPeriod[];
+  periods: readonly BloomPeriod[];
   /** Months in flower (flowering species only), for the month-by-month bloom rule. */
-  months?: number[];
+  months?: readonly number[];
   flowering: boolean;
   genus: string;
   /**
@@ -42,7 +39,7 @@ export interface PaletteItem {
   /** A shrub, tree or vine: chosen as its own layer, on request. */
   woody?: boolean;
   tier: HeightTier;
-  colours: FlowerColour[];
+  colours: readonly FlowerColour[];
   graminoid: boolean;
   milkweed: boolean;
 }
@@ -50,22 +47,29 @@ export interface PaletteItem {
 export function toPaletteItem(species: Species, scored: ScoredSpecies): PaletteItem {
   let hostPoints = 0;
   for (const p of scored.parts) if (p.name === 'host-plant' || p.name === 'monarch-host') hostPoints += p.points;
-  // Each fact worked out once (this runs for every candidate of every mix).
-  const flowering = isFloweringSpecies(species);
-  const genus = genusOf(species);
+  return paletteItemOf(species, scored.score - hostPoints);
+}
+
+/**
+ * A candidate from its fit (score less host-plant and monarch-host points) and the species' facts,
+ * which are worked out once per record (species-facts.ts): this runs for every candidate of every
+ * mix, so the item shares the record's lists instead of copying them.
+ */
+export function paletteItemOf(species: Species, fit: number): PaletteItem {
+  const f = factsOf(species);
   return {
     slug: species.slug,
     name: species.commonNames[0],
-    fit: scored.score - hostPoints,
-    periods: flowering ? bloomPeriodsOf(species.bloomMonths) : [],
-    months: flowering ? species.bloomMonths : [],
-    flowering,
-    genus,
-    hostCount: hostValueOnHerbaceousScale(species),
-    woody: isStructural(species),
+    fit,
+    periods: f.periods,
+    months: f.months,
+    flowering: f.flowering,
+    genus: f.genus,
+    hostCount: f.hostCountOnHerbaceousScale,
+    woody: f.structural,
     tier: heightTierOf(species.heightCm),
-    colours: flowering ? [...species.flowerColours] : [],
-    graminoid: species.growthForm === 'graminoid',
-    milkweed: isNativeMilkweed(species),
+    colours: f.colours,
+    graminoid: f.graminoid,
+    milkweed: f.milkweed,
   };
 }

@@ -8,7 +8,8 @@ import { joinWords } from '../vocabulary/join-words.js';
 import { MOISTURE_WORDS, SUN_WORDS } from '../vocabulary/site-words.js';
 import { HEIGHT_NEAR_MISS_FACTOR, POINTS, ROOM } from './score-weights.js';
 import { STATE_NEIGHBOURS } from './state-neighbours.js';
-import { Interned, WordCache, levelListCode } from './word-cache.js';
+import { factsOf, isNativeTo, stepsFromBits } from './species-facts.js';
+import { Interned, WordCache } from './word-cache.js';
 
 /**
  * The checks that decide whether a species can go in the mix at all. Each returns either a part
@@ -25,9 +26,9 @@ function passed(key: string | number, part: ScorePart): CheckResult {
   return passes.keep(key, Object.freeze({ part: Object.freeze(part) }));
 }
 
-export function checkNative(species: Species, region: RegionContext): CheckResult {
+export function checkNative(species: Species, region: RegionContext, facts = factsOf(species)): CheckResult {
   const state = region.state;
-  if (species.nativeStates.includes(state)) {
+  if (isNativeTo(facts, state)) {
     return passes.get(state) ?? passed(state, { name: 'native', points: 0, reason: `Native to ${stateName(state)}.` });
   }
   const nextDoor = STATE_NEIGHBOURS[state].filter((s) => species.nativeStates.includes(s));
@@ -61,9 +62,10 @@ function sunWanted(species: Species): string {
 }
 
 // Numeric keys: sun codes are multiples of 4, moisture codes 4k + 2; a pass is the code + 1.
-export function checkSun(species: Species, site: Site): CheckResult {
-  const steps = stepsAway(SUN_LEVELS, species.sun, site.sun);
-  const code = levelListCode(SUN_LEVELS, species.sun, site.sun) * 4;
+export function checkSun(species: Species, site: Site, facts = factsOf(species)): CheckResult {
+  const at = SUN_LEVELS.indexOf(site.sun);
+  const steps = stepsFromBits(facts.sunBits, at);
+  const code = (at * facts.sunCodeScale + facts.sunListCode) * 4;
   const ground = SUN_WORDS[site.sun];
   if (steps === 0) {
     return (
@@ -86,9 +88,10 @@ function moistureWanted(species: Species): string {
   );
 }
 
-export function checkMoisture(species: Species, site: Site): CheckResult {
-  const steps = stepsAway(MOISTURE_LEVELS, species.moisture, site.moisture);
-  const code = levelListCode(MOISTURE_LEVELS, species.moisture, site.moisture) * 4 + 2;
+export function checkMoisture(species: Species, site: Site, facts = factsOf(species)): CheckResult {
+  const at = MOISTURE_LEVELS.indexOf(site.moisture);
+  const steps = stepsFromBits(facts.moistureBits, at);
+  const code = (at * facts.moistureCodeScale + facts.moistureListCode) * 4 + 2;
   const yours = MOISTURE_WORDS[site.moisture];
   if (steps === 0) {
     return (
@@ -140,9 +143,9 @@ export function footprintSqFtOf(species: Species): number {
  * out (a near miss if the bed is at least half its footprint); one that would shade a good part of
  * it costs points. Words only for those few: most plants fit and need none.
  */
-export function checkRoom(species: Species, site: Site): CheckResult {
+export function checkRoom(species: Species, site: Site, facts = factsOf(species)): CheckResult {
   const widthCm = species.spreadCm.min;
-  const footprintSqFt = footprintSqFtOf(species);
+  const footprintSqFt = facts.footprintSqFt;
   if (footprintSqFt > site.areaSqFt) {
     return {
       failure: `Too big: it grows about ${formatHeightCm(widthCm)} across, more than your ${formatArea(site.areaSqFt)} bed can hold.`,

@@ -1,9 +1,9 @@
 import type { RegionContext, Site } from '../types/site.js';
 import type { Species } from '../types/species.js';
 import { formatArea } from '../units/format-units.js';
-import { SMALL_BED_SQ_FT, isStructural, matureFootprintSqFt, woodyShare } from './layers.js';
+import { SMALL_BED_SQ_FT, woodyShare } from './layers.js';
 import type { CheckResult } from './hard-checks.js';
-import { ecoregionsOf, selfSows } from './species-traits.js';
+import { factsOf, listsEcoregion } from './species-facts.js';
 
 /**
  * Checks of garden practice and place that decide whether a species goes in a yard mix: the layer
@@ -14,18 +14,18 @@ import { ecoregionsOf, selfSows } from './species-traits.js';
 
 export type PracticeVerdict = 'pass' | 'near-miss' | 'out';
 
-export function layerVerdict(species: Species, site: Site): PracticeVerdict {
-  if (!isStructural(species)) return 'pass';
+export function layerVerdict(species: Species, site: Site, facts = factsOf(species)): PracticeVerdict {
+  if (!facts.structural) return 'pass';
   if (!site.woodyPlants) return 'out';
   const room = woodyShare(site.areaSqFt) * site.areaSqFt;
-  const one = matureFootprintSqFt(species);
+  const one = facts.footprintSqFt;
   // Wider than the whole bed is checkRoom's failure; one failure, one reason.
   if (one <= room || one > site.areaSqFt) return 'pass';
   return 'near-miss';
 }
 
-export function checkLayer(species: Species, site: Site): CheckResult {
-  const v = layerVerdict(species, site);
+export function checkLayer(species: Species, site: Site, facts = factsOf(species)): CheckResult {
+  const v = layerVerdict(species, site, facts);
   if (v === 'pass') return null;
   if (!site.woodyPlants) {
     return {
@@ -35,17 +35,17 @@ export function checkLayer(species: Species, site: Site): CheckResult {
   }
   const room = woodyShare(site.areaSqFt) * site.areaSqFt;
   return {
-    failure: `Grows about ${formatArea(matureFootprintSqFt(species))} across at maturity, more than the ${formatArea(room)} your bed has for woody plants.`,
+    failure: `Grows about ${formatArea(facts.footprintSqFt)} across at maturity, more than the ${formatArea(room)} your bed has for woody plants.`,
     nearMiss: v === 'near-miss',
   };
 }
 
-export function lifespanFails(species: Species): boolean {
-  return species.lifespan === 'annual' || species.lifespan === 'biennial';
+export function lifespanFails(species: Species, facts = factsOf(species)): boolean {
+  return facts.shortLived;
 }
 
-export function checkLifespan(species: Species): CheckResult {
-  if (!lifespanFails(species)) return null;
+export function checkLifespan(species: Species, facts = factsOf(species)): CheckResult {
+  if (!facts.shortLived) return null;
   const kind =
     species.lifespan === 'annual'
       ? 'An annual: it lives one season'
@@ -56,14 +56,14 @@ export function checkLifespan(species: Species): CheckResult {
   };
 }
 
-export function spreaderFails(species: Species, site: Site): boolean {
+export function spreaderFails(species: Species, site: Site, facts = factsOf(species)): boolean {
   // Annuals and biennials self-sow by nature; the lifespan check already sets them apart.
-  if (site.spreaders || site.areaSqFt >= SMALL_BED_SQ_FT || lifespanFails(species)) return false;
-  return species.spreadHabit === 'aggressive' || selfSows(species);
+  if (site.spreaders || site.areaSqFt >= SMALL_BED_SQ_FT) return false;
+  return !facts.shortLived && facts.unruly;
 }
 
-export function checkSpreader(species: Species, site: Site): CheckResult {
-  if (!spreaderFails(species, site)) return null;
+export function checkSpreader(species: Species, site: Site, facts = factsOf(species)): CheckResult {
+  if (!spreaderFails(species, site, facts)) return null;
   const how = species.spreadHabit === 'aggressive' ? 'Spreads hard by roots or seed' : 'Seeds itself about freely';
   return {
     failure: `${how} and would take over a bed under ${formatArea(SMALL_BED_SQ_FT)}; ask for spreaders to include it.`,
@@ -76,14 +76,14 @@ export function checkSpreader(species: Species, site: Site): CheckResult {
  * native to the state but absent from that part of it is out. Otherwise state nativity decides
  * (checkNative).
  */
-export function ecoregionFails(species: Species, region: RegionContext): boolean {
+export function ecoregionFails(species: Species, region: RegionContext, facts = factsOf(species)): boolean {
   const code = region.ecoregionCode;
-  const list = ecoregionsOf(species);
-  return code !== undefined && list !== undefined && !list.includes(code);
+  if (code === undefined) return false;
+  return listsEcoregion(facts, code) === false;
 }
 
-export function checkEcoregion(species: Species, region: RegionContext): CheckResult {
-  if (!ecoregionFails(species, region)) return null;
+export function checkEcoregion(species: Species, region: RegionContext, facts = factsOf(species)): CheckResult {
+  if (!ecoregionFails(species, region, facts)) return null;
   return {
     failure: `Native to the state, but not to your ecoregion (EPA Level III ${region.ecoregionCode}).`,
     nearMiss: false,

@@ -3,6 +3,7 @@ import type { Site } from '../types/site.js';
 import { type Species, type CommercialAvailability } from '../types/species.js';
 import { SMALL_BED_SQ_FT, layerOf } from './layers.js';
 import { formatHeightCm } from '../units/format-units.js';
+import { plantingMethodFor } from '../quantities/planting-method.js';
 import { commercialAvailabilityOf } from './species-traits.js';
 import { beeWords, caterpillarWords, hostLevelOf, hostsSpecialistBees } from './wildlife-value.js';
 import { PartCache, sharedPart } from './word-cache.js';
@@ -122,6 +123,45 @@ export function availabilityPart(species: Species): ScorePart | null {
   return staple ? STAPLE_PART : null;
 }
 
+/**
+ * No availability on record (USDA PLANTS gives none and it is no nursery staple): for a bed planted
+ * as plugs this ranks below species known to be sold, as none-known does, since a homeowner has
+ * to find the plants. A meadow is sown from seed mixes, where the record's silence says less, so
+ * it costs nothing there (Homeground's rule).
+ */
+const UNKNOWN_AVAILABILITY_PART = sharedPart({
+  name: 'availability',
+  points: AVAILABILITY['none-known'].points,
+  reason:
+    'No commercial source is on record for it: plants may be hard to find, so ask native-plant nurseries near you.',
+});
+
+export function unknownAvailabilityPart(site: Site): ScorePart | null {
+  return plantingMethodFor(site.areaSqFt) === 'plugs' ? UNKNOWN_AVAILABILITY_PART : null;
+}
+
+/**
+ * Species grown as lawn or between stepping stones, where feet keep taller plants out (common
+ * practice, from memory): path rush of trampled paths and lawns, buffalograss of shortgrass turf.
+ * They take being walked on and little else asks that of them, so in a bed planted as plugs they
+ * belong on its path or edge, not among its lead species.
+ */
+const LAWN_AND_PATH_SPECIES: ReadonlySet<string> = new Set(['Juncus tenuis', 'Bouteloua dactyloides']);
+const LAWN_AND_PATH_PART = sharedPart({
+  name: 'garden-use',
+  points: -3,
+  reason: 'A plant for paths and lawns, where it takes being walked on: in a flower bed keep it to the path or edge.',
+});
+
+export function isLawnOrPathPlant(species: Pick<Species, 'scientificName'>): boolean {
+  return LAWN_AND_PATH_SPECIES.has(species.scientificName);
+}
+
+export function gardenUsePart(species: Species, site: Site): ScorePart | null {
+  if (plantingMethodFor(site.areaSqFt) !== 'plugs' || !isLawnOrPathPlant(species)) return null;
+  return LAWN_AND_PATH_PART;
+}
+
 /** Easy from seed: no treatment, or a cold-moist spell of two months at most (the trade's usual winter sowing). */
 export function seedEasePart(species: Species): ScorePart | null {
   // A plain loop: this runs for every candidate on every request.
@@ -146,8 +186,13 @@ export function layeredHostPart(species: Species): ScorePart | null {
 }
 
 export function beesPart(species: Species, site: Site): ScorePart | null {
-  if (!site.goals.includes('pollinators') || (layerOf(species) !== 'herbaceous' && species.growthForm !== 'shrub'))
-    return null;
+  if (!site.goals.includes('pollinators')) return null;
+  return beePartOf(species);
+}
+
+/** beesPart when pollinators are a goal: it depends on the species alone, so species-facts keeps it. */
+export function beePartOf(species: Species): ScorePart | null {
+  if (layerOf(species) !== 'herbaceous' && species.growthForm !== 'shrub') return null;
   if (!hostsSpecialistBees(species)) return null;
   const named = species.wildlife.specialistBees;
   const key = named.length === 0 ? '' : named.slice(0, 3).join('|');

@@ -2,7 +2,8 @@ import type { ScorePart } from '../types/recommendation.js';
 import { type Site, type RegionContext } from '../types/site.js';
 import { MOISTURE_LEVELS, SUN_LEVELS, type Habitat, type Species, type WetlandIndicator } from '../types/species.js';
 import { MOISTURE_WORDS, SUN_WORDS } from '../vocabulary/site-words.js';
-import { ecoregionsOf, moistureOptimumOf, needsAcidSoil, sunOptimumOf, wetlandIndicatorOf } from './species-traits.js';
+import { factsOf } from './species-facts.js';
+import { ecoregionsOf, needsAcidSoil, wetlandIndicatorOf } from './species-traits.js';
 import { sharedPart, PartCache } from './word-cache.js';
 
 /**
@@ -35,31 +36,38 @@ const WETLAND_WORDS: Record<WetlandIndicator, string> = {
 };
 
 const thriveParts = new PartCache<number>();
+const FULL_AT = SUN_LEVELS.indexOf('full');
+const SHADE_AT = SUN_LEVELS.indexOf('shade');
+const FULL = 1 << FULL_AT;
+const SHADE = 1 << SHADE_AT;
+const DRY = 1 << MOISTURE_LEVELS.indexOf('dry');
+const WET = 1 << MOISTURE_LEVELS.indexOf('wet');
 
 /** How well the sun and moisture suit the species, as one "thrives" part (or null when it only copes). */
-export function thrivesPart(species: Species, site: Site): ScorePart | null {
-  const sunBest = sunOptimumOf(species).includes(site.sun);
-  const moistBest = moistureOptimumOf(species).includes(site.moisture);
+export function thrivesPart(species: Species, site: Site, facts = factsOf(species)): ScorePart | null {
+  // Bits of the facts, not the record's lists: this runs for every candidate on every request.
+  const sunAt = SUN_LEVELS.indexOf(site.sun);
+  const moistureAt = MOISTURE_LEVELS.indexOf(site.moisture);
+  const sunBest = (facts.sunOptimumBits & (1 << sunAt)) !== 0;
+  const moistBest = (facts.moistureOptimumBits & (1 << moistureAt)) !== 0;
   let points = (sunBest ? FIT_POINTS.optimum : 0) + (moistBest ? FIT_POINTS.optimum : 0);
   if (
-    (site.moisture === 'wet' && !species.moisture.includes('dry')) ||
-    (site.moisture === 'dry' && !species.moisture.includes('wet'))
+    (site.moisture === 'wet' && (facts.moistureBits & DRY) === 0) ||
+    (site.moisture === 'dry' && (facts.moistureBits & WET) === 0)
   ) {
     points += FIT_POINTS.specialist;
   }
   if (
-    (site.sun === 'full' && !species.sun.includes('shade')) ||
-    (site.sun === 'shade' && !species.sun.includes('full'))
+    (site.sun === 'full' && (facts.sunBits & SHADE) === 0) ||
+    (site.sun === 'shade' && (facts.sunBits & FULL) === 0)
   ) {
     points += FIT_POINTS.specialist;
   }
-  if ((site.sun === 'full' && species.sun[0] === 'shade') || (site.sun === 'shade' && species.sun[0] === 'full'))
+  if ((site.sun === 'full' && facts.firstSun === SHADE_AT) || (site.sun === 'shade' && facts.firstSun === FULL_AT))
     points += FIT_POINTS.offEnd;
   if (points <= 0) return null;
   // A number naming points, which optimum matched, and the ground: no string per species.
-  const key =
-    ((points * 4 + (sunBest ? 2 : 0) + (moistBest ? 1 : 0)) * 3 + SUN_LEVELS.indexOf(site.sun)) * 3 +
-    MOISTURE_LEVELS.indexOf(site.moisture);
+  const key = ((points * 4 + (sunBest ? 2 : 0) + (moistBest ? 1 : 0)) * 3 + sunAt) * 3 + moistureAt;
   const cached = thriveParts.get(key);
   if (cached !== undefined) return cached;
   const sunWords = SUN_WORDS[site.sun];

@@ -43,7 +43,13 @@ export function monarchPart(species: Species, site: Site): ScorePart | null {
 const pollinatorParts = new PartCache<string>();
 
 export function pollinatorPart(species: Species, site: Site): ScorePart | null {
-  if (!site.goals.includes('pollinators') || !isFloweringSpecies(species)) return null;
+  if (!site.goals.includes('pollinators')) return null;
+  return flowersPartOf(species);
+}
+
+/** pollinatorPart when pollinators are a goal: it depends on the species alone, so species-facts keeps it. */
+export function flowersPartOf(species: Species): ScorePart | null {
+  if (!isFloweringSpecies(species)) return null;
   const words = species.wildlife.pollinators;
   return (
     pollinatorParts.get(words) ??

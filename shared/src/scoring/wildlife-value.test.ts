@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { F, makeSpecies } from './__tests__/species-fixtures.js';
 import { layerOf } from './layers.js';
-import { caterpillarWords, hostLevelOf, hostValueOnHerbaceousScale, wildlifeSummary } from './wildlife-value.js';
+import {
+  caterpillarWords,
+  compareWildlifeValue,
+  hostLevelOf,
+  hostValueOnHerbaceousScale,
+  wildlifeSummary,
+} from './wildlife-value.js';
 
 // Genus counts: Tallamy's herbaceous (h) and woody (w) lists, CHECK-VALUES §2 (R).
 const cherry = makeSpecies({
@@ -48,5 +54,30 @@ describe('caterpillar host value within its layer (input → level, words)', () 
     const summary = wildlifeSummary(F.butterflyMilkweed);
     expect(summary.monarchs).toBe('Monarch caterpillars feed on it.');
     expect(JSON.stringify(summary)).not.toMatch(/\d/);
+  });
+});
+
+describe('wildlife value order for lists: part by part, never one number', () => {
+  // Host levels from the genus counts above (CHECK-VALUES §2, R); specialist-bee genera from memory.
+  const byValue = (list: Parameters<typeof compareWildlifeValue>[0][]) =>
+    [...list].sort((a, b) => compareWildlifeValue(b, a) || a.slug.localeCompare(b.slug)).map((s) => s.slug);
+
+  it('compares caterpillar value within each layer: an oak and a goldenrod are both at the top', () => {
+    expect(hostLevelOf(oak)).toBe(hostLevelOf(F.showyGoldenrod));
+    // Then bees decide: goldenrods host specialist bees (from memory), oaks are wind-pollinated.
+    expect(byValue([oak, F.showyGoldenrod])).toEqual([F.showyGoldenrod.slug, oak.slug]);
+  });
+
+  it('a cherry (Prunus 456, woody) does not outrank a goldenrod (Solidago 115, herbaceous)', () => {
+    expect(compareWildlifeValue(cherry, F.showyGoldenrod)).toBeLessThanOrEqual(0);
+  });
+
+  it('monarch host breaks a tie the caterpillar and bee parts leave', () => {
+    const plain = {
+      ...F.butterflyMilkweed,
+      slug: 'a-plain',
+      wildlife: { ...F.butterflyMilkweed.wildlife, monarchHost: false },
+    };
+    expect(byValue([plain, F.butterflyMilkweed])).toEqual([F.butterflyMilkweed.slug, plain.slug]);
   });
 });

@@ -120,6 +120,28 @@ export function beeWords(
   return 'Flowers for bees and other pollinators.';
 }
 
+const HOST_LEVEL_RANK: Record<HostLevel, number> = { none: 0, some: 1, good: 2, top: 3 };
+
+/**
+ * Orders species by Homeground's several-part wildlife value, least first: caterpillar host value
+ * within the species' layer (a goldenrod's "among the best" equals an oak's), then bees (host of
+ * specialist bees, then flowers for bees), then monarch host, then food for birds. Each part is
+ * compared in turn, never summed into one number. Callers break ties (e.g. by name).
+ */
+export function compareWildlifeValue(a: Species, b: Species): number {
+  return (
+    HOST_LEVEL_RANK[hostLevelOf(a)] - HOST_LEVEL_RANK[hostLevelOf(b)] ||
+    beeRank(a) - beeRank(b) ||
+    Number(a.wildlife.monarchHost) - Number(b.wildlife.monarchHost) ||
+    Number(Boolean(a.wildlife.birds)) - Number(Boolean(b.wildlife.birds))
+  );
+}
+
+function beeRank(s: Species): number {
+  if (hostsSpecialistBees(s)) return 2;
+  return beeWords(s) === null ? 0 : 1;
+}
+
 export interface WildlifeSummary {
   caterpillars: string | null;
   bees: string | null;

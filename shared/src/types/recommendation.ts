@@ -30,6 +30,7 @@ export type ScorePartName =
   | 'bees'
   | 'availability'
   | 'seed-ease'
+  | 'garden-use'
   | 'fern'
   | 'ecoregion';
 
@@ -73,6 +74,12 @@ export interface Recommendation {
 }
 
 export const MAX_MIX_SIZE = 40;
+/**
+ * How many ranked species and near misses ("also consider") a recommendations answer lists, with
+ * their reasons: more than a page shows. The engine ranks every species, but builds reasons only
+ * for these.
+ */
+export const RECOMMENDATION_LIST_LIMITS = { ranked: 60, alsoConsider: 20 } as const;
 /** Most slugs one request may list (locks, exclusions, a saved mix): more than any mix holds. */
 export const MAX_LISTED_SLUGS = 60;
 

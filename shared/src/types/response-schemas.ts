@@ -231,6 +231,7 @@ const scorePartSchema = z.object({
     'bees',
     'availability',
     'seed-ease',
+    'garden-use',
     'fern',
     'ecoregion',
   ]),

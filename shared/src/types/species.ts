@@ -265,6 +265,7 @@ export const reconciliationSchema = z
       'wildlife.lepidopteraGenusCount',
       'cautions',
       'spreadHabit',
+      'moistureOptimum',
     ]),
     note: z.string().min(10).max(1000),
   })

@@ -81,8 +81,8 @@ export const species = {
     heightDesc: 'Tallest first',
     bloomAsc: 'Earliest bloom first',
     bloomDesc: 'Latest bloom first',
-    hostDesc: 'Most caterpillar hosts first',
-    hostAsc: 'Fewest caterpillar hosts first',
+    hostDesc: 'Most wildlife value first',
+    hostAsc: 'Least wildlife value first',
   },
   pager: {
     label: 'Result pages',

@@ -83,8 +83,8 @@ export const species = {
     heightDesc: 'Las más altas primero',
     bloomAsc: 'Las que florecen antes primero',
     bloomDesc: 'Las que florecen después primero',
-    hostDesc: 'Más hospederas de orugas primero',
-    hostAsc: 'Menos hospederas de orugas primero',
+    hostDesc: 'Más valor para la fauna primero',
+    hostAsc: 'Menos valor para la fauna primero',
   },
   pager: {
     label: 'Páginas de resultados',

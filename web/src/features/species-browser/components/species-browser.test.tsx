@@ -120,6 +120,9 @@ describe('species browser', () => {
     await waitFor(() =>
       expect(screen.getByRole('columnheader', { name: /Wildlife value/ })).toHaveAttribute('aria-sort', 'descending'),
     );
+    // Homeground's own words for the order (its several-part wildlife value), not a host count.
+    expect(screen.getByRole('combobox', { name: 'Sort by' })).toHaveDisplayValue('Most wildlife value first');
+    expect(screen.queryByRole('option', { name: /caterpillar hosts/i })).toBeNull();
   });
 
   it('hides a column and remembers the choice', async () => {

@@ -9,7 +9,7 @@ import type { SortOrder, SpeciesSort } from '../utils/browser-state.js';
 import { NameCell, OptionalCell } from './species-cells.js';
 import { useTableStyles } from './species-table.styles.js';
 
-/** Columns the API can sort by, and the order a first click asks for (most host value first). */
+/** Columns the API can sort by, and the order a first click asks for (most wildlife value first). */
 const SORTABLE: Partial<Record<OptionalColumn | 'commonName', { sort: SpeciesSort; first: SortOrder }>> = {
   commonName: { sort: 'name', first: 'asc' },
   scientificName: { sort: 'scientificName', first: 'asc' },
@@ -18,7 +18,8 @@ const SORTABLE: Partial<Record<OptionalColumn | 'commonName', { sort: SpeciesSor
   hostValue: { sort: 'hostValue', first: 'desc' },
 };
 
-const NUMERIC: ReadonlySet<OptionalColumn> = new Set(['hostValue']);
+// Wildlife value is words, not a number, so no column is set as figures.
+const NUMERIC: ReadonlySet<OptionalColumn> = new Set<OptionalColumn>();
 
 export interface SpeciesTableProps {
   items: readonly SpeciesSummary[];

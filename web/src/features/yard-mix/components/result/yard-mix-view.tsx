@@ -1,7 +1,9 @@
-import { makeStyles, Spinner, tokens } from '@fluentui/react-components';
+import { Button, makeStyles, Spinner, tokens } from '@fluentui/react-components';
+import { Location20Regular } from '@fluentui/react-icons';
 import { STATE_NAMES, type StateCode, formatArea } from '@homeground/shared';
 import { useState, type ReactNode } from 'react';
 import { usePublicOrigin } from '../../../../api/system/system.queries.js';
+import { RouterButton } from '../../../../components/links/router-link.js';
 import { ContentCard } from '../../../../components/page/content-card.js';
 import { Heading } from '../../../../components/page/page-heading.js';
 import { EmptyState, ErrorState, LoadingState } from '../../../../components/states/index.js';
@@ -26,6 +28,7 @@ const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXL },
   head: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL },
   updating: { minHeight: 0 },
+  notCovered: { display: 'flex', flexDirection: 'column', alignItems: 'flex-start', gap: tokens.spacingVerticalM },
 });
 
 export interface YardMixViewProps {
@@ -64,7 +67,26 @@ export function YardMixView({
 
   if (query.isPending) return <LoadingState label="Working out your yard mix" />;
   if (mix && mix.palette.coverage && !mix.palette.coverage.covered) {
-    return <EmptyState title="Homeground does not cover this region yet">{mix.palette.coverage.message}</EmptyState>;
+    // The way on is another place, so the answer offers it: back to the ground step, yard answers kept.
+    const changeGround = onChangeGround ? (
+      <Button appearance="primary" icon={<Location20Regular />} onClick={onChangeGround}>
+        Change your ground
+      </Button>
+    ) : (
+      <RouterButton
+        appearance="primary"
+        icon={<Location20Regular />}
+        to={paths.findPlants.build({ plan, step: 'ground' })}
+      >
+        Change your ground
+      </RouterButton>
+    );
+    return (
+      <div className={styles.notCovered}>
+        <EmptyState title="Homeground does not cover this region yet">{mix.palette.coverage.message}</EmptyState>
+        <div data-print="hide">{changeGround}</div>
+      </div>
+    );
   }
   if (query.isError || !mix) {
     return (
