@@ -368,6 +368,28 @@ describe('the plant share (e2e, demo data)', () => {
       .post(`/api/waitlist-offers/${linkSecret(offer!.text, 'offers')}/claim`)
       .send({ slotId: slots[5].id })
       .expect(410);
+
+    // Wes cancels his last one: it is held for Juniper, next on the list, for two days; unclaimed, it goes back on offer.
+    await t.http.delete(`/api/reservations/${wesLink}`).expect(200);
+    const second = await mailTo(t, tokens.organiser, 'plant-share-waitlist-offer', 'juniper.okafor@example.org');
+    expect(second?.text).toMatch(/We hold them for you until/);
+    const juniperLink = linkSecret(second!.text, 'offers');
+    const held = (await t.http.get(`/api/waitlist-offers/${juniperLink}`).expect(200)).body;
+    const heldMs = Date.parse(held.heldUntil) - Date.now();
+    expect(heldMs).toBeGreaterThan(47 * 3600_000);
+    expect(heldMs).toBeLessThanOrEqual(48 * 3600_000);
+    const purge = t.app.get(SharePurgeService);
+    expect(await purge.expireOffers()).toBe(0);
+    jest.spyOn(t.app.get(Clock), 'now').mockReturnValue(new Date(Date.parse(held.heldUntil) + 60_000));
+    expect(await purge.expireOffers()).toBe(1);
+    await t.http.post(`/api/waitlist-offers/${juniperLink}/claim`).send({ slotId: slots[5].id }).expect(410);
+    jest.restoreAllMocks();
+    expect((await t.http.get(`/api/waitlist-offers/${juniperLink}`).expect(200)).body.status).toBe('expired');
+    const after = (await t.http.get(SHARE).set(bearer(tokens.organiser)).expect(200)).body;
+    expect(after.stock.find((s: { speciesSlug: string }) => s.speciesSlug === 'packera-aurea')).toMatchObject({
+      remaining: 1,
+      waitlisted: 0,
+    });
   });
 
   it('releases the plants of a no-show: to the waitlist first, the rest back on offer', async () => {
@@ -468,9 +490,21 @@ describe('the plant share (e2e, demo data)', () => {
         expect({ what, role, status: res.status }).toEqual({ what, role, status: expected });
       }
     }
-    // The public routes need no account, and show no one's name or e-mail.
-    const open = await t.http.get(PUBLIC).expect(200);
-    expect(JSON.stringify(open.body)).not.toMatch(/@/);
+    // The public routes need no account and answer everyone alike, showing no one's name or e-mail;
+    // a reservation or an offer opens by its private link only, whoever asks.
+    for (const token of [undefined, ...Object.values(tokens)]) {
+      const auth = token ? bearer(token) : {};
+      const open = await t.http.get(PUBLIC).set(auth).expect(200);
+      expect(JSON.stringify(open.body)).not.toMatch(/@/);
+      await t.http
+        .get(`/api/reservations/${'C'.repeat(43)}`)
+        .set(auth)
+        .expect(403);
+      await t.http
+        .get(`/api/waitlist-offers/${'C'.repeat(43)}`)
+        .set(auth)
+        .expect(403);
+    }
     // E-mails of takers: in the organiser's pickup list only.
     const list = await t.http
       .get(`${SHARE}/slots/${slots[0].id}/pickup-list`)

@@ -119,7 +119,7 @@ export class PlantShareService {
     this.db.atomically(() => {
       this.db.run(
         `UPDATE plant_shares SET share_date = ?, place_name = ?, place_address = ?, place_directions = ?,
-           per_species_limit = ?, total_limit = ?, retention_days = ?, updated_at = datetime('now') WHERE id = ?`,
+           per_species_limit = ?, total_limit = ?, retention_days = ?, updated_at = ? WHERE id = ?`,
         req.date ?? share.share_date,
         req.place?.name ?? share.place_name,
         req.place?.address ?? share.place_address,
@@ -127,6 +127,7 @@ export class PlantShareService {
         req.limits?.perSpecies ?? share.per_species_limit,
         req.limits?.total ?? share.total_limit,
         req.retentionDays ?? share.retention_days,
+        now.toISOString(),
         share.id,
       );
     });
@@ -182,6 +183,7 @@ export class PlantShareService {
     const group = await this.managed(slug, user);
     const share = this.views.requireShare(group);
     this.ctx.assertKnown(req.stock.map((l, i) => ({ field: `stock.${i}.speciesSlug`, slug: l.speciesSlug })));
+    const nowMs = this.clock.now().getTime();
     const offers = this.db.atomically(() => {
       const made: WaitlistOfferMade[] = [];
       for (const l of req.stock) {
@@ -199,7 +201,7 @@ export class PlantShareService {
             share.id,
             l.speciesSlug,
           );
-          made.push(...this.ledger.release(share.id, l.speciesSlug, delta).offers);
+          made.push(...this.ledger.release(share.id, l.speciesSlug, delta, nowMs).offers);
         } else if (delta < 0) {
           this.db.run(
             'UPDATE share_stock SET offered = offered + ?, remaining = ? WHERE share_id = ? AND slug = ?',
@@ -221,6 +223,7 @@ export class PlantShareService {
     const group = await this.managed(slug, user);
     const share = this.views.requireShare(group);
     this.ctx.assertKnown(req.lines.map((l, i) => ({ field: `lines.${i}.speciesSlug`, slug: l.speciesSlug })));
+    const nowMs = this.clock.now().getTime();
     const offers = this.db.atomically(() =>
       req.lines.flatMap((l) => {
         this.ledger.ensureStockRow(share.id, l.speciesSlug);
@@ -230,7 +233,7 @@ export class PlantShareService {
           share.id,
           l.speciesSlug,
         );
-        return this.ledger.release(share.id, l.speciesSlug, l.count).offers;
+        return this.ledger.release(share.id, l.speciesSlug, l.count, nowMs).offers;
       }),
     );
     await this.views.sendOffers(group, share, offers);
@@ -242,8 +245,9 @@ export class PlantShareService {
     const share = this.views.requireShare(group);
     this.db.atomically(() =>
       this.db.run(
-        `UPDATE plant_shares SET status = ?, updated_at = datetime('now') WHERE id = ?`,
+        `UPDATE plant_shares SET status = ?, updated_at = ? WHERE id = ?`,
         req.status,
+        this.clock.now().toISOString(),
         share.id,
       ),
     );
@@ -290,6 +294,7 @@ export class PlantShareService {
   ): Promise<CheckInResult> {
     const group = await this.managed(slug, user);
     const share = this.views.requireShare(group);
+    const nowMs = this.clock.now().getTime();
     const { row, released } = this.db.atomically(() => {
       const r = this.db.get<ReservationRow>(
         'SELECT * FROM share_reservations WHERE id = ? AND share_id = ?',
@@ -307,7 +312,7 @@ export class PlantShareService {
       const out: Released[] = [];
       if (req.outcome === 'no-show') {
         this.ledger.freeSlot(r.slot_id);
-        for (const l of this.linesOfOne(r.id)) out.push(this.ledger.release(share.id, l.slug, l.count));
+        for (const l of this.linesOfOne(r.id)) out.push(this.ledger.release(share.id, l.slug, l.count, nowMs));
       }
       return { row: { ...r, status: req.outcome }, released: out };
     });

@@ -200,7 +200,7 @@ export class ReservationsService {
         this.takeOrExplain(share, group, more, (_l, i) => `lines.${more[i].index}.count`);
         for (const [slug, had] of old) {
           const fewer = had - (want.get(slug) ?? 0);
-          if (fewer > 0) out.push(this.ledger.release(share.id, slug, fewer));
+          if (fewer > 0) out.push(this.ledger.release(share.id, slug, fewer, now.getTime()));
         }
         this.db.run('DELETE FROM share_reservation_lines WHERE reservation_id = ?', row.id);
         this.insertLines(row.id, req.lines);
@@ -236,7 +236,7 @@ export class ReservationsService {
       );
       if (changed !== 1) throw new ConflictException(`This reservation is ${row.status}: there is nothing to cancel.`);
       this.ledger.freeSlot(row.slot_id);
-      return this.linesOf(row.id).map((l) => this.ledger.release(share.id, l.slug, l.count));
+      return this.linesOf(row.id).map((l) => this.ledger.release(share.id, l.slug, l.count, now.getTime()));
     });
     await this.views.sendOffers(
       group,
@@ -310,7 +310,13 @@ export class ReservationsService {
       speciesSlug: entry.slug,
       ...this.views.names(entry.slug),
       count: entry.held,
-      status: entry.status === 'claimed' ? 'claimed' : 'offered',
+      status:
+        entry.status === 'offered' && (entry.offered_until ?? 0) <= nowMs
+          ? 'expired'
+          : entry.status === 'waiting'
+            ? 'offered'
+            : entry.status,
+      heldUntil: entry.offered_until === null ? null : new Date(entry.offered_until).toISOString(),
       joinsReservation: joins,
       share: {
         groupSlug: group.slug,
@@ -343,7 +349,9 @@ export class ReservationsService {
    */
   async claimOffer(token: string, req: ClaimOfferRequest): Promise<ReservationCreated> {
     const entry = this.offerEntry(token);
-    if (entry.status !== 'offered') throw new GoneException('These plants have been claimed already.');
+    if (entry.status === 'claimed') throw new GoneException('These plants have been claimed already.');
+    if (entry.status !== 'offered' || (entry.offered_until ?? 0) <= this.clock.now().getTime())
+      throw new GoneException('This offer has passed: the plants went to the next household on the list.');
     const share = this.views.shareById(entry.share_id);
     const group = await this.views.groupById(share.group_id);
     assertOpen(share);

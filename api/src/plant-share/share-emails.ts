@@ -63,14 +63,24 @@ export function waitlistOfferEmail(input: {
   groupName: string;
   commonName: string;
   count: number;
+  heldUntil: string;
   place: SharePlace;
   link: string;
 }): { subject: string; text: string; html: string } {
+  const until = new Date(input.heldUntil).toLocaleString('en-US', {
+    weekday: 'short',
+    day: 'numeric',
+    month: 'short',
+    hour: 'numeric',
+    minute: '2-digit',
+    timeZone: 'UTC',
+    timeZoneName: 'short',
+  });
   const { text, html } = renderEmail({
     greeting: `Hello ${input.name},`,
     paragraphs: [
       `Good news: ${input.count} × ${input.commonName} came free at the ${input.groupName} plant share, and we are holding ${input.count === 1 ? 'it' : 'them'} for you because you were next on the waitlist.`,
-      `Open your private link to choose a pickup slot at ${placeWords(input.place)}. If you no longer want them, simply ignore this e-mail.`,
+      `Open your private link to choose a pickup slot at ${placeWords(input.place)}. We hold them for you until ${until}; after that they go to the next household on the list. If you no longer want them, simply ignore this e-mail.`,
     ],
     action: { label: 'Choose your pickup slot', url: input.link },
     footer: `You got this e-mail because you joined the waitlist of ${input.groupName}'s plant share. Your name and e-mail are deleted after the share.`,

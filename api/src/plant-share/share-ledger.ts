@@ -4,6 +4,9 @@ import { ShareDb } from './share-db.js';
 import type { WaitlistRow } from './share-rows.js';
 import { newToken } from './share-tokens.js';
 
+/** How long plants offered to a waitlisted household are held for them (Homeground's rule: two days to answer an e-mail). */
+export const OFFER_HOLD_MS = 48 * 60 * 60 * 1000;
+
 /** Plants offered to a waitlisted household, with the secret of the link that claims them (for the e-mail). */
 export interface WaitlistOfferMade {
   entryId: string;
@@ -12,6 +15,7 @@ export interface WaitlistOfferMade {
   name: string | null;
   email: string | null;
   token: string;
+  heldUntil: string;
 }
 
 /** Where released plants went. */
@@ -64,7 +68,7 @@ export class ShareLedger {
    * species' waitlist are offered them first, in the order they joined, and the plants are held for
    * them; what is left goes back on offer.
    */
-  release(shareId: string, slug: string, n: number): Released {
+  release(shareId: string, slug: string, n: number, nowMs: number): Released {
     const offers: WaitlistOfferMade[] = [];
     let left = n;
     if (left > 0) {
@@ -79,13 +83,16 @@ export class ShareLedger {
         const hold = Math.min(left, w.count);
         const { token, hash } = newToken();
         const changed = this.db.run(
-          `UPDATE share_waitlist SET held = ?, status = 'offered', token_hash = ? WHERE id = ? AND status = 'waiting'`,
+          `UPDATE share_waitlist SET held = ?, status = 'offered', token_hash = ?, offered_until = ?
+           WHERE id = ? AND status = 'waiting'`,
           hold,
           hash,
+          nowMs + OFFER_HOLD_MS,
           w.id,
         );
         if (changed !== 1) continue;
-        offers.push({ entryId: w.id, slug, count: hold, name: w.name, email: w.email, token });
+        const heldUntil = new Date(nowMs + OFFER_HOLD_MS).toISOString();
+        offers.push({ entryId: w.id, slug, count: hold, name: w.name, email: w.email, token, heldUntil });
         left -= hold;
       }
     }
@@ -98,6 +105,22 @@ export class ShareLedger {
         slug,
       );
     return { slug, toWaitlist, toStock: left, offers };
+  }
+
+  /**
+   * Offers not taken up in time move on: the plants they held are released again, to the next
+   * household on the list or back on offer. Answers the new offers made, for their e-mails.
+   */
+  expireOffers(nowMs: number): { shareId: string; offers: WaitlistOfferMade[] }[] {
+    const stale = this.db.all<WaitlistRow>(
+      `SELECT * FROM share_waitlist WHERE status = 'offered' AND offered_until <= ? ORDER BY seq`,
+      nowMs,
+    );
+    return stale.flatMap((w) => {
+      if (this.db.run(`UPDATE share_waitlist SET status = 'expired' WHERE id = ? AND status = 'offered'`, w.id) !== 1)
+        return [];
+      return [{ shareId: w.share_id, offers: this.release(w.share_id, w.slug, w.held, nowMs).offers }];
+    });
   }
 
   /** Adds a stock row for a species not yet on offer (0 plants), so moves can find it. */

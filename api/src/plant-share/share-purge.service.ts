@@ -2,7 +2,8 @@ import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy }
 import { MailService } from '../mail/mail.service.js';
 import { Clock } from './clock.js';
 import { ShareDb } from './share-db.js';
-import { addDays } from './share-views.js';
+import { ShareLedger } from './share-ledger.js';
+import { addDays, ShareViews } from './share-views.js';
 
 /** How often the purge runs after the one at start: hourly is well inside a retention counted in days. */
 export const PURGE_INTERVAL_MS = 60 * 60 * 1000;
@@ -11,7 +12,8 @@ export const PURGE_INTERVAL_MS = 60 * 60 * 1000;
  * Keeps takers' names and e-mails no longer than the share's retention: once `retention_days` have
  * passed after the share date, reservations and waitlist entries lose their name and e-mail, their
  * ZIP is cut to its 3-digit area and their private links stop working; the share's e-mails leave the
- * local outbox. Counts for the report stay. Runs at start and then every hour.
+ * local outbox. Counts for the report stay. Runs at start and then every hour, together with moving
+ * on waitlist offers nobody took up in time.
  */
 @Injectable()
 export class SharePurgeService implements OnApplicationBootstrap, OnModuleDestroy {
@@ -22,18 +24,36 @@ export class SharePurgeService implements OnApplicationBootstrap, OnModuleDestro
     private readonly db: ShareDb,
     private readonly mail: MailService,
     private readonly clock: Clock,
+    private readonly ledger: ShareLedger,
+    private readonly views: ShareViews,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
-    await this.purge();
+    await this.run();
     this.timer = setInterval(() => {
-      this.purge().catch((e: unknown) => this.logger.error(`Purge failed: ${String(e)}`));
+      this.run().catch((e: unknown) => this.logger.error(`Purge failed: ${String(e)}`));
     }, PURGE_INTERVAL_MS);
     this.timer.unref();
   }
 
   onModuleDestroy(): void {
     if (this.timer) clearInterval(this.timer);
+  }
+
+  private async run(): Promise<void> {
+    await this.expireOffers();
+    await this.purge();
+  }
+
+  /** Waitlist offers not taken up in time move on to the next household, or back on offer. */
+  async expireOffers(): Promise<number> {
+    const moved = this.db.atomically(() => this.ledger.expireOffers(this.clock.now().getTime()));
+    for (const m of moved) {
+      if (m.offers.length === 0) continue;
+      const share = this.views.shareById(m.shareId);
+      await this.views.sendOffers(await this.views.groupById(share.group_id), share, m.offers);
+    }
+    return moved.length;
   }
 
   /** Purges every share whose retention has run out by now; answers how many shares were purged. */

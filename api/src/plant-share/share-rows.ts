@@ -62,7 +62,9 @@ export interface WaitlistRow {
   slug: string;
   count: number;
   held: number;
-  status: 'waiting' | 'offered' | 'claimed';
+  status: 'waiting' | 'offered' | 'claimed' | 'expired';
+  /** While offered: when the hold ends (ms since 1970), after which the plants move on down the list. */
+  offered_until: number | null;
   name: string | null;
   email: string | null;
   zip: string;

@@ -264,6 +264,7 @@ export class ShareViews {
         groupName: group.name,
         commonName: this.names(o.slug).commonName,
         count: o.count,
+        heldUntil: o.heldUntil,
         place: this.place(share),
         link: `${this.config.publicUrl}/plant-share/offers/${o.token}`,
       });

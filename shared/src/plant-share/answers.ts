@@ -486,7 +486,10 @@ export interface WaitlistOfferView {
   commonName: string;
   scientificName: string;
   count: number;
-  status: 'offered' | 'claimed';
+  /** `expired`: not claimed in time, the plants went on to the next household. */
+  status: 'offered' | 'claimed' | 'expired';
+  /** When the hold ends. */
+  heldUntil: string | null;
   /** True when the household has a reservation already: the plants join it and no slot is needed. */
   joinsReservation: boolean;
   share: { groupSlug: string; groupName: string; date: string; place: SharePlace; status: ShareStatus };
@@ -498,7 +501,8 @@ export const waitlistOfferViewSchema = z.object({
   commonName: z.string(),
   scientificName: z.string(),
   count: z.number().int(),
-  status: z.enum(['offered', 'claimed']),
+  status: z.enum(['offered', 'claimed', 'expired']),
+  heldUntil: isoDateTime.nullable(),
   joinsReservation: z.boolean(),
   share: z.object({
     groupSlug: z.string(),
