@@ -85,6 +85,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             page(paths.reservation.path, async () => ({
               Component: (await import('../routes/reservation.js')).ReservationRoute,
             })),
+            page(paths.waitlistOffer.path, async () => ({
+              Component: (await import('../routes/waitlist-offer.js')).WaitlistOfferRoute,
+            })),
             page('*', async () => ({ Component: (await import('../routes/not-found.js')).NotFoundRoute })),
           ],
         },

@@ -74,6 +74,11 @@ export const paths = {
     path: '/share/:groupSlug',
     build: (groupSlug: string) => `/share/${encodeURIComponent(groupSlug)}`,
   },
+  /** Plants held for a household on the waitlist, opened by the link in the offer e-mail (the API writes it). */
+  waitlistOffer: {
+    path: '/plant-share/offers/:token',
+    build: (token: string) => `/plant-share/offers/${encodeURIComponent(token)}`,
+  },
   /** A reservation, opened by the private link in its confirmation e-mail (the API writes that link). */
   reservation: {
     path: '/plant-share/reservations/:token',

@@ -1,6 +1,7 @@
 import type {
   AddStockRequest,
   ChangeReservationRequest,
+  ClaimOfferRequest,
   CheckInRequest,
   CheckInResult,
   EditShareRequest,
@@ -17,6 +18,7 @@ import type {
   Sun,
   TakerReservation,
   WaitlistJoined,
+  WaitlistOfferView,
   WaitlistRequest,
   WalkUpGift,
   WalkUpRequest,
@@ -61,6 +63,16 @@ export function changeReservation(token: string, body: ChangeReservationRequest)
 /** Cancels by the private link; the plants go to the waitlist or back to the share. */
 export function cancelReservation(token: string): Promise<TakerReservation> {
   return httpClient.delete<TakerReservation>(reservationPath(token), { token: null });
+}
+
+/** The plants a waitlist offer holds for a household, opened by the link in its e-mail. */
+export function getWaitlistOffer(token: string, signal?: AbortSignal): Promise<WaitlistOfferView> {
+  return httpClient.get<WaitlistOfferView>(`/api/waitlist-offers/${enc(token)}`, { signal, token: null });
+}
+
+/** Takes the held plants with a pickup slot (ignored when they join the household's reservation). */
+export function claimWaitlistOffer(token: string, body: ClaimOfferRequest): Promise<ReservationCreated> {
+  return httpClient.post<ReservationCreated>(`/api/waitlist-offers/${enc(token)}/claim`, body, { token: null });
 }
 
 // ---- organisers ----

@@ -2,6 +2,7 @@ import type {
   AddStockRequest,
   ChangeReservationRequest,
   CheckInRequest,
+  ClaimOfferRequest,
   EditShareRequest,
   OpenShareRequest,
   PlantShare,
@@ -17,6 +18,7 @@ import {
   cancelReservation,
   changeReservation,
   checkIn,
+  claimWaitlistOffer,
   editShare,
   joinWaitlist,
   openShare,
@@ -106,5 +108,17 @@ export function useWalkUpMutation(groupSlug: string) {
   return useMutation({
     mutationFn: (body: WalkUpRequest) => recordWalkUp(groupSlug, body),
     onSettled: () => queryClient.invalidateQueries({ queryKey: plantShareKeys.group(groupSlug) }),
+  });
+}
+
+/** Takes a waitlist offer's plants; the offer and the share's counts are read again. */
+export function useClaimOfferMutation(token: string, groupSlug: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: ClaimOfferRequest) => claimWaitlistOffer(token, body),
+    onSettled: () => {
+      void queryClient.invalidateQueries({ queryKey: plantShareKeys.offer(token) });
+      void queryClient.invalidateQueries({ queryKey: plantShareKeys.group(groupSlug) });
+    },
   });
 }

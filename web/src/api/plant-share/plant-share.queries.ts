@@ -5,6 +5,7 @@ import {
   getReservation,
   getShare,
   getShareReport,
+  getWaitlistOffer,
   type Yard,
 } from './plant-share.api.js';
 
@@ -20,7 +21,15 @@ export const plantShareKeys = {
   pickupList: (groupSlug: string, slotId: string) => [...plantShareKeys.group(groupSlug), 'pickup', slotId] as const,
   report: (groupSlug: string) => [...plantShareKeys.group(groupSlug), 'report'] as const,
   reservation: (token: string) => [...plantShareKeys.all, 'reservation', token] as const,
+  offer: (token: string) => [...plantShareKeys.all, 'offer', token] as const,
 };
+
+export function waitlistOfferQueryOptions(token: string) {
+  return queryOptions({
+    queryKey: plantShareKeys.offer(token),
+    queryFn: ({ signal }) => getWaitlistOffer(token, signal),
+  });
+}
 
 export function publicShareQueryOptions(groupSlug: string, yard: Yard = null) {
   return queryOptions({

@@ -81,7 +81,7 @@ export function WalkUpCard({ share }: { share: PlantShare }) {
         </MessageBar>
       ) : null}
       <div className={styles.actions}>
-        <Button className={styles.big} appearance="primary" onClick={record} disabled={walkUp.isPending}>
+        <Button className={styles.big} onClick={record} disabled={walkUp.isPending}>
           {W.walkUpRecord}
         </Button>
       </div>

@@ -97,5 +97,15 @@ export const TAKER_WORDS = {
     'Growing groups give their native plants away each spring. Choose your group to see what is available and reserve a pickup slot; no account needed.',
   directoryEmpty: 'No growing group has a plant share yet.',
   directoryLabel: 'Growing groups',
+  offerTitle: 'Plants held for you',
+  offerLoading: 'Loading your offer',
+  offerFailed: 'Your offer did not load.',
+  offerBadLink: 'This link does not open an offer. Use the link in your e-mail; offers are held for a short time only.',
+  offerLead: (count: number, name: string, group: string, date: string) =>
+    `${count} × ${name} came free at ${group}’s plant share on ${date}, and they are held for you.`,
+  offerJoins: 'They join the reservation you have, at its pickup slot.',
+  offerClaim: 'Take these plants',
+  offerClaiming: 'Taking them…',
+  offerClaimed: 'You took these plants already. The confirmation e-mail has your private link.',
   somethingWrong: 'Something went wrong. Try again.',
 } as const;

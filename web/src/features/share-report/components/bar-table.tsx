@@ -30,6 +30,8 @@ const useStyles = makeStyles({
     top: '-3px',
     bottom: '-3px',
     width: '2px',
+    // Centred on its value, so a target at 100% stays inside the track.
+    marginLeft: '-1px',
     backgroundColor: tokens.colorPaletteMarigoldBorderActive,
   },
   words: { fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground2 },

@@ -34,7 +34,7 @@ const useStyles = makeStyles({
   label: { color: tokens.colorNeutralForeground2 },
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalXS },
   lead: { marginTop: 0, maxWidth: '68ch' },
-  actions: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalM },
+  actions: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalM, marginTop: tokens.spacingVerticalL },
 });
 
 /** The season report for the group's organisers: figures, charts as tables with bars, and the CSV. */

@@ -4,7 +4,7 @@
  */
 export const REPORT_WORDS = {
   title: (year: number) => `Season report ${year}`,
-  lead: (groupName: string, date: string) => `What ${groupName}’s plant share on ${date} gave, in counts only.`,
+  lead: (groupName: string, date: string) => `What the plant share of ${groupName} on ${date} gave, in counts only.`,
   loading: 'Loading the season report',
   loadFailed: 'The season report did not load.',
   noShare: 'There is no plant share to report on yet. Open one on the Plant share page first.',
