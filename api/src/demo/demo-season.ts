@@ -30,6 +30,6 @@ export const DEMO_TARGETS: SeasonTarget[] = [
   { slug: 'monarda-fistulosa', targetPlants: 50 },
   { slug: 'solidago-speciosa', targetPlants: 50 },
   { slug: 'viola-canadensis', targetPlants: 50 },
-  { slug: 'schizachyrium-scoparium', targetPlants: 50 },
   { slug: 'packera-aurea', targetPlants: 50 },
+  { slug: 'helianthus-occidentalis', targetPlants: 50 },
 ];
