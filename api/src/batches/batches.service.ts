@@ -4,6 +4,7 @@ import {
   logEntryProblems,
   logTotals,
   proposeBatchSplit,
+  sowMoreNudge,
   supplyList,
   unitsFor,
   UNIT_WORDS,
@@ -266,6 +267,21 @@ export class BatchesService {
         scientificName: this.ctx.get(s)?.scientificName ?? '',
       }),
       today,
+      (slug, row) => {
+        const species = this.ctx.get(slug);
+        const first = batches.find((b) => b.slug === slug);
+        if (!species || !first) return null;
+        return sowMoreNudge({
+          species,
+          method: first.method,
+          ...row,
+          germinationRatePct: first.germinationRatePct,
+          lossFactor: c.season.lossFactor,
+          lastFrost: c.season.lastFrost,
+          plantShareDate: c.season.plantShareDate,
+          today,
+        });
+      },
     );
   }
 
