@@ -1,6 +1,7 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
+  batchesToIcs,
   logEntryProblems,
   logTotals,
   proposeBatchSplit,
@@ -215,6 +216,13 @@ export class BatchesService {
         group: c.role === 'organiser' ? supplies(batches) : null,
       },
     };
+  }
+
+  /** The caller's own batches as iCalendar (a grower's, or an organiser's who also grows). */
+  async myBatchesIcs(slug: string, user: AuthenticatedUser, today: string): Promise<string> {
+    const c = await this.growerOrOrganiser(slug, user);
+    const mine = await this.batchesOf(slug, user, c, today, user.id);
+    return batchesToIcs(mine, { today, planId: `batches-${c.season.year}` });
   }
 
   async get(slug: string, user: AuthenticatedUser, id: string, today: string): Promise<Batch> {

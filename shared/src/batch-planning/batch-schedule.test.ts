@@ -4,6 +4,7 @@ import { seasonSpecies as sp } from '../season-planning/season-fixtures.js';
 import { batchSchedule } from './batch-schedule.js';
 import { frostWarning } from './frost-watch.js';
 import { sowMoreNudge } from './sow-more.js';
+import { batchesToIcs } from './batches-ics.js';
 
 // Season: last frost 2027-05-10, plant share 2027-06-12 (the invented demo season); planned well
 // ahead (today 2026-09-01) so no step is a late start.
@@ -91,5 +92,20 @@ describe('sowMoreNudge', () => {
     expect(sowMoreNudge({ ...base, method: 'indoor-lights', shortBy: 0, expected: 50, targetPlants: 50 })).toBeNull();
     const late = { ...base, today: '2027-05-20' };
     expect(sowMoreNudge({ ...late, method: 'indoor-lights', shortBy: 10, expected: 40, targetPlants: 50 })).toBeNull();
+  });
+});
+
+describe('batchesToIcs', () => {
+  it('writes each step as an all-day event with a stable UID (RFC 5545 §3.6.1, §3.8.4.7)', () => {
+    const s = batchSchedule({ ...season, species: milkweed, method: 'indoor-lights' });
+    const ics = batchesToIcs(
+      [{ slug: milkweed.slug, commonName: 'Swamp milkweed', method: 'indoor-lights', steps: s.steps, warnings: [] }],
+      { today: '2026-09-01', planId: 'my-batches' },
+    );
+    expect(ics.startsWith('BEGIN:VCALENDAR\r\nVERSION:2.0\r\n')).toBe(true);
+    expect(ics.match(/BEGIN:VEVENT/g)).toHaveLength(s.steps.length);
+    expect(ics).toContain('UID:sow.asclepias-incarnata.indoor-lights.my-batches@homeground');
+    expect(ics).toContain(`DTSTART;VALUE=DATE:${s.sowDate.replace(/-/g, '')}`);
+    expect(ics).toContain('SUMMARY:Swamp milkweed: Sow');
   });
 });

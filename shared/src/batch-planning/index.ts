@@ -7,3 +7,4 @@ export * from './ready-forecast.js';
 export * from './supply-list.js';
 export * from './frost-watch.js';
 export * from './sow-more.js';
+export * from './batches-ics.js';
