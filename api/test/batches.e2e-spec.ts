@@ -173,6 +173,17 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
         .expect(log);
     });
 
+    it("my-batches.ics: a grower's own batches as iCalendar (RFC 5545), members 403", async () => {
+      const res = await get(`${SEASON}/my-batches.ics`, 'amara').expect(200);
+      expect(res.headers['content-type']).toMatch(/^text\/calendar/);
+      expect(res.text.startsWith('BEGIN:VCALENDAR\r\n')).toBe(true);
+      const own = (await get(`${SEASON}/batches`, 'amara').expect(200)).body.batches as BatchAnswer[];
+      const steps = own.reduce((a, b) => a + b.steps.length, 0);
+      expect(res.text.match(/BEGIN:VEVENT/g)).toHaveLength(steps);
+      expect(res.text).not.toMatch(/Theo|Juniper/);
+      await get(`${SEASON}/my-batches.ics`, 'member').expect(403);
+    });
+
     it('answers 401 to anyone not signed in, on every route', async () => {
       const batch = await batchOf('theo');
       await t.http.get(`${SEASON}/growers`).expect(401);
@@ -183,6 +194,7 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       await t.http.get(`${SEASON}/batches/${batch.id}`).expect(401);
       await t.http.post(`${SEASON}/batches/${batch.id}/log`).send({}).expect(401);
       await t.http.get(`${SEASON}/progress`).expect(401);
+      await t.http.get(`${SEASON}/my-batches.ics`).expect(401);
     });
   });
 
@@ -256,6 +268,8 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       expect(forecast.high).toBeGreaterThanOrEqual(35);
       expect(forecast.low).toBeLessThanOrEqual(forecast.expected);
       expect(progress.method.join(' ')).toMatch(/usual losses/);
+      // On track (66 expected for 50 wanted), so no nudge to sow more.
+      expect(row.nudge).toBeNull();
       expect(row.forecast.expected).toBeGreaterThanOrEqual(forecast.expected);
 
       // The plant share's starting stock: plants logged ready, per species.

@@ -1,4 +1,4 @@
-import { Controller, Get, HttpCode, Post, Put } from '@nestjs/common';
+import { Controller, Get, Header, HttpCode, Post, Put } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   batchSchema,
@@ -26,7 +26,7 @@ import {
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
+import { FileResponse, ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { BatchesService } from './batches.service.js';
 
 /** The API reads the clock; shared code never does. */
@@ -95,6 +95,18 @@ export class BatchesController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<SeasonBatches> {
     return this.batches.list(slug, user, today());
+  }
+
+  /** The caller's own batches as an iCalendar file, each step an all-day event. */
+  @Get('my-batches.ics')
+  @FileResponse('text/calendar', "The caller's batches as iCalendar")
+  @Header('Content-Type', 'text/calendar; charset=utf-8')
+  @Header('Content-Disposition', 'attachment; filename="homeground-my-batches.ics"')
+  myBatchesIcs(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<string> {
+    return this.batches.myBatchesIcs(slug, user, today());
   }
 
   @Get('batches/:id')

@@ -1,9 +1,11 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
+  batchesToIcs,
   logEntryProblems,
   logTotals,
   proposeBatchSplit,
+  sowMoreNudge,
   supplyList,
   unitsFor,
   UNIT_WORDS,
@@ -216,6 +218,13 @@ export class BatchesService {
     };
   }
 
+  /** The caller's own batches as iCalendar (a grower's, or an organiser's who also grows). */
+  async myBatchesIcs(slug: string, user: AuthenticatedUser, today: string): Promise<string> {
+    const c = await this.growerOrOrganiser(slug, user);
+    const mine = await this.batchesOf(slug, user, c, today, user.id);
+    return batchesToIcs(mine, { today, planId: `batches-${c.season.year}` });
+  }
+
   async get(slug: string, user: AuthenticatedUser, id: string, today: string): Promise<Batch> {
     const c = await this.growerOrOrganiser(slug, user);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
@@ -266,6 +275,21 @@ export class BatchesService {
         scientificName: this.ctx.get(s)?.scientificName ?? '',
       }),
       today,
+      (slug, row) => {
+        const species = this.ctx.get(slug);
+        const first = batches.find((b) => b.slug === slug);
+        if (!species || !first) return null;
+        return sowMoreNudge({
+          species,
+          method: first.method,
+          ...row,
+          germinationRatePct: first.germinationRatePct,
+          lossFactor: c.season.lossFactor,
+          lastFrost: c.season.lastFrost,
+          plantShareDate: c.season.plantShareDate,
+          today,
+        });
+      },
     );
   }
 

@@ -21,12 +21,14 @@ export function seasonProgress(
   batches: readonly Batch[],
   names: (slug: string) => { commonName: string; scientificName: string },
   today: string,
+  nudge: (slug: string, row: { shortBy: number; expected: number; targetPlants: number }) => string | null,
 ): SeasonProgress {
   const slugs = [...new Set([...c.targets.map((t) => t.slug), ...batches.map((b) => b.slug)])];
   const species = slugs.map((slug) => {
     const own = batches.filter((b) => b.slug === slug);
     const targetPlants = c.targets.find((t) => t.slug === slug)?.targetPlants ?? 0;
     const forecast = sumForecasts(own.map((b) => b.forecast));
+    const shortBy = Math.max(0, targetPlants - forecast.expected);
     return {
       slug,
       ...names(slug),
@@ -34,7 +36,8 @@ export function seasonProgress(
       plannedPlants: own.reduce((a, b) => a + b.plants, 0),
       ...countsOf(own),
       forecast,
-      shortBy: Math.max(0, targetPlants - forecast.expected),
+      shortBy,
+      nudge: nudge(slug, { shortBy, expected: forecast.expected, targetPlants }),
     };
   });
   const growerIds = [...new Set(batches.map((b) => b.growerId))];

@@ -3,6 +3,8 @@ import { daysBetween } from '../sowing-calendar/calendar-date.js';
 import { seasonSpecies as sp } from '../season-planning/season-fixtures.js';
 import { batchSchedule } from './batch-schedule.js';
 import { frostWarning } from './frost-watch.js';
+import { sowMoreNudge } from './sow-more.js';
+import { batchesToIcs } from './batches-ics.js';
 
 // Season: last frost 2027-05-10, plant share 2027-06-12 (the invented demo season); planned well
 // ahead (today 2026-09-01) so no step is a late start.
@@ -68,5 +70,42 @@ describe('frostWarning', () => {
     expect(
       frostWarning({ method: 'outdoor-pot-winter', lastFrost: '2027-05-10', today: '2027-05-10', seedlingsUp: false }),
     ).toBeNull();
+  });
+});
+
+describe('sowMoreNudge', () => {
+  const base = {
+    species: milkweed,
+    germinationRatePct: 70,
+    lossFactor: 0.2,
+    ...season,
+  };
+  it('says how many more seeds and containers, and by when, while there is time', () => {
+    // 30 short at 70 % germination and 20 % losses (common practice): 30 ÷ (0.7 × 0.8) = 53.6 → 54 seeds;
+    // 30 plants ÷ 10 per container (common practice) = 3 containers.
+    const words = sowMoreNudge({ ...base, method: 'winter-sowing', shortBy: 30, expected: 20, targetPlants: 50 });
+    expect(words).toMatch(
+      /^At this rate about 20 of 50 will be ready: sow about 54 more seeds \(3 more covered containers\), starting by 2027-\d\d-\d\d\.$/,
+    );
+  });
+  it('stays quiet when nothing is short or a new batch would miss the share', () => {
+    expect(sowMoreNudge({ ...base, method: 'indoor-lights', shortBy: 0, expected: 50, targetPlants: 50 })).toBeNull();
+    const late = { ...base, today: '2027-05-20' };
+    expect(sowMoreNudge({ ...late, method: 'indoor-lights', shortBy: 10, expected: 40, targetPlants: 50 })).toBeNull();
+  });
+});
+
+describe('batchesToIcs', () => {
+  it('writes each step as an all-day event with a stable UID (RFC 5545 §3.6.1, §3.8.4.7)', () => {
+    const s = batchSchedule({ ...season, species: milkweed, method: 'indoor-lights' });
+    const ics = batchesToIcs(
+      [{ slug: milkweed.slug, commonName: 'Swamp milkweed', method: 'indoor-lights', steps: s.steps, warnings: [] }],
+      { today: '2026-09-01', planId: 'my-batches' },
+    );
+    expect(ics.startsWith('BEGIN:VCALENDAR\r\nVERSION:2.0\r\n')).toBe(true);
+    expect(ics.match(/BEGIN:VEVENT/g)).toHaveLength(s.steps.length);
+    expect(ics).toContain('UID:sow.asclepias-incarnata.indoor-lights.my-batches@homeground');
+    expect(ics).toContain(`DTSTART;VALUE=DATE:${s.sowDate.replace(/-/g, '')}`);
+    expect(ics).toContain('SUMMARY:Swamp milkweed: Sow');
   });
 });

@@ -6,3 +6,5 @@ export * from './batch-log.js';
 export * from './ready-forecast.js';
 export * from './supply-list.js';
 export * from './frost-watch.js';
+export * from './sow-more.js';
+export * from './batches-ics.js';

@@ -164,6 +164,8 @@ export const seasonProgressSchema = z.object({
       forecast: z.object(range),
       /** Plants short of the target at the expected forecast (0 when on track). */
       shortBy: z.number(),
+      /** While there is time: how many more to sow and by when, in words; else null. */
+      nudge: z.string().nullable(),
     }),
   ),
   growers: z.array(

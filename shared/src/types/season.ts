@@ -145,3 +145,17 @@ export interface Season {
   targets: (SeasonTarget & { commonName: string; scientificName: string })[];
   updatedAt: string;
 }
+
+/**
+ * The season-dates form as the page sends it (every field text): the year stays the season's, the
+ * dates are checked by `seasonRequestSchema` so the form says what the API would.
+ */
+export const seasonDatesFormSchema = z
+  .object({
+    year: z.string().max(4),
+    lastFrost: z.string().max(10),
+    plantShareDate: z.string().max(10),
+  })
+  .strict()
+  .transform((f) => ({ ...f, year: Number(f.year) }))
+  .pipe(seasonRequestSchema);

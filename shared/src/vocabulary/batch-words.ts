@@ -138,7 +138,6 @@ export const HARDEN_OFF_HOW_TO = {
 export const BATCH_CAUTIONS: readonly string[] = [
   'Dry potting mix, soil-block mix and vermiculite are dusty: dampen them before you use them, and work outdoors or wear a dust mask.',
   'Wear gloves when handling potting mix and wash your hands afterwards.',
-  'Milkweed sap irritates eyes: keep it off your face and wash your hands after handling the plants.',
   'Keep seed stratifying in the refrigerator sealed and labelled, away from food and out of reach of children.',
 ];
 

@@ -47,3 +47,8 @@ export function postLogEntry(slug: string, batchId: string, body: LogEntryReques
 export function getProgress(slug: string, signal?: AbortSignal): Promise<SeasonProgress> {
   return httpClient.get<SeasonProgress>(`${seasonPath(slug)}/progress`, { signal });
 }
+
+/** The caller's own batches as an iCalendar file. */
+export function downloadMyBatchesIcs(slug: string): Promise<Blob> {
+  return httpClient.file(`${seasonPath(slug)}/my-batches.ics`);
+}

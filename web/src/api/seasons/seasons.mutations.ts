@@ -1,9 +1,10 @@
 import type { SeasonRequest, ShareListRequest, TargetsRequest } from '@homeground/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { proposeShareList, putSeason, putTargets } from './seasons.api.js';
+import { batchKeys } from '../batches/batches.queries.js';
 import { seasonKeys } from './seasons.queries.js';
 
-/** Saves the season's dates and settings; the season and its seed list refresh. */
+/** Saves the season's dates and settings; the season, its seed list and its batch dates refresh. */
 export function useSaveSeasonMutation(slug: string) {
   const queryClient = useQueryClient();
   return useMutation({
@@ -11,6 +12,7 @@ export function useSaveSeasonMutation(slug: string) {
     onSuccess: (season) => {
       queryClient.setQueryData(seasonKeys.detail(slug), season);
       void queryClient.invalidateQueries({ queryKey: seasonKeys.seedList(slug) });
+      void queryClient.invalidateQueries({ queryKey: batchKeys.season(slug) });
     },
   });
 }

@@ -1,5 +1,5 @@
 import { screen, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { apiError, type FakeRoutes } from '../../../testing/fake-api.js';
 import { juniperGrower, priyaMember } from '../../../testing/fixtures.js';
 import { renderApp } from '../../../testing/render-app.js';
@@ -139,6 +139,20 @@ describe('My batches', () => {
         { method: 'winter-sowing', capacity: 12 },
       ],
     });
+  });
+
+  it('downloads the batch dates as iCalendar with the sign-in token', async () => {
+    const createObjectURL = vi.fn(() => 'blob:my-batches');
+    // jsdom has no object URLs; a stand-in URL class keeps the real one untouched for other tests.
+    vi.stubGlobal('URL', Object.assign(class extends URL {}, { createObjectURL, revokeObjectURL: vi.fn() }));
+    const { user, api } = openMyBatches(amara, {
+      [`GET /api/groups/larkfield-commons-growers/season/my-batches.ics`]: { body: 'BEGIN:VCALENDAR' },
+    });
+    await user.click(await screen.findByRole('button', { name: 'Add the dates to my calendar (iCalendar)' }));
+    await vi.waitFor(() => expect(createObjectURL).toHaveBeenCalledTimes(1));
+    const call = api.callsTo('GET', '/api/groups/larkfield-commons-growers/season/my-batches.ics')[0];
+    expect(call.headers.authorization).toBe('Bearer token');
+    vi.unstubAllGlobals();
   });
 
   it('tells someone who is not a grower what the page is for, without asking for batches', async () => {

@@ -8,6 +8,7 @@ import { QueryState } from '../../../components/states/index.js';
 import { SupplyTable } from '../../../components/supplies/supply-table.js';
 import { localToday, MY_BATCHES_WORDS } from '../utils/my-batches-words.js';
 import { BatchCard } from './batch-card.js';
+import { CalendarDownload } from './calendar-download.js';
 import { GrowerSetupCard } from './grower-setup-card.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
@@ -40,6 +41,7 @@ function BatchList({ slug, answer }: { slug: string; answer: SeasonBatches }) {
   const mine = answer.supplies.byGrower[0];
   return (
     <div className={styles.stack}>
+      <CalendarDownload slug={slug} year={answer.year} />
       {answer.batches.map((b) => (
         <BatchCard key={b.id} slug={slug} batch={b} today={today} />
       ))}

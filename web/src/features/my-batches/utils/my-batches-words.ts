@@ -22,6 +22,8 @@ export const MY_BATCHES_WORDS = {
   supplies: 'What you need',
   cautions: 'Take care',
   readyAfterShare: 'This species will be ready only after the plant share.',
+  calendar: 'Add the dates to my calendar (iCalendar)',
+  calendarFailed: 'The calendar file did not download. Try again.',
   howIGrow: 'How I grow',
   howIGrowLead:
     'Fill in the methods you use and how many pots, covered containers or soil blocks you can tend; leave the others empty. The organiser splits the batches by this.',

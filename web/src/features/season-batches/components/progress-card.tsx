@@ -58,6 +58,7 @@ function ProgressTables({ progress }: { progress: SeasonProgress }) {
                 <TableCell>
                   {forecastWords(s.forecast)}
                   {s.shortBy > 0 ? <span className={styles.short}> · {s.shortBy} short of the target</span> : null}
+                  {s.nudge ? <span className={styles.muted}>{s.nudge}</span> : null}
                 </TableCell>
               </TableRow>
             ))}

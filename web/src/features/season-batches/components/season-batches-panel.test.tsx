@@ -38,6 +38,7 @@ describe("the organiser's growers, batches and progress", () => {
     const row = within(bySpecies.getByText('Wild bergamot').closest('tr') as HTMLElement);
     expect(row.getByText('about 36 (29–45)')).toBeInTheDocument();
     expect(row.getByText(/14 short of the target/)).toBeInTheDocument();
+    expect(row.getByText(/sow about 24 more seeds \(14 more pots\), starting by 2026-12-02/)).toBeInTheDocument();
     const byGrower = within(screen.getByRole('region', { name: 'Progress by grower' }));
     expect(within(byGrower.getByText('Amara Reyes').closest('tr') as HTMLElement).getAllByText('1')).toHaveLength(2);
     expect(screen.getByText(/seeds planned × germination/)).toBeInTheDocument();

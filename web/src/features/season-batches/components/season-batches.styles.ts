@@ -20,5 +20,17 @@ export const useSeasonBatchesStyles = makeStyles({
     alignItems: 'center',
     marginTop: tokens.spacingVerticalL,
   },
+  /** Read by screen readers, not shown: the row already names the species and grower. */
+  visuallyHidden: {
+    position: 'absolute',
+    width: '1px',
+    height: '1px',
+    margin: '-1px',
+    overflow: 'hidden',
+    clip: 'rect(0 0 0 0)',
+    whiteSpace: 'nowrap',
+    border: 0,
+    padding: 0,
+  },
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalXS },
 });

@@ -90,7 +90,10 @@ export function SplitEditor({ slug, saved }: { slug: string; saved: SeasonBatche
                   <TableCell>{SOWING_METHOD_WORDS[r.method].phrase}</TableCell>
                   <TableCell>
                     <Field
-                      label={{ children: `Plants of ${r.commonName} for ${r.growerName}`, className: styles.muted }}
+                      label={{
+                        children: `Plants of ${r.commonName} for ${r.growerName}`,
+                        className: styles.visuallyHidden,
+                      }}
                       validationMessage={draft.errors[i]}
                       validationState={draft.errors[i] ? 'error' : 'none'}
                     >

@@ -106,6 +106,8 @@ export const progress: SeasonProgress = {
       ready: 0,
       forecast: { expected: 36, low: 29, high: 45 },
       shortBy: 14,
+      nudge:
+        'At this rate about 36 of 50 will be ready: sow about 24 more seeds (14 more pots), starting by 2026-12-02.',
     },
   ],
   growers: [

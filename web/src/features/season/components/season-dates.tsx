@@ -2,10 +2,11 @@ import { type Season, sowingMethodsPhrase } from '@homeground/shared';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { longDate, percentWords } from '../utils/season-words.js';
+import { SeasonDatesForm } from './season-dates-form.js';
 import { useSeasonStyles } from './season.styles.js';
 
 /** When the season runs and how the group grows: the facts every date and count hangs on. */
-export function SeasonDates({ season }: { season: Season }) {
+export function SeasonDates({ season, slug, canEdit }: { season: Season; slug: string; canEdit: boolean }) {
   const styles = useSeasonStyles();
   return (
     <ContentCard aria-labelledby="season-dates">
@@ -26,6 +27,7 @@ export function SeasonDates({ season }: { season: Season }) {
         <dt className={styles.term}>Seeds in a packet</dt>
         <dd className={styles.value}>{season.seedsPerPacket}</dd>
       </dl>
+      {canEdit ? <SeasonDatesForm slug={slug} season={season} /> : null}
     </ContentCard>
   );
 }

@@ -172,6 +172,29 @@ describe('the season page', () => {
     expect(print).toHaveBeenCalledTimes(1);
   });
 
+  it("lets an organiser move the season's dates, checked as the API checks them", async () => {
+    const { user, api } = openSeason(maraOrganiser, {
+      [`PUT ${SEASON_PATH}`]: (req) => ({ body: { ...season, ...(req.body as object) } }),
+    });
+    const form = within(await screen.findByRole('form', { name: "Change the season's dates" }));
+    const share = form.getByLabelText('Plant share');
+    // seasonRequestSchema: the plant share falls after the last frost.
+    await user.clear(share);
+    await user.type(share, '2027-04-01');
+    await user.click(form.getByRole('button', { name: 'Save the dates' }));
+    expect(await form.findByText('Must be after the last frost')).toBeInTheDocument();
+    expect(api.callsTo('PUT', SEASON_PATH)).toHaveLength(0);
+    await user.clear(share);
+    await user.type(share, '2027-06-19');
+    await user.click(form.getByRole('button', { name: 'Save the dates' }));
+    expect(await form.findByText(/Dates saved/)).toBeInTheDocument();
+    expect(api.callsTo('PUT', SEASON_PATH)[0].body).toEqual({
+      year: 2027,
+      lastFrost: '2027-05-10',
+      plantShareDate: '2027-06-19',
+    });
+  });
+
   it('tells someone in no growing group what the page is for', async () => {
     const { api } = openSeason(priyaMember);
     expect(await screen.findByText(/You are not in a growing group yet/)).toBeInTheDocument();

@@ -38,7 +38,7 @@ function SeasonPlan({ slug, season, canEdit }: { slug: string; season: Season; c
         </PageIntro>
       </div>
       <div className={styles.stack} data-season-cards>
-        <SeasonDates season={season} />
+        <SeasonDates season={season} slug={slug} canEdit={canEdit} />
         <TargetsCard slug={slug} season={season} draft={canEdit ? draft : null} />
         {canEdit ? <ShareListCard slug={slug} season={season} draft={draft} /> : null}
         <SeedListCard slug={slug} />
