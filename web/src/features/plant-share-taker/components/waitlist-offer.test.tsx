@@ -14,6 +14,7 @@ const offer: WaitlistOfferView = {
   scientificName: 'Monarda fistulosa',
   count: 2,
   status: 'offered',
+  heldUntil: '2027-06-08T17:00:00.000Z',
   joinsReservation: false,
   share: {
     groupSlug: share.groupSlug,
@@ -45,5 +46,11 @@ describe('a waitlist offer', () => {
   it('says when the offer has lapsed', async () => {
     openOffer({ [`GET ${OFFER_PATH}`]: apiError(410, 'The offer has lapsed') });
     expect(await screen.findByText(/This link does not open an offer/)).toBeInTheDocument();
+  });
+
+  it('says plainly when the offer was not taken in time', async () => {
+    openOffer({ [`GET ${OFFER_PATH}`]: { body: { ...offer, status: 'expired', heldUntil: null } } });
+    expect(await screen.findByText(/was not taken in time/)).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Take these plants' })).toBeNull();
   });
 });

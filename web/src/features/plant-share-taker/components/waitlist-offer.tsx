@@ -13,6 +13,14 @@ import { TAKER_WORDS as W } from '../utils/taker-words.js';
 import { Confirmation } from './confirmation.js';
 import { SlotPicker } from './slot-picker.js';
 
+const HELD_UNTIL = new Intl.DateTimeFormat('en-US', {
+  weekday: 'long',
+  month: 'long',
+  day: 'numeric',
+  hour: 'numeric',
+  minute: '2-digit',
+});
+
 const useStyles = makeStyles({
   form: { display: 'grid', gap: tokens.spacingVerticalL },
   submit: { justifySelf: 'start', minHeight: '44px' },
@@ -69,8 +77,11 @@ function Offer({
       <ContentCard aria-label={W.offerTitle}>
         {offer.status === 'claimed' ? (
           <p>{W.offerClaimed}</p>
+        ) : offer.status === 'expired' ? (
+          <p>{W.offerExpired}</p>
         ) : (
           <div className={styles.form}>
+            {offer.heldUntil ? <p>{W.offerHeldUntil(HELD_UNTIL.format(new Date(offer.heldUntil)))}</p> : null}
             {offer.joinsReservation ? (
               <p>{W.offerJoins}</p>
             ) : (

@@ -107,5 +107,8 @@ export const TAKER_WORDS = {
   offerClaim: 'Take these plants',
   offerClaiming: 'Taking them…',
   offerClaimed: 'You took these plants already. The confirmation e-mail has your private link.',
+  offerExpired:
+    'This offer was not taken in time, so the plants went on to the next household on the waitlist. You can join the waitlist again from the plant share page.',
+  offerHeldUntil: (when: string) => `We hold these plants for you until ${when}.`,
   somethingWrong: 'Something went wrong. Try again.',
 } as const;
