@@ -48,6 +48,8 @@ export const useTableStyles = makeStyles({
     backgroundColor: tokens.colorNeutralBackground1,
     minWidth: '140px',
     maxWidth: '220px',
+    // Narrower on a phone so height, bloom and sun fit beside it at 390 px.
+    '@media (max-width: 600px)': { minWidth: '96px', maxWidth: '128px' },
   },
   rowHeader: { textAlign: 'left', fontWeight: tokens.fontWeightRegular },
   nowrap: { whiteSpace: 'nowrap' },
