@@ -33,6 +33,8 @@ const useStyles = makeStyles({
     },
   },
   trigger: { gap: tokens.spacingHorizontalS },
+  // Fluent's 96 px minimum leaves no room for the language switch on a 360 px phone.
+  signIn: { '@media (max-width: 400px)': { minWidth: 'auto' } },
 });
 
 export type AccountAreaStatus = 'signed-out' | 'loading' | 'signed-in' | 'unavailable';
@@ -53,7 +55,11 @@ export function AccountArea({ status, user, onSignOut }: AccountAreaProps) {
   if (status === 'signed-out') {
     const onAuthPage = pathname === paths.signIn.path || pathname === paths.register.path;
     return (
-      <RouterButton to={onAuthPage ? paths.signIn.build() : paths.signIn.build(pathname + search)} appearance="outline">
+      <RouterButton
+        to={onAuthPage ? paths.signIn.build() : paths.signIn.build(pathname + search)}
+        appearance="outline"
+        className={styles.signIn}
+      >
         {t('account.signIn')}
       </RouterButton>
     );
