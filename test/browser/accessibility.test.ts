@@ -178,6 +178,17 @@ for (const language of LANGUAGES) {
         .locator('table thead th')
         .evaluateAll((ths) => ths.slice(0, 4).map((th) => th.getBoundingClientRect().right));
       assert.ok(columns.length === 4 && columns[3] <= 390, `name, height, bloom and sun fit at 390 px: ${columns}`);
+      await page.goto(`${app.server.baseUrl}${PLAN}`);
+      // On a phone the mix opens as cards; the bloom chart is the table with a count row.
+      await page.locator('table:has(tfoot) tbody tr').first().waitFor();
+      await check('yard mix');
+      // The bloom chart's twelve months fit beside the names at 390 px, without scrolling sideways.
+      const chart = await page
+        .locator('table:has(tfoot)')
+        .first()
+        .evaluate((t) => ({ table: t.getBoundingClientRect().width, box: t.parentElement!.clientWidth }));
+      assert.ok(chart.table <= chart.box + 1, `bloom chart fits its box at 390 px: ${JSON.stringify(chart)}`);
+      await screenshot(page, `accessibility-mix-phone-${language.browser}`);
       await page.goto(`${app.server.baseUrl}/species/asclepias-tuberosa`);
       await page.getByRole('heading', { level: 1 }).waitFor();
       await check('species detail');

@@ -28,7 +28,7 @@ export const useBloomChartStyles = makeStyles({
   notCounted: { display: 'block', color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase100 },
   monthHead: {
     minWidth: '22px',
-    '@media (max-width: 480px)': { minWidth: '16px' },
+    '@media (max-width: 480px)': { minWidth: '14px' },
     textAlign: 'center',
     fontWeight: tokens.fontWeightSemibold,
     verticalAlign: 'bottom',
@@ -46,7 +46,7 @@ export const useBloomChartStyles = makeStyles({
   cell: {
     height: '26px',
     minWidth: '22px',
-    '@media (max-width: 480px)': { minWidth: '16px' },
+    '@media (max-width: 480px)': { minWidth: '14px' },
     textAlign: 'center',
     borderRadius: tokens.borderRadiusSmall,
     border: `1px solid ${tokens.colorNeutralStroke2}`,
