@@ -73,6 +73,8 @@ export const yard = {
     showAs: 'Show the mix as',
     table: 'Table',
     cards: 'Cards',
+    cautionsFor: 'Cautions for {{name}}',
+    caution: 'Caution:',
     rebalance: 'Rebalance',
   },
 } as const;

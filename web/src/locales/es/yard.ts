@@ -85,6 +85,8 @@ export const yard = {
     showAs: 'Mostrar la mezcla como',
     table: 'Tabla',
     cards: 'Tarjetas',
+    cautionsFor: 'Precauciones de {{name}}',
+    caution: 'Precaución:',
     rebalance: 'Volver a equilibrar',
   },
 } as const satisfies Catalogue<typeof en>;
