@@ -12,6 +12,8 @@ import { detail as enDetail } from './en/detail.js';
 import { detail as esDetail } from './es/detail.js';
 import { cards as enCards } from './en/cards.js';
 import { cards as esCards } from './es/cards.js';
+import { yard as enYard } from './en/yard.js';
+import { yard as esYard } from './es/yard.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -23,6 +25,7 @@ export const resources = {
     species: enSpecies,
     detail: enDetail,
     cards: enCards,
+    yard: enYard,
   },
   es: {
     common: esCommon,
@@ -32,5 +35,6 @@ export const resources = {
     species: esSpecies,
     detail: esDetail,
     cards: esCards,
+    yard: esYard,
   },
 } as const;

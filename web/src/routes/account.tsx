@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Navigate, useLocation } from 'react-router-dom';
 import { PageIntro } from '../components/page/page-intro.js';
 import { ErrorState, LoadingState } from '../components/states/index.js';
@@ -10,14 +11,15 @@ import { useDocumentTitle } from '../lib/use-document-title.js';
 export function AccountRoute() {
   const session = useSession();
   const { pathname } = useLocation();
-  useDocumentTitle('Your account');
+  const { t } = useTranslation('forms');
+  useDocumentTitle(t('account.title'));
 
   if (session.status === 'signed-out') return <Navigate to={paths.signIn.build(pathname)} replace />;
-  if (session.status === 'loading') return <LoadingState label="Loading your account" />;
+  if (session.status === 'loading') return <LoadingState label={t('account.loading')} />;
 
   return (
     <>
-      <PageIntro title="Your account" />
+      <PageIntro title={t('account.title')} />
       {session.user ? (
         <>
           <AccountDetails user={session.user} />
@@ -25,7 +27,7 @@ export function AccountRoute() {
         </>
       ) : (
         <ErrorState
-          title="Your account details did not load."
+          title={t('account.loadError')}
           message={session.profileError?.message}
           onRetry={session.retryProfile}
         />

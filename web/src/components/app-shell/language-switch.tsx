@@ -4,7 +4,12 @@ import { LOCALE_NAMES, LOCALES, useLocale } from '../../lib/i18n/index.js';
 
 const useStyles = makeStyles({
   group: { display: 'flex', gap: tokens.spacingHorizontalXXS, flexShrink: 0 },
-  button: { minWidth: 'auto', paddingLeft: tokens.spacingHorizontalS, paddingRight: tokens.spacingHorizontalS },
+  button: {
+    minWidth: 'auto',
+    paddingLeft: tokens.spacingHorizontalS,
+    paddingRight: tokens.spacingHorizontalS,
+    '@media (max-width: 400px)': { paddingLeft: tokens.spacingHorizontalXS, paddingRight: tokens.spacingHorizontalXS },
+  },
   // On a phone only the other language shows: the one you are reading needs no button.
   current: { fontWeight: tokens.fontWeightSemibold, '@media (max-width: 600px)': { display: 'none' } },
 });

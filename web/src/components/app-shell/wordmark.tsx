@@ -21,6 +21,8 @@ const useStyles = makeStyles({
     fontSize: '20px',
     lineHeight: '28px',
     color: tokens.colorNeutralForeground1,
+    // Room for the language switch and sign-in beside it on a 360 px phone.
+    '@media (max-width: 400px)': { fontSize: '17px' },
   },
 });
 

@@ -37,4 +37,18 @@ export const forms = {
     haveAccount: 'Already have an account?',
     signIn: 'Sign in',
   },
+  account: {
+    title: 'Your account',
+    loading: 'Loading your account',
+    loadError: 'Your account details did not load.',
+    you: 'You',
+    name: 'Name',
+    email: 'E-mail',
+    role: 'Role',
+    roleLine: '{{title}}: {{does}}',
+    joined: 'Joined',
+    groups: 'Your groups',
+    noGroupTitle: 'You are not in a growing group yet.',
+    noGroupText: 'An organiser invites you to their group by e-mail; then the group shows up here.',
+  },
 } as const;

@@ -68,6 +68,7 @@ export const species = {
     noneSearch: 'Check the spelling, or search by a shorter part of the name.',
     notes:
       "Host value: how many moth and butterfly species raise their caterpillars on plants of the genus (Tallamy & Shropshire 2009). Cautions are a summary; each species page says more. Rules differ from state to state, so check your state's noxious-weed list and local rules before planting or sharing.",
+    scrollHint: 'Swipe the table sideways to see more columns; the name stays in place.',
     tableRegion: 'Species table; on a narrow screen it scrolls sideways and the name column stays in place',
   },
   sort: {

@@ -35,4 +35,18 @@ export const forms = {
     haveAccount: '¿Ya tienes una cuenta?',
     signIn: 'Entra',
   },
+  account: {
+    title: 'Tu cuenta',
+    loading: 'Cargando tu cuenta',
+    loadError: 'Los datos de tu cuenta no cargaron.',
+    you: 'Tú',
+    name: 'Nombre',
+    email: 'Correo electrónico',
+    role: 'Rol',
+    roleLine: '{{title}}: {{does}}',
+    joined: 'Desde',
+    groups: 'Tus grupos',
+    noGroupTitle: 'Todavía no estás en ningún grupo de cultivo.',
+    noGroupText: 'Quien organiza un grupo te invita por correo; después el grupo aparece aquí.',
+  },
 } as const satisfies Catalogue<typeof en>;

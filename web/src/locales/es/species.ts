@@ -70,6 +70,7 @@ export const species = {
     noneSearch: 'Revisa cómo lo escribiste o busca con una parte más corta del nombre.',
     notes:
       'Valor como hospedera: cuántas especies de polillas y mariposas crían sus orugas en plantas del género (Tallamy y Shropshire 2009). Las precauciones son un resumen; la página de cada especie dice más. Las reglas cambian de un estado a otro, así que revisa la lista de malezas nocivas de tu estado y las reglas locales antes de plantar o compartir.',
+    scrollHint: 'Desliza la tabla de lado para ver más columnas; el nombre se queda fijo.',
     tableRegion: 'Tabla de especies; en una pantalla estrecha se desliza de lado y la columna del nombre se queda fija',
   },
   sort: {

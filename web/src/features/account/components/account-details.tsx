@@ -1,5 +1,7 @@
+import { LOCALE_TAGS, useLocale, useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { GLOBAL_ROLE_WORDS, GROUP_ROLE_WORDS, type User } from '@homeground/shared';
+import type { User } from '@homeground/shared';
 import { RouterLink } from '../../../components/links/router-link.js';
 import { paths } from '../../../config/paths.js';
 import { ContentCard } from '../../../components/page/content-card.js';
@@ -23,38 +25,41 @@ const useStyles = makeStyles({
   groupName: { fontWeight: tokens.fontWeightSemibold },
 });
 
-const joined = new Intl.DateTimeFormat('en-US', { dateStyle: 'long' });
-
 /** The signed-in person as GET /api/me describes them. */
 export function AccountDetails({ user }: { user: User }) {
   const styles = useStyles();
+  const { t } = useTranslation('forms');
+  const words = useWords();
+  const { locale } = useLocale();
+  const joined = new Intl.DateTimeFormat(LOCALE_TAGS[locale], { dateStyle: 'long' });
   return (
     <div className={styles.stack}>
       <ContentCard aria-labelledby="account-you">
         <Heading level="section" id="account-you">
-          You
+          {t('account.you')}
         </Heading>
         <dl className={styles.facts}>
-          <dt className={styles.term}>Name</dt>
+          <dt className={styles.term}>{t('account.name')}</dt>
           <dd className={styles.value}>{user.displayName}</dd>
-          <dt className={styles.term}>E-mail</dt>
+          <dt className={styles.term}>{t('account.email')}</dt>
           <dd className={styles.value}>{user.email}</dd>
-          <dt className={styles.term}>Role</dt>
+          <dt className={styles.term}>{t('account.role')}</dt>
           <dd className={styles.value}>
-            {GLOBAL_ROLE_WORDS[user.role].title}: {GLOBAL_ROLE_WORDS[user.role].does.toLowerCase()}
+            {t('account.roleLine', {
+              title: words.globalRole[user.role].title,
+              does: words.globalRole[user.role].does.toLowerCase(),
+            })}
           </dd>
-          <dt className={styles.term}>Joined</dt>
+          <dt className={styles.term}>{t('account.joined')}</dt>
           <dd className={styles.value}>{joined.format(new Date(user.createdAt))}</dd>
         </dl>
       </ContentCard>
       <ContentCard aria-labelledby="account-groups">
         <Heading level="section" id="account-groups">
-          Your groups
+          {t('account.groups')}
         </Heading>
         {user.groups.length === 0 ? (
-          <EmptyState title="You are not in a growing group yet.">
-            An organiser invites you to their group by e-mail; then the group shows up here.
-          </EmptyState>
+          <EmptyState title={t('account.noGroupTitle')}>{t('account.noGroupText')}</EmptyState>
         ) : (
           <ul className={styles.groups}>
             {user.groups.map((g) => (
@@ -62,7 +67,7 @@ export function AccountDetails({ user }: { user: User }) {
                 <RouterLink className={styles.groupName} to={paths.group.build(g.groupSlug)}>
                   {g.groupName}
                 </RouterLink>{' '}
-                · {GROUP_ROLE_WORDS[g.role].title}
+                · {words.groupRole[g.role].title}
               </li>
             ))}
           </ul>

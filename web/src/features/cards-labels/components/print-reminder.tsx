@@ -3,7 +3,7 @@ import { makeStyles, tokens } from '@fluentui/react-components';
 import { Info20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { hgTokens } from '../../../theme/index.js';
-import { cautionList } from '@homeground/shared';
+import { useWords } from '../../../lib/i18n/index.js';
 
 const useStyles = makeStyles({
   root: {
@@ -24,6 +24,7 @@ const useStyles = makeStyles({
 export function PrintReminder({ species }: { species: readonly SpeciesDetail[] }) {
   const styles = useStyles();
   const { t } = useTranslation('cards');
+  const words = useWords();
   const withCautions = species.filter((s) => s.cautions.length > 0);
   const hasSap = species.some((s) => s.cautions.some((c) => c.kind === 'sap-irritant'));
   return (
@@ -38,7 +39,7 @@ export function PrintReminder({ species }: { species: readonly SpeciesDetail[] }
           <ul className={styles.list} aria-label="Cautions among your plants">
             {withCautions.map((s) => (
               <li key={s.slug}>
-                {s.commonNames[0]}: {cautionList(s.cautions.map((c) => c.kind))}
+                {s.commonNames[0]}: {words.cautionList(s.cautions.map((c) => c.kind))}
               </li>
             ))}
           </ul>

@@ -1,6 +1,7 @@
 import {
   Button,
   Dialog,
+  useRestoreFocusTarget,
   DialogActions,
   DialogBody,
   DialogContent,
@@ -28,6 +29,8 @@ const useStyles = makeStyles({
 /** The group's people. Organisers see addresses and can take someone out of the group. */
 export function MemberList({ slug, members, canManage }: { slug: string; members: GroupMember[]; canManage: boolean }) {
   const styles = useStyles();
+  // Focus goes back to the Remove button that opened the dialog when it closes (WCAG 2.4.3).
+  const restoreFocusTarget = useRestoreFocusTarget();
   const remove = useRemoveMemberMutation(slug);
   const [leaving, setLeaving] = useState<GroupMember | null>(null);
   const showEmail = members.some((m) => m.email !== null);
@@ -52,6 +55,7 @@ export function MemberList({ slug, members, canManage }: { slug: string; members
               {canManage ? (
                 <TableCell>
                   <Button
+                    {...restoreFocusTarget}
                     size="small"
                     onClick={() => setLeaving(m)}
                     aria-label={`Remove ${m.displayName} from the group`}
@@ -69,25 +73,29 @@ export function MemberList({ slug, members, canManage }: { slug: string; members
           {remove.error.message}
         </p>
       ) : null}
-      <Dialog open={leaving !== null} onOpenChange={(_, d) => !d.open && setLeaving(null)}>
-        <DialogSurface>
-          <DialogBody>
-            <DialogTitle>Remove {leaving?.displayName}?</DialogTitle>
-            <DialogContent>
-              They leave the group and its season; their account stays. You can invite them again later.
-            </DialogContent>
-            <DialogActions>
-              <Button onClick={() => setLeaving(null)}>Keep them</Button>
-              <Button
-                appearance="primary"
-                onClick={() => leaving && remove.mutate(leaving.userId, { onSettled: () => setLeaving(null) })}
-              >
-                Remove
-              </Button>
-            </DialogActions>
-          </DialogBody>
-        </DialogSurface>
-      </Dialog>
+      {/* Mounted only while open: a mounted dialog, even closed, makes Fluent's focus manager add
+          aria-hidden focusable sentinels to the page (axe-core aria-hidden-focus). */}
+      {leaving !== null ? (
+        <Dialog open onOpenChange={(_, d) => !d.open && setLeaving(null)}>
+          <DialogSurface>
+            <DialogBody>
+              <DialogTitle>Remove {leaving?.displayName}?</DialogTitle>
+              <DialogContent>
+                They leave the group and its season; their account stays. You can invite them again later.
+              </DialogContent>
+              <DialogActions>
+                <Button onClick={() => setLeaving(null)}>Keep them</Button>
+                <Button
+                  appearance="primary"
+                  onClick={() => leaving && remove.mutate(leaving.userId, { onSettled: () => setLeaving(null) })}
+                >
+                  Remove
+                </Button>
+              </DialogActions>
+            </DialogBody>
+          </DialogSurface>
+        </Dialog>
+      ) : null}
     </div>
   );
 }

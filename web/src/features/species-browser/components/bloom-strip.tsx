@@ -19,7 +19,7 @@ const useStyles = makeStyles({
     fontWeight: tokens.fontWeightSemibold,
     lineHeight: 1,
   },
-  compact: { width: '8px', height: '16px' },
+  compact: { width: '8px', height: '16px', '@media (max-width: 600px)': { width: '6px' } },
   large: { width: '28px', height: '28px', '@media (max-width: 480px)': { width: '20px', height: '24px' } },
   // Bloom months get diagonal hatching over the flower colour: filled-and-striped versus empty
   // reads without colour vision and in a greyscale photocopy.

@@ -6,8 +6,9 @@ import type { SortOrder, SpeciesSort } from '../utils/browser-state.js';
 
 // Label beside the control without Field's horizontal grid, which gives the label a third of the width.
 const useStyles = makeStyles({
-  inline: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
-  select: { minWidth: '13em' },
+  // Wraps under its label on a phone: some orders are long in Spanish.
+  inline: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalS, maxWidth: '100%' },
+  select: { minWidth: '13em', maxWidth: '100%' },
 });
 
 type SortLabel = Exclude<keyof (typeof species)['sort'], 'label'>;

@@ -2,6 +2,14 @@ import { makeStyles, tokens } from '@fluentui/react-components';
 import { hgTokens } from '../../../theme/index.js';
 
 export const useTableStyles = makeStyles({
+  // Said in words only where the table is wider than the screen.
+  scrollHint: {
+    display: 'none',
+    margin: `0 0 ${tokens.spacingVerticalS}`,
+    fontSize: tokens.fontSizeBase200,
+    color: tokens.colorNeutralForeground2,
+    '@media (max-width: 760px)': { display: 'block' },
+  },
   // The table scrolls sideways inside its own box at phone width, never the page.
   scroller: {
     overflowX: 'auto',
@@ -40,6 +48,8 @@ export const useTableStyles = makeStyles({
     backgroundColor: tokens.colorNeutralBackground1,
     minWidth: '140px',
     maxWidth: '220px',
+    // Narrower on a phone so height, bloom and sun fit beside it at 390 px.
+    '@media (max-width: 600px)': { minWidth: '96px', maxWidth: '128px' },
   },
   rowHeader: { textAlign: 'left', fontWeight: tokens.fontWeightRegular },
   nowrap: { whiteSpace: 'nowrap' },

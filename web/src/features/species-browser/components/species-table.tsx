@@ -74,47 +74,50 @@ export function SpeciesTable({ items, columns, highlights, sort, order, onSort, 
   const styles = useTableStyles();
   const { t } = useTranslation('species');
   return (
-    // Its own name, not the section heading's: two regions with one name are one landmark twice.
-    <div className={styles.scroller} role="region" aria-label={t('results.tableRegion')} tabIndex={0}>
-      <table className={styles.table} aria-labelledby={captionId}>
-        <thead>
-          <tr>
-            <HeaderCell
-              column="commonName"
-              label={t('columns.commonName')}
-              className={styles.sticky}
-              sort={sort}
-              order={order}
-              onSort={onSort}
-            />
-            {columns.map((c) => (
+    <>
+      <p className={styles.scrollHint}>{t('results.scrollHint')}</p>
+      {/* Its own name, not the section heading's: two regions with one name are one landmark twice. */}
+      <div className={styles.scroller} role="region" aria-label={t('results.tableRegion')} tabIndex={0}>
+        <table className={styles.table} aria-labelledby={captionId}>
+          <thead>
+            <tr>
               <HeaderCell
-                key={c}
-                column={c}
-                label={t(`columns.${c}`)}
-                className={NUMERIC.has(c) ? styles.number : undefined}
+                column="commonName"
+                label={t('columns.commonName')}
+                className={styles.sticky}
                 sort={sort}
                 order={order}
                 onSort={onSort}
               />
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {items.map((s) => (
-            <tr key={s.slug}>
-              <th scope="row" className={mergeClasses(styles.td, styles.sticky, styles.rowHeader)}>
-                <NameCell species={s} href={paths.speciesDetail.build(s.slug)} highlights={highlights.get(s.slug)} />
-              </th>
               {columns.map((c) => (
-                <td key={c} className={mergeClasses(styles.td, NUMERIC.has(c) && styles.number)}>
-                  <OptionalCell column={c} species={s} highlights={highlights.get(s.slug)} />
-                </td>
+                <HeaderCell
+                  key={c}
+                  column={c}
+                  label={t(`columns.${c}`)}
+                  className={NUMERIC.has(c) ? styles.number : undefined}
+                  sort={sort}
+                  order={order}
+                  onSort={onSort}
+                />
               ))}
             </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+          </thead>
+          <tbody>
+            {items.map((s) => (
+              <tr key={s.slug}>
+                <th scope="row" className={mergeClasses(styles.td, styles.sticky, styles.rowHeader)}>
+                  <NameCell species={s} href={paths.speciesDetail.build(s.slug)} highlights={highlights.get(s.slug)} />
+                </th>
+                {columns.map((c) => (
+                  <td key={c} className={mergeClasses(styles.td, NUMERIC.has(c) && styles.number)}>
+                    <OptionalCell column={c} species={s} highlights={highlights.get(s.slug)} />
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </>
   );
 }

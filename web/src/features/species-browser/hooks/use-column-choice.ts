@@ -17,18 +17,29 @@ export type OptionalColumn = (typeof OPTIONAL_COLUMNS)[number];
 
 export const COLUMNS_STORAGE_KEY = 'homeground.species-browser.hidden-columns';
 /** Family is one click away on the detail page; hiding it first keeps the table readable on a laptop. */
-const DEFAULT_HIDDEN: readonly OptionalColumn[] = ['family'];
+const WIDE_DEFAULT_HIDDEN: readonly OptionalColumn[] = ['family'];
+/**
+ * On a phone the name column stays put and the rest scroll: hiding the scientific name and growth
+ * form at first puts height, bloom and sun right beside the name, where a grower looks first.
+ */
+const PHONE_DEFAULT_HIDDEN: readonly OptionalColumn[] = ['family', 'scientificName', 'growthForm'];
+const PHONE_QUERY = '(max-width: 600px)';
+
+function defaultHidden(): OptionalColumn[] {
+  const isPhone = typeof window.matchMedia === 'function' && window.matchMedia(PHONE_QUERY).matches;
+  return [...(isPhone ? PHONE_DEFAULT_HIDDEN : WIDE_DEFAULT_HIDDEN)];
+}
 
 /** Stores the hidden columns, not the shown ones, so a column added later appears for everyone. */
 function readHidden(): OptionalColumn[] {
   try {
     const raw = window.localStorage.getItem(COLUMNS_STORAGE_KEY);
-    if (raw === null) return [...DEFAULT_HIDDEN];
+    if (raw === null) return defaultHidden();
     const parsed: unknown = JSON.parse(raw);
-    return Array.isArray(parsed) ? OPTIONAL_COLUMNS.filter((c) => parsed.includes(c)) : [...DEFAULT_HIDDEN];
+    return Array.isArray(parsed) ? OPTIONAL_COLUMNS.filter((c) => parsed.includes(c)) : defaultHidden();
   } catch {
     // Storage can be unavailable (private windows, quotas): fall back to the defaults.
-    return [...DEFAULT_HIDDEN];
+    return defaultHidden();
   }
 }
 

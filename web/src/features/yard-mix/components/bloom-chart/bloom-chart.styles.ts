@@ -21,11 +21,14 @@ export const useBloomChartStyles = makeStyles({
     padding: `2px ${tokens.spacingHorizontalS} 2px 0`,
     minWidth: '7rem',
     maxWidth: '14rem',
+    // At 390 px the twelve months fit beside the names without scrolling.
+    '@media (max-width: 480px)': { minWidth: '5.5rem', maxWidth: '7rem' },
     lineHeight: tokens.lineHeightBase200,
   },
   notCounted: { display: 'block', color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase100 },
   monthHead: {
     minWidth: '22px',
+    '@media (max-width: 480px)': { minWidth: '14px' },
     textAlign: 'center',
     fontWeight: tokens.fontWeightSemibold,
     verticalAlign: 'bottom',
@@ -43,6 +46,7 @@ export const useBloomChartStyles = makeStyles({
   cell: {
     height: '26px',
     minWidth: '22px',
+    '@media (max-width: 480px)': { minWidth: '14px' },
     textAlign: 'center',
     borderRadius: tokens.borderRadiusSmall,
     border: `1px solid ${tokens.colorNeutralStroke2}`,

@@ -1,4 +1,6 @@
-import { Button, makeStyles, MessageBar, MessageBarBody, Tab, TabList, tokens } from '@fluentui/react-components';
+import { useTranslation } from 'react-i18next';
+import { Button, makeStyles, MessageBar, MessageBarBody, tokens } from '@fluentui/react-components';
+import { ViewSwitch } from '../../../../components/view-switch/view-switch.js';
 import { ArrowSync20Regular } from '@fluentui/react-icons';
 import { useState } from 'react';
 import { ContentCard } from '../../../../components/page/content-card.js';
@@ -61,6 +63,7 @@ export function MixSpecies({
   ...actions
 }: MixSpeciesProps) {
   const styles = useStyles();
+  const { t } = useTranslation('yard');
   const [view, setView] = useState<View>(initialView);
   const viewProps = { rows, cautions, isBusy, ...actions };
 
@@ -75,17 +78,20 @@ export function MixSpecies({
     <ContentCard aria-labelledby="mix-species-heading">
       <div className={styles.head}>
         <Heading level="section" id="mix-species-heading" className={styles.title}>
-          Species in the mix
+          {t('mix.species')}
         </Heading>
-        <TabList
-          selectedValue={view}
-          onTabSelect={(_, d) => setView(d.value as View)}
-          aria-label="Show the mix as"
-          data-print="hide"
-        >
-          <Tab value="table">Table</Tab>
-          <Tab value="cards">Cards</Tab>
-        </TabList>
+        {/* Not a TabList: its focus sentinels are aria-hidden yet focusable (axe-core aria-hidden-focus). */}
+        <div data-print="hide">
+          <ViewSwitch<View>
+            label={t('mix.showAs')}
+            value={view}
+            onChange={setView}
+            options={[
+              { value: 'table', label: t('mix.table') },
+              { value: 'cards', label: t('mix.cards') },
+            ]}
+          />
+        </div>
       </div>
       {notices.length > 0 ? (
         <div className={styles.notices}>
@@ -98,7 +104,7 @@ export function MixSpecies({
       ) : null}
       <div className={styles.rebalance} data-print="hide">
         <Button icon={<ArrowSync20Regular />} onClick={onRebalance} disabled={isBusy}>
-          Rebalance
+          {t('mix.rebalance')}
         </Button>
         <p className={styles.hint} aria-live="polite">
           {hint}

@@ -25,5 +25,8 @@ export const useYardFormStyles = makeStyles({
   },
   goalLine: { display: 'block', color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200 },
   goalName: { fontWeight: tokens.fontWeightSemibold },
+  // A two-line label: the box sits beside its first line, not between the two.
+  goal: { alignItems: 'flex-start' },
+  goalIndicator: { alignSelf: 'flex-start', marginTop: '10px' },
   actions: { display: 'flex', gap: tokens.spacingHorizontalM, flexWrap: 'wrap', alignItems: 'center' },
 });

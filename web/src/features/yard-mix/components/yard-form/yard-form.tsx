@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Button, Checkbox } from '@fluentui/react-components';
 import { ArrowLeft20Regular, ArrowRight20Regular } from '@fluentui/react-icons';
 import type { Goal, SiteRequest } from '@homeground/shared';
@@ -11,6 +12,7 @@ import {
   MOISTURE_CHOICES,
   SOIL_CHOICES,
   SUN_CHOICES,
+  type Choice,
 } from '../../utils/yard-form-choices.js';
 import {
   checkYard,
@@ -41,6 +43,17 @@ export interface YardFormProps {
 /** Step 2: the questions about the spot, checked before anything is sent, with messages beside each field. */
 export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
   const styles = useYardFormStyles();
+  const { t } = useTranslation('yard');
+  /** A choice list with its words in the page's language (the English in yard-form-choices.ts is the default). */
+  const say = <V extends string>(group: 'sun' | 'moisture' | 'soil' | 'deer' | 'goal', list: readonly Choice<V>[]) =>
+    list.map((c) => {
+      const key = `choices.${group}.${c.value || 'none'}` as 'choices.sun.full';
+      return {
+        ...c,
+        label: t(`${key}.label`, { defaultValue: c.label }),
+        line: t(`${key}.line`, { defaultValue: c.line }),
+      };
+    });
   const formRef = useRef<HTMLFormElement>(null);
   const [values, setValues] = useState<YardFormValues>(initial);
   const [errors, setErrors] = useState<YardErrors>({});
@@ -77,31 +90,31 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
   };
 
   return (
-    <form ref={formRef} className={styles.form} onSubmit={submit} noValidate aria-label="Your yard">
+    <form ref={formRef} className={styles.form} onSubmit={submit} noValidate aria-label={t('form.label')}>
       <fieldset className={styles.group}>
-        <legend className={styles.legend}>Light and soil</legend>
+        <legend className={styles.legend}>{t('form.lightSoil')}</legend>
         <ChoiceField
           name="sun"
-          label="How much sun does the spot get?"
+          label={t('form.sun')}
           required
-          choices={SUN_CHOICES}
+          choices={say('sun', SUN_CHOICES)}
           value={values.sun}
           onChange={(v) => set('sun', v, 'sun')}
           error={errors.sun}
         />
         <ChoiceField
           name="moisture"
-          label="How wet does the soil stay?"
+          label={t('form.moisture')}
           required
-          choices={MOISTURE_CHOICES}
+          choices={say('moisture', MOISTURE_CHOICES)}
           value={values.moisture}
           onChange={(v) => set('moisture', v, 'moisture')}
           error={errors.moisture}
         />
         <ChoiceField
           name="soilTexture"
-          label="What is the soil like? (optional)"
-          choices={SOIL_CHOICES}
+          label={t('form.soil')}
+          choices={say('soil', SOIL_CHOICES)}
           value={values.soilTexture}
           onChange={(v) => set('soilTexture', v, 'soilTexture')}
           error={errors.soilTexture}
@@ -109,12 +122,12 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
       </fieldset>
 
       <fieldset className={styles.group}>
-        <legend className={styles.legend}>Size</legend>
+        <legend className={styles.legend}>{t('form.size')}</legend>
         <MeasureField<AreaUnit>
           name="area"
-          label="Area to plant"
+          label={t('form.area')}
           required
-          hint="Length times width of the bed."
+          hint={t('form.areaHint')}
           value={values.area}
           onChange={(v) => set('area', v, 'area')}
           unit={values.areaUnit}
@@ -125,8 +138,8 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
         />
         <MeasureField<HeightUnit>
           name="maxHeight"
-          label="Tallest plant you want (optional)"
-          hint="For under a window or beside a path; leave empty for any height."
+          label={t('form.maxHeight')}
+          hint={t('form.maxHeightHint')}
           value={values.maxHeight}
           onChange={(v) => set('maxHeight', v, 'maxHeight')}
           unit={values.heightUnit}
@@ -138,24 +151,26 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
       </fieldset>
 
       <fieldset className={styles.group}>
-        <legend className={styles.legend}>Deer and goals</legend>
+        <legend className={styles.legend}>{t('form.deerGoals')}</legend>
         <ChoiceField
           name="deerPressure"
-          label="How often do deer visit?"
+          label={t('form.deer')}
           required
-          choices={DEER_CHOICES}
+          choices={say('deer', DEER_CHOICES)}
           value={values.deerPressure}
           onChange={(v) => set('deerPressure', v, 'deerPressure')}
           error={errors.deerPressure}
         />
         <div role="group" aria-labelledby={goalsLabelId}>
           <p id={goalsLabelId} className={styles.groupLabel}>
-            What should the planting do? (choose any)
+            {t('form.goals')}
           </p>
           <div className={styles.goals}>
-            {GOAL_CHOICES.map((g) => (
+            {say('goal', GOAL_CHOICES).map((g) => (
               <Checkbox
                 key={g.value}
+                className={styles.goal}
+                indicator={{ className: styles.goalIndicator }}
                 name="goals"
                 value={g.value}
                 checked={values.goals.includes(g.value)}
@@ -174,23 +189,23 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
           name="woodyPlants"
           checked={values.woodyPlants}
           onChange={(_, d) => set('woodyPlants', d.checked === true)}
-          label="Add shrubs and small trees (only those that fit your bed, in a share of it)"
+          label={t('form.woody')}
         />
         <Checkbox
           name="spreaders"
           checked={values.spreaders}
           onChange={(_, d) => set('spreaders', d.checked === true)}
-          label="Include plants that spread or seed themselves about (left out of beds under 500 ft² / 46 m² otherwise)"
+          label={t('form.spreaders')}
         />
       </fieldset>
 
       <div className={styles.actions}>
         <Button type="submit" appearance="primary" size="large" icon={<ArrowRight20Regular />} iconPosition="after">
-          Show my yard mix
+          {t('form.submit')}
         </Button>
         {onBack ? (
           <Button type="button" appearance="subtle" icon={<ArrowLeft20Regular />} onClick={onBack}>
-            Back to your ground
+            {t('form.back')}
           </Button>
         ) : null}
       </div>

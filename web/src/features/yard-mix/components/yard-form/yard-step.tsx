@@ -1,3 +1,4 @@
+import { Trans, useTranslation } from 'react-i18next';
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import type { SiteRequest } from '@homeground/shared';
 import { ContentCard } from '../../../../components/page/content-card.js';
@@ -31,18 +32,24 @@ export function YardStep({
   onChangeGround: () => void;
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('yard');
   const place = usePlaceWords(region.state, region.ecoregionCode);
   return (
     <ContentCard aria-labelledby="yard-heading">
       <Heading level="section" id="yard-heading">
-        Step 2 of 3: your yard
+        {t('step.heading')}
       </Heading>
       <div className={styles.ground}>
         <p className={styles.groundText}>
-          Your ground: <strong>{place.replace(/^the /, '')}</strong>.
+          <Trans
+            t={t}
+            i18nKey="step.yourGround"
+            values={{ place: place.replace(/^the /, '') }}
+            components={{ strong: <strong /> }}
+          />
         </p>
         <Button appearance="transparent" size="small" onClick={onChangeGround}>
-          Change
+          {t('step.change')}
         </Button>
       </div>
       <YardForm initial={initial} onSubmit={onSubmit} onBack={onChangeGround} />
