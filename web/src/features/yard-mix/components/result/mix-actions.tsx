@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import {
   ArrowDownload20Regular,
@@ -37,28 +38,29 @@ export function MixActions({
   onChangeGround,
 }: MixActionsProps) {
   const styles = useStyles();
+  const { t } = useTranslation('yard');
   return (
     <div className={styles.bar} data-print="hide">
       {save}
       <div className={styles.secondary}>
-        <CopyLinkButton url={shareUrl} label="Copy link to this mix" />
+        <CopyLinkButton url={shareUrl} label={t('mix.copyLink')} />
         <Button icon={<ArrowDownload20Regular />} onClick={onExportCsv}>
-          Export CSV
+          {t('mix.exportCsv')}
         </Button>
         <Button icon={<Print20Regular />} onClick={onPrint}>
-          Print
+          {t('mix.print')}
         </Button>
         <RouterButton to={cardsHref} icon={<DocumentBulletList20Regular />}>
-          Make fact cards for this mix
+          {t('mix.makeCards')}
         </RouterButton>
         {onChangeYard ? (
           <Button appearance="subtle" icon={<Edit20Regular />} onClick={onChangeYard}>
-            Change your yard
+            {t('mix.changeYard')}
           </Button>
         ) : null}
         {onChangeGround ? (
           <Button appearance="subtle" icon={<Location20Regular />} onClick={onChangeGround}>
-            Change your ground
+            {t('mix.changeGround')}
           </Button>
         ) : null}
       </div>

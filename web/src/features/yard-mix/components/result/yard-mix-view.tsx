@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { Button, makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import { Location20Regular } from '@fluentui/react-icons';
 import { STATE_NAMES, type StateCode, formatArea } from '@homeground/shared';
@@ -60,6 +61,7 @@ export function YardMixView({
     onPlanChange,
   );
   const origin = usePublicOrigin();
+  const { t } = useTranslation('yard');
   const [swapSlot, setSwapSlot] = useState<string | null>(null);
   // The Swap button that opened the dialog gets focus back when it closes (WCAG 2.4.3 Focus Order).
   const swapOpener = useRef<HTMLElement | null>(null);
@@ -79,12 +81,12 @@ export function YardMixView({
   const speciesList = mix ? mix.palette.chosen.map((c) => mix.species[c.slug]).filter(Boolean) : [];
   const cautions = useMixCautions(speciesList);
 
-  if (query.isPending) return <LoadingState label="Working out your yard mix" />;
+  if (query.isPending) return <LoadingState label={t('mix.loading')} />;
   if (mix && mix.palette.coverage && !mix.palette.coverage.covered) {
     // The way on is another place, so the answer offers it: back to the ground step, yard answers kept.
     const changeGround = onChangeGround ? (
       <Button appearance="primary" icon={<Location20Regular />} onClick={onChangeGround}>
-        Change your ground
+        {t('mix.changeGround')}
       </Button>
     ) : (
       <RouterButton
@@ -92,12 +94,12 @@ export function YardMixView({
         icon={<Location20Regular />}
         to={paths.findPlants.build({ plan, step: 'ground' })}
       >
-        Change your ground
+        {t('mix.changeGround')}
       </RouterButton>
     );
     return (
       <div className={styles.notCovered}>
-        <EmptyState title="Homeground does not cover this region yet">{mix.palette.coverage.message}</EmptyState>
+        <EmptyState title={t('mix.notCovered')}>{mix.palette.coverage.message}</EmptyState>
         <div data-print="hide">{changeGround}</div>
       </div>
     );
@@ -105,8 +107,8 @@ export function YardMixView({
   if (query.isError || !mix) {
     return (
       <ErrorState
-        title="Homeground could not work out this mix"
-        message={query.error?.message ?? 'Try again in a moment.'}
+        title={t('mix.loadError')}
+        message={query.error?.message ?? t('mix.tryLater')}
         onRetry={() => void query.refetch()}
       />
     );
@@ -179,14 +181,12 @@ export function YardMixView({
           onChangeGround={onChangeGround}
         />
         <div className={styles.updating} aria-live="polite">
-          {isUpdating ? <Spinner size="tiny" label="Updating the mix…" labelPosition="after" /> : null}
+          {isUpdating ? <Spinner size="tiny" label={t('mix.updating')} labelPosition="after" /> : null}
         </div>
       </ContentCard>
 
       {rows.length === 0 ? (
-        <EmptyState title="No native species in the catalogue suit this yard yet">
-          Try a different sun or moisture answer, or a larger area.
-        </EmptyState>
+        <EmptyState title={t('mix.noneTitle')}>{t('mix.noneText')}</EmptyState>
       ) : (
         <MixSpecies
           rows={rows}
@@ -204,14 +204,14 @@ export function YardMixView({
 
       <ContentCard aria-labelledby="bloom-heading">
         <Heading level="section" id="bloom-heading">
-          Bloom chart
+          {t('mix.bloomChart')}
         </Heading>
         <BloomChart species={speciesList} />
       </ContentCard>
 
       <ContentCard aria-labelledby="rules-heading">
         <Heading level="section" id="rules-heading">
-          How this mix is balanced
+          {t('mix.balanced')}
         </Heading>
         <ConstraintsPanel constraints={mix.palette.constraints} />
       </ContentCard>
