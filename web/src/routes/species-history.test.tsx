@@ -35,13 +35,15 @@ describe("a species record's history (curators)", () => {
   it('shows who changed which field, from which file, with the source, and undoes a change after asking', async () => {
     const { user, api } = renderApp({ path: '/species/asclepias-tuberosa', token: 'ines', api: routes(ines) });
     const panel = within(await screen.findByRole('region', { name: 'Changes to this record' }, { timeout: 5000 }));
-    expect(await panel.findByText(/^Imported by Ines Calder on .* \(from spring-edits\.csv\)$/)).toBeInTheDocument();
+    expect(
+      await panel.findByText(/^Imported by Ines Calder on .* \(from spring-edits\.csv\)$/, {}, { timeout: 5000 }),
+    ).toBeInTheDocument();
     expect(panel.getByText('heightCm')).toBeInTheDocument();
     expect(panel.getByText(/\{"min":30,"max":75\} → \{"min":30,"max":90\}/)).toBeInTheDocument();
     expect(panel.getByText(/source: usda-plants/)).toBeInTheDocument();
 
     await user.click(panel.getByRole('button', { name: 'Undo this change' }));
-    const dialog = within(await screen.findByRole('dialog', { name: 'Undo this change?' }));
+    const dialog = within(await screen.findByRole('dialog', { name: 'Undo this change?' }, { timeout: 5000 }));
     await user.click(dialog.getByRole('button', { name: 'Undo' }));
     await screen.findByRole('region', { name: 'Changes to this record' });
     expect(api.calls.find((c) => c.method === 'POST')).toMatchObject({
