@@ -44,7 +44,7 @@ describe('hardening: passwords, CSV cells and encodings, caps (e2e)', () => {
     await t.http
       .post('/api/auth/register')
       .send({ email: 'juniper.okafor@example.org', password: 'lantern-gravel-oboe', displayName: 'Juniper Okafor' })
-      .expect(201);
+      .expect(202);
   });
 
   // OWASP "CSV Injection": cells starting with = + - @ are run as formulas by spreadsheet programs.

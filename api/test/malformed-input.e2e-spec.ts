@@ -110,6 +110,13 @@ const cases: Case[] = [
   },
   { what: 'register with an array body', method: 'post', url: '/api/auth/register', body: [1, 2], field: 'body' },
   {
+    what: 'a sign-up confirmation with a made-up link',
+    method: 'post',
+    url: '/api/auth/register/confirm',
+    body: { token: '../../etc/passwd' },
+    field: 'token',
+  },
+  {
     what: 'sign-in nested 2,000 levels deep',
     method: 'post',
     url: '/api/auth/login',
@@ -683,6 +690,7 @@ describe('malformed input on every writing route (e2e)', () => {
     const db = t.app.get(DataSource);
     return db.query(`SELECT
       (SELECT COUNT(*) FROM users) AS users,
+      (SELECT COUNT(*) FROM pending_registrations) AS pendingRegistrations,
       (SELECT group_concat(role) FROM (SELECT role FROM users ORDER BY id)) AS roles,
       (SELECT COUNT(*) FROM group_memberships) AS memberships,
       (SELECT COUNT(*) FROM saved_mixes) AS savedMixes,
@@ -738,6 +746,7 @@ describe('malformed input on every writing route (e2e)', () => {
       'patch /api/users/:id/role',
       'post /api/auth/login',
       'post /api/auth/register',
+      'post /api/auth/register/confirm',
       'post /api/calendar',
       'post /api/calendar.csv',
       'post /api/calendar.ics',

@@ -67,10 +67,10 @@ describe('OpenAPI document (e2e)', () => {
       .map((o) => `${o.method.toUpperCase()} ${o.route}`);
     expect(undocumented).toEqual([]);
     const register = operations.find((o) => o.route === '/api/auth/register')!.op;
-    expect(Object.keys(register.responses!['201'].content!['application/json'].schema!.properties!).sort()).toEqual([
-      'accessToken',
-      'expiresIn',
-      'user',
+    expect(Object.keys(register.responses!['202'].content!['application/json'].schema!.properties!).sort()).toEqual([
+      'email',
+      'expiresInHours',
+      'status',
     ]);
     expect(register.responses!['400'].content!['application/json'].schema!.properties).toHaveProperty('fields');
   });

@@ -1,8 +1,19 @@
 import { Controller, Get, HttpCode, Post } from '@nestjs/common';
-import { ApiConflictResponse, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
+import {
+  ApiConflictResponse,
+  ApiGoneResponse,
+  ApiNotFoundResponse,
+  ApiTags,
+  ApiTooManyRequestsResponse,
+} from '@nestjs/swagger';
 import {
   type AuthResponse,
   authResponseSchema,
+  type ConfirmRegistrationRequest,
+  confirmRegistrationRequestSchema,
+  confirmRegistrationResponseSchema,
+  type RegisterAccepted,
+  registerAcceptedSchema,
   type LoginRequest,
   loginRequestSchema,
   type RegisterRequest,
@@ -15,6 +26,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { UsersService } from '../users/users.service.js';
 import { AuthService } from './auth.service.js';
+import { RegistrationService } from './registration.service.js';
 import type { AuthenticatedUser } from './authenticated-user.js';
 
 @ApiTags('auth')
@@ -23,13 +35,27 @@ export class AuthController {
   constructor(
     private readonly auth: AuthService,
     private readonly users: UsersService,
+    private readonly registration: RegistrationService,
   ) {}
 
+  /** Always "check your e-mail", whether or not the address has an account; the e-mail says which. */
   @Post('auth/register')
-  @ZodResponse(authResponseSchema, 201)
-  @ApiConflictResponse({ description: 'E-mail already registered' })
-  register(@ZodBody(registerRequestSchema) dto: RegisterRequest): Promise<AuthResponse> {
-    return this.auth.register(dto);
+  @ZodResponse(registerAcceptedSchema, 202)
+  @HttpCode(202)
+  register(@ZodBody(registerRequestSchema) dto: RegisterRequest): Promise<RegisterAccepted> {
+    return this.registration.register(dto);
+  }
+
+  /** The link in the confirmation e-mail: makes the account and signs the person in. */
+  @Post('auth/register/confirm')
+  @ZodResponse(confirmRegistrationResponseSchema, 201)
+  @ApiNotFoundResponse({ description: 'The link was already used or is not one we sent' })
+  @ApiGoneResponse({ description: 'The link is too old' })
+  @ApiConflictResponse({ description: 'The address got an account another way meanwhile' })
+  confirm(
+    @ZodBody(confirmRegistrationRequestSchema) dto: ConfirmRegistrationRequest,
+  ): Promise<AuthResponse & { next: string | null }> {
+    return this.registration.confirm(dto);
   }
 
   @Post('auth/login')

@@ -7,6 +7,8 @@ import { UsersModule } from '../users/users.module.js';
 import { AuthController } from './auth.controller.js';
 import { AuthService } from './auth.service.js';
 import { JwtStrategy } from './jwt.strategy.js';
+import { PendingRegistrationRow } from './pending-registration.entity.js';
+import { RegistrationService } from './registration.service.js';
 import { SignInBackoffService } from './sign-in-backoff.service.js';
 import { SignInFailureRow } from './sign-in-failure.entity.js';
 import { signInRateLimit } from './sign-in-rate-limit.js';
@@ -14,7 +16,7 @@ import { signInRateLimit } from './sign-in-rate-limit.js';
 @Module({
   imports: [
     UsersModule,
-    TypeOrmModule.forFeature([SignInFailureRow]),
+    TypeOrmModule.forFeature([SignInFailureRow, PendingRegistrationRow]),
     PassportModule,
     JwtModule.registerAsync({
       inject: [APP_CONFIG],
@@ -25,7 +27,7 @@ import { signInRateLimit } from './sign-in-rate-limit.js';
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy, SignInBackoffService],
+  providers: [AuthService, RegistrationService, JwtStrategy, SignInBackoffService],
   exports: [AuthService, SignInBackoffService],
 })
 export class AuthModule implements NestModule {

@@ -1,12 +1,11 @@
 import { ForbiddenException, Inject, Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import type { AuthResponse, LoginRequest, RegisterRequest } from '@homeground/shared';
+import type { AuthResponse, LoginRequest } from '@homeground/shared';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { UsersService } from '../users/users.service.js';
 import type { JwtPayload } from './authenticated-user.js';
-import { assertStrongPassword } from './password-strength.js';
 import { SignInBackoffService } from './sign-in-backoff.service.js';
-import { DUMMY_HASH_PROMISE, hashPassword, verifyPassword } from './password.js';
+import { DUMMY_HASH_PROMISE, verifyPassword } from './password.js';
 
 @Injectable()
 export class AuthService {
@@ -16,16 +15,6 @@ export class AuthService {
     private readonly backoff: SignInBackoffService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
-
-  async register(dto: RegisterRequest): Promise<AuthResponse> {
-    assertStrongPassword(dto.password, dto);
-    const user = await this.users.create({
-      email: dto.email,
-      displayName: dto.displayName,
-      passwordHash: await hashPassword(dto.password),
-    });
-    return this.issueToken(user.id);
-  }
 
   async login(dto: LoginRequest): Promise<AuthResponse> {
     await this.backoff.assertAllowed(dto.email);

@@ -45,18 +45,42 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
   };
 }
 
-/** Registers a person through the API and returns their token. */
+/**
+ * The secret of the newest sign-up confirmation link e-mailed to `email`, read from the outbox as the
+ * local mail server received it (the API's own outbox route is for admins and organisers).
+ */
+export async function registrationToken(t: TestApp, email: string): Promise<string | null> {
+  const { DataSource } = await import('typeorm');
+  const rows: { text: string }[] = await t.app
+    .get(DataSource)
+    .query(`SELECT text FROM outbox_messages WHERE kind = 'registration' AND "to" LIKE ? ORDER BY received_at DESC`, [
+      `%${email.toLowerCase()}%`,
+    ]);
+  for (const row of rows) {
+    const match = /\/register\/confirm\/([A-Za-z0-9_-]{43})/.exec(row.text);
+    if (match) return match[1];
+  }
+  return null;
+}
+
+/**
+ * Registers a person through the API as they would: sign up (202, "check your e-mail"), open the
+ * link from the e-mail, and come back signed in. Returns their token.
+ */
 export async function registerUser(
   t: TestApp,
   who: { email: string; password?: string; displayName?: string },
 ): Promise<{ token: string; id: string }> {
-  const res = await t.http
+  await t.http
     .post('/api/auth/register')
     .send({
       email: who.email,
       password: who.password ?? 'correct-horse-battery',
       displayName: who.displayName ?? 'Test Grower',
     })
-    .expect(201);
+    .expect(202);
+  const token = await registrationToken(t, who.email);
+  if (!token) throw new Error(`No confirmation e-mail reached ${who.email}`);
+  const res = await t.http.post('/api/auth/register/confirm').send({ token }).expect(201);
   return { token: res.body.accessToken, id: res.body.user.id };
 }

@@ -30,14 +30,42 @@ export const newPasswordSchema = z
 /** The name a person's group sees. */
 export const displayNameSchema = z.string().trim().min(1, 'must not be empty').max(80, 'must be at most 80 characters');
 
+/** A path on this site to return to after a link in an e-mail (never another site: no `//host`). */
+export const returnPathSchema = z
+  .string()
+  .max(300, 'must be at most 300 characters')
+  .regex(/^\/(?![/\\])[^\s]*$/, 'must be a path on this site, starting with /');
+
 export const registerRequestSchema = z
   .object({
     email: emailSchema,
     password: newPasswordSchema,
     displayName: displayNameSchema,
+    /** Where the confirmation link brings the person back to (e.g. the page that sent them to register). */
+    next: returnPathSchema.optional(),
   })
   .strict();
 export type RegisterRequest = z.infer<typeof registerRequestSchema>;
+
+/** Hours a sign-up confirmation link stays valid (common practice: one to two days). */
+export const REGISTRATION_HOURS = 48;
+
+/**
+ * What `POST /api/auth/register` answers, the same whether or not the address already has an account,
+ * so the form tells a stranger nothing about who uses Homeground. The e-mail says the rest.
+ */
+export interface RegisterAccepted {
+  status: 'check-your-email';
+  email: string;
+  expiresInHours: number;
+}
+
+/** The secret part of a sign-up confirmation link: 43 base64url characters (32 random bytes). */
+export const registrationTokenSchema = z.string().regex(/^[A-Za-z0-9_-]{43}$/, 'is not a confirmation link we sent');
+
+/** `POST /api/auth/register/confirm`: the secret from the e-mailed link. */
+export const confirmRegistrationRequestSchema = z.object({ token: registrationTokenSchema }).strict();
+export type ConfirmRegistrationRequest = z.infer<typeof confirmRegistrationRequestSchema>;
 
 export const loginRequestSchema = z
   .object({

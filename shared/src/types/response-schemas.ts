@@ -6,6 +6,7 @@ import {
 } from '../sowing-calendar/calendar-types.js';
 import {
   type AuthResponse,
+  type RegisterAccepted,
   GLOBAL_ROLES,
   GROUP_ROLES,
   type Group,
@@ -88,6 +89,17 @@ export const authResponseSchema = z.object({
   expiresIn: z.number().describe('seconds until the token expires'),
   user: userResponseSchema,
 }) satisfies z.ZodType<AuthResponse>;
+
+export const registerAcceptedSchema = z.object({
+  status: z.literal('check-your-email'),
+  email: z.string().describe('the address the confirmation was sent to'),
+  expiresInHours: z.number().describe('how long the link in the e-mail works'),
+}) satisfies z.ZodType<RegisterAccepted>;
+
+/** A confirmed sign-up: the new account's sign-in, and the page the person came from, if any. */
+export const confirmRegistrationResponseSchema = authResponseSchema.extend({
+  next: z.string().nullable().describe('a path on this site to return to, if the sign-up form had one'),
+});
 
 export const groupResponseSchema = z.object({
   id: z.string(),

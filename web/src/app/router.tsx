@@ -43,6 +43,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             page(paths.register.path, async () => ({
               Component: (await import('../routes/register.js')).RegisterRoute,
             })),
+            page(paths.confirmRegistration.path, async () => ({
+              Component: (await import('../routes/confirm-registration.js')).ConfirmRegistrationRoute,
+            })),
             page(paths.account.path, async () => ({ Component: (await import('../routes/account.js')).AccountRoute })),
             page(paths.findPlants.path, async () => ({
               Component: (await import('../routes/find-plants.js')).FindPlantsRoute,

@@ -29,6 +29,11 @@ export const paths = {
     parse: parseNext,
   },
   register: { path: '/register', build: (next?: string) => withNext('/register', next), parse: parseNext },
+  /** The link in a sign-up confirmation e-mail. */
+  confirmRegistration: {
+    path: '/register/confirm/:token',
+    build: (token: string) => `/register/confirm/${encodeURIComponent(token)}`,
+  },
   account: { path: '/account', build: () => '/account' },
   findPlants: {
     path: '/find-plants',

@@ -22,7 +22,7 @@ export function RegisterRoute() {
     <div className={styles.column}>
       <PageIntro title={t('register.title')}>{t('register.intro')}</PageIntro>
       <ContentCard>
-        <RegisterForm onRegistered={session.signIn} />
+        <RegisterForm next={next} />
       </ContentCard>
       <p className={styles.switch}>
         {t('register.haveAccount')} <RouterLink to={paths.signIn.build(next)}>{t('register.signIn')}</RouterLink>

@@ -150,7 +150,7 @@ export function ZodFormFields(schema: z.ZodType): ParameterDecorator {
  */
 export function ZodResponse(
   schema: z.ZodType,
-  status: 200 | 201 = 200,
+  status: 200 | 201 | 202 = 200,
   description = 'OK',
 ): ReturnType<typeof ApiResponse> {
   return ApiResponse({ status, description, schema: openApiSchema(schema, 'output') });

@@ -1,6 +1,6 @@
 import type { AuthResponse } from '@homeground/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { login, register } from './auth.api.js';
+import { confirmRegistration, login, register } from './auth.api.js';
 import { authKeys } from './auth.queries.js';
 
 /** Seeds the profile query with the user the auth answer already carries, saving a /api/me trip. */
@@ -15,6 +15,10 @@ export function useLoginMutation() {
 }
 
 export function useRegisterMutation() {
+  return useMutation({ mutationFn: register });
+}
+
+export function useConfirmRegistrationMutation() {
   const seedProfile = useSeedProfile();
-  return useMutation({ mutationFn: register, onSuccess: seedProfile });
+  return useMutation({ mutationFn: confirmRegistration, onSuccess: seedProfile });
 }

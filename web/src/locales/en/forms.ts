@@ -36,6 +36,19 @@ export const forms = {
     pending: 'Creating your account…',
     haveAccount: 'Already have an account?',
     signIn: 'Sign in',
+    checkTitle: 'Check your e-mail',
+    checkBody:
+      'We sent a message to {{email}}. Open the link in it within {{hours}} hours to finish: your account is made when you do.',
+    checkElse:
+      'Nothing there after a few minutes? Look in your spam folder, or send the form again. If you already have an account, the message says so.',
+    again: 'Use another address',
+  },
+  confirm: {
+    title: 'Confirming your address',
+    working: 'Making your account',
+    failedTitle: 'This link did not work',
+    signUpAgain: 'Sign up again',
+    signIn: 'Sign in',
   },
   account: {
     title: 'Your account',

@@ -34,6 +34,19 @@ export const forms = {
     pending: 'Creando tu cuenta…',
     haveAccount: '¿Ya tienes una cuenta?',
     signIn: 'Entra',
+    checkTitle: 'Revisa tu correo',
+    checkBody:
+      'Te enviamos un mensaje a {{email}}. Abre el enlace dentro de {{hours}} horas para terminar: tu cuenta se crea cuando lo abras.',
+    checkElse:
+      '¿No llegó nada en unos minutos? Mira en la carpeta de correo no deseado o envía el formulario otra vez. Si ya tienes una cuenta, el mensaje te lo dice.',
+    again: 'Usar otra dirección',
+  },
+  confirm: {
+    title: 'Confirmando tu dirección',
+    working: 'Creando tu cuenta',
+    failedTitle: 'Este enlace no funcionó',
+    signUpAgain: 'Regístrate de nuevo',
+    signIn: 'Entra',
   },
   account: {
     title: 'Tu cuenta',

@@ -20,9 +20,16 @@ describe('fieldErrorsFromZod', () => {
 describe('describeAuthFailure', () => {
   const fields = ['email', 'password', 'displayName'] as const;
 
-  it('puts a 409 on register beside the e-mail field', () => {
-    const error = new ApiRequestError({ statusCode: 409, error: 'Conflict', message: 'E-mail taken' });
-    expect(describeAuthFailure(error, 'register', fields).fields.email).toMatch(/already exists/);
+  it('says a wrong password on sign-in above the form, with no field marked', () => {
+    const error = new ApiRequestError({
+      statusCode: 401,
+      error: 'Unauthorized',
+      message: 'E-mail or password is wrong.',
+    });
+    expect(describeAuthFailure(error, 'sign-in', fields)).toEqual({
+      fields: {},
+      message: 'E-mail or password is wrong',
+    });
   });
 
   it('shows server field messages beside known fields and the rest above the form', () => {

@@ -1,0 +1,101 @@
+import { createHash, randomBytes } from 'node:crypto';
+import { ConflictException, GoneException, Inject, Injectable, Logger, NotFoundException } from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import {
+  type AuthResponse,
+  type ConfirmRegistrationRequest,
+  type RegisterAccepted,
+  type RegisterRequest,
+  REGISTRATION_HOURS,
+} from '@homeground/shared';
+import { DataSource, LessThan, Repository } from 'typeorm';
+import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
+import { MailService } from '../mail/mail.service.js';
+import { UsersService } from '../users/users.service.js';
+import { AuthService } from './auth.service.js';
+import { hashPassword } from './password.js';
+import { assertStrongPassword } from './password-strength.js';
+import { PendingRegistrationRow } from './pending-registration.entity.js';
+import { alreadyRegisteredEmail, confirmRegistrationEmail } from './registration-email.js';
+
+const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
+
+/**
+ * Sign-up in two steps, so the form never says whether an address has an account (OWASP Authentication
+ * Cheat Sheet, "account enumeration"): register always answers "check your e-mail"; a new address gets a
+ * link that makes the account, a known one gets a note saying it already has one.
+ */
+@Injectable()
+export class RegistrationService {
+  private readonly logger = new Logger('Registration');
+
+  constructor(
+    @InjectRepository(PendingRegistrationRow) private readonly pending: Repository<PendingRegistrationRow>,
+    @InjectDataSource() private readonly db: DataSource,
+    private readonly users: UsersService,
+    private readonly auth: AuthService,
+    private readonly mail: MailService,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {}
+
+  async register(dto: RegisterRequest, now = new Date()): Promise<RegisterAccepted> {
+    assertStrongPassword(dto.password, dto);
+    const email = dto.email.toLowerCase();
+    // Hashed on both paths, so a known address takes as long to answer as a new one.
+    const passwordHash = await hashPassword(dto.password);
+    // Expired sign-ups hold a name, an address and a password hash: keep them no longer than the link works.
+    await this.pending.delete({ expiresAt: LessThan(now) });
+    if (await this.users.findByEmail(email)) {
+      const message = alreadyRegisteredEmail({ signInLink: `${this.config.publicUrl}/sign-in` });
+      await this.mail.send({ to: email, ...message, kind: 'registration' });
+    } else {
+      const token = randomBytes(32).toString('base64url');
+      await this.db.transaction(async (tx) => {
+        // A newer sign-up for the same address replaces the older one (its link stops working).
+        await tx.delete(PendingRegistrationRow, { email });
+        await tx.insert(PendingRegistrationRow, {
+          email,
+          displayName: dto.displayName,
+          passwordHash,
+          tokenHash: hashToken(token),
+          returnPath: dto.next ?? null,
+          expiresAt: new Date(now.getTime() + REGISTRATION_HOURS * 3_600_000),
+          createdAt: now,
+        });
+      });
+      const link = `${this.config.publicUrl}/register/confirm/${token}`;
+      const message = confirmRegistrationEmail({ displayName: dto.displayName, link, hours: REGISTRATION_HOURS });
+      await this.mail.send({ to: email, ...message, kind: 'registration' });
+      if (this.mail.isLocal && !this.config.isProduction) {
+        // Development only: the local outbox is for admins, so a person trying the app finds their link here.
+        this.logger.log(`Sign-up link for ${email} (local mail, development): ${link}`);
+      }
+    }
+    return { status: 'check-your-email', email, expiresInHours: REGISTRATION_HOURS };
+  }
+
+  /** Opens the e-mailed link: makes the account, forgets the pending row, signs the person in. */
+  async confirm(req: ConfirmRegistrationRequest, now = new Date()): Promise<AuthResponse & { next: string | null }> {
+    const row = await this.pending.findOne({ where: { tokenHash: hashToken(req.token) } });
+    if (!row)
+      throw new NotFoundException(
+        'This confirmation link was already used or is not one we sent: sign in, or sign up again.',
+      );
+    if (row.expiresAt.getTime() <= now.getTime()) {
+      await this.pending.delete({ id: row.id });
+      throw new GoneException(`This confirmation link is more than ${REGISTRATION_HOURS} hours old: sign up again.`);
+    }
+    if (await this.users.findByEmail(row.email)) {
+      // Someone joined with this address another way (an invitation) since the link was sent.
+      await this.pending.delete({ id: row.id });
+      throw new ConflictException('This address already has an account: sign in instead.');
+    }
+    const user = await this.users.create({
+      email: row.email,
+      displayName: row.displayName,
+      passwordHash: row.passwordHash,
+    });
+    await this.pending.delete({ id: row.id });
+    return { ...(await this.auth.tokenFor(user.id)), next: row.returnPath };
+  }
+}
