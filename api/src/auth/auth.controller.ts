@@ -16,6 +16,7 @@ import { ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { UsersService } from '../users/users.service.js';
 import { AuthService } from './auth.service.js';
 import type { AuthenticatedUser } from './authenticated-user.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 @ApiTags('auth')
 @Controller()
@@ -25,6 +26,7 @@ export class AuthController {
     private readonly users: UsersService,
   ) {}
 
+  @Public()
   @Post('auth/register')
   @ZodResponse(authResponseSchema, 201)
   @ApiConflictResponse({ description: 'E-mail already registered' })
@@ -32,6 +34,7 @@ export class AuthController {
     return this.auth.register(dto);
   }
 
+  @Public()
   @Post('auth/login')
   @ZodResponse(authResponseSchema)
   @HttpCode(200)
