@@ -202,6 +202,7 @@ try {
       `machine: ${cpus().length} cores, load average ${loadavg()[0].toFixed(1)} (1 min)`,
   );
   const rows: Record<string, string | number>[] = [];
+  let confirmedReservations = 0;
   for (const s of scenarios) {
     // The bare server answers every request with the bytes of one real answer of this route.
     const sample = await fetch(`${base}${s.paths?.[0] ?? s.path}`, {
@@ -213,6 +214,7 @@ try {
     const bare = await startBareServer(bytes, 'application/json; charset=utf-8');
     stops.push(bare.stop);
     const ours = await run(base, s);
+    if (s.path.endsWith('/reservations')) confirmedReservations = ours.requests - ours.non2xx;
     const ceiling = await run(bare.url, { ...s, headers: {}, amount: s.amount });
     await bare.stop();
     stops.pop();
@@ -245,6 +247,19 @@ try {
   }
   console.log('\nsummary (ratios to a bare node:http server on the same machine, same run):');
   console.table(rows);
+  // Confirmation e-mails go out after the answers: let the local outbox catch up (at most 30 s) before
+  // stopping, so the stop does not cut off a message being handed over.
+  const waitedFrom = performance.now();
+  let queued = true;
+  while (queued && performance.now() - waitedFrom < 30_000) {
+    const outbox = await fetch(`${base}/api/outbox?kind=plant-share-reservation`, { headers: mara.auth });
+    queued = ((await outbox.json()) as unknown[]).length < confirmedReservations;
+    if (queued) await new Promise((r) => setTimeout(r, 250));
+  }
+  if (queued)
+    console.log(
+      '(stopping with confirmation e-mails still queued: the local mail server refuses the rest as it stops)',
+    );
 } finally {
   for (const stop of stops) await stop();
   await api.stop();
