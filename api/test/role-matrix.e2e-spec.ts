@@ -138,6 +138,8 @@ describe('role matrix generated from the controllers (e2e, demo data)', () => {
     const personas: Persona[] = ['anonymous', 'member', 'grower', 'organiser', 'curator', 'admin'];
     const wrong: string[] = [];
     let calls = 0;
+    /** Group routes read without a body: the group's own check (in its service) answers before any validation. */
+    const groupReads = new Map<string, Partial<Record<Persona, number>>>();
     // Every write here has an empty body or an unknown id, so one that passes its guard is refused by
     // validation or lookup and changes nothing the next persona's call meets. Admins come last.
     for (const persona of personas) {
@@ -150,6 +152,8 @@ describe('role matrix generated from the controllers (e2e, demo data)', () => {
         if (['POST', 'PUT', 'PATCH'].includes(r.method)) req = req.send({});
         const status = (await req).status;
         calls++;
+        if (r.method === 'GET' && d.kind === 'signed-in' && r.path.startsWith('/api/groups/:slug/'))
+          groupReads.set(url, { ...groupReads.get(url), [persona]: status });
         let expected: 'through' | 401 | 403;
         if (d.kind !== 'signed-in') expected = 'through';
         else if (persona === 'anonymous') expected = 401;
@@ -168,6 +172,22 @@ describe('role matrix generated from the controllers (e2e, demo data)', () => {
     }
     expect(calls).toBeGreaterThan(6 * 60);
     expect(wrong).toEqual([]);
+
+    // Group roles, for every group page read: the group's organiser and an admin are never refused; someone
+    // outside the group (the curator) always is; and the roles nest, member ⊂ grower ⊂ organiser, so a
+    // page a member may read a grower may too, and one a grower may read the organiser may too.
+    expect(groupReads.size).toBeGreaterThan(10);
+    for (const [url, by] of groupReads) {
+      const through = (p: Persona) => by[p] !== 403 && by[p] !== 401;
+      const line = `${url}: ${JSON.stringify(by)}`;
+      expect([line, through('organiser'), through('admin'), by.curator]).toEqual([line, true, true, 403]);
+      if (through('member')) expect([line, through('grower')]).toEqual([line, true]);
+      if (through('grower')) expect([line, through('organiser')]).toEqual([line, true]);
+    }
+    // And the roles do differ somewhere (else the nesting above would hold vacuously).
+    const reads = [...groupReads.values()];
+    expect(reads.some((by) => by.member === 403 && by.grower !== 403)).toBe(true);
+    expect(reads.some((by) => by.grower === 403 && by.organiser !== 403)).toBe(true);
   });
 
   it('keeps the curator and admin routes to their roles (a sample, named, so the matrix above is not vacuous)', () => {
