@@ -30,8 +30,11 @@ export async function backupSqlite(source: string, destination: string): Promise
   } finally {
     db.close();
   }
-  const copy = new Database(destination, { readonly: true, fileMustExist: true });
+  // The copy keeps the source's WAL mode; switched to a rollback journal it is one self-contained file
+  // (no -wal or -shm beside it), which is what gets copied back on a restore. The API turns WAL on again.
+  const copy = new Database(destination, { fileMustExist: true });
   try {
+    copy.pragma('journal_mode = DELETE');
     const integrity = String(copy.pragma('integrity_check', { simple: true }));
     if (integrity !== 'ok') throw new Error(`the backup ${destination} failed its integrity check: ${integrity}`);
     return { file: destination, kind: 'sqlite', pages, integrity };
