@@ -1,5 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import { SPECIES_CSV_COLUMNS, speciesToCsvRow } from '@homeground/shared';
 import { loadCatalogue } from '@homeground/species-data';
+import Papa from 'papaparse';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
 
@@ -27,11 +29,13 @@ interface Case {
   /** A URL-encoded form body, as a browser form would send it. */
   form?: string;
   /** A multipart upload: form field name and file contents. */
-  upload?: { field: string; contents: string };
+  upload?: { field: string; contents: string | Buffer };
   /** Text fields sent with a multipart form (with or without a file). */
   formFields?: Record<string, string>;
   /** The field the 400 must name. */
   field: string;
+  /** Which surface it probes, for the count per kind (forms by default; GET cases are queries). */
+  kind?: 'import';
 }
 
 const UUID = '0b7b1d1e-4a4f-4c59-9d4a-0d1f4e8b9c21';
@@ -55,6 +59,33 @@ const reservation = {
   lines: [{ speciesSlug: 'zizia-aurea', count: 1 }],
 };
 const newRecord = { ...record, slug: 'malformed-test-species' };
+/** A species CSV in the export's columns: the catalogue's first record as a new species, edited by `edit`. */
+const csvFile = (
+  edit: (row: Record<string, string>) => void = () => {},
+  rows = 1,
+  columns = [...SPECIES_CSV_COLUMNS],
+) => {
+  const data = Array.from({ length: rows }, () => {
+    const row = { ...(speciesToCsvRow(newRecord) as unknown as Record<string, string>) };
+    edit(row);
+    return row;
+  });
+  return Papa.unparse({ fields: columns, data }, { newline: '\r\n' });
+};
+const importCase = (what: string, contents: string | Buffer, field: string): Case => ({
+  what,
+  method: 'post',
+  url: '/api/species/import',
+  upload: { field: 'file', contents },
+  field,
+  kind: 'import',
+});
+const booking = {
+  name: 'Priya Vantongeren',
+  zip: '54665',
+  slotId: UUID,
+  lines: [{ speciesSlug: 'zizia-aurea', count: 1 }],
+};
 const square = [
   [-90, 43],
   [-89, 43],
@@ -663,6 +694,157 @@ const cases: Case[] = [
     body: { kind: 'sown', count: 1, date: '2026-11-01', note: huge },
     field: 'note',
   },
+  // the cases found by trying the running app (issue 15), each refused now
+  {
+    what: 'a password from the common-password lists ("password12")',
+    method: 'post',
+    url: '/api/auth/register',
+    body: { email: 'sol.marchetti@example.org', password: 'password12', displayName: 'Sol Marchetti' },
+    field: 'password',
+  },
+  {
+    what: 'a password that is a digit run ("1234567890")',
+    method: 'post',
+    url: '/api/auth/register',
+    body: { email: 'sol.marchetti@example.org', password: '1234567890', displayName: 'Sol Marchetti' },
+    field: 'password',
+  },
+  {
+    what: 'an area of ten million m²',
+    method: 'post',
+    url: '/api/quantities',
+    body: { areaSqM: 1e7, species: [{ slug: 'zizia-aurea' }] },
+    field: 'areaSqM',
+  },
+  {
+    what: 'an area of 1e308 m²',
+    method: 'post',
+    url: '/api/quantities',
+    body: { areaSqM: 1e308, species: [{ slug: 'zizia-aurea' }] },
+    field: 'areaSqM',
+  },
+  {
+    what: '10,000 locked species',
+    method: 'post',
+    url: '/api/mixes/balance',
+    body: { site, region, options: { locked: slugs(10_000), excluded: [] } },
+    field: 'options.locked',
+  },
+  {
+    what: 'a saved mix of 50,000 species',
+    method: 'post',
+    url: '/api/mixes',
+    body: { name: 'Everything', request: { site, region }, chosen: slugs(50_000) },
+    field: 'chosen',
+  },
+  {
+    what: 'a reservation e-mail without an @',
+    method: 'post',
+    url: '/api/plant-shares/larkfield-commons-growers/reservations',
+    body: { ...booking, email: 'priya.example.org' },
+    field: 'email',
+  },
+  {
+    what: 'a reservation ZIP of letters',
+    method: 'post',
+    url: '/api/plant-shares/larkfield-commons-growers/reservations',
+    body: { ...booking, email: 'priya.vantongeren@example.org', zip: 'ABCDE' },
+    field: 'zip',
+  },
+  {
+    what: 'a batch log dated 30 February',
+    method: 'post',
+    url: `/api/groups/larkfield-commons-growers/season/batches/${UUID}/log`,
+    body: { kind: 'sown', count: 1, date: '2027-02-30' },
+    field: 'date',
+  },
+  {
+    what: 'a batch log loss without a reason',
+    method: 'post',
+    url: `/api/groups/larkfield-commons-growers/season/batches/${UUID}/log`,
+    body: { kind: 'lost', count: 1, date: '2026-11-01' },
+    field: 'reason',
+  },
+  // imports
+  importCase(
+    'a CSV import with a formula in a cell',
+    csvFile((r) => (r.family = '=HYPERLINK("http://example.org")')),
+    'family',
+  ),
+  importCase(
+    'a CSV import with a cell starting with @',
+    csvFile((r) => (r.commonNames = '@SUM(A1:A9)')),
+    'commonNames',
+  ),
+  importCase(
+    'a CSV import in Windows-1252',
+    Buffer.from(
+      csvFile((r) => (r.commonNames = 'prairie café')),
+      'latin1',
+    ),
+    'file',
+  ),
+  importCase(
+    'a CSV import in UTF-16',
+    Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(csvFile(), 'utf16le')]),
+    'file',
+  ),
+  importCase(
+    'a CSV import of a PNG',
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]),
+    'file',
+  ),
+  importCase('an empty CSV import', '', 'file'),
+  importCase('a CSV import with only a header', csvFile(undefined, 0), 'row'),
+  importCase(
+    'a CSV import without the family column',
+    csvFile(
+      undefined,
+      1,
+      SPECIES_CSV_COLUMNS.filter((c) => c !== 'family'),
+    ),
+    'family',
+  ),
+  importCase(
+    'a CSV import with a height as a word',
+    csvFile((r) => (r.heightMaxCm = 'tall')),
+    'heightMaxCm',
+  ),
+  importCase('a CSV import with the same slug twice', csvFile(undefined, 2), 'slug'),
+  importCase(
+    'a CSV import with a sun level that does not exist',
+    csvFile((r) => (r.sun = 'blazing')),
+    'sun',
+  ),
+  importCase(
+    'a CSV import with a bloom month 13',
+    csvFile((r) => (r.bloomMonths = '6;13')),
+    'bloomMonths',
+  ),
+  importCase(
+    'a CSV import with a malformed slug',
+    csvFile((r) => (r.slug = 'Not A Slug!')),
+    'slug',
+  ),
+  // queries
+  { what: 'a bloom month 13', method: 'get', url: '/api/species?bloomMonth=13', field: 'bloomMonth' },
+  { what: 'page 0', method: 'get', url: '/api/species?page=0', field: 'page' },
+  { what: 'a negative minimum height', method: 'get', url: '/api/species?minHeightCm=-5', field: 'minHeightCm' },
+  { what: 'an ecoregion code 99', method: 'get', url: '/api/species?ecoregion=99', field: 'ecoregion' },
+  { what: 'a monarch filter of "maybe"', method: 'get', url: '/api/species?monarchHost=maybe', field: 'monarchHost' },
+  { what: 'a sort that does not exist', method: 'get', url: '/api/species?sort=colour', field: 'sort' },
+  { what: 'a latitude as a word', method: 'get', url: '/api/places/lookup?lat=north&lon=-90', field: 'lat' },
+  { what: 'an outbox kind in capitals and spaces', method: 'get', url: '/api/outbox?kind=ALL%20MAIL', field: 'kind' },
+  { what: 'an ecoregion page for code 99', method: 'get', url: '/api/ecoregions/99', field: 'code' },
+  { what: 'a species page at a malformed slug', method: 'get', url: '/api/species/Not_A_Slug', field: 'slug' },
+  { what: 'a reservation link too short to be ours', method: 'get', url: '/api/reservations/abc', field: 'token' },
+  { what: 'an invitation link too short to be ours', method: 'get', url: '/api/invitations/abc', field: 'token' },
+  {
+    what: 'a batch id that is not a UUID',
+    method: 'get',
+    url: '/api/groups/larkfield-commons-growers/season/batches/42',
+    field: 'id',
+  },
   { what: 'a page size of a billion', method: 'get', url: '/api/species?pageSize=1000000000', field: 'pageSize' },
   { what: 'a 5,000-character search', method: 'get', url: `/api/species?q=${huge.slice(0, 5000)}`, field: 'q' },
   { what: 'an unknown species filter', method: 'get', url: '/api/species?colour=blue', field: 'colour' },
@@ -717,8 +899,14 @@ describe('malformed input on every writing route (e2e)', () => {
   });
   afterAll(() => t.close());
 
-  it('has at least 30 cases across every writing route', () => {
-    expect(cases.length).toBeGreaterThanOrEqual(30);
+  it('has at least 60 cases across forms, queries and imports, and every writing route', () => {
+    const count = (kind: string) =>
+      cases.filter((c) => (c.kind ?? (c.method === 'get' ? 'query' : 'form')) === kind).length;
+    const counts = { all: cases.length, forms: count('form'), queries: count('query'), imports: count('import') };
+    console.log(`bad-input sweep: ${JSON.stringify(counts)}`);
+    expect(counts.all).toBeGreaterThanOrEqual(60);
+    expect(counts.queries).toBeGreaterThanOrEqual(15);
+    expect(counts.imports).toBeGreaterThanOrEqual(10);
     const routes = new Set(
       cases
         .filter((c) => c.method !== 'get')
@@ -781,6 +969,18 @@ describe('malformed input on every writing route (e2e)', () => {
     ]);
   });
 
+  // The issue's 100,000 locked species: over the 1 MB body limit, so refused before parsing, as too large.
+  it('answers 100,000 locked species (a body over 1 MB) with 413, writing nothing', async () => {
+    const before = await snapshot();
+    const res = await t.http
+      .post('/api/mixes/balance')
+      .send({ site, region, options: { locked: slugs(100_000), excluded: [] } });
+    expect(res.status).toBe(413);
+    expect(res.body).toMatchObject({ statusCode: 413, error: 'Payload Too Large' });
+    expect(res.body.message.length).toBeGreaterThan(10);
+    expect(await snapshot()).toEqual(before);
+  });
+
   it.each(cases.map((c) => [c.what, c] as const))(
     'answers %s with 400 naming the field, writing nothing',
     async (_what, c) => {
@@ -792,8 +992,8 @@ describe('malformed input on every writing route (e2e)', () => {
         for (const [k, v] of Object.entries(c.formFields ?? {})) req = req.field(k, v);
         if (c.upload)
           req = req.attach(c.upload.field, Buffer.from(c.upload.contents), {
-            filename: 'upload.txt',
-            contentType: 'text/plain',
+            filename: c.kind === 'import' ? 'species.csv' : 'upload.txt',
+            contentType: c.kind === 'import' ? 'text/csv' : 'text/plain',
           });
       } else if (c.body !== undefined) req = req.send(c.body as object);
       const res = await req;

@@ -28,6 +28,7 @@ import { UsersService } from '../users/users.service.js';
 import { AuthService } from './auth.service.js';
 import { RegistrationService } from './registration.service.js';
 import type { AuthenticatedUser } from './authenticated-user.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 @ApiTags('auth')
 @Controller()
@@ -39,6 +40,7 @@ export class AuthController {
   ) {}
 
   /** Always "check your e-mail", whether or not the address has an account; the e-mail says which. */
+  @Public()
   @Post('auth/register')
   @ZodResponse(registerAcceptedSchema, 202)
   @HttpCode(202)
@@ -47,6 +49,7 @@ export class AuthController {
   }
 
   /** The link in the confirmation e-mail: makes the account and signs the person in. */
+  @Public()
   @Post('auth/register/confirm')
   @ZodResponse(confirmRegistrationResponseSchema, 201)
   @ApiNotFoundResponse({ description: 'The link was already used or is not one we sent' })
@@ -58,6 +61,7 @@ export class AuthController {
     return this.registration.confirm(dto);
   }
 
+  @Public()
   @Post('auth/login')
   @ZodResponse(authResponseSchema)
   @HttpCode(200)

@@ -1,4 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
 import { PassportStrategy } from '@nestjs/passport';
 import { ExtractJwt, Strategy } from 'passport-jwt';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
@@ -11,12 +12,24 @@ export class JwtStrategy extends PassportStrategy(Strategy, 'jwt') {
   constructor(
     private readonly users: UsersService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
+    jwt: JwtService,
   ) {
+    const previous = config.jwtPreviousSecret;
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
       ignoreExpiration: false,
-      secretOrKey: config.jwtSecret,
       algorithms: ['HS256'],
+      // During a rotation a token signed with the previous secret is still verified (with it); every new
+      // token is signed with the current one, so the previous secret can go once the old tokens expire.
+      secretOrKeyProvider: (_req: unknown, raw: string, done: (err: unknown, key?: string) => void) => {
+        if (!previous) return done(null, config.jwtSecret);
+        try {
+          jwt.verify(raw, { secret: config.jwtSecret, algorithms: ['HS256'], ignoreExpiration: true });
+          done(null, config.jwtSecret);
+        } catch {
+          done(null, previous);
+        }
+      },
     });
   }
 

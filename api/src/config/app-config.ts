@@ -23,6 +23,10 @@ export interface AppConfig {
   webDist: string;
   jwtSecret: string;
   jwtExpiresInSeconds: number;
+  /** Accepted for verifying tokens during a secret rotation, never for signing. */
+  jwtPreviousSecret: string | null;
+  /** Origins allowed to call the API from a browser on another site; empty: none (CORS closed). */
+  corsOrigins: string[];
   demoData: boolean;
   loginThrottle: { limit: number; ttlMs: number };
   /** Express's `trust proxy` setting: which forwarding headers to believe (false: none). */
@@ -62,6 +66,8 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     DATABASE: config.get('DATABASE', { infer: true }),
     JWT_SECRET: config.get('JWT_SECRET', { infer: true }),
     JWT_EXPIRES_IN_SECONDS: config.get('JWT_EXPIRES_IN_SECONDS', { infer: true }),
+    JWT_PREVIOUS_SECRET: config.get('JWT_PREVIOUS_SECRET', { infer: true }),
+    CORS_ORIGINS: config.get('CORS_ORIGINS', { infer: true }),
     DEMO_DATA: config.get('DEMO_DATA', { infer: true }),
     WEB_DIST: config.get('WEB_DIST', { infer: true }),
     TRUST_PROXY: config.get('TRUST_PROXY', { infer: true }),
@@ -84,6 +90,8 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     webDist: fromRoot(env.WEB_DIST),
     jwtSecret: resolveJwtSecret(env, dataDir),
     jwtExpiresInSeconds: env.JWT_EXPIRES_IN_SECONDS,
+    jwtPreviousSecret: env.JWT_PREVIOUS_SECRET ?? null,
+    corsOrigins: env.CORS_ORIGINS,
     // Demo sign-ins must never exist in production, whatever the variable says.
     demoData: !isProduction && (env.DEMO_DATA ?? true),
     loginThrottle: { limit: env.LOGIN_THROTTLE_LIMIT, ttlMs: env.LOGIN_THROTTLE_TTL_SECONDS * 1000 },

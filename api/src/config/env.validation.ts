@@ -20,6 +20,27 @@ export const envSchema = z.object({
   /** When unset, a random secret is generated into DATA_DIR on first start and reused after. */
   JWT_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
   JWT_EXPIRES_IN_SECONDS: z.coerce.number().int().min(60).max(2_592_000).default(43_200),
+  /**
+   * During a secret rotation, the secret that signed the tokens still in people's hands: accepted for
+   * verification only (new tokens are signed with JWT_SECRET). Remove it once JWT_EXPIRES_IN_SECONDS has passed.
+   */
+  JWT_PREVIOUS_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
+  /**
+   * Other sites' origins allowed to call the API from a browser (CORS), comma-separated, e.g.
+   * `https://garden.example.org`. Unset (the default), no cross-origin browser call is allowed.
+   */
+  CORS_ORIGINS: z
+    .string()
+    .trim()
+    .default('')
+    .transform((v) => (v === '' ? [] : v.split(',').map((o) => o.trim())))
+    .pipe(
+      z.array(
+        z
+          .url({ protocol: /^https?$/, error: 'must list http:// or https:// origins' })
+          .refine((o) => new URL(o).origin === o, 'must list bare origins (scheme, host and port, no path or slash)'),
+      ),
+    ),
   /** Load the invented Larkfield demo group and people. Never honoured in production. */
   DEMO_DATA: booleanish.optional(),
   /** The built web app to serve; relative paths are from the project root. */

@@ -16,6 +16,7 @@ import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { type UploadedBlob, ZodFile, ZodParam, ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { EcoregionsService, type BoundaryImportResult } from './ecoregions.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 /** The EPA's own file is about 4.5 MB simplified and 25 MB at full resolution. */
 const MAX_BOUNDARY_BYTES = 40 * 1024 * 1024;
@@ -25,12 +26,14 @@ const MAX_BOUNDARY_BYTES = 40 * 1024 * 1024;
 export class EcoregionsController {
   constructor(private readonly ecoregions: EcoregionsService) {}
 
+  @Public()
   @Get()
   @ZodResponse(ecoregionListSchema)
   list(@ZodQuery(ecoregionListQuerySchema) query: EcoregionListQuery): Ecoregion[] {
     return this.ecoregions.list(query.state);
   }
 
+  @Public()
   @Get(':code')
   @ZodResponse(ecoregionSchema)
   get(@ZodParam('code', ecoregionCodeParamSchema) code: string): Ecoregion {
@@ -38,6 +41,7 @@ export class EcoregionsController {
   }
 
   /** The region's EPA outline for the map, simplified; null until an admin has imported the boundaries. */
+  @Public()
   @Get(':code/outline')
   @ZodResponse(ecoregionOutlineSchema)
   outline(@ZodParam('code', ecoregionCodeParamSchema) code: string): EcoregionOutline {

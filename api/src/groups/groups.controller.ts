@@ -15,18 +15,21 @@ import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { GroupsService, type GroupMemberDto } from './groups.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 @ApiTags('groups')
 @Controller('groups')
 export class GroupsController {
   constructor(private readonly groups: GroupsService) {}
 
+  @Public()
   @Get()
   @ZodResponse(z.array(groupResponseSchema))
   list(): Promise<Group[]> {
     return this.groups.list();
   }
 
+  @Public()
   @Get(':slug')
   @ZodResponse(groupResponseSchema)
   get(@ZodParam('slug', slugParamSchema) slug: string): Promise<Group> {

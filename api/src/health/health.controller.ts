@@ -14,10 +14,12 @@ import { DataSource } from 'typeorm';
 import { API_VERSION, APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { ZodResponse } from '../common/decorators/zod.decorators.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 const STARTED_AT = Date.now();
 
 @ApiTags('system')
+@Public()
 @Controller()
 export class HealthController {
   constructor(

@@ -21,6 +21,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { OptionalJwtAuthGuard } from '../common/guards/optional-jwt-auth.guard.js';
 import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { InvitationsService } from './invitations.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 @ApiTags('groups')
 @Controller()
@@ -47,6 +48,7 @@ export class InvitationsController {
   }
 
   /** What the link offers, for the page the invited person lands on. */
+  @Public()
   @Get('invitations/:token')
   @ApiGoneResponse({ description: 'Used or expired' })
   @ZodResponse(invitationPreviewSchema)

@@ -3,8 +3,10 @@ import { ApiTags } from '@nestjs/swagger';
 import { type PlaceLookup, placeLookupSchema, type PlaceQuery, placeQuerySchema } from '@homeground/shared';
 import { ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { PlacesService } from './places.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 @ApiTags('places')
+@Public()
 @Controller('places')
 export class PlacesController {
   constructor(private readonly places: PlacesService) {}

@@ -15,9 +15,11 @@ import { z } from 'zod';
 import { FileResponse, ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { CalendarService } from './calendar.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 /** Quantities and the sowing calendar for any list of species (a mix, a season plan, a batch). */
 @ApiTags('planning')
+@Public()
 @Controller()
 export class PlanningController {
   constructor(

@@ -29,6 +29,7 @@ import {
 import { ZodBody, ZodParam, ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { openApiSchema } from '../common/validation/openapi-schema.js';
 import { ReservationsService } from './reservations.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 const conflictDoc = ApiConflictResponse({
   description: 'All taken (with a waitlist offer), slot full, share paused or closed',
@@ -45,6 +46,7 @@ const forgedDoc = ApiForbiddenResponse({
  * group's organisers.
  */
 @ApiTags('plant share')
+@Public()
 @Controller()
 export class PublicShareController {
   constructor(private readonly reservations: ReservationsService) {}

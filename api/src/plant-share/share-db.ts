@@ -10,7 +10,7 @@ interface Statement {
 }
 interface NativeDatabase {
   prepare(sql: string): Statement;
-  transaction<T>(fn: () => T): () => T;
+  transaction<T>(fn: () => T): { immediate(): T };
 }
 
 /**
@@ -54,8 +54,13 @@ export class ShareDb {
     return this.statement(sql).get(...params) as T | undefined;
   }
 
-  /** Runs `work` as one transaction: all of it is written, or (when it throws) none of it. */
+  /**
+   * Runs `work` as one transaction: all of it is written, or (when it throws) none of it. BEGIN IMMEDIATE
+   * takes the write lock first, so another connection's write (a backup tool, an operator's sqlite3)
+   * makes it wait out the busy timeout; a deferred BEGIN would read first and then fail with
+   * SQLITE_BUSY on its stale snapshot, answering 500.
+   */
   atomically<T>(work: () => T): T {
-    return this.native.transaction(work)();
+    return this.native.transaction(work).immediate();
   }
 }

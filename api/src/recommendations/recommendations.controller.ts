@@ -14,10 +14,12 @@ import {
 import type { z } from 'zod';
 import { ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { MixesService } from './mixes.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 type Parsed<S extends z.ZodType> = z.infer<S>;
 
 @ApiTags('mixes')
+@Public()
 @Controller()
 export class RecommendationsController {
   constructor(private readonly mixes: MixesService) {}

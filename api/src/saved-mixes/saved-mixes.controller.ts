@@ -7,6 +7,7 @@ import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { SavedMixesService } from './saved-mixes.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 type Parsed<S extends z.ZodType> = z.infer<S>;
 
@@ -33,6 +34,7 @@ export class SavedMixesController {
   }
 
   /** A saved mix, for anyone who has its link. */
+  @Public()
   @Get('mixes/:id')
   @ZodResponse(savedMixSchema)
   get(@ZodParam('id', uuidParamSchema) id: string): Promise<SavedMix> {

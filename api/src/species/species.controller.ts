@@ -43,6 +43,7 @@ import { MAX_PHOTO_BYTES, SpeciesPhotosService } from './species-photos.service.
 import { SpeciesHistoryService } from './species-history.service.js';
 import { SpeciesStore } from './species-store.service.js';
 import { SpeciesService } from './species.service.js';
+import { Public } from '../common/decorators/public.decorator.js';
 
 const MAX_CSV_BYTES = 10 * 1024 * 1024;
 
@@ -57,6 +58,7 @@ export class SpeciesController {
   ) {}
 
   /** Filtered, sorted, paged catalogue; `q` is typo-tolerant over common and scientific names and synonyms. */
+  @Public()
   @Get()
   @ZodResponse(speciesPageSchema)
   list(@ZodQuery(speciesQuerySchema) query: SpeciesQuery, @Req() req: Request, @Res() res: Response): void {
@@ -67,6 +69,7 @@ export class SpeciesController {
     res.type('application/json').send(body);
   }
 
+  @Public()
   @Get('export.csv')
   @FileResponse('text/csv', "The whole catalogue as CSV (the import's columns)")
   @Header('Content-Type', 'text/csv; charset=utf-8')
@@ -75,6 +78,7 @@ export class SpeciesController {
     return this.species.exportCsv();
   }
 
+  @Public()
   @Get(':slug')
   @ZodResponse(speciesDetailSchema)
   get(@ZodParam('slug', slugParamSchema) slug: string): SpeciesDetail {
@@ -165,6 +169,7 @@ export class SpeciesController {
     };
   }
 
+  @Public()
   @Get(':slug/photo')
   @FileResponse('image/*', 'The photo, resized to WebP when w is given')
   async photo(
