@@ -399,6 +399,13 @@ const cases: Case[] = [
     raw: `{"synonyms":${deep(2000)}}`,
     field: 'body',
   },
+  {
+    what: 'a species citing a source the registry does not hold',
+    method: 'put',
+    url: `/api/species/${record.slug}`,
+    body: { ...record, sources: { ...record.sources, heightCm: 'no-such-source' } },
+    field: 'sources.heightCm',
+  },
   { what: 'a CSV import without a file', method: 'post', url: '/api/species/import', body: {}, field: 'file' },
   {
     what: 'a CSV import in the wrong form field',

@@ -111,6 +111,21 @@ describe('species catalogue API (e2e)', () => {
     );
   });
 
+  it('publishes the sources registry and refuses a record citing a key it does not hold, writing nothing', async () => {
+    // The registry is species-data/sources.json; USDA PLANTS is cited by most records (usda-plants).
+    const sources = (await t.http.get('/api/species-sources').expect(200)).body as { key: string }[];
+    expect(sources.map((s) => s.key)).toEqual(expect.arrayContaining(['from-memory', 'usda-plants']));
+    const before = (await t.http.get('/api/species/zizia-aurea').expect(200)).body;
+    const { hasPhoto: _p, photoCredit: _c, ...record } = before;
+    const bad = await t.http
+      .put('/api/species/zizia-aurea')
+      .set('Authorization', `Bearer ${curator}`)
+      .send({ ...record, heightCm: { min: 1, max: 2 }, sources: { ...record.sources, heightCm: 'a-book-i-read' } })
+      .expect(400);
+    expect(bad.body.fields).toEqual([expect.objectContaining({ field: 'sources.heightCm' })]);
+    expect((await t.http.get('/api/species/zizia-aurea').expect(200)).body.heightCm).toEqual(before.heightCm);
+  });
+
   it('exports CSV and re-imports it; a file with one bad row writes nothing and names the row and field', async () => {
     const csv = (
       await t.http

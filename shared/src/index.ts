@@ -5,6 +5,7 @@ export * from './types/species-query.js';
 export * from './catalogue/region-match.js';
 export * from './catalogue/species-csv.js';
 export * from './catalogue/species-diff.js';
+export * from './catalogue/species-form.js';
 export * from './csv/csv-cell.js';
 export * from './types/place.js';
 export * from './types/request-params.js';

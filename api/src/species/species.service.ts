@@ -13,6 +13,7 @@ import { DataSource } from 'typeorm';
 import { writeSpecies } from '../catalogue/catalogue-writer.js';
 import { badRequest } from '../common/validation/bad-request.js';
 import { recordChange } from './species-change-recorder.js';
+import { SpeciesSourcesService } from './species-sources.service.js';
 import { SpeciesStore } from './species-store.service.js';
 
 /** At most this many bad rows are listed in one answer; the count says how many there were. */
@@ -23,6 +24,7 @@ export class SpeciesService {
   constructor(
     @InjectDataSource() private readonly db: DataSource,
     private readonly store: SpeciesStore,
+    private readonly sources: SpeciesSourcesService,
   ) {}
 
   get(slug: string): Species {
@@ -32,6 +34,7 @@ export class SpeciesService {
   }
 
   async create(record: Species, userId: string): Promise<Species> {
+    this.sources.assertKnown(record);
     if (this.store.get(record.slug))
       throw new ConflictException(`Species "${record.slug}" already exists: edit it instead.`);
     await this.db.transaction(async (tx) => {
@@ -51,6 +54,7 @@ export class SpeciesService {
     how: { kind: 'edit' | 'revert'; revertOf?: string } = { kind: 'edit' },
   ): Promise<Species> {
     const before = this.get(slug);
+    this.sources.assertKnown(record);
     if (record.slug !== slug && this.store.get(record.slug))
       throw new ConflictException(`Species "${record.slug}" already exists.`);
     await this.db.transaction(async (tx) => {

@@ -58,6 +58,12 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               const m = await import('../routes/species-detail.js');
               return { Component: m.SpeciesDetailRoute, loader: m.speciesDetailLoader(queryClient) };
             }),
+            page(paths.speciesNew.path, async () => ({
+              Component: (await import('../routes/species-editor.js')).SpeciesNewRoute,
+            })),
+            page(paths.speciesEdit.path, async () => ({
+              Component: (await import('../routes/species-editor.js')).SpeciesEditRoute,
+            })),
             page(paths.cardsLabels.path, async () => ({
               Component: (await import('../routes/cards-and-labels.js')).CardsLabelsRoute,
             })),

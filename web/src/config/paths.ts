@@ -49,6 +49,13 @@ export const paths = {
     search: browserStateToSearchParams,
   },
   speciesDetail: { path: '/species/:slug', build: (slug: string) => `/species/${encodeURIComponent(slug)}` },
+  /** Curators: a blank species form. */
+  speciesNew: { path: '/species/new', build: () => '/species/new' },
+  /** Curators: one record's form. */
+  speciesEdit: {
+    path: '/species/:slug/edit',
+    build: (slug: string) => `/species/${encodeURIComponent(slug)}/edit`,
+  },
   cardsLabels: {
     path: '/cards-and-labels',
     /** Cards for these species (`?species=a,b`) and/or a saved mix's (`?mix=id`). */

@@ -1,4 +1,7 @@
+import { useTranslation } from 'react-i18next';
 import { useWords } from '../lib/i18n/index.js';
+import { RouterButton } from '../components/links/router-link.js';
+import { paths } from '../config/paths.js';
 import type { QueryClient } from '@tanstack/react-query';
 import { type LoaderFunctionArgs, useParams } from 'react-router-dom';
 import { speciesDetailQueryOptions } from '../api/species/species.queries.js';
@@ -20,8 +23,14 @@ export function SpeciesDetailRoute() {
   const words = useWords();
   const role = useSession().user?.role;
   const curates = role === 'curator' || role === 'admin';
+  const { t } = useTranslation('editor');
   return (
     <>
+      {curates ? (
+        <RouterButton to={paths.speciesEdit.build(slug)} appearance="secondary">
+          {t('page.edit')}
+        </RouterButton>
+      ) : null}
       <SpeciesDetail
         // A new slug is a new page: start its state (photo fallback, open details) afresh.
         key={slug}
