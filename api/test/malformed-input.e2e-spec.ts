@@ -406,6 +406,12 @@ const cases: Case[] = [
     body: { ...record, sources: { ...record.sources, heightCm: 'no-such-source' } },
     field: 'sources.heightCm',
   },
+  {
+    what: 'a reference check at a malformed slug',
+    method: 'get',
+    url: '/api/reference-checks/Not%20A%20Slug',
+    field: 'slug',
+  },
   { what: 'a CSV import without a file', method: 'post', url: '/api/species/import', body: {}, field: 'file' },
   {
     what: 'a CSV import in the wrong form field',

@@ -47,6 +47,7 @@ export * from './types/invitation.js';
 export * from './types/people.js';
 export * from './types/photo-credit.js';
 export * from './types/species-history.js';
+export * from './types/reference-check.js';
 export * from './vocabulary/index.js';
 export * from './types/response-schemas.js';
 export * from './types/season.js';

@@ -13,6 +13,8 @@ import { SpeciesChangeRow } from './species-change.entity.js';
 import { SpeciesHistoryService } from './species-history.service.js';
 import { SpeciesListCacheMiddleware } from './species-list-cache.middleware.js';
 import { SpeciesPhotosService } from './species-photos.service.js';
+import { SpeciesReferenceController } from './species-reference.controller.js';
+import { SpeciesReferenceService } from './species-reference.service.js';
 import { SpeciesSourcesController } from './species-sources.controller.js';
 import { SpeciesSourcesService } from './species-sources.service.js';
 import { SpeciesStore } from './species-store.service.js';
@@ -21,10 +23,11 @@ import { SpeciesService } from './species.service.js';
 
 @Module({
   imports: [CatalogueModule, EcoregionsModule, TypeOrmModule.forFeature([SpeciesChangeRow])],
-  controllers: [SpeciesController, SpeciesSourcesController],
+  controllers: [SpeciesController, SpeciesSourcesController, SpeciesReferenceController],
   providers: [
     SpeciesService,
     SpeciesSourcesService,
+    SpeciesReferenceService,
     SpeciesHistoryService,
     SpeciesStore,
     SpeciesPhotosService,
