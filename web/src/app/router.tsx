@@ -71,6 +71,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             page(paths.invitation.path, async () => ({
               Component: (await import('../routes/invitation.js')).InvitationRoute,
             })),
+            page(paths.referenceChecks.path, async () => ({
+              Component: (await import('../routes/reference-checks.js')).ReferenceChecksRoute,
+            })),
             page(paths.people.path, async () => ({ Component: (await import('../routes/people.js')).PeopleRoute })),
             page(paths.season.path, async () => ({ Component: (await import('../routes/season.js')).SeasonRoute })),
             page(paths.myBatches.path, async () => ({

@@ -91,6 +91,8 @@ export const paths = {
     path: '/plant-share/reservations/:token',
     build: (token: string) => `/plant-share/reservations/${encodeURIComponent(token)}`,
   },
+  /** Curators: the catalogue's differences from the open reference data not yet explained. */
+  referenceChecks: { path: '/reference-checks', build: () => '/reference-checks' },
   /** Admins: every account, its role, switch-off and sign-in activity. */
   people: { path: '/people', build: () => '/people' },
 } as const;

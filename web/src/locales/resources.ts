@@ -16,6 +16,8 @@ import { yard as enYard } from './en/yard.js';
 import { yard as esYard } from './es/yard.js';
 import { editor as enEditor } from './en/editor.js';
 import { editor as esEditor } from './es/editor.js';
+import { reference as enReference } from './en/reference.js';
+import { reference as esReference } from './es/reference.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -29,6 +31,7 @@ export const resources = {
     cards: enCards,
     yard: enYard,
     editor: enEditor,
+    reference: enReference,
   },
   es: {
     common: esCommon,
@@ -40,5 +43,6 @@ export const resources = {
     cards: esCards,
     yard: esYard,
     editor: esEditor,
+    reference: esReference,
   },
 } as const;

@@ -9,6 +9,7 @@ import { BloomStrip } from '../features/species-browser/index.js';
 import { useSession } from '../features/auth/index.js';
 import { SpeciesDetail } from '../features/species-detail/index.js';
 import { SpeciesHistoryPanel } from '../features/species-history/index.js';
+import { RecordReferencePanel } from '../features/species-reference/index.js';
 
 /** Starts the record's request while the page's code arrives; the page shows loading, 404 and errors itself. */
 export function speciesDetailLoader(queryClient: QueryClient) {
@@ -40,6 +41,7 @@ export function SpeciesDetailRoute() {
           <BloomStrip bloomMonths={s.bloomMonths} flowerColours={s.flowerColours} size="large" />
         )}
       />
+      {curates ? <RecordReferencePanel key={`reference-${slug}`} slug={slug} /> : null}
       {curates ? <SpeciesHistoryPanel key={`history-${slug}`} slug={slug} /> : null}
     </>
   );
