@@ -412,6 +412,13 @@ const cases: Case[] = [
     url: '/api/reference-checks/Not%20A%20Slug',
     field: 'slug',
   },
+  {
+    what: 'a CSV import preview with a dry run that is not true or false',
+    method: 'post',
+    url: '/api/species/import?dryRun=maybe',
+    upload: { field: 'file', contents: 'slug\n' },
+    field: 'dryRun',
+  },
   { what: 'a CSV import without a file', method: 'post', url: '/api/species/import', body: {}, field: 'file' },
   {
     what: 'a CSV import in the wrong form field',

@@ -13,6 +13,12 @@ export class SpeciesSourcesService {
     return this.sources;
   }
 
+  /** The sourced facts whose source key the registry does not hold. */
+  unknownKeys(record: Species): (typeof SOURCED_FIELDS)[number][] {
+    const given = record.sources as Partial<Record<(typeof SOURCED_FIELDS)[number], string>>;
+    return SOURCED_FIELDS.filter((f) => given[f] !== undefined && !this.keys.has(given[f]!));
+  }
+
   /** A record may only cite sources the registry holds, so every fact's citation can be shown. */
   assertKnown(record: Species): void {
     const given = record.sources as Partial<Record<(typeof SOURCED_FIELDS)[number], string>>;

@@ -95,7 +95,24 @@ export interface CsvRowError {
   message: string;
 }
 
+/** What an import does to one row's record: adds it, changes these fields, or leaves it as it is. */
+export interface CsvImportPreviewRow {
+  line: number;
+  slug: string;
+  scientificName: string;
+  action: 'create' | 'change' | 'unchanged';
+  /** The changed fields (nested ones by path, e.g. `heightCm`); empty for a new or unchanged record. */
+  fields: string[];
+}
+
 export interface CsvImportResult {
   created: number;
   updated: number;
+  /** True when nothing was written: the answer is a preview of what the same file would do. */
+  dryRun: boolean;
+  preview: CsvImportPreviewRow[];
 }
+
+/** `?dryRun=true` checks the file and answers what it would create and change, writing nothing. */
+export const csvImportQuerySchema = z.object({ dryRun: boolFromQuery.optional() }).strict();
+export type CsvImportQuery = z.infer<typeof csvImportQuerySchema>;
