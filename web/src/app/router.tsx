@@ -58,6 +58,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               const m = await import('../routes/species-detail.js');
               return { Component: m.SpeciesDetailRoute, loader: m.speciesDetailLoader(queryClient) };
             }),
+            page(paths.speciesImport.path, async () => ({
+              Component: (await import('../routes/species-import.js')).SpeciesImportRoute,
+            })),
             page(paths.speciesNew.path, async () => ({
               Component: (await import('../routes/species-editor.js')).SpeciesNewRoute,
             })),

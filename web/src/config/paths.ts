@@ -51,6 +51,8 @@ export const paths = {
   speciesDetail: { path: '/species/:slug', build: (slug: string) => `/species/${encodeURIComponent(slug)}` },
   /** Curators: a blank species form. */
   speciesNew: { path: '/species/new', build: () => '/species/new' },
+  /** Curators: import species from a CSV file, previewed before anything is written. */
+  speciesImport: { path: '/species/import', build: () => '/species/import' },
   /** Curators: one record's form. */
   speciesEdit: {
     path: '/species/:slug/edit',

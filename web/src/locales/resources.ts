@@ -18,6 +18,8 @@ import { editor as enEditor } from './en/editor.js';
 import { editor as esEditor } from './es/editor.js';
 import { reference as enReference } from './en/reference.js';
 import { reference as esReference } from './es/reference.js';
+import { importer as enImporter } from './en/importer.js';
+import { importer as esImporter } from './es/importer.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -32,6 +34,7 @@ export const resources = {
     yard: enYard,
     editor: enEditor,
     reference: enReference,
+    importer: enImporter,
   },
   es: {
     common: esCommon,
@@ -44,5 +47,6 @@ export const resources = {
     yard: esYard,
     editor: esEditor,
     reference: esReference,
+    importer: esImporter,
   },
 } as const;

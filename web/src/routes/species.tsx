@@ -15,6 +15,7 @@ export function SpeciesRoute() {
   const { t } = useTranslation('species');
   const { t: te } = useTranslation('editor');
   const { t: tr } = useTranslation('reference');
+  const { t: ti } = useTranslation('importer');
   const role = useSession().user?.role;
   useDocumentTitle(t('page.title'));
   return (
@@ -25,6 +26,7 @@ export function SpeciesRoute() {
           <RouterButton to={paths.speciesNew.build()} appearance="secondary">
             {te('page.add')}
           </RouterButton>{' '}
+          <RouterLink to={paths.speciesImport.build()}>{ti('page.open')}</RouterLink>{' '}
           <RouterLink to={paths.referenceChecks.build()}>{tr('page.open')}</RouterLink>
         </p>
       ) : null}
