@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import path from 'node:path';
 import sharp from 'sharp';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
@@ -235,6 +236,25 @@ describe('species catalogue API (e2e)', () => {
       .expect(200)
       .expect('Content-Type', /image\/webp/);
     expect((await sharp(small.body).metadata()).width).toBe(400);
+    // The list (160), print (400) and page (800) sizes are made at upload, before anyone asks for them.
+    for (const w of [160, 400, 800]) {
+      const made = await sharp(path.join(t.dataDir, 'photos', `asclepias-tuberosa-w${w}.webp`)).metadata();
+      expect(made).toMatchObject({ width: w, format: 'webp' });
+    }
+    // A few kilobytes that unpack to 48 megapixels: refused by its size in pixels, with the limit in words.
+    const vast = await sharp({ create: { width: 8000, height: 6000, channels: 3, background: { r: 1, g: 2, b: 3 } } })
+      .png()
+      .toBuffer();
+    const tooMany = await t.http
+      .post('/api/species/zizia-aurea/photo')
+      .set('Authorization', `Bearer ${curator}`)
+      .field('photographer', 'Ines Calder')
+      .field('licence', 'CC-BY-4.0')
+      .field('sourceUrl', 'https://example.org/photos/zizia-aurea')
+      .attach('photo', vast, { filename: 'vast.png', contentType: 'image/png' })
+      .expect(413);
+    expect(tooMany.body.message).toMatch(/8000 × 6000 pixels; photos may have at most 40 megapixels/);
+    expect((await t.http.get('/api/species/zizia-aurea').expect(200)).body.hasPhoto).toBe(false);
 
     // A text file that claims to be a JPEG: the type is sniffed from the bytes.
     const fake = await t.http

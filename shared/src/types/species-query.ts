@@ -50,6 +50,9 @@ export type SpeciesQuery = z.infer<typeof speciesQuerySchema>;
 
 /** Widths a photo is served resized to; a fixed list keeps the server's disk cache bounded. */
 export const PHOTO_WIDTHS = [160, 400, 800] as const;
+export type PhotoWidth = (typeof PHOTO_WIDTHS)[number];
+/** The width each place shows a photo at: list thumbnails, printed fact cards, the species page. */
+export const PHOTO_SIZES = { list: 160, print: 400, detail: 800 } as const satisfies Record<string, PhotoWidth>;
 
 /** Query string of `GET /api/species/:slug/photo`: `w` picks a resized copy; left out, the original. */
 export const photoQuerySchema = z
