@@ -20,6 +20,10 @@ import { reference as enReference } from './en/reference.js';
 import { reference as esReference } from './es/reference.js';
 import { importer as enImporter } from './en/importer.js';
 import { importer as esImporter } from './es/importer.js';
+import { people as enPeople } from './en/people.js';
+import { people as esPeople } from './es/people.js';
+import { history as enHistory } from './en/history.js';
+import { history as esHistory } from './es/history.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -35,6 +39,8 @@ export const resources = {
     editor: enEditor,
     reference: enReference,
     importer: enImporter,
+    people: enPeople,
+    history: enHistory,
   },
   es: {
     common: esCommon,
@@ -48,5 +54,7 @@ export const resources = {
     editor: esEditor,
     reference: esReference,
     importer: esImporter,
+    people: esPeople,
+    history: esHistory,
   },
 } as const;
