@@ -48,7 +48,7 @@ test('a curator edits a species and sees it beside the reference; an admin chang
     await page.goto(`${app.server.baseUrl}/reference-checks`);
     await page.getByRole('heading', { level: 1, name: 'Checked against the reference' }).waitFor();
     await page.getByText(/^1 difference not yet explained, across 1 of \d+ records\.$/).waitFor();
-    await page.getByRole('heading', { level: 2, name: /butterfly milkweed/ }).waitFor();
+    await page.getByRole('heading', { level: 2, name: /Butterfly milkweed \(Asclepias tuberosa\)/ }).waitFor();
     await screenshot(page, 'curator-reference-page');
 
     // The admin's people page.

@@ -142,7 +142,7 @@ export function SpeciesEditorForm({
     const name = sourceFieldOf(fact);
     const chosen = sources.find((s) => s.key === v[name]);
     return (
-      <Field label={t('source.label', { fact })} size="small" {...form.validation(name)}>
+      <Field label={t('source.label', { fact: t(`facts.${fact}`) })} size="small" {...form.validation(name)}>
         <Dropdown
           name={name}
           placeholder={t('source.choose')}

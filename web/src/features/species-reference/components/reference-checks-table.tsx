@@ -16,6 +16,7 @@ const useStyles = makeStyles({
     borderBottom: `${tokens.strokeWidthThin} solid ${tokens.colorNeutralStroke2}`,
     overflowWrap: 'anywhere',
   },
+  caption: { captionSide: 'top', textAlign: 'start', fontStyle: 'italic', color: tokens.colorNeutralForeground3 },
   small: { display: 'block', color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase200 },
   agrees: { color: tokens.colorPaletteGreenForeground1, fontWeight: tokens.fontWeightSemibold },
   differs: { color: tokens.colorPaletteRedForeground1, fontWeight: tokens.fontWeightSemibold },
@@ -33,7 +34,7 @@ export function ReferenceChecksTable({ checks, caption }: { checks: ReferenceChe
     v === 'agrees' ? styles.agrees : v === 'differs' ? styles.differs : styles.quiet;
   return (
     <table className={styles.table}>
-      <caption className={styles.small}>{caption}</caption>
+      <caption className={styles.caption}>{caption}</caption>
       <thead>
         <tr>
           <th className={styles.head}>{t('table.fact')}</th>

@@ -1,5 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import type { UnexplainedDisagreements } from '@homeground/shared';
+import { capitalise, type UnexplainedDisagreements } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
 import { unexplainedDisagreementsQueryOptions } from '../../../api/species/reference-checks.queries.js';
@@ -37,7 +37,7 @@ export function UnexplainedList() {
             {a.records.map((r) => (
               <ContentCard key={r.slug} aria-labelledby={`ref-${r.slug}`}>
                 <Heading level="section" id={`ref-${r.slug}`}>
-                  {r.commonName} ({r.scientificName})
+                  {capitalise(r.commonName)} ({r.scientificName})
                 </Heading>
                 <p className={styles.links}>
                   <RouterLink to={paths.speciesDetail.build(r.slug)}>{r.scientificName}</RouterLink>
