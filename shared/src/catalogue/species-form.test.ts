@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { F } from '../scoring/__tests__/species-fixtures.js';
 import {
   emptySpeciesFormValues,
+  formFieldForApiPath,
   monthsFromText,
   speciesFormSchema,
   speciesToFormValues,
@@ -48,5 +49,16 @@ describe('species editor form', () => {
     ['', []],
   ])('reads bloom months "%s" for the preview', (text, months) => {
     expect(monthsFromText(text)).toEqual(months);
+  });
+
+  it.each([
+    ['heightCm.min', 'heightMinCm'],
+    ['sources.heightCm', 'source:heightCm'],
+    ['germination.seedsPerPound', 'seedsPerPound'],
+    ['commonNames.3', 'commonNames'],
+    ['sources.nothing', null],
+    ['colour', null],
+  ])('puts an API refusal of "%s" beside the form field %s', (path, field) => {
+    expect(formFieldForApiPath(path)).toBe(field);
   });
 });

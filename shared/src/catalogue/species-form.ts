@@ -1,6 +1,12 @@
 import { z } from 'zod';
 import { SOURCED_FIELDS, type SourcedField, type Species } from '../types/species.js';
-import { csvRowToSpecies, SPECIES_CSV_COLUMNS, type SpeciesCsvColumn, speciesToCsvRow } from './species-csv.js';
+import {
+  columnFor,
+  csvRowToSpecies,
+  SPECIES_CSV_COLUMNS,
+  type SpeciesCsvColumn,
+  speciesToCsvRow,
+} from './species-csv.js';
 
 /**
  * The curator's species editor as text fields. The form reuses the CSV columns (so a value typed on
@@ -99,4 +105,19 @@ export function monthsFromText(text: string): number[] {
     .split(';')
     .map((x) => Number(x.trim()))
     .filter((m) => Number.isInteger(m) && m >= 1 && m <= 12);
+}
+
+/**
+ * The form field for a field the API's 400 names by its record path ("heightCm.min",
+ * "sources.heightCm"), so a refusal from the server lands beside the same input; null when the form
+ * has no such field.
+ */
+export function formFieldForApiPath(path: string): SpeciesFormField | null {
+  const parts = path.split('.');
+  if (parts[0] === 'sources') {
+    const fact = parts.slice(1).join('.');
+    return (SOURCED_FIELDS as readonly string[]).includes(fact) ? sourceFieldOf(fact as SourcedField) : null;
+  }
+  const column = columnFor(parts);
+  return (SPECIES_FORM_TEXT_COLUMNS as readonly string[]).includes(column) ? (column as SpeciesFormTextColumn) : null;
 }

@@ -2,6 +2,7 @@ import { screen } from '@testing-library/react';
 import type { User } from '@homeground/shared';
 import { describe, expect, it } from 'vitest';
 import { butterflyMilkweedRecord } from '../features/species-detail/testing/species-record.js';
+import { apiError } from '../testing/fake-api.js';
 import { priyaMember } from '../testing/fixtures.js';
 import { renderApp } from '../testing/render-app.js';
 
@@ -57,6 +58,23 @@ describe('the species editor (curators)', () => {
     expect(put?.body).toMatchObject({ slug: 'asclepias-tuberosa', heightCm: { min: 30, max: 90 } });
     expect((put?.body as { sources: Record<string, string> }).sources).toEqual(record.sources);
     // The whole record's form re-renders on each keystroke; jsdom is slow at that, so this test gets longer.
+  }, 45_000);
+
+  it('shows an API refusal beside the field it names, not only above the form', async () => {
+    const { user } = renderApp({
+      path: '/species/asclepias-tuberosa/edit',
+      token: 'ines',
+      api: {
+        ...routes(ines),
+        'PUT /api/species/asclepias-tuberosa': apiError(400, 'Please check: sources.heightCm', {
+          fields: [{ field: 'sources.heightCm', message: '"old-notes" is not in the sources registry' }],
+        }),
+      },
+    });
+    await user.click(await screen.findByRole('button', { name: 'Save the changes' }, { timeout: 15000 }));
+    const picker = await screen.findByRole('combobox', { name: /Source for the height/ }, { timeout: 15000 });
+    expect(picker).toHaveAttribute('aria-invalid', 'true');
+    expect(screen.getByText('"old-notes" is not in the sources registry')).toBeInTheDocument();
   }, 45_000);
 
   it('tells a member the page is for curators and loads no form', async () => {

@@ -16,6 +16,7 @@ import {
   FLOWER_COLOURS,
   type FlowerColour,
   formatHeightRangeCm,
+  formFieldForApiPath,
   GROWTH_FORMS,
   HABITATS,
   LIFESPANS,
@@ -28,6 +29,7 @@ import {
   SOWING_METHODS,
   type Species,
   speciesFormSchema,
+  type SpeciesFormField,
   type SpeciesFormTextColumn,
   type SpeciesFormValues,
   SPREAD_HABITS,
@@ -39,6 +41,8 @@ import { useTranslation } from 'react-i18next';
 import { useSaveSpeciesMutation } from '../../../api/species/species-editor.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
+import { isApiRequestError } from '../../../lib/api-request-error.js';
+import { asSentence, failureFromApi, type FormFailure } from '../../../lib/forms/field-errors.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
 import { SECTIONS, type EditorField } from '../utils/editor-layout.js';
 
@@ -83,6 +87,20 @@ const LISTS: Partial<Record<SpeciesFormTextColumn, readonly string[]>> = {
 };
 
 const LONG: SpeciesFormTextColumn[] = ['pollinators', 'birds', 'cautions', 'reconciliations', 'nativeStates'];
+
+/** The API names record paths ("heightCm.min", "sources.heightCm"); each goes beside its own input. */
+function failureFromSpeciesApi(error: unknown, fields: readonly SpeciesFormField[]): FormFailure<SpeciesFormField> {
+  if (!isApiRequestError(error)) return failureFromApi(error, fields);
+  const out: Partial<Record<SpeciesFormField, string>> = {};
+  const loose: string[] = [];
+  for (const [path, message] of Object.entries(error.fieldMessages())) {
+    const field = formFieldForApiPath(path);
+    if (field && fields.includes(field)) out[field] ??= asSentence(message);
+    else loose.push(`${path}: ${message}`);
+  }
+  const message = loose.length > 0 ? loose.join('; ') : Object.keys(out).length > 0 ? null : error.message;
+  return { fields: out, message };
+}
 
 function numberOrNull(text: string): number | null {
   const n = Number(text);
@@ -244,7 +262,7 @@ export function SpeciesEditorForm({
       noValidate
       aria-label={slug ? t('save.update') : t('save.create')}
       onSubmit={form.handleSubmit((record) =>
-        save.mutate(record, { onSuccess: onSaved, onError: (e) => form.fail(e) }),
+        save.mutate(record, { onSuccess: onSaved, onError: (e) => form.fail(e, failureFromSpeciesApi) }),
       )}
     >
       {form.failure || Object.values(form.errors).some(Boolean) ? (
