@@ -437,6 +437,26 @@ const cases: Case[] = [
     raw: `{"synonyms":${deep(2000)}}`,
     field: 'body',
   },
+  {
+    what: 'a species citing a source the registry does not hold',
+    method: 'put',
+    url: `/api/species/${record.slug}`,
+    body: { ...record, sources: { ...record.sources, heightCm: 'no-such-source' } },
+    field: 'sources.heightCm',
+  },
+  {
+    what: 'a reference check at a malformed slug',
+    method: 'get',
+    url: '/api/reference-checks/Not%20A%20Slug',
+    field: 'slug',
+  },
+  {
+    what: 'a CSV import preview with a dry run that is not true or false',
+    method: 'post',
+    url: '/api/species/import?dryRun=maybe',
+    upload: { field: 'file', contents: 'slug\n' },
+    field: 'dryRun',
+  },
   { what: 'a CSV import without a file', method: 'post', url: '/api/species/import', body: {}, field: 'file' },
   {
     what: 'a CSV import in the wrong form field',

@@ -131,7 +131,7 @@ describe('species history: every change kept, read and undone (e2e)', () => {
       .set(as(curator))
       .attach('file', Buffer.from([lines[0], edit, fresh].join('\r\n')), 'spring-edits.csv')
       .expect(200);
-    expect(ok.body).toEqual({ created: 1, updated: 1 });
+    expect(ok.body).toMatchObject({ created: 1, updated: 1 });
     expect((await record()).heightCm.max).toBe(oldHeight + 5);
     expect((await record('zz-import-new-plant')).scientificName).toBe('Importia nova');
     const [latest] = await history();

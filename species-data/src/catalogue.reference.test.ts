@@ -8,14 +8,10 @@ import type { Species } from '@homeground/shared';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { DATA_DIR, loadCatalogue } from './catalogue.js';
 import { checkValueRows, findCheckValueRow } from './reference/check-values.js';
+import { compareWithReference, loadReferenceTables, REFERENCE_COMPARISON_FILES } from './reference/compare-record.js';
 import { referenceAvailable } from './reference/reference-dir.js';
 import { loadSylvanSeedsPercentages, SYLVANSEEDS_FILE } from './reference/sylvanseeds.js';
-import {
-  loadLepidopteraByGenus,
-  loadUsdaCharacteristics,
-  loadUsdaDistribution,
-  loadUsdaTaxa,
-} from './reference/usda-plants.js';
+import { loadLepidopteraByGenus, loadUsdaCharacteristics, loadUsdaTaxa } from './reference/usda-plants.js';
 
 const FILES = [
   'usda_plants_taxa.csv',
@@ -23,60 +19,58 @@ const FILES = [
   'tallamy_shropshire_2009_lepidoptera_by_plant_genus.csv',
   'CHECK-VALUES.md',
 ];
-const available = referenceAvailable(FILES);
+const available = referenceAvailable([...FILES, ...REFERENCE_COMPARISON_FILES]);
 const genusOf = (s: Species) => s.scientificName.split(' ')[0];
 const aliases: { genus: string; listedAs: string }[] = JSON.parse(
   readFileSync(path.join(DATA_DIR, 'genus-aliases.json'), 'utf8'),
 );
 
+/**
+ * Every record beside the reference, by the one comparer the curator's reference page also uses
+ * (species-data/src/reference/compare-record.ts), read once.
+ */
+let comparisonsCache: ReturnType<typeof compareWithReference>[] | undefined;
+function comparisons() {
+  if (!comparisonsCache) {
+    const tables = loadReferenceTables();
+    const { species, realignments } = loadCatalogue();
+    comparisonsCache = species.map((s) => compareWithReference(s, tables, { realignments, genusAliases: aliases }));
+  }
+  return comparisonsCache;
+}
+/** Each record's check of one field, with its slug. */
+const checksOf = (field: string) =>
+  comparisons().flatMap((c) => c.checks.filter((k) => k.field === field).map((k) => ({ slug: c.slug, ...k })));
+/** Differences the record does not explain, worded for the failure message. */
+const unexplainedOf = (field: string) =>
+  checksOf(field)
+    .filter((k) => k.verdict === 'differs' && k.reconciliation === null)
+    .map((k) => `${k.slug}: record ${k.record}, reference ${k.reference} (${k.rule})`);
+
 describe.skipIf(!available)('catalogue vs USDA PLANTS (usda_plants_taxa.csv, state distribution)', () => {
-  const { species, realignments } = loadCatalogue();
+  const { species } = loadCatalogue();
   let taxa: ReturnType<typeof loadUsdaTaxa>;
   beforeAll(() => {
     taxa = loadUsdaTaxa();
   });
 
   it('agrees on symbol, accepted name and family for ≥ 98 % of species; each other one is explained', () => {
-    const bySymbol = new Map(taxa.map((t) => [t.symbol, t]));
-    const disagreements: string[] = [];
-    let agree = 0;
-    for (const s of species) {
-      const t = bySymbol.get(s.usdaSymbol);
-      const problems: { field: string; text: string }[] = [];
-      if (!t) problems.push({ field: 'usdaSymbol', text: `symbol ${s.usdaSymbol} is not an accepted USDA taxon` });
-      else {
-        if (t.name !== s.scientificName)
-          problems.push({ field: 'scientificName', text: `USDA names ${s.usdaSymbol} "${t.name}"` });
-        // USDA keeps older family concepts; only documented APG IV / PPG I realignments are accepted.
-        const realigned = realignments.some(
-          (r) => r.usdaFamily === t.family && r.family === s.family && r.genera.includes(genusOf(s)),
-        );
-        if (t.family !== s.family && !realigned)
-          problems.push({ field: 'family', text: `USDA family ${t.family}, record ${s.family}` });
-      }
-      if (problems.length === 0) agree++;
-      const unexplained = problems.filter((p) => !s.reconciliations.some((r) => r.field === p.field));
-      disagreements.push(...unexplained.map((p) => `${s.slug}: ${p.text} (no reconciliation note)`));
-    }
+    const fields = ['usdaSymbol', 'scientificName', 'family'];
+    const agree = comparisons().filter((c) =>
+      c.checks.filter((k) => fields.includes(k.field)).every((k) => k.verdict === 'agrees'),
+    ).length;
     const share = agree / species.length;
     console.log(
       `USDA PLANTS agreement on symbol/name/family: ${agree}/${species.length} = ${(share * 100).toFixed(1)} %`,
     );
-    expect(disagreements).toEqual([]);
+    expect(taxa.length).toBeGreaterThan(30_000);
+    expect(fields.flatMap(unexplainedOf)).toEqual([]);
     expect(share).toBeGreaterThanOrEqual(0.98);
   });
 
   it('claims no native state that USDA lists as introduced only or not at all, unless the record explains', () => {
-    const distribution = loadUsdaDistribution();
-    const bad: string[] = [];
-    for (const s of species) {
-      if (s.reconciliations.some((r) => r.field === 'nativeStates')) continue;
-      const d = distribution.get(s.usdaSymbol);
-      const native = new Set(d?.nativeIn ?? []);
-      const wrong = s.nativeStates.filter((st) => !native.has(st));
-      if (wrong.length) bad.push(`${s.slug}: ${wrong.join(', ')} not native per USDA`);
-    }
-    expect(bad).toEqual([]);
+    expect(checksOf('nativeStates')).toHaveLength(species.length);
+    expect(unexplainedOf('nativeStates')).toEqual([]);
   });
 });
 
@@ -121,57 +115,22 @@ describe.skipIf(!available || !referenceAvailable(['usda_plants_characteristics.
 
     /** A record differs when USDA's mature height lies outside its range widened by a fifth each way. */
     it('agrees with USDA mature height (height_mature_feet), or the record explains why USDA is wrong', () => {
-      const characteristics = loadUsdaCharacteristics();
-      const unexplained: string[] = [];
-      let compared = 0;
-      let differ = 0;
-      for (const s of loadCatalogue().species) {
-        const feet = Number(characteristics.get(s.usdaSymbol)?.height_mature_feet || NaN);
-        if (!Number.isFinite(feet)) continue;
-        compared++;
-        const cm = feet * 30.48;
-        if (cm >= s.heightCm.min * 0.8 && cm <= s.heightCm.max * 1.2) continue;
-        differ++;
-        if (!s.reconciliations.some((r) => r.field === 'heightCm'))
-          unexplained.push(`${s.slug}: ${s.heightCm.min}–${s.heightCm.max} cm, USDA ${feet} ft (${Math.round(cm)} cm)`);
-      }
-      console.log(`heights compared with USDA: ${compared}; ${differ} differ, each with a reconciliation note`);
-      expect(compared).toBeGreaterThan(100);
-      expect(unexplained).toEqual([]);
+      const compared = checksOf('heightCm').filter((k) => k.verdict !== 'no-reference');
+      const differ = compared.filter((k) => k.verdict === 'differs').length;
+      console.log(`heights compared with USDA: ${compared.length}; ${differ} differ, each with a reconciliation note`);
+      expect(compared.length).toBeGreaterThan(100);
+      expect(unexplainedOf('heightCm')).toEqual([]);
     });
 
     /** USDA gives a season; the record differs when none of its months falls in that season. */
     it('agrees with USDA bloom period (bloom_period), or the record explains why USDA is wrong', () => {
-      const SEASON_MONTHS: Record<string, number[]> = {
-        'Late Winter': [2, 3],
-        Winter: [12, 1, 2],
-        'Early Spring': [3, 4],
-        'Mid Spring': [4, 5],
-        'Late Spring': [5, 6],
-        Spring: [3, 4, 5, 6],
-        'Early Summer': [6, 7],
-        'Mid Summer': [7],
-        'Late Summer': [8, 9],
-        Summer: [6, 7, 8],
-        Fall: [9, 10],
-      };
-      const characteristics = loadUsdaCharacteristics();
-      const unexplained: string[] = [];
-      let compared = 0;
-      let differ = 0;
-      for (const s of loadCatalogue().species) {
-        const season = characteristics.get(s.usdaSymbol)?.bloom_period ?? '';
-        const months = SEASON_MONTHS[season];
-        if (!months || s.bloomMonths.length === 0) continue;
-        compared++;
-        if (s.bloomMonths.some((m) => months.includes(m))) continue;
-        differ++;
-        if (!s.reconciliations.some((r) => r.field === 'bloomMonths'))
-          unexplained.push(`${s.slug}: months ${s.bloomMonths.join(',')}, USDA "${season}"`);
-      }
-      console.log(`bloom months compared with USDA: ${compared}; ${differ} differ, each with a reconciliation note`);
-      expect(compared).toBeGreaterThan(100);
-      expect(unexplained).toEqual([]);
+      const compared = checksOf('bloomMonths').filter((k) => k.verdict !== 'no-reference');
+      const differ = compared.filter((k) => k.verdict === 'differs').length;
+      console.log(
+        `bloom months compared with USDA: ${compared.length}; ${differ} differ, each with a reconciliation note`,
+      );
+      expect(compared.length).toBeGreaterThan(100);
+      expect(unexplainedOf('bloomMonths')).toEqual([]);
     });
   },
 );
@@ -181,24 +140,10 @@ describe.skipIf(!referenceAvailable([SYLVANSEEDS_FILE]))(
   () => {
     /** A record differs when its rate lies outside the trials' range widened by a fifth each way. */
     it('keeps each stored rate near the published trials, or the record explains the difference', () => {
-      const trials = loadSylvanSeedsPercentages();
-      const unexplained: string[] = [];
-      let compared = 0;
-      for (const s of loadCatalogue().species) {
-        const pct = trials.get(s.scientificName);
-        if (!pct?.length) continue;
-        compared++;
-        const lo = Math.min(...pct);
-        const hi = Math.max(...pct);
-        const rate = s.germination.germinationRatePct;
-        if (rate >= lo * 0.8 && rate <= hi * 1.2) continue;
-        if (!s.reconciliations.some((r) => r.field === 'germination.germinationRatePct')) {
-          unexplained.push(`${s.slug}: ${rate} %, trials ${Math.round(lo)}–${Math.round(hi)} %`);
-        }
-      }
-      console.log(`germination rates compared with SylvanSeeds: ${compared} species`);
-      expect(compared).toBeGreaterThan(20);
-      expect(unexplained).toEqual([]);
+      const compared = checksOf('germination.germinationRatePct');
+      console.log(`germination rates compared with SylvanSeeds: ${compared.length} species`);
+      expect(compared.length).toBeGreaterThan(20);
+      expect(unexplainedOf('germination.germinationRatePct')).toEqual([]);
     });
 
     it('Pennsylvania sedge: the trials show 64–89 %, and the record is in that range', () => {
@@ -213,32 +158,8 @@ describe.skipIf(!referenceAvailable([SYLVANSEEDS_FILE]))(
 
 describe.skipIf(!available)('catalogue vs Tallamy & Shropshire 2009 (Lepidoptera species per plant genus)', () => {
   it('gives each species its genus count, or a documented older genus concept, or null when unlisted', () => {
-    const table = loadLepidopteraByGenus();
-    const listed = (g: string) => {
-      const row = table.get(g);
-      return row && Number.isFinite(row.totalLepidoptera) ? row.totalLepidoptera : undefined;
-    };
-    const bad: string[] = [];
-    for (const s of loadCatalogue().species) {
-      const genus = genusOf(s);
-      const alias = aliases.find((a) => a.genus === genus);
-      const expected = new Set<number | null>();
-      if (listed(genus) !== undefined) expected.add(listed(genus)!);
-      if (alias && listed(alias.listedAs) !== undefined) expected.add(listed(alias.listedAs)!);
-      if (expected.size === 0) expected.add(null);
-      if (!expected.has(s.wildlife.lepidopteraGenusCount)) {
-        bad.push(`${s.slug}: ${s.wildlife.lepidopteraGenusCount}, table says ${[...expected].join(' or ')}`);
-      }
-      // A genus with its own row that the record overrides with its older name's count must say why.
-      const own = listed(genus);
-      const explained = s.reconciliations.some((r) => r.field === 'wildlife.lepidopteraGenusCount');
-      if (own !== undefined && s.wildlife.lepidopteraGenusCount !== own && !explained) {
-        bad.push(
-          `${s.slug}: takes ${s.wildlife.lepidopteraGenusCount} over its own genus row (${own}) without a reconciliation note`,
-        );
-      }
-    }
-    expect(bad).toEqual([]);
+    expect(checksOf('wildlife.lepidopteraGenusCount')).toHaveLength(loadCatalogue().species.length);
+    expect(unexplainedOf('wildlife.lepidopteraGenusCount')).toEqual([]);
   });
 
   it('matches the published figures for the best-known genera (Solidago 115, Asclepias 12, Quercus 532)', () => {

@@ -37,6 +37,8 @@ export interface AppConfig {
   mailFrom: string;
   /** Public address of the web app, without a trailing slash. */
   publicUrl: string;
+  /** Folder of the open reference data, read in place (never copied). */
+  referenceDir: string;
 }
 
 export const APP_CONFIG = Symbol('APP_CONFIG');
@@ -77,6 +79,7 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     SMTP_URL: config.get('SMTP_URL', { infer: true }),
     MAIL_FROM: config.get('MAIL_FROM', { infer: true }),
     PUBLIC_URL: config.get('PUBLIC_URL', { infer: true }),
+    HOMEGROUND_REFERENCE_DIR: config.get('HOMEGROUND_REFERENCE_DIR', { infer: true }),
   } satisfies Env;
   const isProduction = env.NODE_ENV === 'production';
   const dataDir = fromRoot(env.DATA_DIR);
@@ -100,5 +103,8 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     smtpUrl: env.SMTP_URL ?? null,
     mailFrom: env.MAIL_FROM,
     publicUrl: env.PUBLIC_URL.replace(/\/+$/, ''),
+    referenceDir: env.HOMEGROUND_REFERENCE_DIR
+      ? fromRoot(env.HOMEGROUND_REFERENCE_DIR)
+      : path.resolve(PROJECT_ROOT, '..', 'shared', 'reference'),
   };
 }

@@ -7,11 +7,14 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp, { type Metadata } from 'sharp';
 import { DataSource } from 'typeorm';
+import { TooLargeWithReason } from '../common/http/too-large-with-reason.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { SpeciesPhoto } from './species-photo.entity.js';
 import { SpeciesStore } from './species-store.service.js';
 
 export const MAX_PHOTO_BYTES = 5 * 1024 * 1024;
+/** A small file can still unpack to a huge image; 40 megapixels is more than any camera photo we show needs. */
+export const MAX_PHOTO_PIXELS = 40_000_000;
 const ACCEPTED = new Map([
   ['image/jpeg', 'jpg'],
   ['image/png', 'png'],
@@ -51,6 +54,12 @@ export class SpeciesPhotosService {
     } catch {
       throw new UnsupportedMediaTypeException('The photo could not be read: the file may be damaged.');
     }
+    const pixels = (meta.width ?? 0) * (meta.height ?? 0);
+    if (pixels > MAX_PHOTO_PIXELS) {
+      throw new TooLargeWithReason(
+        `The photo is ${meta.width} × ${meta.height} pixels; photos may have at most ${MAX_PHOTO_PIXELS / 1_000_000} megapixels. Please make it smaller and try again.`,
+      );
+    }
     mkdirSync(this.dir, { recursive: true });
     const file = `${slug}.${ext}`;
     const tmp = path.join(this.dir, `.${file}.${process.pid}.tmp`);
@@ -74,6 +83,7 @@ export class SpeciesPhotosService {
       );
       await rename(tmp, path.join(this.dir, file));
       await this.removeVariants(slug, old && old.file !== file ? old.file : null);
+      await this.makeVariants(slug, bytes, meta.width ?? 0);
       return saved;
     });
     await this.store.reload();
@@ -89,6 +99,20 @@ export class SpeciesPhotosService {
     const resized = path.join(this.dir, `${slug}-w${width}.webp`);
     if (!existsSync(resized)) await sharp(original).resize({ width }).webp({ quality: 80 }).toFile(resized);
     return { path: resized, mime: 'image/webp' };
+  }
+
+  /**
+   * The sizes the list, printed fact cards and the species page show (PHOTO_SIZES), made at upload so
+   * the first reader waits for none; a photo narrower than a size is served as stored instead.
+   */
+  private async makeVariants(slug: string, bytes: Buffer, width: number): Promise<void> {
+    for (const w of PHOTO_WIDTHS) {
+      if (w >= width) continue;
+      await sharp(bytes)
+        .resize({ width: w })
+        .webp({ quality: 80 })
+        .toFile(path.join(this.dir, `${slug}-w${w}.webp`));
+    }
   }
 
   private async removeVariants(slug: string, oldFile: string | null): Promise<void> {

@@ -1,6 +1,8 @@
 import { Controller, Get, Header, HttpCode, Post, Put, Req, Res, StreamableFile } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
+  type CsvImportQuery,
+  csvImportQuerySchema,
   type CsvImportResult,
   csvImportResultSchema,
   type PhotoCredit,
@@ -107,16 +109,23 @@ export class SpeciesController {
     return this.species.replace(slug, record, user.id);
   }
 
-  /** CSV with the export's columns; all-or-nothing, bad rows listed with line numbers. */
+  /**
+   * CSV with the export's columns; all-or-nothing, bad rows listed with line numbers. With
+   * `?dryRun=true` the file is checked the same way and the answer previews what it would create
+   * and change, writing nothing.
+   */
   @Post('import')
   @ZodResponse(csvImportResultSchema)
   @HttpCode(200)
   @Auth('curator')
   importCsv(
     @ZodFile('file', MAX_CSV_BYTES, "CSV with the export's columns") file: UploadedBlob,
+    @ZodQuery(csvImportQuerySchema) query: CsvImportQuery,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<CsvImportResult> {
-    return this.species.importCsv(utf8Text(file.buffer, 'file'), user.id, displayFileName(file.originalname));
+    return this.species.importCsv(utf8Text(file.buffer, 'file'), user.id, displayFileName(file.originalname), {
+      dryRun: query.dryRun ?? false,
+    });
   }
 
   /** Every change to the record, newest first: who, when, how, and each field before and after. */

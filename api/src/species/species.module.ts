@@ -13,14 +13,26 @@ import { SpeciesChangeRow } from './species-change.entity.js';
 import { SpeciesHistoryService } from './species-history.service.js';
 import { SpeciesListCacheMiddleware } from './species-list-cache.middleware.js';
 import { SpeciesPhotosService } from './species-photos.service.js';
+import { SpeciesReferenceController } from './species-reference.controller.js';
+import { SpeciesReferenceService } from './species-reference.service.js';
+import { SpeciesSourcesController } from './species-sources.controller.js';
+import { SpeciesSourcesService } from './species-sources.service.js';
 import { SpeciesStore } from './species-store.service.js';
 import { SpeciesController } from './species.controller.js';
 import { SpeciesService } from './species.service.js';
 
 @Module({
   imports: [CatalogueModule, EcoregionsModule, TypeOrmModule.forFeature([SpeciesChangeRow])],
-  controllers: [SpeciesController],
-  providers: [SpeciesService, SpeciesHistoryService, SpeciesStore, SpeciesPhotosService, SpeciesListCacheMiddleware],
+  controllers: [SpeciesController, SpeciesSourcesController, SpeciesReferenceController],
+  providers: [
+    SpeciesService,
+    SpeciesSourcesService,
+    SpeciesReferenceService,
+    SpeciesHistoryService,
+    SpeciesStore,
+    SpeciesPhotosService,
+    SpeciesListCacheMiddleware,
+  ],
   exports: [SpeciesStore],
 })
 export class SpeciesModule implements OnModuleInit, NestModule {

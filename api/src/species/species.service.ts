@@ -3,7 +3,9 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import {
   type CsvImportResult,
   type CsvRowError,
+  type CsvImportPreviewRow,
   csvRowToSpecies,
+  diffSpecies,
   SPECIES_CSV_COLUMNS,
   type Species,
   speciesToCsvRow,
@@ -13,6 +15,7 @@ import { DataSource } from 'typeorm';
 import { writeSpecies } from '../catalogue/catalogue-writer.js';
 import { badRequest } from '../common/validation/bad-request.js';
 import { recordChange } from './species-change-recorder.js';
+import { SpeciesSourcesService } from './species-sources.service.js';
 import { SpeciesStore } from './species-store.service.js';
 
 /** At most this many bad rows are listed in one answer; the count says how many there were. */
@@ -23,6 +26,7 @@ export class SpeciesService {
   constructor(
     @InjectDataSource() private readonly db: DataSource,
     private readonly store: SpeciesStore,
+    private readonly sources: SpeciesSourcesService,
   ) {}
 
   get(slug: string): Species {
@@ -32,6 +36,7 @@ export class SpeciesService {
   }
 
   async create(record: Species, userId: string): Promise<Species> {
+    this.sources.assertKnown(record);
     if (this.store.get(record.slug))
       throw new ConflictException(`Species "${record.slug}" already exists: edit it instead.`);
     await this.db.transaction(async (tx) => {
@@ -51,6 +56,7 @@ export class SpeciesService {
     how: { kind: 'edit' | 'revert'; revertOf?: string } = { kind: 'edit' },
   ): Promise<Species> {
     const before = this.get(slug);
+    this.sources.assertKnown(record);
     if (record.slug !== slug && this.store.get(record.slug))
       throw new ConflictException(`Species "${record.slug}" already exists.`);
     await this.db.transaction(async (tx) => {
@@ -67,7 +73,12 @@ export class SpeciesService {
    * if any row is bad, the answer lists each bad row with its line number and field and nothing is
    * written. Otherwise all rows are written in one transaction (existing slugs are replaced).
    */
-  async importCsv(text: string, userId: string, fileName: string | null = null): Promise<CsvImportResult> {
+  async importCsv(
+    text: string,
+    userId: string,
+    fileName: string | null = null,
+    { dryRun = false }: { dryRun?: boolean } = {},
+  ): Promise<CsvImportResult> {
     const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
       header: true,
       skipEmptyLines: 'greedy',
@@ -87,6 +98,12 @@ export class SpeciesService {
       const { species, errors: rowErrors } = csvRowToSpecies(row, line);
       errors.push(...rowErrors);
       if (!species) return;
+      for (const f of this.sources.unknownKeys(species))
+        errors.push({
+          row: line,
+          field: 'sources',
+          message: `${f}: "${species.sources[f]}" is not in the sources registry`,
+        });
       const first = seen.get(species.slug);
       if (first) errors.push({ row: line, field: 'slug', message: `repeats line ${first}` });
       seen.set(species.slug, line);
@@ -100,17 +117,23 @@ export class SpeciesService {
         { rows: errors.slice(0, MAX_REPORTED_ROW_ERRORS) },
       );
     }
-    let created = 0;
+    const preview: CsvImportPreviewRow[] = records.map((r, i) => {
+      const before = this.store.get(r.slug) ?? null;
+      const fields = before ? diffSpecies(before, r).map((c) => c.field) : [];
+      const action = !before ? 'create' : fields.length > 0 ? 'change' : 'unchanged';
+      return { line: i + 2, slug: r.slug, scientificName: r.scientificName, action, fields };
+    });
+    const created = preview.filter((p) => p.action === 'create').length;
+    if (dryRun) return { created, updated: records.length - created, dryRun: true, preview };
     await this.db.transaction(async (tx) => {
       for (const r of records) {
         const before = this.store.get(r.slug) ?? null;
-        if (!before) created++;
         await writeSpecies(tx, r, { seedHash: null, editedBy: userId });
         await recordChange(tx, { kind: 'import', before, after: r, userId, fileName });
       }
     });
     await this.store.reload();
-    return { created, updated: records.length - created };
+    return { created, updated: records.length - created, dryRun: false, preview };
   }
 
   exportCsv(): string {

@@ -146,7 +146,8 @@ const PATH_TO_COLUMN: Record<string, SpeciesCsvColumn> = {
   'germination.methods': 'methods',
 };
 
-function columnFor(path: readonly PropertyKey[]): string {
+/** The CSV column (and editor field) a person fixes for a problem at this schema path. */
+export function columnFor(path: readonly PropertyKey[]): string {
   const named = path.filter((p) => typeof p === 'string').join('.');
   for (let n = path.length; n > 0; n--) {
     const key = path

@@ -173,6 +173,16 @@ export const speciesDetailSchema = speciesSchema.extend({
 export const csvImportResultSchema = z.object({
   created: z.number().int(),
   updated: z.number().int(),
+  dryRun: z.boolean(),
+  preview: z.array(
+    z.object({
+      line: z.number().int(),
+      slug: z.string(),
+      scientificName: z.string(),
+      action: z.enum(['create', 'change', 'unchanged']),
+      fields: z.array(z.string()),
+    }),
+  ),
 }) satisfies z.ZodType<CsvImportResult>;
 
 export const photoUploadResultSchema = z.object({

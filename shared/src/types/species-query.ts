@@ -50,6 +50,9 @@ export type SpeciesQuery = z.infer<typeof speciesQuerySchema>;
 
 /** Widths a photo is served resized to; a fixed list keeps the server's disk cache bounded. */
 export const PHOTO_WIDTHS = [160, 400, 800] as const;
+export type PhotoWidth = (typeof PHOTO_WIDTHS)[number];
+/** The width each place shows a photo at: list thumbnails, printed fact cards, the species page. */
+export const PHOTO_SIZES = { list: 160, print: 400, detail: 800 } as const satisfies Record<string, PhotoWidth>;
 
 /** Query string of `GET /api/species/:slug/photo`: `w` picks a resized copy; left out, the original. */
 export const photoQuerySchema = z
@@ -95,7 +98,24 @@ export interface CsvRowError {
   message: string;
 }
 
+/** What an import does to one row's record: adds it, changes these fields, or leaves it as it is. */
+export interface CsvImportPreviewRow {
+  line: number;
+  slug: string;
+  scientificName: string;
+  action: 'create' | 'change' | 'unchanged';
+  /** The changed fields (nested ones by path, e.g. `heightCm`); empty for a new or unchanged record. */
+  fields: string[];
+}
+
 export interface CsvImportResult {
   created: number;
   updated: number;
+  /** True when nothing was written: the answer is a preview of what the same file would do. */
+  dryRun: boolean;
+  preview: CsvImportPreviewRow[];
 }
+
+/** `?dryRun=true` checks the file and answers what it would create and change, writing nothing. */
+export const csvImportQuerySchema = z.object({ dryRun: boolFromQuery.optional() }).strict();
+export type CsvImportQuery = z.infer<typeof csvImportQuerySchema>;

@@ -13,8 +13,9 @@ export function referenceDir(): string {
   return path.resolve(projectRoot, '..', 'shared', 'reference');
 }
 
-export function referenceFile(name: string): string {
-  return path.join(referenceDir(), name);
+/** A reference file's path, in `dir` when given (the API passes its configured folder), else the default. */
+export function referenceFile(name: string, dir: string = referenceDir()): string {
+  return path.join(dir, name);
 }
 
 /**

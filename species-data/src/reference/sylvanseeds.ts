@@ -8,8 +8,8 @@ export const SYLVANSEEDS_FILE = 'sylvanseeds_germination_database.csv';
  * Germination percentages of the SylvanSeeds laboratory trials (Fernández-Pascual 2021), by accepted name
  * (`TPLName`). Rows without a seed count are left out.
  */
-export function loadSylvanSeedsPercentages(): Map<string, number[]> {
-  const text = readFileSync(referenceFile(SYLVANSEEDS_FILE), 'utf8').replace(/^\uFEFF/, '');
+export function loadSylvanSeedsPercentages(dir?: string): Map<string, number[]> {
+  const text = readFileSync(referenceFile(SYLVANSEEDS_FILE, dir), 'utf8').replace(/^\uFEFF/, '');
   const rows = Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true }).data;
   const out = new Map<string, number[]>();
   for (const r of rows) {

@@ -23,8 +23,8 @@ export interface UsdaDistribution {
   introducedIn: StateCode[];
 }
 
-function readCsv(file: string): Record<string, string>[] {
-  const text = readFileSync(referenceFile(file), 'utf8').replace(/^\uFEFF/, '');
+function readCsv(file: string, dir?: string): Record<string, string>[] {
+  const text = readFileSync(referenceFile(file, dir), 'utf8').replace(/^\uFEFF/, '');
   return Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true }).data;
 }
 
@@ -39,45 +39,59 @@ export function nameWithoutAuthor(withAuthor: string): string {
   return kept.join(' ');
 }
 
-let taxaCache: UsdaTaxon[] | undefined;
-export function loadUsdaTaxa(): UsdaTaxon[] {
-  taxaCache ??= readCsv('usda_plants_taxa.csv').map((r) => ({
-    symbol: r.symbol,
-    scientificNameWithAuthor: r.scientific_name,
-    name: nameWithoutAuthor(r.scientific_name),
-    commonName: r.common_name,
-    rank: r.rank,
-    family: r.family,
-    genus: r.genus,
-    duration: r.duration,
-    growthHabit: r.growth_habit,
-  }));
-  return taxaCache;
+/** Each table is read once per folder (tests use the default folder, the API its configured one). */
+const cached = <T>(cache: Map<string, T>, dir: string | undefined, read: () => T): T => {
+  const key = dir ?? '';
+  if (!cache.has(key)) cache.set(key, read());
+  return cache.get(key)!;
+};
+
+const taxaCache = new Map<string, UsdaTaxon[]>();
+export function loadUsdaTaxa(dir?: string): UsdaTaxon[] {
+  return cached(taxaCache, dir, () =>
+    readCsv('usda_plants_taxa.csv', dir).map((r) => ({
+      symbol: r.symbol,
+      scientificNameWithAuthor: r.scientific_name,
+      name: nameWithoutAuthor(r.scientific_name),
+      commonName: r.common_name,
+      rank: r.rank,
+      family: r.family,
+      genus: r.genus,
+      duration: r.duration,
+      growthHabit: r.growth_habit,
+    })),
+  );
 }
 
-let distributionCache: Map<string, UsdaDistribution> | undefined;
+const distributionCache = new Map<string, Map<string, UsdaDistribution>>();
 /** State distribution by symbol, limited to the conterminous states and DC. */
-export function loadUsdaDistribution(): Map<string, UsdaDistribution> {
-  if (distributionCache) return distributionCache;
+export function loadUsdaDistribution(dir?: string): Map<string, UsdaDistribution> {
   const toCodes = (list: string) =>
     list
       .split(';')
       .map((n) => STATE_NAME_TO_CODE[n.trim()])
       .filter((c): c is StateCode => Boolean(c));
-  distributionCache = new Map(
-    readCsv('usda_plants_state_distribution.csv').map((r) => [
-      r.symbol,
-      { nativeIn: toCodes(r.native_in ?? ''), introducedIn: toCodes(r.introduced_in ?? '') },
-    ]),
+  return cached(
+    distributionCache,
+    dir,
+    () =>
+      new Map(
+        readCsv('usda_plants_state_distribution.csv', dir).map((r) => [
+          r.symbol,
+          { nativeIn: toCodes(r.native_in ?? ''), introducedIn: toCodes(r.introduced_in ?? '') },
+        ]),
+      ),
   );
-  return distributionCache;
 }
 
-let characteristicsCache: Map<string, Record<string, string>> | undefined;
+const characteristicsCache = new Map<string, Map<string, Record<string, string>>>();
 /** USDA PLANTS "Characteristics" rows (about 2,100 taxa), keyed by symbol. */
-export function loadUsdaCharacteristics(): Map<string, Record<string, string>> {
-  characteristicsCache ??= new Map(readCsv('usda_plants_characteristics.csv').map((r) => [r.symbol, r]));
-  return characteristicsCache;
+export function loadUsdaCharacteristics(dir?: string): Map<string, Record<string, string>> {
+  return cached(
+    characteristicsCache,
+    dir,
+    () => new Map(readCsv('usda_plants_characteristics.csv', dir).map((r) => [r.symbol, r])),
+  );
 }
 
 /** A row of Tallamy & Shropshire (2009): Lepidoptera species recorded on a plant genus. */
@@ -88,18 +102,22 @@ export interface LepidopteraGenusRow {
   totalLepidoptera: number;
 }
 
-let tallamyCache: Map<string, LepidopteraGenusRow> | undefined;
-export function loadLepidopteraByGenus(): Map<string, LepidopteraGenusRow> {
-  tallamyCache ??= new Map(
-    readCsv('tallamy_shropshire_2009_lepidoptera_by_plant_genus.csv').map((r) => [
-      r.Genus.trim(),
-      {
-        genus: r.Genus.trim(),
-        family: (r['Family (as listed by USDA)'] ?? '').trim(),
-        origin: (r['origin (for analysis)'] ?? '').trim(),
-        totalLepidoptera: Number(r['total Lep spp']),
-      },
-    ]),
+const tallamyCache = new Map<string, Map<string, LepidopteraGenusRow>>();
+export function loadLepidopteraByGenus(dir?: string): Map<string, LepidopteraGenusRow> {
+  return cached(
+    tallamyCache,
+    dir,
+    () =>
+      new Map(
+        readCsv('tallamy_shropshire_2009_lepidoptera_by_plant_genus.csv', dir).map((r) => [
+          r.Genus.trim(),
+          {
+            genus: r.Genus.trim(),
+            family: (r['Family (as listed by USDA)'] ?? '').trim(),
+            origin: (r['origin (for analysis)'] ?? '').trim(),
+            totalLepidoptera: Number(r['total Lep spp']),
+          },
+        ]),
+      ),
   );
-  return tallamyCache;
 }

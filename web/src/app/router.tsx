@@ -61,12 +61,24 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               const m = await import('../routes/species-detail.js');
               return { Component: m.SpeciesDetailRoute, loader: m.speciesDetailLoader(queryClient) };
             }),
+            page(paths.speciesImport.path, async () => ({
+              Component: (await import('../routes/species-import.js')).SpeciesImportRoute,
+            })),
+            page(paths.speciesNew.path, async () => ({
+              Component: (await import('../routes/species-editor.js')).SpeciesNewRoute,
+            })),
+            page(paths.speciesEdit.path, async () => ({
+              Component: (await import('../routes/species-editor.js')).SpeciesEditRoute,
+            })),
             page(paths.cardsLabels.path, async () => ({
               Component: (await import('../routes/cards-and-labels.js')).CardsLabelsRoute,
             })),
             page(paths.group.path, async () => ({ Component: (await import('../routes/group.js')).GroupRoute })),
             page(paths.invitation.path, async () => ({
               Component: (await import('../routes/invitation.js')).InvitationRoute,
+            })),
+            page(paths.referenceChecks.path, async () => ({
+              Component: (await import('../routes/reference-checks.js')).ReferenceChecksRoute,
             })),
             page(paths.people.path, async () => ({ Component: (await import('../routes/people.js')).PeopleRoute })),
             page(paths.season.path, async () => ({ Component: (await import('../routes/season.js')).SeasonRoute })),

@@ -54,6 +54,15 @@ export const paths = {
     search: browserStateToSearchParams,
   },
   speciesDetail: { path: '/species/:slug', build: (slug: string) => `/species/${encodeURIComponent(slug)}` },
+  /** Curators: a blank species form. */
+  speciesNew: { path: '/species/new', build: () => '/species/new' },
+  /** Curators: import species from a CSV file, previewed before anything is written. */
+  speciesImport: { path: '/species/import', build: () => '/species/import' },
+  /** Curators: one record's form. */
+  speciesEdit: {
+    path: '/species/:slug/edit',
+    build: (slug: string) => `/species/${encodeURIComponent(slug)}/edit`,
+  },
   cardsLabels: {
     path: '/cards-and-labels',
     /** Cards for these species (`?species=a,b`) and/or a saved mix's (`?mix=id`). */
@@ -89,6 +98,8 @@ export const paths = {
     path: '/plant-share/reservations/:token',
     build: (token: string) => `/plant-share/reservations/${encodeURIComponent(token)}`,
   },
+  /** Curators: the catalogue's differences from the open reference data not yet explained. */
+  referenceChecks: { path: '/reference-checks', build: () => '/reference-checks' },
   /** Admins: every account, its role, switch-off and sign-in activity. */
   people: { path: '/people', build: () => '/people' },
 } as const;

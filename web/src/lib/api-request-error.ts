@@ -11,6 +11,8 @@ export class ApiRequestError extends Error implements ApiError {
   readonly fields?: { field: string; message: string }[];
   /** A plant share's 409 "all taken": the species that ran out and where to join their waitlist. */
   readonly waitlist?: ApiError['waitlist'];
+  /** A refused CSV import: each bad row with its line number, field and reason. */
+  readonly rows?: ApiError['rows'];
 
   constructor(body: ApiError) {
     super(body.message);
@@ -18,6 +20,7 @@ export class ApiRequestError extends Error implements ApiError {
     this.error = body.error;
     if (body.fields) this.fields = body.fields;
     if (body.waitlist) this.waitlist = body.waitlist;
+    if (body.rows) this.rows = body.rows;
   }
 
   get isNetworkError(): boolean {

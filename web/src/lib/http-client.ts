@@ -45,14 +45,17 @@ export function createHttpClient(config: HttpClientConfig) {
     const headers: Record<string, string> = { Accept: 'application/json' };
     const token = options.token === undefined ? config.getToken() : options.token;
     if (token) headers.Authorization = `Bearer ${token}`;
-    if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+    // A FormData body (a file upload) sets its own multipart type and boundary.
+    const isForm = options.body instanceof FormData;
+    if (options.body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
 
     let response: Response;
     try {
       response = await fetch(`${config.baseUrl}${path}`, {
         method: options.method ?? (options.body === undefined ? 'GET' : 'POST'),
         headers,
-        body: options.body === undefined ? undefined : JSON.stringify(options.body),
+        body:
+          options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
         signal: options.signal,
       });
     } catch (cause) {

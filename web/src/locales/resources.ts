@@ -14,6 +14,16 @@ import { cards as enCards } from './en/cards.js';
 import { cards as esCards } from './es/cards.js';
 import { yard as enYard } from './en/yard.js';
 import { yard as esYard } from './es/yard.js';
+import { editor as enEditor } from './en/editor.js';
+import { editor as esEditor } from './es/editor.js';
+import { reference as enReference } from './en/reference.js';
+import { reference as esReference } from './es/reference.js';
+import { importer as enImporter } from './en/importer.js';
+import { importer as esImporter } from './es/importer.js';
+import { people as enPeople } from './en/people.js';
+import { people as esPeople } from './es/people.js';
+import { history as enHistory } from './en/history.js';
+import { history as esHistory } from './es/history.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -26,6 +36,11 @@ export const resources = {
     detail: enDetail,
     cards: enCards,
     yard: enYard,
+    editor: enEditor,
+    reference: enReference,
+    importer: enImporter,
+    people: enPeople,
+    history: enHistory,
   },
   es: {
     common: esCommon,
@@ -36,5 +51,10 @@ export const resources = {
     detail: esDetail,
     cards: esCards,
     yard: esYard,
+    editor: esEditor,
+    reference: esReference,
+    importer: esImporter,
+    people: esPeople,
+    history: esHistory,
   },
 } as const;

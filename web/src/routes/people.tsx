@@ -1,3 +1,4 @@
+import { useTranslation } from 'react-i18next';
 import { PageIntro } from '../components/page/page-intro.js';
 import { EmptyState } from '../components/states/index.js';
 import { PeoplePage } from '../features/people/index.js';
@@ -6,17 +7,14 @@ import { SignedInGate } from './signed-in-gate.js';
 
 /** Admins only; anyone else is told whose page it is rather than shown an error. */
 export function PeopleRoute() {
-  useDocumentTitle('People');
+  const { t } = useTranslation('people');
+  useDocumentTitle(t('page.title'));
   return (
-    <SignedInGate loading="Checking your sign-in">
+    <SignedInGate loading={t('page.loading')}>
       {(user) => (
         <>
-          <PageIntro title="People">Accounts, roles and sign-in activity across Homeground.</PageIntro>
-          {user.role === 'admin' ? (
-            <PeoplePage myId={user.id} />
-          ) : (
-            <EmptyState title="This page is for Homeground admins." />
-          )}
+          <PageIntro title={t('page.title')}>{t('page.intro')}</PageIntro>
+          {user.role === 'admin' ? <PeoplePage myId={user.id} /> : <EmptyState title={t('page.notAdmin')} />}
         </>
       )}
     </SignedInGate>

@@ -1,4 +1,7 @@
+import { useTranslation } from 'react-i18next';
 import { useWords } from '../lib/i18n/index.js';
+import { RouterButton } from '../components/links/router-link.js';
+import { paths } from '../config/paths.js';
 import type { QueryClient } from '@tanstack/react-query';
 import { type LoaderFunctionArgs, useParams } from 'react-router-dom';
 import { speciesDetailQueryOptions } from '../api/species/species.queries.js';
@@ -6,6 +9,7 @@ import { BloomStrip } from '../features/species-browser/index.js';
 import { useSession } from '../features/auth/index.js';
 import { SpeciesDetail } from '../features/species-detail/index.js';
 import { SpeciesHistoryPanel } from '../features/species-history/index.js';
+import { RecordReferencePanel } from '../features/species-reference/index.js';
 
 /** Starts the record's request while the page's code arrives; the page shows loading, 404 and errors itself. */
 export function speciesDetailLoader(queryClient: QueryClient) {
@@ -20,8 +24,14 @@ export function SpeciesDetailRoute() {
   const words = useWords();
   const role = useSession().user?.role;
   const curates = role === 'curator' || role === 'admin';
+  const { t } = useTranslation('editor');
   return (
     <>
+      {curates ? (
+        <RouterButton to={paths.speciesEdit.build(slug)} appearance="secondary">
+          {t('page.edit')}
+        </RouterButton>
+      ) : null}
       <SpeciesDetail
         // A new slug is a new page: start its state (photo fallback, open details) afresh.
         key={slug}
@@ -31,6 +41,7 @@ export function SpeciesDetailRoute() {
           <BloomStrip bloomMonths={s.bloomMonths} flowerColours={s.flowerColours} size="large" />
         )}
       />
+      {curates ? <RecordReferencePanel key={`reference-${slug}`} slug={slug} /> : null}
       {curates ? <SpeciesHistoryPanel key={`history-${slug}`} slug={slug} /> : null}
     </>
   );

@@ -58,4 +58,18 @@ describe("a species record's history (curators)", () => {
     expect(screen.queryByRole('region', { name: 'Changes to this record' })).toBeNull();
     expect(api.calls.some((c) => c.path.endsWith('/history'))).toBe(false);
   });
+
+  it('speaks Spanish on a Spanish page: the heading, the change and its date', async () => {
+    renderApp({ path: '/species/asclepias-tuberosa', token: 'ines', api: routes(ines), locale: 'es' });
+    const panel = within(await screen.findByRole('region', { name: 'Cambios en esta ficha' }, { timeout: 5000 }));
+    // Spanish dates put the day first with a lower-case month ("30 nov 2026").
+    expect(
+      await panel.findByText(
+        /^Importada por Ines Calder el 30 nov 2026.* \(desde spring-edits\.csv\)$/,
+        {},
+        { timeout: 5000 },
+      ),
+    ).toBeInTheDocument();
+    expect(panel.getByRole('button', { name: 'Deshacer este cambio' })).toBeInTheDocument();
+  });
 });

@@ -2,6 +2,7 @@ import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpSta
 import type { ApiError } from '@homeground/shared';
 import type { Response } from 'express';
 import { JsonTooDeepError } from '../http/json-depth.js';
+import { TooLargeWithReason } from '../http/too-large-with-reason.js';
 
 const REASON: Record<number, string> = {
   400: 'Bad Request',
@@ -72,7 +73,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
       // Any other 400 from the HTTP layer (e.g. a form nested past body-parser's depth) still names what was wrong.
       if (statusCode === 400 && !base.fields)
         base.fields = [{ field: 'body', message: 'could not be read as this request' }];
-      if (statusCode === 413) base.message = 'The request body is too large.';
+      if (statusCode === 413 && !(exception instanceof TooLargeWithReason))
+        base.message = 'The request body is too large.';
       return base;
     }
     return {

@@ -1,1 +1,1 @@
-export { PeoplePage, signInWords } from './components/people-page.js';
+export { PeoplePage, useSignInWords } from './components/people-page.js';

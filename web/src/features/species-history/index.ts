@@ -1,1 +1,1 @@
-export { changeHeadline, SpeciesHistoryPanel } from './components/species-history-panel.js';
+export { useChangeHeadline, SpeciesHistoryPanel } from './components/species-history-panel.js';

@@ -8,6 +8,8 @@ export interface Formatters {
   number(value: number, options?: Intl.NumberFormatOptions): string;
   /** A calendar date stored as "YYYY-MM-DD", read as that day wherever the browser is. */
   date(isoDate: string, options?: Intl.DateTimeFormatOptions): string;
+  /** An instant (ISO timestamp) as a date and time in the browser's time zone: "Dec 2, 2026, 10:15 PM". */
+  moment(isoInstant: string): string;
 }
 
 export function formattersFor(locale: Locale): Formatters {
@@ -18,6 +20,8 @@ export function formattersFor(locale: Locale): Formatters {
     date: (isoDate, options = { dateStyle: 'long' }) =>
       // Read at noon UTC and shown in UTC so no time zone moves the day.
       new Intl.DateTimeFormat(tag, { timeZone: 'UTC', ...options }).format(new Date(`${isoDate}T12:00:00Z`)),
+    moment: (isoInstant) =>
+      new Intl.DateTimeFormat(tag, { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(isoInstant)),
   };
 }
 

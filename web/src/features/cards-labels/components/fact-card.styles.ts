@@ -62,6 +62,8 @@ export const useFactCardStyles = makeStyles({
   },
   scientific: { fontStyle: 'italic', fontSize: '1.15em', margin: '0.15em 0 0' },
   family: { color: tokens.colorNeutralForeground2, margin: 0 },
+  photo: { flexShrink: 0, width: '0.95in', height: '0.95in', objectFit: 'cover', borderRadius: '2px' },
+  credit: { margin: 0, fontSize: '0.75em', color: tokens.colorNeutralForeground2 },
   qr: { flexShrink: 0, width: '0.78in', textAlign: 'center', fontSize: '0.8em', color: tokens.colorNeutralForeground2 },
   facts: { display: 'grid', gridTemplateColumns: 'repeat(3, 1fr)', gap: '0.6em', margin: 0 },
   fact: { margin: 0 },

@@ -82,4 +82,23 @@ describe('fact card', () => {
     expect(card.queryByRole('heading', { name: 'Cautions' })).toBeNull();
     expect(card.queryByText(/Monarch host plant/)).toBeNull();
   });
+
+  it('prints the photo at its print size with the photographer and licence as a credit line', async () => {
+    // The photographer is from the invented demo scenario; CC BY 4.0 is a published licence.
+    await renderCard({
+      ...butterflyMilkweed,
+      hasPhoto: true,
+      photoCredit: { photographer: 'Ines Calder', licence: 'CC-BY-4.0', sourceUrl: 'https://example.org/photos/1' },
+    });
+    const card = screen.getByRole('article', { name: 'Butterfly milkweed' });
+    expect(card.querySelector('img[src="/api/species/asclepias-tuberosa/photo?w=400"]')).not.toBeNull();
+    expect(within(card).getByText(/^Photo: Ines Calder, CC BY 4\.0/)).toBeInTheDocument();
+  });
+
+  it('prints no photo and no credit line for a species without a photo', async () => {
+    await renderCard(butterflyMilkweed);
+    const card = screen.getByRole('article', { name: 'Butterfly milkweed' });
+    expect(card.querySelector('img[src*="/photo"]')).toBeNull();
+    expect(within(card).queryByText(/^Photo:/)).toBeNull();
+  });
 });

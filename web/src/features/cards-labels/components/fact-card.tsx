@@ -8,9 +8,9 @@ import {
   Warning16Regular,
   WeatherSunny16Regular,
 } from '@fluentui/react-icons';
-import { capitalise, formatHeightRangeCm, genusOf } from '@homeground/shared';
+import { capitalise, formatHeightRangeCm, genusOf, PHOTO_SIZES, photoCreditLine } from '@homeground/shared';
 import { useId, useRef } from 'react';
-import type { SpeciesDetail } from '../../../api/species/species.api.js';
+import { type SpeciesDetail, speciesPhotoUrl } from '../../../api/species/species.api.js';
 import { flowerSwatch } from '../../../theme/flower-colours.js';
 import { useFitLevel } from '../hooks/use-fit-level.js';
 import type { QrEncoderState } from '../hooks/use-qr-encoder.js';
@@ -77,6 +77,10 @@ export function FactCard({
             <p className={styles.text}>{words.bloomWords(species.bloomMonths)}</p>
           </div>
         </div>
+        {species.hasPhoto ? (
+          // The print size (PHOTO_SIZES.print) is made at upload; the credit line below names who took it.
+          <img className={styles.photo} src={speciesPhotoUrl(species.slug, PHOTO_SIZES.print)} alt="" />
+        ) : null}
         <div className={styles.qr}>
           <QrCode url={url} encoder={qr} />
           {t('card.scan')}
@@ -149,6 +153,9 @@ export function FactCard({
         </section>
       ) : null}
 
+      {species.hasPhoto && species.photoCredit ? (
+        <p className={styles.credit}>{photoCreditLine(species.photoCredit)}</p>
+      ) : null}
       <p className={styles.footer}>{t('card.footer')}</p>
     </article>
   );

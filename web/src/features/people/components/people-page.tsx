@@ -11,19 +11,15 @@ import {
   TableRow,
   tokens,
 } from '@fluentui/react-components';
-import {
-  GLOBAL_ROLE_WORDS,
-  GLOBAL_ROLES,
-  GROUP_ROLE_WORDS,
-  type GlobalRole,
-  type PersonAccount,
-} from '@homeground/shared';
+import { GLOBAL_ROLES, type GlobalRole, type PersonAccount } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
+import { useTranslation } from 'react-i18next';
 import { useSetAccessMutation, useSetRoleMutation } from '../../../api/people/people.mutations.js';
 import { peopleQueryOptions } from '../../../api/people/people.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { QueryState } from '../../../components/states/index.js';
+import { useFormatters, useWords } from '../../../lib/i18n/index.js';
 
 const useStyles = makeStyles({
   scroll: { overflowX: 'auto' },
@@ -36,12 +32,17 @@ const useStyles = makeStyles({
   role: { minWidth: 'unset', width: '100%' },
 });
 
-const dateTime = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
-
-/** "Last signed in" in words: a date, or "never" for accounts that have only used an invitation link. */
-export function signInWords(p: Pick<PersonAccount, 'lastSignInAt' | 'signInHeld'>): string {
-  const last = p.lastSignInAt ? dateTime.format(new Date(p.lastSignInAt)) : 'Never';
-  return p.signInHeld ? `${last} · held back after too many wrong passwords` : last;
+/**
+ * "Last signed in" in the page's language: a date and time, or "never" for accounts that have only
+ * used an invitation link, and whether sign-in is held back after wrong passwords.
+ */
+export function useSignInWords(): (p: Pick<PersonAccount, 'lastSignInAt' | 'signInHeld'>) => string {
+  const { t } = useTranslation('people');
+  const format = useFormatters();
+  return (p) => {
+    const last = p.lastSignInAt ? format.moment(p.lastSignInAt) : t('row.never');
+    return p.signInHeld ? t('row.held', { last }) : last;
+  };
 }
 
 /**
@@ -55,28 +56,33 @@ export function PeoplePage({ myId }: { myId: string }) {
   const setRole = useSetRoleMutation();
   const setAccess = useSetAccessMutation();
   const failure = setRole.error ?? setAccess.error;
+  const { t } = useTranslation('people');
+  const words = useWords();
+  const signInWords = useSignInWords();
 
   return (
     <ContentCard aria-labelledby="people-heading">
       <Heading level="section" id="people-heading">
-        Everyone with an account
+        {t('list.heading')}
       </Heading>
       <p className={styles.hint}>
-        {GLOBAL_ROLES.map((r) => `${GLOBAL_ROLE_WORDS[r].title}: ${GLOBAL_ROLE_WORDS[r].does}`).join(' ')} Switching an
-        account off signs the person out at once; their groups and history stay.
+        {GLOBAL_ROLES.map((r) =>
+          t('list.roleLine', { title: words.globalRole[r].title, does: words.globalRole[r].does }),
+        ).join(' ')}{' '}
+        {t('list.switchHint')}
       </p>
-      <QueryState query={people} loading="Loading people" error="The list of people did not load.">
+      <QueryState query={people} loading={t('list.loading')} error={t('list.error')}>
         {(list: PersonAccount[]) => (
-          <div className={styles.scroll} role="region" aria-label="People, scrolls sideways on a phone" tabIndex={0}>
-            <Table aria-label="Everyone with an account" size="small">
+          <div className={styles.scroll} role="region" aria-label={t('list.scrollRegion')} tabIndex={0}>
+            <Table aria-label={t('list.heading')} size="small">
               <TableHeader>
                 <TableRow>
-                  <TableHeaderCell>Name</TableHeaderCell>
-                  <TableHeaderCell>E-mail</TableHeaderCell>
-                  <TableHeaderCell>Role</TableHeaderCell>
-                  <TableHeaderCell>Groups</TableHeaderCell>
-                  <TableHeaderCell>Last signed in</TableHeaderCell>
-                  <TableHeaderCell>Account</TableHeaderCell>
+                  <TableHeaderCell>{t('columns.name')}</TableHeaderCell>
+                  <TableHeaderCell>{t('columns.email')}</TableHeaderCell>
+                  <TableHeaderCell>{t('columns.role')}</TableHeaderCell>
+                  <TableHeaderCell>{t('columns.groups')}</TableHeaderCell>
+                  <TableHeaderCell>{t('columns.lastSignIn')}</TableHeaderCell>
+                  <TableHeaderCell>{t('columns.account')}</TableHeaderCell>
                 </TableRow>
               </TableHeader>
               <TableBody>
@@ -85,17 +91,14 @@ export function PeoplePage({ myId }: { myId: string }) {
                   const off = p.disabledAt !== null;
                   return (
                     <TableRow key={p.id}>
-                      <TableCell>
-                        {p.displayName}
-                        {isMe ? ' (you)' : ''}
-                      </TableCell>
+                      <TableCell>{isMe ? t('row.you', { name: p.displayName }) : p.displayName}</TableCell>
                       <TableCell className={styles.email}>{p.email}</TableCell>
                       <TableCell className={styles.roleCell}>
                         <Dropdown
                           className={styles.role}
                           size="small"
-                          aria-label={`Role of ${p.displayName}`}
-                          value={GLOBAL_ROLE_WORDS[p.role].title}
+                          aria-label={t('row.roleOf', { name: p.displayName })}
+                          value={words.globalRole[p.role].title}
                           selectedOptions={[p.role]}
                           disabled={isMe || setRole.isPending}
                           onOptionSelect={(_, d) => {
@@ -105,27 +108,31 @@ export function PeoplePage({ myId }: { myId: string }) {
                         >
                           {GLOBAL_ROLES.map((r) => (
                             <Option key={r} value={r}>
-                              {GLOBAL_ROLE_WORDS[r].title}
+                              {words.globalRole[r].title}
                             </Option>
                           ))}
                         </Dropdown>
                       </TableCell>
                       <TableCell>
                         {p.groups.length
-                          ? p.groups.map((g) => `${g.groupName} (${GROUP_ROLE_WORDS[g.role].title})`).join(', ')
-                          : 'None'}
+                          ? p.groups
+                              .map((g) =>
+                                t('row.groupRole', { group: g.groupName, role: words.groupRole[g.role].title }),
+                              )
+                              .join(', ')
+                          : t('row.noGroups')}
                       </TableCell>
                       <TableCell>{signInWords(p)}</TableCell>
                       <TableCell>
-                        {off ? <span className={styles.off}>Switched off </span> : null}
+                        {off ? <span className={styles.off}>{t('row.off')} </span> : null}
                         {isMe ? null : (
                           <Button
                             size="small"
                             disabled={setAccess.isPending}
                             onClick={() => setAccess.mutate({ id: p.id, disabled: !off })}
-                            aria-label={`${off ? 'Switch on' : 'Switch off'} the account of ${p.displayName}`}
+                            aria-label={t(off ? 'row.switchOnLabel' : 'row.switchOffLabel', { name: p.displayName })}
                           >
-                            {off ? 'Switch on' : 'Switch off'}
+                            {off ? t('row.switchOn') : t('row.switchOff')}
                           </Button>
                         )}
                       </TableCell>

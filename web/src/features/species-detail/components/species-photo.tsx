@@ -1,7 +1,7 @@
 import { useWords } from '../../../lib/i18n/index.js';
 import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { photoCreditLine } from '@homeground/shared';
+import { PHOTO_SIZES, photoCreditLine } from '@homeground/shared';
 import { useState } from 'react';
 import { speciesPhotoUrl, type SpeciesDetail } from '../../../api/species/species.api.js';
 import { hgTokens } from '../../../theme/index.js';
@@ -40,7 +40,7 @@ export function SpeciesPhoto({ species }: { species: SpeciesDetail }) {
         {showPhoto ? (
           <img
             className={styles.img}
-            src={speciesPhotoUrl(species.slug, 800)}
+            src={speciesPhotoUrl(species.slug, PHOTO_SIZES.detail)}
             alt={t('header.photoAlt', { name, scientific: species.scientificName })}
             onError={() => setFailed(true)}
           />

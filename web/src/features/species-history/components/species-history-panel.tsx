@@ -12,10 +12,12 @@ import {
 import type { FieldChange, SpeciesChange, SpeciesChangeKind } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
+import { useTranslation } from 'react-i18next';
 import { speciesHistoryQueryOptions, useRevertChangeMutation } from '../../../api/species/species-history.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { QueryState } from '../../../components/states/index.js';
+import { useFormatters } from '../../../lib/i18n/index.js';
 
 const useStyles = makeStyles({
   list: { listStyle: 'none', margin: 0, padding: 0, display: 'grid', gap: tokens.spacingVerticalL },
@@ -38,23 +40,21 @@ const useStyles = makeStyles({
   failure: { color: tokens.colorPaletteRedForeground1 },
 });
 
-const KIND_WORDS: Record<SpeciesChangeKind, string> = {
-  create: 'Added',
-  edit: 'Edited',
-  import: 'Imported',
-  revert: 'Undone',
-};
-
-const dateTime = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
-
 /** Up to five changed fields are spelled out; the rest are counted, so a new record does not fill the page. */
 const SHOWN_FIELDS = 5;
 
-/** "Edited by Ines Calder on Dec 2, 2026, 10:15 PM (from spring-edits.csv)". */
-export function changeHeadline(c: SpeciesChange): string {
-  const who = c.changedBy ? ` by ${c.changedBy.displayName}` : ' from the catalogue files';
-  const file = c.fileName ? ` (from ${c.fileName})` : '';
-  return `${KIND_WORDS[c.kind]}${who} on ${dateTime.format(new Date(c.changedAt))}${file}`;
+/** "Edited by Ines Calder on Dec 2, 2026, 10:15 PM (from spring-edits.csv)", in the page's language. */
+export function useChangeHeadline(): (c: SpeciesChange) => string {
+  const { t } = useTranslation('history');
+  const format = useFormatters();
+  return (c) => {
+    const kind = t(`kinds.${c.kind satisfies SpeciesChangeKind}`);
+    const when = format.moment(c.changedAt);
+    const headline = c.changedBy
+      ? t('headline.byPerson', { kind, name: c.changedBy.displayName, when })
+      : t('headline.fromFiles', { kind, when });
+    return c.fileName ? t('headline.fromFile', { headline, file: c.fileName }) : headline;
+  };
 }
 
 /** A change that brought the record in has no earlier version to go back to. */
@@ -64,6 +64,7 @@ const shown = (v: string | null) => (v === null ? '—' : v.length > 160 ? `${v.
 
 function FieldLines({ changes }: { changes: FieldChange[] }) {
   const styles = useStyles();
+  const { t } = useTranslation('history');
   const rest = changes.length - SHOWN_FIELDS;
   return (
     <dl className={styles.fields}>
@@ -72,14 +73,14 @@ function FieldLines({ changes }: { changes: FieldChange[] }) {
           <dt className={styles.term}>{f.field}</dt>
           <dd className={styles.value}>
             {shown(f.before)} → {shown(f.after)}
-            {f.source ? <span className={styles.source}> · source: {f.source}</span> : null}
+            {f.source ? <span className={styles.source}>{t('panel.source', { source: f.source })}</span> : null}
           </dd>
         </div>
       ))}
       {rest > 0 ? (
         <div className={styles.pair}>
           <dt className={styles.term}>…</dt>
-          <dd className={styles.value}>and {rest} more fields</dd>
+          <dd className={styles.value}>{t('panel.more', { count: rest })}</dd>
         </div>
       ) : null}
     </dl>
@@ -95,18 +96,20 @@ export function SpeciesHistoryPanel({ slug }: { slug: string }) {
   const history = useQuery(speciesHistoryQueryOptions(slug));
   const revert = useRevertChangeMutation(slug);
   const [confirming, setConfirming] = useState<SpeciesChange | null>(null);
+  const { t } = useTranslation('history');
+  const changeHeadline = useChangeHeadline();
 
   return (
     <ContentCard aria-labelledby="species-history">
       <Heading level="section" id="species-history">
-        Changes to this record
+        {t('panel.heading')}
       </Heading>
       <QueryState
         query={history}
-        loading="Loading the record's history"
-        error="The record's history did not load."
+        loading={t('panel.loading')}
+        error={t('panel.error')}
         isEmpty={(list: SpeciesChange[]) => list.length === 0}
-        empty="No one has changed this record since it came from the catalogue files."
+        empty={t('panel.empty')}
       >
         {(list: SpeciesChange[]) => (
           <ol className={styles.list}>
@@ -116,7 +119,7 @@ export function SpeciesHistoryPanel({ slug }: { slug: string }) {
                 <FieldLines changes={c.changes} />
                 {!addedRecord(c) ? (
                   <Button size="small" onClick={() => setConfirming(c)} disabled={revert.isPending}>
-                    Undo this change
+                    {t('panel.undo')}
                   </Button>
                 ) : null}
               </li>
@@ -132,20 +135,17 @@ export function SpeciesHistoryPanel({ slug }: { slug: string }) {
       <Dialog open={confirming !== null} onOpenChange={(_, d) => !d.open && setConfirming(null)}>
         <DialogSurface>
           <DialogBody>
-            <DialogTitle>Undo this change?</DialogTitle>
-            <DialogContent>
-              The record goes back to how it was before: {confirming ? changeHeadline(confirming) : ''}. The undo is
-              kept in the history too, so it can be undone in turn.
-            </DialogContent>
+            <DialogTitle>{t('confirm.title')}</DialogTitle>
+            <DialogContent>{t('confirm.text', { change: confirming ? changeHeadline(confirming) : '' })}</DialogContent>
             <DialogActions>
-              <Button onClick={() => setConfirming(null)}>Keep it</Button>
+              <Button onClick={() => setConfirming(null)}>{t('confirm.keep')}</Button>
               <Button
                 appearance="primary"
                 onClick={() => {
                   if (confirming) revert.mutate(confirming.id, { onSettled: () => setConfirming(null) });
                 }}
               >
-                Undo
+                {t('confirm.undo')}
               </Button>
             </DialogActions>
           </DialogBody>

@@ -1,0 +1,1 @@
+export { SpeciesImportPanel } from './components/species-import-panel.js';
