@@ -16,6 +16,8 @@ import { yard as enYard } from './en/yard.js';
 import { yard as esYard } from './es/yard.js';
 import { mix as enMix } from './en/mix.js';
 import { mix as esMix } from './es/mix.js';
+import { groups as enGroups } from './en/groups.js';
+import { groups as esGroups } from './es/groups.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -29,6 +31,7 @@ export const resources = {
     cards: enCards,
     yard: enYard,
     mix: enMix,
+    groups: enGroups,
   },
   es: {
     common: esCommon,
@@ -40,5 +43,6 @@ export const resources = {
     cards: esCards,
     yard: esYard,
     mix: esMix,
+    groups: esGroups,
   },
 } as const;
