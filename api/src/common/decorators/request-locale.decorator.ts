@@ -18,6 +18,7 @@ export function AnswersInLanguage(): MethodDecorator & ClassDecorator {
     ApiHeader({
       name: 'Accept-Language',
       required: false,
+      schema: { type: 'string', maxLength: 512, example: 'es-MX,es;q=0.9,en;q=0.5' },
       description: 'en or es (RFC 9110 weights honoured); messages and reasons come back in that language',
     }),
   );

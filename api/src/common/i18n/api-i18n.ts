@@ -23,7 +23,12 @@ void instance.init({
 
 /** A dotted key of the English catalogue ("places.unknownZip"). */
 type Leaves<T, P extends string = ''> = {
-  [K in keyof T & string]: T[K] extends string ? `${P}${K}` : Leaves<T[K], `${P}${K}.`>;
+  [K in keyof T & string]: T[K] extends string
+    ? // A plural pair ("free_one", "free_other") is asked for by its stem with a count.
+      K extends `${infer Stem}_${'one' | 'other'}`
+      ? `${P}${Stem}` | `${P}${K}`
+      : `${P}${K}`
+    : Leaves<T[K], `${P}${K}.`>;
 }[keyof T & string];
 export type ApiMessageKey = Leaves<typeof en>;
 
