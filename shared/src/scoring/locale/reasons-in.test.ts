@@ -17,6 +17,14 @@ describe('reasonIn', () => {
     ['Blooms Jun–Aug and Oct, when your mix has least.', 'Florece jun–ago y oct, cuando tu mezcla tiene menos.'],
     ['one of 3 early bloomers', 'una de 3 que florecen temprano'],
     ['middle of the bed', 'en medio del arriate'],
+    [
+      'Late summer and fall (August to October): at least 3 species in flower every month, so something is in flower from spring to frost',
+      'Finales del verano y otoño (de agosto a octubre): al menos 3 especies en flor cada mes, para que siempre haya algo en flor de la primavera a las heladas',
+    ],
+    [
+      '200 ft² (18.6 m²) has room for about 7 species, each in a group of several plants.',
+      'En 200 ft² (18.6 m²) caben unas 7 especies, cada una en un grupo de varias plantas.',
+    ],
   ])('%s', (english, spanish) => {
     expect(reasonIn(english, 'es')).toBe(spanish);
     expect(reasonIn(english, 'en')).toBe(english);

@@ -65,6 +65,12 @@ const PERIOD: Record<string, string> = {
   'late summer and fall': 'finales del verano y el otoño',
 };
 
+const RULE_PERIOD: Record<string, string> = {
+  Spring: 'Primavera (de abril a mediados de junio)',
+  'Early summer': 'Principios del verano (de mediados de junio a julio)',
+  'Late summer and fall': 'Finales del verano y otoño (de agosto a octubre)',
+};
+
 const BLOOMERS: Record<string, [string, string]> = {
   'early bloomer': ['las que florecen temprano', 'la única que florece temprano'],
   'midsummer bloomer': ['las que florecen a mitad del verano', 'la única que florece a mitad del verano'],
@@ -127,6 +133,11 @@ const FIXED: Record<string, string> = {
     'Una planta de pantanos, praderas húmedas y orillas de arroyo, a gusto en terreno húmedo como el tuyo.',
   'A woodland plant, at home in shade like yours.': 'Una planta de bosque, a gusto en la sombra como la tuya.',
   'A plant of ground like yours.': 'Una planta de terrenos como el tuyo.',
+  // How the mix is balanced: the rules' headlines.
+  'At least one native milkweed when monarchs are a goal: their caterpillars eat nothing else':
+    'Al menos un algodoncillo nativo cuando las monarcas son un objetivo: sus orugas no comen otra cosa',
+  'Plants for the front, middle and back of the bed, as far as the species that suit it allow':
+    'Plantas para el frente, el medio y el fondo del arriate, hasta donde lo permitan las especies que le van',
   // Roles in the mix.
   'a native milkweed, for monarchs': 'un algodoncillo nativo, para las monarcas',
   'a grass or sedge to fill between the flowers': 'un pasto o junco para llenar entre las flores',
@@ -271,6 +282,26 @@ const RULES: Rule[] = [
     /^Pollen and nectar for bees, and the host of specialist bees \((.+)\)\.$/,
     (names) => `Polen y néctar para las abejas, y hospedera de abejas especialistas (${names}).`,
   ],
+  // How the mix is balanced: the rules' headlines and the mix's size.
+  [
+    /^(Spring|Early summer|Late summer and fall) \((April to mid-June|mid-June to July|August to October)\): at least (\d+) species in flower every month, so something is in flower from spring to frost$/,
+    (part, _words, n) =>
+      RULE_PERIOD[part]
+        ? `${RULE_PERIOD[part]}: al menos ${n} especies en flor cada mes, para que siempre haya algo en flor de la primavera a las heladas`
+        : undefined,
+  ],
+  [
+    /^At least (\d+) kinds of flowers \(wildflowers, legumes, shrubs\) in a full mix$/,
+    (n) => `Al menos ${n} clases de flores (flores silvestres, leguminosas, arbustos) en una mezcla completa`,
+  ],
+  [
+    /^Grasses and sedges: (\d+)–(\d+) of the (\d+) species$/,
+    (min, max, size) => `Pastos y juncos: de ${min} a ${max} de las ${size} especies`,
+  ],
+  [
+    /^(.+) has room for about (\d+) species, each in a group of several plants\.$/,
+    (area, n) => `En ${area} caben unas ${n} especies, cada una en un grupo de varias plantas.`,
+  ],
   // Roles in the mix.
   [/^the only one of the (.+)s$/, (noun) => (BLOOMERS[noun] ? BLOOMERS[noun][1] : undefined)],
   [
@@ -330,7 +361,10 @@ export function mixIn(mix: MixResponse, locale: WordLocale): MixResponse {
     parts: partsIn(c.parts, locale),
     roles: c.roles.map((r) => reasonIn(r, locale)),
   }));
-  return { ...mix, palette: { ...mix.palette, chosen } };
+  // The rules' headlines and the size sentence; their details name species and counts and stay as written.
+  const constraints = mix.palette.constraints.map((c) => ({ ...c, rule: reasonIn(c.rule, locale) }));
+  const sizeReason = reasonIn(mix.palette.sizeReason, locale);
+  return { ...mix, palette: { ...mix.palette, chosen, constraints, sizeReason } };
 }
 
 /** The alternatives for one place in a mix, with their reasons in the reader's language. */
