@@ -24,7 +24,8 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
 
   return (
     <div>
-      <p className={styles.caption} aria-hidden>
+      {/* About scrolling on a narrow screen: nothing to say on paper. */}
+      <p className={styles.caption} aria-hidden data-print="hide">
         {t('bloom.intro')}
       </p>
       <div className={styles.scroller} role="region" aria-labelledby={captionId} tabIndex={0}>
