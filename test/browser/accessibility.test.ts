@@ -29,6 +29,7 @@ const LANGUAGES = [
     findGround: 'Find my ground',
     next: 'Next: your yard',
     labelsTab: 'Pot labels',
+    swap: /^Swap /,
   },
   {
     name: 'Spanish',
@@ -38,6 +39,7 @@ const LANGUAGES = [
     findGround: 'Encontrar mi terreno',
     next: 'Siguiente: tu jardín',
     labelsTab: 'Etiquetas para macetas',
+    swap: /^Cambiar .+ por otra$/,
   },
 ] as const;
 
@@ -93,7 +95,7 @@ for (const language of LANGUAGES) {
 
       await open(PLAN, (p) => p.locator('table tr[data-slug]').first().waitFor());
       await check('yard mix with results');
-      const swap = page.getByRole('button', { name: /^Swap / }).first();
+      const swap = page.getByRole('button', { name: language.swap }).first();
       const swapName = await swap.getAttribute('aria-label');
       await swap.click();
       await page.getByRole('dialog').waitFor();
