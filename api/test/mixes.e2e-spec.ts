@@ -49,6 +49,29 @@ describe('recommendations, mixes, quantities and calendar (e2e)', () => {
     expect(Object.keys(species).sort()).toEqual(palette.chosen.map((c: { slug: string }) => c.slug).sort());
   });
 
+  // The same request in Spanish (Accept-Language, RFC 9110 §12.5.4): the same species, points and
+  // order, with every reason and role said in Spanish (words from shared's Spanish word tables).
+  it('answers in Spanish when asked, with the same mix and the reasons in Spanish', async () => {
+    const en = (await t.http.post('/api/mixes/balance').send({ site: sunnyDry, region: DRIFTLESS }).expect(200)).body;
+    const es = (
+      await t.http
+        .post('/api/mixes/balance')
+        .set('Accept-Language', 'es-MX,es;q=0.9,en;q=0.5')
+        .send({ site: sunnyDry, region: DRIFTLESS })
+        .expect(200)
+    ).body;
+    type Chosen = { slug: string; parts: { name: string; points: number; reason: string }[]; roles: string[] };
+    expect(es.palette.chosen.map((c: Chosen) => c.slug)).toEqual(en.palette.chosen.map((c: Chosen) => c.slug));
+    const reasons = (mix: typeof en) => mix.palette.chosen.flatMap((c: Chosen) => c.parts.map((p) => p.reason));
+    expect(reasons(es)).toContain('Nativa de Wisconsin.');
+    expect(reasons(es)).not.toContain('Native to Wisconsin.');
+    expect(reasons(es).some((r: string) => /^Crece a pleno sol/.test(r))).toBe(true);
+    expect(es.palette.chosen.flatMap((c: Chosen) => c.roles)).not.toContain('middle of the bed');
+    expect(es.palette.chosen[0].parts.map((p: { points: number }) => p.points)).toEqual(
+      en.palette.chosen[0].parts.map((p: { points: number }) => p.points),
+    );
+  });
+
   it('keeps locked species, leaves excluded ones out, and offers alternatives for a slot', async () => {
     const first = (await t.http.post('/api/mixes/balance').send({ site: sunnyDry, region: DRIFTLESS }).expect(200)).body
       .palette;

@@ -106,7 +106,14 @@ describe('OpenAPI document (e2e)', () => {
     );
     expect(bare).toEqual([]);
     const lookup = operations.find((o) => o.route === '/api/places/lookup')!;
-    expect(lookup.op.parameters!.map((p) => p.name).sort()).toEqual(['lat', 'lon', 'zip']);
+    expect(
+      lookup.op
+        .parameters!.filter((p) => p.in === 'query')
+        .map((p) => p.name)
+        .sort(),
+    ).toEqual(['lat', 'lon', 'zip']);
+    // The lookup answers in the reader's language, and says so.
+    expect(lookup.op.parameters!.filter((p) => p.in === 'header').map((p) => p.name)).toEqual(['Accept-Language']);
     const engine = operations.find((o) => o.route === '/api/mixes/balance')!.op.requestBody!.content![
       'application/json'
     ].schema!;

@@ -87,6 +87,25 @@ describe('place → your ground (e2e)', () => {
     expect(res.body.fields).toEqual([{ field, message: 'is outside the 48 conterminous states and DC' }]);
   });
 
+  // The same refusals for a Spanish reader (Accept-Language: es): whole sentences in Spanish, the field
+  // still named; a reader who names no language Homeground speaks gets English (RFC 9110 §12.5.4).
+  it('says outside the covered area and unknown ZIPs in Spanish when asked', async () => {
+    const alaska = await t.http.get('/api/places/lookup?zip=99501').set('Accept-Language', 'es').expect(400);
+    expect(alaska.body.message).toMatch(/^Alaska queda fuera del área que cubre Homeground\. .+ 48 estados contiguos/);
+    expect(alaska.body.fields).toEqual([{ field: 'zip', message: 'queda fuera de los 48 estados contiguos y DC' }]);
+    const hawaii = await t.http
+      .get('/api/places/lookup?lat=21.31&lon=-157.86')
+      .set('Accept-Language', 'es-US')
+      .expect(400);
+    expect(hawaii.body.message).toMatch(/^Hawái queda fuera/);
+    const unknown = await t.http.get('/api/places/lookup?zip=00000').set('Accept-Language', 'es').expect(400);
+    expect(unknown.body.message).toMatch(/^00000 no es un código postal de EE\. UU\./);
+    const sea = await t.http.get('/api/places/lookup?lat=40.0&lon=-68.0').set('Accept-Language', 'es').expect(400);
+    expect(sea.body.message).toMatch(/^Ese punto \(40\.000, -68\.000\) no está en tierra/);
+    const french = await t.http.get('/api/places/lookup?zip=99501').set('Accept-Language', 'fr').expect(400);
+    expect(french.body.message).toMatch(/^Alaska is outside the area Homeground covers/);
+  });
+
   it('refuses a point at sea in words (the Atlantic, 250 km off Cape Cod)', async () => {
     const res = await t.http.get('/api/places/lookup?lat=40.0&lon=-68.0').expect(400);
     expect(res.body.message).toMatch(/^That point \(40\.000, -68\.000\) is not on land in any US county: it is at sea/);

@@ -62,3 +62,4 @@ export * from './plant-share/index.js';
 export * from './types/batch.js';
 export * from './batch-planning/index.js';
 export * from './types/batch-answers.js';
+export * from './scoring/locale/reasons-in.js';

@@ -97,3 +97,67 @@ test('a seven-species mix prints on at most two Letter pages with every column w
     await context.close();
   }
 });
+
+// The same yard opened by its link in each language (the es catalogues' words run longer than the
+// English ones): still one or two Letter pages with every column whole.
+const BY_LINK = [
+  { name: 'English', locale: 'en-US', caption: /one species a row/, size: 'Number of species', use: 'Use' },
+  { name: 'Spanish', locale: 'es-MX', caption: /una especie por fila/, size: 'Número de especies', use: 'Usar' },
+] as const;
+
+for (const language of BY_LINK) {
+  test(`a seven-species mix opened by its link in ${language.name} prints on at most two Letter pages with every column whole`, async () => {
+    const { page, offHostRequests, pageErrors, context } = await openGuardedPage(app.browser, undefined, {
+      locale: language.locale,
+    });
+    try {
+      await page.goto(
+        `${app.server.baseUrl}/find-plants?state=WI&eco=52&sun=full&moisture=dry&area=200&unit=ft2&deer=medium`,
+      );
+      const table = page.getByRole('table', { name: language.caption });
+      await table.waitFor();
+      await page.locator('table tr[data-slug]').first().waitFor();
+      if ((await page.locator('table tr[data-slug]').count()) !== SPECIES) {
+        const size = page.getByRole('spinbutton', { name: language.size });
+        await size.fill(String(SPECIES));
+        await size.press('Enter');
+        await page
+          .getByRole('button', {
+            name: `${language.use} ${SPECIES} ${language.locale === 'en-US' ? 'species' : 'especies'}`,
+          })
+          .click();
+      }
+      await page.waitForFunction((n) => document.querySelectorAll('table tr[data-slug]').length === n, SPECIES);
+      await page.locator('[aria-busy="false"][data-print-root="yard-mix"]').waitFor();
+      await page.evaluate(() =>
+        document
+          .querySelectorAll<HTMLDetailsElement>('[data-print-root="yard-mix"] details')
+          .forEach((d) => (d.open = true)),
+      );
+      await page.emulateMedia({ media: 'print' });
+      await page.setViewportSize({ width: 816, height: 1056 }); // Letter at 96 px to the inch
+      const cut = await table.locator('th, td').evaluateAll((cells) =>
+        cells
+          .filter((c) => getComputedStyle(c).display !== 'none')
+          .filter((c) => c.scrollWidth > c.clientWidth + 1 || c.scrollHeight > c.clientHeight + 1)
+          .map((c) => `${c.textContent?.slice(0, 40)} (${c.scrollWidth} > ${c.clientWidth} px)`),
+      );
+      assert.deepEqual(cut, [], 'no table cell is cut');
+      const height = await page.evaluate(() => document.documentElement.scrollHeight);
+      console.log(`${language.name}: ${height} px tall in print media at Letter width`);
+      await page.emulateMedia({ media: null });
+      const pdf = await page.pdf({ format: 'Letter' });
+      writeFileSync(path.join(RESULTS_DIR, `yard-mix-${language.locale}.pdf`), pdf);
+      const pages = pdfPageCount(pdf);
+      console.log(`a ${SPECIES}-species mix opened by its link in ${language.name} prints on ${pages} Letter page(s)`);
+      assert.ok(
+        pages >= 1 && pages <= 2,
+        `a ${SPECIES}-species mix in ${language.name} prints on one or two pages, not ${pages}`,
+      );
+      assert.deepEqual(offHostRequests, [], 'no request may leave localhost');
+      assert.deepEqual(pageErrors, []);
+    } finally {
+      await context.close();
+    }
+  });
+}

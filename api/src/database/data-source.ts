@@ -20,6 +20,7 @@ import { CreateSpeciesChanges1765584000000 } from './migrations/1765584000000-cr
 import { AddPhotoCredits1765670400000 } from './migrations/1765670400000-add-photo-credits.js';
 import { CreatePendingRegistrations1766300000000 } from './migrations/1766300000000-create-pending-registrations.js';
 import { PendingRegistrationRow } from '../auth/pending-registration.entity.js';
+import { AddTakerLocale1765800000000 } from './migrations/1765800000000-add-taker-locale.js';
 import { SpeciesChangeRow } from '../species/species-change.entity.js';
 import { SignInFailureRow } from '../auth/sign-in-failure.entity.js';
 import { CreateBatches1765324800000 } from './migrations/1765324800000-create-batches.js';
@@ -68,6 +69,7 @@ export const MIGRATIONS = [
   AddPhotoCredits1765670400000,
   CreateBatches1765324800000,
   CreatePendingRegistrations1766300000000,
+  AddTakerLocale1765800000000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

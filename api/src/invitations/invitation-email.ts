@@ -1,20 +1,6 @@
-import type { GroupRole } from '@homeground/shared';
+import type { GroupRole, WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { renderEmail } from '../mail/templates/email-layout.js';
-
-const ROLE_WORDS: Record<GroupRole, { noun: string; what: string }> = {
-  member: {
-    noun: 'a member',
-    what: 'Members hear when the plant share opens and can reserve plants for their yard.',
-  },
-  grower: {
-    noun: 'a grower',
-    what: 'Growers raise a batch of native plants over the winter for the plant share. Homeground gives you the dates for each step and a place to log what comes up; no experience needed.',
-  },
-  organiser: {
-    noun: 'an organiser',
-    what: 'Organisers choose the species for the season, hand out batches to growers and run the plant share.',
-  },
-};
 
 export function invitationEmail(input: {
   inviterName: string;
@@ -24,17 +10,28 @@ export function invitationEmail(input: {
   role: GroupRole;
   link: string;
   days: number;
+  /** The inviter's page language, which the invitation is written in. */
+  locale?: WordLocale;
 }): { subject: string; text: string; html: string } {
-  const role = ROLE_WORDS[input.role];
+  const locale = input.locale ?? 'en';
+  const say = apiWords(locale);
+  const group = input.groupName;
   const { text, html } = renderEmail({
-    greeting: 'Hello,',
+    locale,
+    greeting: say('mail.greetingNoName'),
     paragraphs: [
-      `${input.inviterName} has invited you to join ${input.groupName} in ${input.town}, ${input.state} on Homeground, as ${role.noun}.`,
-      role.what,
-      `The link below works for ${input.days} days. If you did not expect this message, you can simply ignore it.`,
+      say('mail.invitation.invited', {
+        inviter: input.inviterName,
+        group,
+        town: input.town,
+        state: input.state,
+        role: say(`mail.invitation.role.${input.role}`),
+      }),
+      say(`mail.invitation.what.${input.role}`),
+      say('mail.invitation.days', { days: input.days }),
     ],
-    action: { label: `Join ${input.groupName}`, url: input.link },
-    footer: `You got this e-mail because an organiser of ${input.groupName} entered your address. Homeground sends you nothing more unless you join.`,
+    action: { label: say('mail.invitation.action', { group }), url: input.link },
+    footer: say('mail.invitation.footer', { group }),
   });
-  return { subject: `${input.inviterName} invites you to ${input.groupName}`, text, html };
+  return { subject: say('mail.invitation.subject', { inviter: input.inviterName, group }), text, html };
 }

@@ -13,11 +13,13 @@ import {
   type InviteRequest,
   inviteRequestSchema,
   slugParamSchema,
+  type WordLocale,
 } from '@homeground/shared';
 import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { OptionalJwtAuthGuard } from '../common/guards/optional-jwt-auth.guard.js';
 import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { InvitationsService } from './invitations.service.js';
@@ -32,12 +34,15 @@ export class InvitationsController {
   @Post('groups/:slug/invitations')
   @Auth()
   @ZodResponse(invitationSchema, 201)
+  @AnswersInLanguage()
   invite(
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(inviteRequestSchema) body: InviteRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<Invitation> {
-    return this.invitations.invite(slug, user, body);
+    // The invitation e-mail is written in the inviter's page language.
+    return this.invitations.invite(slug, user, body, undefined, locale);
   }
 
   @Get('groups/:slug/invitations')

@@ -15,6 +15,7 @@ import {
   INVITATION_DAYS,
   type InvitationPreview,
   type InviteRequest,
+  type WordLocale,
 } from '@homeground/shared';
 import { DataSource, IsNull, Repository } from 'typeorm';
 import { AuthService } from '../auth/auth.service.js';
@@ -46,7 +47,13 @@ export class InvitationsService {
   ) {}
 
   /** An organiser invites someone by e-mail; a newer invitation to the same address replaces the older one. */
-  async invite(slug: string, caller: AuthenticatedUser, req: InviteRequest, now = new Date()): Promise<Invitation> {
+  async invite(
+    slug: string,
+    caller: AuthenticatedUser,
+    req: InviteRequest,
+    now = new Date(),
+    locale: WordLocale = 'en',
+  ): Promise<Invitation> {
     const group = await this.groups.getDto(slug);
     if ((await this.groups.roleOf(caller, group.id)) !== 'organiser') {
       throw new ForbiddenException('Only an organiser of this group can invite people to it.');
@@ -85,6 +92,7 @@ export class InvitationsService {
       role: req.role,
       link: `${this.config.publicUrl}/invitations/${token}`,
       days: INVITATION_DAYS,
+      locale,
     });
     await this.mail.send({ to: req.email, ...message, kind: 'invitation', groupId: group.id });
     return toInvitation(row);

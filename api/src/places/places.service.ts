@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { badRequest } from '../common/validation/bad-request.js';
-import type { Ecoregion, PlaceLookup, PlaceQuery } from '@homeground/shared';
+import type { Ecoregion, PlaceLookup, PlaceQuery, WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import zipcodes from 'zipcodes';
 import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { PolygonIndex } from '../geometry/polygon-index.js';
@@ -9,33 +10,26 @@ import { loadCountyOutlines } from '../geometry/us-counties.js';
 /** How far a point may sit outside every county outline and still take the nearest (coasts, lakes). */
 const NEAREST_COUNTY_KM = 8;
 
-const COVERED =
-  'Homeground covers the 48 conterminous states and the District of Columbia, where the EPA maps its Level III ecoregions.';
+/** States and territories a ZIP can name outside the area covered (zipcodes' two-letter codes); names in the catalogues. */
+const OUTSIDE_CODES = ['AK', 'HI', 'PR', 'VI', 'GU', 'AS', 'MP'] as const;
+type OutsideCode = (typeof OUTSIDE_CODES)[number];
 
-/** States and territories a ZIP can name outside the area covered (zipcodes' two-letter codes). */
-const OUTSIDE_BY_STATE: Record<string, string> = {
-  AK: 'Alaska',
-  HI: 'Hawaii',
-  PR: 'Puerto Rico',
-  VI: 'The US Virgin Islands',
-  GU: 'Guam',
-  AS: 'American Samoa',
-  MP: 'The Northern Mariana Islands',
-};
+function isOutsideCode(state: string): state is OutsideCode {
+  return (OUTSIDE_CODES as readonly string[]).includes(state);
+}
 
 /** Rough boxes (lon/lat degrees, west, south, east, north) for naming a point outside the covered area. */
-const OUTSIDE_BY_BOX: [string, number, number, number, number][] = [
-  ['Alaska', -180, 51, -129, 72],
-  ['Alaska', 172, 51, 180, 56], // the western Aleutians, across the 180th meridian
-  ['Hawaii', -161, 18.5, -154, 22.5],
-  ['Puerto Rico', -67.5, 17.8, -65.2, 18.6],
+const OUTSIDE_BY_BOX: [OutsideCode, number, number, number, number][] = [
+  ['AK', -180, 51, -129, 72],
+  ['AK', 172, 51, 180, 56], // the western Aleutians, across the 180th meridian
+  ['HI', -161, 18.5, -154, 22.5],
+  ['PR', -67.5, 17.8, -65.2, 18.6],
 ];
 
-/** The whole sentence for a place outside the covered area, naming it when known. */
-export function outsideSentence(place: string | undefined): string {
-  return place
-    ? `${place} is outside the area Homeground covers. ${COVERED}`
-    : `That place is outside the area Homeground covers. ${COVERED}`;
+/** The whole sentence for a place outside the covered area, naming it when known, in the reader's language. */
+export function outsideSentence(place: OutsideCode | undefined, locale: WordLocale = 'en'): string {
+  const say = apiWords(locale);
+  return place ? say('places.outsideNamed', { place: say(`places.outside.${place}`) }) : say('places.outsideUnnamed');
 }
 
 /**
@@ -50,7 +44,8 @@ export class PlacesService {
 
   constructor(private readonly ecoregions: EcoregionsService) {}
 
-  lookup(q: PlaceQuery): PlaceLookup {
+  lookup(q: PlaceQuery, locale: WordLocale = 'en'): PlaceLookup {
+    const say = apiWords(locale);
     let lat = q.lat;
     let lon = q.lon;
     let zip: PlaceLookup['zip'] = null;
@@ -58,21 +53,17 @@ export class PlacesService {
       const z = zipcodes.lookup(q.zip);
       if (!z)
         throw badRequest(
-          [{ field: 'zip', message: `${q.zip} is not a US ZIP code we know` }],
-          `${q.zip} is not a US ZIP code we know. Check the five digits, or click the map where your ground is.`,
+          [{ field: 'zip', message: say('places.unknownZipField', { zip: q.zip }) }],
+          say('places.unknownZip', { zip: q.zip }),
         );
-      const place = OUTSIDE_BY_STATE[z.state];
-      if (place)
-        throw badRequest(
-          [{ field: 'zip', message: 'is outside the 48 conterminous states and DC' }],
-          outsideSentence(place),
-        );
+      if (isOutsideCode(z.state))
+        throw badRequest([{ field: 'zip', message: say('places.outsideField') }], outsideSentence(z.state, locale));
       ({ latitude: lat, longitude: lon } = z);
       zip = { code: q.zip, city: z.city, state: z.state };
     }
     const outline = this.counties.containing(lon!, lat!) ?? this.counties.nearest(lon!, lat!, NEAREST_COUNTY_KM);
     const county = outline && this.ecoregions.county(String(outline.id));
-    if (!county) throw this.notCovered(q.zip !== undefined ? 'zip' : 'lat', lon!, lat!);
+    if (!county) throw this.notCovered(q.zip !== undefined ? 'zip' : 'lat', lon!, lat!, locale);
     const exact = this.ecoregions.hasBoundaries ? this.ecoregions.boundaryAt(lon!, lat!) : undefined;
     const dominant = exact ?? county.ecoregions[0].code;
     const describe = (code: string, share: number | null) => {
@@ -94,13 +85,15 @@ export class PlacesService {
    * A point in no county: a place named by its rough box (Alaska, Hawaii, Puerto Rico), else
    * at sea or across a border. The field message says so briefly; the message is a whole sentence.
    */
-  private notCovered(field: string, lon: number, lat: number) {
+  private notCovered(field: string, lon: number, lat: number, locale: WordLocale) {
+    const say = apiWords(locale);
     const place = OUTSIDE_BY_BOX.find(([, w, s, e, n]) => lon >= w && lon <= e && lat >= s && lat <= n)?.[0];
-    if (place)
-      return badRequest([{ field, message: 'is outside the 48 conterminous states and DC' }], outsideSentence(place));
+    if (place) return badRequest([{ field, message: say('places.outsideField') }], outsideSentence(place, locale));
+    // Coordinates stay in the plain dotted form in both languages: they are read back into a map.
+    const at = { lat: lat.toFixed(3), lon: lon.toFixed(3) };
     return badRequest(
-      [{ field, message: 'is not on land in a US county: at sea, on a large lake or outside the United States' }],
-      `${field === 'zip' ? "That ZIP code's centre" : 'That point'} (${lat.toFixed(3)}, ${lon.toFixed(3)}) is not on land in any US county: it is at sea, on one of the Great Lakes or outside the United States. ${COVERED}`,
+      [{ field, message: say('places.notOnLandField') }],
+      say(field === 'zip' ? 'places.notOnLandZip' : 'places.notOnLandPoint', at),
     );
   }
 }

@@ -25,7 +25,9 @@ import {
   type WaitlistOfferView,
   waitlistOfferViewSchema,
   waitlistRequestSchema,
+  type WordLocale,
 } from '@homeground/shared';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { ZodBody, ZodParam, ZodQuery, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { openApiSchema } from '../common/validation/openapi-schema.js';
 import { ReservationsService } from './reservations.service.js';
@@ -62,23 +64,27 @@ export class PublicShareController {
   }
 
   @Post('plant-shares/:slug/reservations')
+  @AnswersInLanguage()
   @conflictDoc
   @ZodResponse(reservationCreatedSchema, 201)
   reserve(
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(reservationRequestSchema) body: ParsedReservationRequest,
+    @RequestLocale() locale: WordLocale,
   ): Promise<ReservationCreated> {
-    return this.reservations.reserve(slug, body);
+    return this.reservations.reserve(slug, body, locale);
   }
 
   @Post('plant-shares/:slug/waitlist')
+  @AnswersInLanguage()
   @conflictDoc
   @ZodResponse(waitlistJoinedSchema, 201)
   joinWaitlist(
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(waitlistRequestSchema) body: { name: string; email: string; zip: string; lines: PlantLine[] },
+    @RequestLocale() locale: WordLocale,
   ): Promise<WaitlistJoined> {
-    return this.reservations.joinWaitlist(slug, body);
+    return this.reservations.joinWaitlist(slug, body, locale);
   }
 
   @Get('reservations/:token')
@@ -89,14 +95,16 @@ export class PublicShareController {
   }
 
   @Put('reservations/:token')
+  @AnswersInLanguage()
   @forgedDoc
   @conflictDoc
   @ZodResponse(takerReservationSchema)
   change(
     @ZodParam('token', reservationTokenSchema) token: string,
     @ZodBody(changeReservationRequestSchema) body: ChangeReservationRequest,
+    @RequestLocale() locale: WordLocale,
   ): Promise<TakerReservation> {
-    return this.reservations.change(token, body);
+    return this.reservations.change(token, body, locale);
   }
 
   @Delete('reservations/:token')
@@ -116,6 +124,7 @@ export class PublicShareController {
 
   /** Takes the plants a waitlist offer holds. */
   @Post('waitlist-offers/:token/claim')
+  @AnswersInLanguage()
   @HttpCode(201)
   @forgedDoc
   @conflictDoc
@@ -123,7 +132,8 @@ export class PublicShareController {
   claim(
     @ZodParam('token', waitlistOfferTokenSchema) token: string,
     @ZodBody(claimOfferRequestSchema) body: ClaimOfferRequest,
+    @RequestLocale() locale: WordLocale,
   ): Promise<ReservationCreated> {
-    return this.reservations.claimOffer(token, body);
+    return this.reservations.claimOffer(token, body, locale);
   }
 }

@@ -20,6 +20,7 @@ import {
   bloomWords,
   CAUTION_WORDS,
   wildlifeSummary,
+  type WordLocale,
 } from '@homeground/shared';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
@@ -116,7 +117,7 @@ export class ReservationsService {
    * concurrent requests can never take more plants or places than there are. Anything short answers
    * 409 and writes nothing.
    */
-  async reserve(slug: string, req: ParsedReservationRequest): Promise<ReservationCreated> {
+  async reserve(slug: string, req: ParsedReservationRequest, locale: WordLocale = 'en'): Promise<ReservationCreated> {
     const group = await this.views.group(slug);
     const share = this.views.requireShare(group);
     assertOpen(share);
@@ -142,8 +143,8 @@ export class ReservationsService {
       this.bookOrExplain(slot, now.getTime(), 'slotId');
       this.takeOrExplain(share, group, req.lines);
       this.db.run(
-        `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at)
-         VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?)`,
+        `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at, locale)
+         VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?, ?)`,
         id,
         share.id,
         slot.id,
@@ -153,13 +154,14 @@ export class ReservationsService {
         req.zip,
         stamp,
         stamp,
+        locale,
       );
       this.insertLines(id, req.lines);
     });
     const row = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', id)!;
     const view = this.views.takerView(group, share, row, now.getTime());
     const manageUrl = this.manageUrl(token);
-    await this.sendConfirmation(group, view, manageUrl, false);
+    await this.sendConfirmation(group, view, manageUrl, false, row);
     return { ...view, manageUrl };
   }
 
@@ -169,7 +171,7 @@ export class ReservationsService {
   }
 
   /** Changes the slot, the plants or both; all of it or nothing. */
-  async change(token: string, req: ChangeReservationRequest): Promise<TakerReservation> {
+  async change(token: string, req: ChangeReservationRequest, locale: WordLocale = 'en'): Promise<TakerReservation> {
     const { group, share, row } = await this.open(token);
     assertOpen(share);
     const now = this.clock.now();
@@ -205,10 +207,12 @@ export class ReservationsService {
         this.db.run('DELETE FROM share_reservation_lines WHERE reservation_id = ?', row.id);
         this.insertLines(row.id, req.lines);
       }
+      // The change e-mail goes out in the language the taker changed it in, and later ones too.
       this.db.run(
-        'UPDATE share_reservations SET slot_id = ?, updated_at = ? WHERE id = ?',
+        'UPDATE share_reservations SET slot_id = ?, updated_at = ?, locale = ? WHERE id = ?',
         next?.id ?? row.slot_id,
         now.toISOString(),
+        locale,
         row.id,
       );
       return out;
@@ -220,7 +224,7 @@ export class ReservationsService {
     );
     const fresh = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', row.id)!;
     const view = this.views.takerView(group, share, fresh, now.getTime());
-    await this.sendConfirmation(group, view, this.manageUrl(token), true);
+    await this.sendConfirmation(group, view, this.manageUrl(token), true, fresh);
     return view;
   }
 
@@ -251,6 +255,7 @@ export class ReservationsService {
   async joinWaitlist(
     slug: string,
     req: { name: string; email: string; zip: string; lines: PlantLine[] },
+    locale: WordLocale = 'en',
   ): Promise<WaitlistJoined> {
     const group = await this.views.group(slug);
     const share = this.views.requireShare(group);
@@ -264,8 +269,8 @@ export class ReservationsService {
           share.id,
         )!;
         this.db.run(
-          `INSERT INTO share_waitlist (id, share_id, slug, count, held, status, token_hash, name, email, zip, seq, created_at)
-           VALUES (?, ?, ?, ?, 0, 'waiting', NULL, ?, ?, ?, ?, ?)`,
+          `INSERT INTO share_waitlist (id, share_id, slug, count, held, status, token_hash, name, email, zip, seq, created_at, locale)
+           VALUES (?, ?, ?, ?, 0, 'waiting', NULL, ?, ?, ?, ?, ?, ?)`,
           randomUUID(),
           share.id,
           l.speciesSlug,
@@ -275,6 +280,7 @@ export class ReservationsService {
           req.zip,
           (seq.s ?? 0) + 1,
           stamp,
+          locale,
         );
         const ahead = this.db.get<{ n: number }>(
           `SELECT COUNT(*) AS n FROM share_waitlist WHERE share_id = ? AND slug = ? AND status = 'waiting'`,
@@ -347,7 +353,7 @@ export class ReservationsService {
    * Takes the plants a waitlist offer holds: added to the household's reservation if it has one, else
    * a new reservation in the slot chosen (booked the same conditional way).
    */
-  async claimOffer(token: string, req: ClaimOfferRequest): Promise<ReservationCreated> {
+  async claimOffer(token: string, req: ClaimOfferRequest, locale: WordLocale = 'en'): Promise<ReservationCreated> {
     const entry = this.offerEntry(token);
     if (entry.status === 'claimed') throw new GoneException('These plants have been claimed already.');
     if (entry.status !== 'offered' || (entry.offered_until ?? 0) <= this.clock.now().getTime())
@@ -394,8 +400,8 @@ export class ReservationsService {
       this.bookOrExplain(slot!, now.getTime(), 'slotId');
       const id = randomUUID();
       this.db.run(
-        `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at)
-         VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?)`,
+        `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at, locale)
+         VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?, ?)`,
         id,
         share.id,
         slot!.id,
@@ -405,6 +411,7 @@ export class ReservationsService {
         entry.zip,
         now.toISOString(),
         now.toISOString(),
+        locale,
       );
       this.insertLines(id, [{ speciesSlug: entry.slug, count: entry.held }]);
       return id;
@@ -412,7 +419,7 @@ export class ReservationsService {
     const row = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', reservationId)!;
     const view = this.views.takerView(group, share, row, now.getTime());
     const manageUrl = this.manageUrl(fresh.token);
-    await this.sendConfirmation(group, view, manageUrl, Boolean(existing));
+    await this.sendConfirmation(group, view, manageUrl, Boolean(existing), row);
     return { ...view, manageUrl };
   }
 
@@ -420,14 +427,24 @@ export class ReservationsService {
     return `${this.views.publicUrl()}/plant-share/reservations/${token}`;
   }
 
-  private async sendConfirmation(group: Group, view: TakerReservation, link: string, changed: boolean): Promise<void> {
+  private async sendConfirmation(
+    group: Group,
+    view: TakerReservation,
+    link: string,
+    changed: boolean,
+    row: Pick<ReservationRow, 'locale'>,
+  ): Promise<void> {
     const message = reservationEmail({
+      locale: row.locale,
       name: view.name,
       groupName: group.name,
       place: view.share.place,
       slot: view.slot,
       lines: view.lines,
-      careSheet: view.careSheet,
+      careSheet: this.views.careSheet(
+        view.lines.map((l) => l.speciesSlug),
+        row.locale,
+      ),
       link,
       changed,
     });

@@ -1,9 +1,16 @@
-import type { CareSheetEntry, SharePlace } from '@homeground/shared';
+import type { CareSheetEntry, SharePlace, WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { renderEmail } from '../mail/templates/email-layout.js';
 
-/** A slot's time as the organiser wrote it (the place's own clock): "Sat 12 Jun 2027, 09:00–09:30". */
-export function slotWords(start: string, end: string): string {
-  const day = new Date(`${start.slice(0, 10)}T12:00:00Z`).toLocaleDateString('en-US', {
+/** Intl tags of the e-mail languages: US English and Spanish as spoken in the US. */
+const LOCALE_TAGS: Record<WordLocale, string> = { en: 'en-US', es: 'es-US' };
+
+/**
+ * A slot's time as the organiser wrote it (the place's own clock): "Sat, Jun 12, 2027, 09:00–09:30",
+ * "sáb, 12 jun 2027, 09:00–09:30".
+ */
+export function slotWords(start: string, end: string, locale: WordLocale = 'en'): string {
+  const day = new Date(`${start.slice(0, 10)}T12:00:00Z`).toLocaleDateString(LOCALE_TAGS[locale], {
     weekday: 'short',
     day: 'numeric',
     month: 'short',
@@ -25,33 +32,37 @@ export function reservationEmail(input: {
   careSheet: CareSheetEntry[];
   link: string;
   changed: boolean;
+  /** The taker's language, kept with the reservation. */
+  locale?: WordLocale;
 }): { subject: string; text: string; html: string } {
-  const when = slotWords(input.slot.start, input.slot.end);
+  const locale = input.locale ?? 'en';
+  const say = apiWords(locale);
+  const group = input.groupName;
+  const when = slotWords(input.slot.start, input.slot.end, locale);
   const plants = input.lines.map((l) => `${l.count} × ${l.commonName}`).join(', ');
   const care = input.careSheet.map((c) =>
     [`${c.commonName} (${c.scientificName}): ${c.sun} ${c.moisture} ${c.spacing}`, ...c.cautions].join(' '),
   );
   const { text, html } = renderEmail({
-    greeting: `Hello ${input.name},`,
+    locale,
+    greeting: say('mail.greeting', { name: input.name }),
     paragraphs: [
-      input.changed
-        ? `Your reservation at the ${input.groupName} plant share has been changed.`
-        : `Your plants from the ${input.groupName} plant share are reserved.`,
-      `Pickup slot: ${when}.`,
-      `Place: ${placeWords(input.place)}.${input.place.directions ? ` ${input.place.directions}` : ''}`,
-      `Your plants: ${plants}.`,
-      'Care sheet:',
+      input.changed ? say('mail.reservation.changed', { group }) : say('mail.reservation.reserved', { group }),
+      say('mail.reservation.slot', { when }),
+      `${say('mail.reservation.place', { place: placeWords(input.place) })}${input.place.directions ? ` ${input.place.directions}` : ''}`,
+      say('mail.reservation.plants', { plants }),
+      say('mail.reservation.care'),
       ...care,
-      'Before you dig, call 811 so buried lines are marked, and follow your town’s rules for planting by streets and sidewalks.',
-      'To change your slot or plants, or to cancel so someone on the waitlist gets them, use your private link below. Keep it to yourself: anyone with it can change your reservation.',
+      say('mail.reservation.dig'),
+      say('mail.reservation.link'),
     ],
-    action: { label: 'Change or cancel your reservation', url: input.link },
-    footer: `You got this e-mail because you reserved plants from ${input.groupName} on Homeground. Your name and e-mail are seen only by the group's organisers and are deleted after the share.`,
+    action: { label: say('mail.reservation.action'), url: input.link },
+    footer: say('mail.reservation.footer', { group }),
   });
   return {
     subject: input.changed
-      ? `Your reservation at the ${input.groupName} plant share has changed`
-      : `Your plants are reserved: ${input.groupName} plant share, ${when}`,
+      ? say('mail.reservation.subjectChanged', { group })
+      : say('mail.reservation.subjectReserved', { group, when }),
     text,
     html,
   };
@@ -66,8 +77,13 @@ export function waitlistOfferEmail(input: {
   heldUntil: string;
   place: SharePlace;
   link: string;
+  /** The language the household used when it joined the waitlist. */
+  locale?: WordLocale;
 }): { subject: string; text: string; html: string } {
-  const until = new Date(input.heldUntil).toLocaleString('en-US', {
+  const locale = input.locale ?? 'en';
+  const say = apiWords(locale);
+  const group = input.groupName;
+  const until = new Date(input.heldUntil).toLocaleString(LOCALE_TAGS[locale], {
     weekday: 'short',
     day: 'numeric',
     month: 'short',
@@ -77,13 +93,14 @@ export function waitlistOfferEmail(input: {
     timeZoneName: 'short',
   });
   const { text, html } = renderEmail({
-    greeting: `Hello ${input.name},`,
+    locale,
+    greeting: input.name ? say('mail.greeting', { name: input.name }) : say('mail.greetingNoName'),
     paragraphs: [
-      `Good news: ${input.count} × ${input.commonName} came free at the ${input.groupName} plant share, and we are holding ${input.count === 1 ? 'it' : 'them'} for you because you were next on the waitlist.`,
-      `Open your private link to choose a pickup slot at ${placeWords(input.place)}. We hold them for you until ${until}; after that they go to the next household on the list. If you no longer want them, simply ignore this e-mail.`,
+      say('mail.offer.free', { count: input.count, plant: input.commonName, group }),
+      say('mail.offer.choose', { place: placeWords(input.place), until }),
     ],
-    action: { label: 'Choose your pickup slot', url: input.link },
-    footer: `You got this e-mail because you joined the waitlist of ${input.groupName}'s plant share. Your name and e-mail are deleted after the share.`,
+    action: { label: say('mail.offer.action'), url: input.link },
+    footer: say('mail.offer.footer', { group }),
   });
-  return { subject: `${input.commonName} is free for you: ${input.groupName} plant share`, text, html };
+  return { subject: say('mail.offer.subject', { plant: input.commonName, group }), text, html };
 }

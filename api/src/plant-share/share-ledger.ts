@@ -1,3 +1,4 @@
+import type { WordLocale } from '@homeground/shared';
 import { randomUUID } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
 import { ShareDb } from './share-db.js';
@@ -16,6 +17,7 @@ export interface WaitlistOfferMade {
   email: string | null;
   token: string;
   heldUntil: string;
+  locale: WordLocale;
 }
 
 /** Where released plants went. */
@@ -73,7 +75,7 @@ export class ShareLedger {
     let left = n;
     if (left > 0) {
       const waiting = this.db.all<WaitlistRow>(
-        `SELECT id, slug, count, name, email FROM share_waitlist
+        `SELECT id, slug, count, name, email, locale FROM share_waitlist
          WHERE share_id = ? AND slug = ? AND status = 'waiting' ORDER BY seq`,
         shareId,
         slug,
@@ -92,7 +94,16 @@ export class ShareLedger {
         );
         if (changed !== 1) continue;
         const heldUntil = new Date(nowMs + OFFER_HOLD_MS).toISOString();
-        offers.push({ entryId: w.id, slug, count: hold, name: w.name, email: w.email, token, heldUntil });
+        offers.push({
+          entryId: w.id,
+          slug,
+          count: hold,
+          name: w.name,
+          email: w.email,
+          token,
+          heldUntil,
+          locale: w.locale,
+        });
         left -= hold;
       }
     }

@@ -1,4 +1,4 @@
-import type { ReservationStatus, ShareStatus } from '@homeground/shared';
+import type { ReservationStatus, ShareStatus, WordLocale } from '@homeground/shared';
 
 /** Rows of the plant-share tables as SQL reads them (snake_case columns, as in the migration). */
 
@@ -48,6 +48,8 @@ export interface ReservationRow {
   zip: string;
   created_at: string;
   updated_at: string;
+  /** The language the taker used, for their e-mails. */
+  locale: WordLocale;
 }
 
 export interface LineRow {
@@ -69,6 +71,8 @@ export interface WaitlistRow {
   email: string | null;
   zip: string;
   seq: number;
+  /** The language the household used when joining, for the offer e-mail. */
+  locale: WordLocale;
 }
 
 export const SHARE_COLUMNS = `id, group_id, season_id, share_date, place_name, place_address, place_directions, status,

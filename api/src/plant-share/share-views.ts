@@ -11,6 +11,7 @@ import {
   type ReservationStatus,
   type ShareStockLine,
   type TakerReservation,
+  type WordLocale,
 } from '@homeground/shared';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { GroupsService } from '../groups/groups.service.js';
@@ -126,10 +127,10 @@ export class ShareViews {
     return { speciesSlug: l.slug, ...this.names(l.slug), count: l.count };
   }
 
-  careSheet(slugs: readonly string[]): CareSheetEntry[] {
+  careSheet(slugs: readonly string[], locale: WordLocale = 'en'): CareSheetEntry[] {
     return slugs.flatMap((slug) => {
       const s = this.ctx.get(slug);
-      return s ? [careSheetFor(s)] : [];
+      return s ? [careSheetFor(s, locale)] : [];
     });
   }
 
@@ -260,7 +261,8 @@ export class ShareViews {
     for (const o of offers) {
       if (!o.email) continue;
       const message = waitlistOfferEmail({
-        name: o.name ?? 'there',
+        locale: o.locale,
+        name: o.name ?? '',
         groupName: group.name,
         commonName: this.names(o.slug).commonName,
         count: o.count,

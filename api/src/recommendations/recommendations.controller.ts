@@ -1,17 +1,22 @@
 import { Controller, HttpCode, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
+  alternativesIn,
   alternativesRequestSchema,
   type AlternativesResponse,
   alternativesResponseSchema,
+  mixIn,
   type MixResponse,
   mixResponseSchema,
   paletteRequestSchema,
   type RecommendationsResponse,
   recommendationsResponseSchema,
+  recommendationsIn,
   recommendRequestSchema,
+  type WordLocale,
 } from '@homeground/shared';
 import type { z } from 'zod';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { MixesService } from './mixes.service.js';
 import { Public } from '../common/decorators/public.decorator.js';
@@ -28,25 +33,38 @@ export class RecommendationsController {
   @Post('recommendations')
   @ZodResponse(recommendationsResponseSchema)
   @HttpCode(200)
-  recommend(@ZodBody(recommendRequestSchema) body: Parsed<typeof recommendRequestSchema>): RecommendationsResponse {
-    return this.mixes.recommend(body.site, body.region);
+  @AnswersInLanguage()
+  recommend(
+    @ZodBody(recommendRequestSchema) body: Parsed<typeof recommendRequestSchema>,
+    @RequestLocale() locale: WordLocale,
+  ): RecommendationsResponse {
+    return recommendationsIn(this.mixes.recommend(body.site, body.region), locale);
   }
 
   /** A balanced mix for the site, honouring locks and exclusions, with quantities and the design rules met or not. */
   @Post('mixes/balance')
   @ZodResponse(mixResponseSchema)
   @HttpCode(200)
-  balance(@ZodBody(paletteRequestSchema) body: Parsed<typeof paletteRequestSchema>): MixResponse {
-    return this.mixes.balance(body.site, body.region, body.options);
+  @AnswersInLanguage()
+  balance(
+    @ZodBody(paletteRequestSchema) body: Parsed<typeof paletteRequestSchema>,
+    @RequestLocale() locale: WordLocale,
+  ): MixResponse {
+    return mixIn(this.mixes.balance(body.site, body.region, body.options), locale);
   }
 
   /** The best replacements for one species of a mix, with how much each would change the mix's objective. */
   @Post('mixes/alternatives')
   @ZodResponse(alternativesResponseSchema)
   @HttpCode(200)
+  @AnswersInLanguage()
   alternatives(
     @ZodBody(alternativesRequestSchema) body: Parsed<typeof alternativesRequestSchema>,
+    @RequestLocale() locale: WordLocale,
   ): AlternativesResponse {
-    return this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot, body.acrossForms);
+    return alternativesIn(
+      this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot, body.acrossForms),
+      locale,
+    );
   }
 }

@@ -1,13 +1,26 @@
 import { FluentProvider } from '@fluentui/react-components';
-import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import { QueryClientProvider, type QueryClient, useQueryClient } from '@tanstack/react-query';
 import type { i18n } from 'i18next';
-import type { ReactNode } from 'react';
+import { type ReactNode, useEffect, useRef } from 'react';
 import { SessionProvider } from '../features/auth/components/session-provider.js';
-import { I18nProvider } from '../lib/i18n/index.js';
+import { I18nProvider, useLocale } from '../lib/i18n/index.js';
 import { homegroundTheme, useGlobalStyles } from '../theme/index.js';
 
 function GlobalStyles() {
   useGlobalStyles();
+  return null;
+}
+
+/** Answers already fetched carry the old language's words (reasons, messages): fetch them again on a switch. */
+function RefetchOnLanguageChange() {
+  const { locale } = useLocale();
+  const queryClient = useQueryClient();
+  const first = useRef(locale);
+  useEffect(() => {
+    if (locale === first.current) return;
+    first.current = locale;
+    void queryClient.invalidateQueries();
+  }, [locale, queryClient]);
   return null;
 }
 
@@ -27,6 +40,7 @@ export function AppProviders({
       <FluentProvider theme={homegroundTheme} applyStylesToPortals>
         <GlobalStyles />
         <QueryClientProvider client={queryClient}>
+          <RefetchOnLanguageChange />
           <SessionProvider>{children}</SessionProvider>
         </QueryClientProvider>
       </FluentProvider>

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { apiError, installFakeApi } from '../testing/fake-api.js';
 import { ApiRequestError } from './api-request-error.js';
-import { createHttpClient } from './http-client.js';
+import { createHttpClient, httpClient } from './http-client.js';
+import { createI18n } from './i18n/index.js';
 
 // The error shape under test is the API contract in shared/src/types/auth.ts (ApiError).
 const client = createHttpClient({ baseUrl: '', getToken: () => 'stored-token' });
@@ -58,5 +59,15 @@ describe('httpClient', () => {
     expect(error).toBeInstanceOf(ApiRequestError);
     expect(error.isNetworkError).toBe(true);
     expect(error.message).toMatch(/could not reach its server/);
+  });
+
+  // Accept-Language (RFC 9110 §12.5.4) carries the page's language, so the API answers in it.
+  it("sends the page's language as Accept-Language, following a switch", async () => {
+    const api = installFakeApi({ 'GET /api/echo': { body: { ok: true } } });
+    const i18n = createI18n('es');
+    await httpClient.get('/api/echo');
+    await i18n.changeLanguage('en');
+    await httpClient.get('/api/echo');
+    expect(api.callsTo('GET', '/api/echo').map((c) => c.headers['accept-language'])).toEqual(['es', 'en']);
   });
 });

@@ -1,6 +1,7 @@
 import type { ApiError } from '@homeground/shared';
 import { env } from '../config/env.js';
 import { readAccessToken } from './access-token.js';
+import { readRequestLocale } from './i18n/request-locale.js';
 import { ApiRequestError, isApiErrorBody, NETWORK_ERROR_STATUS } from './api-request-error.js';
 
 export interface RequestOptions {
@@ -15,6 +16,8 @@ export interface RequestOptions {
 export interface HttpClientConfig {
   baseUrl: string;
   getToken: () => string | null;
+  /** The page's language, sent as `Accept-Language` so messages and reasons come back in it. */
+  getLocale?: () => string;
 }
 
 const NETWORK_MESSAGE = 'Homeground could not reach its server. Check your connection and try again.';
@@ -41,8 +44,11 @@ async function readJson(response: Response): Promise<unknown> {
 
 /** One fetch wrapper for the whole app: base URL, bearer token, JSON both ways, typed errors. */
 export function createHttpClient(config: HttpClientConfig) {
+  const languageHeader = (): Record<string, string> =>
+    config.getLocale ? { 'Accept-Language': config.getLocale() } : {};
+
   async function request<T>(path: string, options: RequestOptions = {}): Promise<T> {
-    const headers: Record<string, string> = { Accept: 'application/json' };
+    const headers: Record<string, string> = { Accept: 'application/json', ...languageHeader() };
     const token = options.token === undefined ? config.getToken() : options.token;
     if (token) headers.Authorization = `Bearer ${token}`;
     // A FormData body (a file upload) sets its own multipart type and boundary.
@@ -70,7 +76,7 @@ export function createHttpClient(config: HttpClientConfig) {
   }
 
   async function requestFile(path: string, options: Omit<RequestOptions, 'method' | 'body'> = {}): Promise<Blob> {
-    const headers: Record<string, string> = {};
+    const headers: Record<string, string> = { ...languageHeader() };
     const token = options.token === undefined ? config.getToken() : options.token;
     if (token) headers.Authorization = `Bearer ${token}`;
     let response: Response;
@@ -106,4 +112,8 @@ export function createHttpClient(config: HttpClientConfig) {
 
 export type HttpClient = ReturnType<typeof createHttpClient>;
 
-export const httpClient: HttpClient = createHttpClient({ baseUrl: env.apiBaseUrl, getToken: readAccessToken });
+export const httpClient: HttpClient = createHttpClient({
+  baseUrl: env.apiBaseUrl,
+  getToken: readAccessToken,
+  getLocale: readRequestLocale,
+});

@@ -24,6 +24,10 @@ import { people as enPeople } from './en/people.js';
 import { people as esPeople } from './es/people.js';
 import { history as enHistory } from './en/history.js';
 import { history as esHistory } from './es/history.js';
+import { mix as enMix } from './en/mix.js';
+import { mix as esMix } from './es/mix.js';
+import { groups as enGroups } from './en/groups.js';
+import { groups as esGroups } from './es/groups.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -41,6 +45,8 @@ export const resources = {
     importer: enImporter,
     people: enPeople,
     history: enHistory,
+    mix: enMix,
+    groups: enGroups,
   },
   es: {
     common: esCommon,
@@ -56,5 +62,7 @@ export const resources = {
     importer: esImporter,
     people: esPeople,
     history: esHistory,
+    mix: esMix,
+    groups: esGroups,
   },
 } as const;

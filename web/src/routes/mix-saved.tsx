@@ -1,5 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useCallback, useMemo } from 'react';
+import { useTranslation } from 'react-i18next';
 import { useLocation, useNavigate, useParams } from 'react-router-dom';
 import { savedMixQueryOptions } from '../api/mixes/mixes.queries.js';
 import { PageIntro } from '../components/page/page-intro.js';
@@ -8,6 +9,7 @@ import { paths } from '../config/paths.js';
 import { useSession } from '../features/auth/index.js';
 import { type MixPlan, type PlanChange, planFromSavedMix, YardMixView } from '../features/yard-mix/index.js';
 import { isApiRequestError } from '../lib/api-request-error.js';
+import { useFormatters } from '../lib/i18n/index.js';
 import { useDocumentTitle } from '../lib/use-document-title.js';
 
 /** A saved yard mix, for anyone with its link. Any change opens it in Find plants as a new, unsaved mix. */
@@ -17,8 +19,10 @@ export function SavedMixRoute() {
   const location = useLocation();
   const session = useSession();
   const saved = useQuery(savedMixQueryOptions(id));
+  const { t } = useTranslation('mix');
+  const f = useFormatters();
   const plan = useMemo(() => (saved.data ? planFromSavedMix(saved.data) : null), [saved.data]);
-  useDocumentTitle(saved.data ? saved.data.name : 'Saved mix');
+  useDocumentTitle(saved.data ? saved.data.name : t('savedPage.title'));
 
   const toFindPlants = useCallback<PlanChange>(
     (next: MixPlan, options) =>
@@ -30,14 +34,10 @@ export function SavedMixRoute() {
     const isMissing = isApiRequestError(error) && (error.statusCode === 404 || error.statusCode === 400);
     return (
       <>
-        <PageIntro title="Saved mix" />
+        <PageIntro title={t('savedPage.title')} />
         <ErrorState
-          title={isMissing ? 'There is no saved mix at this link' : 'Homeground could not open this mix'}
-          message={
-            isMissing
-              ? 'The link may be incomplete, or the mix was deleted. Ask the person who shared it for the link again.'
-              : error.message
-          }
+          title={isMissing ? t('savedPage.missingTitle') : t('savedPage.errorTitle')}
+          message={isMissing ? t('savedPage.missingText') : error.message}
           onRetry={isMissing ? undefined : retry}
         />
       </>
@@ -45,17 +45,16 @@ export function SavedMixRoute() {
   };
 
   return (
-    <QueryState query={saved} loading="Opening the saved mix" error={failed}>
+    <QueryState query={saved} loading={t('savedPage.loading')} error={failed}>
       {(mix) => (
         <>
           <PageIntro title={mix.name}>
-            A yard mix saved by {mix.ownerFirstName} on {formatSavedOn(mix.createdAt)}. Changing it opens a copy in Find
-            plants; this saved mix stays as it is.
+            {t('savedPage.intro', { name: mix.ownerFirstName, date: f.date(mix.createdAt.slice(0, 10)) })}
           </PageIntro>
           {plan ? (
             <YardMixView
               plan={plan}
-              title="The saved mix"
+              title={t('savedPage.heading')}
               onPlanChange={toFindPlants}
               isSignedIn={session.status === 'signed-in'}
               signInHref={paths.signIn.build(location.pathname)}
@@ -65,8 +64,4 @@ export function SavedMixRoute() {
       )}
     </QueryState>
   );
-}
-
-function formatSavedOn(createdAt: string): string {
-  return new Date(createdAt).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric' });
 }

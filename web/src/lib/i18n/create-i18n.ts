@@ -1,7 +1,8 @@
 import { createInstance, type i18n } from 'i18next';
 import { initReactI18next } from 'react-i18next';
 import { resources } from '../../locales/resources.js';
-import { DEFAULT_LOCALE, type Locale } from './locales.js';
+import { DEFAULT_LOCALE, isLocale, type Locale } from './locales.js';
+import { setRequestLocale } from './request-locale.js';
 
 /**
  * One i18next instance with every catalogue bundled (they are small), started synchronously so the
@@ -20,6 +21,11 @@ export function createI18n(locale: Locale): i18n {
     // React escapes every value it renders; escaping here too would show "&amp;".
     interpolation: { escapeValue: false },
     returnNull: false,
+  });
+  // The API answers in the page's language: the http client reads it for `Accept-Language`.
+  setRequestLocale(locale);
+  instance.on('languageChanged', (lng) => {
+    if (isLocale(lng)) setRequestLocale(lng);
   });
   return instance;
 }

@@ -4,3 +4,4 @@ export * from './locales.js';
 export * from './use-locale.js';
 export * from './use-words.js';
 export * from './i18n-provider.js';
+export * from './request-locale.js';

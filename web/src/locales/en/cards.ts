@@ -25,6 +25,10 @@ export const cards = {
     pasteFinding: 'Finding {{count, number}} names…',
     pasteAdd: 'Find and add these',
     pasteError: 'The list could not be looked up.',
+    searchFailed: 'The search did not answer.',
+    found: 'Names found',
+    foundLine: '“{{typed}}”: added {{name}}',
+    notFound: 'Not found in the catalogue, so not added: {{list}}. Check the spelling, or try the scientific name.',
     noneTitle: 'No species chosen yet',
     noneText: 'Add plants by searching or pasting a list; each gets a fact card and a pot label.',
     chosen_one: '{{count, number}} species chosen',
@@ -68,6 +72,7 @@ export const cards = {
   },
   reminder: {
     label: 'Before you plant',
+    list: 'Cautions among your plants',
     rules:
       "Before you plant or share, check your state's noxious-weed list and any local rules: a plant native to one county can be restricted in the next.",
     sap: 'Milkweed and other plants with milky sap can sting eyes and skin: wear gloves when you clean seed or pot them up, and wash your hands after.',

@@ -23,6 +23,12 @@ export const detail = {
     photoAlt: '{{name}} ({{scientific}})',
     drawing: 'Drawing of a flowering plant',
     drawingColours: 'Drawing of a flowering plant with {{colours}} flowers',
+    photoCredit: 'Photo: {{photographer}}, {{licence}}',
+    photoSourceLabel: 'source of the photo (opens in a new tab)',
+    photoSource: 'source',
+    photoFromCatalogue: '{{name}}, photo from the catalogue.',
+    noPhoto_one: 'No photo yet: a drawing in its flower colour.',
+    noPhoto_other: 'No photo yet: a drawing in its flower colours.',
   },
   cautions: {
     title: 'Cautions',

@@ -27,6 +27,11 @@ export const cards = {
     pasteFinding: 'Buscando {{count, number}} nombres…',
     pasteAdd: 'Buscar y agregar',
     pasteError: 'No se pudo buscar la lista.',
+    searchFailed: 'La búsqueda no respondió.',
+    found: 'Nombres encontrados',
+    foundLine: '“{{typed}}”: se agregó {{name}}',
+    notFound:
+      'No están en el catálogo, así que no se agregaron: {{list}}. Revisa cómo se escriben o prueba con el nombre científico.',
     noneTitle: 'Todavía no elegiste ninguna especie',
     noneText: 'Agrega plantas buscándolas o pegando una lista; cada una tendrá su ficha y su etiqueta.',
     chosen_one: '{{count, number}} especie elegida',
@@ -71,6 +76,7 @@ export const cards = {
   },
   reminder: {
     label: 'Antes de plantar',
+    list: 'Precauciones de tus plantas',
     rules:
       'Antes de plantar o compartir, revisa la lista de malezas nocivas de tu estado y las reglas locales: una planta nativa de un condado puede estar restringida en el de al lado.',
     sap: 'El algodoncillo y otras plantas de savia lechosa pueden irritar los ojos y la piel: usa guantes cuando limpies la semilla o las pases a maceta, y lávate las manos después.',

@@ -25,6 +25,12 @@ export const detail = {
     photoAlt: '{{name}} ({{scientific}})',
     drawing: 'Dibujo de una planta en flor',
     drawingColours: 'Dibujo de una planta con flores de color {{colours}}',
+    photoCredit: 'Foto: {{photographer}}, {{licence}}',
+    photoSourceLabel: 'origen de la foto (se abre en una pestaña nueva)',
+    photoSource: 'origen',
+    photoFromCatalogue: '{{name}}, foto del catálogo.',
+    noPhoto_one: 'Todavía no hay foto: un dibujo del color de su flor.',
+    noPhoto_other: 'Todavía no hay foto: un dibujo de los colores de sus flores.',
   },
   cautions: {
     title: 'Precauciones',

@@ -80,6 +80,22 @@ export const yard = {
       },
     },
   },
+  errors: {
+    sun: 'Elige cuánto sol le da al lugar.',
+    moisture: 'Elige qué tan húmedo se queda el suelo.',
+    deer: 'Elige qué tan seguido vienen los venados.',
+    areaEmpty: 'Escribe el tamaño del área que vas a plantar.',
+    areaNumber: 'Escribe el área como un número de {{unit}}, por ejemplo 200.',
+    areaZero: 'El área tiene que ser mayor que 0.',
+    areaMax:
+      'Homeground planea hasta 10 acres ({{max}} {{unit}}); una plantación más grande se planea como siembra de campo.',
+    heightNumber: 'Escribe la altura como un número de {{unit}}, o déjala vacía.',
+    heightMin: 'La planta más alta tiene que medir al menos 4 in (10 cm).',
+    heightMax: 'Deja la altura vacía si cualquier altura, hasta la de un árbol, te parece bien.',
+    check: 'Revisa esta respuesta: {{reason}}.',
+    notValid: 'no es válida',
+  },
+  thatIs: 'Son {{value}} {{unit}}.',
   mix: {
     species: 'Especies de la mezcla',
     showAs: 'Mostrar la mezcla como',

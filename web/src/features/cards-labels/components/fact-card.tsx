@@ -1,4 +1,4 @@
-import { useWords } from '../../../lib/i18n/index.js';
+import { useFormatters, useWords } from '../../../lib/i18n/index.js';
 import { useTranslation } from 'react-i18next';
 import { mergeClasses } from '@fluentui/react-components';
 import {
@@ -8,7 +8,7 @@ import {
   Warning16Regular,
   WeatherSunny16Regular,
 } from '@fluentui/react-icons';
-import { capitalise, formatHeightRangeCm, genusOf, PHOTO_SIZES, photoCreditLine } from '@homeground/shared';
+import { capitalise, genusOf, PHOTO_SIZES, photoCreditLine } from '@homeground/shared';
 import { useId, useRef } from 'react';
 import { type SpeciesDetail, speciesPhotoUrl } from '../../../api/species/species.api.js';
 import { flowerSwatch } from '../../../theme/flower-colours.js';
@@ -38,6 +38,7 @@ export function FactCard({
 }) {
   const styles = useFactCardStyles();
   const { t } = useTranslation('cards');
+  const f = useFormatters();
   const words = useWords();
   const ref = useRef<HTMLElement>(null);
   const titleId = useId();
@@ -104,7 +105,7 @@ export function FactCard({
           <dt className={styles.term}>
             <ArrowAutofitHeight20Regular aria-hidden /> {t('card.height')}
           </dt>
-          <dd className={styles.detail}>{formatHeightRangeCm(species.heightCm.min, species.heightCm.max)}</dd>
+          <dd className={styles.detail}>{f.heightRange(species.heightCm.min, species.heightCm.max)}</dd>
         </div>
       </dl>
 

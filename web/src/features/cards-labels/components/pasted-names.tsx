@@ -53,10 +53,10 @@ export function PastedNames({ onAdd }: { onAdd: (slugs: string[]) => void }) {
       <div aria-live="polite">
         {state.status === 'failed' ? <ErrorState title={t('choose.pasteError')} message={state.message} /> : null}
         {found.length > 0 ? (
-          <ul className={styles.result} aria-label="Names found">
+          <ul className={styles.result} aria-label={t('choose.found')}>
             {found.map((r) => (
               <li key={r.typed}>
-                “{r.typed}”: added {r.match!.commonName} (
+                {t('choose.foundLine', { typed: r.typed, name: r.match!.commonName })} (
                 <span className={styles.scientific}>{r.match!.scientificName}</span>)
               </li>
             ))}
@@ -64,8 +64,7 @@ export function PastedNames({ onAdd }: { onAdd: (slugs: string[]) => void }) {
         ) : null}
         {notFound.length > 0 ? (
           <p className={styles.missing} role="status">
-            Not found in the catalogue, so not added: {notFound.map((r) => `“${r.typed}”`).join(', ')}. Check the
-            spelling, or try the scientific name.
+            {t('choose.notFound', { list: notFound.map((r) => `“${r.typed}”`).join(', ') })}
           </p>
         ) : null}
       </div>

@@ -1,7 +1,6 @@
-import { useWords } from '../../../lib/i18n/index.js';
+import { useFormatters, useWords } from '../../../lib/i18n/index.js';
 import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { formatHeightRangeCm } from '@homeground/shared';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { flowerSwatch } from '../../../theme/flower-colours.js';
 import { treatmentShort } from '../utils/treatment-words.js';
@@ -46,6 +45,7 @@ const useStyles = makeStyles({
 export function PotLabel({ species, sowDate }: { species: SpeciesDetail; sowDate: string }) {
   const styles = useStyles();
   const { t } = useTranslation('cards');
+  const f = useFormatters();
   const words = useWords();
   const swatch = flowerSwatch(species.flowerColours[0]);
   return (
@@ -59,7 +59,7 @@ export function PotLabel({ species, sowDate }: { species: SpeciesDetail; sowDate
         <p className={styles.line}>{t('label.sown', { date: sowDate })}</p>
         <p className={styles.line}>{words.siteShortWords(species.sun, species.moisture)}</p>
         <p className={styles.line}>
-          {t('label.tall', { height: formatHeightRangeCm(species.heightCm.min, species.heightCm.max) })}
+          {t('label.tall', { height: f.heightRange(species.heightCm.min, species.heightCm.max) })}
         </p>
         <p className={`${styles.line} ${styles.treatment}`}>
           {treatmentShort(species.germination, words, t('label.surface'))}

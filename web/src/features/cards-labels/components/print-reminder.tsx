@@ -36,7 +36,7 @@ export function PrintReminder({ species }: { species: readonly SpeciesDetail[] }
           {hasSap ? t('reminder.sap') : t('reminder.gloves')} {t('reminder.toxic')}
         </p>
         {withCautions.length > 0 ? (
-          <ul className={styles.list} aria-label="Cautions among your plants">
+          <ul className={styles.list} aria-label={t('reminder.list')}>
             {withCautions.map((s) => (
               <li key={s.slug}>
                 {s.commonNames[0]}: {words.cautionList(s.cautions.map((c) => c.kind))}

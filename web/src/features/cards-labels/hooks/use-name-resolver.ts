@@ -1,6 +1,7 @@
 import type { SpeciesSummary } from '@homeground/shared';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useState } from 'react';
+import { useTranslation } from 'react-i18next';
 import { speciesListQueryOptions } from '../../../api/species/species.queries.js';
 
 export interface ResolvedName {
@@ -33,6 +34,7 @@ export function pastedNames(text: string): string[] {
  */
 export function useNameResolver() {
   const queryClient = useQueryClient();
+  const { t } = useTranslation('cards');
   const [state, setState] = useState<ResolveState>({ status: 'idle' });
 
   const resolve = useCallback(
@@ -50,11 +52,11 @@ export function useNameResolver() {
         setState({ status: 'done', results });
         return results;
       } catch (error) {
-        setState({ status: 'failed', message: error instanceof Error ? error.message : 'The search did not answer.' });
+        setState({ status: 'failed', message: error instanceof Error ? error.message : t('choose.searchFailed') });
         return null;
       }
     },
-    [queryClient],
+    [queryClient, t],
   );
 
   return { state, resolve, reset: () => setState({ status: 'idle' }) };

@@ -1,5 +1,6 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { type Group, type GroupRole, type StateCode, stateName } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
 import { useQuery } from '@tanstack/react-query';
 import { groupQueryOptions, membersQueryOptions } from '../../../api/groups/groups.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
@@ -28,21 +29,25 @@ const useStyles = makeStyles({
 export function GroupPage({ slug, myRole }: { slug: string; myRole: GroupRole | null }) {
   const styles = useStyles();
   const group = useQuery(groupQueryOptions(slug));
+  const { t } = useTranslation('groups');
   return (
-    <QueryState query={group} loading="Loading the group" error="The group did not load.">
+    <QueryState query={group} loading={t('page.loading')} error={t('page.error')}>
       {(g: Group) => (
         <>
           <PageIntro title={g.name}>
-            A community growing group in {g.town}, {stateName(g.state as StateCode)}
-            {g.ecoregionCode ? `, ecoregion ${g.ecoregionCode}` : ''}: {g.members}{' '}
-            {g.members === 1 ? 'person' : 'people'}.
+            {t('page.intro', {
+              town: g.town,
+              state: stateName(g.state as StateCode),
+              ecoregion: g.ecoregionCode ? t('page.ecoregion', { code: g.ecoregionCode }) : '',
+              count: g.members,
+            })}
           </PageIntro>
           <div className={styles.stack}>
             {myRole ? <Members slug={slug} canManage={myRole === 'organiser'} /> : null}
             {myRole === 'organiser' ? (
               <ContentCard aria-labelledby="group-invite">
                 <Heading level="section" id="group-invite">
-                  Invite someone
+                  {t('page.invite')}
                 </Heading>
                 <InviteForm slug={slug} groupName={g.name} />
               </ContentCard>
@@ -56,12 +61,13 @@ export function GroupPage({ slug, myRole }: { slug: string; myRole: GroupRole | 
 
 function Members({ slug, canManage }: { slug: string; canManage: boolean }) {
   const members = useQuery(membersQueryOptions(slug));
+  const { t } = useTranslation('groups');
   return (
     <ContentCard aria-labelledby="group-people">
       <Heading level="section" id="group-people">
-        People
+        {t('page.people')}
       </Heading>
-      <QueryState query={members} loading="Loading the people" error="The member list did not load.">
+      <QueryState query={members} loading={t('page.peopleLoading')} error={t('page.peopleError')}>
         {(list) => <MemberList slug={slug} members={list} canManage={canManage} />}
       </QueryState>
     </ContentCard>

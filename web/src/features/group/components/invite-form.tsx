@@ -1,5 +1,7 @@
 import { Button, Field, Input, makeStyles, Select, tokens } from '@fluentui/react-components';
-import { GROUP_ROLE_WORDS, GROUP_ROLES, INVITATION_DAYS, inviteRequestSchema } from '@homeground/shared';
+import { GROUP_ROLES, type GroupRole, INVITATION_DAYS, inviteRequestSchema } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
+import { useWords } from '../../../lib/i18n/index.js';
 import { useState } from 'react';
 import { useInviteMutation } from '../../../api/groups/groups.mutations.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
@@ -13,6 +15,8 @@ const useStyles = makeStyles({
 /** An organiser invites someone by e-mail; the message carries a link that makes or joins an account. */
 export function InviteForm({ slug, groupName }: { slug: string; groupName: string }) {
   const styles = useStyles();
+  const { t } = useTranslation('groups');
+  const words = useWords();
   const inviteMutation = useInviteMutation(slug);
   const form = useSchemaForm({ schema: inviteRequestSchema, initial: { email: '', role: 'grower' } });
   const [sentTo, setSentTo] = useState<string | null>(null);
@@ -34,14 +38,14 @@ export function InviteForm({ slug, groupName }: { slug: string; groupName: strin
       className={styles.form}
       onSubmit={submit}
       noValidate
-      aria-label={`Invite someone to ${groupName}`}
+      aria-label={t('invite.label', { group: groupName })}
     >
       {form.failure ? (
         <p className={styles.failure} role="alert">
           {form.failure}
         </p>
       ) : null}
-      <Field label="Their e-mail" required {...form.validation('email')}>
+      <Field label={t('invite.email')} required {...form.validation('email')}>
         <Input
           type="email"
           name="email"
@@ -51,25 +55,25 @@ export function InviteForm({ slug, groupName }: { slug: string; groupName: strin
         />
       </Field>
       <Field
-        label="Role in the group"
-        hint={GROUP_ROLE_WORDS[form.values.role as keyof typeof GROUP_ROLE_WORDS]?.does}
+        label={t('invite.role')}
+        hint={words.groupRole[form.values.role as GroupRole]?.does}
         {...form.validation('role')}
       >
         <Select name="role" value={form.values.role} onChange={(_, d) => form.change('role', d.value)}>
           {GROUP_ROLES.map((r) => (
             <option key={r} value={r}>
-              {GROUP_ROLE_WORDS[r].title}
+              {words.groupRole[r].title}
             </option>
           ))}
         </Select>
       </Field>
       <div>
         <Button type="submit" appearance="primary" disabled={inviteMutation.isPending}>
-          {inviteMutation.isPending ? 'Sending…' : 'Send the invitation'}
+          {inviteMutation.isPending ? t('invite.sending') : t('invite.send')}
         </Button>
       </div>
       <p aria-live="polite" className={styles.sent}>
-        {sentTo ? `Sent. ${sentTo} has ${INVITATION_DAYS} days to open the link.` : ''}
+        {sentTo ? t('invite.sent', { email: sentTo, days: INVITATION_DAYS }) : ''}
       </p>
     </form>
   );

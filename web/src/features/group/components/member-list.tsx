@@ -16,7 +16,9 @@ import {
   TableRow,
   tokens,
 } from '@fluentui/react-components';
-import { GROUP_ROLE_WORDS, type GroupMember } from '@homeground/shared';
+import type { GroupMember } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
+import { useWords } from '../../../lib/i18n/index.js';
 import { useState } from 'react';
 import { useRemoveMemberMutation } from '../../../api/groups/groups.mutations.js';
 
@@ -29,6 +31,8 @@ const useStyles = makeStyles({
 /** The group's people. Organisers see addresses and can take someone out of the group. */
 export function MemberList({ slug, members, canManage }: { slug: string; members: GroupMember[]; canManage: boolean }) {
   const styles = useStyles();
+  const { t } = useTranslation('groups');
+  const words = useWords();
   // Focus goes back to the Remove button that opened the dialog when it closes (WCAG 2.4.3).
   const restoreFocusTarget = useRestoreFocusTarget();
   const remove = useRemoveMemberMutation(slug);
@@ -37,20 +41,20 @@ export function MemberList({ slug, members, canManage }: { slug: string; members
 
   return (
     <div className={styles.scroll}>
-      <Table aria-label="People in the group" size="small">
+      <Table aria-label={t('members.label')} size="small">
         <TableHeader>
           <TableRow>
-            <TableHeaderCell>Name</TableHeaderCell>
-            <TableHeaderCell>Role</TableHeaderCell>
-            {showEmail ? <TableHeaderCell>E-mail</TableHeaderCell> : null}
-            {canManage ? <TableHeaderCell>Take out</TableHeaderCell> : null}
+            <TableHeaderCell>{t('members.name')}</TableHeaderCell>
+            <TableHeaderCell>{t('members.role')}</TableHeaderCell>
+            {showEmail ? <TableHeaderCell>{t('members.email')}</TableHeaderCell> : null}
+            {canManage ? <TableHeaderCell>{t('members.takeOut')}</TableHeaderCell> : null}
           </TableRow>
         </TableHeader>
         <TableBody>
           {members.map((m) => (
             <TableRow key={m.userId}>
               <TableCell>{m.displayName}</TableCell>
-              <TableCell>{GROUP_ROLE_WORDS[m.role].title}</TableCell>
+              <TableCell>{words.groupRole[m.role].title}</TableCell>
               {showEmail ? <TableCell className={styles.email}>{m.email}</TableCell> : null}
               {canManage ? (
                 <TableCell>
@@ -58,9 +62,9 @@ export function MemberList({ slug, members, canManage }: { slug: string; members
                     {...restoreFocusTarget}
                     size="small"
                     onClick={() => setLeaving(m)}
-                    aria-label={`Remove ${m.displayName} from the group`}
+                    aria-label={t('members.removeName', { name: m.displayName })}
                   >
-                    Remove
+                    {t('members.remove')}
                   </Button>
                 </TableCell>
               ) : null}
@@ -79,17 +83,15 @@ export function MemberList({ slug, members, canManage }: { slug: string; members
         <Dialog open onOpenChange={(_, d) => !d.open && setLeaving(null)}>
           <DialogSurface>
             <DialogBody>
-              <DialogTitle>Remove {leaving?.displayName}?</DialogTitle>
-              <DialogContent>
-                They leave the group and its season; their account stays. You can invite them again later.
-              </DialogContent>
+              <DialogTitle>{t('members.confirmTitle', { name: leaving.displayName })}</DialogTitle>
+              <DialogContent>{t('members.confirmText')}</DialogContent>
               <DialogActions>
-                <Button onClick={() => setLeaving(null)}>Keep them</Button>
+                <Button onClick={() => setLeaving(null)}>{t('members.keep')}</Button>
                 <Button
                   appearance="primary"
                   onClick={() => leaving && remove.mutate(leaving.userId, { onSettled: () => setLeaving(null) })}
                 >
-                  Remove
+                  {t('members.remove')}
                 </Button>
               </DialogActions>
             </DialogBody>

@@ -2,11 +2,12 @@ import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import {
   acceptInvitationRequestSchema,
   type AuthResponse,
-  GROUP_ROLE_WORDS,
   type InvitationPreview,
   type User,
 } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
+import { useTranslation } from 'react-i18next';
+import { useWords } from '../../../lib/i18n/index.js';
 import { invitationPreviewQueryOptions } from '../../../api/invitations/invitations.queries.js';
 import { useAcceptInvitationMutation } from '../../../api/invitations/invitations.mutations.js';
 import { RouterButton } from '../../../components/links/router-link.js';
@@ -24,9 +25,6 @@ const useStyles = makeStyles({
   failure: { margin: 0, color: tokens.colorPaletteRedForeground1 },
 });
 
-/** "a grower", "an organiser". */
-const withArticle = (title: string) => `${/^[aeiou]/i.test(title) ? 'an' : 'a'} ${title.toLowerCase()}`;
-
 /** A new account needs both; the shared schema leaves them optional because an account holder sends none. */
 const newAccountSchema = acceptInvitationRequestSchema.required();
 
@@ -41,11 +39,12 @@ export interface AcceptInvitationProps {
 /** The page an invitation link opens: what the group is, and one step to join it. */
 export function AcceptInvitation({ token, user, onJoined }: AcceptInvitationProps) {
   const preview = useQuery(invitationPreviewQueryOptions(token));
+  const { t } = useTranslation('groups');
   return (
     <QueryState
       query={preview}
-      loading="Opening your invitation"
-      error={(error) => <ErrorState title="This invitation cannot be used." message={error.message} />}
+      loading={t('invitation.loading')}
+      error={(error) => <ErrorState title={t('invitation.cannotUse')} message={error.message} />}
     >
       {(p) => <Invitation preview={p} token={token} user={user} onJoined={onJoined} />}
     </QueryState>
@@ -54,19 +53,25 @@ export function AcceptInvitation({ token, user, onJoined }: AcceptInvitationProp
 
 function Invitation({ preview, token, user, onJoined }: AcceptInvitationProps & { preview: InvitationPreview }) {
   const styles = useStyles();
-  const role = GROUP_ROLE_WORDS[preview.role];
+  const { t } = useTranslation('groups');
+  const role = useWords().groupRole[preview.role];
   const accept = useAcceptInvitationMutation(token);
   const here = paths.invitation.build(token);
   return (
     <>
-      <PageIntro title={`Join ${preview.groupName}`}>
-        You are invited to join {preview.groupName} in {preview.town}, {preview.state} as {withArticle(role.title)}.
-        What {withArticle(role.title)} does: {role.does.charAt(0).toLowerCase() + role.does.slice(1)}
+      <PageIntro title={t('invitation.title', { group: preview.groupName })}>
+        {t('invitation.invited', {
+          group: preview.groupName,
+          town: preview.town,
+          state: preview.state,
+          role: t(`invitation.roleWithArticle.${preview.role}`),
+          does: role.does.charAt(0).toLowerCase() + role.does.slice(1),
+        })}
       </PageIntro>
-      <ContentCard className={styles.card} aria-label="Accept the invitation">
+      <ContentCard className={styles.card} aria-label={t('invitation.accept')}>
         {user && user.email.toLowerCase() === preview.email ? (
           <>
-            <p className={styles.lead}>You are signed in as {user.email}.</p>
+            <p className={styles.lead}>{t('invitation.signedInAs', { email: user.email })}</p>
             {accept.isError ? (
               <p className={styles.failure} role="alert">
                 {accept.error.message}
@@ -78,23 +83,18 @@ function Invitation({ preview, token, user, onJoined }: AcceptInvitationProps & 
                 disabled={accept.isPending}
                 onClick={() => accept.mutate({}, { onSuccess: onJoined })}
               >
-                Join {preview.groupName}
+                {t('invitation.join', { group: preview.groupName })}
               </Button>
             </div>
           </>
         ) : user ? (
-          <p className={styles.lead}>
-            This invitation was sent to {preview.email}, but you are signed in as {user.email}. Sign out, then open the
-            link again and sign in with {preview.email}.
-          </p>
+          <p className={styles.lead}>{t('invitation.otherAccount', { invited: preview.email, email: user.email })}</p>
         ) : preview.accountExists ? (
           <>
-            <p className={styles.lead}>
-              You already have an account with {preview.email}. Sign in, and you come straight back here.
-            </p>
+            <p className={styles.lead}>{t('invitation.hasAccount', { email: preview.email })}</p>
             <div>
               <RouterButton appearance="primary" to={paths.signIn.build(here)}>
-                Sign in to join
+                {t('invitation.signInToJoin')}
               </RouterButton>
             </div>
           </>
@@ -119,6 +119,7 @@ function NewAccountForm({
 }) {
   const styles = useStyles();
   const newPasswordHint = useNewPasswordHint();
+  const { t } = useTranslation('groups');
   const form = useSchemaForm({ schema: newAccountSchema, initial: { displayName: '', password: '' } });
   const submit = form.handleSubmit((body) =>
     accept.mutate(body, { onSuccess: onJoined, onError: (error) => form.fail(error) }),
@@ -129,19 +130,19 @@ function NewAccountForm({
       className={styles.form}
       onSubmit={submit}
       noValidate
-      aria-label={`Make your account and join ${groupName}`}
+      aria-label={t('invitation.makeAccountLabel', { group: groupName })}
     >
-      <p className={styles.lead}>Your account will use {email}. Choose the name your group sees and a password.</p>
+      <p className={styles.lead}>{t('invitation.accountUses', { email })}</p>
       {form.failure ? (
         <p className={styles.failure} role="alert">
           {form.failure}
         </p>
       ) : null}
-      <SchemaTextField form={form} name="displayName" label="Your name" required autoComplete="name" />
+      <SchemaTextField form={form} name="displayName" label={t('invitation.yourName')} required autoComplete="name" />
       <SchemaTextField
         form={form}
         name="password"
-        label="Password"
+        label={t('invitation.password')}
         hint={newPasswordHint}
         required
         type="password"
@@ -149,7 +150,7 @@ function NewAccountForm({
       />
       <div>
         <Button type="submit" appearance="primary" disabled={accept.isPending}>
-          {accept.isPending ? 'Joining…' : `Make my account and join`}
+          {accept.isPending ? t('invitation.joining') : t('invitation.makeAndJoin')}
         </Button>
       </div>
     </form>

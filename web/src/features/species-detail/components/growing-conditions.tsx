@@ -1,6 +1,6 @@
-import { useWords } from '../../../lib/i18n/index.js';
+import { useFormatters, useWords } from '../../../lib/i18n/index.js';
 import { useTranslation } from 'react-i18next';
-import { capitalise, formatHeightRangeCm } from '@homeground/shared';
+import { capitalise } from '@homeground/shared';
 import { Drop20Regular, Ruler20Regular } from '@fluentui/react-icons';
 import type { SpeciesDetail } from '../../../api/species/species.api.js';
 import { SECTION_FIELDS } from '../utils/source-labels.js';
@@ -30,13 +30,14 @@ export function GrowingConditions({ species }: { species: SpeciesDetail }) {
 /** Size and habit: height and spread in both unit systems, form, lifespan, spread and deer. */
 export function SizeAndHabit({ species }: { species: SpeciesDetail }) {
   const { t } = useTranslation('detail');
+  const f = useFormatters();
   const words = useWords();
   return (
     <FactSection title={t('size.title')} icon={<Ruler20Regular />}>
       <FactList
         facts={[
-          [t('size.height'), formatHeightRangeCm(species.heightCm.min, species.heightCm.max)],
-          [t('size.spread'), formatHeightRangeCm(species.spreadCm.min, species.spreadCm.max)],
+          [t('size.height'), f.heightRange(species.heightCm.min, species.heightCm.max)],
+          [t('size.spread'), f.heightRange(species.spreadCm.min, species.spreadCm.max)],
           [t('size.growthForm'), capitalise(words.growthForm[species.growthForm])],
           [t('size.lifespan'), capitalise(words.lifespan[species.lifespan])],
           [t('size.spreadHabit'), words.habitLine(words.spreadHabit[species.spreadHabit])],

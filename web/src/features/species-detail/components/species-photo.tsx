@@ -1,7 +1,7 @@
 import { useWords } from '../../../lib/i18n/index.js';
 import { useTranslation } from 'react-i18next';
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { PHOTO_SIZES, photoCreditLine } from '@homeground/shared';
+import { PHOTO_LICENCE_WORDS, PHOTO_SIZES } from '@homeground/shared';
 import { useState } from 'react';
 import { speciesPhotoUrl, type SpeciesDetail } from '../../../api/species/species.api.js';
 import { hgTokens } from '../../../theme/index.js';
@@ -54,21 +54,26 @@ export function SpeciesPhoto({ species }: { species: SpeciesDetail }) {
       <figcaption className={styles.caption}>
         {showPhoto && species.photoCredit ? (
           <>
-            {name}. {photoCreditLine(species.photoCredit)} (
+            {name}.{' '}
+            {t('header.photoCredit', {
+              photographer: species.photoCredit.photographer,
+              licence: PHOTO_LICENCE_WORDS[species.photoCredit.licence],
+            })}{' '}
+            (
             <a
               href={species.photoCredit.sourceUrl}
               rel="noopener noreferrer"
               target="_blank"
-              aria-label="source of the photo (opens in a new tab)"
+              aria-label={t('header.photoSourceLabel')}
             >
-              source
+              {t('header.photoSource')}
             </a>
             ).
           </>
         ) : showPhoto ? (
-          `${name}, photo from the catalogue.`
+          t('header.photoFromCatalogue', { name })
         ) : (
-          `No photo yet: a drawing in its flower colour${species.flowerColours.length > 1 ? 's' : ''}.`
+          t('header.noPhoto', { count: species.flowerColours.length })
         )}
       </figcaption>
     </figure>

@@ -1,7 +1,11 @@
-import { isFloweringSpecies, MONTH_NUMBERS, monthLong, type SpeciesSummary } from '@homeground/shared';
-
-/** January … December, in the shared vocabulary's words. */
-export const MONTH_NAMES: readonly string[] = MONTH_NUMBERS.map(monthLong);
+import type { TFunction } from 'i18next';
+import {
+  isFloweringSpecies,
+  MONTH_NUMBERS,
+  type MonthNumber,
+  type SpeciesSummary,
+  type Vocabulary,
+} from '@homeground/shared';
 
 /**
  * CP42 bloom periods run from April (early) to October (late) (CP42-IN, via shared
@@ -22,8 +26,7 @@ type BloomSpecies = Pick<SpeciesSummary, 'commonName' | 'growthForm' | 'bloomMon
 
 /** Per month of the year: which flowering species of the mix bloom, and whether the month is a gap. */
 export function monthlyBloom(species: readonly BloomSpecies[]): MonthBloom[] {
-  return MONTH_NAMES.map((_, i) => {
-    const month = i + 1;
+  return MONTH_NUMBERS.map((month) => {
     const inBloom = species
       .filter((s) => isFloweringSpecies(s) && s.bloomMonths.includes(month))
       .map((s) => s.commonName);
@@ -32,23 +35,18 @@ export function monthlyBloom(species: readonly BloomSpecies[]): MonthBloom[] {
   });
 }
 
-function joinWords(words: readonly string[]): string {
-  if (words.length <= 1) return words.join('');
-  return `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
-}
-
-function gapWords(m: MonthBloom): string {
-  const name = MONTH_NAMES[m.month - 1];
-  if (m.inBloom.length === 0) return `${name} has no species in flower`;
-  return `${name} has only ${m.inBloom.length} (${joinWords(m.inBloom)})`;
-}
-
-/** The gaps in one or two sentences, for everyone who cannot see the chart's colours and patterns. */
-export function describeGaps(months: readonly MonthBloom[]): string {
+/**
+ * The gaps in one or two sentences, for everyone who cannot see the chart's colours and patterns,
+ * in the page's language (`t` of the mix catalogue, `words` of the same language).
+ */
+export function describeGaps(months: readonly MonthBloom[], t: TFunction<'mix'>, words: Vocabulary): string {
   const gaps = months.filter((m) => m.isGap);
-  if (gaps.length === 0) {
-    return `No gaps: every month from April to October has at least ${MIN_IN_BLOOM} species in flower.`;
-  }
-  const noun = gaps.length === 1 ? 'gap' : 'gaps';
-  return `${gaps.length} ${noun} from April to October, where fewer than ${MIN_IN_BLOOM} species flower: ${joinWords(gaps.map(gapWords))}.`;
+  if (gaps.length === 0) return t('bloom.noGaps', { min: MIN_IN_BLOOM });
+  const monthName = (m: MonthBloom) => words.month[m.month as MonthNumber].long;
+  const list = gaps.map((m) =>
+    m.inBloom.length === 0
+      ? t('bloom.monthEmpty', { month: monthName(m) })
+      : t('bloom.monthFew', { month: monthName(m), count: m.inBloom.length, names: words.join(m.inBloom) }),
+  );
+  return t('bloom.gaps', { count: gaps.length, min: MIN_IN_BLOOM, list: words.join(list) });
 }

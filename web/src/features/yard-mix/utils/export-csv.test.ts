@@ -1,4 +1,6 @@
+import { wordsFor } from '@homeground/shared';
 import { describe, expect, it } from 'vitest';
+import { createI18n } from '../../../lib/i18n/index.js';
 import { fixtureMix } from '../testing/mix-fixtures.js';
 import { mixCsv } from './export-csv.js';
 import { mixRows } from './mix-rows.js';
@@ -9,7 +11,7 @@ describe('mix CSV', () => {
   it('has one line per species with its role, bloom, height, plants, spacing in both units, seeds and weight', () => {
     const mix = fixtureMix();
     mix.species['test-mid'] = { ...mix.species['test-mid'], commonName: 'bergamot, "test" kind' };
-    const lines = mixCsv(mixRows(mix, [], []))
+    const lines = mixCsv(mixRows(mix, [], []), createI18n('en').getFixedT('en', 'mix'), wordsFor('en'))
       .trimEnd()
       .split('\r\n');
     expect(lines[0]).toBe(
@@ -25,5 +27,17 @@ describe('mix CSV', () => {
     expect(lines[4]).toMatch(/^Testia quarta,late test goldenrod,middle of the bed,Jul–Aug and Oct,12–35,30–90,/);
     // No seed weight known: the weight cells stay empty rather than 0.
     expect(lines[5]).toBe('Testcarex quinta,test sedge,middle of the bed,May–Jun and Sep,12–35,30–90,14,18,46,42,,');
+  });
+
+  // The headers and month names follow the page's language (es catalogue, shared Spanish month words);
+  // the numbers stay spreadsheet-plain.
+  it('writes a Spanish file when the page is in Spanish', () => {
+    const lines = mixCsv(mixRows(fixtureMix(), [], []), createI18n('es').getFixedT('es', 'mix'), wordsFor('es'))
+      .trimEnd()
+      .split('\r\n');
+    expect(lines[0]).toBe(
+      'Nombre científico,Nombre común,Papel en la mezcla,Meses de floración,Altura (in),Altura (cm),Plantas,Distancia (in),Distancia (cm),Semillas a sembrar,Peso de la semilla (g),Peso de la semilla (oz)',
+    );
+    expect(lines[1]).toMatch(/^Testia prima,early test aster,[^,]+,abr–jun,12–35,30–90,10,18,46,30,0.05,0.0018$/);
   });
 });

@@ -1,35 +1,40 @@
-import { cmToInches, csvField as field, formatMonths, roundTo } from '@homeground/shared';
+import type { TFunction } from 'i18next';
+import { cmToInches, csvField as field, roundTo, type Vocabulary } from '@homeground/shared';
 import type { MixRow } from './mix-rows.js';
 
-const HEADER = [
-  'Scientific name',
-  'Common name',
-  'Role in the mix',
-  'Bloom months',
-  'Height (in)',
-  'Height (cm)',
-  'Plants',
-  'Spacing (in)',
-  'Spacing (cm)',
-  'Seeds to sow',
-  'Seed weight (g)',
-  'Seed weight (oz)',
-];
+/** The columns in order, as keys of the mix catalogue's `csv` headers. */
+const COLUMNS = [
+  'scientificName',
+  'commonName',
+  'role',
+  'bloom',
+  'heightIn',
+  'heightCm',
+  'plants',
+  'spacingIn',
+  'spacingCm',
+  'seeds',
+  'weightG',
+  'weightOz',
+] as const;
 
 /** A height range as "12–30"; one number when both ends agree. */
 function range(min: number, max: number): string {
   return min === max ? String(min) : `${min}–${max}`;
 }
 
-/** The mix as CSV, one species a line, built in the browser (no request needed). */
-export function mixCsv(rows: readonly MixRow[]): string {
+/**
+ * The mix as CSV, one species a line, built in the browser (no request needed). Headers and month
+ * names are in the page's language; numbers stay plain (a dot for decimals) so spreadsheets read them.
+ */
+export function mixCsv(rows: readonly MixRow[], t: TFunction<'mix'>, words: Vocabulary): string {
   const lines = rows.map((r) => {
     const q = r.quantity;
     return [
       r.species.scientificName,
       r.species.commonName,
       r.chosen.roles.join('; '),
-      formatMonths(r.species.bloomMonths),
+      words.formatMonths(r.species.bloomMonths),
       range(roundTo(cmToInches(r.species.heightCm.min), 0), roundTo(cmToInches(r.species.heightCm.max), 0)),
       range(r.species.heightCm.min, r.species.heightCm.max),
       q?.plants,
@@ -42,7 +47,7 @@ export function mixCsv(rows: readonly MixRow[]): string {
       .map(field)
       .join(',');
   });
-  return [HEADER.map(field).join(','), ...lines].join('\r\n') + '\r\n';
+  return [COLUMNS.map((c) => field(t(`csv.${c}`))).join(','), ...lines].join('\r\n') + '\r\n';
 }
 
 /** Offers the text as a file download through a temporary object URL. */

@@ -13,6 +13,8 @@ import {
   siteRequestSchema,
   squareFeetToSquareMetres,
 } from '@homeground/shared';
+import type { TFunction } from 'i18next';
+import type { Formatters } from '../../../lib/i18n/index.js';
 import type { AreaUnit } from './mix-plan.js';
 
 export type HeightUnit = 'ft' | 'cm';
@@ -71,48 +73,52 @@ export function heightInCm(values: Pick<YardFormValues, 'maxHeight' | 'heightUni
 }
 
 /** "= 18.6 m²" beside an area in ft², and the reverse; empty when nothing sensible is typed. */
-export function otherAreaUnit(values: Pick<YardFormValues, 'area' | 'areaUnit'>): string {
+export function otherAreaUnit(values: Pick<YardFormValues, 'area' | 'areaUnit'>, say: YardSay): string {
   const n = parseNumber(values.area);
   if (n === null || Number.isNaN(n) || n <= 0) return '';
   return values.areaUnit === 'ft2'
-    ? `That is ${roundTo(squareFeetToSquareMetres(n), 1).toLocaleString('en-US')} m².`
-    : `That is ${Math.round(n / SQUARE_METRES_PER_SQUARE_FOOT).toLocaleString('en-US')} ft².`;
+    ? say.t('thatIs', { value: say.f.number(roundTo(squareFeetToSquareMetres(n), 1)), unit: 'm²' })
+    : say.t('thatIs', { value: say.f.number(Math.round(n / SQUARE_METRES_PER_SQUARE_FOOT)), unit: 'ft²' });
 }
 
-export function otherHeightUnit(values: Pick<YardFormValues, 'maxHeight' | 'heightUnit'>): string {
+export function otherHeightUnit(values: Pick<YardFormValues, 'maxHeight' | 'heightUnit'>, say: YardSay): string {
   const cm = heightInCm(values);
   if (cm === null || Number.isNaN(cm) || cm <= 0) return '';
   return values.heightUnit === 'ft'
-    ? `That is ${Math.round(cm)} cm.`
-    : `That is ${roundTo(cmToInches(cm) / 12, 1)} ft.`;
+    ? say.t('thatIs', { value: say.f.number(Math.round(cm)), unit: 'cm' })
+    : say.t('thatIs', { value: say.f.number(roundTo(cmToInches(cm) / 12, 1)), unit: 'ft' });
+}
+
+/** The page's words and number style for the form's messages. */
+export interface YardSay {
+  t: TFunction<'yard'>;
+  f: Formatters;
 }
 
 export type YardCheck = { ok: true; site: SiteRequest; areaUnit: AreaUnit } | { ok: false; errors: YardErrors };
 
 /** Checks every answer with a sentence for the field beside it, then the shared site schema as the last word. */
-export function checkYard(values: YardFormValues): YardCheck {
+export function checkYard(values: YardFormValues, { t, f }: YardSay): YardCheck {
   const errors: YardErrors = {};
-  if (!values.sun) errors.sun = 'Choose how much sun the spot gets.';
-  if (!values.moisture) errors.moisture = 'Choose how wet the soil stays.';
-  if (!values.deerPressure) errors.deerPressure = 'Choose how often deer visit.';
+  if (!values.sun) errors.sun = t('errors.sun');
+  if (!values.moisture) errors.moisture = t('errors.moisture');
+  if (!values.deerPressure) errors.deerPressure = t('errors.deer');
 
   const area = parseNumber(values.area);
   const unit = values.areaUnit === 'ft2' ? 'ft²' : 'm²';
   const maxArea = values.areaUnit === 'ft2' ? MAX_AREA_SQ_FT : MAX_AREA_SQ_M;
-  if (area === null) errors.area = 'Enter the size of the area you will plant.';
-  else if (Number.isNaN(area)) errors.area = `Enter the area as a number of ${unit}, for example 200.`;
-  else if (area <= 0) errors.area = 'The area must be more than 0.';
+  if (area === null) errors.area = t('errors.areaEmpty');
+  else if (Number.isNaN(area)) errors.area = t('errors.areaNumber', { unit });
+  else if (area <= 0) errors.area = t('errors.areaZero');
   else if (area > maxArea) {
-    errors.area = `Homeground plans up to 10 acres (${maxArea.toLocaleString('en-US')} ${unit}); plan a bigger planting as a field seeding.`;
+    errors.area = t('errors.areaMax', { max: f.number(maxArea), unit });
   }
 
   const heightCm = heightInCm(values);
   if (heightCm !== null) {
-    if (Number.isNaN(heightCm))
-      errors.maxHeight = `Enter the height as a number of ${values.heightUnit}, or leave it empty.`;
-    else if (heightCm < MIN_HEIGHT_CM) errors.maxHeight = 'The tallest plant must be at least 4 in (10 cm).';
-    else if (heightCm > MAX_HEIGHT_CM)
-      errors.maxHeight = 'Leave the height empty if anything up to tree height is fine.';
+    if (Number.isNaN(heightCm)) errors.maxHeight = t('errors.heightNumber', { unit: values.heightUnit });
+    else if (heightCm < MIN_HEIGHT_CM) errors.maxHeight = t('errors.heightMin');
+    else if (heightCm > MAX_HEIGHT_CM) errors.maxHeight = t('errors.heightMax');
   }
 
   if (Object.keys(errors).length > 0) return { ok: false, errors };
@@ -135,7 +141,7 @@ export function checkYard(values: YardFormValues): YardCheck {
       YardField | undefined;
     return {
       ok: false,
-      errors: { [field ?? 'area']: `Please check this answer: ${first?.message ?? 'it is not valid'}.` },
+      errors: { [field ?? 'area']: t('errors.check', { reason: first?.message ?? t('errors.notValid') }) },
     };
   }
   return { ok: true, site: candidate as SiteRequest, areaUnit: values.areaUnit };

@@ -42,6 +42,8 @@ export const useBloomChartStyles = makeStyles({
     fontWeight: tokens.fontWeightBold,
     color: tokens.colorStatusWarningForeground3,
     textTransform: 'uppercase',
+    // On a phone the flag reads bottom to top, so a longer word ("hueco") keeps the month narrow.
+    '@media (max-width: 480px)': { writingMode: 'vertical-rl', transform: 'rotate(180deg)', margin: '0 auto' },
   },
   cell: {
     height: '26px',

@@ -1,6 +1,8 @@
 import { FluentProvider } from '@fluentui/react-components';
 import { render, screen, within } from '@testing-library/react';
+import { wordsFor } from '@homeground/shared';
 import { describe, expect, it } from 'vitest';
+import { createI18n } from '../../../../lib/i18n/index.js';
 import { homegroundTheme } from '../../../../theme/index.js';
 import { fixtureSpecies } from '../../testing/mix-fixtures.js';
 import { BloomChart } from './bloom-chart.js';
@@ -27,8 +29,14 @@ describe('bloom gaps', () => {
       commonName: slug,
       bloomMonths: [4, 5, 6, 7, 8, 9, 10],
     }));
-    expect(describeGaps(monthlyBloom(allSeason))).toBe(
+    expect(describeGaps(monthlyBloom(allSeason), createI18n('en').getFixedT('en', 'mix'), wordsFor('en'))).toBe(
       'No gaps: every month from April to October has at least 3 species in flower.',
+    );
+  });
+  // Spanish words from the es catalogue (locales/es/mix.ts) and the shared Spanish month names.
+  it('says the gaps in Spanish for a Spanish page', () => {
+    expect(describeGaps(monthlyBloom(fixtureSpecies), createI18n('es').getFixedT('es', 'mix'), wordsFor('es'))).toMatch(
+      /^\d+ huecos? de abril a octubre, cuando florecen menos de 3 especies: .*en septiembre no florece ninguna especie/,
     );
   });
 });

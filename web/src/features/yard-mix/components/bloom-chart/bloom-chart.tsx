@@ -1,9 +1,11 @@
 import { mergeClasses } from '@fluentui/react-components';
-import { isFloweringSpecies, type SpeciesSummary } from '@homeground/shared';
+import { isFloweringSpecies, type MonthNumber, type SpeciesSummary } from '@homeground/shared';
 import { useId, useMemo } from 'react';
+import { useTranslation } from 'react-i18next';
+import { useWords } from '../../../../lib/i18n/index.js';
 import { flowerSwatch } from '../../../../theme/flower-colours.js';
 import { BloomLegend } from './bloom-legend.js';
-import { describeGaps, MONTH_NAMES, monthlyBloom } from '../../utils/bloom-gaps.js';
+import { describeGaps, monthlyBloom } from '../../utils/bloom-gaps.js';
 import { useBloomChartStyles } from './bloom-chart.styles.js';
 
 /**
@@ -15,38 +17,41 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
   const styles = useBloomChartStyles();
   const captionId = useId();
   const months = useMemo(() => monthlyBloom(species), [species]);
-  const summary = describeGaps(months);
+  const { t } = useTranslation('mix');
+  const words = useWords();
+  const summary = describeGaps(months, t, words);
+  const monthWords = (month: number) => words.month[month as MonthNumber];
 
   return (
     <div>
-      <p className={styles.caption} aria-hidden>
-        The months each species of your mix flowers. On a narrow screen, scroll the chart sideways to see every month.
+      {/* About scrolling on a narrow screen: nothing to say on paper. */}
+      <p className={styles.caption} aria-hidden data-print="hide">
+        {t('bloom.intro')}
       </p>
       <div className={styles.scroller} role="region" aria-labelledby={captionId} tabIndex={0}>
         <table className={styles.table}>
           <caption id={captionId} className={styles.visuallyHidden}>
-            Bloom chart: the months each species of your mix flowers
+            {t('bloom.caption')}
           </caption>
           <thead>
             <tr>
               <th scope="col" className={styles.nameHead}>
-                Species
+                {t('bloom.species')}
               </th>
               {months.map((m) => (
                 <th key={m.month} scope="col" className={styles.monthHead}>
                   <span className={styles.visuallyHidden}>
-                    {MONTH_NAMES[m.month - 1]}
-                    {m.isGap ? ', gap' : ''}
+                    {m.isGap ? t('bloom.monthGap', { month: monthWords(m.month).long }) : monthWords(m.month).long}
                   </span>
                   <span aria-hidden className={styles.monthLong}>
-                    {MONTH_NAMES[m.month - 1].slice(0, 3)}
+                    {monthWords(m.month).short}
                   </span>
                   <span aria-hidden className={styles.monthShort}>
-                    {MONTH_NAMES[m.month - 1].charAt(0)}
+                    {monthWords(m.month).initial}
                   </span>
                   {m.isGap ? (
                     <span aria-hidden className={styles.gapFlag}>
-                      gap
+                      {t('bloom.gap')}
                     </span>
                   ) : null}
                 </th>
@@ -56,12 +61,13 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
           <tbody>
             {species.map((s) => {
               const swatch = flowerSwatch(s.flowerColours[0]);
+              const colour = s.flowerColours[0] ? words.flowerColour[s.flowerColours[0]] : t('bloom.colourUnknown');
               const counted = isFloweringSpecies(s);
               return (
                 <tr key={s.slug}>
                   <th scope="row" className={styles.rowHead}>
                     {s.commonName}
-                    {counted ? null : <span className={styles.notCounted}>grass, sedge or fern: not counted</span>}
+                    {counted ? null : <span className={styles.notCounted}>{t('bloom.notCounted')}</span>}
                   </th>
                   {months.map((m) => {
                     const blooms = s.bloomMonths.includes(m.month);
@@ -73,11 +79,11 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
                         data-bloom={swatch.name}
                       >
                         <span aria-hidden>{swatch.label}</span>
-                        <span className={styles.visuallyHidden}>in flower, {swatch.name}</span>
+                        <span className={styles.visuallyHidden}>{t('bloom.inFlower', { colour })}</span>
                       </td>
                     ) : (
                       <td key={m.month} className={mergeClasses(styles.cell, m.isGap && styles.gap)}>
-                        <span className={styles.visuallyHidden}>not in flower</span>
+                        <span className={styles.visuallyHidden}>{t('bloom.notInFlower')}</span>
                       </td>
                     );
                   })}
@@ -88,7 +94,7 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
           <tfoot>
             <tr>
               <th scope="row" className={styles.countHead}>
-                Flowering species in bloom
+                {t('bloom.count')}
               </th>
               {months.map((m) => (
                 <td key={m.month} className={mergeClasses(styles.count, m.isGap && styles.countGap)}>

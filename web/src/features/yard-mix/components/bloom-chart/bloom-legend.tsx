@@ -1,5 +1,7 @@
 import { mergeClasses } from '@fluentui/react-components';
-import type { SpeciesSummary } from '@homeground/shared';
+import type { FlowerColour, SpeciesSummary } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
+import { useWords } from '../../../../lib/i18n/index.js';
 import { flowerSwatch, type FlowerSwatch } from '../../../../theme/flower-colours.js';
 import { MIN_IN_BLOOM } from '../../utils/bloom-gaps.js';
 import { useBloomChartStyles } from './bloom-chart.styles.js';
@@ -7,24 +9,26 @@ import { useBloomChartStyles } from './bloom-chart.styles.js';
 /** The colours that appear in this chart with their labels, and what the gap hatch means. */
 export function BloomLegend({ species }: { species: readonly SpeciesSummary[] }) {
   const styles = useBloomChartStyles();
-  const seen = new Map<string, FlowerSwatch>();
+  const { t } = useTranslation('mix');
+  const words = useWords();
+  const seen = new Map<string, { swatch: FlowerSwatch; colour: FlowerColour | undefined }>();
   for (const s of species) {
     const swatch = flowerSwatch(s.flowerColours[0]);
-    seen.set(swatch.name, swatch);
+    seen.set(swatch.name, { swatch, colour: s.flowerColours[0] });
   }
   return (
-    <ul className={styles.legend} aria-label="Bloom chart legend">
-      {[...seen.values()].map((sw) => (
+    <ul className={styles.legend} aria-label={t('bloom.legend')}>
+      {[...seen.values()].map(({ swatch: sw, colour }) => (
         <li key={sw.name} className={styles.legendItem}>
           <span aria-hidden className={styles.swatch} style={{ backgroundColor: sw.fill, color: sw.ink }}>
             {sw.label}
           </span>
-          {sw.label}: {sw.name}
+          {sw.label}: {colour ? words.flowerColour[colour] : t('bloom.colourUnknown')}
         </li>
       ))}
       <li className={styles.legendItem}>
         <span aria-hidden className={mergeClasses(styles.swatch, styles.gap)} />
-        Hatched, “gap”: fewer than {MIN_IN_BLOOM} flowering species in bloom (April to October)
+        {t('bloom.legendGap', { min: MIN_IN_BLOOM })}
       </li>
     </ul>
   );

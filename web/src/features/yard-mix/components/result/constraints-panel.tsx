@@ -1,6 +1,7 @@
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
 import { CheckmarkCircle20Filled, DismissCircle20Regular, Info20Regular } from '@fluentui/react-icons';
 import type { PaletteConstraint } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   list: { listStyle: 'none', margin: 0, padding: 0, display: 'grid', gap: tokens.spacingVerticalM },
@@ -20,26 +21,29 @@ const useStyles = makeStyles({
 });
 
 /** Where each rule comes from, for the source note only (program names never in the rule itself). */
-const SOURCE_WORDS: Record<string, string> = {
-  'nrcs-cp42-indiana-2012': 'USDA NRCS pollinator habitat practice (CP42)',
-  'nrcs-e327136z2': 'USDA NRCS monarch habitat enhancement (E327136Z2)',
-  'common-practice': 'common practice among native-plant gardeners',
-};
+const SOURCE_KEYS = {
+  'nrcs-cp42-indiana-2012': 'rules.sources.cp42',
+  'nrcs-e327136z2': 'rules.sources.monarch',
+  'common-practice': 'rules.sources.common',
+} as const;
+
+function isKnownSource(source: string): source is keyof typeof SOURCE_KEYS {
+  return Object.hasOwn(SOURCE_KEYS, source);
+}
 
 function statusOf(c: PaletteConstraint): 'met' | 'unmet' | 'na' {
   if (!c.applies) return 'na';
   return c.met ? 'met' : 'unmet';
 }
 
-const STATUS_WORDS = { met: 'Met', unmet: 'Not met', na: 'Does not apply' } as const;
-
 /** Each design rule checked on the mix, met or not, in words beside the icon. */
 export function ConstraintsPanel({ constraints }: { constraints: readonly PaletteConstraint[] }) {
   const styles = useStyles();
+  const { t } = useTranslation('mix');
   // Rules that apply first, so the ones to act on are not buried under "does not apply".
   const ordered = [...constraints].sort((a, b) => Number(b.applies) - Number(a.applies));
   return (
-    <ul className={styles.list} aria-label="How this mix is balanced">
+    <ul className={styles.list} aria-label={t('rules.label')}>
       {ordered.map((c) => {
         const status = statusOf(c);
         const Icon =
@@ -49,10 +53,12 @@ export function ConstraintsPanel({ constraints }: { constraints: readonly Palett
             <Icon aria-hidden className={styles[status]} />
             <div>
               <p className={styles.rule}>
-                <span className={mergeClasses(styles.status, styles[status])}>{STATUS_WORDS[status]}:</span> {c.rule}
+                <span className={mergeClasses(styles.status, styles[status])}>{t(`rules.${status}`)}:</span> {c.rule}
               </p>
               <p className={styles.detail}>{c.detail}</p>
-              <p className={styles.source}>Source: {SOURCE_WORDS[c.source] ?? c.source}</p>
+              <p className={styles.source}>
+                {t('rules.source', { source: isKnownSource(c.source) ? t(SOURCE_KEYS[c.source]) : c.source })}
+              </p>
             </div>
           </li>
         );

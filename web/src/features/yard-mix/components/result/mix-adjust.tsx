@@ -3,6 +3,7 @@ import { Add20Regular } from '@fluentui/react-icons';
 import { MAX_MIX_SIZE, type StateCode } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
+import { useTranslation } from 'react-i18next';
 import { speciesListQueryOptions } from '../../../../api/species/species.queries.js';
 
 const useStyles = makeStyles({
@@ -33,6 +34,7 @@ export interface MixAdjustProps {
  */
 export function MixAdjust({ size, state, inMix, onSize, onAdd, isBusy }: MixAdjustProps) {
   const styles = useStyles();
+  const { t } = useTranslation('mix');
   const [count, setCount] = useState(size);
   const [text, setText] = useState('');
   const search = useQuery({
@@ -42,7 +44,7 @@ export function MixAdjust({ size, state, inMix, onSize, onAdd, isBusy }: MixAdju
   const matches = (search.data?.items ?? []).filter((s) => !inMix.includes(s.slug));
   return (
     <div className={styles.root} data-print="hide">
-      <Field label="Number of species">
+      <Field label={t('adjust.count')}>
         <SpinButton
           value={count}
           min={1}
@@ -54,14 +56,14 @@ export function MixAdjust({ size, state, inMix, onSize, onAdd, isBusy }: MixAdju
         />
       </Field>
       <Button disabled={isBusy || count === size} onClick={() => onSize(count)}>
-        Use {count} species
+        {t('adjust.use', { count })}
       </Button>
       <div className={styles.search}>
-        <Field label="Add a species by name">
-          <Input value={text} placeholder="e.g. prairie smoke" onChange={(_, d) => setText(d.value)} />
+        <Field label={t('adjust.addByName')}>
+          <Input value={text} placeholder={t('adjust.placeholder')} onChange={(_, d) => setText(d.value)} />
         </Field>
         {matches.length > 0 ? (
-          <ul className={styles.matches} aria-label="Species to add">
+          <ul className={styles.matches} aria-label={t('adjust.toAdd')}>
             {matches.map((s) => (
               <li key={s.slug}>
                 <Button
@@ -73,7 +75,7 @@ export function MixAdjust({ size, state, inMix, onSize, onAdd, isBusy }: MixAdju
                     setText('');
                   }}
                 >
-                  Add {s.commonName}
+                  {t('adjust.add', { name: s.commonName })}
                 </Button>
               </li>
             ))}

@@ -1,9 +1,10 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { formatHeightRangeCm } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
 import { Heading } from '../../../../components/page/page-heading.js';
-import { bloomWords, whyItFits } from '../../utils/mix-rows.js';
+import { useFormatters, useWords } from '../../../../lib/i18n/index.js';
+import { whyItFits } from '../../utils/mix-rows.js';
 import type { MixViewProps } from './mix-table.js';
-import { plantsWords, seedsWords, spacingWords, weightWords } from '../../utils/quantity-words.js';
+import { quantityWords } from '../../utils/quantity-words.js';
 import { SpeciesActions } from './species-actions.js';
 import { SpeciesCautions } from './species-cautions.js';
 
@@ -67,10 +68,14 @@ const useStyles = makeStyles({
 /** The mix as cards, easier to read on a phone: one card per species. */
 export function MixCards({ rows, cautions, onToggleLock, onToggleExclude, onSwap, isBusy }: MixViewProps) {
   const styles = useStyles();
+  const { t } = useTranslation('mix');
+  const words = useWords();
+  const f = useFormatters();
   return (
-    <ul className={styles.grid} aria-label="Your yard mix, one card a species">
+    <ul className={styles.grid} aria-label={t('cardsLabel')}>
       {rows.map((r) => {
         const why = whyItFits(r.chosen.parts);
+        const q = quantityWords(r.quantity, t, f);
         return (
           <li key={r.slug} className={styles.card} data-slug={r.slug}>
             <Heading level="card" className={styles.title}>
@@ -78,11 +83,13 @@ export function MixCards({ rows, cautions, onToggleLock, onToggleExclude, onSwap
             </Heading>
             <p className={styles.sci}>{r.species.scientificName}</p>
             <p className={styles.meta}>
-              Flowers {bloomWords(r.species.bloomMonths)};{' '}
-              {formatHeightRangeCm(r.species.heightCm.min, r.species.heightCm.max)} tall
+              {t('row.meta', {
+                bloom: words.bloomWords(r.species.bloomMonths),
+                height: f.heightRange(r.species.heightCm.min, r.species.heightCm.max),
+              })}
             </p>
-            {r.isExcluded ? <p className={styles.pending}>Left out at the next rebalance</p> : null}
-            <ul className={styles.roles} aria-label="Role in the mix">
+            {r.isExcluded ? <p className={styles.pending}>{t('row.leftOut')}</p> : null}
+            <ul className={styles.roles} aria-label={t('table.role')}>
               {r.chosen.roles.map((role) => (
                 <li key={role} className={styles.role}>
                   {role}
@@ -90,23 +97,23 @@ export function MixCards({ rows, cautions, onToggleLock, onToggleExclude, onSwap
               ))}
             </ul>
             <dl className={styles.figures}>
-              <dt className={styles.term}>Plants</dt>
-              <dd className={styles.def}>{plantsWords(r.quantity)}</dd>
-              <dt className={styles.term}>Spacing</dt>
-              <dd className={styles.def}>{spacingWords(r.quantity)}</dd>
-              <dt className={styles.term}>Seeds to sow</dt>
-              <dd className={styles.def}>{seedsWords(r.quantity)}</dd>
-              <dt className={styles.term}>Seed weight</dt>
-              <dd className={styles.def}>{weightWords(r.quantity)}</dd>
+              <dt className={styles.term}>{t('table.plants')}</dt>
+              <dd className={styles.def}>{q.plants}</dd>
+              <dt className={styles.term}>{t('table.spacing')}</dt>
+              <dd className={styles.def}>{q.spacing}</dd>
+              <dt className={styles.term}>{t('table.seeds')}</dt>
+              <dd className={styles.def}>{q.seeds}</dd>
+              <dt className={styles.term}>{t('table.weight')}</dt>
+              <dd className={styles.def}>{q.weight}</dd>
             </dl>
             <SpeciesCautions name={r.species.commonName} cautions={cautions[r.slug]} />
-            <p className={styles.whyTitle}>Why it fits</p>
+            <p className={styles.whyTitle}>{t('row.whyItFits')}</p>
             <ul className={styles.why}>
-              {why.fits.map((t) => (
-                <li key={t}>{t}</li>
+              {why.fits.map((reason) => (
+                <li key={reason}>{reason}</li>
               ))}
-              {why.mindful.map((t) => (
-                <li key={t}>Worth knowing: {t}</li>
+              {why.mindful.map((reason) => (
+                <li key={reason}>{t('row.worthKnowing', { reason })}</li>
               ))}
             </ul>
             <div className={styles.actions}>

@@ -64,15 +64,16 @@ export function MixSpecies({
 }: MixSpeciesProps) {
   const styles = useStyles();
   const { t } = useTranslation('yard');
+  const { t: tm } = useTranslation('mix');
   const [view, setView] = useState<View>(initialView);
   const viewProps = { rows, cautions, isBusy, ...actions };
 
   const hint =
     pendingOut > 0
-      ? `${pendingOut === 1 ? '1 species is' : `${pendingOut} species are`} marked to leave out. Rebalance to fill ${pendingOut === 1 ? 'its place' : 'their places'}.`
+      ? tm('hint.leaveOut', { count: pendingOut })
       : lockedCount > 0
-        ? `${lockedCount === 1 ? '1 species is' : `${lockedCount} species are`} kept: they stay when you rebalance.`
-        : 'Keep the species you like and leave out the ones you do not, then rebalance.';
+        ? tm('hint.kept', { count: lockedCount })
+        : tm('hint.start');
 
   return (
     <ContentCard aria-labelledby="mix-species-heading">

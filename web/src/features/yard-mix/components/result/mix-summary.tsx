@@ -1,8 +1,9 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { formatArea, formatHeightCm, type Site, STATE_NAMES, type StateCode, SUN_WORDS } from '@homeground/shared';
+import { type Site, STATE_NAMES, type StateCode } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
+import { useTranslation } from 'react-i18next';
 import { ecoregionQueryOptions } from '../../../../api/ecoregions/ecoregions.queries.js';
-import { GOAL_CHOICES, MOISTURE_CHOICES } from '../../utils/yard-form-choices.js';
+import { useFormatters, useWords } from '../../../../lib/i18n/index.js';
 
 const useStyles = makeStyles({
   line: { margin: 0, fontSize: tokens.fontSizeBase400, lineHeight: tokens.lineHeightBase400, maxWidth: '70ch' },
@@ -12,11 +13,13 @@ const useStyles = makeStyles({
 /** The place's name in words: "the Driftless Area of Wisconsin", or just the state. */
 export function usePlaceWords(state: StateCode, ecoregionCode: string | undefined): string {
   const eco = useQuery({ ...ecoregionQueryOptions(ecoregionCode ?? ''), enabled: ecoregionCode !== undefined });
+  const { t } = useTranslation('mix');
   const stateName = STATE_NAMES[state] ?? state;
   if (!ecoregionCode) return stateName;
+  // Ecoregion names stay as the EPA publishes them, in English: we know of no published Spanish list.
   return eco.data
-    ? `the ${eco.data.name} (ecoregion ${ecoregionCode}) of ${stateName}`
-    : `ecoregion ${ecoregionCode} of ${stateName}`;
+    ? t('place.withName', { name: eco.data.name, code: ecoregionCode, state: stateName })
+    : t('place.codeOnly', { code: ecoregionCode, state: stateName });
 }
 
 /** One sentence naming the yard the mix is for, and why it has as many species as it has. */
@@ -35,15 +38,26 @@ export function MixSummary({
 }) {
   const styles = useStyles();
   const place = usePlaceWords(state, ecoregionCode);
-  const moisture = MOISTURE_CHOICES.find((m) => m.value === site.moisture)?.label.toLowerCase() ?? site.moisture;
-  const goals = site.goals.map((g) => GOAL_CHOICES.find((c) => c.value === g)?.label.toLowerCase() ?? g);
-  const sunLabel = SUN_WORDS[site.sun];
+  const { t } = useTranslation('mix');
+  const { t: ty } = useTranslation('yard');
+  const words = useWords();
+  const f = useFormatters();
+  const goals = site.goals.map((g) => ty(`choices.goal.${g}.label`).toLowerCase());
+  // Optional clauses of the one sentence, each a whole phrase in the catalogue.
+  const extra =
+    (site.maxHeightCm ? t('summary.maxHeight', { height: f.height(site.maxHeightCm) }) : '') +
+    (goals.length > 0 ? t('summary.goals', { goals: words.join(goals) }) : '');
   return (
     <div>
       <p className={styles.line}>
-        {count} native species for {formatArea(site.areaSqFt)} of {sunLabel} and {moisture} soil in {place}
-        {site.maxHeightCm ? `, none taller than ${formatHeightCm(site.maxHeightCm)}` : ''}
-        {goals.length > 0 ? `, chosen for ${goals.join(', ')}` : ''}.
+        {t('summary.line', {
+          count,
+          area: f.area(site.areaSqFt),
+          sun: words.sun[site.sun],
+          moisture: words.moisture[site.moisture],
+          place,
+          extra,
+        })}
       </p>
       <p className={styles.reason}>{sizeReason}</p>
     </div>

@@ -1,7 +1,8 @@
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
-import { formatHeightRangeCm } from '@homeground/shared';
-import { bloomWords, type MixRow, whyItFits } from '../../utils/mix-rows.js';
-import { plantsWords, seedsWords, spacingWords, weightWords } from '../../utils/quantity-words.js';
+import { useTranslation } from 'react-i18next';
+import { useFormatters, useWords } from '../../../../lib/i18n/index.js';
+import { type MixRow, whyItFits } from '../../utils/mix-rows.js';
+import { quantityWords } from '../../utils/quantity-words.js';
 import { SpeciesActions } from './species-actions.js';
 import { SpeciesCautions } from './species-cautions.js';
 import type { SpeciesCaution } from '../../hooks/use-mix-cautions.js';
@@ -54,57 +55,63 @@ export interface MixViewProps {
 /** The mix as a table: one row per species with its roles, quantities, why it fits and cautions. */
 export function MixTable({ rows, cautions, onToggleLock, onToggleExclude, onSwap, isBusy }: MixViewProps) {
   const styles = useStyles();
+  const { t } = useTranslation('mix');
+  const words = useWords();
+  const f = useFormatters();
   return (
     <div className={styles.scroller}>
       <table className={styles.table}>
-        <caption className={styles.caption}>Your yard mix, one species a row</caption>
+        <caption className={styles.caption}>{t('table.caption')}</caption>
         <thead>
           <tr>
             <th scope="col" className={styles.th}>
-              Species
+              {t('table.species')}
             </th>
             <th scope="col" className={styles.th}>
-              Role in the mix
+              {t('table.role')}
             </th>
             <th scope="col" className={mergeClasses(styles.th, styles.num)}>
-              Plants
+              {t('table.plants')}
             </th>
             <th scope="col" className={mergeClasses(styles.th, styles.num)}>
-              Spacing
+              {t('table.spacing')}
             </th>
             <th scope="col" className={mergeClasses(styles.th, styles.num)}>
-              Seeds to sow
+              {t('table.seeds')}
             </th>
             <th scope="col" className={mergeClasses(styles.th, styles.num)}>
-              Seed weight
+              {t('table.weight')}
             </th>
             <th scope="col" className={styles.th} data-print="hide">
-              Change
+              {t('table.change')}
             </th>
           </tr>
         </thead>
         <tbody>
           {rows.map((r) => {
             const why = whyItFits(r.chosen.parts);
+            const q = quantityWords(r.quantity, t, f);
             return (
               <tr key={r.slug} data-slug={r.slug}>
                 <th scope="row" className={mergeClasses(styles.td, styles.rowHead)}>
                   <span className={styles.name}>{r.species.commonName}</span>
                   <span className={styles.sci}>{r.species.scientificName}</span>
                   <span className={styles.meta}>
-                    Flowers {bloomWords(r.species.bloomMonths)};{' '}
-                    {formatHeightRangeCm(r.species.heightCm.min, r.species.heightCm.max)} tall
+                    {t('row.meta', {
+                      bloom: words.bloomWords(r.species.bloomMonths),
+                      height: f.heightRange(r.species.heightCm.min, r.species.heightCm.max),
+                    })}
                   </span>
-                  {r.isExcluded ? <span className={styles.pending}>Left out at the next rebalance</span> : null}
+                  {r.isExcluded ? <span className={styles.pending}>{t('row.leftOut')}</span> : null}
                   <SpeciesCautions name={r.species.commonName} cautions={cautions[r.slug]} />
                   <details className={styles.why}>
-                    <summary>Why it fits</summary>
+                    <summary>{t('row.whyItFits')}</summary>
                     <ul className={styles.whyList}>
-                      {why.fits.map((t) => (
-                        <li key={t}>{t}</li>
+                      {why.fits.map((reason) => (
+                        <li key={reason}>{reason}</li>
                       ))}
-                      {why.mindful.map((t) => (
-                        <li key={t}>Worth knowing: {t}</li>
+                      {why.mindful.map((reason) => (
+                        <li key={reason}>{t('row.worthKnowing', { reason })}</li>
                       ))}
                     </ul>
                   </details>
@@ -116,10 +123,10 @@ export function MixTable({ rows, cautions, onToggleLock, onToggleExclude, onSwap
                     ))}
                   </ul>
                 </td>
-                <td className={mergeClasses(styles.td, styles.num)}>{plantsWords(r.quantity)}</td>
-                <td className={mergeClasses(styles.td, styles.num)}>{spacingWords(r.quantity)}</td>
-                <td className={mergeClasses(styles.td, styles.num)}>{seedsWords(r.quantity)}</td>
-                <td className={mergeClasses(styles.td, styles.num)}>{weightWords(r.quantity)}</td>
+                <td className={mergeClasses(styles.td, styles.num)}>{q.plants}</td>
+                <td className={mergeClasses(styles.td, styles.num)}>{q.spacing}</td>
+                <td className={mergeClasses(styles.td, styles.num)}>{q.seeds}</td>
+                <td className={mergeClasses(styles.td, styles.num)}>{q.weight}</td>
                 <td className={styles.td} data-print="hide">
                   <SpeciesActions
                     name={r.species.commonName}

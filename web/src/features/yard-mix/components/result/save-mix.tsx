@@ -2,6 +2,7 @@ import { Button, Field, Input, makeStyles, MessageBar, MessageBarBody, tokens } 
 import { Save20Regular } from '@fluentui/react-icons';
 import { type SaveMixRequest, saveMixRequestSchema } from '@homeground/shared';
 import { useState, type FormEvent } from 'react';
+import { useTranslation } from 'react-i18next';
 import { usePublicOrigin } from '../../../../api/system/system.queries.js';
 import { useSaveMixMutation } from '../../../../api/mixes/mixes.mutations.js';
 import { RouterButton, RouterLink } from '../../../../components/links/router-link.js';
@@ -26,6 +27,7 @@ export interface SaveMixProps {
 /** The screen's primary action: save the mix (signed in) or sign in to save it. */
 export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: SaveMixProps) {
   const styles = useStyles();
+  const { t } = useTranslation('mix');
   const save = useSaveMixMutation();
   const origin = usePublicOrigin();
   const [isOpen, setIsOpen] = useState(false);
@@ -35,7 +37,7 @@ export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: S
   if (!isSignedIn) {
     return (
       <RouterButton to={signInHref} appearance="primary" icon={<Save20Regular />}>
-        Sign in to save
+        {t('save.signIn')}
       </RouterButton>
     );
   }
@@ -46,10 +48,10 @@ export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: S
       <div className={styles.saved}>
         <MessageBar intent="success" layout="multiline">
           <MessageBarBody>
-            Saved as “{save.data.name}”. Anyone with its link can open it: <RouterLink to={href}>{href}</RouterLink>
+            {t('save.saved', { name: save.data.name })} <RouterLink to={href}>{href}</RouterLink>
           </MessageBarBody>
         </MessageBar>
-        <CopyLinkButton url={`${origin}${href}`} label="Copy the saved mix's link" />
+        <CopyLinkButton url={`${origin}${href}`} label={t('save.copySaved')} />
       </div>
     );
   }
@@ -57,7 +59,7 @@ export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: S
   if (!isOpen) {
     return (
       <Button appearance="primary" icon={<Save20Regular />} onClick={() => setIsOpen(true)}>
-        Save this mix
+        {t('save.open')}
       </Button>
     );
   }
@@ -68,11 +70,7 @@ export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: S
     const parsed = saveMixRequestSchema.safeParse(request);
     if (!parsed.success) {
       const issue = parsed.error.issues.find((i) => i.path[0] === 'name') ?? parsed.error.issues[0];
-      setError(
-        issue?.path[0] === 'name'
-          ? `The name ${issue.message}.`
-          : 'This mix cannot be saved as it is; rebalance it and try again.',
-      );
+      setError(issue?.path[0] === 'name' ? t('save.nameError') : t('save.cannotSave'));
       return;
     }
     setError(undefined);
@@ -80,10 +78,10 @@ export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: S
   };
 
   return (
-    <form className={styles.form} onSubmit={submit} noValidate aria-label="Save this mix">
+    <form className={styles.form} onSubmit={submit} noValidate aria-label={t('save.open')}>
       <Field
         className={styles.name}
-        label="Name of the mix"
+        label={t('save.name')}
         required
         validationMessage={error}
         validationState={error ? 'error' : 'none'}
@@ -91,10 +89,10 @@ export function SaveMix({ isSignedIn, signInHref, defaultName, buildRequest }: S
         <Input value={name} maxLength={80} onChange={(_, d) => setName(d.value)} />
       </Field>
       <Button type="submit" appearance="primary" icon={<Save20Regular />} disabled={save.isPending}>
-        {save.isPending ? 'Saving…' : 'Save'}
+        {save.isPending ? t('save.saving') : t('save.save')}
       </Button>
       <Button type="button" appearance="subtle" onClick={() => setIsOpen(false)}>
-        Cancel
+        {t('save.cancel')}
       </Button>
     </form>
   );

@@ -1,6 +1,7 @@
 import { Button, Field, Input, makeStyles, tokens } from '@fluentui/react-components';
 import { Link20Regular } from '@fluentui/react-icons';
 import { useState } from 'react';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS, minWidth: 0 },
@@ -10,7 +11,7 @@ const useStyles = makeStyles({
 /** Copies a link to the clipboard; where the browser refuses, shows the link to copy by hand. */
 export function CopyLinkButton({
   url,
-  label = 'Copy link',
+  label,
   appearance = 'secondary',
 }: {
   url: string;
@@ -18,6 +19,7 @@ export function CopyLinkButton({
   appearance?: 'secondary' | 'primary' | 'subtle';
 }) {
   const styles = useStyles();
+  const { t } = useTranslation('mix');
   const [state, setState] = useState<'idle' | 'copied' | 'manual'>('idle');
 
   const copy = async () => {
@@ -33,15 +35,15 @@ export function CopyLinkButton({
     <div className={styles.root}>
       <div>
         <Button appearance={appearance} icon={<Link20Regular />} onClick={() => void copy()}>
-          {label}
+          {label ?? t('share.copy')}
         </Button>
       </div>
       <p role="status" className={styles.status}>
-        {state === 'copied' ? 'Link copied. Anyone who opens it sees this mix.' : ''}
-        {state === 'manual' ? 'Your browser did not allow copying; select the link below and copy it.' : ''}
+        {state === 'copied' ? t('share.copied') : ''}
+        {state === 'manual' ? t('share.manual') : ''}
       </p>
       {state === 'manual' ? (
-        <Field label="Link to this mix">
+        <Field label={t('share.link')}>
           <Input readOnly value={url} onFocus={(e) => e.currentTarget.select()} />
         </Field>
       ) : null}

@@ -5,6 +5,7 @@ import {
   LockOpen20Regular,
   SubtractCircle20Regular,
 } from '@fluentui/react-icons';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   row: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS },
@@ -31,17 +32,18 @@ export function SpeciesActions({
   disabled,
 }: SpeciesActionsProps) {
   const styles = useStyles();
+  const { t } = useTranslation('mix');
   return (
-    <div className={styles.row} role="group" aria-label={`Changes for ${name}`} data-print="hide">
+    <div className={styles.row} role="group" aria-label={t('actions.group', { name })} data-print="hide">
       <ToggleButton
         size="small"
         checked={isLocked}
         icon={isLocked ? <LockClosed20Regular /> : <LockOpen20Regular />}
         onClick={onToggleLock}
         disabled={disabled}
-        aria-label={`Keep ${name}`}
+        aria-label={t('actions.keepName', { name })}
       >
-        {isLocked ? 'Kept' : 'Keep'}
+        {isLocked ? t('actions.kept') : t('actions.keep')}
       </ToggleButton>
       <ToggleButton
         size="small"
@@ -49,18 +51,18 @@ export function SpeciesActions({
         icon={<SubtractCircle20Regular />}
         onClick={onToggleExclude}
         disabled={disabled}
-        aria-label={`Leave out ${name}`}
+        aria-label={t('actions.leaveOutName', { name })}
       >
-        {isExcluded ? 'Left out' : 'Leave out'}
+        {isExcluded ? t('actions.leftOut') : t('actions.leaveOut')}
       </ToggleButton>
       <Button
         size="small"
         icon={<ArrowSwap20Regular />}
         onClick={onSwap}
         disabled={disabled}
-        aria-label={`Swap ${name}`}
+        aria-label={t('actions.swapName', { name })}
       >
-        Swap
+        {t('actions.swap')}
       </Button>
     </div>
   );

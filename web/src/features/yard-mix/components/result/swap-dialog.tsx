@@ -11,6 +11,7 @@ import {
 } from '@fluentui/react-components';
 import type { AlternativesRequest, ScorePart, ScorePartName } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
+import { useTranslation } from 'react-i18next';
 import { alternativesQueryOptions } from '../../../../api/mixes/mixes.queries.js';
 import { EmptyState, ErrorState, LoadingState } from '../../../../components/states/index.js';
 import { whyItFits } from '../../utils/mix-rows.js';
@@ -45,12 +46,11 @@ const useStyles = makeStyles({
   },
 });
 
-/** What a swap does to the mix as a whole, in words with the number beside them. */
-export function changeWords(objectiveChange: number): string {
-  const n = objectiveChange.toFixed(2);
-  if (objectiveChange >= 0.01) return `Balances the mix better (+${n}).`;
-  if (objectiveChange > -0.01) return 'Keeps the mix about as balanced as now.';
-  return `Balances the mix a little less well (${n.replace('-', '−')}), but may suit you better.`;
+/** What a swap does to the mix as a whole, in words only (no raw scores on screen). */
+export function changeKey(objectiveChange: number): 'swap.better' | 'swap.same' | 'swap.worse' {
+  if (objectiveChange >= 0.01) return 'swap.better';
+  if (objectiveChange > -0.01) return 'swap.same';
+  return 'swap.worse';
 }
 
 export interface SwapDialogProps {
@@ -64,6 +64,8 @@ export interface SwapDialogProps {
 /** "Show me alternatives for this slot": the best few replacements with the change each makes and why it fits. */
 export function SwapDialog({ slot, request, onPick, onClose }: SwapDialogProps) {
   const styles = useStyles();
+  const { t } = useTranslation('mix');
+  const name = slot?.name ?? '';
   const query = useQuery({
     ...alternativesQueryOptions({ ...request, slot: slot?.slug ?? '' }),
     enabled: slot !== null,
@@ -74,36 +76,30 @@ export function SwapDialog({ slot, request, onPick, onClose }: SwapDialogProps) 
     <Dialog open={slot !== null} onOpenChange={(_, d) => (d.open ? undefined : onClose())}>
       <DialogSurface aria-describedby={undefined}>
         <DialogBody>
-          <DialogTitle>Instead of {slot?.name}</DialogTitle>
+          <DialogTitle>{t('swap.title', { name })}</DialogTitle>
           <DialogContent>
-            {query.isPending ? <LoadingState label="Finding species that could take its place" /> : null}
+            {query.isPending ? <LoadingState label={t('swap.loading')} /> : null}
             {query.isError ? (
-              <ErrorState
-                title="Homeground could not find alternatives"
-                message={query.error.message}
-                onRetry={() => void query.refetch()}
-              />
+              <ErrorState title={t('swap.error')} message={query.error.message} onRetry={() => void query.refetch()} />
             ) : null}
             {query.isSuccess && options.length === 0 ? (
-              <EmptyState title="No other species fit this place in the mix">
-                Every species that suits your ground is already in the mix or left out.
-              </EmptyState>
+              <EmptyState title={t('swap.noneTitle')}>{t('swap.noneText')}</EmptyState>
             ) : null}
             {options.length > 0 ? (
-              <ul className={styles.list} aria-label={`Alternatives for ${slot?.name}`}>
+              <ul className={styles.list} aria-label={t('swap.list', { name })}>
                 {options.map((a) => (
                   <li key={a.slug} className={styles.option}>
                     <p className={styles.name}>
                       {a.species.commonName} <span className={styles.sci}>{a.species.scientificName}</span>
                     </p>
-                    <p className={styles.change}>{changeWords(a.objectiveChange)}</p>
+                    <p className={styles.change}>{t(changeKey(a.objectiveChange))}</p>
                     <ul className={styles.reasons}>
                       {distinctReasons(a.parts).map((r) => (
                         <li key={r}>{r}</li>
                       ))}
                     </ul>
                     <div>
-                      <Button onClick={() => onPick(a.slug)}>Use {a.species.commonName}</Button>
+                      <Button onClick={() => onPick(a.slug)}>{t('swap.use', { name: a.species.commonName })}</Button>
                     </div>
                   </li>
                 ))}
@@ -111,7 +107,7 @@ export function SwapDialog({ slot, request, onPick, onClose }: SwapDialogProps) 
             ) : null}
           </DialogContent>
           <DialogActions>
-            <Button onClick={onClose}>Keep {slot?.name}</Button>
+            <Button onClick={onClose}>{t('swap.keep', { name })}</Button>
           </DialogActions>
         </DialogBody>
       </DialogSurface>

@@ -1,7 +1,7 @@
 import { useTranslation } from 'react-i18next';
 import { Button, makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import { Location20Regular } from '@fluentui/react-icons';
-import { STATE_NAMES, type StateCode, formatArea } from '@homeground/shared';
+import { STATE_NAMES, type StateCode } from '@homeground/shared';
 import { type ReactNode, useRef, useState } from 'react';
 import { usePublicOrigin } from '../../../../api/system/system.queries.js';
 import { RouterButton } from '../../../../components/links/router-link.js';
@@ -9,6 +9,7 @@ import { ContentCard } from '../../../../components/page/content-card.js';
 import { Heading } from '../../../../components/page/page-heading.js';
 import { EmptyState, ErrorState, LoadingState } from '../../../../components/states/index.js';
 import { paths } from '../../../../config/paths.js';
+import { useFormatters, useWords } from '../../../../lib/i18n/index.js';
 import { BloomChart } from '../bloom-chart/bloom-chart.js';
 import { type PlanChange, useMixPlan } from '../../hooks/use-mix-plan.js';
 import { type MixPlan, paletteRequestOf } from '../../utils/mix-plan.js';
@@ -37,7 +38,7 @@ export interface YardMixViewProps {
   onPlanChange: PlanChange;
   isSignedIn: boolean;
   signInHref: string;
-  /** Heading of the mix; "Your yard mix" unless a saved mix brings its own name. */
+  /** Heading of the mix; "Your yard mix" in the page's language unless a saved mix brings its own name. */
   title?: string;
   intro?: ReactNode;
   onChangeYard?: () => void;
@@ -50,7 +51,7 @@ export function YardMixView({
   onPlanChange,
   isSignedIn,
   signInHref,
-  title = 'Your yard mix',
+  title,
   intro,
   onChangeYard,
   onChangeGround,
@@ -62,6 +63,9 @@ export function YardMixView({
   );
   const origin = usePublicOrigin();
   const { t } = useTranslation('yard');
+  const { t: tm } = useTranslation('mix');
+  const f = useFormatters();
+  const words = useWords();
   const [swapSlot, setSwapSlot] = useState<string | null>(null);
   // The Swap button that opened the dialog gets focus back when it closes (WCAG 2.4.3 Focus Order).
   const swapOpener = useRef<HTMLElement | null>(null);
@@ -134,7 +138,7 @@ export function YardMixView({
     <div className={styles.root} data-print-root="yard-mix" aria-busy={isUpdating}>
       <ContentCard aria-labelledby="yard-mix-heading" className={styles.head}>
         <Heading level="section" id="yard-mix-heading">
-          {title}
+          {title ?? tm('title')}
         </Heading>
         {intro}
         <MixSummary
@@ -146,14 +150,13 @@ export function YardMixView({
         />
         {mix.palette.plantingMethod === 'seeding' ? (
           <p data-testid="seeding-plan">
-            A planting this size is sown as a meadow: about{' '}
-            {Math.round((mix.seeding ?? []).reduce((sum, l) => sum + l.seedsPerSqFt, 0))} seeds per ft² in all, shared
-            among the species below.
+            {tm('seeding', {
+              seeds: f.number(Math.round((mix.seeding ?? []).reduce((sum, l) => sum + l.seedsPerSqFt, 0))),
+            })}
           </p>
         ) : (
           <p data-testid="total-footprint">
-            The plants take {formatArea(mix.totalFootprintSqFt ?? 0)} of your {formatArea(mix.site.areaSqFt)} when grown
-            (plants × spacing²).
+            {tm('footprint', { used: f.area(mix.totalFootprintSqFt ?? 0), area: f.area(mix.site.areaSqFt) })}
           </p>
         )}
         <MixAdjust
@@ -169,13 +172,15 @@ export function YardMixView({
             <SaveMix
               isSignedIn={isSignedIn}
               signInHref={signInHref}
-              defaultName={`${title === 'Your yard mix' ? 'Yard mix' : title}, ${stateName}`}
+              defaultName={
+                title ? tm('savedName', { title, state: stateName }) : tm('defaultName', { state: stateName })
+              }
               buildRequest={(name) => ({ name, request: paletteRequestOf(plan), chosen: slugs })}
             />
           }
           shareUrl={shareUrl}
           cardsHref={cardsHref}
-          onExportCsv={() => downloadText(mixCsv(rows), 'homeground-yard-mix.csv')}
+          onExportCsv={() => downloadText(mixCsv(rows, tm, words), tm('csv.fileName'))}
           onPrint={print}
           onChangeYard={onChangeYard}
           onChangeGround={onChangeGround}

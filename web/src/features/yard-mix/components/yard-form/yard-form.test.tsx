@@ -5,6 +5,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { homegroundTheme } from '../../../../theme/index.js';
 import { YardForm } from './yard-form.js';
 import { checkYard, EMPTY_YARD } from '../../utils/yard-form-values.js';
+import { createI18n, formattersFor } from '../../../../lib/i18n/index.js';
 
 function renderForm() {
   const onSubmit = vi.fn();
@@ -62,11 +63,12 @@ describe('YardForm', { timeout: 20_000 }, () => {
 });
 
 describe('checkYard', () => {
+  const say = { t: createI18n('en').getFixedT('en', 'yard'), f: formattersFor('en') };
   it('turns a height in feet into centimetres and rejects one under 4 in', () => {
     const base = { ...EMPTY_YARD, sun: 'full', moisture: 'dry', deerPressure: 'low', area: '200' } as const;
     // 3 ft = 36 in × 2.54 cm/in (exact) = 91.44 cm, rounded to 91.
-    expect(checkYard({ ...base, maxHeight: '3' })).toMatchObject({ ok: true, site: { maxHeightCm: 91 } });
-    expect(checkYard({ ...base, maxHeight: '2', heightUnit: 'cm' })).toMatchObject({
+    expect(checkYard({ ...base, maxHeight: '3' }, say)).toMatchObject({ ok: true, site: { maxHeightCm: 91 } });
+    expect(checkYard({ ...base, maxHeight: '2', heightUnit: 'cm' }, say)).toMatchObject({
       ok: false,
       errors: { maxHeight: 'The tallest plant must be at least 4 in (10 cm).' },
     });

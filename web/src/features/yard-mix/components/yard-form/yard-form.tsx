@@ -3,6 +3,7 @@ import { Button, Checkbox } from '@fluentui/react-components';
 import { ArrowLeft20Regular, ArrowRight20Regular } from '@fluentui/react-icons';
 import type { Goal, SiteRequest } from '@homeground/shared';
 import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
+import { useFormatters } from '../../../../lib/i18n/index.js';
 import type { AreaUnit } from '../../utils/mix-plan.js';
 import { ChoiceField } from './choice-field.js';
 import { MeasureField } from './measure-field.js';
@@ -44,6 +45,7 @@ export interface YardFormProps {
 export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
   const styles = useYardFormStyles();
   const { t } = useTranslation('yard');
+  const f = useFormatters();
   /** A choice list with its words in the page's language (the English in yard-form-choices.ts is the default). */
   const say = <V extends string>(group: 'sun' | 'moisture' | 'soil' | 'deer' | 'goal', list: readonly Choice<V>[]) =>
     list.map((c) => {
@@ -79,7 +81,7 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const check = checkYard(values);
+    const check = checkYard(values, { t, f });
     if (!check.ok) {
       setErrors(check.errors);
       setAttempt((n) => n + 1);
@@ -133,7 +135,7 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
           unit={values.areaUnit}
           units={AREA_UNITS}
           onUnitChange={(u) => set('areaUnit', u, 'area')}
-          other={otherAreaUnit(values)}
+          other={otherAreaUnit(values, { t, f })}
           error={errors.area}
         />
         <MeasureField<HeightUnit>
@@ -145,7 +147,7 @@ export function YardForm({ initial, onSubmit, onBack }: YardFormProps) {
           unit={values.heightUnit}
           units={HEIGHT_UNITS}
           onUnitChange={(u) => set('heightUnit', u, 'maxHeight')}
-          other={otherHeightUnit(values)}
+          other={otherHeightUnit(values, { t, f })}
           error={errors.maxHeight}
         />
       </fieldset>

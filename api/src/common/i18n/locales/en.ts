@@ -1,0 +1,73 @@
+/** The API's own sentences in English (the shared engine's reasons have their own twins in shared). */
+export const en = {
+  places: {
+    unknownZipField: '{{zip}} is not a US ZIP code we know',
+    unknownZip: '{{zip}} is not a US ZIP code we know. Check the five digits, or click the map where your ground is.',
+    outsideField: 'is outside the 48 conterminous states and DC',
+    outsideNamed:
+      '{{place}} is outside the area Homeground covers. Homeground covers the 48 conterminous states and the District of Columbia, where the EPA maps its Level III ecoregions.',
+    outsideUnnamed:
+      'That place is outside the area Homeground covers. Homeground covers the 48 conterminous states and the District of Columbia, where the EPA maps its Level III ecoregions.',
+    notOnLandField: 'is not on land in a US county: at sea, on a large lake or outside the United States',
+    notOnLandZip:
+      "That ZIP code's centre ({{lat}}, {{lon}}) is not on land in any US county: it is at sea, on one of the Great Lakes or outside the United States. Homeground covers the 48 conterminous states and the District of Columbia, where the EPA maps its Level III ecoregions.",
+    notOnLandPoint:
+      'That point ({{lat}}, {{lon}}) is not on land in any US county: it is at sea, on one of the Great Lakes or outside the United States. Homeground covers the 48 conterminous states and the District of Columbia, where the EPA maps its Level III ecoregions.',
+    outside: {
+      AK: 'Alaska',
+      HI: 'Hawaii',
+      PR: 'Puerto Rico',
+      VI: 'The US Virgin Islands',
+      GU: 'Guam',
+      AS: 'American Samoa',
+      MP: 'The Northern Mariana Islands',
+    },
+  },
+  mail: {
+    openAddress: 'Or open this address: {{url}}',
+    greeting: 'Hello {{name}},',
+    greetingNoName: 'Hello,',
+    reservation: {
+      reserved: 'Your plants from the {{group}} plant share are reserved.',
+      changed: 'Your reservation at the {{group}} plant share has been changed.',
+      slot: 'Pickup slot: {{when}}.',
+      place: 'Place: {{place}}.',
+      plants: 'Your plants: {{plants}}.',
+      care: 'Care sheet:',
+      dig: 'Before you dig, call 811 so buried lines are marked, and follow your town’s rules for planting by streets and sidewalks.',
+      link: 'To change your slot or plants, or to cancel so someone on the waitlist gets them, use your private link below. Keep it to yourself: anyone with it can change your reservation.',
+      action: 'Change or cancel your reservation',
+      footer:
+        "You got this e-mail because you reserved plants from {{group}} on Homeground. Your name and e-mail are seen only by the group's organisers and are deleted after the share.",
+      subjectChanged: 'Your reservation at the {{group}} plant share has changed',
+      subjectReserved: 'Your plants are reserved: {{group}} plant share, {{when}}',
+    },
+    offer: {
+      free_one:
+        'Good news: {{count}} × {{plant}} came free at the {{group}} plant share, and we are holding it for you because you were next on the waitlist.',
+      free_other:
+        'Good news: {{count}} × {{plant}} came free at the {{group}} plant share, and we are holding them for you because you were next on the waitlist.',
+      choose:
+        'Open your private link to choose a pickup slot at {{place}}. We hold them for you until {{until}}; after that they go to the next household on the list. If you no longer want them, simply ignore this e-mail.',
+      action: 'Choose your pickup slot',
+      footer:
+        "You got this e-mail because you joined the waitlist of {{group}}'s plant share. Your name and e-mail are deleted after the share.",
+      subject: '{{plant}} is free for you: {{group}} plant share',
+    },
+    invitation: {
+      invited: '{{inviter}} has invited you to join {{group}} in {{town}}, {{state}} on Homeground, as {{role}}.',
+      role: { member: 'a member', grower: 'a grower', organiser: 'an organiser' },
+      what: {
+        member: 'Members hear when the plant share opens and can reserve plants for their yard.',
+        grower:
+          'Growers raise a batch of native plants over the winter for the plant share. Homeground gives you the dates for each step and a place to log what comes up; no experience needed.',
+        organiser: 'Organisers choose the species for the season, hand out batches to growers and run the plant share.',
+      },
+      days: 'The link below works for {{days}} days. If you did not expect this message, you can simply ignore it.',
+      action: 'Join {{group}}',
+      footer:
+        'You got this e-mail because an organiser of {{group}} entered your address. Homeground sends you nothing more unless you join.',
+      subject: '{{inviter}} invites you to {{group}}',
+    },
+  },
+} as const;

@@ -1,0 +1,78 @@
+import type { ApiCatalogue } from './catalogue.js';
+import type { en } from './en.js';
+
+/** Las frases propias de la API en español, con el mismo tono sencillo y cálido (tú). */
+export const es = {
+  places: {
+    unknownZipField: '{{zip}} no es un código postal de EE. UU. que conozcamos',
+    unknownZip:
+      '{{zip}} no es un código postal de EE. UU. que conozcamos. Revisa los cinco dígitos o haz clic en el mapa donde está tu terreno.',
+    outsideField: 'queda fuera de los 48 estados contiguos y DC',
+    outsideNamed:
+      '{{place}} queda fuera del área que cubre Homeground. Homeground cubre los 48 estados contiguos y el Distrito de Columbia, donde la EPA traza sus ecorregiones de nivel III.',
+    outsideUnnamed:
+      'Ese lugar queda fuera del área que cubre Homeground. Homeground cubre los 48 estados contiguos y el Distrito de Columbia, donde la EPA traza sus ecorregiones de nivel III.',
+    notOnLandField: 'no está en tierra dentro de un condado de EE. UU.: en el mar, en un lago grande o fuera del país',
+    notOnLandZip:
+      'El centro de ese código postal ({{lat}}, {{lon}}) no está en tierra dentro de ningún condado de EE. UU.: está en el mar, en uno de los Grandes Lagos o fuera del país. Homeground cubre los 48 estados contiguos y el Distrito de Columbia, donde la EPA traza sus ecorregiones de nivel III.',
+    notOnLandPoint:
+      'Ese punto ({{lat}}, {{lon}}) no está en tierra dentro de ningún condado de EE. UU.: está en el mar, en uno de los Grandes Lagos o fuera del país. Homeground cubre los 48 estados contiguos y el Distrito de Columbia, donde la EPA traza sus ecorregiones de nivel III.',
+    outside: {
+      AK: 'Alaska',
+      HI: 'Hawái',
+      PR: 'Puerto Rico',
+      VI: 'Las Islas Vírgenes de EE. UU.',
+      GU: 'Guam',
+      AS: 'Samoa Americana',
+      MP: 'Las Islas Marianas del Norte',
+    },
+  },
+  mail: {
+    openAddress: 'O abre esta dirección: {{url}}',
+    greeting: 'Hola, {{name}}:',
+    greetingNoName: 'Hola:',
+    reservation: {
+      reserved: 'Tus plantas del reparto de plantas de {{group}} están reservadas.',
+      changed: 'Tu reserva en el reparto de plantas de {{group}} ha cambiado.',
+      slot: 'Horario de recogida: {{when}}.',
+      place: 'Lugar: {{place}}.',
+      plants: 'Tus plantas: {{plants}}.',
+      care: 'Hoja de cuidados:',
+      dig: 'Antes de cavar, llama al 811 para que marquen las líneas enterradas, y sigue las reglas de tu pueblo para plantar junto a calles y banquetas.',
+      link: 'Para cambiar tu horario o tus plantas, o para cancelar y que se las lleve alguien de la lista de espera, usa tu enlace privado de abajo. No lo compartas: cualquiera que lo tenga puede cambiar tu reserva.',
+      action: 'Cambiar o cancelar tu reserva',
+      footer:
+        'Recibes este correo porque reservaste plantas de {{group}} en Homeground. Tu nombre y tu correo solo los ven quienes organizan el grupo y se borran después del reparto.',
+      subjectChanged: 'Tu reserva en el reparto de plantas de {{group}} ha cambiado',
+      subjectReserved: 'Tus plantas están reservadas: reparto de plantas de {{group}}, {{when}}',
+    },
+    offer: {
+      free_one:
+        'Buenas noticias: se liberó {{count}} × {{plant}} en el reparto de plantas de {{group}} y te la guardamos porque te tocaba en la lista de espera.',
+      free_other:
+        'Buenas noticias: se liberaron {{count}} × {{plant}} en el reparto de plantas de {{group}} y te las guardamos porque te tocaba en la lista de espera.',
+      choose:
+        'Abre tu enlace privado para elegir un horario de recogida en {{place}}. Te las guardamos hasta el {{until}}; después pasan a la siguiente familia de la lista. Si ya no las quieres, simplemente ignora este correo.',
+      action: 'Elegir tu horario de recogida',
+      footer:
+        'Recibes este correo porque te anotaste en la lista de espera del reparto de plantas de {{group}}. Tu nombre y tu correo se borran después del reparto.',
+      subject: '{{plant}} está libre para ti: reparto de plantas de {{group}}',
+    },
+    invitation: {
+      invited: '{{inviter}} te invitó a unirte a {{group}} en {{town}}, {{state}} en Homeground, como {{role}}.',
+      role: { member: 'miembro', grower: 'cultivador/a', organiser: 'organizador/a' },
+      what: {
+        member: 'Los miembros se enteran cuando abre el reparto de plantas y pueden reservar plantas para su jardín.',
+        grower:
+          'Quienes cultivan crían una tanda de plantas nativas durante el invierno para el reparto. Homeground te da las fechas de cada paso y un lugar para anotar lo que brota; no hace falta experiencia.',
+        organiser:
+          'Quienes organizan eligen las especies de la temporada, reparten las tandas y organizan el reparto de plantas.',
+      },
+      days: 'El enlace de abajo sirve durante {{days}} días. Si no esperabas este mensaje, simplemente ignóralo.',
+      action: 'Unirme a {{group}}',
+      footer:
+        'Recibes este correo porque alguien que organiza {{group}} escribió tu dirección. Homeground no te enviará nada más a menos que te unas.',
+      subject: '{{inviter}} te invita a {{group}}',
+    },
+  },
+} as const satisfies ApiCatalogue<typeof en>;
