@@ -7,10 +7,22 @@ import { BatchHowTo } from './batch-how-to.js';
 import { BatchSteps } from './batch-steps.js';
 import { LogForm } from './log-form.js';
 import { LogList } from './log-list.js';
+import type { LogOutboxState } from '../offline/use-log-outbox.js';
+import { PendingEntries } from './pending-entries.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
 /** One batch: what and how many, whether it is behind, its dates, treatment, how-to, cautions and log. */
-export function BatchCard({ slug, batch, today }: { slug: string; batch: Batch; today: string }) {
+export function BatchCard({
+  slug,
+  batch,
+  today,
+  outbox,
+}: {
+  slug: string;
+  batch: Batch;
+  today: string;
+  outbox: LogOutboxState;
+}) {
   const styles = useMyBatchesStyles();
   const id = `batch-${batch.id}`;
   return (
@@ -89,7 +101,12 @@ export function BatchCard({ slug, batch, today }: { slug: string; batch: Batch; 
       <section className={styles.section}>
         <Heading level="card">{MY_BATCHES_WORDS.log}</Heading>
         <LogList batch={batch} />
-        <LogForm slug={slug} batch={batch} today={today} />
+        <PendingEntries
+          entries={outbox.entries.filter((e) => e.batchId === batch.id)}
+          label={`${MY_BATCHES_WORDS.waiting}: ${batch.commonName}`}
+          onRemove={(id) => void outbox.remove(id)}
+        />
+        <LogForm slug={slug} batch={batch} today={today} outbox={outbox} />
       </section>
     </ContentCard>
   );

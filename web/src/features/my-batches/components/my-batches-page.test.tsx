@@ -1,5 +1,6 @@
-import { screen, within } from '@testing-library/react';
-import { describe, expect, it, vi } from 'vitest';
+import { act, screen, within } from '@testing-library/react';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { deviceOutbox } from '../offline/use-log-outbox.js';
 import { apiError, type FakeRoutes } from '../../../testing/fake-api.js';
 import { juniperGrower, priyaMember } from '../../../testing/fixtures.js';
 import { renderApp } from '../../../testing/render-app.js';
@@ -33,6 +34,41 @@ const card = async (name: string) =>
   within((await screen.findByRole('heading', { level: 2, name })).closest('section') as HTMLElement);
 
 describe('My batches', () => {
+  beforeEach(async () => {
+    await deviceOutbox().db.entries.clear();
+  });
+
+  it('keeps an entry made with no connection, marked not yet sent, and sends it when the connection returns', async () => {
+    let online = false;
+    const held = new Set<string>();
+    const { user, api } = openMyBatches(amara, {
+      [`POST ${BATCHES_PATH}/${milkweed.id}/log`]: (request) => {
+        // No connection: fetch itself fails, as in a browser with no signal.
+        if (!online) throw new TypeError('Failed to fetch');
+        held.add(String((request.body as { clientId: string }).clientId));
+        return { status: 201, body: milkweed };
+      },
+    });
+    const form = within(await screen.findByRole('form', { name: 'Add to the log: Butterfly milkweed' }));
+    await user.click(form.getByRole('button', { name: 'Came up' }));
+    await user.type(form.getByRole('textbox', { name: /How many/ }), '12');
+    await user.click(form.getByRole('button', { name: 'Add to the log' }));
+    expect(await form.findByText(/Kept on this device, not yet sent/)).toBeInTheDocument();
+    const waiting = within(await screen.findByRole('list', { name: 'Waiting on this device: Butterfly milkweed' }));
+    expect(waiting.getByText('Not yet sent')).toBeInTheDocument();
+    expect(screen.getByText(/1 log entry is kept on this device/)).toBeInTheDocument();
+
+    online = true;
+    await act(async () => {
+      window.dispatchEvent(new Event('online'));
+    });
+    await vi.waitFor(() => expect(screen.queryByText('Not yet sent')).not.toBeInTheDocument());
+    // Sent twice in all (once failed, once stored), always with the same clientId: the API holds one entry.
+    const calls = api.callsTo('POST', `${BATCHES_PATH}/${milkweed.id}/log`);
+    expect(new Set(calls.map((c) => (c.body as { clientId: string }).clientId)).size).toBe(1);
+    expect(held.size).toBe(1);
+  });
+
   it("shows each batch with its dates, treatment, how-to, cautions and log, and the grower's supplies", async () => {
     openMyBatches();
     expect(await screen.findByRole('heading', { level: 1, name: 'My batches' })).toBeInTheDocument();

@@ -11,14 +11,18 @@ import { BatchCard } from './batch-card.js';
 import { CalendarDownload } from './calendar-download.js';
 import { GrowerSetupCard } from './grower-setup-card.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
+import { useLogOutbox, type LogOutboxState } from '../offline/use-log-outbox.js';
+import { OutboxBar } from './outbox-bar.js';
 
 /** A grower's batches in one group's season, with their own supply list. */
 export function MyBatchesPage({ slug, userId }: { slug: string; userId: string }) {
   const styles = useMyBatchesStyles();
   const batches = useQuery(batchesQueryOptions(slug));
+  const outbox = useLogOutbox(slug, userId);
   return (
     <>
       <PageIntro title={MY_BATCHES_WORDS.title}>{MY_BATCHES_WORDS.lead}</PageIntro>
+      <OutboxBar outbox={outbox} />
       <QueryState
         query={batches}
         loading={MY_BATCHES_WORDS.loading}
@@ -26,7 +30,7 @@ export function MyBatchesPage({ slug, userId }: { slug: string; userId: string }
         isEmpty={(d) => d.batches.length === 0}
         empty={MY_BATCHES_WORDS.none}
       >
-        {(d) => <BatchList slug={slug} answer={d} />}
+        {(d) => <BatchList slug={slug} answer={d} outbox={outbox} />}
       </QueryState>
       <div className={styles.after}>
         <GrowerSetupCard slug={slug} userId={userId} />
@@ -35,7 +39,7 @@ export function MyBatchesPage({ slug, userId }: { slug: string; userId: string }
   );
 }
 
-function BatchList({ slug, answer }: { slug: string; answer: SeasonBatches }) {
+function BatchList({ slug, answer, outbox }: { slug: string; answer: SeasonBatches; outbox: LogOutboxState }) {
   const styles = useMyBatchesStyles();
   const today = localToday();
   const mine = answer.supplies.byGrower[0];
@@ -43,7 +47,7 @@ function BatchList({ slug, answer }: { slug: string; answer: SeasonBatches }) {
     <div className={styles.stack}>
       <CalendarDownload slug={slug} year={answer.year} />
       {answer.batches.map((b) => (
-        <BatchCard key={b.id} slug={slug} batch={b} today={today} />
+        <BatchCard key={b.id} slug={slug} batch={b} today={today} outbox={outbox} />
       ))}
       {mine ? (
         <ContentCard aria-labelledby="my-supplies">

@@ -19,6 +19,13 @@ export const MY_BATCHES_WORDS = {
   record: 'Add to the log',
   saving: 'Saving…',
   saved: 'Saved to the log.',
+  keptOnDevice: 'Kept on this device, not yet sent. It goes by itself when you have a connection again.',
+  notYetSent: 'Not yet sent',
+  refused: 'Not accepted',
+  removeEntry: 'Remove',
+  waiting: 'Waiting on this device',
+  sendNow: 'Send now',
+  sendingNow: 'Sending…',
   supplies: 'What you need',
   cautions: 'Take care',
   readyAfterShare: 'This species will be ready only after the plant share.',
@@ -30,6 +37,13 @@ export const MY_BATCHES_WORDS = {
   saveHowIGrow: 'Save how I grow',
   savedHowIGrow: 'Saved. The organiser sees it when splitting the batches.',
 } as const;
+
+/** "2 log entries are kept on this device and not yet sent." */
+export function waitingText(count: number): string {
+  return count === 1
+    ? '1 log entry is kept on this device and not yet sent. It goes by itself when you are back online.'
+    : `${count} log entries are kept on this device and not yet sent. They go by themselves when you are back online.`;
+}
 
 /** "50 plants in 5 covered containers" */
 export function plantsInUnits(batch: Pick<Batch, 'plants' | 'units' | 'unit'>): string {
