@@ -31,6 +31,8 @@ import { SeasonTargetRow } from '../seasons/season-target.entity.js';
 import { SeasonRow } from '../seasons/season.entity.js';
 import { SpeciesPhoto } from '../species/species-photo.entity.js';
 import { SpeciesRow } from '../species/species.entity.js';
+import { CreateWeeklySummariesSent1765900000000 } from './migrations/1765900000000-create-weekly-summaries-sent.js';
+import { WeeklySummarySentRow } from '../season-mail/weekly-summary-sent.entity.js';
 
 export const ENTITIES = [
   User,
@@ -48,6 +50,7 @@ export const ENTITIES = [
   SeasonGrowerRow,
   BatchRow,
   BatchLogEntryRow,
+  WeeklySummarySentRow,
 ];
 export const MIGRATIONS = [
   CreateUsersAndGroups1764633600000,
@@ -64,6 +67,7 @@ export const MIGRATIONS = [
   CreateSpeciesChanges1765584000000,
   AddPhotoCredits1765670400000,
   CreateBatches1765324800000,
+  CreateWeeklySummariesSent1765900000000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */
