@@ -6,6 +6,7 @@ import { Heading } from '../../../components/page/page-heading.js';
 import { QueryState } from '../../../components/states/index.js';
 import { SupplyTable } from '../../../components/supplies/supply-table.js';
 import { roomWords, SEASON_BATCHES_WORDS as W } from '../utils/season-batches-words.js';
+import { GrowerMailCard } from './grower-mail-card.js';
 import { ProgressCard } from './progress-card.js';
 import { useSeasonBatchesStyles } from './season-batches.styles.js';
 import { SplitEditor } from './split-card.js';
@@ -42,6 +43,7 @@ export function SeasonBatchesPanel({ slug }: { slug: string }) {
         </QueryState>
       </ContentCard>
       <ProgressCard slug={slug} />
+      <GrowerMailCard slug={slug} />
     </div>
   );
 }

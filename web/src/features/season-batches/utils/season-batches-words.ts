@@ -27,7 +27,34 @@ export const SEASON_BATCHES_WORDS = {
   loading: 'Loading the batches',
   failed: 'The batches did not load.',
   progressFailed: 'The progress did not load.',
+  mail: 'E-mail to growers',
+  frostLead:
+    'When frost is forecast, warn the growers who have plants outdoors. Each gets an e-mail saying what to close, cover or bring in for their own batches, and their batch page says it too.',
+  frostForm: 'Send a frost warning',
+  frostNight: 'Night of the frost',
+  frostNote: 'A line from you (optional)',
+  frostNoteHint: 'For example the forecast low.',
+  sendFrost: 'Send the frost warning',
+  sending: 'Sending…',
+  weekly: 'Weekly summary',
+  weeklyLead:
+    'Each grower gets an e-mail once a week with the next step of each batch. Send this week’s now if it has not gone yet; nobody gets it twice in one week.',
+  sendWeekly: 'Send this week’s summary now',
+  weeklyFailed: 'The summary was not sent. Try again.',
 } as const;
+
+/** "Sent to Amara Reyes (2 batches)." or why nobody got it. */
+export function frostSentWords(answer: { growers: { displayName: string; batches: number }[] }): string {
+  if (answer.growers.length === 0) return 'No grower has plants outdoors yet, so no warning went out.';
+  const names = answer.growers.map((g) => `${g.displayName} (${g.batches} ${g.batches === 1 ? 'batch' : 'batches'})`);
+  return `Sent to ${names.join(', ')}.`;
+}
+
+/** "Sent to 3 growers; 0 had this week's already." */
+export function weeklySentWords(answer: { sent: number; alreadySent: number }): string {
+  const sent = answer.sent === 1 ? 'Sent to 1 grower' : `Sent to ${answer.sent} growers`;
+  return answer.alreadySent === 0 ? `${sent}.` : `${sent}; ${answer.alreadySent} had this week’s already.`;
+}
 
 /** "12 of 24 covered containers" */
 export function roomWords(method: GrowerMethod, used: number, capacity: number): string {
