@@ -671,7 +671,7 @@ const cases: Case[] = [
     field: 'note',
   },
   {
-    what: 'a body on the weekly summary, which reads none',
+    what: 'an unknown key on the weekly summary, which takes an empty object',
     method: 'post',
     url: '/api/groups/larkfield-commons-growers/season/weekly-summary',
     body: { week: '2027-W01' },

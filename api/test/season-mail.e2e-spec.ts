@@ -74,11 +74,11 @@ describe('frost warnings and weekly summaries by e-mail (e2e, demo data)', () =>
       ['a curator outside the group', 'curator', 403],
     ])('%s cannot send a frost warning or the weekly summary', async (_what, as, status) => {
       await http.post(`${SEASON}/frost-warning`).set(bearer(who[as])).send({ night: night() }).expect(status);
-      await http.post(`${SEASON}/weekly-summary`).set(bearer(who[as])).expect(status);
+      await http.post(`${SEASON}/weekly-summary`).set(bearer(who[as])).send({}).expect(status);
     });
     it('nobody signed in gets 401', async () => {
       await http.post(`${SEASON}/frost-warning`).send({ night: night() }).expect(401);
-      await http.post(`${SEASON}/weekly-summary`).expect(401);
+      await http.post(`${SEASON}/weekly-summary`).send({}).expect(401);
     });
     it('an unknown group is 404', async () => {
       await http
@@ -130,7 +130,7 @@ describe('frost warnings and weekly summaries by e-mail (e2e, demo data)', () =>
 
   it('the weekly summary goes once a week to each grower, even after a restart', async () => {
     const week = isoWeek(today());
-    const first = await http.post(`${SEASON}/weekly-summary`).set(bearer(who.organiser)).expect(200);
+    const first = await http.post(`${SEASON}/weekly-summary`).set(bearer(who.organiser)).send({}).expect(200);
     expect(first.body).toEqual({ week, sent: 3, alreadySent: 0 });
 
     const mails = await outbox('weekly-summary');
@@ -147,7 +147,7 @@ describe('frost warnings and weekly summaries by e-mail (e2e, demo data)', () =>
     const theo = mails.find((m) => m.to[0] === 'theo.lindqvist@example.org')!;
     expect(theo.text).not.toContain('Butterfly milkweed');
 
-    const again = await http.post(`${SEASON}/weekly-summary`).set(bearer(who.organiser)).expect(200);
+    const again = await http.post(`${SEASON}/weekly-summary`).set(bearer(who.organiser)).send({}).expect(200);
     expect(again.body).toEqual({ week, sent: 0, alreadySent: 3 });
 
     // Restart the API on the same database: the scheduled run finds the week already sent.

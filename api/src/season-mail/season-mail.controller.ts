@@ -5,9 +5,11 @@ import {
   frostWarningRequestSchema,
   slugParamSchema,
   weeklySummaryAnswerSchema,
+  weeklySummaryRequestSchema,
   type FrostWarningAnswer,
   type FrostWarningRequest,
   type WeeklySummaryAnswer,
+  type WeeklySummaryRequest,
 } from '@homeground/shared';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
@@ -43,6 +45,7 @@ export class SeasonMailController {
   @ZodResponse(weeklySummaryAnswerSchema)
   weeklySummary(
     @ZodParam('slug', slugParamSchema) slug: string,
+    @ZodBody(weeklySummaryRequestSchema) _body: WeeklySummaryRequest,
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<WeeklySummaryAnswer> {
     return this.seasonMail.sendWeeklyNow(slug, user, today());

@@ -19,6 +19,10 @@ export const frostWarningAnswerSchema = z.object({
 });
 export type FrostWarningAnswer = z.infer<typeof frostWarningAnswerSchema>;
 
+/** "Send the weekly summary now" takes nothing but an empty object (the week is today's). */
+export const weeklySummaryRequestSchema = z.object({}).strict();
+export type WeeklySummaryRequest = z.infer<typeof weeklySummaryRequestSchema>;
+
 /** What "send the weekly summary now" did: each grower gets one per ISO week at most. */
 export const weeklySummaryAnswerSchema = z.object({
   week: z.string(),

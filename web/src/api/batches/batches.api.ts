@@ -63,5 +63,5 @@ export function postFrostWarning(slug: string, body: FrostWarningRequest): Promi
 
 /** Sends this week's summary now to each grower who has not had it (organisers). */
 export function postWeeklySummary(slug: string): Promise<WeeklySummaryAnswer> {
-  return httpClient.post<WeeklySummaryAnswer>(`${seasonPath(slug)}/weekly-summary`);
+  return httpClient.post<WeeklySummaryAnswer>(`${seasonPath(slug)}/weekly-summary`, {});
 }
