@@ -1,18 +1,10 @@
 import { Button, Field, Input, Select, Textarea, ToggleButton } from '@fluentui/react-components';
-import {
-  LOG_KINDS,
-  LOG_KIND_WORDS,
-  LOSS_REASONS,
-  LOSS_REASON_WORDS,
-  logEntryFormSchema,
-  type Batch,
-  type LogEntryRequest,
-} from '@homeground/shared';
+import { LOG_KINDS, LOSS_REASONS, logEntryFormSchema, type Batch, type LogEntryRequest } from '@homeground/shared';
 import { useRef, useState } from 'react';
 import { useLogEntryMutation } from '../../../api/batches/batches.mutations.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
 import type { LogOutboxState } from '../offline/use-log-outbox.js';
-import { MY_BATCHES_WORDS } from '../utils/my-batches-words.js';
+import { useTranslation } from 'react-i18next';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
 /**
@@ -33,6 +25,7 @@ export function LogForm({
   outbox: LogOutboxState;
 }) {
   const styles = useMyBatchesStyles();
+  const { t } = useTranslation('batches');
   const mutation = useLogEntryMutation(slug);
   const form = useSchemaForm({
     schema: logEntryFormSchema,
@@ -88,12 +81,15 @@ export function LogForm({
     if (kind !== 'lost') form.change('reason', '');
     clientId.current = null;
   };
-  const label = `${MY_BATCHES_WORDS.record}: ${batch.commonName}`;
+  const label = t('log.recordFor', { name: batch.commonName });
+  const kind = (LOG_KINDS as readonly string[]).includes(form.values.kind)
+    ? (form.values.kind as (typeof LOG_KINDS)[number])
+    : null;
 
   return (
     <form ref={form.formRef} onSubmit={submit} noValidate aria-label={label} className={styles.form}>
       {form.failure ? <p role="alert">{form.failure}</p> : null}
-      <div role="group" aria-label="What happened" className={styles.kinds}>
+      <div role="group" aria-label={t('log.whatHappened')} className={styles.kinds}>
         {LOG_KINDS.map((k) => (
           <ToggleButton
             key={k}
@@ -102,13 +98,13 @@ export function LogForm({
             aria-pressed={form.values.kind === k}
             onClick={() => choose(k)}
           >
-            {LOG_KIND_WORDS[k].label}
+            {t(`kinds.${k}`)}
           </ToggleButton>
         ))}
       </div>
       <Field
         className={styles.field}
-        label={`How many (${LOG_KIND_WORDS[form.values.kind as keyof typeof LOG_KIND_WORDS]?.counts ?? 'count'})`}
+        label={t('log.countLabel', { counts: kind ? t(`counts.${kind}`) : t('log.howMany') })}
         {...form.validation('count')}
       >
         <Input
@@ -119,18 +115,18 @@ export function LogForm({
         />
       </Field>
       {form.values.kind === 'lost' ? (
-        <Field className={styles.field} label="Why were they lost?" {...form.validation('reason')}>
+        <Field className={styles.field} label={t('log.why')} {...form.validation('reason')}>
           <Select className={styles.big} value={form.values.reason} onChange={(_, d) => form.change('reason', d.value)}>
-            <option value="">Choose a reason</option>
+            <option value="">{t('log.chooseReason')}</option>
             {LOSS_REASONS.map((r) => (
               <option key={r} value={r}>
-                {LOSS_REASON_WORDS[r]}
+                {t(`reasons.${r}`)}
               </option>
             ))}
           </Select>
         </Field>
       ) : null}
-      <Field className={styles.field} label="Date" {...form.validation('date')}>
+      <Field className={styles.field} label={t('log.date')} {...form.validation('date')}>
         <Input
           className={styles.big}
           type="date"
@@ -139,7 +135,7 @@ export function LogForm({
           onChange={(_, d) => form.change('date', d.value)}
         />
       </Field>
-      <Field className={styles.field} label="Note (optional)" {...form.validation('note')}>
+      <Field className={styles.field} label={t('log.noteOptional')} {...form.validation('note')}>
         <Textarea value={form.values.note} onChange={(_, d) => form.change('note', d.value)} />
       </Field>
       <div>
@@ -150,12 +146,10 @@ export function LogForm({
           className={styles.big}
           disabled={busy || mutation.isPending}
         >
-          {busy || mutation.isPending ? MY_BATCHES_WORDS.saving : MY_BATCHES_WORDS.record}
+          {busy || mutation.isPending ? t('log.saving') : t('log.record')}
         </Button>
       </div>
-      <p aria-live="polite">
-        {outcome === 'saved' ? MY_BATCHES_WORDS.saved : outcome === 'kept' ? MY_BATCHES_WORDS.keptOnDevice : ''}
-      </p>
+      <p aria-live="polite">{outcome === 'saved' ? t('log.saved') : outcome === 'kept' ? t('offline.kept') : ''}</p>
     </form>
   );
 }

@@ -17,10 +17,11 @@ import {
 // batches. The log checks are the shared logEntryRequestSchema's; the dates are the fixtures'.
 const amara = { ...juniperGrower, id: 'u-amara', displayName: 'Amara Reyes', email: 'amara.reyes@example.org' };
 
-function openMyBatches(me = amara, over: FakeRoutes = {}) {
+function openMyBatches(me = amara, over: FakeRoutes = {}, locale?: 'en' | 'es') {
   return renderApp({
     path: '/my-batches',
     token: 'token',
+    ...(locale && { locale }),
     api: {
       'GET /api/me': { body: me },
       [`GET ${BATCHES_PATH}`]: { body: seasonBatches },
@@ -67,6 +68,19 @@ describe('My batches', () => {
     const calls = api.callsTo('POST', `${BATCHES_PATH}/${milkweed.id}/log`);
     expect(new Set(calls.map((c) => (c.body as { clientId: string }).clientId)).size).toBe(1);
     expect(held.size).toBe(1);
+  });
+
+  it('speaks Spanish when the page is in Spanish: log buttons, totals, units and dates', async () => {
+    openMyBatches(amara, {}, 'es');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Mis lotes' })).toBeInTheDocument();
+    const m = await card('Butterfly milkweed');
+    expect(m.getByText(/· Macetas afuera durante el invierno/)).toBeInTheDocument();
+    expect(m.getByText(/20 plantas en 20 macetas; siembra unas 34 semillas/)).toBeInTheDocument();
+    expect(m.getByText('Sembradas 150 · brotaron 0 · trasplantadas 0 · perdidas 0 · listas 0')).toBeInTheDocument();
+    const form = within(m.getByRole('form', { name: 'Añadir al registro: Butterfly milkweed' }));
+    expect(form.getByRole('button', { name: 'Brotaron' })).toBeInTheDocument();
+    expect(form.getByRole('button', { name: 'Añadir al registro' })).toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'Cómo cultivo' })).toBeInTheDocument();
   });
 
   it("shows each batch with its dates, treatment, how-to, cautions and log, and the grower's supplies", async () => {

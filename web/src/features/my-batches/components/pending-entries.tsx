@@ -1,7 +1,8 @@
 import { Button } from '@fluentui/react-components';
-import { LOG_KIND_WORDS, LOSS_REASON_WORDS } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
+import { useFormatters } from '../../../lib/i18n/format.js';
 import type { OutboxEntry } from '../offline/log-outbox-db.js';
-import { MY_BATCHES_WORDS, shortDate } from '../utils/my-batches-words.js';
+import { SHORT_DAY } from '../utils/my-batches-words.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
 /**
@@ -10,32 +11,33 @@ import { useMyBatchesStyles } from './my-batches.styles.js';
  */
 export function PendingEntries({
   entries,
-  label,
+  name,
   onRemove,
 }: {
   entries: readonly OutboxEntry[];
-  label: string;
+  /** The batch's plant, for the list's label. */
+  name: string;
   onRemove: (clientId: string) => void;
 }) {
   const styles = useMyBatchesStyles();
+  const { t } = useTranslation('batches');
+  const fmt = useFormatters();
   if (entries.length === 0) return null;
   return (
-    <ul className={styles.pending} aria-label={label}>
+    <ul className={styles.pending} aria-label={t('offline.waitingFor', { name })}>
       {entries.map(({ clientId, entry, refused }) => (
         <li key={clientId} className={styles.pendingItem}>
           <span>
-            {shortDate(entry.date)} · {LOG_KIND_WORDS[entry.kind].label}
-            {entry.reason ? `: ${LOSS_REASON_WORDS[entry.reason]}` : ''} · {entry.count}
+            {fmt.date(entry.date, SHORT_DAY)} · {t(`kinds.${entry.kind}`)}
+            {entry.reason ? `: ${t(`reasons.${entry.reason}`)}` : ''} · {fmt.number(entry.count)}
           </span>
           {refused === undefined ? (
-            <strong className={styles.pendingState}>{MY_BATCHES_WORDS.notYetSent}</strong>
+            <strong className={styles.pendingState}>{t('offline.notYetSent')}</strong>
           ) : (
             <>
-              <strong className={styles.refusedState}>
-                {MY_BATCHES_WORDS.refused}: {refused}
-              </strong>
+              <strong className={styles.refusedState}>{t('offline.refused', { reason: refused })}</strong>
               <Button size="small" onClick={() => onRemove(clientId)}>
-                {MY_BATCHES_WORDS.removeEntry}
+                {t('offline.remove')}
               </Button>
             </>
           )}
