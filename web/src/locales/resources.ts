@@ -16,6 +16,8 @@ import { yard as enYard } from './en/yard.js';
 import { yard as esYard } from './es/yard.js';
 import { batches as enBatches } from './en/batches.js';
 import { batches as esBatches } from './es/batches.js';
+import { seasonBatches as enSeasonBatches } from './en/season-batches.js';
+import { seasonBatches as esSeasonBatches } from './es/season-batches.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -29,6 +31,7 @@ export const resources = {
     cards: enCards,
     yard: enYard,
     batches: enBatches,
+    seasonBatches: enSeasonBatches,
   },
   es: {
     common: esCommon,
@@ -40,5 +43,6 @@ export const resources = {
     cards: esCards,
     yard: esYard,
     batches: esBatches,
+    seasonBatches: esSeasonBatches,
   },
 } as const;

@@ -6,7 +6,8 @@ import { useFrostWarningMutation, useWeeklySummaryMutation } from '../../../api/
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
-import { frostSentWords, SEASON_BATCHES_WORDS as W, weeklySentWords } from '../utils/season-batches-words.js';
+import { useTranslation } from 'react-i18next';
+import { useWords } from '../../../lib/i18n/index.js';
 import { useSeasonBatchesStyles } from './season-batches.styles.js';
 
 /** Today and tomorrow on the organiser's own calendar, as YYYY-MM-DD. */
@@ -22,6 +23,8 @@ function localDay(offsetDays: number, now = new Date()): string {
  */
 export function GrowerMailCard({ slug }: { slug: string }) {
   const styles = useSeasonBatchesStyles();
+  const { t } = useTranslation('seasonBatches');
+  const words = useWords();
   const frost = useFrostWarningMutation(slug);
   const weekly = useWeeklySummaryMutation(slug);
   const form = useSchemaForm({ schema: frostWarningRequestSchema, initial: { night: localDay(0), note: '' } });
@@ -36,12 +39,18 @@ export function GrowerMailCard({ slug }: { slug: string }) {
   return (
     <ContentCard aria-labelledby="grower-mail">
       <Heading level="section" id="grower-mail">
-        {W.mail}
+        {t('mail.title')}
       </Heading>
-      <p className={styles.lead}>{W.frostLead}</p>
-      <form ref={form.formRef} onSubmit={submit} noValidate aria-label={W.frostForm} className={styles.mailForm}>
+      <p className={styles.lead}>{t('mail.frostLead')}</p>
+      <form
+        ref={form.formRef}
+        onSubmit={submit}
+        noValidate
+        aria-label={t('mail.frostForm')}
+        className={styles.mailForm}
+      >
         {form.failure ? <p role="alert">{form.failure}</p> : null}
-        <Field label={W.frostNight} {...form.validation('night')}>
+        <Field label={t('mail.frostNight')} {...form.validation('night')}>
           <Input
             type="date"
             min={localDay(0)}
@@ -49,34 +58,45 @@ export function GrowerMailCard({ slug }: { slug: string }) {
             onChange={(_, d) => form.change('night', d.value)}
           />
         </Field>
-        <Field label={W.frostNote} hint={W.frostNoteHint} {...form.validation('note')}>
+        <Field label={t('mail.frostNote')} hint={t('mail.frostNoteHint')} {...form.validation('note')}>
           <Textarea value={form.values.note ?? ''} onChange={(_, d) => form.change('note', d.value)} />
         </Field>
         <div>
           <Button type="submit" icon={<WeatherSnowflakeRegular />} disabled={frost.isPending}>
-            {frost.isPending ? W.sending : W.sendFrost}
+            {frost.isPending ? t('mail.sending') : t('mail.sendFrost')}
           </Button>
         </div>
       </form>
       {frostSent ? (
         <MessageBar intent={frostSent.growers.length ? 'success' : 'info'}>
-          <MessageBarBody>{frostSentWords(frostSent)}</MessageBarBody>
+          <MessageBarBody>
+            {frostSent.growers.length === 0
+              ? t('mail.frostNobody')
+              : t('mail.frostSentTo', {
+                  names: words.join(
+                    frostSent.growers.map((g) => t('mail.growerBatches', { name: g.displayName, count: g.batches })),
+                  ),
+                })}
+          </MessageBarBody>
         </MessageBar>
       ) : null}
 
-      <Heading level="card">{W.weekly}</Heading>
-      <p className={styles.lead}>{W.weeklyLead}</p>
+      <Heading level="card">{t('mail.weekly')}</Heading>
+      <p className={styles.lead}>{t('mail.weeklyLead')}</p>
       <Button
         icon={<MailRegular />}
         disabled={weekly.isPending}
         onClick={() => weekly.mutate(undefined, { onSuccess: setWeeklySent })}
       >
-        {weekly.isPending ? W.sending : W.sendWeekly}
+        {weekly.isPending ? t('mail.sending') : t('mail.sendWeekly')}
       </Button>
-      {weekly.isError ? <p role="alert">{W.weeklyFailed}</p> : null}
+      {weekly.isError ? <p role="alert">{t('mail.weeklyFailed')}</p> : null}
       {weeklySent ? (
         <MessageBar intent="success">
-          <MessageBarBody>{weeklySentWords(weeklySent)}</MessageBarBody>
+          <MessageBarBody>
+            {t('mail.weeklySent', { count: weeklySent.sent })}
+            {weeklySent.alreadySent > 0 ? ` ${t('mail.weeklyAlready', { count: weeklySent.alreadySent })}` : ''}
+          </MessageBarBody>
         </MessageBar>
       ) : null}
     </ContentCard>

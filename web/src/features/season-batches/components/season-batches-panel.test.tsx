@@ -15,10 +15,11 @@ import {
 
 // Who sees what follows the batches API (api/src/batches): organisers split and watch progress.
 // The forecast words show the API's own numbers with their range (DESIGN.md: no bare scores).
-function openSeason(me = maraOrganiser, over: FakeRoutes = {}) {
+function openSeason(me = maraOrganiser, over: FakeRoutes = {}, locale?: 'en' | 'es') {
   return renderApp({
     path: '/season',
     token: 'token',
+    ...(locale && { locale }),
     api: {
       'GET /api/me': { body: me },
       [`GET ${SEASON_PATH}`]: { body: season },
@@ -107,6 +108,16 @@ describe("the organiser's growers, batches and progress", () => {
     expect(api.callsTo('GET', `${SEASON_PATH}/batches`)).toHaveLength(0);
   });
 
+  it('speaks Spanish when the page is in Spanish: progress, the forecast range and the e-mail card', async () => {
+    openSeason(maraOrganiser, {}, 'es');
+    const bySpecies = within(await screen.findByRole('region', { name: 'Avance por especie' }));
+    const row = within(bySpecies.getByText('Wild bergamot').closest('tr') as HTMLElement);
+    expect(row.getByText('unas 36 (29–45)')).toBeInTheDocument();
+    expect(row.getByText(/faltan 14 para el objetivo/)).toBeInTheDocument();
+    expect(screen.getByRole('form', { name: 'Enviar un aviso de helada' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Enviar ahora el resumen de esta semana' })).toBeInTheDocument();
+  });
+
   it('sends a frost warning for a night with a note, and this week’s summary, saying who got them', async () => {
     const { user, api } = openSeason(maraOrganiser, {
       [`POST ${SEASON_PATH}/frost-warning`]: {
@@ -127,7 +138,7 @@ describe("the organiser's growers, batches and progress", () => {
     });
 
     await user.click(screen.getByRole('button', { name: 'Send this week’s summary now' }));
-    expect(await screen.findByText('Sent to 2 growers; 1 had this week’s already.')).toBeInTheDocument();
+    expect(await screen.findByText('Sent to 2 growers. 1 had this week’s already.')).toBeInTheDocument();
   });
 
   it('shows the API’s 400 beside the night and says nothing was sent', async () => {
