@@ -9,3 +9,4 @@ export * from './frost-watch.js';
 export * from './sow-more.js';
 export * from './batches-ics.js';
 export * from './iso-week.js';
+export * from './reached-germination.js';
