@@ -18,6 +18,8 @@ import { batches as enBatches } from './en/batches.js';
 import { batches as esBatches } from './es/batches.js';
 import { seasonBatches as enSeasonBatches } from './en/season-batches.js';
 import { seasonBatches as esSeasonBatches } from './es/season-batches.js';
+import { season as enSeason } from './en/season.js';
+import { season as esSeason } from './es/season.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -32,6 +34,7 @@ export const resources = {
     yard: enYard,
     batches: enBatches,
     seasonBatches: enSeasonBatches,
+    season: enSeason,
   },
   es: {
     common: esCommon,
@@ -44,5 +47,6 @@ export const resources = {
     yard: esYard,
     batches: esBatches,
     seasonBatches: esSeasonBatches,
+    season: esSeason,
   },
 } as const;
