@@ -14,6 +14,16 @@ export const season = {
     label: 'No growing group',
     text: 'The season plan belongs to a community growing group: its organisers choose the species and targets and work out the seed list, and its growers and members can read it here. You are not in a growing group yet. An organiser can invite you by e-mail.',
   },
+  shareList: {
+    title: 'Share list',
+    lead: 'Species native to your ecoregion that your growers can raise, chosen for wildlife, bloom across the season and the yards people have. Add the ones you want to your targets, then save the targets.',
+    milkweeds: 'Milkweeds for monarchs (% of the plants)',
+    notAPercentage: 'Enter a percentage from 0 to 100.',
+    outOfRange: 'Must be from 0 to 100%.',
+    propose: 'Propose species',
+    proposing: 'Proposing…',
+    failed: 'The share list could not be worked out: {{reason}}',
+  },
   dates: {
     title: 'Dates and methods',
     lastFrost: 'Average last spring frost',

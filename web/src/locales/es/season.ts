@@ -18,6 +18,16 @@ export const season = {
     label: 'Sin grupo de cultivo',
     text: 'El plan de temporada pertenece a un grupo comunitario de cultivo: sus organizadoras eligen las especies y los objetivos y calculan la lista de semillas, y quienes cultivan y participan pueden leerlo aquí. Todavía no estás en ningún grupo de cultivo. Una organizadora puede invitarte por correo.',
   },
+  shareList: {
+    title: 'Lista para el reparto',
+    lead: 'Especies nativas de tu ecorregión que tus cultivadores pueden criar, elegidas por la fauna, por la floración a lo largo de la temporada y por los jardines de la gente. Añade a tus objetivos las que quieras y luego guarda los objetivos.',
+    milkweeds: 'Algodoncillos para las monarcas (% de las plantas)',
+    notAPercentage: 'Escribe un porcentaje de 0 a 100.',
+    outOfRange: 'Debe estar entre 0 y 100 %.',
+    propose: 'Proponer especies',
+    proposing: 'Proponiendo…',
+    failed: 'No se pudo calcular la lista para el reparto: {{reason}}',
+  },
   dates: {
     title: 'Fechas y métodos',
     lastFrost: 'Última helada de primavera (promedio)',
