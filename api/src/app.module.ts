@@ -22,6 +22,7 @@ import { InvitationsModule } from './invitations/invitations.module.js';
 import { SeasonsModule } from './seasons/seasons.module.js';
 import { PlantShareModule } from './plant-share/plant-share.module.js';
 import { BatchesModule } from './batches/batches.module.js';
+import { SeasonMailModule } from './season-mail/season-mail.module.js';
 
 /** The built web app with SPA fallback; unknown /api routes still answer JSON 404s. */
 function webApp(): DynamicModule[] {
@@ -55,6 +56,7 @@ function webApp(): DynamicModule[] {
     SeasonsModule,
     PlantShareModule,
     BatchesModule,
+    SeasonMailModule,
     DemoModule,
   ],
 })

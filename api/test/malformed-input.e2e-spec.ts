@@ -865,6 +865,27 @@ const cases: Case[] = [
     url: '/api/groups/larkfield-commons-growers/season/batches/42',
     field: 'id',
   },
+  {
+    what: 'a frost warning for a day that does not exist',
+    method: 'post',
+    url: '/api/groups/larkfield-commons-growers/season/frost-warning',
+    body: { night: '2027-02-30' },
+    field: 'night',
+  },
+  {
+    what: 'a frost warning note of 100,000 characters',
+    method: 'post',
+    url: '/api/groups/larkfield-commons-growers/season/frost-warning',
+    body: { night: '2027-04-20', note: huge },
+    field: 'note',
+  },
+  {
+    what: 'an unknown key on the weekly summary, which takes an empty object',
+    method: 'post',
+    url: '/api/groups/larkfield-commons-growers/season/weekly-summary',
+    body: { week: '2027-W01' },
+    field: 'week',
+  },
   { what: 'a page size of a billion', method: 'get', url: '/api/species?pageSize=1000000000', field: 'pageSize' },
   { what: 'a 5,000-character search', method: 'get', url: `/api/species?q=${huge.slice(0, 5000)}`, field: 'q' },
   { what: 'an unknown species filter', method: 'get', url: '/api/species?colour=blue', field: 'colour' },
@@ -908,7 +929,9 @@ describe('malformed input on every writing route (e2e)', () => {
       (SELECT COUNT(*) FROM share_walk_ups) AS walkUps,
       (SELECT COUNT(*) FROM season_growers) AS growers,
       (SELECT COUNT(*) FROM batches) AS batches,
-      (SELECT COUNT(*) FROM batch_log_entries) AS batchLog`);
+      (SELECT COUNT(*) FROM batch_log_entries) AS batchLog,
+      (SELECT COUNT(*) FROM weekly_summaries_sent) AS weeklySummaries,
+      (SELECT COUNT(*) FROM outbox_messages) AS outbox`);
   }
 
   beforeAll(async () => {
@@ -966,6 +989,8 @@ describe('malformed input on every writing route (e2e)', () => {
       'post /api/groups/:slug/plant-share/walk-ups',
       'post /api/groups/:slug/season/batches/:id/log',
       'post /api/groups/:slug/season/batches/propose',
+      'post /api/groups/:slug/season/frost-warning',
+      'post /api/groups/:slug/season/weekly-summary',
       'post /api/mixes',
       'post /api/mixes/alternatives',
       'post /api/mixes/balance',

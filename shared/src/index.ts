@@ -43,6 +43,7 @@ export * from './sowing-calendar/event-uid.js';
 export * from './sowing-calendar/readiness.js';
 export * from './types/mix-api.js';
 export * from './types/mail.js';
+export * from './types/season-mail.js';
 export * from './types/invitation.js';
 export * from './types/people.js';
 export * from './types/photo-credit.js';

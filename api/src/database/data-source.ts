@@ -34,6 +34,8 @@ import { SeasonTargetRow } from '../seasons/season-target.entity.js';
 import { SeasonRow } from '../seasons/season.entity.js';
 import { SpeciesPhoto } from '../species/species-photo.entity.js';
 import { SpeciesRow } from '../species/species.entity.js';
+import { CreateWeeklySummariesSent1765900000000 } from './migrations/1765900000000-create-weekly-summaries-sent.js';
+import { WeeklySummarySentRow } from '../season-mail/weekly-summary-sent.entity.js';
 
 export const ENTITIES = [
   User,
@@ -52,6 +54,7 @@ export const ENTITIES = [
   BatchRow,
   BatchLogEntryRow,
   PendingRegistrationRow,
+  WeeklySummarySentRow,
 ];
 export const MIGRATIONS = [
   CreateUsersAndGroups1764633600000,
@@ -70,6 +73,7 @@ export const MIGRATIONS = [
   CreateBatches1765324800000,
   CreatePendingRegistrations1766300000000,
   AddTakerLocale1765800000000,
+  CreateWeeklySummariesSent1765900000000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

@@ -6,6 +6,7 @@ import {
   DEFAULT_SEASON_METHODS,
   DEFAULT_SEEDS_PER_PACKET,
   pastSeasonDateFields,
+  reachedGerminationPct,
   proposeShareList,
   seedList,
   seedListToCsv,
@@ -123,6 +124,7 @@ export class SeasonsService {
     const group = await this.managed(slug, user);
     const season = await this.latest(group);
     this.ctx.assertKnown(req.targets.map((t, i) => ({ field: `targets.${i}.slug`, slug: t.slug })));
+    const reached = await this.reachedGermination(group.id, season.year);
     const rows = await this.db.transaction(async (tx) => {
       await tx.delete(SeasonTargetRow, { seasonId: season.id });
       const fresh = req.targets.map((t, position) =>
@@ -130,7 +132,8 @@ export class SeasonsService {
           seasonId: season.id,
           slug: t.slug,
           targetPlants: t.targetPlants,
-          germinationRatePct: t.germinationRatePct ?? null,
+          // The organiser's own rate wins; otherwise what the group really reached in past seasons.
+          germinationRatePct: t.germinationRatePct ?? reached.get(t.slug) ?? null,
           position,
         }),
       );
@@ -140,6 +143,36 @@ export class SeasonsService {
       return saved;
     });
     return this.toDto(group, await this.seasons.findOneByOrFail({ id: season.id }), rows);
+  }
+
+  /**
+   * Germination the group really reached per species in seasons before `year`, from the batch logs
+   * (seedlings come up over seeds sown). Read with SQL on the batches tables rather than through the
+   * batches module, which builds on this one.
+   */
+  private async reachedGermination(groupId: string, year: number): Promise<Map<string, number>> {
+    // Only batches whose grower logged what came up count: a batch with seeds sown and nothing logged
+    // since says nothing about germination.
+    const rows: { slug: string; sown: number; germinated: number }[] = await this.db.query(
+      `SELECT slug, SUM(sown) AS sown, SUM(germinated) AS germinated
+         FROM (SELECT b.slug AS slug,
+                      SUM(CASE WHEN e.kind = 'sown' THEN e.count ELSE 0 END) AS sown,
+                      SUM(CASE WHEN e.kind = 'germinated' THEN e.count ELSE 0 END) AS germinated
+                 FROM batch_log_entries e
+                 JOIN batches b ON b.id = e.batch_id
+                 JOIN seasons s ON s.id = b.season_id
+                WHERE s.group_id = ? AND s.year < ?
+                GROUP BY b.id
+               HAVING germinated > 0)
+        GROUP BY slug`,
+      [groupId, year],
+    );
+    const out = new Map<string, number>();
+    for (const r of rows) {
+      const pct = reachedGerminationPct({ sown: Number(r.sown), germinated: Number(r.germinated) });
+      if (pct !== null) out.set(r.slug, pct);
+    }
+    return out;
   }
 
   async seedList(slug: string, user: AuthenticatedUser): Promise<SeasonSeedList> {

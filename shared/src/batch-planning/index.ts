@@ -8,3 +8,5 @@ export * from './supply-list.js';
 export * from './frost-watch.js';
 export * from './sow-more.js';
 export * from './batches-ics.js';
+export * from './iso-week.js';
+export * from './reached-germination.js';

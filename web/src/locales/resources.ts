@@ -28,6 +28,12 @@ import { mix as enMix } from './en/mix.js';
 import { mix as esMix } from './es/mix.js';
 import { groups as enGroups } from './en/groups.js';
 import { groups as esGroups } from './es/groups.js';
+import { batches as enBatches } from './en/batches.js';
+import { batches as esBatches } from './es/batches.js';
+import { seasonBatches as enSeasonBatches } from './en/season-batches.js';
+import { seasonBatches as esSeasonBatches } from './es/season-batches.js';
+import { season as enSeason } from './en/season.js';
+import { season as esSeason } from './es/season.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -47,6 +53,9 @@ export const resources = {
     history: enHistory,
     mix: enMix,
     groups: enGroups,
+    batches: enBatches,
+    seasonBatches: enSeasonBatches,
+    season: enSeason,
   },
   es: {
     common: esCommon,
@@ -64,5 +73,8 @@ export const resources = {
     history: esHistory,
     mix: esMix,
     groups: esGroups,
+    batches: esBatches,
+    seasonBatches: esSeasonBatches,
+    season: esSeason,
   },
 } as const;

@@ -1,3 +1,5 @@
+// IndexedDB in jsdom (the batch log keeps entries on the device before sending them).
+import 'fake-indexeddb/auto';
 import '@testing-library/jest-dom/vitest';
 import { cleanup, configure } from '@testing-library/react';
 import { afterEach, beforeEach } from 'vitest';

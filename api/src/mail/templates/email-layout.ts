@@ -10,6 +10,8 @@ export interface EmailContent {
   action?: { label: string; url: string };
   /** Small print under the sign-off: why the reader got this, how to stop it. */
   footer: string;
+  /** The language of the words (BCP 47), for the HTML's `lang`; English when not given. */
+  lang?: string;
 }
 
 const escapeHtml = (s: string) =>
@@ -37,7 +39,7 @@ export function renderEmail(content: EmailContent): { text: string; html: string
 <p style="margin:0 0 14px;font-size:13px;color:#5B4636">${escapeHtml(say('mail.openAddress', { url: content.action.url }))}</p>`
     : '';
   const html = `<!doctype html>
-<html lang="${locale}"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width"></head>
+<html lang="${escapeHtml(content.lang ?? locale)}"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width"></head>
 <body style="margin:0;padding:24px;background:#FAF7F0;font-family:Georgia,'Times New Roman',serif;color:#1b1b1b">
 <div style="max-width:560px;margin:0 auto;background:#ffffff;border-radius:8px;padding:24px;font-family:Arial,Helvetica,sans-serif;font-size:16px;line-height:1.5">
 <p style="margin:0 0 14px">${escapeHtml(content.greeting)}</p>

@@ -2,6 +2,9 @@ import type {
   Batch,
   BatchSplitProposalAnswer,
   BatchSplitRequest,
+  FrostWarningAnswer,
+  FrostWarningRequest,
+  WeeklySummaryAnswer,
   GrowerSetupRequest,
   LogEntryRequest,
   SeasonBatches,
@@ -51,4 +54,14 @@ export function getProgress(slug: string, signal?: AbortSignal): Promise<SeasonP
 /** The caller's own batches as an iCalendar file. */
 export function downloadMyBatchesIcs(slug: string): Promise<Blob> {
   return httpClient.file(`${seasonPath(slug)}/my-batches.ics`);
+}
+
+/** Warns every grower with plants outdoors of a frost, by e-mail (organisers). */
+export function postFrostWarning(slug: string, body: FrostWarningRequest): Promise<FrostWarningAnswer> {
+  return httpClient.post<FrostWarningAnswer>(`${seasonPath(slug)}/frost-warning`, body);
+}
+
+/** Sends this week's summary now to each grower who has not had it (organisers). */
+export function postWeeklySummary(slug: string): Promise<WeeklySummaryAnswer> {
+  return httpClient.post<WeeklySummaryAnswer>(`${seasonPath(slug)}/weekly-summary`, {});
 }

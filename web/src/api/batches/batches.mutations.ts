@@ -1,6 +1,12 @@
-import type { BatchSplitRequest, GrowerSetupRequest, LogEntryRequest, SplitProposalRequest } from '@homeground/shared';
+import type {
+  BatchSplitRequest,
+  FrostWarningRequest,
+  GrowerSetupRequest,
+  LogEntryRequest,
+  SplitProposalRequest,
+} from '@homeground/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { postLogEntry, proposeSplit, putGrower, putSplit } from './batches.api.js';
+import { postFrostWarning, postLogEntry, postWeeklySummary, proposeSplit, putGrower, putSplit } from './batches.api.js';
 import { batchKeys } from './batches.queries.js';
 
 /** Saves a grower's methods and capacity; growers and batches refresh. */
@@ -40,4 +46,14 @@ export function useLogEntryMutation(slug: string) {
     mutationFn: ({ batchId, entry }: { batchId: string; entry: LogEntryRequest }) => postLogEntry(slug, batchId, entry),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: batchKeys.season(slug) }),
   });
+}
+
+/** Sends a frost warning by e-mail; nothing on screen changes but the answer. */
+export function useFrostWarningMutation(slug: string) {
+  return useMutation({ mutationFn: (body: FrostWarningRequest) => postFrostWarning(slug, body) });
+}
+
+/** Sends this week's summaries now. */
+export function useWeeklySummaryMutation(slug: string) {
+  return useMutation({ mutationFn: () => postWeeklySummary(slug) });
 }

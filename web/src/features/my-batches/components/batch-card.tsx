@@ -2,16 +2,32 @@ import { MessageBar, MessageBarBody } from '@fluentui/react-components';
 import type { Batch } from '@homeground/shared';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
-import { methodTitle, MY_BATCHES_WORDS, plantsInUnits } from '../utils/my-batches-words.js';
+import { useTranslation } from 'react-i18next';
+import { useWords } from '../../../lib/i18n/index.js';
+import { capitalise, plantsInUnits } from '../utils/my-batches-words.js';
 import { BatchHowTo } from './batch-how-to.js';
 import { BatchSteps } from './batch-steps.js';
 import { LogForm } from './log-form.js';
 import { LogList } from './log-list.js';
+import type { LogOutboxState } from '../offline/use-log-outbox.js';
+import { PendingEntries } from './pending-entries.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
 /** One batch: what and how many, whether it is behind, its dates, treatment, how-to, cautions and log. */
-export function BatchCard({ slug, batch, today }: { slug: string; batch: Batch; today: string }) {
+export function BatchCard({
+  slug,
+  batch,
+  today,
+  outbox,
+}: {
+  slug: string;
+  batch: Batch;
+  today: string;
+  outbox: LogOutboxState;
+}) {
   const styles = useMyBatchesStyles();
+  const { t } = useTranslation('batches');
+  const words = useWords();
   const id = `batch-${batch.id}`;
   return (
     <ContentCard aria-labelledby={id}>
@@ -19,16 +35,17 @@ export function BatchCard({ slug, batch, today }: { slug: string; batch: Batch; 
         {batch.commonName}
       </Heading>
       <p className={styles.subheading}>
-        <i>{batch.scientificName}</i> · {methodTitle(batch.method)}
+        <i>{batch.scientificName}</i> · {capitalise(words.sowingMethod[batch.method].phrase)}
       </p>
       <div className={styles.facts}>
         <span>
-          {plantsInUnits(batch)}; sow about {batch.seedsToSow} seeds (germination {batch.germinationRatePct}%).
+          {t('batch.sowAbout', {
+            units: plantsInUnits(t, batch),
+            seeds: batch.seedsToSow,
+            pct: batch.germinationRatePct,
+          })}
         </span>
-        <span>
-          Expected ready for the share: about {batch.forecast.expected} plants ({batch.forecast.low}–
-          {batch.forecast.high}).
-        </span>
+        <span>{t('batch.expected', batch.forecast)}</span>
       </div>
       {batch.behind ? (
         <MessageBar intent="warning">
@@ -42,40 +59,40 @@ export function BatchCard({ slug, batch, today }: { slug: string; batch: Batch; 
       ) : null}
       {batch.readyAfterShare ? (
         <MessageBar intent="info">
-          <MessageBarBody>{MY_BATCHES_WORDS.readyAfterShare}</MessageBarBody>
+          <MessageBarBody>{t('batch.readyAfterShare')}</MessageBarBody>
         </MessageBar>
       ) : null}
 
-      <section className={styles.section} aria-label={`${MY_BATCHES_WORDS.steps}: ${batch.commonName}`}>
-        <Heading level="card">{MY_BATCHES_WORDS.steps}</Heading>
+      <section className={styles.section} aria-label={`${t('batch.steps')}: ${batch.commonName}`}>
+        <Heading level="card">{t('batch.steps')}</Heading>
         <BatchSteps batch={batch} today={today} />
       </section>
 
       <section className={styles.section}>
-        <Heading level="card">{MY_BATCHES_WORDS.treatments}</Heading>
+        <Heading level="card">{t('batch.treatments')}</Heading>
         <ul className={styles.list}>
-          {batch.treatments.map((t) => (
-            <li key={t.kind}>
-              <strong>{t.title}</strong>
-              {t.where === 'refrigerator'
-                ? ' (in the refrigerator)'
-                : t.where === 'outdoors'
-                  ? ' (outdoors, by winter)'
+          {batch.treatments.map((tr) => (
+            <li key={tr.kind}>
+              <strong>{tr.title}</strong>
+              {tr.where === 'refrigerator'
+                ? ` ${t('batch.inFridge')}`
+                : tr.where === 'outdoors'
+                  ? ` ${t('batch.outdoors')}`
                   : ''}
-              : {t.how}
+              : {tr.how}
             </li>
           ))}
         </ul>
       </section>
 
       <section className={styles.section}>
-        <Heading level="card">{MY_BATCHES_WORDS.howTo}</Heading>
+        <Heading level="card">{t('batch.howTo')}</Heading>
         <BatchHowTo batch={batch} />
       </section>
 
       {batch.cautions.length > 0 ? (
         <section className={styles.section}>
-          <Heading level="card">{MY_BATCHES_WORDS.cautions}</Heading>
+          <Heading level="card">{t('batch.cautions')}</Heading>
           <ul className={styles.list}>
             {batch.cautions.map((c) => (
               <li key={c.title}>
@@ -87,9 +104,14 @@ export function BatchCard({ slug, batch, today }: { slug: string; batch: Batch; 
       ) : null}
 
       <section className={styles.section}>
-        <Heading level="card">{MY_BATCHES_WORDS.log}</Heading>
+        <Heading level="card">{t('log.title')}</Heading>
         <LogList batch={batch} />
-        <LogForm slug={slug} batch={batch} today={today} />
+        <PendingEntries
+          entries={outbox.entries.filter((e) => e.batchId === batch.id)}
+          name={batch.commonName}
+          onRemove={(id) => void outbox.remove(id)}
+        />
+        <LogForm slug={slug} batch={batch} today={today} outbox={outbox} />
       </section>
     </ContentCard>
   );

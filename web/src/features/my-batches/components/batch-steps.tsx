@@ -1,13 +1,17 @@
 import { mergeClasses } from '@fluentui/react-components';
 import type { Batch } from '@homeground/shared';
-import { shortDate } from '../utils/my-batches-words.js';
+import { useTranslation } from 'react-i18next';
+import { useFormatters } from '../../../lib/i18n/format.js';
+import { SHORT_DAY } from '../utils/my-batches-words.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
 /** The batch's dated steps, past ones greyed and the next one marked. */
 export function BatchSteps({ batch, today }: { batch: Batch; today: string }) {
   const styles = useMyBatchesStyles();
+  const { t } = useTranslation('batches');
+  const fmt = useFormatters();
   return (
-    <ol className={styles.steps} aria-label={`Dates for ${batch.commonName}`}>
+    <ol className={styles.steps} aria-label={t('batch.stepsFor', { name: batch.commonName })}>
       {batch.steps.map((s) => {
         const isNext = batch.nextStep?.kind === s.kind && batch.nextStep.date === s.date;
         return (
@@ -17,11 +21,11 @@ export function BatchSteps({ batch, today }: { batch: Batch; today: string }) {
             aria-current={isNext ? 'step' : undefined}
           >
             <span className={styles.stepDate}>
-              <time dateTime={s.date}>{shortDate(s.date)}</time>
+              <time dateTime={s.date}>{fmt.date(s.date, SHORT_DAY)}</time>
             </span>
             <span>
               <strong>{s.title}</strong>
-              {isNext ? ' (next)' : ''}
+              {isNext ? ` ${t('batch.next')}` : ''}
               <p className={styles.detail}>{s.detail}</p>
             </span>
           </li>

@@ -2,10 +2,11 @@ import { Button } from '@fluentui/react-components';
 import { CalendarAddRegular } from '@fluentui/react-icons';
 import { useState } from 'react';
 import { downloadMyBatchesIcs } from '../../../api/batches/batches.api.js';
-import { MY_BATCHES_WORDS } from '../utils/my-batches-words.js';
+import { useTranslation } from 'react-i18next';
 
 /** Downloads the grower's batch dates as an iCalendar file for their phone's calendar. */
 export function CalendarDownload({ slug, year }: { slug: string; year: number }) {
+  const { t } = useTranslation('batches');
   const [failure, setFailure] = useState<string | null>(null);
   const download = async () => {
     setFailure(null);
@@ -19,13 +20,13 @@ export function CalendarDownload({ slug, year }: { slug: string; year: number })
       link.click();
       URL.revokeObjectURL(url);
     } catch (error) {
-      setFailure(error instanceof Error ? error.message : MY_BATCHES_WORDS.calendarFailed);
+      setFailure(error instanceof Error ? error.message : t('page.calendarFailed'));
     }
   };
   return (
     <p>
       <Button size="large" icon={<CalendarAddRegular />} onClick={() => void download()}>
-        {MY_BATCHES_WORDS.calendar}
+        {t('page.calendar')}
       </Button>
       {failure ? <span role="alert"> {failure}</span> : null}
     </p>

@@ -1,12 +1,5 @@
 import { Button, Field, Input } from '@fluentui/react-components';
-import {
-  GROWER_METHODS,
-  growerSetupFormSchema,
-  SOWING_METHOD_WORDS,
-  UNIT_OF,
-  UNIT_WORDS,
-  type SeasonGrower,
-} from '@homeground/shared';
+import { GROWER_METHODS, growerSetupFormSchema, UNIT_OF, type SeasonGrower } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useSaveGrowerMutation } from '../../../api/batches/batches.mutations.js';
@@ -15,19 +8,21 @@ import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { QueryState } from '../../../components/states/index.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
-import { MY_BATCHES_WORDS } from '../utils/my-batches-words.js';
+import { useTranslation } from 'react-i18next';
+import { useWords } from '../../../lib/i18n/index.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
 /** Where the grower says how they grow and how many pots, containers or blocks they can tend. */
 export function GrowerSetupCard({ slug, userId }: { slug: string; userId: string }) {
+  const { t } = useTranslation('batches');
   const growers = useQuery(growersQueryOptions(slug));
   return (
     <ContentCard aria-labelledby="how-i-grow">
       <Heading level="section" id="how-i-grow">
-        {MY_BATCHES_WORDS.howIGrow}
+        {t('setup.title')}
       </Heading>
-      <p>{MY_BATCHES_WORDS.howIGrowLead}</p>
-      <QueryState query={growers} loading={MY_BATCHES_WORDS.loading} error={MY_BATCHES_WORDS.failed}>
+      <p>{t('setup.lead')}</p>
+      <QueryState query={growers} loading={t('page.loading')} error={t('page.failed')}>
         {(list) => <GrowerSetupForm slug={slug} userId={userId} me={list.find((g) => g.userId === userId)} />}
       </QueryState>
     </ContentCard>
@@ -36,6 +31,8 @@ export function GrowerSetupCard({ slug, userId }: { slug: string; userId: string
 
 function GrowerSetupForm({ slug, userId, me }: { slug: string; userId: string; me: SeasonGrower | undefined }) {
   const styles = useMyBatchesStyles();
+  const { t } = useTranslation('batches');
+  const words = useWords();
   const save = useSaveGrowerMutation(slug);
   const stated = (m: (typeof GROWER_METHODS)[number]) =>
     String(me?.methods.find((x) => x.method === m)?.capacity ?? '');
@@ -54,25 +51,22 @@ function GrowerSetupForm({ slug, userId, me }: { slug: string; userId: string; m
     save.mutate({ userId, body }, { onSuccess: () => setSaved(true), onError: (e) => form.fail(e) });
   });
   return (
-    <form
-      ref={form.formRef}
-      onSubmit={submit}
-      noValidate
-      aria-label={MY_BATCHES_WORDS.howIGrow}
-      className={styles.form}
-    >
+    <form ref={form.formRef} onSubmit={submit} noValidate aria-label={t('setup.title')} className={styles.form}>
       {form.failure ? <p role="alert">{form.failure}</p> : null}
       {GROWER_METHODS.map((m) => (
         <Field
           key={m}
           className={styles.field}
-          label={`${SOWING_METHOD_WORDS[m].phrase}: ${UNIT_WORDS[UNIT_OF[m]].many}`}
+          label={t('setup.field', {
+            method: words.sowingMethod[m].phrase,
+            units: t(`units.${UNIT_OF[m]}`, { count: 2 }),
+          })}
           {...form.validation(m)}
         >
           <Input
             className={styles.big}
             inputMode="numeric"
-            placeholder="not used"
+            placeholder={t('setup.notUsed')}
             value={form.values[m]}
             onChange={(_, d) => form.change(m, d.value)}
           />
@@ -80,10 +74,10 @@ function GrowerSetupForm({ slug, userId, me }: { slug: string; userId: string; m
       ))}
       <div>
         <Button type="submit" appearance="primary" size="large" className={styles.big} disabled={save.isPending}>
-          {save.isPending ? MY_BATCHES_WORDS.saving : MY_BATCHES_WORDS.saveHowIGrow}
+          {save.isPending ? t('log.saving') : t('setup.save')}
         </Button>
       </div>
-      <p aria-live="polite">{saved ? MY_BATCHES_WORDS.savedHowIGrow : ''}</p>
+      <p aria-live="polite">{saved ? t('setup.saved') : ''}</p>
     </form>
   );
 }

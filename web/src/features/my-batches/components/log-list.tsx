@@ -1,39 +1,41 @@
 import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow } from '@fluentui/react-components';
-import { LOG_KIND_WORDS, LOSS_REASON_WORDS, type Batch } from '@homeground/shared';
-import { MY_BATCHES_WORDS, shortDate } from '../utils/my-batches-words.js';
+import type { Batch } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
+import { useFormatters } from '../../../lib/i18n/format.js';
+import { SHORT_DAY } from '../utils/my-batches-words.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
 /** The batch log so far and its running totals. */
 export function LogList({ batch }: { batch: Batch }) {
   const styles = useMyBatchesStyles();
-  const t = batch.totals;
+  const { t } = useTranslation('batches');
+  const fmt = useFormatters();
+  const label = t('log.logOf', { name: batch.commonName });
   return (
     <>
-      <p>
-        Sown {t.sown} · came up {t.germinated} · potted up {t.pottedUp} · lost {t.lost} · ready {t.ready}
-      </p>
+      <p>{t('log.totals', batch.totals)}</p>
       {batch.log.length === 0 ? (
-        <p>{MY_BATCHES_WORDS.logEmpty}</p>
+        <p>{t('log.empty')}</p>
       ) : (
-        <div className={styles.scroller} role="region" aria-label={`Log of ${batch.commonName}`} tabIndex={0}>
-          <Table className={styles.logTable} size="small" aria-label={`Log of ${batch.commonName}`}>
+        <div className={styles.scroller} role="region" aria-label={label} tabIndex={0}>
+          <Table className={styles.logTable} size="small" aria-label={label}>
             <TableHeader>
               <TableRow>
-                <TableHeaderCell>Date</TableHeaderCell>
-                <TableHeaderCell>What</TableHeaderCell>
-                <TableHeaderCell>How many</TableHeaderCell>
-                <TableHeaderCell>Note</TableHeaderCell>
+                <TableHeaderCell>{t('log.date')}</TableHeaderCell>
+                <TableHeaderCell>{t('log.what')}</TableHeaderCell>
+                <TableHeaderCell>{t('log.howMany')}</TableHeaderCell>
+                <TableHeaderCell>{t('log.note')}</TableHeaderCell>
               </TableRow>
             </TableHeader>
             <TableBody>
               {batch.log.map((e) => (
                 <TableRow key={e.id}>
-                  <TableCell>{shortDate(e.date)}</TableCell>
+                  <TableCell>{fmt.date(e.date, SHORT_DAY)}</TableCell>
                   <TableCell>
-                    {LOG_KIND_WORDS[e.kind].label}
-                    {e.reason ? `: ${LOSS_REASON_WORDS[e.reason]}` : ''}
+                    {t(`kinds.${e.kind}`)}
+                    {e.reason ? `: ${t(`reasons.${e.reason}`)}` : ''}
                   </TableCell>
-                  <TableCell>{e.count}</TableCell>
+                  <TableCell>{fmt.number(e.count)}</TableCell>
                   <TableCell>{e.note ?? ''}</TableCell>
                 </TableRow>
               ))}

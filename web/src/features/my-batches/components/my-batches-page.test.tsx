@@ -1,5 +1,6 @@
-import { screen, within } from '@testing-library/react';
-import { describe, expect, it, vi } from 'vitest';
+import { act, screen, within } from '@testing-library/react';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { deviceOutbox } from '../offline/use-log-outbox.js';
 import { apiError, type FakeRoutes } from '../../../testing/fake-api.js';
 import { juniperGrower, priyaMember } from '../../../testing/fixtures.js';
 import { renderApp } from '../../../testing/render-app.js';
@@ -16,10 +17,11 @@ import {
 // batches. The log checks are the shared logEntryRequestSchema's; the dates are the fixtures'.
 const amara = { ...juniperGrower, id: 'u-amara', displayName: 'Amara Reyes', email: 'amara.reyes@example.org' };
 
-function openMyBatches(me = amara, over: FakeRoutes = {}) {
+function openMyBatches(me = amara, over: FakeRoutes = {}, locale?: 'en' | 'es') {
   return renderApp({
     path: '/my-batches',
     token: 'token',
+    ...(locale && { locale }),
     api: {
       'GET /api/me': { body: me },
       [`GET ${BATCHES_PATH}`]: { body: seasonBatches },
@@ -33,6 +35,54 @@ const card = async (name: string) =>
   within((await screen.findByRole('heading', { level: 2, name })).closest('section') as HTMLElement);
 
 describe('My batches', () => {
+  beforeEach(async () => {
+    await deviceOutbox().db.entries.clear();
+  });
+
+  it('keeps an entry made with no connection, marked not yet sent, and sends it when the connection returns', async () => {
+    let online = false;
+    const held = new Set<string>();
+    const { user, api } = openMyBatches(amara, {
+      [`POST ${BATCHES_PATH}/${milkweed.id}/log`]: (request) => {
+        // No connection: fetch itself fails, as in a browser with no signal.
+        if (!online) throw new TypeError('Failed to fetch');
+        held.add(String((request.body as { clientId: string }).clientId));
+        return { status: 201, body: milkweed };
+      },
+    });
+    const form = within(await screen.findByRole('form', { name: 'Add to the log: Butterfly milkweed' }));
+    await user.click(form.getByRole('button', { name: 'Came up' }));
+    await user.type(form.getByRole('textbox', { name: /How many/ }), '12');
+    await user.click(form.getByRole('button', { name: 'Add to the log' }));
+    expect(await form.findByText(/Kept on this device, not yet sent/)).toBeInTheDocument();
+    const waiting = within(await screen.findByRole('list', { name: 'Waiting on this device: Butterfly milkweed' }));
+    expect(waiting.getByText('Not yet sent')).toBeInTheDocument();
+    expect(screen.getByText(/1 log entry is kept on this device/)).toBeInTheDocument();
+
+    online = true;
+    await act(async () => {
+      window.dispatchEvent(new Event('online'));
+    });
+    await vi.waitFor(() => expect(screen.queryByText('Not yet sent')).not.toBeInTheDocument());
+    // Sent twice in all (once failed, once stored), always with the same clientId: the API holds one entry.
+    const calls = api.callsTo('POST', `${BATCHES_PATH}/${milkweed.id}/log`);
+    expect(new Set(calls.map((c) => (c.body as { clientId: string }).clientId)).size).toBe(1);
+    expect(held.size).toBe(1);
+  });
+
+  it('speaks Spanish when the page is in Spanish: log buttons, totals, units and dates', async () => {
+    openMyBatches(amara, {}, 'es');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Mis lotes' })).toBeInTheDocument();
+    const m = await card('Butterfly milkweed');
+    expect(m.getByText(/· Macetas afuera durante el invierno/)).toBeInTheDocument();
+    expect(m.getByText(/20 plantas en 20 macetas; siembra unas 34 semillas/)).toBeInTheDocument();
+    expect(m.getByText('Sembradas 150 · brotaron 0 · trasplantadas 0 · perdidas 0 · listas 0')).toBeInTheDocument();
+    const form = within(m.getByRole('form', { name: 'Añadir al registro: Butterfly milkweed' }));
+    expect(form.getByRole('button', { name: 'Brotaron' })).toBeInTheDocument();
+    expect(form.getByRole('button', { name: 'Añadir al registro' })).toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'Cómo cultivo' })).toBeInTheDocument();
+  });
+
   it("shows each batch with its dates, treatment, how-to, cautions and log, and the grower's supplies", async () => {
     openMyBatches();
     expect(await screen.findByRole('heading', { level: 1, name: 'My batches' })).toBeInTheDocument();

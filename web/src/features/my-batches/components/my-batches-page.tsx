@@ -6,27 +6,33 @@ import { Heading } from '../../../components/page/page-heading.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { QueryState } from '../../../components/states/index.js';
 import { SupplyTable } from '../../../components/supplies/supply-table.js';
-import { localToday, MY_BATCHES_WORDS } from '../utils/my-batches-words.js';
+import { useTranslation } from 'react-i18next';
+import { localToday } from '../utils/my-batches-words.js';
 import { BatchCard } from './batch-card.js';
 import { CalendarDownload } from './calendar-download.js';
 import { GrowerSetupCard } from './grower-setup-card.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
+import { useLogOutbox, type LogOutboxState } from '../offline/use-log-outbox.js';
+import { OutboxBar } from './outbox-bar.js';
 
 /** A grower's batches in one group's season, with their own supply list. */
 export function MyBatchesPage({ slug, userId }: { slug: string; userId: string }) {
   const styles = useMyBatchesStyles();
+  const { t } = useTranslation('batches');
   const batches = useQuery(batchesQueryOptions(slug));
+  const outbox = useLogOutbox(slug, userId);
   return (
     <>
-      <PageIntro title={MY_BATCHES_WORDS.title}>{MY_BATCHES_WORDS.lead}</PageIntro>
+      <PageIntro title={t('page.title')}>{t('page.lead')}</PageIntro>
+      <OutboxBar outbox={outbox} />
       <QueryState
         query={batches}
-        loading={MY_BATCHES_WORDS.loading}
-        error={MY_BATCHES_WORDS.failed}
+        loading={t('page.loading')}
+        error={t('page.failed')}
         isEmpty={(d) => d.batches.length === 0}
-        empty={MY_BATCHES_WORDS.none}
+        empty={t('page.none')}
       >
-        {(d) => <BatchList slug={slug} answer={d} />}
+        {(d) => <BatchList slug={slug} answer={d} outbox={outbox} />}
       </QueryState>
       <div className={styles.after}>
         <GrowerSetupCard slug={slug} userId={userId} />
@@ -35,22 +41,23 @@ export function MyBatchesPage({ slug, userId }: { slug: string; userId: string }
   );
 }
 
-function BatchList({ slug, answer }: { slug: string; answer: SeasonBatches }) {
+function BatchList({ slug, answer, outbox }: { slug: string; answer: SeasonBatches; outbox: LogOutboxState }) {
   const styles = useMyBatchesStyles();
+  const { t } = useTranslation('batches');
   const today = localToday();
   const mine = answer.supplies.byGrower[0];
   return (
     <div className={styles.stack}>
       <CalendarDownload slug={slug} year={answer.year} />
       {answer.batches.map((b) => (
-        <BatchCard key={b.id} slug={slug} batch={b} today={today} />
+        <BatchCard key={b.id} slug={slug} batch={b} today={today} outbox={outbox} />
       ))}
       {mine ? (
         <ContentCard aria-labelledby="my-supplies">
           <Heading level="section" id="my-supplies">
-            {MY_BATCHES_WORDS.supplies}
+            {t('page.supplies')}
           </Heading>
-          <SupplyTable list={mine.list} label="My supply list" />
+          <SupplyTable list={mine.list} label={t('page.suppliesLabel')} />
         </ContentCard>
       ) : null}
     </div>

@@ -29,4 +29,23 @@ export const useMyBatchesStyles = makeStyles({
   field: { maxWidth: '24rem' },
   logTable: { fontVariantNumeric: 'tabular-nums' },
   scroller: { overflowX: 'auto', maxWidth: '100%' },
+  pending: {
+    listStyleType: 'none',
+    padding: 0,
+    margin: `${tokens.spacingVerticalS} 0`,
+    display: 'grid',
+    gap: tokens.spacingVerticalXS,
+  },
+  pendingItem: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    gap: tokens.spacingHorizontalS,
+    padding: tokens.spacingVerticalS,
+    borderLeft: `4px solid ${tokens.colorStatusWarningBorder1}`,
+    backgroundColor: tokens.colorStatusWarningBackground1,
+    fontVariantNumeric: 'tabular-nums',
+  },
+  pendingState: { color: tokens.colorStatusWarningForeground1 },
+  refusedState: { color: tokens.colorStatusDangerForeground1 },
 });

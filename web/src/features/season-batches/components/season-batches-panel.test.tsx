@@ -15,10 +15,11 @@ import {
 
 // Who sees what follows the batches API (api/src/batches): organisers split and watch progress.
 // The forecast words show the API's own numbers with their range (DESIGN.md: no bare scores).
-function openSeason(me = maraOrganiser, over: FakeRoutes = {}) {
+function openSeason(me = maraOrganiser, over: FakeRoutes = {}, locale?: 'en' | 'es') {
   return renderApp({
     path: '/season',
     token: 'token',
+    ...(locale && { locale }),
     api: {
       'GET /api/me': { body: me },
       [`GET ${SEASON_PATH}`]: { body: season },
@@ -105,5 +106,51 @@ describe("the organiser's growers, batches and progress", () => {
     expect(screen.queryByRole('heading', { name: 'Progress and ready forecast' })).not.toBeInTheDocument();
     expect(api.callsTo('GET', `${SEASON_PATH}/progress`)).toHaveLength(0);
     expect(api.callsTo('GET', `${SEASON_PATH}/batches`)).toHaveLength(0);
+  });
+
+  it('speaks Spanish when the page is in Spanish: progress, the forecast range and the e-mail card', async () => {
+    openSeason(maraOrganiser, {}, 'es');
+    const bySpecies = within(await screen.findByRole('region', { name: 'Avance por especie' }));
+    const row = within(bySpecies.getByText('Wild bergamot').closest('tr') as HTMLElement);
+    expect(row.getByText('unas 36 (29–45)')).toBeInTheDocument();
+    expect(row.getByText(/faltan 14 para el objetivo/)).toBeInTheDocument();
+    expect(screen.getByRole('form', { name: 'Enviar un aviso de helada' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Enviar ahora el resumen de esta semana' })).toBeInTheDocument();
+  });
+
+  it('sends a frost warning for a night with a note, and this week’s summary, saying who got them', async () => {
+    const { user, api } = openSeason(maraOrganiser, {
+      [`POST ${SEASON_PATH}/frost-warning`]: {
+        body: { night: '2027-04-27', growers: [{ userId: 'u-amara', displayName: 'Amara Reyes', batches: 2 }] },
+      },
+      [`POST ${SEASON_PATH}/weekly-summary`]: { body: { week: '2027-W17', sent: 2, alreadySent: 1 } },
+    });
+    const form = within(await screen.findByRole('form', { name: 'Send a frost warning' }));
+    const night = form.getByLabelText('Night of the frost');
+    await user.clear(night);
+    await user.type(night, '2027-04-27');
+    await user.type(form.getByRole('textbox', { name: /A line from you/ }), 'Low of 28 °F.');
+    await user.click(form.getByRole('button', { name: 'Send the frost warning' }));
+    expect(await screen.findByText('Sent to Amara Reyes (2 batches).')).toBeInTheDocument();
+    expect(api.callsTo('POST', `${SEASON_PATH}/frost-warning`)[0].body).toEqual({
+      night: '2027-04-27',
+      note: 'Low of 28 °F.',
+    });
+
+    await user.click(screen.getByRole('button', { name: 'Send this week’s summary now' }));
+    expect(await screen.findByText('Sent to 2 growers. 1 had this week’s already.')).toBeInTheDocument();
+  });
+
+  it('shows the API’s 400 beside the night and says nothing was sent', async () => {
+    const { user } = openSeason(maraOrganiser, {
+      [`POST ${SEASON_PATH}/frost-warning`]: apiError(400, 'Please check: night', {
+        error: 'Bad Request',
+        fields: [{ field: 'night', message: 'must be from 2027-04-20 to 2027-05-04' }],
+      }),
+    });
+    const form = within(await screen.findByRole('form', { name: 'Send a frost warning' }));
+    await user.click(form.getByRole('button', { name: 'Send the frost warning' }));
+    expect(await form.findByText('Must be from 2027-04-20 to 2027-05-04')).toBeInTheDocument();
+    expect(screen.queryByText(/^Sent to/)).not.toBeInTheDocument();
   });
 });

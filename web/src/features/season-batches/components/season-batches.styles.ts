@@ -33,4 +33,10 @@ export const useSeasonBatchesStyles = makeStyles({
     padding: 0,
   },
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalXS },
+  mailForm: {
+    display: 'grid',
+    gap: tokens.spacingVerticalM,
+    maxWidth: '28rem',
+    marginBottom: tokens.spacingVerticalL,
+  },
 });

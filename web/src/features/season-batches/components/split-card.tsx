@@ -12,18 +12,21 @@ import {
   TableRow,
 } from '@fluentui/react-components';
 import { DeleteRegular, SaveRegular, SparkleRegular } from '@fluentui/react-icons';
-import { SOWING_METHOD_WORDS, type BatchSplitProposalAnswer, type SeasonBatches } from '@homeground/shared';
+import type { BatchSplitProposalAnswer, SeasonBatches } from '@homeground/shared';
 import { type FormEvent, useState } from 'react';
 import { useProposeSplitMutation, useSaveSplitMutation } from '../../../api/batches/batches.mutations.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
 import { draftFromProposal, rowErrors, useSplitDraft } from '../hooks/use-split-draft.js';
-import { SEASON_BATCHES_WORDS as W } from '../utils/season-batches-words.js';
+import { useTranslation } from 'react-i18next';
+import { useWords } from '../../../lib/i18n/index.js';
 import { useSeasonBatchesStyles } from './season-batches.styles.js';
 
 /** The split: Homeground proposes, the organiser changes plants or removes batches, then saves the whole split. */
 export function SplitEditor({ slug, saved }: { slug: string; saved: SeasonBatches }) {
   const styles = useSeasonBatchesStyles();
+  const { t } = useTranslation('seasonBatches');
+  const words = useWords();
   const draft = useSplitDraft(saved);
   const propose = useProposeSplitMutation(slug);
   const save = useSaveSplitMutation(slug);
@@ -56,7 +59,7 @@ export function SplitEditor({ slug, saved }: { slug: string; saved: SeasonBatche
       },
       onError: (error) => {
         // Nothing was written: the draft stays as typed, with the API's words beside each row.
-        if (!isApiRequestError(error)) return setFailure('Something went wrong. Try again.');
+        if (!isApiRequestError(error)) return setFailure(t('split.failed'));
         const errors = rowErrors(error.fields ?? []);
         draft.setErrors(errors);
         setFailure(errors[-1] ?? (Object.keys(errors).length ? null : error.message));
@@ -65,21 +68,21 @@ export function SplitEditor({ slug, saved }: { slug: string; saved: SeasonBatche
   };
 
   return (
-    <form onSubmit={submit} noValidate aria-label="The season's batches">
-      <Heading level="card">{W.split}</Heading>
-      <p className={styles.lead}>{W.splitLead}</p>
+    <form onSubmit={submit} noValidate aria-label={t('split.form')}>
+      <Heading level="card">{t('split.title')}</Heading>
+      <p className={styles.lead}>{t('split.lead')}</p>
       {draft.rows.length === 0 ? (
-        <p>{W.noBatches}</p>
+        <p>{t('split.none')}</p>
       ) : (
-        <div className={styles.scroller} role="region" aria-label="Batches table" tabIndex={0}>
-          <Table className={styles.table} aria-label="Batches table">
+        <div className={styles.scroller} role="region" aria-label={t('split.table')} tabIndex={0}>
+          <Table className={styles.table} aria-label={t('split.table')}>
             <TableHeader>
               <TableRow>
-                <TableHeaderCell>Grower</TableHeaderCell>
-                <TableHeaderCell>Species</TableHeaderCell>
-                <TableHeaderCell>Method</TableHeaderCell>
-                <TableHeaderCell>Plants</TableHeaderCell>
-                <TableHeaderCell>Remove</TableHeaderCell>
+                <TableHeaderCell>{t('split.grower')}</TableHeaderCell>
+                <TableHeaderCell>{t('split.species')}</TableHeaderCell>
+                <TableHeaderCell>{t('split.method')}</TableHeaderCell>
+                <TableHeaderCell>{t('split.plants')}</TableHeaderCell>
+                <TableHeaderCell>{t('split.remove')}</TableHeaderCell>
               </TableRow>
             </TableHeader>
             <TableBody>
@@ -87,11 +90,11 @@ export function SplitEditor({ slug, saved }: { slug: string; saved: SeasonBatche
                 <TableRow key={`${r.id ?? 'new'}-${r.growerId}-${r.slug}-${r.method}`}>
                   <TableCell>{r.growerName}</TableCell>
                   <TableCell>{r.commonName}</TableCell>
-                  <TableCell>{SOWING_METHOD_WORDS[r.method].phrase}</TableCell>
+                  <TableCell>{words.sowingMethod[r.method].phrase}</TableCell>
                   <TableCell>
                     <Field
                       label={{
-                        children: `Plants of ${r.commonName} for ${r.growerName}`,
+                        children: t('split.plantsFor', { name: r.commonName, grower: r.growerName }),
                         className: styles.visuallyHidden,
                       }}
                       validationMessage={draft.errors[i]}
@@ -111,7 +114,9 @@ export function SplitEditor({ slug, saved }: { slug: string; saved: SeasonBatche
                       icon={<DeleteRegular />}
                       disabled={r.logged}
                       aria-label={
-                        r.logged ? `${r.commonName} has a log and stays` : `Remove ${r.commonName} for ${r.growerName}`
+                        r.logged
+                          ? t('split.stays', { name: r.commonName })
+                          : t('split.removeFor', { name: r.commonName, grower: r.growerName })
                       }
                       onClick={() => draft.remove(i)}
                     />
@@ -125,7 +130,7 @@ export function SplitEditor({ slug, saved }: { slug: string; saved: SeasonBatche
       {proposal && proposal.unassigned.length > 0 ? (
         <MessageBar intent="warning">
           <MessageBarBody>
-            <strong>{W.unassigned}: </strong>
+            <strong>{t('split.unassigned')}: </strong>
             {proposal.unassigned.map((u) => `${u.plants} ${u.commonName}: ${u.reason}`).join(' ')}
           </MessageBarBody>
         </MessageBar>
@@ -137,12 +142,12 @@ export function SplitEditor({ slug, saved }: { slug: string; saved: SeasonBatche
       ) : null}
       <div className={styles.actions}>
         <Button icon={<SparkleRegular />} onClick={askForSplit} disabled={propose.isPending}>
-          {propose.isPending ? W.proposing : W.propose}
+          {propose.isPending ? t('split.proposing') : t('split.propose')}
         </Button>
         <Button type="submit" appearance="primary" icon={<SaveRegular />} disabled={save.isPending}>
-          {save.isPending ? W.saving : W.save}
+          {save.isPending ? t('split.saving') : t('split.save')}
         </Button>
-        <span role="status">{draft.isDirty ? W.unsaved : done ? W.saved : ''}</span>
+        <span role="status">{draft.isDirty ? t('split.unsaved') : done ? t('split.saved') : ''}</span>
       </div>
     </form>
   );

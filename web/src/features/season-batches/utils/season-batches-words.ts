@@ -1,40 +1,9 @@
-import { SOWING_METHOD_WORDS, UNIT_OF, UNIT_WORDS, type GrowerMethod } from '@homeground/shared';
+import type { TFunction } from 'i18next';
 
-/**
- * The organiser's growers, split and progress words, kept together so they can move into a catalogue.
- */
-export const SEASON_BATCHES_WORDS = {
-  growers: 'Growers',
-  growersLead: 'What each grower raises plants by, and how many pots, containers or blocks they can tend.',
-  noGrowers: 'No grower has said how they grow yet.',
-  notStated: 'Has not said yet',
-  split: 'Batches',
-  splitLead:
-    'Homeground proposes a split of the targets by each species’ seed treatment and each grower’s room. Change the plants or remove a batch, then save.',
-  propose: 'Propose a split',
-  proposing: 'Proposing…',
-  save: 'Save the batches',
-  saving: 'Saving…',
-  saved: 'Batches saved.',
-  unsaved: 'You have changes that are not saved yet.',
-  noBatches: 'No batches yet. Propose a split to start.',
-  unassigned: 'Not placed',
-  groupSupplies: 'What the group needs',
-  progress: 'Progress and ready forecast',
-  progressLead: 'Each species’ target against what the growers have sown, what came up and what is ready.',
-  byGrower: 'By grower',
-  howWorkedOut: 'How the forecast is worked out',
-  loading: 'Loading the batches',
-  failed: 'The batches did not load.',
-  progressFailed: 'The progress did not load.',
-} as const;
-
-/** "12 of 24 covered containers" */
-export function roomWords(method: GrowerMethod, used: number, capacity: number): string {
-  return `${SOWING_METHOD_WORDS[method].phrase}: ${used} of ${capacity} ${UNIT_WORDS[UNIT_OF[method]].many} used`;
-}
-
-/** "about 36 (29–40)": the expected count with its range, never a bare score. */
-export function forecastWords(f: { expected: number; low: number; high: number }): string {
-  return f.low === f.high ? `about ${f.expected}` : `about ${f.expected} (${f.low}–${f.high})`;
+/** "about 36 (29–45)": the expected count with its range, never a bare score. */
+export function forecastWords(
+  t: TFunction<'seasonBatches'>,
+  f: { expected: number; low: number; high: number },
+): string {
+  return f.low === f.high ? t('progress.about', f) : t('progress.aboutRange', f);
 }

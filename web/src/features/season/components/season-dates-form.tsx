@@ -1,6 +1,7 @@
 import { Button, Field, Input, makeStyles, tokens } from '@fluentui/react-components';
 import { type Season, seasonDatesFormSchema } from '@homeground/shared';
 import { useState } from 'react';
+import { useTranslation } from 'react-i18next';
 import { useSaveSeasonMutation } from '../../../api/seasons/seasons.mutations.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
 
@@ -20,6 +21,7 @@ const useStyles = makeStyles({
  */
 export function SeasonDatesForm({ slug, season }: { slug: string; season: Season }) {
   const styles = useStyles();
+  const { t } = useTranslation('season');
   const save = useSaveSeasonMutation(slug);
   const form = useSchemaForm({
     schema: seasonDatesFormSchema,
@@ -31,18 +33,12 @@ export function SeasonDatesForm({ slug, season }: { slug: string; season: Season
     save.mutate(body, { onSuccess: () => setSaved(true), onError: (e) => form.fail(e) });
   });
   return (
-    <form
-      ref={form.formRef}
-      onSubmit={submit}
-      noValidate
-      aria-label="Change the season's dates"
-      className={styles.form}
-    >
+    <form ref={form.formRef} onSubmit={submit} noValidate aria-label={t('dates.form')} className={styles.form}>
       {form.failure ? <p role="alert">{form.failure}</p> : null}
-      <Field label="Average last spring frost" {...form.validation('lastFrost')}>
+      <Field label={t('dates.lastFrost')} {...form.validation('lastFrost')}>
         <Input type="date" value={form.values.lastFrost} onChange={(_, d) => form.change('lastFrost', d.value)} />
       </Field>
-      <Field label="Plant share" {...form.validation('plantShareDate')}>
+      <Field label={t('dates.plantShare')} {...form.validation('plantShareDate')}>
         <Input
           type="date"
           value={form.values.plantShareDate}
@@ -50,9 +46,9 @@ export function SeasonDatesForm({ slug, season }: { slug: string; season: Season
         />
       </Field>
       <Button type="submit" disabled={save.isPending}>
-        {save.isPending ? 'Saving…' : 'Save the dates'}
+        {save.isPending ? t('dates.saving') : t('dates.save')}
       </Button>
-      <span aria-live="polite">{saved ? 'Dates saved: batch dates follow them.' : ''}</span>
+      <span aria-live="polite">{saved ? t('dates.saved') : ''}</span>
     </form>
   );
 }

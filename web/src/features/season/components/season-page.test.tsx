@@ -24,6 +24,19 @@ function targetRow(name: string) {
 }
 
 describe('the season page', () => {
+  it('speaks Spanish when the page is in Spanish: title, dates and the milkweed share', async () => {
+    renderApp({
+      path: '/season',
+      token: 'token',
+      locale: 'es',
+      api: { 'GET /api/me': { body: maraOrganiser }, ...seasonRoutes() },
+    });
+    expect(await screen.findByRole('heading', { level: 1, name: 'Plan de temporada 2027' })).toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'Fechas y métodos' })).toBeInTheDocument();
+    expect(screen.getByText('lunes, 10 de mayo de 2027')).toBeInTheDocument(); // CLDR es-US via Intl
+    expect(screen.getByText(/^25\s?%\s+de las plantas$/)).toBeInTheDocument();
+  });
+
   it("shows an organiser the season's dates, targets and seed list with its cautions", async () => {
     openSeason();
     expect(await screen.findByRole('heading', { level: 1, name: 'Season plan 2027' })).toBeInTheDocument();

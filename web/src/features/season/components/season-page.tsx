@@ -1,5 +1,6 @@
 import type { Season } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
+import { useTranslation } from 'react-i18next';
 import { seasonQueryOptions } from '../../../api/seasons/seasons.queries.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { QueryState } from '../../../components/states/index.js';
@@ -15,9 +16,10 @@ import { useSeasonStyles } from './season.styles.js';
  * targets and ask for a share list; growers and members read the plan and the seed list.
  */
 export function SeasonPage({ slug, canEdit }: { slug: string; canEdit: boolean }) {
+  const { t } = useTranslation('season');
   const season = useQuery(seasonQueryOptions(slug));
   return (
-    <QueryState query={season} loading="Loading the season plan" error="The season plan did not load.">
+    <QueryState query={season} loading={t('page.loading')} error={t('page.failed')}>
       {(s) => <SeasonPlan slug={slug} season={s} canEdit={canEdit} />}
     </QueryState>
   );
@@ -25,16 +27,20 @@ export function SeasonPage({ slug, canEdit }: { slug: string; canEdit: boolean }
 
 function SeasonPlan({ slug, season, canEdit }: { slug: string; season: Season; canEdit: boolean }) {
   const styles = useSeasonStyles();
+  const { t } = useTranslation('season');
   const draft = useTargetDraft(season);
   return (
     <>
       <div data-print-intro>
-        <PageIntro title={`Season plan ${season.year}`}>
-          {season.groupName}, {season.place.town}
-          {season.place.ecoregionCode ? ` (ecoregion ${season.place.ecoregionCode})` : ''}.{' '}
-          {canEdit
-            ? 'Set the targets, ask for a share list, and buy or collect what the seed list says.'
-            : 'The organisers set this plan; ask them if something should change.'}
+        <PageIntro title={t('page.titleYear', { year: season.year })}>
+          {season.place.ecoregionCode
+            ? t('page.whereEcoregion', {
+                group: season.groupName,
+                town: season.place.town,
+                code: season.place.ecoregionCode,
+              })
+            : t('page.where', { group: season.groupName, town: season.place.town })}{' '}
+          {canEdit ? t('page.leadOrganiser') : t('page.leadReader')}
         </PageIntro>
       </div>
       <div className={styles.stack} data-season-cards>

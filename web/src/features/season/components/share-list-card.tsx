@@ -5,7 +5,7 @@ import { type FormEvent, useState } from 'react';
 import { useProposeShareListMutation } from '../../../api/seasons/seasons.mutations.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
-import { asSentence } from '../../../lib/forms/field-errors.js';
+import { useTranslation } from 'react-i18next';
 import type { TargetDraft } from '../hooks/use-target-draft.js';
 import { ProposalList } from './proposal-list.js';
 import { useSeasonStyles } from './season.styles.js';
@@ -17,6 +17,7 @@ import { useSeasonStyles } from './season.styles.js';
  */
 export function ShareListCard({ slug, season, draft }: { slug: string; season: Season; draft: TargetDraft }) {
   const styles = useSeasonStyles();
+  const { t } = useTranslation('season');
   const propose = useProposeShareListMutation(slug);
   const [milkweedPct, setMilkweedPct] = useState(String(Math.round(season.milkweedShare * 100)));
   const [fieldError, setFieldError] = useState<string | undefined>();
@@ -28,7 +29,7 @@ export function ShareListCard({ slug, season, draft }: { slug: string; season: S
     const parsed = shareListRequestSchema.safeParse({ milkweedShare: share });
     if (!parsed.success) {
       // The schema speaks in shares of 1; the field asks for a percentage.
-      setFieldError(Number.isNaN(share) ? 'Enter a percentage from 0 to 100.' : asSentence('must be from 0 to 100%'));
+      setFieldError(Number.isNaN(share) ? t('shareList.notAPercentage') : t('shareList.outOfRange'));
       return;
     }
     setFieldError(undefined);
@@ -38,15 +39,12 @@ export function ShareListCard({ slug, season, draft }: { slug: string; season: S
   return (
     <ContentCard aria-labelledby="season-share-list">
       <Heading level="section" id="season-share-list">
-        Share list
+        {t('shareList.title')}
       </Heading>
-      <p className={styles.lead}>
-        Species native to your ecoregion that your growers can raise, chosen for wildlife, bloom across the season and
-        the yards people have. Add the ones you want to your targets, then save the targets.
-      </p>
+      <p className={styles.lead}>{t('shareList.lead')}</p>
       <form onSubmit={submit} noValidate className={styles.actions} data-print="hide">
         <Field
-          label="Milkweeds for monarchs (% of the plants)"
+          label={t('shareList.milkweeds')}
           validationMessage={fieldError}
           validationState={fieldError ? 'error' : 'none'}
         >
@@ -61,12 +59,12 @@ export function ShareListCard({ slug, season, draft }: { slug: string; season: S
           />
         </Field>
         <Button type="submit" appearance="primary" icon={<SparkleRegular />} disabled={propose.isPending}>
-          {propose.isPending ? 'Proposing…' : 'Propose species'}
+          {propose.isPending ? t('shareList.proposing') : t('shareList.propose')}
         </Button>
       </form>
       {propose.isError ? (
         <MessageBar intent="error">
-          <MessageBarBody>The share list could not be worked out: {propose.error.message}</MessageBarBody>
+          <MessageBarBody>{t('shareList.failed', { reason: propose.error.message })}</MessageBarBody>
         </MessageBar>
       ) : null}
       {propose.data ? <ProposalList list={propose.data} draft={draft} /> : null}
