@@ -121,24 +121,15 @@ export class ReservationsService {
     const share = this.views.requireShare(group);
     assertOpen(share);
     const now = this.clock.now();
-    this.checkLines(share, req.lines);
+    const stock = this.checkLines(share, req.lines);
     const slot = this.slotOf(share, req.slotId, now.getTime(), 'slotId');
+    this.refuseEarly(share, group, slot, stock, req);
     const { token, hash } = newToken();
     const id = randomUUID();
     const stamp = now.toISOString();
     this.db.atomically(() => {
       assertOpen(this.views.shareById(share.id));
-      if (
-        this.db.get(
-          `SELECT id FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
-          share.id,
-          req.email,
-        )
-      )
-        throw new ConflictException({
-          message: `${req.email} has a reservation at this share already: change it with the link in its e-mail.`,
-          fields: [{ field: 'email', message: 'has a reservation at this share already' }],
-        });
+      if (this.hasReservation(share.id, req.email)) throw alreadyReserved(req.email);
       this.bookOrExplain(slot, now.getTime(), 'slotId');
       this.takeOrExplain(share, group, req.lines);
       this.db.run(
@@ -421,17 +412,22 @@ export class ReservationsService {
   }
 
   private async sendConfirmation(group: Group, view: TakerReservation, link: string, changed: boolean): Promise<void> {
-    const message = reservationEmail({
-      name: view.name,
-      groupName: group.name,
-      place: view.share.place,
-      slot: view.slot,
-      lines: view.lines,
-      careSheet: view.careSheet,
-      link,
-      changed,
-    });
-    this.mail.send({ to: view.email, ...message, kind: 'plant-share-reservation', groupId: group.id });
+    // Rendered when the queue sends it, so a burst of reservations does not wait on the e-mail's words.
+    this.mail.send(() => ({
+      to: view.email,
+      ...reservationEmail({
+        name: view.name,
+        groupName: group.name,
+        place: view.share.place,
+        slot: view.slot,
+        lines: view.lines,
+        careSheet: view.careSheet,
+        link,
+        changed,
+      }),
+      kind: 'plant-share-reservation',
+      groupId: group.id,
+    }));
   }
 
   /** The reservation a private link opens; an unknown link is refused as forged. */
@@ -444,19 +440,54 @@ export class ReservationsService {
     return { group, share, row };
   }
 
-  /** Each species must be on offer here, and the lines within the household limits (400 naming the line). */
-  private checkLines(share: ShareRow, lines: readonly PlantLine[]): void {
-    const offered = new Set(
+  /**
+   * Each species must be on offer here, and the lines within the household limits (400 naming the line).
+   * Answers the share's stock rows as read, by species.
+   */
+  private checkLines(share: ShareRow, lines: readonly PlantLine[]): Map<string, StockRow> {
+    const stock = new Map(
       this.views
         .stock(share.id)
         .filter((s) => s.offered > 0)
-        .map((s) => s.slug),
+        .map((s) => [s.slug, s]),
     );
     const problems: FieldProblem[] = lines.flatMap((l, i) =>
-      offered.has(l.speciesSlug) ? [] : [{ field: `lines.${i}.speciesSlug`, message: 'is not offered at this share' }],
+      stock.has(l.speciesSlug) ? [] : [{ field: `lines.${i}.speciesSlug`, message: 'is not offered at this share' }],
     );
     problems.push(...checkHouseholdLimits(lines, { perSpecies: share.per_species_limit, total: share.total_limit }));
     if (problems.length) throw badRequest(problems);
+    return stock;
+  }
+
+  private hasReservation(shareId: string, email: string): boolean {
+    return Boolean(
+      this.db.get(
+        `SELECT id FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
+        shareId,
+        email,
+      ),
+    );
+  }
+
+  /**
+   * Once the plants have run out, most of a burst asks for what is gone: those get their answer from
+   * what was just read, before a link is made or a transaction begins, in the same order and words
+   * the transaction would give. Passing here proves nothing: the transaction checks all of it again.
+   */
+  private refuseEarly(
+    share: ShareRow,
+    group: Group,
+    slot: SlotRow,
+    stock: ReadonlyMap<string, StockRow>,
+    req: ParsedReservationRequest,
+  ): void {
+    if (this.hasReservation(share.id, req.email)) throw alreadyReserved(req.email);
+    if (slot.booked >= slot.capacity) throw slotFull('slotId');
+    const short = req.lines.flatMap((l, i) => {
+      const left = stock.get(l.speciesSlug)?.remaining ?? 0;
+      return left >= l.count ? [] : [{ field: `lines.${i}.count`, slug: l.speciesSlug, left }];
+    });
+    if (short.length) throw this.allTaken(group, short);
   }
 
   private slotOf(share: ShareRow, slotId: string, nowMs: number, field: string): SlotRow {
@@ -470,10 +501,7 @@ export class ReservationsService {
     if (this.ledger.bookSlot(slot.id, nowMs)) return;
     const now = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', slot.id)!;
     if (now.starts_at_ms <= nowMs) throw badRequest([{ field, message: 'is in the past: choose a later slot' }]);
-    throw new ConflictException({
-      message: 'That pickup slot is full: choose another.',
-      fields: [{ field, message: 'is full' }],
-    });
+    throw slotFull(field);
   }
 
   /** Takes every line or none; when any ran out, 409 names each short line and offers the waitlist. */
@@ -494,8 +522,13 @@ export class ReservationsService {
       short.push({ field: fieldOf(l, i), slug: l.speciesSlug, left: row?.remaining ?? 0 });
     });
     if (short.length === 0) return;
+    throw this.allTaken(group, short);
+  }
+
+  /** 409 naming each short line, with the waitlist offered. */
+  private allTaken(group: Group, short: readonly { field: string; slug: string; left: number }[]): ConflictException {
     const names = short.map((s) => this.views.names(s.slug).commonName);
-    throw new ConflictException({
+    return new ConflictException({
       message: `All taken: ${names.join(', ')} ${short.length === 1 ? 'has' : 'have'} no plants left for this request. Join the waitlist and we will e-mail you if plants come free.`,
       fields: short.map((s) => ({ field: s.field, message: s.left === 0 ? 'all taken' : `only ${s.left} left` })),
       waitlist: { speciesSlugs: short.map((s) => s.slug), path: `/api/plant-shares/${group.slug}/waitlist` },
@@ -516,6 +549,20 @@ export class ReservationsService {
         l.count,
       );
   }
+}
+
+function alreadyReserved(email: string): ConflictException {
+  return new ConflictException({
+    message: `${email} has a reservation at this share already: change it with the link in its e-mail.`,
+    fields: [{ field: 'email', message: 'has a reservation at this share already' }],
+  });
+}
+
+function slotFull(field: string): ConflictException {
+  return new ConflictException({
+    message: 'That pickup slot is full: choose another.',
+    fields: [{ field, message: 'is full' }],
+  });
 }
 
 /** Reservations are taken only while the share is open. */

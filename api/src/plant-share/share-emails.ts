@@ -1,15 +1,18 @@
 import type { CareSheetEntry, SharePlace } from '@homeground/shared';
 import { renderEmail } from '../mail/templates/email-layout.js';
 
+/** Built once: a formatter costs far more to make than to use. */
+const SLOT_DAY = new Intl.DateTimeFormat('en-US', {
+  weekday: 'short',
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  timeZone: 'UTC',
+});
+
 /** A slot's time as the organiser wrote it (the place's own clock): "Sat 12 Jun 2027, 09:00–09:30". */
 export function slotWords(start: string, end: string): string {
-  const day = new Date(`${start.slice(0, 10)}T12:00:00Z`).toLocaleDateString('en-US', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  });
+  const day = SLOT_DAY.format(new Date(`${start.slice(0, 10)}T12:00:00Z`));
   return `${day}, ${start.slice(11, 16)}–${end.slice(11, 16)}`;
 }
 

@@ -259,7 +259,7 @@ export class ShareViews {
   async sendOffers(group: Group, share: ShareRow, offers: readonly WaitlistOfferMade[]): Promise<void> {
     for (const o of offers) {
       if (!o.email) continue;
-      const message = waitlistOfferEmail({
+      const input = {
         name: o.name ?? 'there',
         groupName: group.name,
         commonName: this.names(o.slug).commonName,
@@ -267,8 +267,14 @@ export class ShareViews {
         heldUntil: o.heldUntil,
         place: this.place(share),
         link: `${this.config.publicUrl}/plant-share/offers/${o.token}`,
-      });
-      this.mail.send({ to: o.email, ...message, kind: 'plant-share-waitlist-offer', groupId: group.id });
+      };
+      const to = o.email;
+      this.mail.send(() => ({
+        to,
+        ...waitlistOfferEmail(input),
+        kind: 'plant-share-waitlist-offer',
+        groupId: group.id,
+      }));
     }
   }
 
