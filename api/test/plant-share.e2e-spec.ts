@@ -461,6 +461,8 @@ describe('the plant share (e2e, demo data)', () => {
       ['set the status', 'put', `${SHARE}/status`, { status: 'open' }],
       ['check in', 'post', `${SHARE}/reservations/${reservationId}/check-in`, { outcome: 'picked-up' }],
       ['record a walk-up', 'post', `${SHARE}/walk-ups`, { lines: [{ speciesSlug: 'viola-canadensis', count: 1 }] }],
+      ['say what to bring', 'patch', SHARE, { whatToBring: DEMO_SHARE.whatToBring }],
+      ['read the waitlist', 'get', `${SHARE}/waitlist`, undefined],
       ['read the report', 'get', `${SHARE}/report`, undefined],
       ['read the report CSV', 'get', `${SHARE}/report.csv`, undefined],
     ];

@@ -18,6 +18,7 @@ import { AddSignInActivity1765411200000 } from './migrations/1765411200000-add-s
 import { AddAccountDisabled1765497600000 } from './migrations/1765497600000-add-account-disabled.js';
 import { CreateSpeciesChanges1765584000000 } from './migrations/1765584000000-create-species-changes.js';
 import { AddPhotoCredits1765670400000 } from './migrations/1765670400000-add-photo-credits.js';
+import { AddShareWhatToBring1766000000000 } from './migrations/1766000000000-add-share-what-to-bring.js';
 import { SpeciesChangeRow } from '../species/species-change.entity.js';
 import { SignInFailureRow } from '../auth/sign-in-failure.entity.js';
 import { CreateBatches1765324800000 } from './migrations/1765324800000-create-batches.js';
@@ -64,6 +65,7 @@ export const MIGRATIONS = [
   CreateSpeciesChanges1765584000000,
   AddPhotoCredits1765670400000,
   CreateBatches1765324800000,
+  AddShareWhatToBring1766000000000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

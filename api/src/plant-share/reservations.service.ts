@@ -108,6 +108,7 @@ export class ReservationsService {
       species,
       yard: yard.sun && yard.moisture ? { sun: yard.sun, moisture: yard.moisture } : null,
       notes: SHARE_NOTES,
+      whatToBring: share.what_to_bring,
     };
   }
 
@@ -419,6 +420,7 @@ export class ReservationsService {
         name: view.name,
         groupName: group.name,
         place: view.share.place,
+        whatToBring: view.share.whatToBring,
         slot: view.slot,
         lines: view.lines,
         careSheet: view.careSheet,

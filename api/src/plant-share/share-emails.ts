@@ -23,6 +23,7 @@ export function reservationEmail(input: {
   name: string;
   groupName: string;
   place: SharePlace;
+  whatToBring?: string | null;
   slot: { start: string; end: string };
   lines: { commonName: string; count: number }[];
   careSheet: CareSheetEntry[];
@@ -42,6 +43,7 @@ export function reservationEmail(input: {
         : `Your plants from the ${input.groupName} plant share are reserved.`,
       `Pickup slot: ${when}.`,
       `Place: ${placeWords(input.place)}.${input.place.directions ? ` ${input.place.directions}` : ''}`,
+      ...(input.whatToBring ? [`What to bring: ${input.whatToBring}`] : []),
       `Your plants: ${plants}.`,
       'Care sheet:',
       ...care,

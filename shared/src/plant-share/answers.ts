@@ -74,6 +74,40 @@ export interface PlantShare {
   stock: ShareStockLine[];
   households: Record<ReservationStatus, number>;
   walkUps: number;
+  /** What takers should bring to pickup, or null when the organiser has not said. */
+  whatToBring: string | null;
+}
+
+export const WAITLIST_STATUSES = ['waiting', 'offered', 'claimed', 'expired'] as const;
+export type WaitlistStatus = (typeof WAITLIST_STATUSES)[number];
+
+/** One household on a species' waitlist, as the group's organisers see it. */
+export interface ShareWaitlistEntry {
+  /** 1 = first in line, in the order households joined. */
+  position: number;
+  /** Null once names and e-mails are past the share's retention. */
+  name: string | null;
+  email: string | null;
+  /** Plants asked for. */
+  count: number;
+  status: WaitlistStatus;
+  /** Plants held for the household while an offer stands. */
+  held: number;
+  /** While offered: when the hold ends (ISO date-time). */
+  heldUntil: string | null;
+  joinedAt: string;
+}
+
+/** The organiser's view of the waitlist, per species, in the order plants are offered. */
+export interface ShareWaitlist {
+  species: {
+    speciesSlug: string;
+    commonName: string;
+    scientificName: string;
+    /** Plants still on offer of the species (usually 0 while people wait). */
+    remaining: number;
+    entries: ShareWaitlistEntry[];
+  }[];
 }
 
 /** A caution as the fact cards show it: the kind's heading and the record's own calm sentence. */
@@ -142,6 +176,8 @@ export interface PublicPlantShare {
   yard: { sun: Sun; moisture: Moisture } | null;
   /** General safety words shown under the list; local rules come first. */
   notes: string[];
+  /** What takers should bring to pickup, or null when the organiser has not said. */
+  whatToBring: string | null;
 }
 
 /** One species of a care sheet, in words: sun, moisture, spacing and cautions. */
@@ -171,7 +207,14 @@ export interface TakerReservation {
   zip: string;
   slot: { id: string; start: string; end: string };
   lines: ReservationLine[];
-  share: { groupSlug: string; groupName: string; date: string; place: SharePlace; status: ShareStatus };
+  share: {
+    groupSlug: string;
+    groupName: string;
+    date: string;
+    place: SharePlace;
+    status: ShareStatus;
+    whatToBring: string | null;
+  };
   /** True while the share is open and the slot has not started. */
   canChange: boolean;
   careSheet: CareSheetEntry[];
@@ -318,7 +361,31 @@ export const plantShareSchema = z.object({
     cancelled: z.number().int(),
   }),
   walkUps: z.number().int(),
+  whatToBring: z.string().nullable(),
 }) satisfies z.ZodType<PlantShare>;
+
+export const shareWaitlistSchema = z.object({
+  species: z.array(
+    z.object({
+      speciesSlug: z.string(),
+      commonName: z.string(),
+      scientificName: z.string(),
+      remaining: z.number().int(),
+      entries: z.array(
+        z.object({
+          position: z.number().int(),
+          name: z.string().nullable(),
+          email: z.string().nullable(),
+          count: z.number().int(),
+          status: z.enum(WAITLIST_STATUSES),
+          held: z.number().int(),
+          heldUntil: isoDateTime.nullable(),
+          joinedAt: isoDateTime,
+        }),
+      ),
+    }),
+  ),
+}) satisfies z.ZodType<ShareWaitlist>;
 
 const cautionAnswer = z.object({ kind: z.enum(CAUTION_KINDS), title: z.string(), text: z.string() });
 
@@ -360,6 +427,7 @@ export const publicPlantShareSchema = z.object({
   ),
   yard: z.object({ sun: z.enum(SUN_LEVELS), moisture: z.enum(MOISTURE_LEVELS) }).nullable(),
   notes: z.array(z.string()),
+  whatToBring: z.string().nullable(),
 }) satisfies z.ZodType<PublicPlantShare>;
 
 const careSheetAnswer = z.object({
@@ -386,6 +454,7 @@ export const takerReservationSchema = z.object({
     date: isoDate,
     place: sharePlaceAnswer,
     status: z.enum(SHARE_STATUSES),
+    whatToBring: z.string().nullable(),
   }),
   canChange: z.boolean(),
   careSheet: z.array(careSheetAnswer),

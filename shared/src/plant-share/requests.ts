@@ -143,6 +143,18 @@ const stockLinesSchema = (min: number) =>
       });
     });
 
+/** Most characters of the "what to bring" note. */
+export const MAX_WHAT_TO_BRING = 500;
+
+/**
+ * What takers should bring to pickup, in the organiser's words (e.g. "A box or tray for your pots; we
+ * reuse returned pots."). Shown on the public page, the confirmation page and in the confirmation e-mail.
+ */
+export const whatToBringSchema = z
+  .string()
+  .trim()
+  .max(MAX_WHAT_TO_BRING, `must be at most ${MAX_WHAT_TO_BRING} characters`);
+
 /** Opens the season's plant share. Stock left out is taken from the season (see the API). */
 export const openShareRequestSchema = z
   .object({
@@ -156,17 +168,22 @@ export const openShareRequestSchema = z
     /** Days after the share date that takers' names and e-mails are kept. */
     retentionDays: retentionDaysSchema.optional(),
     stock: stockLinesSchema(0).optional(),
+    whatToBring: whatToBringSchema.optional(),
   })
   .strict();
 export type OpenShareRequest = z.infer<typeof openShareRequestSchema>;
 
-/** Changes the share's date, place, limits or retention; what is left out stays. */
+/**
+ * Changes the share's date, place, limits, retention or what to bring; what is left out stays (an empty
+ * "what to bring" clears it). A new date moves every pickup slot to the same times on the new day.
+ */
 export const editShareRequestSchema = z
   .object({
     date: isoDateSchema.optional(),
     place: sharePlaceSchema.optional(),
     limits: householdLimitsSchema.optional(),
     retentionDays: retentionDaysSchema.optional(),
+    whatToBring: whatToBringSchema.optional(),
   })
   .strict();
 export type EditShareRequest = z.infer<typeof editShareRequestSchema>;

@@ -8,6 +8,7 @@ import type {
   Moisture,
   OpenShareRequest,
   PickupList,
+  PickupSlotRequest,
   PlantShare,
   PublicPlantShare,
   ReservationCreated,
@@ -15,6 +16,7 @@ import type {
   SetStockRequest,
   ShareReport,
   ShareStatus,
+  ShareWaitlist,
   Sun,
   TakerReservation,
   WaitlistJoined,
@@ -96,6 +98,21 @@ export function setStock(groupSlug: string, body: SetStockRequest): Promise<Plan
 
 export function addStock(groupSlug: string, body: AddStockRequest): Promise<PlantShare> {
   return httpClient.post<PlantShare>(`${sharePath(groupSlug)}/stock/add`, body);
+}
+
+/** Adds a pickup slot on the share's day. */
+export function addSlot(groupSlug: string, body: PickupSlotRequest): Promise<PlantShare> {
+  return httpClient.post<PlantShare>(`${sharePath(groupSlug)}/slots`, body);
+}
+
+/** Changes a slot's times or households (never below those booked: the API answers 400). */
+export function editSlot(groupSlug: string, slotId: string, body: PickupSlotRequest): Promise<PlantShare> {
+  return httpClient.put<PlantShare>(`${sharePath(groupSlug)}/slots/${enc(slotId)}`, body);
+}
+
+/** The waitlist per species with names and e-mails (organisers only). */
+export function getShareWaitlist(groupSlug: string, signal?: AbortSignal): Promise<ShareWaitlist> {
+  return httpClient.get<ShareWaitlist>(`${sharePath(groupSlug)}/waitlist`, { signal });
 }
 
 export function setShareStatus(groupSlug: string, status: ShareStatus): Promise<PlantShare> {

@@ -106,6 +106,7 @@ function Available({ share, yard, onYard, isRanking, onReserved }: AvailableProp
     <>
       <PageIntro title={W.availableTitle(share.groupName)}>
         {W.availableLead(shareDateWords(share.date), place)} {W.limits(share.limits.perSpecies, share.limits.total)}
+        {share.whatToBring ? ` ${W.bringLine(share.whatToBring)}` : null}
       </PageIntro>
       <div className={styles.stack}>
         {share.status === 'open' ? null : (

@@ -78,6 +78,7 @@ export const share: PublicPlantShare = {
   },
   status: 'open',
   limits: { perSpecies: 3, total: 6 },
+  whatToBring: 'A box or tray to carry your pots home.',
   slots: [
     { id: SLOT_1, start: '2027-06-12T09:00:00-05:00', end: '2027-06-12T09:30:00-05:00', left: 4, past: false },
     { id: SLOT_2, start: '2027-06-12T09:30:00-05:00', end: '2027-06-12T10:00:00-05:00', left: 0, past: false },
@@ -113,7 +114,14 @@ export const reservation: ReservationCreated = {
       count: 2,
     },
   ],
-  share: { groupSlug: GROUP, groupName: share.groupName, date: share.date, place: share.place, status: 'open' },
+  share: {
+    groupSlug: GROUP,
+    groupName: share.groupName,
+    date: share.date,
+    place: share.place,
+    status: 'open',
+    whatToBring: share.whatToBring,
+  },
   canChange: true,
   careSheet: [
     {

@@ -70,7 +70,8 @@ export const TAKER_WORDS = {
   whereWords: 'Where',
   howWords: 'How pickup works',
   bringWords: 'What to bring',
-  // Homeground's own advice for every share: the answer names no such field.
+  bringLine: (what: string) => `What to bring: ${what}`,
+  // Homeground's own advice when the organiser has not said what to bring.
   bringAdvice: 'A box or tray to stand the pots in, and this e-mail or your name.',
   plantsHeading: 'Your plants',
   careHeading: 'Care sheet',
