@@ -528,6 +528,12 @@ const cases: Case[] = [
     field: 'limits.perSpecies',
   },
   {
+    what: 'a saved mix id on the public share that is not a UUID',
+    method: 'get',
+    url: '/api/plant-shares/larkfield-commons-growers?mix=front-yard',
+    field: 'mix',
+  },
+  {
     what: 'a query on the waitlist, which reads none',
     method: 'get',
     url: '/api/groups/larkfield-commons-growers/plant-share/waitlist?names=all',

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { ConflictException, ForbiddenException, GoneException, Injectable } from '@nestjs/common';
+import { ConflictException, ForbiddenException, GoneException, Injectable, NotFoundException } from '@nestjs/common';
 import {
   type ChangeReservationRequest,
   checkHouseholdLimits,
@@ -12,7 +12,9 @@ import {
   rankForYard,
   type ReservationCreated,
   type ShareFitQuery,
+  type RegionContext,
   type ShareSpecies,
+  type ShareYard,
   type StateCode,
   type TakerReservation,
   type WaitlistJoined,
@@ -22,7 +24,10 @@ import {
   wildlifeSummary,
 } from '@homeground/shared';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
+import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
+import { PlacesService } from '../places/places.service.js';
+import { SavedMixesService } from '../saved-mixes/saved-mixes.service.js';
 import { Clock } from './clock.js';
 import { ShareDb } from './share-db.js';
 import { ShareMailQueue } from './share-mail-queue.js';
@@ -48,6 +53,9 @@ export class ReservationsService {
     private readonly ctx: MixContextService,
     private readonly mail: ShareMailQueue,
     private readonly clock: Clock,
+    private readonly places: PlacesService,
+    private readonly mixes: SavedMixesService,
+    private readonly ecoregions: EcoregionsService,
   ) {}
 
   /** The group's share as anyone sees it; with a yard, ranked by how well each plant fits it. */
@@ -60,14 +68,14 @@ export class ReservationsService {
       const r = this.ctx.get(s.slug);
       return r ? [{ stock: s, record: r }] : [];
     });
-    const fits =
-      yard.sun && yard.moisture
-        ? rankForYard(
-            records.map((r) => r.record),
-            { sun: yard.sun, moisture: yard.moisture },
-            { state: group.state as StateCode, ...(group.ecoregionCode ? { ecoregionCode: group.ecoregionCode } : {}) },
-          )
-        : null;
+    const site = await this.yardOf(group, yard);
+    const fits = site
+      ? rankForYard(
+          records.map((r) => r.record),
+          { sun: site.yard.sun, moisture: site.yard.moisture },
+          site.region,
+        )
+      : null;
     const species: ShareSpecies[] = records.map(({ stock: s, record }) => {
       const w = wildlifeSummary(record);
       return {
@@ -106,10 +114,70 @@ export class ReservationsService {
         past: s.starts_at_ms <= nowMs,
       })),
       species,
-      yard: yard.sun && yard.moisture ? { sun: yard.sun, moisture: yard.moisture } : null,
+      yard: site?.yard ?? null,
       notes: SHARE_NOTES,
       whatToBring: share.what_to_bring,
     };
+  }
+
+  /**
+   * The yard to rank for and the region to rank it in: the taker's answers in the group's region; with
+   * a ZIP, in the place the ZIP resolves to (the same lookup as "your ground"); or a saved mix's own
+   * site and region. An unknown ZIP or mix is a 400 naming it.
+   */
+  private async yardOf(group: Group, q: ShareFitQuery): Promise<{ yard: ShareYard; region: RegionContext } | null> {
+    if (q.mix) {
+      const mix = await this.mixes.get(q.mix).catch((e: unknown) => {
+        if (e instanceof NotFoundException)
+          throw badRequest([{ field: 'mix', message: 'is not a saved mix we keep (it may have been deleted)' }]);
+        throw e;
+      });
+      const { site, region } = mix.request;
+      return {
+        yard: {
+          sun: site.sun,
+          moisture: site.moisture,
+          from: 'mix',
+          place: this.placeWords(null, region.state, region.ecoregionCode),
+          mixName: mix.name,
+        },
+        region: { state: region.state, ...(region.ecoregionCode ? { ecoregionCode: region.ecoregionCode } : {}) },
+      };
+    }
+    if (!q.sun || !q.moisture) return null;
+    if (q.zip) {
+      const place = this.places.lookup({ zip: q.zip });
+      return {
+        yard: {
+          sun: q.sun,
+          moisture: q.moisture,
+          from: 'zip',
+          place: this.placeWords(place.zip?.city ?? null, place.state, place.ecoregion.code),
+          mixName: null,
+        },
+        region: { state: place.state, ecoregionCode: place.ecoregion.code },
+      };
+    }
+    return {
+      yard: {
+        sun: q.sun,
+        moisture: q.moisture,
+        from: 'answers',
+        place: this.placeWords(group.town, group.state, group.ecoregionCode ?? undefined),
+        mixName: null,
+      },
+      region: {
+        state: group.state as StateCode,
+        ...(group.ecoregionCode ? { ecoregionCode: group.ecoregionCode } : {}),
+      },
+    };
+  }
+
+  /** "Viroqua, WI, in the Driftless Area (EPA Level III ecoregion 52)". */
+  private placeWords(town: string | null, state: string, ecoregionCode: string | undefined): string {
+    const where = town ? `${town}, ${state}` : state;
+    const e = ecoregionCode ? this.ecoregions.find(ecoregionCode) : undefined;
+    return e ? `${where}, in the ${e.name} (EPA Level III ecoregion ${e.code})` : where;
   }
 
   /**

@@ -160,6 +160,21 @@ export interface PublicPickupSlot {
   past: boolean;
 }
 
+export const SHARE_YARD_SOURCES = ['answers', 'zip', 'mix'] as const;
+/** Where the yard came from: the taker's two answers, those with a ZIP, or a saved mix. */
+export type ShareYardSource = (typeof SHARE_YARD_SOURCES)[number];
+
+/** The yard "fits my yard" ranked for, and the place it ranked for, in words. */
+export interface ShareYard {
+  sun: Sun;
+  moisture: Moisture;
+  from: ShareYardSource;
+  /** E.g. "Viroqua, WI, in the Driftless Area (EPA Level III ecoregion 52)"; the group's own place for answers alone. */
+  place: string;
+  /** The saved mix's name, when the yard came from one. */
+  mixName: string | null;
+}
+
 /** The public page of a group's open share. */
 export interface PublicPlantShare {
   groupSlug: string;
@@ -173,7 +188,7 @@ export interface PublicPlantShare {
   slots: PublicPickupSlot[];
   species: ShareSpecies[];
   /** The yard the list is ranked for, when given. */
-  yard: { sun: Sun; moisture: Moisture } | null;
+  yard: ShareYard | null;
   /** General safety words shown under the list; local rules come first. */
   notes: string[];
   /** What takers should bring to pickup, or null when the organiser has not said. */
@@ -270,10 +285,13 @@ export interface WalkUpGift {
   givenAt: string;
 }
 
-/** Germination by method and grower: filled once batches are logged (not yet recorded). */
+/**
+ * Germination by method and grower from the batch logs: seeds sown, seedlings up ("germinated") and
+ * plants ready. Growers by first name only; counts only.
+ */
 export interface GerminationReport {
-  byMethod: { method: SowingMethod; sown: number; germinated: number }[];
-  byGrower: { grower: string; sown: number; germinated: number }[];
+  byMethod: { method: SowingMethod; sown: number; germinated: number; ready: number }[];
+  byGrower: { grower: string; sown: number; germinated: number; ready: number }[];
 }
 
 /** The season report: counts only, never names, e-mails or full ZIP codes. */
@@ -425,7 +443,15 @@ export const publicPlantShareSchema = z.object({
       fit: z.object({ fit: z.enum(YARD_FITS), rank: z.number().int(), why: z.array(z.string()) }).nullable(),
     }),
   ),
-  yard: z.object({ sun: z.enum(SUN_LEVELS), moisture: z.enum(MOISTURE_LEVELS) }).nullable(),
+  yard: z
+    .object({
+      sun: z.enum(SUN_LEVELS),
+      moisture: z.enum(MOISTURE_LEVELS),
+      from: z.enum(SHARE_YARD_SOURCES),
+      place: z.string(),
+      mixName: z.string().nullable(),
+    })
+    .nullable(),
   notes: z.array(z.string()),
   whatToBring: z.string().nullable(),
 }) satisfies z.ZodType<PublicPlantShare>;
@@ -541,9 +567,21 @@ export const shareReportSchema = z.object({
   germination: z
     .object({
       byMethod: z.array(
-        z.object({ method: z.enum(SOWING_METHODS), sown: z.number().int(), germinated: z.number().int() }),
+        z.object({
+          method: z.enum(SOWING_METHODS),
+          sown: z.number().int(),
+          germinated: z.number().int(),
+          ready: z.number().int(),
+        }),
       ),
-      byGrower: z.array(z.object({ grower: z.string(), sown: z.number().int(), germinated: z.number().int() })),
+      byGrower: z.array(
+        z.object({
+          grower: z.string(),
+          sown: z.number().int(),
+          germinated: z.number().int(),
+          ready: z.number().int(),
+        }),
+      ),
     })
     .nullable(),
   summary: z.array(z.string()),

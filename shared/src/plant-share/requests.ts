@@ -259,13 +259,30 @@ export const waitlistRequestSchema = z
   .strict();
 export type WaitlistRequest = z.input<typeof waitlistRequestSchema>;
 
-/** The taker's yard for "fits my yard": both or neither. */
+/**
+ * The taker's yard for "fits my yard", one of three ways: their sun and moisture (ranked for the
+ * group's region); the same with their ZIP (ranked for the place the ZIP is in); or a saved mix's
+ * link id (its site and its place). Sun and moisture come both or neither.
+ */
 export const shareFitQuerySchema = z
-  .object({ sun: sunSchema.optional(), moisture: moistureSchema.optional() })
+  .object({
+    sun: sunSchema.optional(),
+    moisture: moistureSchema.optional(),
+    zip: zipSchema.optional(),
+    mix: z.uuid({ message: 'must be the id of a saved mix link' }).optional(),
+  })
   .strict()
   .refine((q) => (q.sun === undefined) === (q.moisture === undefined), {
     message: 'give both sun and moisture, or neither',
     path: ['moisture'],
+  })
+  .refine((q) => q.mix === undefined || (q.sun === undefined && q.zip === undefined), {
+    message: 'a saved mix brings its own site and place: give it alone',
+    path: ['mix'],
+  })
+  .refine((q) => q.zip === undefined || q.sun !== undefined, {
+    message: 'give your sun and moisture with your ZIP',
+    path: ['sun'],
   });
 export type ShareFitQuery = z.infer<typeof shareFitQuerySchema>;
 

@@ -27,8 +27,11 @@ import type {
 } from '@homeground/shared';
 import { httpClient } from '../../lib/http-client.js';
 
-/** The taker's spot for "fits my yard"; null shows the list in the share's own order. */
-export type Yard = { sun: Sun; moisture: Moisture } | null;
+/**
+ * The taker's spot for "fits my yard": their sun and moisture (with their ZIP, to rank for where they
+ * live), or a saved mix's link id (its own site and place); null shows the list in the share's order.
+ */
+export type Yard = { sun: Sun; moisture: Moisture; zip?: string } | { mix: string } | null;
 
 const enc = encodeURIComponent;
 const publicPath = (groupSlug: string) => `/api/plant-shares/${enc(groupSlug)}`;
@@ -39,7 +42,7 @@ const reservationPath = (token: string) => `/api/reservations/${enc(token)}`;
 
 /** A group's plant share as anyone sees it, ranked for the taker's yard when one is given. */
 export function getPublicShare(groupSlug: string, yard: Yard, signal?: AbortSignal): Promise<PublicPlantShare> {
-  const query = yard ? `?${new URLSearchParams({ sun: yard.sun, moisture: yard.moisture })}` : '';
+  const query = yard ? `?${new URLSearchParams(yard)}` : '';
   return httpClient.get<PublicPlantShare>(`${publicPath(groupSlug)}${query}`, { signal, token: null });
 }
 

@@ -91,7 +91,7 @@ export const share: PublicPlantShare = {
 /** The same share ranked for dry full sun, as the API answers `?sun=full&moisture=dry`. */
 export const rankedForDrySun: PublicPlantShare = {
   ...share,
-  yard: { sun: 'full', moisture: 'dry' },
+  yard: { sun: 'full', moisture: 'dry', from: 'answers', place: 'Larkfield, WI', mixName: null },
   species: [
     { ...blueFlag, fit: { fit: 'not-for-this-yard', rank: 3, why: ['Needs wet soil.'] } },
     { ...milkweed, fit: { fit: 'thrives', rank: 1, why: ['Thrives in dry soil and full sun.'] } },
