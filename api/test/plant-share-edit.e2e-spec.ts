@@ -34,6 +34,34 @@ describe('changing an open plant share (e2e, demo data)', () => {
     await t.close();
   });
 
+  it("reports germination by method and grower from the growers' batch logs, as counts and first names", async () => {
+    // The demo season has sowings logged (invented, DESIGN.md); the report's sums must equal the log's own.
+    const db = t.app.get(DataSource);
+    const logged: { method: string; kind: string; n: number }[] = await db.query(
+      `SELECT b.method, e.kind, SUM(e.count) AS n FROM batch_log_entries e JOIN batches b ON b.id = e.batch_id
+       GROUP BY b.method, e.kind`,
+    );
+    const sum = (method: string, kind: string) =>
+      Number(logged.find((l) => l.method === method && l.kind === kind)?.n ?? 0);
+    const report = await t.http.get(`${SHARE}/report`).set(bearer(tokens.organiser)).expect(200);
+    const g = report.body.germination;
+    expect(g).not.toBeNull();
+    expect(g.byMethod.length).toBeGreaterThan(0);
+    for (const m of g.byMethod)
+      expect(m).toEqual({
+        method: m.method,
+        sown: sum(m.method, 'sown'),
+        germinated: sum(m.method, 'germinated'),
+        ready: sum(m.method, 'ready'),
+      });
+    const sownInAll = logged.filter((l) => l.kind === 'sown').reduce((n, l) => n + Number(l.n), 0);
+    expect(g.byGrower.reduce((n: number, r: { sown: number }) => n + r.sown, 0)).toBe(sownInAll);
+    // First names only (DESIGN.md's growers: Juniper Okafor, Theo Lindqvist, Amara Reyes).
+    expect(JSON.stringify(g)).not.toMatch(/Okafor|Lindqvist|Reyes|@/);
+    const csv = await t.http.get(`${SHARE}/report.csv`).set(bearer(tokens.organiser)).expect(200);
+    expect(csv.text).toMatch(/germination by method,/);
+  });
+
   it('refuses limits below what a household has reserved, naming each limit, and writes nothing', async () => {
     // Sol's demo reservation has 4 of one species and 8 plants in all: the largest of the two.
     const most = Math.max(...DEMO_RESERVATIONS.flatMap((r) => r.lines.map((l) => l.count)));

@@ -6,6 +6,7 @@ import {
   type CheckInResult,
   DEFAULT_RETENTION_DAYS,
   type EditShareRequest,
+  germinationReport,
   type Group,
   type OpenShareRequest,
   type PickupList,
@@ -470,8 +471,8 @@ export class PlantShareService {
       zips: [...picked.map((p) => p.zip), ...walkUps.flatMap((w) => (w.zip_area ? [w.zip_area] : []))],
       targets: targets.map((t) => ({ speciesSlug: t.slug, targetPlants: t.targetPlants })),
       species,
-      // Germination by method and grower arrives with batch logs.
-      germination: null,
+      // From the growers' batch logs for the share's season: sown, up and ready by method and grower.
+      germination: germinationReport(await this.batches.germinationBatches(share.season_id)),
     });
   }
 

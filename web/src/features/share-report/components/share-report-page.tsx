@@ -1,6 +1,6 @@
 import { Button, MessageBar, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
 import { ArrowDownloadRegular, PrintRegular } from '@fluentui/react-icons';
-import { capitalise, type ShareReport, SOWING_METHOD_WORDS } from '@homeground/shared';
+import type { ShareReport } from '@homeground/shared';
 import { useMutation, useQuery } from '@tanstack/react-query';
 import { downloadShareReportCsv } from '../../../api/plant-share/plant-share.api.js';
 import { shareReportQueryOptions } from '../../../api/plant-share/plant-share.queries.js';
@@ -11,6 +11,7 @@ import { EmptyState, ErrorState, QueryState } from '../../../components/states/i
 import { isApiRequestError } from '../../../lib/api-request-error.js';
 import { REPORT_WORDS as W } from '../utils/report-words.js';
 import { BarTable } from './bar-table.js';
+import { GerminationTables } from './germination-tables.js';
 
 const useStyles = makeStyles({
   stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalXL },
@@ -187,20 +188,7 @@ function Report({ report }: { report: ShareReport }) {
           {report.germination === null ? (
             <p className={styles.lead}>{W.germinationLater}</p>
           ) : (
-            <BarTable
-              caption={W.germinationHeading}
-              unit={W.germinatedUnit}
-              rows={[
-                ...report.germination.byMethod.map((m) => ({
-                  label: capitalise(SOWING_METHOD_WORDS[m.method].phrase),
-                  value: m.sown === 0 ? 0 : Math.round((m.germinated / m.sown) * 100),
-                })),
-                ...report.germination.byGrower.map((g) => ({
-                  label: g.grower,
-                  value: g.sown === 0 ? 0 : Math.round((g.germinated / g.sown) * 100),
-                })),
-              ]}
-            />
+            <GerminationTables germination={report.germination} />
           )}
         </ContentCard>
       </div>
