@@ -14,6 +14,8 @@ import { cards as enCards } from './en/cards.js';
 import { cards as esCards } from './es/cards.js';
 import { yard as enYard } from './en/yard.js';
 import { yard as esYard } from './es/yard.js';
+import { report as enReport } from './en/report.js';
+import { report as esReport } from './es/report.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -26,6 +28,7 @@ export const resources = {
     detail: enDetail,
     cards: enCards,
     yard: enYard,
+    report: enReport,
   },
   es: {
     common: esCommon,
@@ -36,5 +39,6 @@ export const resources = {
     detail: esDetail,
     cards: esCards,
     yard: esYard,
+    report: esReport,
   },
 } as const;

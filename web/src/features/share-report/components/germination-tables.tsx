@@ -1,6 +1,7 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import { capitalise, type GerminationReport, SOWING_METHOD_WORDS } from '@homeground/shared';
-import { REPORT_WORDS as W } from '../utils/report-words.js';
+import { useTranslation } from 'react-i18next';
+import { useFormatters } from '../../../lib/i18n/index.js';
 import { BarTable } from './bar-table.js';
 
 const useStyles = makeStyles({
@@ -22,6 +23,8 @@ type Row = { label: string; sown: number; germinated: number; ready: number };
  */
 export function GerminationTables({ germination }: { germination: GerminationReport }) {
   const styles = useStyles();
+  const { t } = useTranslation('report');
+  const format = useFormatters();
   const byMethod: Row[] = germination.byMethod.map((m) => ({
     ...m,
     label: capitalise(SOWING_METHOD_WORDS[m.method].phrase),
@@ -37,13 +40,13 @@ export function GerminationTables({ germination }: { germination: GerminationRep
               {first}
             </th>
             <th scope="col" className={styles.head}>
-              {W.sown}
+              {t('sown')}
             </th>
             <th scope="col" className={styles.head}>
-              {W.up}
+              {t('up')}
             </th>
             <th scope="col" className={styles.head}>
-              {W.ready}
+              {t('ready')}
             </th>
           </tr>
         </thead>
@@ -53,9 +56,9 @@ export function GerminationTables({ germination }: { germination: GerminationRep
               <th scope="row" className={styles.first}>
                 {r.label}
               </th>
-              <td className={styles.cell}>{r.sown.toLocaleString('en-US')}</td>
-              <td className={styles.cell}>{r.germinated.toLocaleString('en-US')}</td>
-              <td className={styles.cell}>{r.ready.toLocaleString('en-US')}</td>
+              <td className={styles.cell}>{format.number(r.sown)}</td>
+              <td className={styles.cell}>{format.number(r.germinated)}</td>
+              <td className={styles.cell}>{format.number(r.ready)}</td>
             </tr>
           ))}
         </tbody>
@@ -64,11 +67,11 @@ export function GerminationTables({ germination }: { germination: GerminationRep
   );
   return (
     <div className={styles.stack}>
-      {table(W.byMethodCaption, W.method, byMethod)}
-      {table(W.byGrowerCaption, W.grower, byGrower)}
+      {table(t('byMethodCaption'), t('method'), byMethod)}
+      {table(t('byGrowerCaption'), t('grower'), byGrower)}
       <BarTable
-        caption={W.readyByMethodCaption}
-        unit={W.readyUnit}
+        caption={t('readyByMethodCaption')}
+        words={(r) => t('ready_count', { count: r.value, formatted: format.number(r.value) })}
         rows={byMethod.map((m) => ({ label: m.label, value: m.ready }))}
       />
     </div>

@@ -141,6 +141,19 @@ describe('the season report', () => {
     expect(screen.queryByText(/once the growers’ batch logs are recorded/)).not.toBeInTheDocument();
   });
 
+  it('speaks Spanish with the page, numbers in the Spanish way', async () => {
+    renderApp({
+      path: '/plant-share/report',
+      token: 'token',
+      locale: 'es',
+      api: { 'GET /api/me': { body: maraOrganiser }, [`GET ${REPORT_PATH}`]: { body: report } },
+    });
+    expect(await screen.findByRole('heading', { level: 1, name: 'Informe de la temporada 2027' })).toBeInTheDocument();
+    expect(screen.getByText(/de la meta de la temporada, 200 plantas/)).toBeInTheDocument();
+    const zips = within(screen.getByRole('table', { name: 'Hogares por zona postal' }));
+    expect(zips.getByText('20 hogares')).toBeInTheDocument();
+  });
+
   it('downloads the CSV with the sign-in token', async () => {
     const createObjectURL = vi.fn(() => 'blob:report');
     // jsdom has no object URLs; a stand-in URL class keeps the real one untouched for other tests.
