@@ -48,6 +48,7 @@ try {
 
     const results: { status: number; ms: number }[] = [];
     let next = 0;
+    const cpu0 = api.cpuMs();
     const t0 = performance.now();
     await Promise.all(
       Array.from({ length: inFlight }, async () => {
@@ -71,6 +72,7 @@ try {
       }),
     );
     const seconds = (performance.now() - t0) / 1000;
+    const cpu1 = api.cpuMs();
     const ms = results.map((r) => r.ms).sort((a, b) => a - b);
     const byStatus = new Map<number, number>();
     for (const r of results) byStatus.set(r.status, (byStatus.get(r.status) ?? 0) + 1);
@@ -95,6 +97,11 @@ try {
     console.log(
       `  throughput ${(REQUESTS / seconds).toFixed(0)} requests/s (${seconds.toFixed(2)} s for all ${REQUESTS})`,
     );
+    // The server's own CPU per request holds steady when other work slows the wall clock.
+    if (cpu0 !== null && cpu1 !== null)
+      console.log(
+        `  server CPU ${(cpu1 - cpu0).toFixed(0)} ms in all, ${((cpu1 - cpu0) / REQUESTS).toFixed(2)} ms per request`,
+      );
   }
 
   await round('viola-canadensis', '2027-06-12T13:00:00-05:00', '2027-06-12T14:00:00-05:00', REQUESTS, 'burst');

@@ -1,5 +1,5 @@
 import { type ChildProcess, spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
@@ -11,7 +11,7 @@ const API_DIR = path.resolve(import.meta.dirname, '..');
 /** Starts the built API (dist/main.js) on a free port with a throwaway database. */
 export async function startBuiltApi(
   env: Record<string, string> = {},
-): Promise<{ baseUrl: string; stop: () => Promise<void> }> {
+): Promise<{ baseUrl: string; cpuMs: () => number | null; stop: () => Promise<void> }> {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'homeground-bench-'));
   const child: ChildProcess = spawn(
     process.execPath,
@@ -42,6 +42,7 @@ export async function startBuiltApi(
   });
   return {
     baseUrl,
+    cpuMs: () => processCpuMs(child.pid),
     stop: async () => {
       const exited = new Promise((r) => child.once('exit', r));
       child.kill('SIGTERM');
@@ -50,6 +51,24 @@ export async function startBuiltApi(
     },
   };
 }
+
+/**
+ * CPU time (user + system) a process has used so far, read from /proc on Linux; null elsewhere.
+ * On a shared machine wall-clock latency swings with the load; the CPU a request costs the server does not.
+ */
+export function processCpuMs(pid: number | undefined): number | null {
+  if (pid === undefined) return null;
+  try {
+    // Fields after the command name: state is field 3, utime and stime are fields 14 and 15 (clock ticks).
+    const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+    const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+    return ((Number(fields[11]) + Number(fields[12])) * 1000) / CLOCK_TICKS_PER_SECOND;
+  } catch {
+    return null;
+  }
+}
+/** Linux's USER_HZ, 100 on every mainstream kernel configuration (common practice; `getconf CLK_TCK`). */
+const CLOCK_TICKS_PER_SECOND = 100;
 
 /** A bare node:http server answering every request with the same bytes: the ceiling to compare with. */
 export async function startBareServer(

@@ -572,6 +572,32 @@ const cases: Case[] = [
     field: 'retentionDays',
   },
   {
+    what: 'a "what to bring" note of 100,000 characters',
+    method: 'patch',
+    url: '/api/groups/larkfield-commons-growers/plant-share',
+    body: { whatToBring: huge },
+    field: 'whatToBring',
+  },
+  {
+    what: 'a household limit per species of 0',
+    method: 'patch',
+    url: '/api/groups/larkfield-commons-growers/plant-share',
+    body: { limits: { perSpecies: 0, total: 12 } },
+    field: 'limits.perSpecies',
+  },
+  {
+    what: 'a saved mix id on the public share that is not a UUID',
+    method: 'get',
+    url: '/api/plant-shares/larkfield-commons-growers?mix=front-yard',
+    field: 'mix',
+  },
+  {
+    what: 'a query on the waitlist, which reads none',
+    method: 'get',
+    url: '/api/groups/larkfield-commons-growers/plant-share/waitlist?names=all',
+    field: 'names',
+  },
+  {
     what: 'a slot capacity as text',
     method: 'post',
     url: '/api/groups/larkfield-commons-growers/plant-share/slots',

@@ -2,6 +2,8 @@ import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/commo
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
   batchesToIcs,
+  firstName,
+  type GerminationBatch,
   logEntryProblems,
   logTotals,
   proposeBatchSplit,
@@ -321,6 +323,27 @@ export class BatchesService {
         readyPlants: ready.get(s) ?? 0,
       };
     });
+  }
+
+  /**
+   * The season's batches with each grower's first name and the batch's log, for the season report's
+   * germination by method and grower (the report keeps counts and first names only).
+   */
+  async germinationBatches(seasonId: string): Promise<GerminationBatch[]> {
+    const rows = await this.batchRows.find({ where: { seasonId }, order: { position: 'ASC' } });
+    if (rows.length === 0) return [];
+    const log = await this.logRows.find({ where: { batchId: In(rows.map((r) => r.id)) } });
+    const growerIds = [...new Set(rows.map((r) => r.growerId))];
+    const people: { id: string; display_name: string }[] = await this.db.query(
+      `SELECT id, display_name FROM users WHERE id IN (${growerIds.map(() => '?').join(', ')})`,
+      growerIds,
+    );
+    const nameOf = new Map(people.map((p) => [p.id, firstName(p.display_name)]));
+    return rows.map((r) => ({
+      method: r.method,
+      grower: nameOf.get(r.growerId) ?? 'A former grower',
+      entries: log.filter((e) => e.batchId === r.id).map((e) => ({ kind: e.kind, count: e.count })),
+    }));
   }
 
   /** The season and the caller's role, for organisers only. */

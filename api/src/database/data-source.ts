@@ -21,6 +21,7 @@ import { AddPhotoCredits1765670400000 } from './migrations/1765670400000-add-pho
 import { CreatePendingRegistrations1766300000000 } from './migrations/1766300000000-create-pending-registrations.js';
 import { PendingRegistrationRow } from '../auth/pending-registration.entity.js';
 import { AddTakerLocale1765800000000 } from './migrations/1765800000000-add-taker-locale.js';
+import { AddShareWhatToBring1766000000000 } from './migrations/1766000000000-add-share-what-to-bring.js';
 import { SpeciesChangeRow } from '../species/species-change.entity.js';
 import { SignInFailureRow } from '../auth/sign-in-failure.entity.js';
 import { CreateBatches1765324800000 } from './migrations/1765324800000-create-batches.js';
@@ -74,6 +75,7 @@ export const MIGRATIONS = [
   CreatePendingRegistrations1766300000000,
   AddTakerLocale1765800000000,
   CreateWeeklySummariesSent1765900000000,
+  AddShareWhatToBring1766000000000,
 ];
 
 /** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */

@@ -16,6 +16,7 @@ export const DEMO_SHARE = {
   },
   limits: { perSpecies: 4, total: 12 },
   retentionDays: 30,
+  whatToBring: 'A box or tray to carry your pots home. We gladly take back clean nursery pots for next season.',
   // 09:00 to 12:00 Central Daylight Time (UTC−05:00 in June), 12 households a slot.
   slots: ['09:00', '09:30', '10:00', '10:30', '11:00', '11:30'].map((start) => {
     const [h, m] = start.split(':').map(Number);
@@ -57,7 +58,7 @@ export async function loadDemoShare(tx: EntityManager, groupId: string, seasonId
   const shareId = randomUUID();
   await tx.query(
     `INSERT INTO plant_shares (id, group_id, season_id, share_date, place_name, place_address, place_directions, status,
-       per_species_limit, total_limit, retention_days) VALUES (?, ?, ?, ?, ?, ?, ?, 'open', ?, ?, ?)`,
+       per_species_limit, total_limit, retention_days, what_to_bring) VALUES (?, ?, ?, ?, ?, ?, ?, 'open', ?, ?, ?, ?)`,
     [
       shareId,
       groupId,
@@ -69,6 +70,7 @@ export async function loadDemoShare(tx: EntityManager, groupId: string, seasonId
       DEMO_SHARE.limits.perSpecies,
       DEMO_SHARE.limits.total,
       DEMO_SHARE.retentionDays,
+      DEMO_SHARE.whatToBring,
     ],
   );
   const slotIds = DEMO_SHARE.slots.map(() => randomUUID());

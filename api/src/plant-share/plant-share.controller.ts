@@ -23,6 +23,8 @@ import {
   shareReportSchema,
   type ShareStatusRequest,
   shareStatusRequestSchema,
+  type ShareWaitlist,
+  shareWaitlistSchema,
   slugParamSchema,
   uuidParamSchema,
   type WalkUpGift,
@@ -132,6 +134,16 @@ export class PlantShareController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<PlantShare> {
     return this.shares.setStatus(slug, user, body);
+  }
+
+  /** The waitlist per species, in the order plants are offered (names and e-mails: organisers only). */
+  @Get('waitlist')
+  @ZodResponse(shareWaitlistSchema)
+  waitlist(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<ShareWaitlist> {
+    return this.shares.waitlist(slug, user);
   }
 
   /** Pickup day: picked up, or a no-show whose plants go to the waitlist, else back on offer. */

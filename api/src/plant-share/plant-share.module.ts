@@ -1,5 +1,8 @@
 import { Module } from '@nestjs/common';
 import { BatchesModule } from '../batches/batches.module.js';
+import { EcoregionsModule } from '../ecoregions/ecoregions.module.js';
+import { PlacesModule } from '../places/places.module.js';
+import { SavedMixesModule } from '../saved-mixes/saved-mixes.module.js';
 import { GroupsModule } from '../groups/groups.module.js';
 import { MixContextModule } from '../mix-context/mix-context.module.js';
 import { SeasonsModule } from '../seasons/seasons.module.js';
@@ -16,7 +19,15 @@ import { ShareViews } from './share-views.js';
 
 /** The plant share: what is on offer, reservations with limits and slots, pickup day, the season report. */
 @Module({
-  imports: [GroupsModule, SeasonsModule, MixContextModule, BatchesModule],
+  imports: [
+    GroupsModule,
+    SeasonsModule,
+    MixContextModule,
+    BatchesModule,
+    PlacesModule,
+    SavedMixesModule,
+    EcoregionsModule,
+  ],
   controllers: [PlantShareController, PublicShareController],
   providers: [
     Clock,

@@ -6,6 +6,7 @@ import {
   type CheckInResult,
   DEFAULT_RETENTION_DAYS,
   type EditShareRequest,
+  germinationReport,
   type Group,
   type OpenShareRequest,
   type PickupList,
@@ -16,6 +17,7 @@ import {
   type ShareReport,
   shareReportToCsv,
   type ShareStatusRequest,
+  type ShareWaitlist,
   type Species,
   type StockLine,
   type WalkUpGift,
@@ -76,7 +78,7 @@ export class PlantShareService {
         throw new ConflictException(`${group.name}'s ${season.year} plant share is open already: change it instead.`);
       this.db.run(
         `INSERT INTO plant_shares (id, group_id, season_id, share_date, place_name, place_address, place_directions, status,
-           per_species_limit, total_limit, retention_days) VALUES (?, ?, ?, ?, ?, ?, ?, 'open', ?, ?, ?)`,
+           per_species_limit, total_limit, retention_days, what_to_bring) VALUES (?, ?, ?, ?, ?, ?, ?, 'open', ?, ?, ?, ?)`,
         id,
         group.id,
         season.id,
@@ -87,6 +89,7 @@ export class PlantShareService {
         req.limits.perSpecies,
         req.limits.total,
         req.retentionDays ?? DEFAULT_RETENTION_DAYS,
+        req.whatToBring || null,
       );
       for (const s of req.slots) this.insertSlot(id, s);
       stock.forEach((l, position) =>
@@ -109,22 +112,78 @@ export class PlantShareService {
     return this.views.organiserView(group, this.views.requireShare(group));
   }
 
+  /**
+   * Changes the day, place, limits, retention or what to bring of a share, open or not. Never below
+   * what is promised: limits not under what a household has reserved already (400 naming the limit),
+   * and the day not moved once households have booked a slot on it (409), since they planned for it.
+   * A new day moves every slot to the same times on that day, in the same transaction.
+   */
   async edit(slug: string, user: AuthenticatedUser, req: EditShareRequest): Promise<PlantShare> {
     const group = await this.managed(slug, user);
     const share = this.views.requireShare(group);
     const now = this.clock.now();
-    if (req.date !== undefined) {
-      const problems: FieldProblem[] = [];
-      if (req.date < now.toISOString().slice(0, 10)) problems.push({ field: 'date', message: 'is in the past' });
-      // Moving the day moves every slot's day: slots on the old day would point people to the wrong day.
-      if (req.date !== share.share_date && this.views.slots(share.id).length > 0)
-        problems.push({ field: 'date', message: 'cannot move while the share has pickup slots on its old day' });
-      if (problems.length) throw badRequest(problems);
+    const moving = req.date !== undefined && req.date !== share.share_date;
+    const problems: FieldProblem[] = [];
+    if (moving && req.date! < now.toISOString().slice(0, 10))
+      problems.push({ field: 'date', message: 'is in the past' });
+    if (req.limits) {
+      const most = this.db.get<{ line: number | null; household: number | null }>(
+        `SELECT MAX(l.count) AS line, MAX(t.n) AS household FROM share_reservation_lines l
+           JOIN share_reservations r ON r.id = l.reservation_id
+           JOIN (SELECT reservation_id, SUM(count) AS n FROM share_reservation_lines GROUP BY reservation_id) t
+             ON t.reservation_id = r.id
+         WHERE r.share_id = ? AND r.status = 'confirmed'`,
+        share.id,
+      );
+      const line = Number(most?.line ?? 0);
+      const household = Number(most?.household ?? 0);
+      if (req.limits.perSpecies < line)
+        problems.push({
+          field: 'limits.perSpecies',
+          message: `must be at least ${line}: a household has reserved ${line} plants of one species already`,
+        });
+      if (req.limits.total < household)
+        problems.push({
+          field: 'limits.total',
+          message: `must be at least ${household}: a household has reserved ${household} plants in all already`,
+        });
+    }
+    if (problems.length) throw badRequest(problems);
+    // From here to the write nothing awaits, so what was read above still holds inside the transaction.
+    const slots = moving ? this.views.slots(share.id) : [];
+    if (moving) {
+      const started = slots.filter((s) => s.starts_at_ms <= now.getTime());
+      if (started.length)
+        throw badRequest([{ field: 'date', message: 'cannot move: a pickup slot on the old day has started' }]);
     }
     this.db.atomically(() => {
+      if (moving) {
+        const booked = this.db.get<{ n: number }>(
+          `SELECT COUNT(*) AS n FROM share_reservations WHERE share_id = ? AND status = 'confirmed'`,
+          share.id,
+        )!;
+        if (Number(booked.n) > 0)
+          throw new ConflictException({
+            message: `${Number(booked.n)} ${Number(booked.n) === 1 ? 'household has' : 'households have'} booked a pickup slot on ${share.share_date}: the day cannot move under them. Pause the share and write to them first, or keep the day.`,
+            fields: [{ field: 'date', message: 'households have booked on the current day' }],
+          });
+        // The same clock times and offsets on the new day: "Saturday 9:00" stays 9:00.
+        for (const s of slots) {
+          const start = `${req.date}${s.starts_at.slice(10)}`;
+          const end = `${req.date}${s.ends_at.slice(10)}`;
+          this.db.run(
+            'UPDATE share_slots SET starts_at = ?, ends_at = ?, starts_at_ms = ?, ends_at_ms = ? WHERE id = ?',
+            start,
+            end,
+            Date.parse(start),
+            Date.parse(end),
+            s.id,
+          );
+        }
+      }
       this.db.run(
         `UPDATE plant_shares SET share_date = ?, place_name = ?, place_address = ?, place_directions = ?,
-           per_species_limit = ?, total_limit = ?, retention_days = ?, updated_at = ? WHERE id = ?`,
+           per_species_limit = ?, total_limit = ?, retention_days = ?, what_to_bring = ?, updated_at = ? WHERE id = ?`,
         req.date ?? share.share_date,
         req.place?.name ?? share.place_name,
         req.place?.address ?? share.place_address,
@@ -132,11 +191,18 @@ export class PlantShareService {
         req.limits?.perSpecies ?? share.per_species_limit,
         req.limits?.total ?? share.total_limit,
         req.retentionDays ?? share.retention_days,
+        req.whatToBring === undefined ? share.what_to_bring : req.whatToBring || null,
         now.toISOString(),
         share.id,
       );
     });
     return this.views.organiserView(group, this.views.shareById(share.id));
+  }
+
+  /** The waitlist per species, in the order plants are offered; names and e-mails for organisers only. */
+  async waitlist(slug: string, user: AuthenticatedUser): Promise<ShareWaitlist> {
+    const group = await this.managed(slug, user);
+    return this.views.waitlist(this.views.requireShare(group));
   }
 
   async addSlot(slug: string, user: AuthenticatedUser, req: PickupSlotRequest): Promise<PlantShare> {
@@ -405,8 +471,8 @@ export class PlantShareService {
       zips: [...picked.map((p) => p.zip), ...walkUps.flatMap((w) => (w.zip_area ? [w.zip_area] : []))],
       targets: targets.map((t) => ({ speciesSlug: t.slug, targetPlants: t.targetPlants })),
       species,
-      // Germination by method and grower arrives with batch logs.
-      germination: null,
+      // From the growers' batch logs for the share's season: sown, up and ready by method and grower.
+      germination: germinationReport(await this.batches.germinationBatches(share.season_id)),
     });
   }
 

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { ConflictException, ForbiddenException, GoneException, Injectable } from '@nestjs/common';
+import { ConflictException, ForbiddenException, GoneException, Injectable, NotFoundException } from '@nestjs/common';
 import {
   type ChangeReservationRequest,
   checkHouseholdLimits,
@@ -12,7 +12,9 @@ import {
   rankForYard,
   type ReservationCreated,
   type ShareFitQuery,
+  type RegionContext,
   type ShareSpecies,
+  type ShareYard,
   type StateCode,
   type TakerReservation,
   type WaitlistJoined,
@@ -23,7 +25,10 @@ import {
   type WordLocale,
 } from '@homeground/shared';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
+import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
+import { PlacesService } from '../places/places.service.js';
+import { SavedMixesService } from '../saved-mixes/saved-mixes.service.js';
 import { Clock } from './clock.js';
 import { ShareDb } from './share-db.js';
 import { ShareMailQueue } from './share-mail-queue.js';
@@ -49,6 +54,9 @@ export class ReservationsService {
     private readonly ctx: MixContextService,
     private readonly mail: ShareMailQueue,
     private readonly clock: Clock,
+    private readonly places: PlacesService,
+    private readonly mixes: SavedMixesService,
+    private readonly ecoregions: EcoregionsService,
   ) {}
 
   /** The group's share as anyone sees it; with a yard, ranked by how well each plant fits it. */
@@ -61,14 +69,14 @@ export class ReservationsService {
       const r = this.ctx.get(s.slug);
       return r ? [{ stock: s, record: r }] : [];
     });
-    const fits =
-      yard.sun && yard.moisture
-        ? rankForYard(
-            records.map((r) => r.record),
-            { sun: yard.sun, moisture: yard.moisture },
-            { state: group.state as StateCode, ...(group.ecoregionCode ? { ecoregionCode: group.ecoregionCode } : {}) },
-          )
-        : null;
+    const site = await this.yardOf(group, yard);
+    const fits = site
+      ? rankForYard(
+          records.map((r) => r.record),
+          { sun: site.yard.sun, moisture: site.yard.moisture },
+          site.region,
+        )
+      : null;
     const species: ShareSpecies[] = records.map(({ stock: s, record }) => {
       const w = wildlifeSummary(record);
       return {
@@ -107,9 +115,70 @@ export class ReservationsService {
         past: s.starts_at_ms <= nowMs,
       })),
       species,
-      yard: yard.sun && yard.moisture ? { sun: yard.sun, moisture: yard.moisture } : null,
+      yard: site?.yard ?? null,
       notes: SHARE_NOTES,
+      whatToBring: share.what_to_bring,
     };
+  }
+
+  /**
+   * The yard to rank for and the region to rank it in: the taker's answers in the group's region; with
+   * a ZIP, in the place the ZIP resolves to (the same lookup as "your ground"); or a saved mix's own
+   * site and region. An unknown ZIP or mix is a 400 naming it.
+   */
+  private async yardOf(group: Group, q: ShareFitQuery): Promise<{ yard: ShareYard; region: RegionContext } | null> {
+    if (q.mix) {
+      const mix = await this.mixes.get(q.mix).catch((e: unknown) => {
+        if (e instanceof NotFoundException)
+          throw badRequest([{ field: 'mix', message: 'is not a saved mix we keep (it may have been deleted)' }]);
+        throw e;
+      });
+      const { site, region } = mix.request;
+      return {
+        yard: {
+          sun: site.sun,
+          moisture: site.moisture,
+          from: 'mix',
+          place: this.placeWords(null, region.state, region.ecoregionCode),
+          mixName: mix.name,
+        },
+        region: { state: region.state, ...(region.ecoregionCode ? { ecoregionCode: region.ecoregionCode } : {}) },
+      };
+    }
+    if (!q.sun || !q.moisture) return null;
+    if (q.zip) {
+      const place = this.places.lookup({ zip: q.zip });
+      return {
+        yard: {
+          sun: q.sun,
+          moisture: q.moisture,
+          from: 'zip',
+          place: this.placeWords(place.zip?.city ?? null, place.state, place.ecoregion.code),
+          mixName: null,
+        },
+        region: { state: place.state, ecoregionCode: place.ecoregion.code },
+      };
+    }
+    return {
+      yard: {
+        sun: q.sun,
+        moisture: q.moisture,
+        from: 'answers',
+        place: this.placeWords(group.town, group.state, group.ecoregionCode ?? undefined),
+        mixName: null,
+      },
+      region: {
+        state: group.state as StateCode,
+        ...(group.ecoregionCode ? { ecoregionCode: group.ecoregionCode } : {}),
+      },
+    };
+  }
+
+  /** "Viroqua, WI, in the Driftless Area (EPA Level III ecoregion 52)". */
+  private placeWords(town: string | null, state: string, ecoregionCode: string | undefined): string {
+    const where = town ? `${town}, ${state}` : state;
+    const e = ecoregionCode ? this.ecoregions.find(ecoregionCode) : undefined;
+    return e ? `${where}, in the ${e.name} (EPA Level III ecoregion ${e.code})` : where;
   }
 
   /**
@@ -122,24 +191,15 @@ export class ReservationsService {
     const share = this.views.requireShare(group);
     assertOpen(share);
     const now = this.clock.now();
-    this.checkLines(share, req.lines);
+    const stock = this.checkLines(share, req.lines);
     const slot = this.slotOf(share, req.slotId, now.getTime(), 'slotId');
+    this.refuseEarly(share, group, slot, stock, req);
     const { token, hash } = newToken();
     const id = randomUUID();
     const stamp = now.toISOString();
     this.db.atomically(() => {
       assertOpen(this.views.shareById(share.id));
-      if (
-        this.db.get(
-          `SELECT id FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
-          share.id,
-          req.email,
-        )
-      )
-        throw new ConflictException({
-          message: `${req.email} has a reservation at this share already: change it with the link in its e-mail.`,
-          fields: [{ field: 'email', message: 'has a reservation at this share already' }],
-        });
+      if (this.hasReservation(share.id, req.email)) throw alreadyReserved(req.email);
       this.bookOrExplain(slot, now.getTime(), 'slotId');
       this.takeOrExplain(share, group, req.lines);
       this.db.run(
@@ -434,21 +494,27 @@ export class ReservationsService {
     changed: boolean,
     row: Pick<ReservationRow, 'locale'>,
   ): Promise<void> {
-    const message = reservationEmail({
-      locale: row.locale,
-      name: view.name,
-      groupName: group.name,
-      place: view.share.place,
-      slot: view.slot,
-      lines: view.lines,
-      careSheet: this.views.careSheet(
-        view.lines.map((l) => l.speciesSlug),
-        row.locale,
-      ),
-      link,
-      changed,
-    });
-    this.mail.send({ to: view.email, ...message, kind: 'plant-share-reservation', groupId: group.id });
+    // Rendered when the queue sends it, so a burst of reservations does not wait on the e-mail's words.
+    this.mail.send(() => ({
+      to: view.email,
+      ...reservationEmail({
+        locale: row.locale,
+        name: view.name,
+        groupName: group.name,
+        place: view.share.place,
+        whatToBring: view.share.whatToBring,
+        slot: view.slot,
+        lines: view.lines,
+        careSheet: this.views.careSheet(
+          view.lines.map((l) => l.speciesSlug),
+          row.locale,
+        ),
+        link,
+        changed,
+      }),
+      kind: 'plant-share-reservation',
+      groupId: group.id,
+    }));
   }
 
   /** The reservation a private link opens; an unknown link is refused as forged. */
@@ -461,19 +527,54 @@ export class ReservationsService {
     return { group, share, row };
   }
 
-  /** Each species must be on offer here, and the lines within the household limits (400 naming the line). */
-  private checkLines(share: ShareRow, lines: readonly PlantLine[]): void {
-    const offered = new Set(
+  /**
+   * Each species must be on offer here, and the lines within the household limits (400 naming the line).
+   * Answers the share's stock rows as read, by species.
+   */
+  private checkLines(share: ShareRow, lines: readonly PlantLine[]): Map<string, StockRow> {
+    const stock = new Map(
       this.views
         .stock(share.id)
         .filter((s) => s.offered > 0)
-        .map((s) => s.slug),
+        .map((s) => [s.slug, s]),
     );
     const problems: FieldProblem[] = lines.flatMap((l, i) =>
-      offered.has(l.speciesSlug) ? [] : [{ field: `lines.${i}.speciesSlug`, message: 'is not offered at this share' }],
+      stock.has(l.speciesSlug) ? [] : [{ field: `lines.${i}.speciesSlug`, message: 'is not offered at this share' }],
     );
     problems.push(...checkHouseholdLimits(lines, { perSpecies: share.per_species_limit, total: share.total_limit }));
     if (problems.length) throw badRequest(problems);
+    return stock;
+  }
+
+  private hasReservation(shareId: string, email: string): boolean {
+    return Boolean(
+      this.db.get(
+        `SELECT id FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
+        shareId,
+        email,
+      ),
+    );
+  }
+
+  /**
+   * Once the plants have run out, most of a burst asks for what is gone: those get their answer from
+   * what was just read, before a link is made or a transaction begins, in the same order and words
+   * the transaction would give. Passing here proves nothing: the transaction checks all of it again.
+   */
+  private refuseEarly(
+    share: ShareRow,
+    group: Group,
+    slot: SlotRow,
+    stock: ReadonlyMap<string, StockRow>,
+    req: ParsedReservationRequest,
+  ): void {
+    if (this.hasReservation(share.id, req.email)) throw alreadyReserved(req.email);
+    if (slot.booked >= slot.capacity) throw slotFull('slotId');
+    const short = req.lines.flatMap((l, i) => {
+      const left = stock.get(l.speciesSlug)?.remaining ?? 0;
+      return left >= l.count ? [] : [{ field: `lines.${i}.count`, slug: l.speciesSlug, left }];
+    });
+    if (short.length) throw this.allTaken(group, short);
   }
 
   private slotOf(share: ShareRow, slotId: string, nowMs: number, field: string): SlotRow {
@@ -487,10 +588,7 @@ export class ReservationsService {
     if (this.ledger.bookSlot(slot.id, nowMs)) return;
     const now = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', slot.id)!;
     if (now.starts_at_ms <= nowMs) throw badRequest([{ field, message: 'is in the past: choose a later slot' }]);
-    throw new ConflictException({
-      message: 'That pickup slot is full: choose another.',
-      fields: [{ field, message: 'is full' }],
-    });
+    throw slotFull(field);
   }
 
   /** Takes every line or none; when any ran out, 409 names each short line and offers the waitlist. */
@@ -511,8 +609,13 @@ export class ReservationsService {
       short.push({ field: fieldOf(l, i), slug: l.speciesSlug, left: row?.remaining ?? 0 });
     });
     if (short.length === 0) return;
+    throw this.allTaken(group, short);
+  }
+
+  /** 409 naming each short line, with the waitlist offered. */
+  private allTaken(group: Group, short: readonly { field: string; slug: string; left: number }[]): ConflictException {
     const names = short.map((s) => this.views.names(s.slug).commonName);
-    throw new ConflictException({
+    return new ConflictException({
       message: `All taken: ${names.join(', ')} ${short.length === 1 ? 'has' : 'have'} no plants left for this request. Join the waitlist and we will e-mail you if plants come free.`,
       fields: short.map((s) => ({ field: s.field, message: s.left === 0 ? 'all taken' : `only ${s.left} left` })),
       waitlist: { speciesSlugs: short.map((s) => s.slug), path: `/api/plant-shares/${group.slug}/waitlist` },
@@ -533,6 +636,20 @@ export class ReservationsService {
         l.count,
       );
   }
+}
+
+function alreadyReserved(email: string): ConflictException {
+  return new ConflictException({
+    message: `${email} has a reservation at this share already: change it with the link in its e-mail.`,
+    fields: [{ field: 'email', message: 'has a reservation at this share already' }],
+  });
+}
+
+function slotFull(field: string): ConflictException {
+  return new ConflictException({
+    message: 'That pickup slot is full: choose another.',
+    fields: [{ field, message: 'is full' }],
+  });
 }
 
 /** Reservations are taken only while the share is open. */

@@ -5,18 +5,28 @@ import { renderEmail } from '../mail/templates/email-layout.js';
 /** Intl tags of the e-mail languages: US English and Spanish as spoken in the US. */
 const LOCALE_TAGS: Record<WordLocale, string> = { en: 'en-US', es: 'es-US' };
 
-/**
- * A slot's time as the organiser wrote it (the place's own clock): "Sat, Jun 12, 2027, 09:00–09:30",
- * "sáb, 12 jun 2027, 09:00–09:30".
- */
-export function slotWords(start: string, end: string, locale: WordLocale = 'en'): string {
-  const day = new Date(`${start.slice(0, 10)}T12:00:00Z`).toLocaleDateString(LOCALE_TAGS[locale], {
+/** Built once per language: a formatter costs far more to make than to use. */
+const SLOT_DAY: Record<WordLocale, Intl.DateTimeFormat> = {
+  en: slotDayFormat('en'),
+  es: slotDayFormat('es'),
+};
+
+function slotDayFormat(locale: WordLocale): Intl.DateTimeFormat {
+  return new Intl.DateTimeFormat(LOCALE_TAGS[locale], {
     weekday: 'short',
     day: 'numeric',
     month: 'short',
     year: 'numeric',
     timeZone: 'UTC',
   });
+}
+
+/**
+ * A slot's time as the organiser wrote it (the place's own clock): "Sat, Jun 12, 2027, 09:00–09:30",
+ * "sáb, 12 jun 2027, 09:00–09:30".
+ */
+export function slotWords(start: string, end: string, locale: WordLocale = 'en'): string {
+  const day = SLOT_DAY[locale].format(new Date(`${start.slice(0, 10)}T12:00:00Z`));
   return `${day}, ${start.slice(11, 16)}–${end.slice(11, 16)}`;
 }
 
@@ -27,6 +37,7 @@ export function reservationEmail(input: {
   name: string;
   groupName: string;
   place: SharePlace;
+  whatToBring?: string | null;
   slot: { start: string; end: string };
   lines: { commonName: string; count: number }[];
   careSheet: CareSheetEntry[];
@@ -50,6 +61,7 @@ export function reservationEmail(input: {
       input.changed ? say('mail.reservation.changed', { group }) : say('mail.reservation.reserved', { group }),
       say('mail.reservation.slot', { when }),
       `${say('mail.reservation.place', { place: placeWords(input.place) })}${input.place.directions ? ` ${input.place.directions}` : ''}`,
+      ...(input.whatToBring ? [say('mail.reservation.bring', { what: input.whatToBring })] : []),
       say('mail.reservation.plants', { plants }),
       say('mail.reservation.care'),
       ...care,

@@ -15,6 +15,7 @@ export interface ShareRow {
   total_limit: number;
   retention_days: number;
   personal_data_purged_at: string | null;
+  what_to_bring: string | null;
 }
 
 export interface SlotRow {
@@ -76,4 +77,4 @@ export interface WaitlistRow {
 }
 
 export const SHARE_COLUMNS = `id, group_id, season_id, share_date, place_name, place_address, place_directions, status,
-  per_species_limit, total_limit, retention_days, personal_data_purged_at`;
+  per_species_limit, total_limit, retention_days, personal_data_purged_at, what_to_bring`;

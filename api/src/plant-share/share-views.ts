@@ -10,6 +10,7 @@ import {
   RESERVATION_STATUSES,
   type ReservationStatus,
   type ShareStockLine,
+  type ShareWaitlist,
   type TakerReservation,
   type WordLocale,
 } from '@homeground/shared';
@@ -27,6 +28,7 @@ import {
   type ShareRow,
   type SlotRow,
   type StockRow,
+  type WaitlistRow,
 } from './share-rows.js';
 
 /** Adds `days` to an ISO date (UTC calendar arithmetic). */
@@ -189,6 +191,46 @@ export class ShareViews {
       stock,
       households,
       walkUps: Number(walkUps?.n ?? 0),
+      whatToBring: share.what_to_bring,
+    };
+  }
+
+  /**
+   * The waitlist per species in the order plants are offered (the order households joined), for the
+   * group's organisers: names and e-mails included, as on the pickup list, until the retention ends.
+   */
+  waitlist(share: ShareRow): ShareWaitlist {
+    const rows = this.db.all<WaitlistRow & { created_at: string }>(
+      `SELECT id, slug, count, held, status, offered_until, name, email, seq, created_at FROM share_waitlist
+       WHERE share_id = ? ORDER BY seq`,
+      share.id,
+    );
+    const stock = this.stock(share.id);
+    const order = [...stock.map((s) => s.slug), ...rows.map((r) => r.slug)];
+    const slugs = [...new Set(order)].filter((slug) => rows.some((r) => r.slug === slug));
+    return {
+      species: slugs.map((slug) => {
+        // Position counts only households still in line; those served or passed over keep no place.
+        let position = 0;
+        return {
+          speciesSlug: slug,
+          ...this.names(slug),
+          remaining: stock.find((s) => s.slug === slug)?.remaining ?? 0,
+          entries: rows
+            .filter((r) => r.slug === slug)
+            .map((r) => ({
+              position: r.status === 'waiting' || r.status === 'offered' ? ++position : 0,
+              name: r.name,
+              email: r.email,
+              count: r.count,
+              status: r.status,
+              held: r.held,
+              heldUntil:
+                r.status === 'offered' && r.offered_until !== null ? new Date(r.offered_until).toISOString() : null,
+              joinedAt: r.created_at,
+            })),
+        };
+      }),
     };
   }
 
@@ -250,6 +292,7 @@ export class ShareViews {
         date: share.share_date,
         place: this.place(share),
         status: share.status,
+        whatToBring: share.what_to_bring,
       },
       canChange: r.status === 'confirmed' && share.status === 'open' && slot.starts_at_ms > nowMs,
       careSheet: this.careSheet(lines.map((l) => l.slug)),
@@ -260,7 +303,7 @@ export class ShareViews {
   async sendOffers(group: Group, share: ShareRow, offers: readonly WaitlistOfferMade[]): Promise<void> {
     for (const o of offers) {
       if (!o.email) continue;
-      const message = waitlistOfferEmail({
+      const input = {
         locale: o.locale,
         name: o.name ?? '',
         groupName: group.name,
@@ -269,8 +312,14 @@ export class ShareViews {
         heldUntil: o.heldUntil,
         place: this.place(share),
         link: `${this.config.publicUrl}/plant-share/offers/${o.token}`,
-      });
-      this.mail.send({ to: o.email, ...message, kind: 'plant-share-waitlist-offer', groupId: group.id });
+      };
+      const to = o.email;
+      this.mail.send(() => ({
+        to,
+        ...waitlistOfferEmail(input),
+        kind: 'plant-share-waitlist-offer',
+        groupId: group.id,
+      }));
     }
   }
 

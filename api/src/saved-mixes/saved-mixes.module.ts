@@ -10,5 +10,7 @@ import { SavedMixesService } from './saved-mixes.service.js';
   imports: [TypeOrmModule.forFeature([SavedMixRow]), MixContextModule],
   controllers: [SavedMixesController],
   providers: [SavedMixesService],
+  // The plant share's "fits my yard" opens a saved mix by its link id for its site and place.
+  exports: [SavedMixesService],
 })
 export class SavedMixesModule {}

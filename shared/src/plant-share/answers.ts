@@ -74,6 +74,40 @@ export interface PlantShare {
   stock: ShareStockLine[];
   households: Record<ReservationStatus, number>;
   walkUps: number;
+  /** What takers should bring to pickup, or null when the organiser has not said. */
+  whatToBring: string | null;
+}
+
+export const WAITLIST_STATUSES = ['waiting', 'offered', 'claimed', 'expired'] as const;
+export type WaitlistStatus = (typeof WAITLIST_STATUSES)[number];
+
+/** One household on a species' waitlist, as the group's organisers see it. */
+export interface ShareWaitlistEntry {
+  /** 1 = first in line, in the order households joined. */
+  position: number;
+  /** Null once names and e-mails are past the share's retention. */
+  name: string | null;
+  email: string | null;
+  /** Plants asked for. */
+  count: number;
+  status: WaitlistStatus;
+  /** Plants held for the household while an offer stands. */
+  held: number;
+  /** While offered: when the hold ends (ISO date-time). */
+  heldUntil: string | null;
+  joinedAt: string;
+}
+
+/** The organiser's view of the waitlist, per species, in the order plants are offered. */
+export interface ShareWaitlist {
+  species: {
+    speciesSlug: string;
+    commonName: string;
+    scientificName: string;
+    /** Plants still on offer of the species (usually 0 while people wait). */
+    remaining: number;
+    entries: ShareWaitlistEntry[];
+  }[];
 }
 
 /** A caution as the fact cards show it: the kind's heading and the record's own calm sentence. */
@@ -126,6 +160,21 @@ export interface PublicPickupSlot {
   past: boolean;
 }
 
+export const SHARE_YARD_SOURCES = ['answers', 'zip', 'mix'] as const;
+/** Where the yard came from: the taker's two answers, those with a ZIP, or a saved mix. */
+export type ShareYardSource = (typeof SHARE_YARD_SOURCES)[number];
+
+/** The yard "fits my yard" ranked for, and the place it ranked for, in words. */
+export interface ShareYard {
+  sun: Sun;
+  moisture: Moisture;
+  from: ShareYardSource;
+  /** E.g. "Viroqua, WI, in the Driftless Area (EPA Level III ecoregion 52)"; the group's own place for answers alone. */
+  place: string;
+  /** The saved mix's name, when the yard came from one. */
+  mixName: string | null;
+}
+
 /** The public page of a group's open share. */
 export interface PublicPlantShare {
   groupSlug: string;
@@ -139,9 +188,11 @@ export interface PublicPlantShare {
   slots: PublicPickupSlot[];
   species: ShareSpecies[];
   /** The yard the list is ranked for, when given. */
-  yard: { sun: Sun; moisture: Moisture } | null;
+  yard: ShareYard | null;
   /** General safety words shown under the list; local rules come first. */
   notes: string[];
+  /** What takers should bring to pickup, or null when the organiser has not said. */
+  whatToBring: string | null;
 }
 
 /** One species of a care sheet, in words: sun, moisture, spacing and cautions. */
@@ -171,7 +222,14 @@ export interface TakerReservation {
   zip: string;
   slot: { id: string; start: string; end: string };
   lines: ReservationLine[];
-  share: { groupSlug: string; groupName: string; date: string; place: SharePlace; status: ShareStatus };
+  share: {
+    groupSlug: string;
+    groupName: string;
+    date: string;
+    place: SharePlace;
+    status: ShareStatus;
+    whatToBring: string | null;
+  };
   /** True while the share is open and the slot has not started. */
   canChange: boolean;
   careSheet: CareSheetEntry[];
@@ -227,10 +285,13 @@ export interface WalkUpGift {
   givenAt: string;
 }
 
-/** Germination by method and grower: filled once batches are logged (not yet recorded). */
+/**
+ * Germination by method and grower from the batch logs: seeds sown, seedlings up ("germinated") and
+ * plants ready. Growers by first name only; counts only.
+ */
 export interface GerminationReport {
-  byMethod: { method: SowingMethod; sown: number; germinated: number }[];
-  byGrower: { grower: string; sown: number; germinated: number }[];
+  byMethod: { method: SowingMethod; sown: number; germinated: number; ready: number }[];
+  byGrower: { grower: string; sown: number; germinated: number; ready: number }[];
 }
 
 /** The season report: counts only, never names, e-mails or full ZIP codes. */
@@ -318,7 +379,31 @@ export const plantShareSchema = z.object({
     cancelled: z.number().int(),
   }),
   walkUps: z.number().int(),
+  whatToBring: z.string().nullable(),
 }) satisfies z.ZodType<PlantShare>;
+
+export const shareWaitlistSchema = z.object({
+  species: z.array(
+    z.object({
+      speciesSlug: z.string(),
+      commonName: z.string(),
+      scientificName: z.string(),
+      remaining: z.number().int(),
+      entries: z.array(
+        z.object({
+          position: z.number().int(),
+          name: z.string().nullable(),
+          email: z.string().nullable(),
+          count: z.number().int(),
+          status: z.enum(WAITLIST_STATUSES),
+          held: z.number().int(),
+          heldUntil: isoDateTime.nullable(),
+          joinedAt: isoDateTime,
+        }),
+      ),
+    }),
+  ),
+}) satisfies z.ZodType<ShareWaitlist>;
 
 const cautionAnswer = z.object({ kind: z.enum(CAUTION_KINDS), title: z.string(), text: z.string() });
 
@@ -358,8 +443,17 @@ export const publicPlantShareSchema = z.object({
       fit: z.object({ fit: z.enum(YARD_FITS), rank: z.number().int(), why: z.array(z.string()) }).nullable(),
     }),
   ),
-  yard: z.object({ sun: z.enum(SUN_LEVELS), moisture: z.enum(MOISTURE_LEVELS) }).nullable(),
+  yard: z
+    .object({
+      sun: z.enum(SUN_LEVELS),
+      moisture: z.enum(MOISTURE_LEVELS),
+      from: z.enum(SHARE_YARD_SOURCES),
+      place: z.string(),
+      mixName: z.string().nullable(),
+    })
+    .nullable(),
   notes: z.array(z.string()),
+  whatToBring: z.string().nullable(),
 }) satisfies z.ZodType<PublicPlantShare>;
 
 const careSheetAnswer = z.object({
@@ -386,6 +480,7 @@ export const takerReservationSchema = z.object({
     date: isoDate,
     place: sharePlaceAnswer,
     status: z.enum(SHARE_STATUSES),
+    whatToBring: z.string().nullable(),
   }),
   canChange: z.boolean(),
   careSheet: z.array(careSheetAnswer),
@@ -472,9 +567,21 @@ export const shareReportSchema = z.object({
   germination: z
     .object({
       byMethod: z.array(
-        z.object({ method: z.enum(SOWING_METHODS), sown: z.number().int(), germinated: z.number().int() }),
+        z.object({
+          method: z.enum(SOWING_METHODS),
+          sown: z.number().int(),
+          germinated: z.number().int(),
+          ready: z.number().int(),
+        }),
       ),
-      byGrower: z.array(z.object({ grower: z.string(), sown: z.number().int(), germinated: z.number().int() })),
+      byGrower: z.array(
+        z.object({
+          grower: z.string(),
+          sown: z.number().int(),
+          germinated: z.number().int(),
+          ready: z.number().int(),
+        }),
+      ),
     })
     .nullable(),
   summary: z.array(z.string()),

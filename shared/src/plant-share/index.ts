@@ -4,3 +4,4 @@ export * from './limits.js';
 export * from './care-sheet.js';
 export * from './fits-my-yard.js';
 export * from './season-report.js';
+export * from './germination.js';

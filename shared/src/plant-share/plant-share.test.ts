@@ -4,6 +4,7 @@ import { checkHouseholdLimits } from './limits.js';
 import { rankForYard } from './fits-my-yard.js';
 import { reservationRequestSchema } from './requests.js';
 import { seasonReport, shareReportToCsv } from './season-report.js';
+import { germinationReport } from './germination.js';
 
 // Records for the tests: golden alexanders' facts (from memory) with the overrides named. Host counts are
 // Tallamy & Shropshire 2009 genus counts as CHECK-VALUES §2 lists them (Solidago 115, Asclepias 12, TAL-H, R).
@@ -139,5 +140,80 @@ describe('season report arithmetic', () => {
     expect(report.zipAreas).toEqual([{ area: '546', households: 3 }]);
     expect(JSON.stringify(report)).not.toContain('54665');
     expect(shareReportToCsv(report)).not.toContain('54665');
+  });
+});
+
+// Germination from batch logs: each entry counts what is new since the last (batch-planning/batch-log.ts),
+// so the figures are sums. The counts are invented (demo scenario, DESIGN.md); the checks are arithmetic.
+describe('germination by method and grower', () => {
+  const batches = [
+    {
+      method: 'winter-sowing' as const,
+      grower: 'Juniper',
+      entries: [
+        { kind: 'sown' as const, count: 100 },
+        { kind: 'germinated' as const, count: 60 },
+        { kind: 'germinated' as const, count: 10 },
+        { kind: 'lost' as const, count: 5 },
+        { kind: 'ready' as const, count: 50 },
+      ],
+    },
+    {
+      method: 'soil-blocks' as const,
+      grower: 'Theo',
+      entries: [
+        { kind: 'sown' as const, count: 40 },
+        { kind: 'germinated' as const, count: 30 },
+      ],
+    },
+    {
+      method: 'winter-sowing' as const,
+      grower: 'Amara',
+      entries: [{ kind: 'sown' as const, count: 20 }],
+    },
+    // Planned but not sown yet: not counted, so no row of zeros.
+    { method: 'indoor-lights' as const, grower: 'Theo', entries: [] },
+  ];
+
+  it.each([
+    ['no batches', [], null],
+    ['batches with nothing logged', [{ method: 'indoor-lights' as const, grower: 'Theo', entries: [] }], null],
+  ])('is null with %s', (_what, input, expected) => {
+    expect(germinationReport(input)).toBe(expected);
+  });
+
+  it('sums sown, up and ready by method (catalogue order) and by grower (by name)', () => {
+    const g = germinationReport(batches)!;
+    expect(g.byMethod).toEqual([
+      { method: 'winter-sowing', sown: 120, germinated: 70, ready: 50 },
+      { method: 'soil-blocks', sown: 40, germinated: 30, ready: 0 },
+    ]);
+    expect(g.byGrower).toEqual([
+      { grower: 'Amara', sown: 20, germinated: 0, ready: 0 },
+      { grower: 'Juniper', sown: 100, germinated: 70, ready: 50 },
+      { grower: 'Theo', sown: 40, germinated: 30, ready: 0 },
+    ]);
+  });
+
+  it('writes both tables into the CSV as counts', () => {
+    const csv = shareReportToCsv(
+      seasonReport({
+        groupSlug: 'larkfield-commons-growers',
+        groupName: 'Larkfield Commons Growers',
+        seasonYear: 2027,
+        shareDate: '2027-06-12',
+        given: [],
+        reservedHouseholds: 0,
+        walkUps: 0,
+        zips: [],
+        targets: [],
+        species: new Map(),
+        germination: germinationReport(batches),
+      }),
+    );
+    expect(csv).toContain(
+      'germination by method,winter sowing in covered containers,50,,,sown 120; up 70; ready 50\r\n',
+    );
+    expect(csv).toContain('germination by grower,Theo,0,,,sown 40; up 30; ready 0\r\n');
   });
 });

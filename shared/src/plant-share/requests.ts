@@ -143,6 +143,18 @@ const stockLinesSchema = (min: number) =>
       });
     });
 
+/** Most characters of the "what to bring" note. */
+export const MAX_WHAT_TO_BRING = 500;
+
+/**
+ * What takers should bring to pickup, in the organiser's words (e.g. "A box or tray for your pots; we
+ * reuse returned pots."). Shown on the public page, the confirmation page and in the confirmation e-mail.
+ */
+export const whatToBringSchema = z
+  .string()
+  .trim()
+  .max(MAX_WHAT_TO_BRING, `must be at most ${MAX_WHAT_TO_BRING} characters`);
+
 /** Opens the season's plant share. Stock left out is taken from the season (see the API). */
 export const openShareRequestSchema = z
   .object({
@@ -156,17 +168,22 @@ export const openShareRequestSchema = z
     /** Days after the share date that takers' names and e-mails are kept. */
     retentionDays: retentionDaysSchema.optional(),
     stock: stockLinesSchema(0).optional(),
+    whatToBring: whatToBringSchema.optional(),
   })
   .strict();
 export type OpenShareRequest = z.infer<typeof openShareRequestSchema>;
 
-/** Changes the share's date, place, limits or retention; what is left out stays. */
+/**
+ * Changes the share's date, place, limits, retention or what to bring; what is left out stays (an empty
+ * "what to bring" clears it). A new date moves every pickup slot to the same times on the new day.
+ */
 export const editShareRequestSchema = z
   .object({
     date: isoDateSchema.optional(),
     place: sharePlaceSchema.optional(),
     limits: householdLimitsSchema.optional(),
     retentionDays: retentionDaysSchema.optional(),
+    whatToBring: whatToBringSchema.optional(),
   })
   .strict();
 export type EditShareRequest = z.infer<typeof editShareRequestSchema>;
@@ -242,13 +259,30 @@ export const waitlistRequestSchema = z
   .strict();
 export type WaitlistRequest = z.input<typeof waitlistRequestSchema>;
 
-/** The taker's yard for "fits my yard": both or neither. */
+/**
+ * The taker's yard for "fits my yard", one of three ways: their sun and moisture (ranked for the
+ * group's region); the same with their ZIP (ranked for the place the ZIP is in); or a saved mix's
+ * link id (its site and its place). Sun and moisture come both or neither.
+ */
 export const shareFitQuerySchema = z
-  .object({ sun: sunSchema.optional(), moisture: moistureSchema.optional() })
+  .object({
+    sun: sunSchema.optional(),
+    moisture: moistureSchema.optional(),
+    zip: zipSchema.optional(),
+    mix: z.uuid({ message: 'must be the id of a saved mix link' }).optional(),
+  })
   .strict()
   .refine((q) => (q.sun === undefined) === (q.moisture === undefined), {
     message: 'give both sun and moisture, or neither',
     path: ['moisture'],
+  })
+  .refine((q) => q.mix === undefined || (q.sun === undefined && q.zip === undefined), {
+    message: 'a saved mix brings its own site and place: give it alone',
+    path: ['mix'],
+  })
+  .refine((q) => q.zip === undefined || q.sun !== undefined, {
+    message: 'give your sun and moisture with your ZIP',
+    path: ['sun'],
   });
 export type ShareFitQuery = z.infer<typeof shareFitQuerySchema>;
 

@@ -3,7 +3,12 @@ import { isNativeMilkweed } from '../scoring/genus.js';
 import { layerOf, type PlantLayer } from '../scoring/layers.js';
 import { hostLevelOf, type HostLevel } from '../scoring/wildlife-value.js';
 import { formatMonths, MONTH_NUMBERS, monthShort } from '../vocabulary/months.js';
+import { SOWING_METHOD_WORDS } from '../vocabulary/seed-words.js';
 import type { GerminationReport, ShareReport } from './answers.js';
+
+/** "sown 120; up 90; ready 70": a germination row's counts for the CSV's words column. */
+const germinationWords = (c: { sown: number; germinated: number; ready: number }) =>
+  `sown ${c.sown}; up ${c.germinated}; ready ${c.ready}`;
 
 /** What the report is worked out from: counts only, gathered by the API after the share. */
 export interface ShareReportInput {
@@ -199,6 +204,13 @@ export function shareReportToCsv(report: ShareReport): string {
         h.words.map((w) => row('caterpillar hosts', h.layer, h.plants, null, null, w)),
       ),
       ...report.zipAreas.map((z) => row('ZIP area', `${z.area}xx`, null, null, z.households, null)),
+      // Germination: plants = ready; the words column carries sown and up, as counts.
+      ...(report.germination?.byMethod ?? []).map((m) =>
+        row('germination by method', SOWING_METHOD_WORDS[m.method].phrase, m.ready, null, null, germinationWords(m)),
+      ),
+      ...(report.germination?.byGrower ?? []).map((g) =>
+        row('germination by grower', g.grower, g.ready, null, null, germinationWords(g)),
+      ),
     ].join('\r\n') + '\r\n'
   );
 }

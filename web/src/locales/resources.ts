@@ -34,6 +34,8 @@ import { seasonBatches as enSeasonBatches } from './en/season-batches.js';
 import { seasonBatches as esSeasonBatches } from './es/season-batches.js';
 import { season as enSeason } from './en/season.js';
 import { season as esSeason } from './es/season.js';
+import { report as enReport } from './en/report.js';
+import { report as esReport } from './es/report.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -56,6 +58,7 @@ export const resources = {
     batches: enBatches,
     seasonBatches: enSeasonBatches,
     season: enSeason,
+    report: enReport,
   },
   es: {
     common: esCommon,
@@ -76,5 +79,6 @@ export const resources = {
     batches: esBatches,
     seasonBatches: esSeasonBatches,
     season: esSeason,
+    report: esReport,
   },
 } as const;

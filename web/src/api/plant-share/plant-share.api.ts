@@ -8,6 +8,7 @@ import type {
   Moisture,
   OpenShareRequest,
   PickupList,
+  PickupSlotRequest,
   PlantShare,
   PublicPlantShare,
   ReservationCreated,
@@ -15,6 +16,7 @@ import type {
   SetStockRequest,
   ShareReport,
   ShareStatus,
+  ShareWaitlist,
   Sun,
   TakerReservation,
   WaitlistJoined,
@@ -25,8 +27,11 @@ import type {
 } from '@homeground/shared';
 import { httpClient } from '../../lib/http-client.js';
 
-/** The taker's spot for "fits my yard"; null shows the list in the share's own order. */
-export type Yard = { sun: Sun; moisture: Moisture } | null;
+/**
+ * The taker's spot for "fits my yard": their sun and moisture (with their ZIP, to rank for where they
+ * live), or a saved mix's link id (its own site and place); null shows the list in the share's order.
+ */
+export type Yard = { sun: Sun; moisture: Moisture; zip?: string } | { mix: string } | null;
 
 const enc = encodeURIComponent;
 const publicPath = (groupSlug: string) => `/api/plant-shares/${enc(groupSlug)}`;
@@ -37,7 +42,7 @@ const reservationPath = (token: string) => `/api/reservations/${enc(token)}`;
 
 /** A group's plant share as anyone sees it, ranked for the taker's yard when one is given. */
 export function getPublicShare(groupSlug: string, yard: Yard, signal?: AbortSignal): Promise<PublicPlantShare> {
-  const query = yard ? `?${new URLSearchParams({ sun: yard.sun, moisture: yard.moisture })}` : '';
+  const query = yard ? `?${new URLSearchParams(yard)}` : '';
   return httpClient.get<PublicPlantShare>(`${publicPath(groupSlug)}${query}`, { signal, token: null });
 }
 
@@ -96,6 +101,21 @@ export function setStock(groupSlug: string, body: SetStockRequest): Promise<Plan
 
 export function addStock(groupSlug: string, body: AddStockRequest): Promise<PlantShare> {
   return httpClient.post<PlantShare>(`${sharePath(groupSlug)}/stock/add`, body);
+}
+
+/** Adds a pickup slot on the share's day. */
+export function addSlot(groupSlug: string, body: PickupSlotRequest): Promise<PlantShare> {
+  return httpClient.post<PlantShare>(`${sharePath(groupSlug)}/slots`, body);
+}
+
+/** Changes a slot's times or households (never below those booked: the API answers 400). */
+export function editSlot(groupSlug: string, slotId: string, body: PickupSlotRequest): Promise<PlantShare> {
+  return httpClient.put<PlantShare>(`${sharePath(groupSlug)}/slots/${enc(slotId)}`, body);
+}
+
+/** The waitlist per species with names and e-mails (organisers only). */
+export function getShareWaitlist(groupSlug: string, signal?: AbortSignal): Promise<ShareWaitlist> {
+  return httpClient.get<ShareWaitlist>(`${sharePath(groupSlug)}/waitlist`, { signal });
 }
 
 export function setShareStatus(groupSlug: string, status: ShareStatus): Promise<PlantShare> {

@@ -5,6 +5,7 @@ import type {
   ClaimOfferRequest,
   EditShareRequest,
   OpenShareRequest,
+  PickupSlotRequest,
   PlantShare,
   ReservationRequest,
   SetStockRequest,
@@ -14,12 +15,14 @@ import type {
 } from '@homeground/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import {
+  addSlot,
   addStock,
   cancelReservation,
   changeReservation,
   checkIn,
   claimWaitlistOffer,
   editShare,
+  editSlot,
   joinWaitlist,
   openShare,
   recordWalkUp,
@@ -90,6 +93,12 @@ export const useSetStockMutation = (groupSlug: string) =>
   useShareWrite(groupSlug, (body: SetStockRequest) => setStock(groupSlug, body));
 export const useAddStockMutation = (groupSlug: string) =>
   useShareWrite(groupSlug, (body: AddStockRequest) => addStock(groupSlug, body));
+export const useAddSlotMutation = (groupSlug: string) =>
+  useShareWrite(groupSlug, (body: PickupSlotRequest) => addSlot(groupSlug, body));
+export const useEditSlotMutation = (groupSlug: string) =>
+  useShareWrite(groupSlug, ({ slotId, body }: { slotId: string; body: PickupSlotRequest }) =>
+    editSlot(groupSlug, slotId, body),
+  );
 export const useShareStatusMutation = (groupSlug: string) =>
   useShareWrite(groupSlug, (status: ShareStatus) => setShareStatus(groupSlug, status));
 

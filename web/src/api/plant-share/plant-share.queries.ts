@@ -5,6 +5,7 @@ import {
   getReservation,
   getShare,
   getShareReport,
+  getShareWaitlist,
   getWaitlistOffer,
   type Yard,
 } from './plant-share.api.js';
@@ -20,6 +21,7 @@ export const plantShareKeys = {
   organiser: (groupSlug: string) => [...plantShareKeys.group(groupSlug), 'organiser'] as const,
   pickupList: (groupSlug: string, slotId: string) => [...plantShareKeys.group(groupSlug), 'pickup', slotId] as const,
   report: (groupSlug: string) => [...plantShareKeys.group(groupSlug), 'report'] as const,
+  waitlist: (groupSlug: string) => [...plantShareKeys.group(groupSlug), 'waitlist'] as const,
   reservation: (token: string) => [...plantShareKeys.all, 'reservation', token] as const,
   offer: (token: string) => [...plantShareKeys.all, 'offer', token] as const,
 };
@@ -65,5 +67,13 @@ export function reservationQueryOptions(token: string) {
   return queryOptions({
     queryKey: plantShareKeys.reservation(token),
     queryFn: ({ signal }) => getReservation(token, signal),
+  });
+}
+
+/** The organiser's view of the waitlist per species; read again with the rest of the group's share. */
+export function shareWaitlistQueryOptions(groupSlug: string) {
+  return queryOptions({
+    queryKey: plantShareKeys.waitlist(groupSlug),
+    queryFn: ({ signal }) => getShareWaitlist(groupSlug, signal),
   });
 }

@@ -32,6 +32,7 @@ export const en = {
       changed: 'Your reservation at the {{group}} plant share has been changed.',
       slot: 'Pickup slot: {{when}}.',
       place: 'Place: {{place}}.',
+      bring: 'What to bring: {{what}}',
       plants: 'Your plants: {{plants}}.',
       care: 'Care sheet:',
       dig: 'Before you dig, call 811 so buried lines are marked, and follow your town’s rules for planting by streets and sidewalks.',

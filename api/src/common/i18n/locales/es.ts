@@ -36,6 +36,7 @@ export const es = {
       changed: 'Tu reserva en el reparto de plantas de {{group}} ha cambiado.',
       slot: 'Horario de recogida: {{when}}.',
       place: 'Lugar: {{place}}.',
+      bring: 'Qué traer: {{what}}',
       plants: 'Tus plantas: {{plants}}.',
       care: 'Hoja de cuidados:',
       dig: 'Antes de cavar, llama al 811 para que marquen las líneas enterradas, y sigue las reglas de tu pueblo para plantar junto a calles y banquetas.',

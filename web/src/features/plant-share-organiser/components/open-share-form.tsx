@@ -33,10 +33,11 @@ const API_FIELDS: Record<string, string> = {
   'place.directions': 'directions',
   'limits.perSpecies': 'perSpecies',
   'limits.total': 'total',
+  whatToBring: 'whatToBring',
 };
 
 /** The API's 400 with its field names turned into the form's; slot rows are shown beside their row instead. */
-function renameFields(error: unknown): unknown {
+export function renameFields(error: unknown): unknown {
   if (!isApiRequestError(error)) return error;
   const fields = (error.fields ?? [])
     .filter((f) => !f.field.startsWith('slots.'))
@@ -50,7 +51,15 @@ export function OpenShareForm({ groupSlug, defaultDate }: { groupSlug: string; d
   const open = useOpenShareMutation(groupSlug);
   const form = useSchemaForm({
     schema: shareSettingsSchema,
-    initial: { date: defaultDate ?? '', placeName: '', address: '', directions: '', perSpecies: '3', total: '10' },
+    initial: {
+      date: defaultDate ?? '',
+      placeName: '',
+      address: '',
+      directions: '',
+      perSpecies: '3',
+      total: '10',
+      whatToBring: '',
+    },
   });
   const [rows, setRows] = useState<SlotRow[]>([{ start: '09:00', end: '09:30', capacity: '10' }]);
   const [rowErrors, setRowErrors] = useState<SlotRowErrors[]>([]);
@@ -95,6 +104,7 @@ export function OpenShareForm({ groupSlug, defaultDate }: { groupSlug: string; d
         <SchemaTextField form={form} name="placeName" label={W.placeName} hint={W.placeHint} required />
         <SchemaTextField form={form} name="address" label={W.address} required autoComplete="street-address" />
         <SchemaTextField form={form} name="directions" label={W.directions} hint={W.directionsHint} />
+        <SchemaTextField form={form} name="whatToBring" label={W.whatToBring} hint={W.whatToBringHint} />
         <div className={styles.pair}>
           <SchemaTextField form={form} name="perSpecies" label={W.limitPerSpecies} required />
           <SchemaTextField form={form} name="total" label={W.limitTotal} required />

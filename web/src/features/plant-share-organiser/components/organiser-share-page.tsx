@@ -8,13 +8,18 @@ import { isApiRequestError } from '../../../lib/api-request-error.js';
 import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
 import { OpenShareForm } from './open-share-form.js';
 import { useOrganiserStyles } from './organiser.styles.js';
+import { AddSpeciesCard } from './add-species-card.js';
+import { EditShareCard } from './edit-share-card.js';
 import { ShareDayCard } from './share-day-card.js';
+import { SlotsCard } from './slots-card.js';
 import { ShareStatusCard } from './share-status-card.js';
 import { StockCard } from './stock-card.js';
+import { WaitlistCard } from './waitlist-card.js';
 
 /**
  * The organiser's plant share: before it is opened, the form that opens it; afterwards its status,
- * its day, and the plants on offer, with the way to pickup day and the season report.
+ * its day and the ways to change it (day, place, limits, slots), the plants on offer (with new
+ * species and plants that got ready), the waitlist, and the way to pickup day and the season report.
  */
 export function OrganiserSharePage({ groupSlug, groupName }: { groupSlug: string; groupName: string }) {
   const styles = useOrganiserStyles();
@@ -43,7 +48,11 @@ export function OrganiserSharePage({ groupSlug, groupName }: { groupSlug: string
             </div>
             <ShareStatusCard share={s} />
             <ShareDayCard share={s} publicHref={paths.shareAvailable.build(s.groupSlug)} />
-            <StockCard key={s.id} share={s} />
+            <EditShareCard key={`edit-${s.id}`} share={s} />
+            <SlotsCard key={`slots-${s.id}-${s.slots.length}`} share={s} />
+            <StockCard key={`stock-${s.id}-${s.stock.length}`} share={s} />
+            <AddSpeciesCard share={s} />
+            <WaitlistCard groupSlug={s.groupSlug} />
           </div>
         )}
       </QueryState>

@@ -22,6 +22,8 @@ export function ShareDayCard({ share, publicHref }: { share: PlantShare; publicH
           {share.place.name}, {share.place.address}
           {share.place.directions ? `. ${share.place.directions}` : ''}
         </dd>
+        <dt className={styles.term}>{W.whatToBring}</dt>
+        <dd className={styles.value}>{share.whatToBring ?? W.whatToBringNone}</dd>
         <dt className={styles.term}>{W.limitPerSpecies}</dt>
         <dd className={styles.value}>{share.limits.perSpecies}</dd>
         <dt className={styles.term}>{W.limitTotal}</dt>

@@ -21,6 +21,7 @@ export const share: PlantShare = {
   limits: { perSpecies: 4, total: 12 },
   retentionDays: 30,
   personalDataKeptUntil: '2027-07-12',
+  whatToBring: null,
   slots: [
     {
       id: SLOT_1,

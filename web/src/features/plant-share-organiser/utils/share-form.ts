@@ -1,10 +1,12 @@
 import {
+  type EditShareRequest,
   householdLimitsSchema,
   isoDateSchema,
   MAX_SLOTS,
   type OpenShareRequest,
   pickupSlotRequestSchema,
   sharePlaceSchema,
+  whatToBringSchema,
 } from '@homeground/shared';
 import { z } from 'zod';
 import { slotTime } from './slot-time.js';
@@ -27,6 +29,7 @@ export const shareSettingsSchema = z
     directions: sharePlaceSchema.shape.directions,
     perSpecies: typedNumber(limits.perSpecies),
     total: typedNumber(limits.total),
+    whatToBring: whatToBringSchema,
   })
   .refine((v) => v.total >= v.perSpecies, { message: 'must be at least the limit per species', path: ['total'] });
 export type ShareSettings = z.output<typeof shareSettingsSchema>;
@@ -79,5 +82,17 @@ export function toOpenShare(settings: ShareSettings, slots: OpenShareRequest['sl
     place: { name: settings.placeName, address: settings.address, ...(directions ? { directions } : {}) },
     slots,
     limits: { perSpecies: settings.perSpecies, total: settings.total },
+    ...(settings.whatToBring ? { whatToBring: settings.whatToBring } : {}),
+  };
+}
+
+/** The edit body from the checked settings: every field is sent, so an emptied "what to bring" clears it. */
+export function toEditShare(settings: ShareSettings): EditShareRequest {
+  const directions = settings.directions?.trim();
+  return {
+    date: settings.date,
+    place: { name: settings.placeName, address: settings.address, ...(directions ? { directions } : {}) },
+    limits: { perSpecies: settings.perSpecies, total: settings.total },
+    whatToBring: settings.whatToBring,
   };
 }

@@ -66,6 +66,43 @@ describe('what is available', () => {
     expect(card('Southern blue flag').getByText('Needs wet soil.')).toBeInTheDocument();
   });
 
+  it('ranks for the taker’s ZIP or a saved mix, says for which place, and checks the ZIP first', async () => {
+    const mixId = '0b7b1d1e-4a4f-4c59-9d4a-0d1f4e8b9c21';
+    const { user, api } = openShare({
+      [`GET ${SHARE_PATH}`]: (req: FakeRequest) => ({
+        body: req.search.includes('zip=')
+          ? { ...rankedForDrySun, yard: { ...rankedForDrySun.yard!, from: 'zip', place: 'Viroqua, WI' } }
+          : req.search.includes('mix=')
+            ? {
+                ...rankedForDrySun,
+                yard: { ...rankedForDrySun.yard!, from: 'mix', place: 'WI', mixName: 'Dry front bed' },
+              }
+            : share,
+      }),
+    });
+    await screen.findByRole('article', { name: 'Butterfly milkweed' });
+    await user.click(screen.getByRole('radio', { name: 'Full sun' }));
+    await user.click(screen.getByRole('radio', { name: 'Dry' }));
+    const zip = screen.getByRole('textbox', { name: /^Your ZIP code/ });
+    await user.type(zip, '5466');
+    await user.click(screen.getByRole('button', { name: 'Show what fits' }));
+    // zipSchema (shared): five digits; nothing is asked of the API until it is.
+    expect(screen.getByText('Must be a 5-digit ZIP code')).toBeInTheDocument();
+    expect(api.callsTo('GET', SHARE_PATH).some((c) => c.search.includes('zip='))).toBe(false);
+    await user.type(zip, '5');
+    await user.click(screen.getByRole('button', { name: 'Show what fits' }));
+    expect(await screen.findByText('Ranked for dry full sun in Viroqua, WI.')).toBeInTheDocument();
+    expect(api.callsTo('GET', SHARE_PATH).map((c) => c.search)).toContain('?sun=full&moisture=dry&zip=54665');
+
+    await user.type(
+      screen.getByRole('textbox', { name: /^Link to your saved mix/ }),
+      `https://x.example/mixes/${mixId}`,
+    );
+    await user.click(screen.getByRole('button', { name: 'Rank for this mix' }));
+    expect(await screen.findByText(/Ranked for your saved mix “Dry front bed”/)).toBeInTheDocument();
+    expect(api.callsTo('GET', SHARE_PATH).map((c) => c.search)).toContain(`?mix=${mixId}`);
+  });
+
   it('asks for both sun and soil before ranking', async () => {
     const { user, api } = openShare();
     await screen.findByRole('article', { name: 'Butterfly milkweed' });

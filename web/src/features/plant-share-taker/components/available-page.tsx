@@ -1,5 +1,11 @@
 import { MessageBar, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
-import { describeGround, type PublicPlantShare, type ReservationCreated, type ShareSpecies } from '@homeground/shared';
+import {
+  describeGround,
+  type PublicPlantShare,
+  type ReservationCreated,
+  type ShareSpecies,
+  type ShareYard,
+} from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { Yard } from '../../../api/plant-share/plant-share.api.js';
@@ -41,6 +47,9 @@ export function AvailablePage({ groupSlug }: { groupSlug: string }) {
       error={(error, retry) =>
         isApiRequestError(error) && error.statusCode === 404 ? (
           <EmptyState title={W.notFound} />
+        ) : isApiRequestError(error) && error.statusCode === 400 && yard ? (
+          // A ZIP or mix the API could not place: say why, and go back to the whole list.
+          <ErrorState title={W.fitRefused} message={error.message} onRetry={() => setYard(null)} />
         ) : (
           <ErrorState title={W.loadFailed} message={error.message} onRetry={retry} />
         )
@@ -106,6 +115,7 @@ function Available({ share, yard, onYard, isRanking, onReserved }: AvailableProp
     <>
       <PageIntro title={W.availableTitle(share.groupName)}>
         {W.availableLead(shareDateWords(share.date), place)} {W.limits(share.limits.perSpecies, share.limits.total)}
+        {share.whatToBring ? ` ${W.bringLine(share.whatToBring)}` : null}
       </PageIntro>
       <div className={styles.stack}>
         {share.status === 'open' ? null : (
@@ -118,9 +128,7 @@ function Available({ share, yard, onYard, isRanking, onReserved }: AvailableProp
           <Heading level="section" id="on-offer" className={styles.heading}>
             {W.onOfferHeading}
           </Heading>
-          {share.yard ? (
-            <p className={styles.heading}>{W.fitFor(describeGround(share.yard.sun, share.yard.moisture))}</p>
-          ) : null}
+          {share.yard ? <p className={styles.heading}>{rankedFor(share.yard)}</p> : null}
           {rankByFit(share.species).map(({ group, species }) => (
             <div key={group} className={styles.stack}>
               {group === 'less-suited' ? <Heading level="card">{W.notSuited}</Heading> : null}
@@ -152,4 +160,11 @@ function Available({ share, yard, onYard, isRanking, onReserved }: AvailableProp
       </div>
     </>
   );
+}
+
+/** What the list is ranked for, in words: the spot, and the place (and the mix) it came from. */
+function rankedFor(yard: ShareYard): string {
+  const spot = describeGround(yard.sun, yard.moisture);
+  if (yard.from === 'mix' && yard.mixName) return W.fitForMix(yard.mixName, spot, yard.place);
+  return yard.from === 'zip' ? W.fitForPlace(spot, yard.place) : W.fitFor(spot);
 }

@@ -1,6 +1,7 @@
 import {
   Button,
   Field,
+  Input,
   MessageBar,
   MessageBarBody,
   makeStyles,
@@ -16,8 +17,10 @@ import {
   SUN_LEVELS,
   SUN_WORDS,
   type Sun,
+  zipSchema,
 } from '@homeground/shared';
 import { type FormEvent, useState } from 'react';
+import type { Yard } from '../../../api/plant-share/plant-share.api.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { TAKER_WORDS as W } from '../utils/taker-words.js';
@@ -33,8 +36,11 @@ const useStyles = makeStyles({
   actions: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalM, marginTop: tokens.spacingVerticalL },
 });
 
-/** The taker's answer: sun and soil of the spot they will plant. */
-export type YardAnswer = { sun: Sun; moisture: Moisture };
+/** The taker's answer: sun and soil of the spot they will plant, with their ZIP; or a saved mix. */
+export type YardAnswer = NonNullable<Yard>;
+
+/** A saved mix's id from its link ("…/mixes/<id>") or the id alone. */
+const MIX_ID = /([0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12})\/?$/i;
 
 export interface FitFilterProps {
   onApply: (answer: YardAnswer) => void;
@@ -48,17 +54,34 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
   const styles = useStyles();
   const [sun, setSun] = useState<Sun | ''>('');
   const [moisture, setMoisture] = useState<Moisture | ''>('');
+  const [zip, setZip] = useState('');
+  const [zipError, setZipError] = useState<string | undefined>();
+  const [mixLink, setMixLink] = useState('');
+  const [mixError, setMixError] = useState<string | undefined>();
   const [error, setError] = useState<string | null>(null);
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    if (sun && moisture) return onApply({ sun, moisture });
-    setError(W.fitNeedsAnswer);
+    if (!sun || !moisture) return setError(W.fitNeedsAnswer);
+    if (zip.trim() === '') return onApply({ sun, moisture });
+    // The same ZIP rule the API reads the query with.
+    const parsed = zipSchema.safeParse(zip);
+    if (!parsed.success) return setZipError(capitalise(parsed.error.issues[0].message));
+    onApply({ sun, moisture, zip: parsed.data });
+  };
+
+  const useMix = (event: FormEvent) => {
+    event.preventDefault();
+    const id = MIX_ID.exec(mixLink.trim())?.[1];
+    if (!id) return setMixError(W.fitMixBad);
+    onApply({ mix: id.toLowerCase() });
   };
 
   const clear = () => {
     setSun('');
     setMoisture('');
+    setZip('');
+    setMixLink('');
     onClear();
   };
 
@@ -88,6 +111,19 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
               ))}
             </RadioGroup>
           </Field>
+          <Field
+            label={W.fitZip}
+            hint={W.fitZipHint}
+            validationMessage={zipError}
+            validationState={zipError ? 'error' : 'none'}
+          >
+            <Input
+              inputMode="numeric"
+              autoComplete="postal-code"
+              value={zip}
+              onChange={(_, d) => (setZip(d.value), setZipError(undefined))}
+            />
+          </Field>
         </div>
         {error ? (
           <MessageBar intent="error">
@@ -99,6 +135,20 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
             {isPending ? W.fitting : W.fitApply}
           </Button>
           {isActive ? <Button onClick={clear}>{W.fitClear}</Button> : null}
+        </div>
+      </form>
+      <form onSubmit={useMix} noValidate aria-labelledby="fit-by-mix">
+        <Heading level="card" id="fit-by-mix">
+          {W.fitOrMix}
+        </Heading>
+        <p className={styles.lead}>{W.fitMixLead}</p>
+        <Field label={W.fitMixLink} validationMessage={mixError} validationState={mixError ? 'error' : 'none'}>
+          <Input value={mixLink} onChange={(_, d) => (setMixLink(d.value), setMixError(undefined))} />
+        </Field>
+        <div className={styles.actions}>
+          <Button type="submit" disabled={isPending}>
+            {W.fitMixApply}
+          </Button>
         </div>
       </form>
     </ContentCard>

@@ -50,7 +50,7 @@ export function ReservationSummary({ reservation }: { reservation: TakerReservat
             </>
           ) : null}
           <dt className={styles.term}>{W.bringWords}</dt>
-          <dd className={styles.value}>{W.bringAdvice}</dd>
+          <dd className={styles.value}>{share.whatToBring ?? W.bringAdvice}</dd>
         </dl>
       </ContentCard>
       <ContentCard aria-labelledby="plants-heading">

@@ -78,6 +78,7 @@ export const share: PublicPlantShare = {
   },
   status: 'open',
   limits: { perSpecies: 3, total: 6 },
+  whatToBring: 'A box or tray to carry your pots home.',
   slots: [
     { id: SLOT_1, start: '2027-06-12T09:00:00-05:00', end: '2027-06-12T09:30:00-05:00', left: 4, past: false },
     { id: SLOT_2, start: '2027-06-12T09:30:00-05:00', end: '2027-06-12T10:00:00-05:00', left: 0, past: false },
@@ -90,7 +91,7 @@ export const share: PublicPlantShare = {
 /** The same share ranked for dry full sun, as the API answers `?sun=full&moisture=dry`. */
 export const rankedForDrySun: PublicPlantShare = {
   ...share,
-  yard: { sun: 'full', moisture: 'dry' },
+  yard: { sun: 'full', moisture: 'dry', from: 'answers', place: 'Larkfield, WI', mixName: null },
   species: [
     { ...blueFlag, fit: { fit: 'not-for-this-yard', rank: 3, why: ['Needs wet soil.'] } },
     { ...milkweed, fit: { fit: 'thrives', rank: 1, why: ['Thrives in dry soil and full sun.'] } },
@@ -113,7 +114,14 @@ export const reservation: ReservationCreated = {
       count: 2,
     },
   ],
-  share: { groupSlug: GROUP, groupName: share.groupName, date: share.date, place: share.place, status: 'open' },
+  share: {
+    groupSlug: GROUP,
+    groupName: share.groupName,
+    date: share.date,
+    place: share.place,
+    status: 'open',
+    whatToBring: share.whatToBring,
+  },
   canChange: true,
   careSheet: [
     {

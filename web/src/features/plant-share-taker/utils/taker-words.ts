@@ -27,6 +27,17 @@ export const TAKER_WORDS = {
   fitFailed: 'The fit could not be worked out.',
   fitNeedsAnswer: 'Choose both the sun and the soil of your spot.',
   fitFor: (spot: string) => `Ranked for ${spot}.`,
+  fitForPlace: (spot: string, place: string) => `Ranked for ${spot} in ${place}.`,
+  fitForMix: (name: string, spot: string, place: string) => `Ranked for your saved mix “${name}”: ${spot} in ${place}.`,
+  fitZip: 'Your ZIP code (optional)',
+  fitZipHint: 'Ranks for the ecoregion you live in, when it differs from the group’s.',
+  fitOrMix: 'Or use a saved mix',
+  fitMixLead: 'Paste the link of a yard mix you saved: the list is ranked for that mix’s sun, soil and place.',
+  fitMixLink: 'Link to your saved mix',
+  fitMixApply: 'Rank for this mix',
+  fitMixBad: 'That does not look like a saved mix link. It ends in a long code such as 0b7b1d1e-4a4f-….',
+  fitRefused: 'We could not rank the list for that',
+  fitShowAll: 'Show all plants',
   fitWords: {
     thrives: 'Thrives in your spot',
     grows: 'Grows in your spot',
@@ -70,7 +81,8 @@ export const TAKER_WORDS = {
   whereWords: 'Where',
   howWords: 'How pickup works',
   bringWords: 'What to bring',
-  // Homeground's own advice for every share: the answer names no such field.
+  bringLine: (what: string) => `What to bring: ${what}`,
+  // Homeground's own advice when the organiser has not said what to bring.
   bringAdvice: 'A box or tray to stand the pots in, and this e-mail or your name.',
   plantsHeading: 'Your plants',
   careHeading: 'Care sheet',

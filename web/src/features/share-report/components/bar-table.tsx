@@ -48,7 +48,16 @@ export interface BarRow {
  * A bar chart that is a table first: each row's label, its count in words and a CSS bar scaled to
  * the largest value (or target), so screen readers and grey photocopies read the numbers, not colour.
  */
-export function BarTable({ caption, rows, unit }: { caption: string; rows: readonly BarRow[]; unit: string }) {
+export function BarTable({
+  caption,
+  rows,
+  words,
+}: {
+  caption: string;
+  rows: readonly BarRow[];
+  /** The row's count in words, in the page's language (with its target when it has one). */
+  words: (row: BarRow) => string;
+}) {
   const styles = useStyles();
   const max = Math.max(1, ...rows.map((r) => Math.max(r.value, r.target ?? 0)));
   const pct = (n: number) => `${Math.round((n / max) * 1000) / 10}%`;
@@ -66,10 +75,7 @@ export function BarTable({ caption, rows, unit }: { caption: string; rows: reado
                 <div className={styles.bar} style={{ width: pct(r.value) }} />
                 {r.target !== undefined ? <div className={styles.target} style={{ left: pct(r.target) }} /> : null}
               </div>
-              <span className={styles.words}>
-                {r.value.toLocaleString('en-US')} {unit}
-                {r.target !== undefined ? ` of ${r.target.toLocaleString('en-US')} planned` : ''}
-              </span>
+              <span className={styles.words}>{words(r)}</span>
             </td>
           </tr>
         ))}

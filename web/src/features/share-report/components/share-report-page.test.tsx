@@ -103,6 +103,57 @@ describe('the season report', () => {
     expect(document.body.textContent).not.toMatch(/@|score/i);
   });
 
+  it('shows germination by method and by grower as tables first, then plants ready as bars', async () => {
+    // Invented counts (demo scenario): the page shows what the API sums from the batch logs.
+    renderApp({
+      path: '/plant-share/report',
+      token: 'token',
+      api: {
+        'GET /api/me': { body: maraOrganiser },
+        [`GET ${REPORT_PATH}`]: {
+          body: {
+            ...report,
+            germination: {
+              byMethod: [
+                { method: 'winter-sowing', sown: 120, germinated: 70, ready: 50 },
+                { method: 'soil-blocks', sown: 40, germinated: 30, ready: 24 },
+              ],
+              byGrower: [
+                { grower: 'Juniper', sown: 120, germinated: 70, ready: 50 },
+                { grower: 'Theo', sown: 40, germinated: 30, ready: 24 },
+              ],
+            },
+          },
+        },
+      },
+    });
+    const byMethod = within(
+      await screen.findByRole('table', { name: /^Seeds sown, seedlings up and plants ready, by method/ }),
+    );
+    const winter = within(
+      byMethod.getByRole('rowheader', { name: 'Winter sowing in covered containers' }).closest('tr')!,
+    );
+    expect(winter.getAllByRole('cell').map((c) => c.textContent)).toEqual(['120', '70', '50']);
+    const byGrower = within(screen.getByRole('table', { name: /by grower/ }));
+    expect(byGrower.getByRole('rowheader', { name: 'Theo' })).toBeInTheDocument();
+    const bars = within(screen.getByRole('table', { name: 'Plants ready, by method' }));
+    expect(bars.getByText('24 plants ready')).toBeInTheDocument();
+    expect(screen.queryByText(/once the growers’ batch logs are recorded/)).not.toBeInTheDocument();
+  });
+
+  it('speaks Spanish with the page, numbers in the Spanish way', async () => {
+    renderApp({
+      path: '/plant-share/report',
+      token: 'token',
+      locale: 'es',
+      api: { 'GET /api/me': { body: maraOrganiser }, [`GET ${REPORT_PATH}`]: { body: report } },
+    });
+    expect(await screen.findByRole('heading', { level: 1, name: 'Informe de la temporada 2027' })).toBeInTheDocument();
+    expect(screen.getByText(/de la meta de la temporada, 200 plantas/)).toBeInTheDocument();
+    const zips = within(screen.getByRole('table', { name: 'Hogares por zona postal' }));
+    expect(zips.getByText('20 hogares')).toBeInTheDocument();
+  });
+
   it('downloads the CSV with the sign-in token', async () => {
     const createObjectURL = vi.fn(() => 'blob:report');
     // jsdom has no object URLs; a stand-in URL class keeps the real one untouched for other tests.

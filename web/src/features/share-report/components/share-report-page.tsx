@@ -1,6 +1,6 @@
 import { Button, MessageBar, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
 import { ArrowDownloadRegular, PrintRegular } from '@fluentui/react-icons';
-import { capitalise, type ShareReport, SOWING_METHOD_WORDS } from '@homeground/shared';
+import type { ShareReport } from '@homeground/shared';
 import { useMutation, useQuery } from '@tanstack/react-query';
 import { downloadShareReportCsv } from '../../../api/plant-share/plant-share.api.js';
 import { shareReportQueryOptions } from '../../../api/plant-share/plant-share.queries.js';
@@ -9,8 +9,10 @@ import { Heading } from '../../../components/page/page-heading.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { EmptyState, ErrorState, QueryState } from '../../../components/states/index.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
-import { REPORT_WORDS as W } from '../utils/report-words.js';
+import { useTranslation } from 'react-i18next';
+import { useFormatters } from '../../../lib/i18n/index.js';
 import { BarTable } from './bar-table.js';
+import { GerminationTables } from './germination-tables.js';
 
 const useStyles = makeStyles({
   stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalXL },
@@ -40,15 +42,16 @@ const useStyles = makeStyles({
 /** The season report for the group's organisers: figures, charts as tables with bars, and the CSV. */
 export function ShareReportPage({ groupSlug }: { groupSlug: string }) {
   const report = useQuery(shareReportQueryOptions(groupSlug));
+  const { t } = useTranslation('report');
   return (
     <QueryState
       query={report}
-      loading={W.loading}
+      loading={t('loading')}
       error={(error, retry) =>
         isApiRequestError(error) && error.statusCode === 404 ? (
-          <EmptyState title={W.noShare} />
+          <EmptyState title={t('noShare')} />
         ) : (
-          <ErrorState title={W.loadFailed} message={error.message} onRetry={retry} />
+          <ErrorState title={t('loadFailed')} message={error.message} onRetry={retry} />
         )
       }
     >
@@ -57,15 +60,12 @@ export function ShareReportPage({ groupSlug }: { groupSlug: string }) {
   );
 }
 
-function longDate(day: string): string {
-  return new Intl.DateTimeFormat('en-US', { month: 'long', day: 'numeric', year: 'numeric', timeZone: 'UTC' }).format(
-    new Date(`${day}T00:00:00Z`),
-  );
-}
-
 function Report({ report }: { report: ShareReport }) {
   const styles = useStyles();
-  const t = report.totals;
+  const { t } = useTranslation('report');
+  const format = useFormatters();
+  const totals = report.totals;
+  const plants = (n: number) => t('plants', { count: n, formatted: format.number(n) });
   const csv = useMutation({
     mutationFn: () => downloadShareReportCsv(report.groupSlug),
     onSuccess: (blob) => {
@@ -78,29 +78,35 @@ function Report({ report }: { report: ShareReport }) {
     },
   });
   const figures: [number, string][] = [
-    [t.plantsGiven, W.plantsGiven],
-    [t.households, `${W.households} (${t.walkUps} ${W.walkUps})`],
-    [t.milkweedPlants, W.milkweeds],
-    [t.species, W.species],
+    [totals.plantsGiven, t('plantsGiven')],
+    [totals.households, t('households', { walkUps: format.number(totals.walkUps) })],
+    [totals.milkweedPlants, t('milkweeds')],
+    [totals.species, t('species')],
   ];
   return (
     <>
-      <PageIntro title={W.title(report.seasonYear)}>{W.lead(report.groupName, longDate(report.shareDate))}</PageIntro>
+      <PageIntro title={t('title', { year: report.seasonYear })}>
+        {t('lead', { group: report.groupName, date: format.date(report.shareDate) })}
+      </PageIntro>
       <div className={styles.stack}>
         <ContentCard aria-labelledby="report-impact">
           <Heading level="section" id="report-impact">
-            {W.impactHeading}
+            {t('impactHeading')}
           </Heading>
-          <ul className={styles.figures} aria-label={W.figures}>
+          <ul className={styles.figures} aria-label={t('figures')}>
             {figures.map(([n, label]) => (
               <li key={label} className={styles.figure}>
-                <span className={styles.number}>{n.toLocaleString('en-US')}</span>{' '}
-                <span className={styles.label}>{label}</span>
+                <span className={styles.number}>{format.number(n)}</span> <span className={styles.label}>{label}</span>
               </li>
             ))}
           </ul>
           <p>
-            {t.shareOfTargets === null ? W.noTargets : W.ofTargets(Math.round(t.shareOfTargets * 100), t.targetPlants)}
+            {totals.shareOfTargets === null
+              ? t('noTargets')
+              : t('ofTargets', {
+                  pct: format.number(Math.round(totals.shareOfTargets * 100)),
+                  target: format.number(totals.targetPlants),
+                })}
           </p>
           <ul className={styles.list}>
             {report.summary.map((line) => (
@@ -109,27 +115,31 @@ function Report({ report }: { report: ShareReport }) {
           </ul>
           <div className={styles.actions} data-print="hide">
             <Button icon={<ArrowDownloadRegular />} onClick={() => csv.mutate()} disabled={csv.isPending}>
-              {W.csv}
+              {t('csv')}
             </Button>
             <Button icon={<PrintRegular />} onClick={() => window.print()}>
-              {W.print}
+              {t('print')}
             </Button>
           </div>
           {csv.isError ? (
             <MessageBar intent="error">
               <MessageBarBody>
-                {W.downloadFailed} {csv.error.message}
+                {t('downloadFailed')} {csv.error.message}
               </MessageBarBody>
             </MessageBar>
           ) : null}
         </ContentCard>
         <ContentCard aria-labelledby="report-species">
           <Heading level="section" id="report-species">
-            {W.bySpeciesHeading}
+            {t('bySpeciesHeading')}
           </Heading>
           <BarTable
-            caption={W.bySpeciesCaption}
-            unit={W.plantsUnit}
+            caption={t('bySpeciesCaption')}
+            words={(r) =>
+              r.target === undefined
+                ? plants(r.value)
+                : t('plantsOfPlanned', { formatted: format.number(r.value), target: format.number(r.target) })
+            }
             rows={report.bySpecies.map((s) => ({
               label: s.commonName,
               value: s.plantsGiven,
@@ -139,23 +149,23 @@ function Report({ report }: { report: ShareReport }) {
         </ContentCard>
         <ContentCard aria-labelledby="report-flowering">
           <Heading level="section" id="report-flowering">
-            {W.floweringHeading}
+            {t('floweringHeading')}
           </Heading>
-          <p className={styles.lead}>{W.floweringLead}</p>
+          <p className={styles.lead}>{t('floweringLead')}</p>
           <BarTable
-            caption={W.floweringCaption}
-            unit={W.plantsUnit}
+            caption={t('floweringCaption')}
+            words={(r) => plants(r.value)}
             rows={report.floweringByMonth.map((m) => ({ label: m.monthName, value: m.plants }))}
           />
         </ContentCard>
         <ContentCard aria-labelledby="report-hosts">
           <Heading level="section" id="report-hosts">
-            {W.hostsHeading}
+            {t('hostsHeading')}
           </Heading>
           {report.caterpillarHosts.map((h) => (
-            <section key={h.layer} aria-label={W.layer[h.layer]}>
+            <section key={h.layer} aria-label={t(`layer.${h.layer}`)}>
               <Heading level="card">
-                {W.layer[h.layer]}: {W.layerPlants(h.plants)}
+                {t(`layer.${h.layer}`)}: {plants(h.plants)}
               </Heading>
               <ul className={styles.list}>
                 {h.words.map((w) => (
@@ -167,40 +177,27 @@ function Report({ report }: { report: ShareReport }) {
         </ContentCard>
         <ContentCard aria-labelledby="report-zips">
           <Heading level="section" id="report-zips">
-            {W.zipHeading}
+            {t('zipHeading')}
           </Heading>
-          <p className={styles.lead}>{W.zipLead}</p>
+          <p className={styles.lead}>{t('zipLead')}</p>
           {report.zipAreas.length === 0 ? (
-            <p>{W.noZips}</p>
+            <p>{t('noZips')}</p>
           ) : (
             <BarTable
-              caption={W.zipCaption}
-              unit={W.householdsUnit}
-              rows={report.zipAreas.map((z) => ({ label: W.zipArea(z.area), value: z.households }))}
+              caption={t('zipCaption')}
+              words={(r) => t('households_count', { count: r.value, formatted: format.number(r.value) })}
+              rows={report.zipAreas.map((z) => ({ label: t('zipArea', { area: z.area }), value: z.households }))}
             />
           )}
         </ContentCard>
         <ContentCard aria-labelledby="report-germination">
           <Heading level="section" id="report-germination">
-            {W.germinationHeading}
+            {t('germinationHeading')}
           </Heading>
           {report.germination === null ? (
-            <p className={styles.lead}>{W.germinationLater}</p>
+            <p className={styles.lead}>{t('germinationLater')}</p>
           ) : (
-            <BarTable
-              caption={W.germinationHeading}
-              unit={W.germinatedUnit}
-              rows={[
-                ...report.germination.byMethod.map((m) => ({
-                  label: capitalise(SOWING_METHOD_WORDS[m.method].phrase),
-                  value: m.sown === 0 ? 0 : Math.round((m.germinated / m.sown) * 100),
-                })),
-                ...report.germination.byGrower.map((g) => ({
-                  label: g.grower,
-                  value: g.sown === 0 ? 0 : Math.round((g.germinated / g.sown) * 100),
-                })),
-              ]}
-            />
+            <GerminationTables germination={report.germination} />
           )}
         </ContentCard>
       </div>
