@@ -281,7 +281,7 @@ describe('crash recovery: SIGKILL during writes, restart on the same SQLite file
       const t0 = Date.now();
       const first = await importFile(fileWith(1));
       expect(first.status).toBe(200);
-      expect(await first.json()).toEqual({ created: 0, updated: rows.length });
+      expect(await first.json()).toMatchObject({ created: 0, updated: rows.length, dryRun: false });
       const took = Date.now() - t0;
       expect(raisedBy(1)).toBe(rows.length);
 

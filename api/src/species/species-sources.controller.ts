@@ -2,6 +2,7 @@ import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { type Source, sourceSchema } from '@homeground/shared';
 import { z } from 'zod';
+import { Public } from '../common/decorators/public.decorator.js';
 import { ZodResponse } from '../common/decorators/zod.decorators.js';
 import { SpeciesSourcesService } from './species-sources.service.js';
 
@@ -11,6 +12,7 @@ import { SpeciesSourcesService } from './species-sources.service.js';
 export class SpeciesSourcesController {
   constructor(private readonly sources: SpeciesSourcesService) {}
 
+  @Public()
   @Get()
   @ZodResponse(z.array(sourceSchema))
   list(): Source[] {
