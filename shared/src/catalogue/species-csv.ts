@@ -57,8 +57,23 @@ export type SpeciesCsvColumn = (typeof SPECIES_CSV_COLUMNS)[number];
 export type SpeciesCsvRow = Record<SpeciesCsvColumn, string>;
 
 const list = (v: readonly (string | number)[]) => v.join(';');
-const treatmentText = (t: TreatmentStep) =>
-  (t.days ? `${t.kind}:${t.days}` : t.kind) + (t.note ? `:${t.note.replaceAll(';', ',')}` : '');
+const treatmentText = (t: TreatmentStep) => (t.days ? `${t.kind}:${t.days}` : t.kind) + (t.note ? `:${t.note}` : '');
+
+/**
+ * Treatments as `kind:days:note;…` a person can edit in a spreadsheet — unless that text would not read
+ * back the same (a note with ";", a note that is only digits, spaces at an end); then the steps are written
+ * as JSON, like the cautions column, so an export imported again changes nothing.
+ */
+function treatmentsCell(steps: readonly TreatmentStep[]): string {
+  const text = steps.map(treatmentText).join(';');
+  const readBack = parseTreatmentsCell(text);
+  return JSON.stringify(readBack) === JSON.stringify(steps.map(plainStep)) ? text : JSON.stringify(steps);
+}
+const plainStep = (t: TreatmentStep) => ({
+  kind: t.kind,
+  ...(t.days ? { days: t.days } : {}),
+  ...(t.note ? { note: t.note } : {}),
+});
 
 export function speciesToCsvRow(s: Species): SpeciesCsvRow {
   return {
@@ -96,7 +111,7 @@ export function speciesToCsvRow(s: Species): SpeciesCsvRow {
     commercialAvailability: s.commercialAvailability ?? '',
     protectedIn: list(s.protectedIn),
     deerResistance: s.deerResistance,
-    treatments: s.germination.treatments.map(treatmentText).join(';'),
+    treatments: treatmentsCell(s.germination.treatments),
     needsLight: String(s.germination.needsLight),
     sowingDepthMm: String(s.germination.sowingDepthMm),
     seedsPerPound: s.germination.seedsPerPound === null ? '' : String(s.germination.seedsPerPound),
@@ -123,6 +138,19 @@ function parseTreatment(text: string): unknown {
   const days = second !== undefined && /^\d+$/.test(second) ? Number(second) : undefined;
   const note = days === undefined ? [second, ...rest].filter(Boolean).join(':') : rest.join(':');
   return { kind, ...(days !== undefined ? { days } : {}), ...(note ? { note } : {}) };
+}
+
+/** A treatments cell: JSON when it starts with "[" (see treatmentsCell), otherwise `kind:days:note;…`. */
+function parseTreatmentsCell(cell: string | undefined): unknown {
+  const trimmed = (cell ?? '').trim();
+  if (trimmed.startsWith('[')) {
+    try {
+      return JSON.parse(trimmed);
+    } catch {
+      return trimmed; // the schema names the treatments column
+    }
+  }
+  return split(trimmed).map(parseTreatment);
 }
 
 /** Maps a schema path back to the CSV column a person would fix. */
@@ -220,7 +248,7 @@ export function csvRowToSpecies(
     spreadHabit: row.spreadHabit,
     deerResistance: row.deerResistance,
     germination: {
-      treatments: split(row.treatments).map(parseTreatment),
+      treatments: parseTreatmentsCell(row.treatments),
       needsLight: bool(row.needsLight),
       sowingDepthMm: num(row.sowingDepthMm),
       seedsPerPound: row.seedsPerPound?.trim() ? Number(row.seedsPerPound) : null,
