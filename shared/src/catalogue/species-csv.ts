@@ -1,3 +1,4 @@
+import type { z } from 'zod';
 import { formulaCellProblem } from '../csv/csv-cell.js';
 import type { CsvRowError } from '../types/species-query.js';
 import { type Species, speciesSchema, type TreatmentStep } from '../types/species.js';
@@ -153,6 +154,22 @@ function parseTreatmentsCell(cell: string | undefined): unknown {
   return split(trimmed).map(parseTreatment);
 }
 
+/**
+ * A schema issue in words a curator acts on: string lengths as "Must be at least 10 characters" (the
+ * wording the web's forms translate), and for an entry of a JSON list (cautions, notes) which entry and
+ * part: "entry 4, text: Must be at least 10 characters".
+ */
+function issueMessage(issue: z.core.$ZodIssue): string {
+  let message = issue.message;
+  if (issue.code === 'too_small' && issue.origin === 'string') message = `Must be at least ${issue.minimum} characters`;
+  if (issue.code === 'too_big' && issue.origin === 'string') message = `Must be at most ${issue.maximum} characters`;
+  const at = issue.path.findIndex((p) => typeof p === 'number');
+  const listed = at > 0 && ['cautions', 'reconciliations'].includes(String(issue.path[0]));
+  if (!listed) return message;
+  const part = issue.path.slice(at + 1).join('.');
+  return `entry ${Number(issue.path[at]) + 1}${part ? `, ${part}` : ''}: ${message}`;
+}
+
 /** Maps a schema path back to the CSV column a person would fix. */
 const PATH_TO_COLUMN: Record<string, SpeciesCsvColumn> = {
   'heightCm.min': 'heightMinCm',
@@ -263,7 +280,7 @@ export function csvRowToSpecies(
   const parsed = speciesSchema.safeParse(candidate);
   if (!parsed.success) {
     for (const issue of parsed.error.issues)
-      errors.push({ row: line, field: columnFor(issue.path), message: issue.message });
+      errors.push({ row: line, field: columnFor(issue.path), message: issueMessage(issue) });
   }
   return errors.length > 0 || !parsed.success ? { errors } : { species: parsed.data, errors };
 }
