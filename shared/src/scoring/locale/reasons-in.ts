@@ -361,7 +361,8 @@ export function mixIn(mix: MixResponse, locale: WordLocale): MixResponse {
     parts: partsIn(c.parts, locale),
     roles: c.roles.map((r) => reasonIn(r, locale)),
   }));
-  // The rules' headlines and the size sentence; their details name species and counts and stay as written.
+  // The rules' headlines and the size sentence; their details and the notices are written in the
+  // reader's language by the engine itself (palette-balancing/mix-words.ts, given the locale).
   const constraints = mix.palette.constraints.map((c) => ({ ...c, rule: reasonIn(c.rule, locale) }));
   const sizeReason = reasonIn(mix.palette.sizeReason, locale);
   return { ...mix, palette: { ...mix.palette, chosen, constraints, sizeReason } };

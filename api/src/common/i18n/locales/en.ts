@@ -23,6 +23,14 @@ export const en = {
       MP: 'The Northern Mariana Islands',
     },
   },
+  share: {
+    /** General words under a plant share's list of plants: the usual cautions, and local rules first. */
+    notes: {
+      cautions:
+        'Cautions are shown with each plant, as on its fact card: wear gloves for plants with irritating sap and wash your hands after handling them.',
+      dig: 'Before you dig, call 811 so buried lines are marked; your town’s rules for planting by streets, sidewalks and drains come first.',
+    },
+  },
   mail: {
     openAddress: 'Or open this address: {{url}}',
     greeting: 'Hello {{name}},',

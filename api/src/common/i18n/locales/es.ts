@@ -27,6 +27,13 @@ export const es = {
       MP: 'Las Islas Marianas del Norte',
     },
   },
+  share: {
+    notes: {
+      cautions:
+        'Las precauciones aparecen con cada planta, como en su ficha: usa guantes con las plantas de savia irritante y lávate las manos después de tocarlas.',
+      dig: 'Antes de cavar, llama al 811 para que marquen las líneas enterradas; las normas de tu pueblo para plantar junto a calles, aceras y desagües van primero.',
+    },
+  },
   mail: {
     openAddress: 'O abre esta dirección: {{url}}',
     greeting: 'Hola, {{name}}:',
