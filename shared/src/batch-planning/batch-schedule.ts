@@ -5,6 +5,7 @@ import type { GrowerMethod } from '../types/batch.js';
 import type { Species, TreatmentStep } from '../types/species.js';
 import type { BatchStepKind } from '../vocabulary/batch-words.js';
 import type { TreatmentKind } from '../vocabulary/seed-words.js';
+import { stepDetailIn } from './step-details-in.js';
 import { batchWordsFor } from '../vocabulary/locale/batch-words-in.js';
 import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 import { wordsFor } from '../vocabulary/locale/words-for.js';
@@ -48,8 +49,8 @@ export interface BatchScheduleInput {
   plantShareDate: IsoDate;
   today: IsoDate;
   /**
-   * The language of step titles and treatments (English when absent). Step details and warnings
-   * are the sowing calendar's, which is written in English only for now.
+   * The language of step titles, details and treatments (English when absent); the calendar's
+   * warnings stay English for now.
    */
   locale?: WordLocale;
 }
@@ -90,7 +91,12 @@ export function batchSchedule(input: BatchScheduleInput): BatchSchedule {
     if (!kind) continue;
     // Venting is for covered containers only; the frost watch concerns every batch with plants outdoors.
     if (kind === 'vent-containers' && input.method !== 'winter-sowing') continue;
-    steps.push({ kind, date: e.date, title: batchWordsFor(input.locale).step[kind], detail: e.detail });
+    steps.push({
+      kind,
+      date: e.date,
+      title: batchWordsFor(input.locale).step[kind],
+      detail: stepDetailIn(e.detail, input.species, input.locale ?? 'en'),
+    });
   }
   const fridgeTopUp = schedule.events.some((e) => e.kind === 'cms-start') && outdoor;
   const treatments = input.species.germination.treatments.map((t) =>
