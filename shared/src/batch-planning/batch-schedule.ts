@@ -5,7 +5,7 @@ import type { GrowerMethod } from '../types/batch.js';
 import type { Species, TreatmentStep } from '../types/species.js';
 import type { BatchStepKind } from '../vocabulary/batch-words.js';
 import type { TreatmentKind } from '../vocabulary/seed-words.js';
-import { stepDetailIn } from './step-details-in.js';
+import { stepDetailIn, warningIn } from './step-details-in.js';
 import { batchWordsFor } from '../vocabulary/locale/batch-words-in.js';
 import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 import { wordsFor } from '../vocabulary/locale/words-for.js';
@@ -49,8 +49,7 @@ export interface BatchScheduleInput {
   plantShareDate: IsoDate;
   today: IsoDate;
   /**
-   * The language of step titles, details and treatments (English when absent); the calendar's
-   * warnings stay English for now.
+   * The language of step titles, details, treatments and warnings (English when absent).
    */
   locale?: WordLocale;
 }
@@ -108,7 +107,7 @@ export function batchSchedule(input: BatchScheduleInput): BatchSchedule {
     readyAfterShare: schedule.readyDate !== null && schedule.readyDate > input.plantShareDate,
     steps,
     treatments,
-    warnings: schedule.warnings.map((w) => w.message),
+    warnings: schedule.warnings.map((w) => warningIn(w.message, input.locale ?? 'en')),
   };
 }
 

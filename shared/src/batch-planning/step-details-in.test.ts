@@ -35,6 +35,7 @@ describe('batch step details in Spanish', () => {
           for (const step of s.steps)
             for (const part of step.detail.split(/(?<=\.) /))
               if (!catalogueNotes.has(part)) expect(part).not.toMatch(/\b(the|and|with|seed|Sow|Keep)\b/);
+          for (const w of s.warnings) expect(w).not.toMatch(/\b(the|needs|sown|Sow|Keep|is past)\b/);
         }
   });
 

@@ -1,4 +1,5 @@
 import type { Species } from '../types/species.js';
+import { SOWING_METHOD_WORDS } from '../vocabulary/seed-words.js';
 import { sowingDepthSentence } from '../vocabulary/sowing-depth.js';
 import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 import { wordsFor } from '../vocabulary/locale/words-for.js';
@@ -148,4 +149,100 @@ export function stepDetailIn(detail: string, species: Species, locale: WordLocal
     .map((p) => p.trim())
     .filter(Boolean)
     .join(' ');
+}
+
+/** Why a species needs a second season in the pot (readiness.ts), for the warning below. */
+const SECOND_SEASON_WHY: Record<string, string> = {
+  'shrub seedlings need a second season in the pot to be worth planting':
+    'las plántulas de arbusto necesitan una segunda temporada en maceta para que valga la pena plantarlas',
+  'tree seedlings need a second season in the pot to be worth planting':
+    'las plántulas de árbol necesitan una segunda temporada en maceta para que valga la pena plantarlas',
+  'the seed makes a root after its first winter and its first leaf only after a second; the seedling is tiny for a year more':
+    'la semilla echa raíz después de su primer invierno y su primera hoja solo después del segundo; la plántula sigue siendo diminuta un año más',
+  'compass plants spend the first year on a taproot and a small rosette; give them in their second spring':
+    'las plantas brújula pasan el primer año haciendo una raíz pivotante y una rosetita; dalas en su segunda primavera',
+  'pale purple coneflower takes about two years to a finished plug':
+    'la pale purple coneflower tarda unos dos años en llenar un alvéolo',
+};
+
+/** A sowing method's English phrase → its Spanish phrase (the shared seed-word tables). */
+const METHOD_PHRASE = new Map(
+  (Object.keys(SOWING_METHOD_WORDS) as (keyof typeof SOWING_METHOD_WORDS)[]).map((m) => [
+    SOWING_METHOD_WORDS[m].phrase as string,
+    wordsFor('es').sowingMethod[m].phrase,
+  ]),
+);
+const methodsIn = (list: string) => {
+  const each = list.split(', ').map((m) => METHOD_PHRASE.get(m));
+  return each.every((m): m is string => m !== undefined) ? each.join(', ') : undefined;
+};
+
+/** The calendar's warnings on a batch, each a whole message with the species' name first. */
+const WARNING_RULES: [RegExp, (...groups: string[]) => string | undefined][] = [
+  [
+    /^(.+): the usual start \((\S+)\) is past\. Start today and sow on (\S+); plants are ready about (\S+)\.$/,
+    (name, usual, sow, ready) =>
+      `${name}: el inicio habitual (${usual}) ya pasó. Empieza hoy y siembra el ${sow}; las plantas estarán listas hacia el ${ready}.`,
+  ],
+  [
+    /^(.+): (.+)\. Keep it potted on through summer and winter \(sink the pots in the ground or mulch them\); it is ready to give about (\S+)\.$/,
+    (name, why, ready) =>
+      SECOND_SEASON_WHY[why]
+        ? `${name}: ${SECOND_SEASON_WHY[why]}. Mantenla en maceta durante el verano y el invierno (entierra las macetas o cúbrelas con mantillo); estará lista para dar hacia el ${ready}.`
+        : undefined,
+  ],
+  [
+    /^(.+): (\S+) is outside the winter-sowing window \((\S+) to (\S+)\)\.$/,
+    (name, sow, from, to) =>
+      `${name}: el ${sow} queda fuera de la temporada de siembra de invierno (del ${from} al ${to}).`,
+  ],
+  [
+    /^(.+) needs (\d+) days of cold-moist stratification; sown outdoors on (\S+) it gets about (\d+)\. Give it (\d+) days in the refrigerator first, from (\S+) \(on the calendar\)\.$/,
+    (name, days, sow, got, short, from) =>
+      `${name} necesita ${days} días de estratificación fría y húmeda; sembrada afuera el ${sow}, recibe unos ${got}. Dale primero ${short} días en el refrigerador, a partir del ${from} (está en el calendario).`,
+  ],
+  [
+    /^(.+) needs (\d+) days of cold-moist stratification; sown outdoors on (\S+) it gets about (\d+)\. A shorter cold period gives fewer seedlings, and some seed may wait a year; sowing under lights after (\d+) days in the refrigerator is surer\.$/,
+    (name, days, sow, got, fridge) =>
+      `${name} necesita ${days} días de estratificación fría y húmeda; sembrada afuera el ${sow}, recibe unos ${got}. Un frío más corto da menos plántulas, y alguna semilla puede esperar un año; es más seguro sembrar bajo lámparas después de ${fridge} días en el refrigerador.`,
+  ],
+  [
+    /^(.+) needs (\d+) warm then (\d+) cold days( and sends up its first leaf only after a second winter)?; sown on (\S+), expect seedlings in spring (\d{4}), not (\d{4})\.$/,
+    (name, warm, cold, second, sow, year, notYear) =>
+      `${name} necesita ${warm} días cálidos y después ${cold} fríos${second ? ' y saca su primera hoja solo después de un segundo invierno' : ''}; sembrada el ${sow}, espera plántulas en la primavera de ${year}, no en la de ${notYear}.`,
+  ],
+  [
+    /^(.+) will not be ready for the plant share on (\S+): plants by (.+) are ready about (\S+), (\d+) days later\.$/,
+    (name, target, method, ready, days) =>
+      METHOD_PHRASE.has(method)
+        ? `${name} no estará lista para el reparto de plantas del ${target}: con ${METHOD_PHRASE.get(method)}, las plantas están listas hacia el ${ready}, ${days} días después.`
+        : undefined,
+  ],
+  [
+    /^(.+) is not usually raised by (.+); its record lists (.+)\.$/,
+    (name, method, list) =>
+      METHOD_PHRASE.has(method) && methodsIn(list)
+        ? `${name} no se suele criar con ${METHOD_PHRASE.get(method)}; su ficha indica ${methodsIn(list)}.`
+        : undefined,
+  ],
+  [
+    /^(.+) is sown where it will grow, so there will be no pots of it for the plant share on (\S+)\.$/,
+    (name, target) =>
+      `${name} se siembra donde va a crecer, así que no habrá macetas de ella para el reparto de plantas del ${target}.`,
+  ],
+  [
+    /^(.+): the usual sowing day \((\S+)\) is past, but (winter sowing|frost-seeding pots outdoors) still works until (\S+)\. Sow today; seedlings are expected about (\S+)\.$/,
+    (name, usual, how, until, sprouts) =>
+      `${name}: el día habitual de siembra (${usual}) ya pasó, pero ${how === 'winter sowing' ? 'la siembra de invierno' : 'sembrar en macetas afuera antes de las heladas'} todavía funciona hasta el ${until}. Siembra hoy; se esperan plántulas hacia el ${sprouts}.`,
+  ],
+];
+
+/** One of the calendar's warnings on a batch in the reader's language; as written when it has no twin. */
+export function warningIn(message: string, locale: WordLocale): string {
+  if (locale === 'en') return message;
+  for (const [pattern, say] of WARNING_RULES) {
+    const m = pattern.exec(message);
+    if (m) return say(...m.slice(1)) ?? message;
+  }
+  return message;
 }
