@@ -93,6 +93,24 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       expect(milkweed.behind).toBeNull();
     });
 
+    // Accept-Language: es (RFC 9110 §12.5.4): step titles, treatments, notes and the work's cautions in
+    // Spanish (shared batch-words-in.ts; Homeground's own wording, from memory); dates and counts unchanged.
+    it('answers My batches in Spanish when asked', async () => {
+      const es = (await get(`${SEASON}/batches`, 'amara').set('Accept-Language', 'es').expect(200)).body;
+      const en = (await get(`${SEASON}/batches`, 'amara').expect(200)).body;
+      type Step = { kind: string; title: string; date: string; detail: string };
+      const steps = (body: { batches: { steps: Step[] }[] }) => body.batches.flatMap((b) => b.steps);
+      expect(steps(es).map((s) => s.date)).toEqual(steps(en).map((s) => s.date));
+      expect(steps(es).find((s) => s.kind === 'sow')?.title).toBe('Siembra');
+      expect(steps(es).find((s) => s.kind === 'pot-up')?.title).toBe('Pasa a maceta');
+      // Every batch outdoors has the frost watch; its detail is the calendar's, said in Spanish.
+      expect(steps(es).find((s) => s.kind === 'frost-watch')?.detail).toMatch(/^Esta es la fecha promedio/);
+      expect(es.supplies.byGrower[0].list.cautions[0]).toMatch(/^La mezcla para macetas seca/);
+      expect(en.supplies.byGrower[0].list.cautions[0]).toMatch(/^Dry potting mix/);
+      const bergamot = es.batches.find((b: BatchAnswer) => b.slug === 'monarda-fistulosa');
+      if (bergamot.behind !== null) expect(bergamot.behind).toMatch(/^Todavía sin sembrar/);
+    });
+
     it('never shows an e-mail address in any batch answer', async () => {
       for (const url of [`${SEASON}/growers`, `${SEASON}/batches`, `${SEASON}/progress`]) {
         expect(JSON.stringify((await get(url, 'organiser').expect(200)).body)).not.toMatch(/@example\.org/);

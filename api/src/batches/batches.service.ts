@@ -22,6 +22,7 @@ import {
   type SeasonGrower,
   type SeasonProgress,
   type SplitProposalRequest,
+  type WordLocale,
 } from '@homeground/shared';
 import { DataSource, In, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
@@ -190,9 +191,10 @@ export class BatchesService {
   }
 
   /** The season's batches with supplies: all for organisers, their own for a grower. */
-  async list(slug: string, user: AuthenticatedUser, today: string): Promise<SeasonBatches> {
+  async list(slug: string, user: AuthenticatedUser, today: string, locale: WordLocale = 'en'): Promise<SeasonBatches> {
     const c = await this.growerOrOrganiser(slug, user);
-    const batches = await this.batchesOf(slug, user, c, today, c.role === 'organiser' ? undefined : user.id);
+    const growerId = c.role === 'organiser' ? undefined : user.id;
+    const batches = await this.batchesOf(slug, user, c, today, growerId, undefined, locale);
     const byGrower = new Map<string, Batch[]>();
     for (const b of batches) byGrower.set(b.growerId, [...(byGrower.get(b.growerId) ?? []), b]);
     const supplies = (list: Batch[]) =>
@@ -203,6 +205,7 @@ export class BatchesService {
           units: b.units,
           fridge: b.treatments.some((t) => t.where === 'refrigerator'),
         })),
+        locale,
       );
     return {
       groupSlug: c.group.slug,
@@ -227,17 +230,30 @@ export class BatchesService {
     return batchesToIcs(mine, { today, planId: `batches-${c.season.year}` });
   }
 
-  async get(slug: string, user: AuthenticatedUser, id: string, today: string): Promise<Batch> {
+  async get(
+    slug: string,
+    user: AuthenticatedUser,
+    id: string,
+    today: string,
+    locale: WordLocale = 'en',
+  ): Promise<Batch> {
     const c = await this.growerOrOrganiser(slug, user);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
     if (!row) throw new NotFoundException('No such batch in this season.');
     if (c.role !== 'organiser' && row.growerId !== user.id)
       throw new ForbiddenException('This batch belongs to another grower.');
-    return (await this.batchesOf(slug, user, c, today, undefined, [row]))[0];
+    return (await this.batchesOf(slug, user, c, today, undefined, [row], locale))[0];
   }
 
   /** Adds a log entry to the grower's own batch; an entry sent again with the same clientId is kept once. */
-  async log(slug: string, user: AuthenticatedUser, id: string, req: LogEntryRequest, today: string): Promise<Batch> {
+  async log(
+    slug: string,
+    user: AuthenticatedUser,
+    id: string,
+    req: LogEntryRequest,
+    today: string,
+    locale: WordLocale = 'en',
+  ): Promise<Batch> {
     const c = await this.growerOrOrganiser(slug, user);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
     if (!row) throw new NotFoundException('No such batch in this season.');
@@ -262,7 +278,7 @@ export class BatchesService {
         }),
       );
     });
-    return (await this.batchesOf(slug, user, c, today, undefined, [row]))[0];
+    return (await this.batchesOf(slug, user, c, today, undefined, [row], locale))[0];
   }
 
   /** The organiser's progress and ready forecast per species and grower. */
@@ -367,6 +383,7 @@ export class BatchesService {
     today: string,
     growerId?: string,
     only?: BatchRow[],
+    locale: WordLocale = 'en',
   ): Promise<Batch[]> {
     const rows =
       only ??
@@ -387,6 +404,7 @@ export class BatchesService {
           season: c.season,
           targetGerminationPct: c.targets.find((t) => t.slug === row.slug)?.germinationRatePct ?? null,
           today,
+          locale,
         },
       ),
     );
