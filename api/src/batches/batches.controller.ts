@@ -5,6 +5,7 @@ import {
   batchSplitProposalSchema,
   batchSplitRequestSchema,
   growerSetupRequestSchema,
+  logEntryAnswerSchema,
   logEntryRequestSchema,
   seasonBatchesSchema,
   seasonGrowerListSchema,
@@ -18,6 +19,7 @@ import {
   type BatchSplitProposalAnswer,
   type BatchSplitRequest,
   type GrowerSetupRequest,
+  type LogEntryAnswer,
   type LogEntryRequest,
   type SeasonBatches,
   type SeasonGrower,
@@ -119,15 +121,18 @@ export class BatchesController {
     return this.batches.get(slug, user, id, today());
   }
 
-  /** Adds an entry to the batch log (the batch's grower only); answers the batch as it now stands. */
+  /**
+   * Adds an entry to the batch log (the batch's grower only); answers the entry as stored and the
+   * batch's totals after it (GET the batch for its dates and forecast).
+   */
   @Post('batches/:id/log')
-  @ZodResponse(batchSchema, 201)
+  @ZodResponse(logEntryAnswerSchema, 201)
   log(
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodParam('id', uuidParamSchema) id: string,
     @ZodBody(logEntryRequestSchema) body: LogEntryRequest,
     @CurrentUser() user: AuthenticatedUser,
-  ): Promise<Batch> {
+  ): Promise<LogEntryAnswer> {
     return this.batches.log(slug, user, id, body, today());
   }
 
