@@ -281,7 +281,8 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       const [{ id: seasonId }] = await t.app.get(DataSource).query(`SELECT id FROM seasons ORDER BY year DESC LIMIT 1`);
       const counts = await t.app.get(BatchesService).readyCountsBySpecies(seasonId);
       expect(counts.find((c) => c.slug === 'monarda-fistulosa')?.readyPlants).toBe(10);
-      expect(counts.find((c) => c.slug === 'rudbeckia-hirta')?.readyPlants).toBe(0);
+      // Showy goldenrod: Juniper's batch, nothing logged ready in the demo (demo-batches.ts).
+      expect(counts.find((c) => c.slug === 'solidago-speciosa')?.readyPlants).toBe(0);
       expect(await t.app.get(BatchesService).readyCountsBySpecies(UNKNOWN)).toEqual([]);
     });
 
