@@ -116,10 +116,8 @@ export function SlotsCard({ share }: { share: PlantShare }) {
   const remove = (slot: PickupSlot) => {
     setNote(null);
     setDeleting(null);
-    deleteSlot.mutate(slot.id, {
-      onSuccess: () => setNote({ intent: 'success', text: W.slotDeleted }),
-      onError: (error) => setNote({ intent: 'error', text: error.message }),
-    });
+    // On success the page draws the card again from the answer, without the slot: that is the sign it went.
+    deleteSlot.mutate(slot.id, { onError: (error) => setNote({ intent: 'error', text: error.message }) });
   };
   const change = (key: string, patch: Partial<SlotRow>) => {
     setErrors((e) => ({ ...e, [key]: {} }));

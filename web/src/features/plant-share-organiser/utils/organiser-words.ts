@@ -119,7 +119,6 @@ export const ORGANISER_WORDS = {
     'Nobody has reserved in this slot, so it can go: households will no longer see it. A slot with reservations cannot be deleted.',
   deleteSlotKeep: 'Keep the slot',
   deleteSlotConfirm: 'Delete the slot',
-  slotDeleted: 'The slot is deleted.',
   newSlot: 'New slot',
   addSpeciesHeading: 'Add a species',
   addSpeciesLead: 'Plants of a species not on the list yet, e.g. a tray that got ready late.',
