@@ -267,11 +267,16 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       await t.http.post(logUrl).set(amara).send({ kind: 'lost', count: 5, date, reason: 'slugs' }).expect(201);
       const clientId = '5d0c8a4e-9b1f-4e8a-8a3c-2f7e6b1d9c40';
       const ready = { kind: 'ready', count: 10, date, clientId };
-      await t.http.post(logUrl).set(amara).send(ready).expect(201);
+      const first = (await t.http.post(logUrl).set(amara).send(ready).expect(201)).body;
       const again = (await t.http.post(logUrl).set(amara).send(ready).expect(201)).body;
-      // The same entry sent twice (a retry from a phone) is kept once.
-      expect(again.log.filter((e: { clientId: string | null }) => e.clientId === clientId)).toHaveLength(1);
+      // The same entry sent twice (a retry from a phone) is kept once, and the retry answers that entry.
+      expect(again.entry.id).toBe(first.entry.id);
+      const stored = (await t.http.get(`${SEASON}/batches/${bergamot.id}`).set(amara).expect(200)).body;
+      expect(stored.log.filter((e: { clientId: string | null }) => e.clientId === clientId)).toHaveLength(1);
+      // The answer's running totals agree with the whole log summed again by the batch's GET.
       expect(again.totals).toEqual({ sown: 60, germinated: 40, pottedUp: 0, lost: 5, ready: 10, alive: 35 });
+      expect(stored.totals).toEqual(again.totals);
+      expect(first.totals).toEqual(again.totals);
 
       const progress = (await get(`${SEASON}/progress`, 'organiser').expect(200)).body;
       const row = progress.species.find((s: { slug: string }) => s.slug === 'monarda-fistulosa');
@@ -294,7 +299,8 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       const [{ id: seasonId }] = await t.app.get(DataSource).query(`SELECT id FROM seasons ORDER BY year DESC LIMIT 1`);
       const counts = await t.app.get(BatchesService).readyCountsBySpecies(seasonId);
       expect(counts.find((c) => c.slug === 'monarda-fistulosa')?.readyPlants).toBe(10);
-      expect(counts.find((c) => c.slug === 'rudbeckia-hirta')?.readyPlants).toBe(0);
+      // Showy goldenrod: Juniper's batch, nothing logged ready in the demo (demo-batches.ts).
+      expect(counts.find((c) => c.slug === 'solidago-speciosa')?.readyPlants).toBe(0);
       expect(await t.app.get(BatchesService).readyCountsBySpecies(UNKNOWN)).toEqual([]);
     });
 

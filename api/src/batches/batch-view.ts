@@ -9,6 +9,7 @@ import {
   UNIT_OF,
   unitsFor,
   type Batch,
+  type BatchLogEntry,
   type BatchSchedule,
   type Species,
   type WordLocale,
@@ -88,16 +89,7 @@ export function toBatch(row: BatchRow, log: readonly BatchLogEntryRow[], c: Batc
       title: wordsFor(c.locale ?? 'en').caution[x.kind].title,
       text: x.text,
     })),
-    log: entries.map((e) => ({
-      id: e.id,
-      kind: e.kind,
-      count: e.count,
-      date: e.date,
-      reason: e.reason,
-      note: e.note,
-      clientId: e.clientId,
-      createdAt: e.createdAt.toISOString(),
-    })),
+    log: entries.map(toLogEntry),
     totals,
     forecast: batchForecast({
       seedsToSow: seeds,
@@ -107,6 +99,20 @@ export function toBatch(row: BatchRow, log: readonly BatchLogEntryRow[], c: Batc
       readyAfterShare: schedule.readyAfterShare,
       stillSprouting: potUp === undefined || c.today < potUp,
     }),
+  };
+}
+
+/** One stored log line as the API answers it. */
+export function toLogEntry(e: BatchLogEntryRow): BatchLogEntry {
+  return {
+    id: e.id,
+    kind: e.kind,
+    count: e.count,
+    date: e.date,
+    reason: e.reason,
+    note: e.note,
+    clientId: e.clientId,
+    createdAt: e.createdAt.toISOString(),
   };
 }
 

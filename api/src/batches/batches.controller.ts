@@ -6,6 +6,7 @@ import {
   batchSplitProposalSchema,
   batchSplitRequestSchema,
   growerSetupRequestSchema,
+  logEntryAnswerSchema,
   logEntryRequestSchema,
   seasonBatchesSchema,
   seasonGrowerListSchema,
@@ -19,6 +20,7 @@ import {
   type BatchSplitProposalAnswer,
   type BatchSplitRequest,
   type GrowerSetupRequest,
+  type LogEntryAnswer,
   type LogEntryRequest,
   type SeasonBatches,
   type SeasonGrower,
@@ -125,18 +127,19 @@ export class BatchesController {
     return this.batches.get(slug, user, id, today(), locale);
   }
 
-  /** Adds an entry to the batch log (the batch's grower only); answers the batch as it now stands. */
+  /**
+   * Adds an entry to the batch log (the batch's grower only); answers the entry as stored and the
+   * batch's totals after it (GET the batch for its dates and forecast).
+   */
   @Post('batches/:id/log')
-  @AnswersInLanguage()
-  @ZodResponse(batchSchema, 201)
+  @ZodResponse(logEntryAnswerSchema, 201)
   log(
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodParam('id', uuidParamSchema) id: string,
     @ZodBody(logEntryRequestSchema) body: LogEntryRequest,
     @CurrentUser() user: AuthenticatedUser,
-    @RequestLocale() locale: WordLocale,
-  ): Promise<Batch> {
-    return this.batches.log(slug, user, id, body, today(), locale);
+  ): Promise<LogEntryAnswer> {
+    return this.batches.log(slug, user, id, body, today());
   }
 
   /** Targets against sown, up and ready per species and grower, with the ready forecast (organisers). */

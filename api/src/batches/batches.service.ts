@@ -6,6 +6,10 @@ import {
   type GerminationBatch,
   logEntryProblems,
   logTotals,
+  logTotalsAfter,
+  type LogEntryAnswer,
+  type LogKind,
+  type LogTotals,
   proposeBatchSplit,
   sowMoreNudge,
   supplyList,
@@ -24,14 +28,14 @@ import {
   type SplitProposalRequest,
   type WordLocale,
 } from '@homeground/shared';
-import { DataSource, In, Repository } from 'typeorm';
+import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SeasonsService, type SeasonContext } from '../seasons/seasons.service.js';
 import { BatchLogEntryRow } from './batch-log-entry.entity.js';
-import { toBatch } from './batch-view.js';
+import { toBatch, toLogEntry } from './batch-view.js';
 import { BatchRow } from './batch.entity.js';
 import { SeasonGrowerRow } from './season-grower.entity.js';
 import { seasonProgress } from './season-progress.js';
@@ -245,26 +249,32 @@ export class BatchesService {
     return (await this.batchesOf(slug, user, c, today, undefined, [row], locale))[0];
   }
 
-  /** Adds a log entry to the grower's own batch; an entry sent again with the same clientId is kept once. */
+  /**
+   * Adds a log entry to the grower's own batch; an entry sent again with the same clientId is kept
+   * once. A write reads only what the new entry needs, never the log itself: the clientId through its
+   * unique index and the totals as one SUM per kind, so its cost does not grow with the log's length
+   * in JavaScript, and the answer is the entry and the totals, not the whole batch.
+   */
   async log(
     slug: string,
     user: AuthenticatedUser,
     id: string,
     req: LogEntryRequest,
     today: string,
-    locale: WordLocale = 'en',
-  ): Promise<Batch> {
+  ): Promise<LogEntryAnswer> {
     const c = await this.growerOrOrganiser(slug, user);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
     if (!row) throw new NotFoundException('No such batch in this season.');
     if (row.growerId !== user.id) throw new ForbiddenException('Only the grower of this batch keeps its log.');
-    await this.db.transaction(async (tx) => {
-      if (req.clientId && (await tx.exists(BatchLogEntryRow, { where: { batchId: id, clientId: req.clientId } })))
-        return;
-      const totals = logTotals(await tx.find(BatchLogEntryRow, { where: { batchId: id } }));
-      const problems = logEntryProblems(totals, req, today);
+    return this.db.transaction(async (tx) => {
+      const sent = req.clientId
+        ? await tx.findOne(BatchLogEntryRow, { where: { batchId: id, clientId: req.clientId } })
+        : null;
+      if (sent) return { batchId: id, entry: toLogEntry(sent), totals: await this.totalsOf(tx, id) };
+      const before = await this.totalsOf(tx, id);
+      const problems = logEntryProblems(before, req, today);
       if (problems.length) throw badRequest(problems);
-      await tx.save(
+      const saved = await tx.save(
         BatchLogEntryRow,
         tx.create(BatchLogEntryRow, {
           batchId: id,
@@ -277,8 +287,20 @@ export class BatchesService {
           createdBy: user.id,
         }),
       );
+      return { batchId: id, entry: toLogEntry(saved), totals: logTotalsAfter(before, req) };
     });
-    return (await this.batchesOf(slug, user, c, today, undefined, [row], locale))[0];
+  }
+
+  /** A batch's totals from one aggregate per kind (the entries themselves are not loaded). */
+  private async totalsOf(tx: EntityManager, batchId: string): Promise<LogTotals> {
+    const sums = await tx
+      .createQueryBuilder(BatchLogEntryRow, 'e')
+      .select('e.kind', 'kind')
+      .addSelect('SUM(e.count)', 'count')
+      .where('e.batchId = :batchId', { batchId })
+      .groupBy('e.kind')
+      .getRawMany<{ kind: LogKind; count: number | string }>();
+    return logTotals(sums.map((s) => ({ kind: s.kind, count: Number(s.count) })));
   }
 
   /** The organiser's progress and ready forecast per species and grower. */

@@ -80,6 +80,16 @@ export const en = {
       subjectChanged: 'Your reservation at the {{group}} plant share has changed',
       subjectReserved: 'Your plants are reserved: {{group}} plant share, {{when}}',
     },
+    shareChanged: {
+      intro: 'The organisers of the {{group}} plant share have changed something about your pickup.',
+      day: 'The plant share is now on {{now}} (it was {{before}}).',
+      place: 'The place is now {{now}} (it was {{before}}).',
+      slot: 'Your pickup slot is now {{now}} (it was {{before}}).',
+      still: 'Your plants are still reserved: {{plants}}.',
+      link: 'If the new time or place does not suit you, change your slot or cancel with your private link below, so someone on the waitlist gets the plants. This link replaces the one in your earlier e-mails.',
+      action: 'Change or cancel your reservation',
+      subject: 'A change to your pickup: {{group}} plant share',
+    },
     offer: {
       free_one:
         'Good news: {{count}} × {{plant}} came free at the {{group}} plant share, and we are holding it for you because you were next on the waitlist.',

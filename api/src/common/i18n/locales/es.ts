@@ -86,6 +86,16 @@ export const es = {
       subjectChanged: 'Tu reserva en el reparto de plantas de {{group}} ha cambiado',
       subjectReserved: 'Tus plantas están reservadas: reparto de plantas de {{group}}, {{when}}',
     },
+    shareChanged: {
+      intro: 'Quienes organizan el reparto de plantas de {{group}} han cambiado algo de tu recogida.',
+      day: 'El reparto de plantas ahora es el {{now}} (antes era el {{before}}).',
+      place: 'El lugar ahora es {{now}} (antes era {{before}}).',
+      slot: 'Tu horario de recogida ahora es {{now}} (antes era {{before}}).',
+      still: 'Tus plantas siguen reservadas: {{plants}}.',
+      link: 'Si el nuevo horario o lugar no te viene bien, cambia tu horario o cancela con tu enlace privado de abajo, para que las plantas pasen a alguien de la lista de espera. Este enlace sustituye al de tus correos anteriores.',
+      action: 'Cambiar o cancelar tu reserva',
+      subject: 'Un cambio en tu recogida: reparto de plantas de {{group}}',
+    },
     offer: {
       free_one:
         'Buenas noticias: se liberó {{count}} × {{plant}} en el reparto de plantas de {{group}} y te la guardamos porque te tocaba en la lista de espera.',

@@ -1,8 +1,26 @@
-import { Button, Field, Input, MessageBar, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
-import { AddRegular, SaveRegular } from '@fluentui/react-icons';
+import {
+  Button,
+  Dialog,
+  DialogActions,
+  DialogBody,
+  DialogContent,
+  DialogSurface,
+  DialogTitle,
+  Field,
+  Input,
+  MessageBar,
+  MessageBarBody,
+  makeStyles,
+  tokens,
+} from '@fluentui/react-components';
+import { AddRegular, DeleteRegular, SaveRegular } from '@fluentui/react-icons';
 import { MAX_SLOTS, type PickupSlot, type PlantShare } from '@homeground/shared';
 import { useState } from 'react';
-import { useAddSlotMutation, useEditSlotMutation } from '../../../api/plant-share/plant-share.mutations.js';
+import {
+  useAddSlotMutation,
+  useDeleteSlotMutation,
+  useEditSlotMutation,
+} from '../../../api/plant-share/plant-share.mutations.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { asSentence } from '../../../lib/forms/field-errors.js';
@@ -14,13 +32,14 @@ import { useOrganiserStyles } from './organiser.styles.js';
 const useStyles = makeStyles({
   slot: {
     display: 'grid',
-    gridTemplateColumns: '1fr 1fr 1fr auto',
+    gridTemplateColumns: '1fr 1fr 1fr auto auto',
     gap: tokens.spacingHorizontalM,
     alignItems: 'end',
     marginBottom: tokens.spacingVerticalM,
     '@media (max-width: 480px)': { gridTemplateColumns: '1fr 1fr' },
   },
   booked: { gridColumn: '1 / -1', margin: 0, color: tokens.colorNeutralForeground3 },
+  noButton: { minWidth: '32px' },
 });
 
 /** "2027-06-12T09:00:00-05:00" → "09:00": the clock the organiser wrote. */
@@ -41,6 +60,9 @@ export function SlotsCard({ share }: { share: PlantShare }) {
   const organiser = useOrganiserStyles();
   const editSlot = useEditSlotMutation(share.groupSlug);
   const addSlot = useAddSlotMutation(share.groupSlug);
+  const deleteSlot = useDeleteSlotMutation(share.groupSlug);
+  /** The slot the organiser asked to delete, awaiting their confirmation. */
+  const [deleting, setDeleting] = useState<{ slot: PickupSlot; n: number } | null>(null);
   const [rows, setRows] = useState<Record<string, SlotRow>>(() =>
     Object.fromEntries(share.slots.map((s) => [s.id, rowOf(s)])),
   );
@@ -91,6 +113,12 @@ export function SlotsCard({ share }: { share: PlantShare }) {
       onError: failed('new'),
     });
   };
+  const remove = (slot: PickupSlot) => {
+    setNote(null);
+    setDeleting(null);
+    // On success the page draws the card again from the answer, without the slot: that is the sign it went.
+    deleteSlot.mutate(slot.id, { onError: (error) => setNote({ intent: 'error', text: error.message }) });
+  };
   const change = (key: string, patch: Partial<SlotRow>) => {
     setErrors((e) => ({ ...e, [key]: {} }));
     if (key === 'new') setFresh((r) => ({ ...r, ...patch }));
@@ -137,6 +165,17 @@ export function SlotsCard({ share }: { share: PlantShare }) {
             disabled={editSlot.isPending}
             onClick={() => save(s)}
           />
+          {/* Only an empty slot can go: one with reservations was promised to households (the API says 409). */}
+          {s.booked === 0 ? (
+            <Button
+              icon={<DeleteRegular />}
+              aria-label={W.deleteSlot(i + 1)}
+              disabled={deleteSlot.isPending}
+              onClick={() => setDeleting({ slot: s, n: i + 1 })}
+            />
+          ) : (
+            <span className={styles.noButton} />
+          )}
           <p className={styles.booked}>{W.slotLine(s.booked, s.capacity)}</p>
         </div>
       ))}
@@ -146,12 +185,31 @@ export function SlotsCard({ share }: { share: PlantShare }) {
           <Button icon={<AddRegular />} disabled={addSlot.isPending} onClick={add}>
             {W.addSlot}
           </Button>
+          <span className={styles.noButton} />
         </div>
       ) : null}
       {note ? (
         <MessageBar intent={note.intent}>
           <MessageBarBody>{note.text}</MessageBarBody>
         </MessageBar>
+      ) : null}
+      {deleting ? (
+        <Dialog open onOpenChange={(_, d) => !d.open && setDeleting(null)}>
+          <DialogSurface>
+            <DialogBody>
+              <DialogTitle>
+                {W.deleteSlotTitle(deleting.n, `${clockOf(deleting.slot.start)}–${clockOf(deleting.slot.end)}`)}
+              </DialogTitle>
+              <DialogContent>{W.deleteSlotText}</DialogContent>
+              <DialogActions>
+                <Button onClick={() => setDeleting(null)}>{W.deleteSlotKeep}</Button>
+                <Button appearance="primary" onClick={() => remove(deleting.slot)}>
+                  {W.deleteSlotConfirm}
+                </Button>
+              </DialogActions>
+            </DialogBody>
+          </DialogSurface>
+        </Dialog>
       ) : null}
     </ContentCard>
   );

@@ -113,6 +113,12 @@ export const ORGANISER_WORDS = {
   saveSlot: (n: number) => `Save slot ${n}`,
   slotSaved: 'The slot is saved.',
   slotAdded: 'The slot is added.',
+  deleteSlot: (n: number) => `Delete slot ${n}`,
+  deleteSlotTitle: (n: number, when: string) => `Delete slot ${n} (${when})?`,
+  deleteSlotText:
+    'Nobody has reserved in this slot, so it can go: households will no longer see it. A slot with reservations cannot be deleted.',
+  deleteSlotKeep: 'Keep the slot',
+  deleteSlotConfirm: 'Delete the slot',
   newSlot: 'New slot',
   addSpeciesHeading: 'Add a species',
   addSpeciesLead: 'Plants of a species not on the list yet, e.g. a tray that got ready late.',
