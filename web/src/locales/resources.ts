@@ -38,6 +38,8 @@ import { report as enReport } from './en/report.js';
 import { report as esReport } from './es/report.js';
 import { taker as enTaker } from './en/taker.js';
 import { taker as esTaker } from './es/taker.js';
+import { organiser as enOrganiser } from './en/organiser.js';
+import { organiser as esOrganiser } from './es/organiser.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -62,6 +64,7 @@ export const resources = {
     season: enSeason,
     report: enReport,
     taker: enTaker,
+    organiser: enOrganiser,
   },
   es: {
     common: esCommon,
@@ -84,5 +87,6 @@ export const resources = {
     season: esSeason,
     report: esReport,
     taker: esTaker,
+    organiser: esOrganiser,
   },
 } as const;

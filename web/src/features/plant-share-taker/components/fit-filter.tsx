@@ -9,20 +9,12 @@ import {
   RadioGroup,
   tokens,
 } from '@fluentui/react-components';
-import {
-  capitalise,
-  MOISTURE_LEVELS,
-  MOISTURE_WORDS,
-  type Moisture,
-  SUN_LEVELS,
-  SUN_WORDS,
-  type Sun,
-  zipSchema,
-} from '@homeground/shared';
+import { capitalise, MOISTURE_LEVELS, type Moisture, SUN_LEVELS, type Sun, zipSchema } from '@homeground/shared';
 import { type FormEvent, useState } from 'react';
 import type { Yard } from '../../../api/plant-share/plant-share.api.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
+import { useWords } from '../../../lib/i18n/index.js';
 import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
@@ -52,6 +44,7 @@ export interface FitFilterProps {
 /** "Fits my yard": two quick questions that rank the list by the engine's fit for that spot. */
 export function FitFilter({ onApply, onClear, isActive, isPending = false }: FitFilterProps) {
   const { t } = useTranslation('taker');
+  const words = useWords();
   const styles = useStyles();
   const [sun, setSun] = useState<Sun | ''>('');
   const [moisture, setMoisture] = useState<Moisture | ''>('');
@@ -97,7 +90,7 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
           <Field label={t('fitSun')}>
             <RadioGroup name="fit-sun" value={sun} onChange={(_, d) => (setSun(d.value as Sun), setError(null))}>
               {SUN_LEVELS.map((s) => (
-                <Radio key={s} value={s} label={capitalise(SUN_WORDS[s])} />
+                <Radio key={s} value={s} label={capitalise(words.sun[s])} />
               ))}
             </RadioGroup>
           </Field>
@@ -108,7 +101,7 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
               onChange={(_, d) => (setMoisture(d.value as Moisture), setError(null))}
             >
               {MOISTURE_LEVELS.map((m) => (
-                <Radio key={m} value={m} label={capitalise(MOISTURE_WORDS[m])} />
+                <Radio key={m} value={m} label={capitalise(words.moisture[m])} />
               ))}
             </RadioGroup>
           </Field>
