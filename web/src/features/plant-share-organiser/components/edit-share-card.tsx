@@ -15,7 +15,13 @@ import { useOrganiserStyles } from './organiser.styles.js';
 
 const useStyles = makeStyles({
   form: { display: 'grid', gap: tokens.spacingVerticalL, maxWidth: '40rem' },
-  pair: { display: 'grid', gridTemplateColumns: '1fr 1fr', gap: tokens.spacingHorizontalL },
+  pair: {
+    display: 'grid',
+    gridTemplateColumns: 'minmax(0, 1fr) minmax(0, 1fr)',
+    gap: tokens.spacingHorizontalL,
+    // On a phone the two limits stack: their labels are long (more so in Spanish) and the boxes need room.
+    '@media (max-width: 480px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
+  },
   submit: { justifySelf: 'start', minHeight: '44px' },
 });
 
