@@ -25,7 +25,8 @@ import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { asSentence } from '../../../lib/forms/field-errors.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
+import { useSlotCheckWords } from '../hooks/use-slot-check-words.js';
 import { checkSlots, type SlotRow, type SlotRowErrors } from '../utils/share-form.js';
 import { useOrganiserStyles } from './organiser.styles.js';
 
@@ -56,6 +57,8 @@ const rowOf = (s: PickupSlot): SlotRow => ({
  * Every row is checked by the shared slot schema before it is sent.
  */
 export function SlotsCard({ share }: { share: PlantShare }) {
+  const { t } = useTranslation('organiser');
+  const slotCheck = useSlotCheckWords();
   const styles = useStyles();
   const organiser = useOrganiserStyles();
   const editSlot = useEditSlotMutation(share.groupSlug);
@@ -77,7 +80,7 @@ export function SlotsCard({ share }: { share: PlantShare }) {
 
   /** The row as the API's slot, or its messages beside it. */
   const checked = (key: string, row: SlotRow) => {
-    const result = checkSlots(share.date, [row]);
+    const result = checkSlots(share.date, [row], slotCheck);
     if ('slots' in result) return result.slots[0];
     setErrors((e) => ({ ...e, [key]: result.errors[0] ?? {} }));
     return null;
@@ -98,7 +101,7 @@ export function SlotsCard({ share }: { share: PlantShare }) {
     if (!body) return;
     editSlot.mutate(
       { slotId: slot.id, body },
-      { onSuccess: () => setNote({ intent: 'success', text: W.slotSaved }), onError: failed(slot.id) },
+      { onSuccess: () => setNote({ intent: 'success', text: t('slotSaved') }), onError: failed(slot.id) },
     );
   };
   const add = () => {
@@ -108,7 +111,7 @@ export function SlotsCard({ share }: { share: PlantShare }) {
     addSlot.mutate(body, {
       onSuccess: (next) => {
         setRows(Object.fromEntries(next.slots.map((s) => [s.id, rowOf(s)])));
-        setNote({ intent: 'success', text: W.slotAdded });
+        setNote({ intent: 'success', text: t('slotAdded') });
       },
       onError: failed('new'),
     });
@@ -128,21 +131,21 @@ export function SlotsCard({ share }: { share: PlantShare }) {
   const rowFields = (key: string, n: number | null, row: SlotRow) => (
     <>
       <SlotField
-        label={n ? W.slotStart(n) : `${W.newSlot}: ${W.slotStart(share.slots.length + 1)}`}
+        label={n ? t('slotStart', { n }) : t('newSlotStart', { n: share.slots.length + 1 })}
         type="time"
         value={row.start}
         error={errors[key]?.start}
         onChange={(v) => change(key, { start: v })}
       />
       <SlotField
-        label={n ? W.slotEnd(n) : W.slotEnd(share.slots.length + 1)}
+        label={t('slotEnd', { n: n ?? share.slots.length + 1 })}
         type="time"
         value={row.end}
         error={errors[key]?.end}
         onChange={(v) => change(key, { end: v })}
       />
       <SlotField
-        label={n ? W.slotCapacity(n) : W.slotCapacity(share.slots.length + 1)}
+        label={t('slotCapacity', { n: n ?? share.slots.length + 1 })}
         value={row.capacity}
         error={errors[key]?.capacity}
         onChange={(v) => change(key, { capacity: v })}
@@ -153,15 +156,15 @@ export function SlotsCard({ share }: { share: PlantShare }) {
   return (
     <ContentCard aria-labelledby="share-slots">
       <Heading level="section" id="share-slots">
-        {W.slotsHeading}
+        {t('slotsHeading')}
       </Heading>
-      <p className={organiser.lead}>{W.slotsEditLead}</p>
+      <p className={organiser.lead}>{t('slotsEditLead')}</p>
       {share.slots.map((s, i) => (
         <div key={s.id} className={styles.slot}>
           {rowFields(s.id, i + 1, rows[s.id] ?? rowOf(s))}
           <Button
             icon={<SaveRegular />}
-            aria-label={W.saveSlot(i + 1)}
+            aria-label={t('saveSlot', { n: i + 1 })}
             disabled={editSlot.isPending}
             onClick={() => save(s)}
           />
@@ -169,21 +172,21 @@ export function SlotsCard({ share }: { share: PlantShare }) {
           {s.booked === 0 ? (
             <Button
               icon={<DeleteRegular />}
-              aria-label={W.deleteSlot(i + 1)}
+              aria-label={t('deleteSlot', { n: i + 1 })}
               disabled={deleteSlot.isPending}
               onClick={() => setDeleting({ slot: s, n: i + 1 })}
             />
           ) : (
             <span className={styles.noButton} />
           )}
-          <p className={styles.booked}>{W.slotLine(s.booked, s.capacity)}</p>
+          <p className={styles.booked}>{t('slotLine', { booked: s.booked, count: s.capacity })}</p>
         </div>
       ))}
       {share.slots.length < MAX_SLOTS ? (
         <div className={styles.slot}>
           {rowFields('new', null, fresh)}
           <Button icon={<AddRegular />} disabled={addSlot.isPending} onClick={add}>
-            {W.addSlot}
+            {t('addSlot')}
           </Button>
           <span className={styles.noButton} />
         </div>
@@ -198,13 +201,16 @@ export function SlotsCard({ share }: { share: PlantShare }) {
           <DialogSurface>
             <DialogBody>
               <DialogTitle>
-                {W.deleteSlotTitle(deleting.n, `${clockOf(deleting.slot.start)}–${clockOf(deleting.slot.end)}`)}
+                {t('deleteSlotTitle', {
+                  n: deleting.n,
+                  when: `${clockOf(deleting.slot.start)}–${clockOf(deleting.slot.end)}`,
+                })}
               </DialogTitle>
-              <DialogContent>{W.deleteSlotText}</DialogContent>
+              <DialogContent>{t('deleteSlotText')}</DialogContent>
               <DialogActions>
-                <Button onClick={() => setDeleting(null)}>{W.deleteSlotKeep}</Button>
+                <Button onClick={() => setDeleting(null)}>{t('deleteSlotKeep')}</Button>
                 <Button appearance="primary" onClick={() => remove(deleting.slot)}>
-                  {W.deleteSlotConfirm}
+                  {t('deleteSlotConfirm')}
                 </Button>
               </DialogActions>
             </DialogBody>
