@@ -1,5 +1,10 @@
 /** The API's own sentences in English (the shared engine's reasons have their own twins in shared). */
 export const en = {
+  validation: {
+    /** A 400's sentence listing each bad field and its reason ("name must be …; zip must be …"). */
+    pleaseCheck: 'Please check: {{problems}}',
+    notAField: 'is not a field this request accepts',
+  },
   places: {
     unknownZipField: '{{zip}} is not a US ZIP code we know',
     unknownZip: '{{zip}} is not a US ZIP code we know. Check the five digits, or click the map where your ground is.',

@@ -3,6 +3,10 @@ import type { en } from './en.js';
 
 /** Las frases propias de la API en español, con el mismo tono sencillo y cálido (tú). */
 export const es = {
+  validation: {
+    pleaseCheck: 'Revisa esto: {{problems}}',
+    notAField: 'no es un campo que esta petición acepte',
+  },
   places: {
     unknownZipField: '{{zip}} no es un código postal de EE. UU. que conozcamos',
     unknownZip:
