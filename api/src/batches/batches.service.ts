@@ -228,10 +228,11 @@ export class BatchesService {
   }
 
   /** The caller's own batches as iCalendar (a grower's, or an organiser's who also grows). */
-  async myBatchesIcs(slug: string, user: AuthenticatedUser, today: string): Promise<string> {
+  /** The caller's batches as iCalendar, steps and warnings in the reader's language. */
+  async myBatchesIcs(slug: string, user: AuthenticatedUser, today: string, locale: WordLocale = 'en'): Promise<string> {
     const c = await this.growerOrOrganiser(slug, user);
-    const mine = await this.batchesOf(slug, user, c, today, user.id);
-    return batchesToIcs(mine, { today, planId: `batches-${c.season.year}` });
+    const mine = await this.batchesOf(slug, user, c, today, user.id, undefined, locale);
+    return batchesToIcs(mine, { today, planId: `batches-${c.season.year}`, locale });
   }
 
   async get(
