@@ -146,11 +146,13 @@ export class BatchesController {
 
   /** Targets against sown, up and ready per species and grower, with the ready forecast (organisers). */
   @Get('progress')
+  @AnswersInLanguage()
   @ZodResponse(seasonProgressSchema)
   progress(
     @ZodParam('slug', slugParamSchema) slug: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<SeasonProgress> {
-    return this.batches.progress(slug, user, today());
+    return this.batches.progress(slug, user, today(), locale);
   }
 }

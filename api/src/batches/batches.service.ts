@@ -305,7 +305,12 @@ export class BatchesService {
   }
 
   /** The organiser's progress and ready forecast per species and grower. */
-  async progress(slug: string, user: AuthenticatedUser, today: string): Promise<SeasonProgress> {
+  async progress(
+    slug: string,
+    user: AuthenticatedUser,
+    today: string,
+    locale: WordLocale = 'en',
+  ): Promise<SeasonProgress> {
     const c = await this.organiser(slug, user);
     const batches = await this.batchesOf(slug, user, c, today);
     return seasonProgress(
@@ -329,6 +334,7 @@ export class BatchesService {
           lastFrost: c.season.lastFrost,
           plantShareDate: c.season.plantShareDate,
           today,
+          locale,
         });
       },
     );
