@@ -199,6 +199,12 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       const steps = own.reduce((a, b) => a + b.steps.length, 0);
       expect(res.text.match(/BEGIN:VEVENT/g)).toHaveLength(steps);
       expect(res.text).not.toMatch(/Theo|Juniper/);
+      // In the reader's language: the same events (UIDs), the batch page's Spanish step names.
+      const es = await get(`${SEASON}/my-batches.ics`, 'amara').set('Accept-Language', 'es').expect(200);
+      const uids = (text: string) => text.match(/^UID:.*$/gm);
+      expect(uids(es.text)).toEqual(uids(res.text));
+      expect(es.text).toMatch(/^SUMMARY:.*: Siembra\r$/m);
+      expect(es.text).toContain('X-WR-CALNAME:Calendario de siembra de Homeground');
       await get(`${SEASON}/my-batches.ics`, 'member').expect(403);
     });
 

@@ -68,6 +68,26 @@ describe('sowing calendar exports (e2e)', () => {
     for (const line of first.text.split('\r\n')) expect(Buffer.byteLength(line, 'utf8')).toBeLessThanOrEqual(75);
   });
 
+  // The file is in the reader's language (Accept-Language, RFC 9110 §12.5.4): same events, dates and UIDs
+  // (so a calendar app replaces rather than duplicates them), words in Spanish, as ical.js reads them.
+  // The Spanish step names are the batch page's own (shared batch words).
+  it('.ics in Spanish for Accept-Language es: same UIDs and dates, Spanish titles, name and notes', async () => {
+    const en = await t.http.post('/api/calendar.ics').send(body).expect(200);
+    const es = await t.http.post('/api/calendar.ics').set('Accept-Language', 'es').send(body).expect(200);
+    const english = parseIcs(en.text);
+    const spanish = parseIcs(es.text);
+    expect(spanish.map((e) => [e.uid, e.start])).toEqual(english.map((e) => [e.uid, e.start]));
+    const summaries = spanish.map((e) => e.summary);
+    expect(summaries).toContain('Wild bergamot: Siembra');
+    expect(summaries).toContain('Reparto de plantas');
+    expect(summaries).not.toContain('Plant share');
+    expect(es.text).toContain('X-WR-CALNAME:Calendario de siembra de Homeground');
+    const descriptions = spanish.map((e) => e.description).join('\n');
+    expect(descriptions).not.toContain('Please note:');
+    expect(descriptions).toContain('Esta es la fecha promedio');
+    for (const line of es.text.split('\r\n')) expect(Buffer.byteLength(line, 'utf8')).toBeLessThanOrEqual(75);
+  });
+
   it('.csv: the same columns as before, plus one row per warning', async () => {
     const json = await t.http.post('/api/calendar').send(body).expect(200);
     const csv = await t.http.post('/api/calendar.csv').send(body).expect(200);

@@ -77,6 +77,43 @@ describe('group invitations and the local outbox (e2e, demo data)', () => {
       .expect(410);
   });
 
+  // The invited person reads the page in their own language: every refusal of the link and of the new
+  // account (missing name, weak password, used link) comes back in Spanish for Accept-Language es.
+  // The Spanish words are the API catalogue's; the weak-password rule is zxcvbn's (see auth-languages).
+  it('says the invitation refusals and the password check in Spanish for a Spanish reader', async () => {
+    await t.http
+      .post(`${GROUP}/invitations`)
+      .set(bearer(mara))
+      .send({ email: 'larkfield.newcomer@example.org', role: 'member' })
+      .expect(201);
+    const { secret } = await linkFromOutbox(t, mara, 'larkfield.newcomer@example.org');
+    const es = { 'Accept-Language': 'es' };
+    const missing = await t.http.post(`/api/invitations/${secret}/accept`).set(es).send({}).expect(400);
+    expect(missing.body.message).toBe('Para unirte, escribe tu nombre y elige una contraseña.');
+    expect(missing.body.fields).toContainEqual({ field: 'password', message: 'hace falta para crear tu cuenta' });
+    const short = await t.http
+      .post(`/api/invitations/${secret}/accept`)
+      .set(es)
+      .send({ displayName: 'Vecina Nueva', password: 'corta' })
+      .expect(400);
+    expect(short.body.fields).toEqual([{ field: 'password', message: 'debe tener al menos 10 caracteres' }]);
+    // "password123": a common password with a digit run, below zxcvbn score 3 (the library's own lists).
+    const weak = await t.http
+      .post(`/api/invitations/${secret}/accept`)
+      .set(es)
+      .send({ displayName: 'Vecina Nueva', password: 'password123' })
+      .expect(400);
+    expect(weak.body.fields[0].message).toMatch(/^es demasiado fácil de adivinar/);
+    await t.http
+      .post(`/api/invitations/${secret}/accept`)
+      .send({ displayName: 'Vecina Nueva', password: 'cedro-lluvia-pradera-9' })
+      .expect(200);
+    const used = await t.http.get(`/api/invitations/${secret}`).set(es).expect(410);
+    expect(used.body.message).toBe('Esta invitación ya se usó.');
+    const english = await t.http.get(`/api/invitations/${secret}`).expect(410);
+    expect(english.body.message).toBe('This invitation has already been used.');
+  });
+
   it('lets an existing account accept only when signed in with the invited address', async () => {
     await t.http
       .post(`${GROUP}/invitations`)

@@ -3,7 +3,7 @@ import * as common from '@zxcvbn-ts/language-common';
 import * as english from '@zxcvbn-ts/language-en';
 import type { WordLocale } from '@homeground/shared';
 import { apiWords } from '../common/i18n/api-i18n.js';
-import { badRequest } from '../common/validation/bad-request.js';
+import { badRequest, pleaseCheck } from '../common/validation/bad-request.js';
 
 /** zxcvbn with its common-password, keyboard-pattern and English word lists, built once. */
 const estimator = new ZxcvbnFactory({
@@ -40,7 +40,10 @@ export function assertStrongPassword(
     .flatMap((p) => [letters(p), ...p.split(/[\s._+-]+/).map(letters)])
     .filter((p) => p.length >= 4);
   const plain = letters(password);
-  if (personal.some((p) => plain.includes(p))) throw badRequest([{ field, message: say('auth.passwordPersonal') }]);
-  if (estimator.check(password, personal).score < MIN_SCORE)
-    throw badRequest([{ field, message: say('auth.passwordWeak') }]);
+  const refuse = (message: string) => {
+    const fields = [{ field, message }];
+    return badRequest(fields, pleaseCheck(fields, locale));
+  };
+  if (personal.some((p) => plain.includes(p))) throw refuse(say('auth.passwordPersonal'));
+  if (estimator.check(password, personal).score < MIN_SCORE) throw refuse(say('auth.passwordWeak'));
 }

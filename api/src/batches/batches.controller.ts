@@ -108,11 +108,13 @@ export class BatchesController {
   @FileResponse('text/calendar', "The caller's batches as iCalendar")
   @Header('Content-Type', 'text/calendar; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-my-batches.ics"')
+  @AnswersInLanguage()
   myBatchesIcs(
     @ZodParam('slug', slugParamSchema) slug: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<string> {
-    return this.batches.myBatchesIcs(slug, user, today());
+    return this.batches.myBatchesIcs(slug, user, today(), locale);
   }
 
   @Get('batches/:id')
@@ -144,11 +146,13 @@ export class BatchesController {
 
   /** Targets against sown, up and ready per species and grower, with the ready forecast (organisers). */
   @Get('progress')
+  @AnswersInLanguage()
   @ZodResponse(seasonProgressSchema)
   progress(
     @ZodParam('slug', slugParamSchema) slug: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<SeasonProgress> {
-    return this.batches.progress(slug, user, today());
+    return this.batches.progress(slug, user, today(), locale);
   }
 }

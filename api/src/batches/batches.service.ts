@@ -228,10 +228,11 @@ export class BatchesService {
   }
 
   /** The caller's own batches as iCalendar (a grower's, or an organiser's who also grows). */
-  async myBatchesIcs(slug: string, user: AuthenticatedUser, today: string): Promise<string> {
+  /** The caller's batches as iCalendar, steps and warnings in the reader's language. */
+  async myBatchesIcs(slug: string, user: AuthenticatedUser, today: string, locale: WordLocale = 'en'): Promise<string> {
     const c = await this.growerOrOrganiser(slug, user);
-    const mine = await this.batchesOf(slug, user, c, today, user.id);
-    return batchesToIcs(mine, { today, planId: `batches-${c.season.year}` });
+    const mine = await this.batchesOf(slug, user, c, today, user.id, undefined, locale);
+    return batchesToIcs(mine, { today, planId: `batches-${c.season.year}`, locale });
   }
 
   async get(
@@ -304,7 +305,12 @@ export class BatchesService {
   }
 
   /** The organiser's progress and ready forecast per species and grower. */
-  async progress(slug: string, user: AuthenticatedUser, today: string): Promise<SeasonProgress> {
+  async progress(
+    slug: string,
+    user: AuthenticatedUser,
+    today: string,
+    locale: WordLocale = 'en',
+  ): Promise<SeasonProgress> {
     const c = await this.organiser(slug, user);
     const batches = await this.batchesOf(slug, user, c, today);
     return seasonProgress(
@@ -328,6 +334,7 @@ export class BatchesService {
           lastFrost: c.season.lastFrost,
           plantShareDate: c.season.plantShareDate,
           today,
+          locale,
         });
       },
     );

@@ -57,8 +57,12 @@ export class InvitationsController {
   @Get('invitations/:token')
   @ApiGoneResponse({ description: 'Used or expired' })
   @ZodResponse(invitationPreviewSchema)
-  preview(@ZodParam('token', invitationTokenSchema) token: string): Promise<InvitationPreview> {
-    return this.invitations.preview(token);
+  @AnswersInLanguage()
+  preview(
+    @ZodParam('token', invitationTokenSchema) token: string,
+    @RequestLocale() locale: WordLocale,
+  ): Promise<InvitationPreview> {
+    return this.invitations.preview(token, locale);
   }
 
   /** Joins the group: signed in with the invited address, or with a name and password for a new account. */
@@ -72,7 +76,8 @@ export class InvitationsController {
     @ZodParam('token', invitationTokenSchema) token: string,
     @ZodBody(acceptInvitationRequestSchema) body: AcceptInvitationRequest,
     @Req() req: { user?: AuthenticatedUser },
+    @RequestLocale() locale: WordLocale,
   ): Promise<AuthResponse> {
-    return this.invitations.accept(token, req.user ?? null, body);
+    return this.invitations.accept(token, req.user ?? null, body, locale);
   }
 }

@@ -20,6 +20,7 @@ import {
 import { DataSource, IsNull, Repository } from 'typeorm';
 import { AuthService } from '../auth/auth.service.js';
 import { badRequest } from '../common/validation/bad-request.js';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { hashPassword } from '../auth/password.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
@@ -108,8 +109,8 @@ export class InvitationsService {
     return rows.map(toInvitation);
   }
 
-  async preview(token: string, now = new Date()): Promise<InvitationPreview> {
-    const { row, group } = await this.open(token, now);
+  async preview(token: string, locale: WordLocale = 'en', now = new Date()): Promise<InvitationPreview> {
+    const { row, group } = await this.open(token, now, locale);
     const accountExists = await this.users.exists({ where: { email: row.email } });
     return {
       groupSlug: group.slug,
@@ -132,36 +133,36 @@ export class InvitationsService {
     token: string,
     caller: AuthenticatedUser | null,
     req: AcceptInvitationRequest,
+    locale: WordLocale = 'en',
     now = new Date(),
   ): Promise<AuthResponse> {
-    const { row } = await this.open(token, now);
+    const say = apiWords(locale);
+    const { row } = await this.open(token, now, locale);
     let userId: string;
     if (caller) {
       if (caller.email.toLowerCase() !== row.email) {
-        throw new ForbiddenException(
-          `This invitation was sent to ${row.email}: sign in with that address to accept it.`,
-        );
+        throw new ForbiddenException(say('invitations.otherAddress', { email: row.email }));
       }
       userId = caller.id;
     } else {
       if (await this.users.exists({ where: { email: row.email } })) {
-        throw new ConflictException(`An account already uses ${row.email}: sign in first, then open the link again.`);
+        throw new ConflictException(say('invitations.accountExists', { email: row.email }));
       }
       const missing = (['displayName', 'password'] as const).filter((f) => !req[f]);
       if (missing.length) {
         throw badRequest(
-          missing.map((field) => ({ field, message: 'is required to make your account' })),
-          'To join, give your name and choose a password.',
+          missing.map((field) => ({ field, message: say('invitations.requiredForAccount') })),
+          say('invitations.needNameAndPassword'),
         );
       }
-      assertStrongPassword(req.password!, { email: row.email, displayName: req.displayName });
+      assertStrongPassword(req.password!, { email: row.email, displayName: req.displayName }, 'password', locale);
       userId = '';
     }
     const passwordHash = caller ? null : await hashPassword(req.password!);
     const joinedId = await this.db.transaction(async (tx) => {
       // Claim the link first: a second accept racing this one finds it used and writes nothing.
       const claimed = await tx.update(InvitationRow, { id: row.id, acceptedAt: IsNull() }, { acceptedAt: now });
-      if (!claimed.affected) throw new GoneException('This invitation has already been used.');
+      if (!claimed.affected) throw new GoneException(say('invitations.used'));
       let id = userId;
       if (!caller) {
         const user = await tx.save(
@@ -188,14 +189,16 @@ export class InvitationsService {
     return this.auth.tokenFor(joinedId);
   }
 
-  private async open(token: string, now: Date): Promise<{ row: InvitationRow; group: Group }> {
+  private async open(
+    token: string,
+    now: Date,
+    locale: WordLocale = 'en',
+  ): Promise<{ row: InvitationRow; group: Group }> {
+    const say = apiWords(locale);
     const row = await this.invitations.findOne({ where: { tokenHash: hashToken(token) } });
-    if (!row)
-      throw new NotFoundException('This invitation link is not one we sent, or it was replaced by a newer one.');
-    if (row.acceptedAt) throw new GoneException('This invitation has already been used.');
-    if (row.expiresAt.getTime() < now.getTime()) {
-      throw new GoneException('This invitation has expired: ask the organiser to send a new one.');
-    }
+    if (!row) throw new NotFoundException(say('invitations.notOurs'));
+    if (row.acceptedAt) throw new GoneException(say('invitations.used'));
+    if (row.expiresAt.getTime() < now.getTime()) throw new GoneException(say('invitations.expired'));
     const group = await this.db.getRepository(Group).findOneByOrFail({ id: row.groupId });
     return { row, group };
   }

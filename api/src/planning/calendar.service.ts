@@ -1,5 +1,12 @@
 import { Injectable } from '@nestjs/common';
-import { buildSowingCalendar, calendarToCsv, calendarToIcs, type SowingCalendar } from '@homeground/shared';
+import {
+  buildSowingCalendar,
+  calendarIn,
+  calendarToCsv,
+  calendarToIcs,
+  type SowingCalendar,
+  type WordLocale,
+} from '@homeground/shared';
 import type { CalendarRequest } from './dto/calendar-request.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 
@@ -26,9 +33,13 @@ export class CalendarService {
     });
   }
 
-  /** All-day events; UIDs come from plan id, species, method and kind, so they survive added species. */
-  toIcs(calendar: SowingCalendar, req: CalendarRequest): string {
-    return calendarToIcs(calendar, { today: this.today(req), planId: req.planId });
+  /**
+   * All-day events in the reader's language; UIDs come from plan id, species, method and kind, so
+   * they survive added species (and a change of language).
+   */
+  toIcs(calendar: SowingCalendar, req: CalendarRequest, locale: WordLocale = 'en'): string {
+    const words = calendarIn(calendar, locale, (slug) => this.ctx.get(slug));
+    return calendarToIcs(words, { today: this.today(req), planId: req.planId, locale });
   }
 
   // The API reads the clock; the shared calendar never does.

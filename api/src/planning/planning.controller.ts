@@ -10,12 +10,14 @@ import {
   type QuantitiesRequest,
   quantitiesRequestSchema,
   sowingCalendarSchema,
+  type WordLocale,
 } from '@homeground/shared';
 import { z } from 'zod';
 import { FileResponse, ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { CalendarService } from './calendar.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { Public } from '../common/decorators/public.decorator.js';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 
 /** Quantities and the sowing calendar for any list of species (a mix, a season plan, a batch). */
 @ApiTags('planning')
@@ -61,7 +63,8 @@ export class PlanningController {
   @HttpCode(200)
   @Header('Content-Type', 'text/calendar; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-sowing-calendar.ics"')
-  ics(@ZodBody(calendarRequestSchema) body: CalendarRequest): string {
-    return this.calendar.toIcs(this.calendar.build(body), body);
+  @AnswersInLanguage()
+  ics(@ZodBody(calendarRequestSchema) body: CalendarRequest, @RequestLocale() locale: WordLocale): string {
+    return this.calendar.toIcs(this.calendar.build(body), body, locale);
   }
 }

@@ -55,7 +55,7 @@ describe('season e-mails', () => {
       );
       expect(mail.text).toContain(
         lang === 'es'
-          ? `Wild bergamot: Sembrar, ${mailDate('2027-01-05', 'es')}.`
+          ? `Wild bergamot: Siembra, ${mailDate('2027-01-05', 'es')}.`
           : `Wild bergamot: Sow, ${mailDate('2027-01-05', 'en')}.`,
       );
       expect(mail.text).toContain(

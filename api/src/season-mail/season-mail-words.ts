@@ -1,4 +1,4 @@
-import type { BatchStepKind, GrowerMethod } from '@homeground/shared';
+import { batchWordsFor, type BatchStepKind, type GrowerMethod } from '@homeground/shared';
 
 /**
  * The languages season e-mails are written in. Each e-mail's words are one object keyed by the
@@ -66,41 +66,14 @@ export const FROST_WARNING_WORDS = {
   },
 } as const satisfies Record<MailLanguage, unknown>;
 
-/** Step names in the weekly summary (the same steps as the batch page). */
-const STEP_NAMES = {
-  en: {
-    'start-warm': 'Start warm-moist stratifying',
-    'start-stratifying': 'Start stratifying in the refrigerator',
-    'check-sprouts': 'Check the seed for sprouts',
-    sow: 'Sow',
-    'vent-containers': 'Vent the containers on warm days, close them before a frost',
-    'sprouts-expected': 'Sprouts expected',
-    'pot-up': 'Pot up',
-    'harden-off': 'Harden off',
-    'frost-watch': 'Frost watch: protect from a late frost',
-    ready: 'Ready to give',
-  },
-  es: {
-    'start-warm': 'Empezar la estratificación cálida y húmeda',
-    'start-stratifying': 'Empezar a estratificar en el refrigerador',
-    'check-sprouts': 'Revisar si las semillas han brotado',
-    sow: 'Sembrar',
-    'vent-containers': 'Ventilar los contenedores en días templados y cerrarlos antes de una helada',
-    'sprouts-expected': 'Se esperan los brotes',
-    'pot-up': 'Trasplantar a maceta',
-    'harden-off': 'Endurecer (aclimatar al exterior)',
-    'frost-watch': 'Vigilancia de heladas: proteger de una helada tardía',
-    ready: 'Listas para regalar',
-  },
-} as const satisfies Record<MailLanguage, Record<BatchStepKind, string>>;
-
 /** The weekly summary of a grower's next steps. */
 export const WEEKLY_SUMMARY_WORDS = {
+  // Step names are the batch page's own (shared batch words), so the e-mail and the page say the same.
   en: {
     subject: (group: string) => `Your batches this week: ${group}`,
     greeting: (name: string) => `Hello ${name},`,
     lead: 'Here is what is next for your batches.',
-    step: (plant: string, kind: BatchStepKind, date: string) => `${plant}: ${STEP_NAMES.en[kind]}, ${date}.`,
+    step: (plant: string, kind: BatchStepKind, date: string) => `${plant}: ${batchWordsFor('en').step[kind]}, ${date}.`,
     allDone: (plant: string) => `${plant}: every step is done. Thank you!`,
     behind: (plant: string, words: string) => `${plant}: ${words}`,
     logReminder:
@@ -113,7 +86,7 @@ export const WEEKLY_SUMMARY_WORDS = {
     subject: (group: string) => `Tus lotes esta semana: ${group}`,
     greeting: (name: string) => `Hola, ${name}:`,
     lead: 'Esto es lo que sigue para tus lotes.',
-    step: (plant: string, kind: BatchStepKind, date: string) => `${plant}: ${STEP_NAMES.es[kind]}, ${date}.`,
+    step: (plant: string, kind: BatchStepKind, date: string) => `${plant}: ${batchWordsFor('es').step[kind]}, ${date}.`,
     allDone: (plant: string) => `${plant}: todos los pasos están hechos. ¡Gracias!`,
     // The batch's own "behind" words, which the service asks for in Spanish for a Spanish reader.
     behind: (plant: string, words: string) => `${plant}: ${words}`,

@@ -88,6 +88,15 @@ describe('sowMoreNudge', () => {
       /^At this rate about 20 of 50 will be ready: sow about 54 more seeds \(3 more covered containers\), starting by 2027-\d\d-\d\d\.$/,
     );
   });
+  it('says the same nudge in Spanish, with the same numbers and date', () => {
+    const input = { ...base, method: 'winter-sowing' as const, shortBy: 30, expected: 20, targetPlants: 50 };
+    const english = sowMoreNudge(input);
+    const spanish = sowMoreNudge({ ...input, locale: 'es' });
+    expect(spanish).toMatch(
+      /^A este ritmo estarán listas unas 20 de 50: siembra unas 54 semillas más \(3 recipientes cubiertos más\) y empieza a más tardar el 2027-\d\d-\d\d\.$/,
+    );
+    expect(spanish?.slice(-11)).toBe(english?.slice(-11));
+  });
   it('stays quiet when nothing is short or a new batch would miss the share', () => {
     expect(sowMoreNudge({ ...base, method: 'indoor-lights', shortBy: 0, expected: 50, targetPlants: 50 })).toBeNull();
     const late = { ...base, today: '2027-05-20' };

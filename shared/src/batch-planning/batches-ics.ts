@@ -1,6 +1,7 @@
 import type { CalendarEvent, SowingCalendar } from '../sowing-calendar/calendar-types.js';
 import { calendarToIcs } from '../sowing-calendar/calendar-ics.js';
 import type { GrowerMethod } from '../types/batch.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 import type { BatchStepKind } from '../vocabulary/batch-words.js';
 import type { BatchStep } from './batch-schedule.js';
 
@@ -32,7 +33,10 @@ export interface IcsBatch {
  * step an all-day event titled with the species, UIDs stable per species, method and step, so an
  * updated file replaces its events instead of duplicating them.
  */
-export function batchesToIcs(batches: readonly IcsBatch[], options: { today: string; planId: string }): string {
+export function batchesToIcs(
+  batches: readonly IcsBatch[],
+  options: { today: string; planId: string; locale?: WordLocale },
+): string {
   const events: CalendarEvent[] = batches
     .flatMap((b) =>
       b.steps.map((s) => ({

@@ -8,5 +8,6 @@ export * from './supply-list.js';
 export * from './frost-watch.js';
 export * from './sow-more.js';
 export * from './batches-ics.js';
+export * from './calendar-in.js';
 export * from './iso-week.js';
 export * from './reached-germination.js';

@@ -3,6 +3,7 @@ import type { IsoDate } from '../sowing-calendar/calendar-date.js';
 import type { GrowerMethod } from '../types/batch.js';
 import type { Species } from '../types/species.js';
 import { UNIT_WORDS } from '../vocabulary/batch-words.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 import { batchSchedule } from './batch-schedule.js';
 import { UNIT_OF, unitsFor } from './batch-units.js';
 
@@ -20,7 +21,44 @@ export interface SowMoreInput {
   lastFrost: IsoDate;
   plantShareDate: IsoDate;
   today: IsoDate;
+  /** The sentence's language (English when absent). */
+  locale?: WordLocale;
 }
+
+/** The values the nudge says, already counted. */
+interface NudgeValues {
+  expected: number;
+  target: number;
+  seeds: number;
+  units: number;
+  unit: keyof typeof UNIT_WORDS;
+  start: IsoDate;
+}
+
+/** Spanish names of the units a method is counted in, one and many. */
+const ES_UNIT_WORDS: Record<keyof typeof UNIT_WORDS, { one: string; many: string }> = {
+  pot: { one: 'maceta', many: 'macetas' },
+  container: { one: 'recipiente cubierto', many: 'recipientes cubiertos' },
+  block: { one: 'bloque de tierra', many: 'bloques de tierra' },
+};
+
+/** The whole sentence in each language, values in place (never pieced together from fragments). */
+const NUDGE: Record<WordLocale, (v: NudgeValues) => string> = {
+  en: (v) => {
+    const unit = UNIT_WORDS[v.unit];
+    return (
+      `At this rate about ${v.expected} of ${v.target} will be ready: sow about ${v.seeds} more seeds ` +
+      `(${v.units} more ${v.units === 1 ? unit.one : unit.many}), starting by ${v.start}.`
+    );
+  },
+  es: (v) => {
+    const unit = ES_UNIT_WORDS[v.unit];
+    return (
+      `A este ritmo estarán listas unas ${v.expected} de ${v.target}: siembra unas ${v.seeds} semillas más ` +
+      `(${v.units} ${v.units === 1 ? unit.one : unit.many} más) y empieza a más tardar el ${v.start}.`
+    );
+  },
+};
 
 /**
  * A nudge while there is still time: "At this rate about 40 of 120 will be ready: sow about 90 more
@@ -44,9 +82,12 @@ export function sowMoreNudge(input: SowMoreInput): string | null {
   if (!first || first.date < input.today) return null;
   const seeds = seedsToSow(input.shortBy, input.germinationRatePct, input.lossFactor);
   const units = unitsFor(input.method, input.shortBy);
-  const unit = UNIT_WORDS[UNIT_OF[input.method]];
-  return (
-    `At this rate about ${input.expected} of ${input.targetPlants} will be ready: sow about ${seeds} more seeds ` +
-    `(${units} more ${units === 1 ? unit.one : unit.many}), starting by ${first.date}.`
-  );
+  return NUDGE[input.locale ?? 'en']({
+    expected: input.expected,
+    target: input.targetPlants,
+    seeds,
+    units,
+    unit: UNIT_OF[input.method],
+    start: first.date,
+  });
 }

@@ -133,6 +133,18 @@ function sentenceIn(sentence: string): string | undefined {
   return undefined;
 }
 
+/**
+ * A calendar text with no species of its own (the frost date, the winter-sowing window, the share)
+ * in the reader's language, sentence by sentence; a sentence without a twin stays as written.
+ */
+export function calendarTextIn(detail: string, locale: WordLocale): string {
+  if (locale === 'en') return detail;
+  return detail
+    .split(/(?<=\.) /)
+    .map((part) => (part.trim() === '' ? part : (sentenceIn(part.trim()) ?? part)))
+    .join(' ');
+}
+
 /** One step's detail in the reader's language; the species' sowing depth in that language's own words. */
 export function stepDetailIn(detail: string, species: Species, locale: WordLocale): string {
   if (locale === 'en') return detail;

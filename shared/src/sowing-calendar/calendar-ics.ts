@@ -1,6 +1,7 @@
 import { addDays } from './calendar-date.js';
 import type { CalendarEvent, SowingCalendar } from './calendar-types.js';
 import { uidsFor } from './event-uid.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 
 /** Options for writing a calendar as iCalendar. */
 export interface IcsOptions {
@@ -8,7 +9,15 @@ export interface IcsOptions {
   today: string;
   /** The plan id that goes into every UID (see `uidsFor`). */
   planId?: string;
+  /** The language of the file's own words (its name, "Please note"); events come already in it. */
+  locale?: WordLocale;
 }
+
+/** The file's own words, by language. */
+const ICS_WORDS: Record<WordLocale, { name: string; note: string }> = {
+  en: { name: 'Homeground sowing calendar', note: 'Please note:' },
+  es: { name: 'Calendario de siembra de Homeground', note: 'Ten en cuenta:' },
+};
 
 const encoder = new TextEncoder();
 
@@ -59,18 +68,19 @@ function warningsFor(calendar: SowingCalendar, e: CalendarEvent): string[] {
 export function calendarToIcs(calendar: SowingCalendar, options: IcsOptions): string {
   const uids = uidsFor(calendar.events, options.planId);
   const stamp = `${dateValue(options.today)}T000000Z`;
+  const words = ICS_WORDS[options.locale ?? 'en'];
   const lines = [
     'BEGIN:VCALENDAR',
     'VERSION:2.0',
     'PRODID:-//Homeground//Sowing calendar//EN',
     'CALSCALE:GREGORIAN',
     'METHOD:PUBLISH',
-    'X-WR-CALNAME:Homeground sowing calendar',
+    `X-WR-CALNAME:${escapeText(words.name)}`,
   ];
   calendar.events.forEach((e, i) => {
     const notes = warningsFor(calendar, e);
     const description =
-      notes.length > 0 ? `${e.detail}\n\nPlease note:\n${notes.map((n) => `- ${n}`).join('\n')}` : e.detail;
+      notes.length > 0 ? `${e.detail}\n\n${words.note}\n${notes.map((n) => `- ${n}`).join('\n')}` : e.detail;
     lines.push(
       'BEGIN:VEVENT',
       `UID:${uids[i]}`,

@@ -1,17 +1,47 @@
-import { Body, Param, Query, UploadedFile, UseInterceptors, type PipeTransform } from '@nestjs/common';
+import {
+  createParamDecorator,
+  type ExecutionContext,
+  UploadedFile,
+  UseInterceptors,
+  type PipeTransform,
+} from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import { apiErrorSchema } from '@homeground/shared';
 import { ApiBadRequestResponse, ApiBody, ApiConsumes, ApiParam, ApiQuery, ApiResponse } from '@nestjs/swagger';
 import type { z } from 'zod';
 import { badRequest } from '../validation/bad-request.js';
 import { openApiProperties, openApiSchema } from '../validation/openapi-schema.js';
-import { ZodValidationPipe } from '../validation/zod-validation.pipe.js';
+import { negotiateLocale } from '../i18n/negotiate-locale.js';
+import { parseRequestPart } from '../validation/zod-validation.pipe.js';
 
 /**
  * The API's one way to read a request: each decorator parses its part with a shared zod schema
  * (answering 400 naming each bad field) and publishes the same schema in the OpenAPI document, so
  * `/api/docs` cannot drift from what is checked.
  */
+
+/** Which part of the request a zod decorator reads, with its schema (a path parameter by name). */
+interface PartToRead {
+  part: 'body' | 'query' | 'param';
+  schema: z.ZodType;
+  name?: string;
+}
+
+/**
+ * Reads one part of the request and parses it; the request is at hand here (a pipe never sees it),
+ * so a 400 comes back in the reader's `Accept-Language`.
+ */
+const ParsedPart = createParamDecorator(({ part, schema, name }: PartToRead, ctx: ExecutionContext): unknown => {
+  const req = ctx.switchToHttp().getRequest<{
+    body?: unknown;
+    query?: unknown;
+    params?: Record<string, string>;
+    headers: Record<string, string | string[] | undefined>;
+  }>();
+  const locale = negotiateLocale(req.headers['accept-language']);
+  if (part === 'param') return parseRequestPart(schema, req.params?.[name!], locale, name);
+  return parseRequestPart(schema, part === 'body' ? req.body : req.query, locale);
+});
 
 type HandlerDecorator = (target: object, key: string | symbol, descriptor: PropertyDescriptor) => unknown;
 
@@ -45,7 +75,7 @@ function onMethod(target: object, key: string | symbol | undefined, ...decorator
 /** The JSON body, parsed with `schema`; unknown fields are refused when the schema is strict. */
 export function ZodBody(schema: z.ZodType, description?: string): ParameterDecorator {
   return (target, key, index) => {
-    Body(new ZodValidationPipe(schema))(target, key!, index);
+    ParsedPart({ part: 'body', schema })(target, key!, index);
     markReads(target, key, 'body');
     onMethod(target, key, ApiBody({ schema: openApiSchema(schema), description, required: true }), badRequestDoc);
   };
@@ -54,7 +84,7 @@ export function ZodBody(schema: z.ZodType, description?: string): ParameterDecor
 /** The whole query string, parsed with an object `schema`; each property is published as a parameter. */
 export function ZodQuery(schema: z.ZodType): ParameterDecorator {
   return (target, key, index) => {
-    Query(new ZodValidationPipe(schema))(target, key!, index);
+    ParsedPart({ part: 'query', schema })(target, key!, index);
     markReads(target, key, 'query');
     onMethod(
       target,
@@ -68,7 +98,7 @@ export function ZodQuery(schema: z.ZodType): ParameterDecorator {
 /** One path parameter, parsed with `schema`; a bad value answers 400 naming the parameter. */
 export function ZodParam(name: string, schema: z.ZodType): ParameterDecorator {
   return (target, key, index) => {
-    Param(name, new ZodValidationPipe(schema, name))(target, key!, index);
+    ParsedPart({ part: 'param', schema, name })(target, key!, index);
     onMethod(target, key, ApiParam({ name, required: true, schema: openApiSchema(schema) }), badRequestDoc);
   };
 }
@@ -139,7 +169,7 @@ export function ZodFile(
  */
 export function ZodFormFields(schema: z.ZodType): ParameterDecorator {
   return (target, key, index) => {
-    Body(new ZodValidationPipe(schema))(target, key!, index);
+    ParsedPart({ part: 'body', schema })(target, key!, index);
     markReads(target, key, 'body');
   };
 }

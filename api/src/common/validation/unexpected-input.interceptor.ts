@@ -2,7 +2,9 @@ import { type CallHandler, type ExecutionContext, Injectable, type NestIntercept
 import type { Request } from 'express';
 import type { Observable } from 'rxjs';
 import { READS_METADATA } from '../decorators/zod.decorators.js';
-import { badRequest } from './bad-request.js';
+import { apiWords } from '../i18n/api-i18n.js';
+import { negotiateLocale } from '../i18n/negotiate-locale.js';
+import { badRequest, pleaseCheck } from './bad-request.js';
 
 /**
  * Refuses a query string or a JSON body on a route that reads none (e.g. `GET /api/me?role=admin`),
@@ -18,8 +20,12 @@ export class UnexpectedInputInterceptor implements NestInterceptor {
       ...(reads.includes('query') ? [] : keysOf(req.query)),
       ...(reads.includes('body') ? [] : keysOf(req.body)),
     ];
-    if (unexpected.length)
-      throw badRequest(unexpected.map((field) => ({ field, message: 'is not a field this request accepts' })));
+    if (unexpected.length) {
+      const locale = negotiateLocale(req.headers['accept-language']);
+      const message = apiWords(locale)('validation.notAField');
+      const fields = unexpected.map((field) => ({ field, message }));
+      throw badRequest(fields, pleaseCheck(fields, locale));
+    }
     return next.handle();
   }
 }

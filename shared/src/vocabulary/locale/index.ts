@@ -1,3 +1,4 @@
 export * from './vocabulary.js';
 export * from './words-for.js';
 export * from './batch-words-in.js';
+export * from './zod-issue-words.js';

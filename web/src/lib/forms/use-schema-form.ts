@@ -1,4 +1,6 @@
+import { zodIssueWordsFor } from '@homeground/shared';
 import { useSchemaMessage } from './schema-messages.js';
+import { useLocale } from '../i18n/index.js';
 import { type FormEvent, useEffect, useRef, useState } from 'react';
 import type { z } from 'zod';
 import { failureFromApi, type FieldErrors, fieldErrorsFromZod, type FormFailure } from './field-errors.js';
@@ -29,6 +31,7 @@ export function useSchemaForm<S extends z.ZodType>({ schema, initial }: SchemaFo
   const fields = Object.keys(initial) as Field[];
   const formRef = useRef<HTMLFormElement>(null);
   const say = useSchemaMessage();
+  const { locale } = useLocale();
   const [values, setValues] = useState<TextValues<S>>(initial);
   const [errors, setErrors] = useState<FieldErrors<Field>>({});
   const [failure, setFailure] = useState<string | null>(null);
@@ -66,7 +69,9 @@ export function useSchemaForm<S extends z.ZodType>({ schema, initial }: SchemaFo
   const handleSubmit = (onValid: (data: z.output<S>) => void) => (event: FormEvent) => {
     event.preventDefault();
     setFailure(null);
-    const parsed = schema.safeParse(values);
+    // zod's own reasons (missing, wrong type) in the page's language, as the API would say them.
+    const issueWords = zodIssueWordsFor(locale);
+    const parsed = schema.safeParse(values, issueWords ? { error: issueWords } : undefined);
     if (!parsed.success) {
       setErrors(sayEach(fieldErrorsFromZod<Field>(parsed.error), say));
       focusFirstInvalid();

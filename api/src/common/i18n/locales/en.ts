@@ -1,5 +1,19 @@
 /** The API's own sentences in English (the shared engine's reasons have their own twins in shared). */
 export const en = {
+  invitations: {
+    notOurs: 'This invitation link is not one we sent, or it was replaced by a newer one.',
+    used: 'This invitation has already been used.',
+    expired: 'This invitation has expired: ask the organiser to send a new one.',
+    otherAddress: 'This invitation was sent to {{email}}: sign in with that address to accept it.',
+    accountExists: 'An account already uses {{email}}: sign in first, then open the link again.',
+    needNameAndPassword: 'To join, give your name and choose a password.',
+    requiredForAccount: 'is required to make your account',
+  },
+  validation: {
+    /** A 400's sentence listing each bad field and its reason ("name must be …; zip must be …"). */
+    pleaseCheck: 'Please check: {{problems}}',
+    notAField: 'is not a field this request accepts',
+  },
   places: {
     unknownZipField: '{{zip}} is not a US ZIP code we know',
     unknownZip: '{{zip}} is not a US ZIP code we know. Check the five digits, or click the map where your ground is.',

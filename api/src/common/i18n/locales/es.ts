@@ -3,6 +3,19 @@ import type { en } from './en.js';
 
 /** Las frases propias de la API en español, con el mismo tono sencillo y cálido (tú). */
 export const es = {
+  invitations: {
+    notOurs: 'Este enlace de invitación no es uno que hayamos enviado, o lo reemplazó uno más nuevo.',
+    used: 'Esta invitación ya se usó.',
+    expired: 'Esta invitación caducó: pide a quien organiza el grupo que te envíe una nueva.',
+    otherAddress: 'Esta invitación se envió a {{email}}: inicia sesión con esa dirección para aceptarla.',
+    accountExists: 'Ya hay una cuenta con {{email}}: inicia sesión primero y luego abre el enlace otra vez.',
+    needNameAndPassword: 'Para unirte, escribe tu nombre y elige una contraseña.',
+    requiredForAccount: 'hace falta para crear tu cuenta',
+  },
+  validation: {
+    pleaseCheck: 'Revisa esto: {{problems}}',
+    notAField: 'no es un campo que esta petición acepte',
+  },
   places: {
     unknownZipField: '{{zip}} no es un código postal de EE. UU. que conozcamos',
     unknownZip:

@@ -92,4 +92,49 @@ describe('accepting an invitation', () => {
     expect(await screen.findByText('This invitation cannot be used.')).toBeInTheDocument();
     expect(screen.getByText('This invitation has already been used.')).toBeInTheDocument();
   });
+
+  // The invited person may read the page in Spanish: the page's own words come from the groups catalogue,
+  // the name and password checks from the shared schema said in the page's language, and the API's
+  // refusals as the API words them for Accept-Language es.
+  it('checks the name and password in Spanish and shows the API refusal beside the field', async () => {
+    const weak =
+      'es demasiado fácil de adivinar (una contraseña común o un patrón sencillo): prueba con tres o cuatro palabras sin relación entre sí';
+    const { user, api } = renderApp({
+      path: `/invitations/${TOKEN}`,
+      locale: 'es',
+      api: {
+        [`GET ${PREVIEW_PATH}`]: { body: preview() },
+        [`POST ${PREVIEW_PATH}/accept`]: apiError(400, `Revisa esto: password ${weak}`, {
+          fields: [{ field: 'password', message: weak }],
+        }),
+      },
+    });
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Únete a Larkfield Commons Growers' }),
+    ).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Crear mi cuenta y unirme' }));
+    expect(await screen.findByText('No puede quedar vacío')).toBeInTheDocument();
+
+    await user.type(screen.getByLabelText(/Tu nombre/), 'Juniper Okafor');
+    await user.type(screen.getByLabelText(/^Contraseña/), 'corta');
+    await user.click(screen.getByRole('button', { name: 'Crear mi cuenta y unirme' }));
+    expect(await screen.findByText('Escribe al menos 10 caracteres')).toBeInTheDocument();
+    expect(api.callsTo('POST', `${PREVIEW_PATH}/accept`)).toHaveLength(0);
+
+    await user.clear(screen.getByLabelText(/^Contraseña/));
+    await user.type(screen.getByLabelText(/^Contraseña/), 'password123');
+    await user.click(screen.getByRole('button', { name: 'Crear mi cuenta y unirme' }));
+    expect(await screen.findByText(/^Es demasiado fácil de adivinar/)).toBeInTheDocument();
+    expect(api.callsTo('POST', `${PREVIEW_PATH}/accept`)[0].headers['accept-language']).toBe('es');
+  });
+
+  it('says in Spanish when a link cannot be used', async () => {
+    renderApp({
+      path: `/invitations/${TOKEN}`,
+      locale: 'es',
+      api: { [`GET ${PREVIEW_PATH}`]: apiError(410, 'Esta invitación ya se usó.') },
+    });
+    expect(await screen.findByText('Esta invitación no se puede usar.')).toBeInTheDocument();
+    expect(screen.getByText('Esta invitación ya se usó.')).toBeInTheDocument();
+  });
 });

@@ -102,6 +102,25 @@ describe('the organiser’s plant share after opening', () => {
     expect(added.start.slice(0, 10)).toBe(share.date);
   });
 
+  // The API answers the share with its new slot (one more than before): the card must take that answer in
+  // place, keeping the "added" note and what the organiser typed in another slot but has not saved yet.
+  it('keeps the added note and unsaved slot edits when the answer brings one more slot', async () => {
+    const third = { ...share.slots[1], id: '0b6b6c1e-2f0a-4a4e-9d51-6f1f3b1d9a03', booked: 0, left: 12 };
+    const withThird = {
+      ...share,
+      slots: [...share.slots, { ...third, start: '2027-06-12T10:00:00-05:00', end: '2027-06-12T11:00:00-05:00' }],
+    };
+    const { user, api } = openPage({ [`POST ${SHARE_PATH}/slots`]: { status: 201, body: withThird } });
+    const second = await screen.findByRole('textbox', { name: 'Households in slot 2' });
+    await user.clear(second);
+    await user.type(second, '15');
+    await user.click(screen.getByRole('button', { name: 'Add a slot' }));
+    expect(await screen.findByRole('textbox', { name: 'Households in slot 3' })).toHaveValue('12');
+    expect(screen.getByText('The slot is added.')).toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: 'Households in slot 2' })).toHaveValue('15');
+    expect(api.callsTo('POST', `${SHARE_PATH}/slots`)).toHaveLength(1);
+  });
+
   it('deletes an empty slot only after the organiser confirms, and offers no delete for a booked one', async () => {
     const { user, api } = openPage({
       [`DELETE ${SHARE_PATH}/slots/${SLOT_2}`]: { body: { ...share, slots: share.slots.slice(0, 1) } },

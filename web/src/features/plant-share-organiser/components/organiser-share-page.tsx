@@ -50,7 +50,8 @@ export function OrganiserSharePage({ groupSlug, groupName }: { groupSlug: string
             <ShareStatusCard share={s} />
             <ShareDayCard share={s} publicHref={paths.shareAvailable.build(s.groupSlug)} />
             <EditShareCard key={`edit-${s.id}`} share={s} />
-            <SlotsCard key={`slots-${s.id}-${s.slots.length}`} share={s} />
+            {/* Keyed by the share only: the card takes a new or deleted slot in place, keeping its note and unsaved rows. */}
+            <SlotsCard key={`slots-${s.id}`} share={s} />
             <StockCard key={`stock-${s.id}-${s.stock.length}`} share={s} />
             <AddSpeciesCard share={s} />
             <WaitlistCard groupSlug={s.groupSlug} />

@@ -50,6 +50,12 @@ const rowOf = (s: PickupSlot): SlotRow => ({
   end: clockOf(s.end),
   capacity: String(s.capacity),
 });
+/** The next slot's row as offered: an hour from the last slot's end, as many households. */
+const freshAfter = (last: PickupSlot | undefined): SlotRow => ({
+  start: last ? clockOf(last.end) : '09:00',
+  end: last ? clockOf(last.end).replace(/^(\d{2})/, (h) => String(Number(h) + 1).padStart(2, '0')) : '10:00',
+  capacity: last ? String(last.capacity) : '10',
+});
 
 /**
  * The pickup slots of an open share: each row's times and households can change (never below the
@@ -69,12 +75,7 @@ export function SlotsCard({ share }: { share: PlantShare }) {
   const [rows, setRows] = useState<Record<string, SlotRow>>(() =>
     Object.fromEntries(share.slots.map((s) => [s.id, rowOf(s)])),
   );
-  const last = share.slots.at(-1);
-  const [fresh, setFresh] = useState<SlotRow>({
-    start: last ? clockOf(last.end) : '09:00',
-    end: last ? clockOf(last.end).replace(/^(\d{2})/, (h) => String(Number(h) + 1).padStart(2, '0')) : '10:00',
-    capacity: last ? String(last.capacity) : '10',
-  });
+  const [fresh, setFresh] = useState<SlotRow>(() => freshAfter(share.slots.at(-1)));
   const [errors, setErrors] = useState<Record<string, SlotRowErrors>>({});
   const [note, setNote] = useState<{ intent: 'success' | 'error'; text: string } | null>(null);
 
@@ -110,7 +111,9 @@ export function SlotsCard({ share }: { share: PlantShare }) {
     if (!body) return;
     addSlot.mutate(body, {
       onSuccess: (next) => {
-        setRows(Object.fromEntries(next.slots.map((s) => [s.id, rowOf(s)])));
+        // Rows the organiser has typed in but not saved keep their text; the new slot comes from the answer.
+        setRows((r) => Object.fromEntries(next.slots.map((s) => [s.id, r[s.id] ?? rowOf(s)])));
+        setFresh(freshAfter(next.slots.at(-1)));
         setNote({ intent: 'success', text: t('slotAdded') });
       },
       onError: failed('new'),
