@@ -34,6 +34,18 @@ export function growersQueryOptions(slug: string) {
   return queryOptions({ queryKey: batchKeys.growers(slug), queryFn: ({ signal }) => getGrowers(slug, signal) });
 }
 
+/**
+ * The season's growers as My batches reads them (for the grower's own "how I grow" card), kept on the
+ * device under the grower's id like their batches, so the card still shows what they stated with no signal.
+ */
+export function myGrowersQueryOptions(slug: string, userId: string) {
+  return queryOptions({
+    queryKey: [...batchKeys.growers(slug), 'mine', userId] as const,
+    queryFn: ({ signal }) => withSavedCopy(userId, `growers:${slug}`, () => getGrowers(slug, signal)),
+    networkMode: 'offlineFirst',
+  });
+}
+
 export function progressQueryOptions(slug: string) {
   return queryOptions({ queryKey: batchKeys.progress(slug), queryFn: ({ signal }) => getProgress(slug, signal) });
 }

@@ -102,5 +102,7 @@ export const batches = {
     notUsed: 'not used',
     save: 'Save how I grow',
     saved: 'Saved. The organiser sees it when splitting the batches.',
+    savedCopy:
+      'No connection: this is what you stated, as this device saved it on {{when}}. Saving a change needs the signal back.',
   },
 };

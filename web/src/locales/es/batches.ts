@@ -107,5 +107,7 @@ export const batches = {
     notUsed: 'no lo uso',
     save: 'Guardar cómo cultivo',
     saved: 'Guardado. La organizadora lo verá al repartir los lotes.',
+    savedCopy:
+      'Sin conexión: esto es lo que indicaste, tal como este dispositivo lo guardó el {{when}}. Para guardar un cambio hace falta volver a tener señal.',
   },
 } satisfies Catalogue<typeof en>;

@@ -3,19 +3,20 @@ import { GROWER_METHODS, growerSetupFormSchema, UNIT_OF, type SeasonGrower } fro
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useSaveGrowerMutation } from '../../../api/batches/batches.mutations.js';
-import { growersQueryOptions } from '../../../api/batches/batches.queries.js';
+import { myGrowersQueryOptions } from '../../../api/batches/batches.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { QueryState } from '../../../components/states/index.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
 import { useTranslation } from 'react-i18next';
-import { useWords } from '../../../lib/i18n/index.js';
+import { useFormatters, useWords } from '../../../lib/i18n/index.js';
 import { useMyBatchesStyles } from './my-batches.styles.js';
 
 /** Where the grower says how they grow and how many pots, containers or blocks they can tend. */
 export function GrowerSetupCard({ slug, userId }: { slug: string; userId: string }) {
   const { t } = useTranslation('batches');
-  const growers = useQuery(growersQueryOptions(slug));
+  const { moment } = useFormatters();
+  const growers = useQuery(myGrowersQueryOptions(slug, userId));
   return (
     <ContentCard aria-labelledby="how-i-grow">
       <Heading level="section" id="how-i-grow">
@@ -23,7 +24,12 @@ export function GrowerSetupCard({ slug, userId }: { slug: string; userId: string
       </Heading>
       <p>{t('setup.lead')}</p>
       <QueryState query={growers} loading={t('page.loading')} error={t('page.failed')}>
-        {(list) => <GrowerSetupForm slug={slug} userId={userId} me={list.find((g) => g.userId === userId)} />}
+        {({ data: list, savedAt }) => (
+          <>
+            {savedAt ? <p>{t('setup.savedCopy', { when: moment(savedAt) })}</p> : null}
+            <GrowerSetupForm slug={slug} userId={userId} me={list.find((g) => g.userId === userId)} />
+          </>
+        )}
       </QueryState>
     </ContentCard>
   );

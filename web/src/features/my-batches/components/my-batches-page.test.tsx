@@ -1,5 +1,6 @@
 import { act, screen, within } from '@testing-library/react';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { openSavedAnswersDb } from '../../../lib/offline/saved-answers.js';
 import { deviceOutbox } from '../offline/use-log-outbox.js';
 import { apiError, type FakeRoutes } from '../../../testing/fake-api.js';
 import { juniperGrower, priyaMember } from '../../../testing/fixtures.js';
@@ -189,6 +190,26 @@ describe('My batches', () => {
         { method: 'winter-sowing', capacity: 12 },
       ],
     });
+  });
+
+  it('still shows how the grower grows with no signal, from the copy this device saved on the last visit', async () => {
+    const first = openMyBatches();
+    const online = within(await screen.findByRole('form', { name: 'How I grow' }));
+    expect(online.getByRole('textbox', { name: 'outdoor pots over winter: pots' })).toHaveValue('120');
+    // Wait until the copy is written to the device before the page is closed.
+    await vi.waitFor(async () => {
+      expect(await openSavedAnswersDb().answers.get('u-amara|growers:larkfield-commons-growers')).toBeDefined();
+    });
+    first.unmount();
+
+    // No connection now: fetch itself fails for every read, as in a garden with no signal.
+    const noSignal = () => {
+      throw new TypeError('Failed to fetch');
+    };
+    openMyBatches(amara, { [`GET ${GROWERS_PATH}`]: noSignal, [`GET ${BATCHES_PATH}`]: noSignal });
+    const offline = within(await screen.findByRole('form', { name: 'How I grow' }));
+    expect(offline.getByRole('textbox', { name: 'outdoor pots over winter: pots' })).toHaveValue('120');
+    expect(screen.getByText(/No connection: this is what you stated, as this device saved it on/)).toBeInTheDocument();
   });
 
   it('downloads the batch dates as iCalendar with the sign-in token', async () => {
