@@ -20,6 +20,8 @@ export interface AppConfig {
   port: number;
   dataDir: string;
   databasePath: string;
+  /** A PostgreSQL server's address, or null for the embedded SQLite file at `databasePath`. */
+  databaseUrl: string | null;
   webDist: string;
   jwtSecret: string;
   jwtExpiresInSeconds: number;
@@ -60,6 +62,7 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     PORT: config.get('PORT', { infer: true }),
     DATA_DIR: config.get('DATA_DIR', { infer: true }),
     DATABASE: config.get('DATABASE', { infer: true }),
+    DATABASE_URL: config.get('DATABASE_URL', { infer: true }),
     JWT_SECRET: config.get('JWT_SECRET', { infer: true }),
     JWT_EXPIRES_IN_SECONDS: config.get('JWT_EXPIRES_IN_SECONDS', { infer: true }),
     DEMO_DATA: config.get('DEMO_DATA', { infer: true }),
@@ -81,6 +84,7 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     port: env.PORT,
     dataDir,
     databasePath: env.DATABASE === ':memory:' ? ':memory:' : fromRoot(env.DATABASE),
+    databaseUrl: env.DATABASE_URL ?? null,
     webDist: fromRoot(env.WEB_DIST),
     jwtSecret: resolveJwtSecret(env, dataDir),
     jwtExpiresInSeconds: env.JWT_EXPIRES_IN_SECONDS,
