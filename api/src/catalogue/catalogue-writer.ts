@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import type { CountyEcoregions, Ecoregion, Species } from '@homeground/shared';
 import type { EntityManager } from 'typeorm';
+import { runSql } from '../database/dialect.js';
 
 /** A stable hash of a record, to tell whether a species-data file changed since it was loaded. */
 export function recordHash(value: unknown): string {
@@ -65,32 +66,34 @@ export async function writeSpecies(
     meta.editedBy,
   ];
   const old = meta.previousSlug ?? s.slug;
-  const existing = await tx.query(`SELECT 1 FROM species WHERE slug = ?`, [old]);
+  const existing = await runSql(tx, `SELECT 1 FROM species WHERE slug = ?`, [old]);
   if (existing.length > 0) {
-    await tx.query(
+    await runSql(
+      tx,
       `UPDATE species SET slug = ?, scientific_name = ?, usda_symbol = ?, family = ?, growth_form = ?, height_max_cm = ?,
-         monarch_host = ?, record = ?, seed_hash = ?, edited_by = ?, updated_at = datetime('now') WHERE slug = ?`,
+         monarch_host = ?, record = ?, seed_hash = ?, edited_by = ?, updated_at = CURRENT_TIMESTAMP WHERE slug = ?`,
       [...values, old],
     );
   } else {
-    await tx.query(
+    await runSql(
+      tx,
       `INSERT INTO species (slug, scientific_name, usda_symbol, family, growth_form, height_max_cm, monarch_host, record, seed_hash, edited_by)
        VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
       values,
     );
   }
-  await tx.query(`DELETE FROM species_names WHERE slug = ?`, [s.slug]);
-  await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'scientific')`, [
+  await runSql(tx, `DELETE FROM species_names WHERE slug = ?`, [s.slug]);
+  await runSql(tx, `INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'scientific')`, [
     s.slug,
     s.scientificName,
   ]);
   for (const n of new Set(s.commonNames))
-    await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'common')`, [s.slug, n]);
+    await runSql(tx, `INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'common')`, [s.slug, n]);
   for (const n of new Set(s.synonyms))
-    await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'synonym')`, [s.slug, n]);
-  await tx.query(`DELETE FROM species_states WHERE slug = ?`, [s.slug]);
+    await runSql(tx, `INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'synonym')`, [s.slug, n]);
+  await runSql(tx, `DELETE FROM species_states WHERE slug = ?`, [s.slug]);
   for (const st of new Set(s.nativeStates))
-    await tx.query(`INSERT INTO species_states (slug, state) VALUES (?, ?)`, [s.slug, st]);
+    await runSql(tx, `INSERT INTO species_states (slug, state) VALUES (?, ?)`, [s.slug, st]);
 }
 
 /** Replaces the ecoregion table, counties and the crosswalk, inside the caller's transaction. */
@@ -99,11 +102,11 @@ export async function writeEcoregions(
   ecoregions: Ecoregion[],
   counties: CountyEcoregions[],
 ): Promise<void> {
-  await tx.query(`DELETE FROM county_ecoregions`);
-  await tx.query(`DELETE FROM counties`);
-  await tx.query(`DELETE FROM ecoregions`);
+  await runSql(tx, `DELETE FROM county_ecoregions`);
+  await runSql(tx, `DELETE FROM counties`);
+  await runSql(tx, `DELETE FROM ecoregions`);
   for (const e of ecoregions) {
-    await tx.query(`INSERT INTO ecoregions (code, name, level2_code, level1_code, record) VALUES (?, ?, ?, ?, ?)`, [
+    await runSql(tx, `INSERT INTO ecoregions (code, name, level2_code, level1_code, record) VALUES (?, ?, ?, ?, ?)`, [
       e.code,
       e.name,
       e.level2.code,
@@ -112,9 +115,9 @@ export async function writeEcoregions(
     ]);
   }
   for (const c of counties) {
-    await tx.query(`INSERT INTO counties (fips, name, state) VALUES (?, ?, ?)`, [c.fips, c.name, c.state]);
+    await runSql(tx, `INSERT INTO counties (fips, name, state) VALUES (?, ?, ?)`, [c.fips, c.name, c.state]);
     for (const e of c.ecoregions) {
-      await tx.query(`INSERT INTO county_ecoregions (fips, code, share) VALUES (?, ?, ?)`, [c.fips, e.code, e.share]);
+      await runSql(tx, `INSERT INTO county_ecoregions (fips, code, share) VALUES (?, ?, ?)`, [c.fips, e.code, e.share]);
     }
   }
 }

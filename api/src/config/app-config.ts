@@ -20,6 +20,8 @@ export interface AppConfig {
   port: number;
   dataDir: string;
   databasePath: string;
+  /** Uploaded species photos (DATA_DIR/photos unless PHOTOS_DIR says otherwise). */
+  photosDir: string;
   /** A PostgreSQL server's address, or null for the embedded SQLite file at `databasePath`. */
   databaseUrl: string | null;
   webDist: string;
@@ -63,6 +65,7 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     DATA_DIR: config.get('DATA_DIR', { infer: true }),
     DATABASE: config.get('DATABASE', { infer: true }),
     DATABASE_URL: config.get('DATABASE_URL', { infer: true }),
+    PHOTOS_DIR: config.get('PHOTOS_DIR', { infer: true }),
     JWT_SECRET: config.get('JWT_SECRET', { infer: true }),
     JWT_EXPIRES_IN_SECONDS: config.get('JWT_EXPIRES_IN_SECONDS', { infer: true }),
     DEMO_DATA: config.get('DEMO_DATA', { infer: true }),
@@ -85,6 +88,7 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     dataDir,
     databasePath: env.DATABASE === ':memory:' ? ':memory:' : fromRoot(env.DATABASE),
     databaseUrl: env.DATABASE_URL ?? null,
+    photosDir: env.PHOTOS_DIR ? fromRoot(env.PHOTOS_DIR) : path.join(dataDir, 'photos'),
     webDist: fromRoot(env.WEB_DIST),
     jwtSecret: resolveJwtSecret(env, dataDir),
     jwtExpiresInSeconds: env.JWT_EXPIRES_IN_SECONDS,

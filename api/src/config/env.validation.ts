@@ -15,6 +15,11 @@ export const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   /** Folder for the database, the generated JWT secret and uploaded photos. Relative paths are from the project root. */
   DATA_DIR: z.string().min(1).default('data'),
+  /**
+   * Where uploaded species photos are kept (default: DATA_DIR/photos). With several API instances, a folder
+   * they all mount (NFS or similar), so a photo uploaded through one is served by every other.
+   */
+  PHOTOS_DIR: z.string().min(1).optional(),
   /** SQLite file; relative paths are from the project root. Not used when DATABASE_URL is set. */
   DATABASE: z.string().min(1).default('data/homeground.sqlite'),
   /**

@@ -87,6 +87,8 @@ export function databaseOptions(config: Pick<AppConfig, 'databasePath' | 'databa
       // gen_random_uuid() is built into PostgreSQL 13+: no extension to install (which needs more rights).
       installExtensions: false,
       uuidExtension: 'pgcrypto',
+      // COUNT and SUM answer bigint, which pg hands over as text; every count here fits a JS number, as on SQLite.
+      parseInt8: true,
       ...common,
     };
   }

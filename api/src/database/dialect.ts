@@ -69,3 +69,32 @@ export function placeholders(dialect: Dialect, sql: string): string {
   let n = 0;
   return sql.replace(/\?/g, () => `$${++n}`);
 }
+
+/** A DataSource or a transaction's EntityManager: both run raw SQL. */
+type SqlRunner =
+  | { options: { type: string }; query(sql: string, params?: unknown[]): Promise<unknown> }
+  | { connection: { options: { type: string } }; query(sql: string, params?: unknown[]): Promise<unknown> };
+
+/**
+ * Runs raw SQL written with `?` placeholders on either database. The SQL itself must be portable:
+ * `CURRENT_TIMESTAMP` rather than `datetime('now')`, `INSERT … ON CONFLICT … DO UPDATE` rather than
+ * `INSERT OR REPLACE`, booleans bound as values; PostgreSQL answers counts as text, so callers wrap them in `Number`.
+ */
+export async function runSql<T = Record<string, unknown>>(
+  db: SqlRunner,
+  sql: string,
+  params?: unknown[],
+): Promise<T[]> {
+  const dialect = dialectOf('options' in db ? db : db.connection);
+  return (await db.query(placeholders(dialect, sql), params)) as T[];
+}
+
+/** Whether a table exists in the database's (current) schema. */
+export async function tableExists(db: SqlRunner, table: string): Promise<boolean> {
+  const dialect = dialectOf('options' in db ? db : db.connection);
+  const sql =
+    dialect === 'postgres'
+      ? `SELECT 1 FROM information_schema.tables WHERE table_schema = current_schema() AND table_name = ?`
+      : `SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = ?`;
+  return (await runSql(db, sql, [table])).length > 0;
+}
