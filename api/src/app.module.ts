@@ -60,8 +60,8 @@ function webApp(): DynamicModule[] {
     PlanningModule,
     SeasonsModule,
     // The plant share's writes are synchronous SQLite transactions: on PostgreSQL its routes answer 503 until ported.
-    ConditionalModule.registerWhen(PlantShareModule, (env) => !env.DATABASE_URL),
-    ConditionalModule.registerWhen(PlantShareUnavailableModule, (env) => Boolean(env.DATABASE_URL)),
+    ConditionalModule.registerWhen(PlantShareModule, (env) => !env.DATABASE_URL, { debug: false }),
+    ConditionalModule.registerWhen(PlantShareUnavailableModule, (env) => Boolean(env.DATABASE_URL), { debug: false }),
     BatchesModule,
     DemoModule,
   ],
