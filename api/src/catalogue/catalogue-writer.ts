@@ -83,17 +83,23 @@ export async function writeSpecies(
     );
   }
   await runSql(tx, `DELETE FROM species_names WHERE slug = ?`, [s.slug]);
-  await runSql(tx, `INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'scientific')`, [
-    s.slug,
-    s.scientificName,
-  ]);
-  for (const n of new Set(s.commonNames))
-    await runSql(tx, `INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'common')`, [s.slug, n]);
-  for (const n of new Set(s.synonyms))
-    await runSql(tx, `INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'synonym')`, [s.slug, n]);
+  await insertRows(
+    tx,
+    'species_names',
+    ['slug', 'name', 'kind'],
+    [
+      [s.slug, s.scientificName, 'scientific'],
+      ...[...new Set(s.commonNames)].map((n) => [s.slug, n, 'common']),
+      ...[...new Set(s.synonyms)].map((n) => [s.slug, n, 'synonym']),
+    ],
+  );
   await runSql(tx, `DELETE FROM species_states WHERE slug = ?`, [s.slug]);
-  for (const st of new Set(s.nativeStates))
-    await runSql(tx, `INSERT INTO species_states (slug, state) VALUES (?, ?)`, [s.slug, st]);
+  await insertRows(
+    tx,
+    'species_states',
+    ['slug', 'state'],
+    [...new Set(s.nativeStates)].map((st) => [s.slug, st]),
+  );
 }
 
 /** Replaces the ecoregion table, counties and the crosswalk, inside the caller's transaction. */
@@ -105,19 +111,38 @@ export async function writeEcoregions(
   await runSql(tx, `DELETE FROM county_ecoregions`);
   await runSql(tx, `DELETE FROM counties`);
   await runSql(tx, `DELETE FROM ecoregions`);
-  for (const e of ecoregions) {
-    await runSql(tx, `INSERT INTO ecoregions (code, name, level2_code, level1_code, record) VALUES (?, ?, ?, ?, ?)`, [
-      e.code,
-      e.name,
-      e.level2.code,
-      e.level1.code,
-      JSON.stringify(e),
-    ]);
-  }
-  for (const c of counties) {
-    await runSql(tx, `INSERT INTO counties (fips, name, state) VALUES (?, ?, ?)`, [c.fips, c.name, c.state]);
-    for (const e of c.ecoregions) {
-      await runSql(tx, `INSERT INTO county_ecoregions (fips, code, share) VALUES (?, ?, ?)`, [c.fips, e.code, e.share]);
-    }
+  await insertRows(
+    tx,
+    'ecoregions',
+    ['code', 'name', 'level2_code', 'level1_code', 'record'],
+    ecoregions.map((e) => [e.code, e.name, e.level2.code, e.level1.code, JSON.stringify(e)]),
+  );
+  await insertRows(
+    tx,
+    'counties',
+    ['fips', 'name', 'state'],
+    counties.map((c) => [c.fips, c.name, c.state]),
+  );
+  await insertRows(
+    tx,
+    'county_ecoregions',
+    ['fips', 'code', 'share'],
+    counties.flatMap((c) => c.ecoregions.map((e) => [c.fips, e.code, e.share])),
+  );
+}
+
+/** Rows per INSERT: well under SQLite's limit of bound values, and few round trips to a database server. */
+const ROWS_PER_INSERT = 200;
+
+/** Inserts rows with multi-row INSERTs: one statement per species' names, not one per name. */
+async function insertRows(tx: EntityManager, table: string, columns: string[], rows: unknown[][]): Promise<void> {
+  const row = `(${columns.map(() => '?').join(', ')})`;
+  for (let i = 0; i < rows.length; i += ROWS_PER_INSERT) {
+    const chunk = rows.slice(i, i + ROWS_PER_INSERT);
+    await runSql(
+      tx,
+      `INSERT INTO ${table} (${columns.join(', ')}) VALUES ${chunk.map(() => row).join(', ')}`,
+      chunk.flat(),
+    );
   }
 }

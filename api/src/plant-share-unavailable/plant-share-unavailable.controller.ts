@@ -1,5 +1,6 @@
-import { All, Controller, ServiceUnavailableException } from '@nestjs/common';
+import { All, Controller, ServiceUnavailableException, SetMetadata } from '@nestjs/common';
 import { ApiExcludeController } from '@nestjs/swagger';
+import { READS_METADATA } from '../common/decorators/zod.decorators.js';
 
 /** What a caller of any plant-share route reads while the API runs on PostgreSQL. */
 export const PLANT_SHARE_UNAVAILABLE_MESSAGE =
@@ -21,6 +22,8 @@ export class PlantShareUnavailableController {
     'reservations/*rest',
     'waitlist-offers/*rest',
   ])
+  // Whatever was sent, the answer is the same 503: the refusal of unread input must not answer first.
+  @SetMetadata(READS_METADATA, ['query', 'body'])
   unavailable(): never {
     throw new ServiceUnavailableException(PLANT_SHARE_UNAVAILABLE_MESSAGE);
   }
