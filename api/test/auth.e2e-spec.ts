@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
-import { runSql } from '../src/database/dialect.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 describe('sign-in and roles (e2e, throwaway SQLite)', () => {
   let t: TestApp;

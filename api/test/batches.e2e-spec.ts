@@ -5,7 +5,7 @@ import { BatchesService } from '../src/batches/batches.service.js';
 import { DEMO_GROWER_CAPACITY } from '../src/demo/demo-batches.js';
 import { DEMO_TARGETS } from '../src/demo/demo-season.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
-import { runSql } from '../src/database/dialect.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 const SEASON = '/api/groups/larkfield-commons-growers/season';
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
-import { runSql } from '../src/database/dialect.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 const fieldsOf = (body: { fields?: { field: string }[] }) => (body.fields ?? []).map((f) => f.field);
 

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { loadCatalogue } from '@homeground/species-data';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
-import { runSql } from '../src/database/dialect.js';
+import { runSql } from '../src/common/database/dialect.js';
 import { TEST_PG_URL } from './support/postgres.js';
 
 /** The plant share's routes (organisers' and public), which answer 503 on PostgreSQL until it is ported. */

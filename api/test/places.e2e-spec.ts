@@ -7,7 +7,7 @@ import { DataSource } from 'typeorm';
 import zipcodes from 'zipcodes';
 import { REFERENCE_DIR, referenceAvailable } from './support/reference.js';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
-import { runSql } from '../src/database/dialect.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 type Region = Feature<Polygon | MultiPolygon, { US_L3CODE: string; US_L3NAME: string }>;
 const EPA_FILE = 'epa_us_eco_l3.geojson';

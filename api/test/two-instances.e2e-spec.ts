@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
-import { runSql } from '../src/database/dialect.js';
+import { runSql } from '../src/common/database/dialect.js';
 import { createTestDatabase, TEST_PG_URL } from './support/postgres.js';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
 

@@ -2,7 +2,7 @@ import { Logger } from '@nestjs/common';
 import type { Catalogue } from '@homeground/species-data';
 import type { DataSource } from 'typeorm';
 import { recordHash, withAddedFacts, writeEcoregions, writeSpecies } from './catalogue-writer.js';
-import { runSql } from '../database/dialect.js';
+import { runSql } from '../common/database/dialect.js';
 
 export interface LoadReport {
   inserted: number;

@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import type { CountyEcoregions, Ecoregion, Species } from '@homeground/shared';
 import type { EntityManager } from 'typeorm';
-import { runSql } from '../database/dialect.js';
+import { runSql } from '../common/database/dialect.js';
 
 /** A stable hash of a record, to tell whether a species-data file changed since it was loaded. */
 export function recordHash(value: unknown): string {

@@ -1,7 +1,7 @@
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import { DEMO_SEASON, DEMO_TARGETS } from './demo-season.js';
-import { runSql } from '../database/dialect.js';
+import { runSql } from '../common/database/dialect.js';
 
 /**
  * The Larkfield Commons Growers' plant share, part of the invented demo scenario: the second Saturday

@@ -5,8 +5,8 @@ import { simplify } from '@turf/turf';
 import { DataSource } from 'typeorm';
 import { parseBoundaryUpload } from '../geometry/boundary-upload.js';
 import { type AreaFeature, PolygonIndex } from '../geometry/polygon-index.js';
-import { runSql } from '../database/dialect.js';
-import { bumpCatalogueMark } from '../database/shared-version.js';
+import { runSql } from '../common/database/dialect.js';
+import { bumpCatalogueMark } from '../common/database/shared-version.js';
 
 export interface CountyRegions {
   fips: string;

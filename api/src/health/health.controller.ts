@@ -14,7 +14,7 @@ import { DataSource } from 'typeorm';
 import { API_VERSION, APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { ZodResponse } from '../common/decorators/zod.decorators.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
-import { tableExists } from '../database/dialect.js';
+import { tableExists } from '../common/database/dialect.js';
 
 const STARTED_AT = Date.now();
 

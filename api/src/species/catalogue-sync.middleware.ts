@@ -2,7 +2,7 @@ import { Injectable, type NestMiddleware } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { NextFunction, Request, Response } from 'express';
 import { DataSource } from 'typeorm';
-import { dialectOf } from '../database/dialect.js';
+import { dialectOf } from '../common/database/dialect.js';
 import { SpeciesStore } from './species-store.service.js';
 
 /**

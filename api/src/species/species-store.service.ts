@@ -3,7 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import type { PhotoCredit, PhotoLicence, Species, SpeciesPage, SpeciesQuery } from '@homeground/shared';
 import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { DataSource } from 'typeorm';
-import { bumpCatalogueMark, readCatalogueMark } from '../database/shared-version.js';
+import { bumpCatalogueMark, readCatalogueMark } from '../common/database/shared-version.js';
 import { SpeciesSearchIndex, type NameEntry } from './search/species-search-index.js';
 import { matchesFilters, sortSpecies } from './species-filter.js';
 import { toSpeciesSummary } from './species-summary.mapper.js';

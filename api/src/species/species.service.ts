@@ -14,7 +14,7 @@ import { writeSpecies } from '../catalogue/catalogue-writer.js';
 import { badRequest } from '../common/validation/bad-request.js';
 import { recordChange } from './species-change-recorder.js';
 import { SpeciesStore } from './species-store.service.js';
-import { runSql } from '../database/dialect.js';
+import { runSql } from '../common/database/dialect.js';
 
 /** At most this many bad rows are listed in one answer; the count says how many there were. */
 const MAX_REPORTED_ROW_ERRORS = 500;

@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { schemaWords } from '../dialect.js';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /** Users with global roles, community groups, and each person's role in a group. */
 export class CreateUsersAndGroups1764633600000 implements MigrationInterface {

@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { schemaWords } from '../dialect.js';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /**
  * The species catalogue: one row per species holding the full record as JSON (the shared schema),

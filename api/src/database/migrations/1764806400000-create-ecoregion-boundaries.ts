@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { schemaWords } from '../dialect.js';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /**
  * Level III boundary polygons an admin has imported (GeoJSON as the EPA publishes it). When present,

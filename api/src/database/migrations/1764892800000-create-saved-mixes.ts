@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { schemaWords } from '../dialect.js';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /** Mixes that signed-in people save and share by link. */
 export class CreateSavedMixes1764892800000 implements MigrationInterface {

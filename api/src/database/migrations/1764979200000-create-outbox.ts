@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { schemaWords } from '../dialect.js';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /** The local outbox: messages the built-in SMTP server received when no real mail server is set. */
 export class CreateOutbox1764979200000 implements MigrationInterface {

@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { dialectOf } from '../dialect.js';
+import { dialectOf } from '../../common/database/dialect.js';
 
 /**
  * A group's people now include plain members (who reserve plants) beside growers and organisers.

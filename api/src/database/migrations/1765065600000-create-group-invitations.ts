@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { schemaWords } from '../dialect.js';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /** E-mailed invitations to join a group; the link's secret is stored only as a hash. */
 export class CreateGroupInvitations1765065600000 implements MigrationInterface {

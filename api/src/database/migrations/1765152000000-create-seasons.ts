@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { schemaWords } from '../dialect.js';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /** Group seasons (dates, seed-list settings) and their targets. */
 export class CreateSeasons1765152000000 implements MigrationInterface {

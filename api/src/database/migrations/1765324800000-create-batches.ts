@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { schemaWords } from '../dialect.js';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /** Growers' methods and capacity per season, batches, and batch logs. */
 export class CreateBatches1765324800000 implements MigrationInterface {

@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { schemaWords } from '../dialect.js';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /** Admins can switch an account off (and on again) without deleting it or its group history. */
 export class AddAccountDisabled1765497600000 implements MigrationInterface {
