@@ -18,6 +18,7 @@ import {
 } from '@homeground/shared';
 import { Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { runSql } from '../common/database/dialect.js';
 import { BatchesService } from '../batches/batches.service.js';
 import { badRequest } from '../common/validation/bad-request.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
@@ -182,7 +183,8 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
   /** Writes "this grower has this week's summary"; false when it was already written. */
   private async claim(groupId: string, userId: string, week: string): Promise<boolean> {
     // One statement, so two runs at once cannot both pass a check and both send.
-    const rows: unknown[] = await this.sentRows.query(
+    const rows = await runSql(
+      this.sentRows.manager,
       `INSERT INTO "weekly_summaries_sent" ("id", "group_id", "user_id", "week") VALUES (?, ?, ?, ?)
        ON CONFLICT ("group_id", "user_id", "week") DO NOTHING RETURNING "id"`,
       [randomUUID(), groupId, userId, week],
