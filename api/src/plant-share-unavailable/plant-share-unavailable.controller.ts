@@ -1,5 +1,6 @@
 import { All, Controller, ServiceUnavailableException, SetMetadata } from '@nestjs/common';
 import { ApiExcludeController } from '@nestjs/swagger';
+import { Public } from '../common/decorators/public.decorator.js';
 import { READS_METADATA } from '../common/decorators/zod.decorators.js';
 
 /** What a caller of any plant-share route reads while the API runs on PostgreSQL. */
@@ -13,6 +14,8 @@ export const PLANT_SHARE_UNAVAILABLE_MESSAGE =
  * and answering 503 is better than a 404 (the route exists) or a 500 (nothing is broken, it is not here).
  */
 @ApiExcludeController()
+// Public by decision: the same 503 for everyone, before any sign-in is read (nothing here is served).
+@Public()
 @Controller()
 export class PlantShareUnavailableController {
   @All([
