@@ -1,11 +1,14 @@
 /**
  * `npm run bench:load`: the built API under load on loopback against a bare node:http server in the
  * same run. Four routes: species search, the mix (POST /api/mixes/balance), reservations at the plant
- * share, and a grower's batch log. Each run is bounded in request count and in time; the figures are
+ * share, and a grower's batch log (twice: fresh, then after that run's entries, to show whether a
+ * write slows as the log grows). Each run is bounded in request count and in time; the figures are
  * printed (p50/p95/p99 latency, throughput) with their ratio to the bare server answering the same
  * bytes. Nothing here asserts a time: the goals are read off the figures.
  */
+import { randomUUID } from 'node:crypto';
 import { cpus, loadavg } from 'node:os';
+import Database from 'better-sqlite3';
 import autocannon from 'autocannon';
 import { DEMO_PEOPLE } from '../src/demo/demo-people.js';
 import { percentile, startBareServer, startBuiltApi } from './support.js';
@@ -15,6 +18,13 @@ const GROUP = 'larkfield-commons-growers';
 const MAX_REQUESTS = Number(process.env.BENCH_REQUESTS ?? 1500);
 const MAX_SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 10);
+/** Entries added straight into the batch's log before its second run, so that run writes to a long log. */
+const GROWN_LOG = Number(process.env.BENCH_LOG_ENTRIES ?? 2000);
+/** Only the scenarios whose label contains one of these words (comma-separated, e.g. `batch log`); all when unset. */
+const ONLY = (process.env.BENCH_ONLY ?? '')
+  .split(',')
+  .map((w) => w.trim().toLowerCase())
+  .filter(Boolean);
 
 interface Figures {
   requests: number;
@@ -38,6 +48,8 @@ interface Scenario {
   paths?: string[];
   /** At most this many requests (writes are capped by what the scenario can accept). */
   amount: number;
+  /** Runs before the scenario (e.g. grows the batch log). */
+  prepare?: () => void;
 }
 
 /** One bounded autocannon run; stopped at `MAX_SECONDS` if the count has not been reached. */
@@ -97,6 +109,19 @@ async function json<T>(res: Response, what: string): Promise<T> {
 }
 
 const api = await startBuiltApi({ DEMO_DATA: 'true', LOGIN_THROTTLE_LIMIT: '100' });
+
+/** Adds `n` one-seed "sown" entries to a batch's log in one transaction, beside the running API. */
+function growLog(batchId: string, userId: string, date: string, n: number): void {
+  const db = new Database(api.databasePath);
+  db.pragma('busy_timeout = 5000');
+  const insert = db.prepare(
+    `INSERT INTO batch_log_entries (id, batch_id, kind, count, date, created_by) VALUES (?, ?, 'sown', 1, ?, ?)`,
+  );
+  db.transaction(() => {
+    for (let i = 0; i < n; i++) insert.run(randomUUID(), batchId, date, userId);
+  })();
+  db.close();
+}
 const stops: (() => Promise<void>)[] = [];
 try {
   const base = api.baseUrl;
@@ -195,6 +220,17 @@ try {
       body: () => JSON.stringify({ kind: 'sown', count: 1, date: today }),
       amount: MAX_REQUESTS,
     },
+    {
+      // The same batch again, its log now holding the run above's entries and `GROWN_LOG` more (written
+      // straight into the database file, WAL mode, as a long season would): a write should cost the same.
+      label: `a grower's batch log, grown by ${GROWN_LOG} entries (POST …/season/batches/:id/log)`,
+      prepare: () => growLog(batch.id, juniper.id, today, GROWN_LOG),
+      method: 'POST',
+      path: `/api/groups/${GROUP}/season/batches/${batch.id}/log`,
+      headers: juniper.auth,
+      body: () => JSON.stringify({ kind: 'sown', count: 1, date: today }),
+      amount: MAX_REQUESTS,
+    },
   ];
 
   console.log(
@@ -203,7 +239,8 @@ try {
   );
   const rows: Record<string, string | number>[] = [];
   let confirmedReservations = 0;
-  for (const s of scenarios) {
+  for (const s of scenarios.filter((x) => ONLY.length === 0 || ONLY.some((w) => x.label.toLowerCase().includes(w)))) {
+    s.prepare?.();
     // The bare server answers every request with the bytes of one real answer of this route.
     const sample = await fetch(`${base}${s.paths?.[0] ?? s.path}`, {
       method: s.method,

@@ -11,7 +11,7 @@ const API_DIR = path.resolve(import.meta.dirname, '..');
 /** Starts the built API (dist/main.js) on a free port with a throwaway database. */
 export async function startBuiltApi(
   env: Record<string, string> = {},
-): Promise<{ baseUrl: string; cpuMs: () => number | null; stop: () => Promise<void> }> {
+): Promise<{ baseUrl: string; databasePath: string; cpuMs: () => number | null; stop: () => Promise<void> }> {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'homeground-bench-'));
   const child: ChildProcess = spawn(
     process.execPath,
@@ -42,6 +42,7 @@ export async function startBuiltApi(
   });
   return {
     baseUrl,
+    databasePath: env.DATABASE ?? path.join(dataDir, 'bench.sqlite'),
     cpuMs: () => processCpuMs(child.pid),
     stop: async () => {
       const exited = new Promise((r) => child.once('exit', r));

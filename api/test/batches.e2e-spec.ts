@@ -94,6 +94,24 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       expect(milkweed.behind).toBeNull();
     });
 
+    // Accept-Language: es (RFC 9110 §12.5.4): step titles, treatments, notes and the work's cautions in
+    // Spanish (shared batch-words-in.ts; Homeground's own wording, from memory); dates and counts unchanged.
+    it('answers My batches in Spanish when asked', async () => {
+      const es = (await get(`${SEASON}/batches`, 'amara').set('Accept-Language', 'es').expect(200)).body;
+      const en = (await get(`${SEASON}/batches`, 'amara').expect(200)).body;
+      type Step = { kind: string; title: string; date: string; detail: string };
+      const steps = (body: { batches: { steps: Step[] }[] }) => body.batches.flatMap((b) => b.steps);
+      expect(steps(es).map((s) => s.date)).toEqual(steps(en).map((s) => s.date));
+      expect(steps(es).find((s) => s.kind === 'sow')?.title).toBe('Siembra');
+      expect(steps(es).find((s) => s.kind === 'pot-up')?.title).toBe('Pasa a maceta');
+      // Every batch outdoors has the frost watch; its detail is the calendar's, said in Spanish.
+      expect(steps(es).find((s) => s.kind === 'frost-watch')?.detail).toMatch(/^Esta es la fecha promedio/);
+      expect(es.supplies.byGrower[0].list.cautions[0]).toMatch(/^La mezcla para macetas seca/);
+      expect(en.supplies.byGrower[0].list.cautions[0]).toMatch(/^Dry potting mix/);
+      const bergamot = es.batches.find((b: BatchAnswer) => b.slug === 'monarda-fistulosa');
+      if (bergamot.behind !== null) expect(bergamot.behind).toMatch(/^Todavía sin sembrar/);
+    });
+
     it('never shows an e-mail address in any batch answer', async () => {
       for (const url of [`${SEASON}/growers`, `${SEASON}/batches`, `${SEASON}/progress`]) {
         expect(JSON.stringify((await get(url, 'organiser').expect(200)).body)).not.toMatch(/@example\.org/);
@@ -250,11 +268,16 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       await t.http.post(logUrl).set(amara).send({ kind: 'lost', count: 5, date, reason: 'slugs' }).expect(201);
       const clientId = '5d0c8a4e-9b1f-4e8a-8a3c-2f7e6b1d9c40';
       const ready = { kind: 'ready', count: 10, date, clientId };
-      await t.http.post(logUrl).set(amara).send(ready).expect(201);
+      const first = (await t.http.post(logUrl).set(amara).send(ready).expect(201)).body;
       const again = (await t.http.post(logUrl).set(amara).send(ready).expect(201)).body;
-      // The same entry sent twice (a retry from a phone) is kept once.
-      expect(again.log.filter((e: { clientId: string | null }) => e.clientId === clientId)).toHaveLength(1);
+      // The same entry sent twice (a retry from a phone) is kept once, and the retry answers that entry.
+      expect(again.entry.id).toBe(first.entry.id);
+      const stored = (await t.http.get(`${SEASON}/batches/${bergamot.id}`).set(amara).expect(200)).body;
+      expect(stored.log.filter((e: { clientId: string | null }) => e.clientId === clientId)).toHaveLength(1);
+      // The answer's running totals agree with the whole log summed again by the batch's GET.
       expect(again.totals).toEqual({ sown: 60, germinated: 40, pottedUp: 0, lost: 5, ready: 10, alive: 35 });
+      expect(stored.totals).toEqual(again.totals);
+      expect(first.totals).toEqual(again.totals);
 
       const progress = (await get(`${SEASON}/progress`, 'organiser').expect(200)).body;
       const row = progress.species.find((s: { slug: string }) => s.slug === 'monarda-fistulosa');
@@ -280,7 +303,8 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       );
       const counts = await t.app.get(BatchesService).readyCountsBySpecies(seasonId);
       expect(counts.find((c) => c.slug === 'monarda-fistulosa')?.readyPlants).toBe(10);
-      expect(counts.find((c) => c.slug === 'rudbeckia-hirta')?.readyPlants).toBe(0);
+      // Showy goldenrod: Juniper's batch, nothing logged ready in the demo (demo-batches.ts).
+      expect(counts.find((c) => c.slug === 'solidago-speciosa')?.readyPlants).toBe(0);
       expect(await t.app.get(BatchesService).readyCountsBySpecies(UNKNOWN)).toEqual([]);
     });
 

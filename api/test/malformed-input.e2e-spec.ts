@@ -617,6 +617,12 @@ const cases: Case[] = [
     field: 'slotId',
   },
   {
+    what: 'a slot to delete whose id is not a UUID',
+    method: 'delete',
+    url: '/api/groups/larkfield-commons-growers/plant-share/slots/1',
+    field: 'slotId',
+  },
+  {
     what: 'a stock of minus one',
     method: 'put',
     url: '/api/groups/larkfield-commons-growers/plant-share/stock',
@@ -1005,6 +1011,7 @@ describe('malformed input on every writing route (e2e)', () => {
     );
     expect([...routes].sort()).toEqual([
       'delete /api/ecoregions/boundaries',
+      'delete /api/groups/:slug/plant-share/slots/:slotId',
       'delete /api/reservations/:id',
       'patch /api/groups/:slug/plant-share',
       'patch /api/users/:id/access',

@@ -67,6 +67,11 @@ describe('recommendations, mixes, quantities and calendar (e2e)', () => {
     expect(reasons(es)).not.toContain('Native to Wisconsin.');
     expect(reasons(es).some((r: string) => /^Crece a pleno sol/.test(r))).toBe(true);
     expect(es.palette.chosen.flatMap((c: Chosen) => c.roles)).not.toContain('middle of the bed');
+    // How this mix is balanced: every rule's detail in Spanish too (mix-words.ts), not English.
+    type Rule = { id: string; detail: string };
+    for (const c of es.palette.constraints as Rule[])
+      expect(c.detail).not.toMatch(/\bThe mix\b|\bsuits?\b|\bspecies\b/);
+    expect(es.palette.constraints.some((c: Rule) => /^La mezcla tiene \d+/.test(c.detail))).toBe(true);
     expect(es.palette.chosen[0].parts.map((p: { points: number }) => p.points)).toEqual(
       en.palette.chosen[0].parts.map((p: { points: number }) => p.points),
     );

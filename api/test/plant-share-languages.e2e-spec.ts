@@ -64,6 +64,30 @@ describe('plant-share and invitation e-mails in the reader language (e2e, demo d
       .query(`SELECT locale FROM share_reservations WHERE email = ?`, ['theo.lindqvist@example.org']);
     expect(row.locale).toBe('es');
     expect(reserved.body.status).toBe('confirmed');
+    // The answer's care sheet too: the caution said in Spanish (shared Spanish caution table), the
+    // record's own sentence after it, marked as English.
+    const [sheet] = reserved.body.careSheet;
+    expect(sheet.sun).toMatch(/^Mejor a pleno sol/);
+    expect(sheet.cautions[0]).toMatch(
+      /^Savia irritante: Su savia puede irritar la piel y los ojos\. En la ficha \(en inglés\): /,
+    );
+    expect(mail!.text).toContain('En la ficha (en inglés)');
+    // The private link read in English later shows the sheet in English.
+    const token = /reservations\/([A-Za-z0-9_-]+)/.exec(mail!.text)![1];
+    const later = (await t.http.get(`/api/reservations/${token}`).set('Accept-Language', 'en').expect(200)).body;
+    expect(later.careSheet[0].sun).toMatch(/^Best in full sun/);
+  });
+
+  it('says the plant share page notes and caution titles in Spanish when asked', async () => {
+    const es = (await t.http.get(PUBLIC).set('Accept-Language', 'es').expect(200)).body;
+    expect(es.notes[0]).toBe(
+      'Las precauciones aparecen con cada planta, como en su ficha: usa guantes con las plantas de savia irritante y lávate las manos después de tocarlas.',
+    );
+    expect(es.notes[1]).toMatch(/^Antes de cavar, llama al 811/);
+    const titles = es.species.flatMap((s: { cautions: { title: string }[] }) => s.cautions.map((c) => c.title));
+    expect(titles).toContain('Savia irritante');
+    const en = (await t.http.get(PUBLIC).expect(200)).body;
+    expect(en.notes[0]).toMatch(/^Cautions are shown with each plant/);
   });
 
   it('confirms an English reservation in English, and a reader with no language of ours gets English', async () => {

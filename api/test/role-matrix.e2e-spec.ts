@@ -208,5 +208,11 @@ describe('role matrix generated from the controllers (e2e, demo data)', () => {
     expect(decisionOf('GET', '/api/users')).toEqual({ kind: 'signed-in', roles: ['admin'] });
     expect(decisionOf('GET', '/api/species')).toEqual({ kind: 'public' });
     expect(decisionOf('POST', '/api/auth/login')).toEqual({ kind: 'public' });
+    // Deleting a pickup slot needs a sign-in; the group's organiser role is checked by the service
+    // (plant-share-changes.e2e-spec.ts calls it as each persona).
+    expect(decisionOf('DELETE', '/api/groups/:slug/plant-share/slots/:slotId')).toEqual({
+      kind: 'signed-in',
+      roles: [],
+    });
   });
 });

@@ -174,4 +174,33 @@ describe('frost warnings and weekly summaries by e-mail (e2e, demo data)', () =>
     });
     expect(await outbox('weekly-summary')).toHaveLength(6);
   });
+
+  // The language is what the database already knows of the grower: Amara reserves plants at the share
+  // with the page in Spanish (Accept-Language: es, RFC 9110 §12.5.4), so her next summaries are Spanish.
+  it('writes a grower’s weekly summary in the language of her latest plant-share reservation', async () => {
+    const PUBLIC = '/api/plant-shares/larkfield-commons-growers';
+    const slotId = (await http.get(PUBLIC).expect(200)).body.slots[3].id;
+    await http
+      .post(`${PUBLIC}/reservations`)
+      .set('Accept-Language', 'es')
+      .send({
+        name: 'Amara Reyes',
+        email: 'Amara.Reyes@example.org',
+        zip: '54665',
+        slotId,
+        lines: [{ speciesSlug: 'asclepias-incarnata', count: 1 }],
+      })
+      .expect(201);
+    const inTwoWeeks = addDays(today(), 14);
+    await app.get(SeasonMailService).runWeekly(inTwoWeeks);
+    // The outbox lists the newest first.
+    const mails = await outbox('weekly-summary');
+    const amara = mails.find((m) => m.to[0] === 'amara.reyes@example.org')!;
+    expect(amara.subject).toBe('Tus lotes esta semana: Larkfield Commons Growers');
+    expect(amara.text).toContain('Hola, Amara Reyes:');
+    // The demo's batch behind plan, in the shared Spanish batch words.
+    expect(amara.text).toMatch(/Wild bergamot: Todavía sin sembrar/);
+    const juniper = mails.find((m) => m.to[0] === 'juniper.okafor@example.org')!;
+    expect(juniper.subject).toBe('Your batches this week: Larkfield Commons Growers');
+  });
 });

@@ -46,6 +46,17 @@ describe('season plans (e2e, demo data)', () => {
     expect(res.body.targets.map((x: { slug: string }) => x.slug)).toEqual(DEMO_TARGETS.map((x) => x.slug));
   });
 
+  // Accept-Language: es (RFC 9110 §12.5.4): the same counts, the cautions said in Spanish (shared seed-list words).
+  it('answers the seed list in Spanish when asked, with the same seeds to sow', async () => {
+    const es = (
+      await t.http.get(`${SEASON}/seed-list`).set(bearer(tokens.member)).set('Accept-Language', 'es').expect(200)
+    ).body;
+    const en = (await t.http.get(`${SEASON}/seed-list`).set(bearer(tokens.member)).expect(200)).body;
+    expect(es.totals).toEqual(en.totals);
+    expect(es.cautions[0]).toMatch(/^Recolecta semilla silvestre solo con permiso/);
+    expect(en.cautions[0]).toMatch(/^Collect wild seed only with the landowner's permission/);
+  });
+
   it('the demo targets are the share list Homeground proposes with the demo settings', async () => {
     const res = await t.http
       .post(`${SEASON}/share-list/propose`)

@@ -22,6 +22,16 @@ describe('sign-in throttling (e2e)', () => {
     });
   });
 
+  // The same refusal in the language the request asks for (Accept-Language, RFC 9110 §12.5.4).
+  it('says the 429 in Spanish when the request asks for Spanish', async () => {
+    const blocked = await t.http
+      .post('/api/auth/login')
+      .set('Accept-Language', 'es')
+      .send({ email: 'mara.ellsworth@example.org', password: 'guess-guess' })
+      .expect(429);
+    expect(blocked.body.message).toBe('Demasiados intentos: espera un minuto y vuelve a probar.');
+  });
+
   // A client must not buy a fresh allowance by making up a forwarding header (TRUST_PROXY unset: no
   // proxy is believed). OWASP Authentication Cheat Sheet: limits keyed on what the client controls fail.
   it('ignores a made-up X-Forwarded-For, so changing it gives no fresh allowance', async () => {

@@ -3,7 +3,8 @@
  * worker and manifest, a demo grower logs seeds sown with the network cut (Playwright's
  * context.setOffline), sees the entry marked "not yet sent", the app shell still opens offline, and
  * when the network returns the entry goes by itself and the API holds it exactly once (read back
- * from the API, outside the page). No request leaves localhost.
+ * from the API, outside the page). After a visit, My batches opens with the network cut from the copy
+ * kept on the device and says so; signing out deletes that copy. No request leaves localhost.
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
@@ -92,6 +93,45 @@ test('a grower logs with the network cut, sees "not yet sent", and the entry rea
     assert.equal(added.length, 1, 'the entry is held exactly once');
     assert.deepEqual({ kind: added[0].kind, count: added[0].count }, { kind: 'sown', count: 48 });
     assert.ok(added[0].clientId, 'sent with the device’s clientId');
+
+    // My batches itself opens with no signal after a visit: a fresh page, the network cut, shows the
+    // batches and the log as last seen (the 48 just sent), and says they are the device's saved copy.
+    await page.reload();
+    await page.getByRole('region', { name: 'Log of Wild bergamot' }).getByText('48').first().waitFor();
+    await context.setOffline(true);
+    const away = await context.newPage();
+    await away.goto(`${app.server.baseUrl}/my-batches`);
+    await away.getByRole('heading', { level: 2, name: 'Wild bergamot' }).waitFor();
+    await away.getByRole('region', { name: 'Log of Wild bergamot' }).getByText('48').first().waitFor();
+    await away.getByText(/No connection: this is your batches as this device saved them on/).waitFor();
+    await screenshot(away, 'offline-my-batches-saved-copy');
+    await away.close();
+
+    // Signing out forgets the saved copies: the next person on this phone cannot read Amara's batches.
+    await context.setOffline(false);
+    const savedCount = () =>
+      page.evaluate(
+        () =>
+          new Promise<number>((resolve, reject) => {
+            const open = indexedDB.open('homeground-saved-answers');
+            open.onerror = () => reject(open.error);
+            open.onsuccess = () => {
+              const count = open.result.transaction('answers').objectStore('answers').count();
+              count.onsuccess = () => resolve(count.result);
+              count.onerror = () => reject(count.error);
+            };
+          }),
+      );
+    assert.ok((await savedCount()) > 0, 'the visit kept a copy on the device');
+    await page.getByRole('button', { name: /Your account/ }).click();
+    await page.getByRole('menuitem', { name: 'Sign out' }).click();
+    // The copy is deleted as the sign-out happens; allow the IndexedDB write a moment to land.
+    let left = await savedCount();
+    for (let i = 0; left > 0 && i < 20; i++) {
+      await new Promise((r) => setTimeout(r, 100));
+      left = await savedCount();
+    }
+    assert.equal(left, 0, 'no saved answer is left on the device after signing out');
 
     assert.deepEqual(offHostRequests, [], 'no request may leave localhost');
     assert.deepEqual(pageErrors, []);

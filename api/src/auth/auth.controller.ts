@@ -20,7 +20,9 @@ import {
   registerRequestSchema,
   type User,
   userResponseSchema,
+  type WordLocale,
 } from '@homeground/shared';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { ZodBody, ZodResponse } from '../common/decorators/zod.decorators.js';
@@ -44,8 +46,12 @@ export class AuthController {
   @Post('auth/register')
   @ZodResponse(registerAcceptedSchema, 202)
   @HttpCode(202)
-  register(@ZodBody(registerRequestSchema) dto: RegisterRequest): Promise<RegisterAccepted> {
-    return this.registration.register(dto);
+  @AnswersInLanguage()
+  register(
+    @ZodBody(registerRequestSchema) dto: RegisterRequest,
+    @RequestLocale() locale: WordLocale,
+  ): Promise<RegisterAccepted> {
+    return this.registration.register(dto, new Date(), locale);
   }
 
   /** The link in the confirmation e-mail: makes the account and signs the person in. */
@@ -55,10 +61,12 @@ export class AuthController {
   @ApiNotFoundResponse({ description: 'The link was already used or is not one we sent' })
   @ApiGoneResponse({ description: 'The link is too old' })
   @ApiConflictResponse({ description: 'The address got an account another way meanwhile' })
+  @AnswersInLanguage()
   confirm(
     @ZodBody(confirmRegistrationRequestSchema) dto: ConfirmRegistrationRequest,
+    @RequestLocale() locale: WordLocale,
   ): Promise<AuthResponse & { next: string | null }> {
-    return this.registration.confirm(dto);
+    return this.registration.confirm(dto, new Date(), locale);
   }
 
   @Public()
@@ -66,8 +74,9 @@ export class AuthController {
   @ZodResponse(authResponseSchema)
   @HttpCode(200)
   @ApiTooManyRequestsResponse({ description: 'Too many sign-in attempts from this address' })
-  login(@ZodBody(loginRequestSchema) dto: LoginRequest): Promise<AuthResponse> {
-    return this.auth.login(dto);
+  @AnswersInLanguage()
+  login(@ZodBody(loginRequestSchema) dto: LoginRequest, @RequestLocale() locale: WordLocale): Promise<AuthResponse> {
+    return this.auth.login(dto, locale);
   }
 
   @Get('me')

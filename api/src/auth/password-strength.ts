@@ -1,6 +1,8 @@
 import { ZxcvbnFactory } from '@zxcvbn-ts/core';
 import * as common from '@zxcvbn-ts/language-common';
 import * as english from '@zxcvbn-ts/language-en';
+import type { WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { badRequest } from '../common/validation/bad-request.js';
 
 /** zxcvbn with its common-password, keyboard-pattern and English word lists, built once. */
@@ -30,19 +32,15 @@ export function assertStrongPassword(
   password: string,
   person: { email: string; displayName?: string },
   field = 'password',
+  locale: WordLocale = 'en',
 ): void {
+  const say = apiWords(locale);
   const localPart = person.email.split('@')[0] ?? '';
   const personal = [localPart, ...(person.displayName ? [person.displayName] : []), ...SERVICE_WORDS]
     .flatMap((p) => [letters(p), ...p.split(/[\s._+-]+/).map(letters)])
     .filter((p) => p.length >= 4);
   const plain = letters(password);
-  if (personal.some((p) => plain.includes(p)))
-    throw badRequest([{ field, message: 'must not contain your e-mail name, your name or "Homeground"' }]);
+  if (personal.some((p) => plain.includes(p))) throw badRequest([{ field, message: say('auth.passwordPersonal') }]);
   if (estimator.check(password, personal).score < MIN_SCORE)
-    throw badRequest([
-      {
-        field,
-        message: 'is too easy to guess (a common password or a simple pattern): try three or four unrelated words',
-      },
-    ]);
+    throw badRequest([{ field, message: say('auth.passwordWeak') }]);
 }

@@ -1,34 +1,42 @@
+import type { WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { renderEmail } from '../mail/templates/email-layout.js';
 
 type Rendered = { subject: string; text: string; html: string };
 
-/** The link that finishes a sign-up: the account exists only once it is opened. */
-export function confirmRegistrationEmail(input: { displayName: string; link: string; hours: number }): Rendered {
+/** The link that finishes a sign-up, in the language of the sign-up page: the account exists only once it is opened. */
+export function confirmRegistrationEmail(input: {
+  displayName: string;
+  link: string;
+  hours: number;
+  locale?: WordLocale;
+}): Rendered {
+  const locale = input.locale ?? 'en';
+  const say = apiWords(locale);
   const { text, html } = renderEmail({
-    greeting: `Hello ${input.displayName},`,
-    paragraphs: [
-      'Thank you for joining Homeground. Open the link below to confirm this is your address, and your account is ready.',
-      `The link works for ${input.hours} hours. If you did not sign up, you can simply ignore this message: no account is made.`,
-    ],
-    action: { label: 'Confirm my address', url: input.link },
-    footer: 'You got this e-mail because someone entered your address on the Homeground sign-up page.',
+    locale,
+    greeting: say('mail.greeting', { name: input.displayName }),
+    paragraphs: [say('auth.confirmMail.thanks'), say('auth.confirmMail.hours', { hours: input.hours })],
+    action: { label: say('auth.confirmMail.action'), url: input.link },
+    footer: say('auth.mailFooter'),
   });
-  return { subject: 'Confirm your address for Homeground', text, html };
+  return { subject: say('auth.confirmMail.subject'), text, html };
 }
 
 /**
  * Sent instead of a confirmation when the address already has an account, so the sign-up page itself
- * never says who has one; the owner learns it here, where only they can read it.
+ * never says who has one; the owner learns it here, where only they can read it. In the language of
+ * the sign-up request (whoever made it), which is all that is known at send time.
  */
-export function alreadyRegisteredEmail(input: { signInLink: string }): Rendered {
+export function alreadyRegisteredEmail(input: { signInLink: string; locale?: WordLocale }): Rendered {
+  const locale = input.locale ?? 'en';
+  const say = apiWords(locale);
   const { text, html } = renderEmail({
-    greeting: 'Hello,',
-    paragraphs: [
-      'Someone asked to make a Homeground account with this address, but you already have one, so nothing has changed.',
-      'If it was you, sign in with your password. If it was not, you can ignore this message: your account is as it was.',
-    ],
-    action: { label: 'Sign in', url: input.signInLink },
-    footer: 'You got this e-mail because someone entered your address on the Homeground sign-up page.',
+    locale,
+    greeting: say('mail.greetingNoName'),
+    paragraphs: [say('auth.alreadyMail.someone'), say('auth.alreadyMail.ifYou')],
+    action: { label: say('auth.alreadyMail.action'), url: input.signInLink },
+    footer: say('auth.mailFooter'),
   });
-  return { subject: 'You already have a Homeground account', text, html };
+  return { subject: say('auth.alreadyMail.subject'), text, html };
 }

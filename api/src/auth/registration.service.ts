@@ -7,8 +7,10 @@ import {
   type RegisterAccepted,
   type RegisterRequest,
   REGISTRATION_HOURS,
+  type WordLocale,
 } from '@homeground/shared';
 import { DataSource, LessThan, Repository } from 'typeorm';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { MailService } from '../mail/mail.service.js';
 import { UsersService } from '../users/users.service.js';
@@ -38,15 +40,16 @@ export class RegistrationService {
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
-  async register(dto: RegisterRequest, now = new Date()): Promise<RegisterAccepted> {
-    assertStrongPassword(dto.password, dto);
+  /** `locale` is the sign-up page's language: its errors and the e-mail sent are in it; nothing stores it. */
+  async register(dto: RegisterRequest, now = new Date(), locale: WordLocale = 'en'): Promise<RegisterAccepted> {
+    assertStrongPassword(dto.password, dto, 'password', locale);
     const email = dto.email.toLowerCase();
     // Hashed on both paths, so a known address takes as long to answer as a new one.
     const passwordHash = await hashPassword(dto.password);
     // Expired sign-ups hold a name, an address and a password hash: keep them no longer than the link works.
     await this.pending.delete({ expiresAt: LessThan(now) });
     if (await this.users.findByEmail(email)) {
-      const message = alreadyRegisteredEmail({ signInLink: `${this.config.publicUrl}/sign-in` });
+      const message = alreadyRegisteredEmail({ signInLink: `${this.config.publicUrl}/sign-in`, locale });
       await this.mail.send({ to: email, ...message, kind: 'registration' });
     } else {
       const token = randomBytes(32).toString('base64url');
@@ -64,7 +67,12 @@ export class RegistrationService {
         });
       });
       const link = `${this.config.publicUrl}/register/confirm/${token}`;
-      const message = confirmRegistrationEmail({ displayName: dto.displayName, link, hours: REGISTRATION_HOURS });
+      const message = confirmRegistrationEmail({
+        displayName: dto.displayName,
+        link,
+        hours: REGISTRATION_HOURS,
+        locale,
+      });
       await this.mail.send({ to: email, ...message, kind: 'registration' });
       if (this.mail.isLocal && !this.config.isProduction) {
         // Development only: the local outbox is for admins, so a person trying the app finds their link here.
@@ -75,20 +83,22 @@ export class RegistrationService {
   }
 
   /** Opens the e-mailed link: makes the account, forgets the pending row, signs the person in. */
-  async confirm(req: ConfirmRegistrationRequest, now = new Date()): Promise<AuthResponse & { next: string | null }> {
+  async confirm(
+    req: ConfirmRegistrationRequest,
+    now = new Date(),
+    locale: WordLocale = 'en',
+  ): Promise<AuthResponse & { next: string | null }> {
+    const say = apiWords(locale);
     const row = await this.pending.findOne({ where: { tokenHash: hashToken(req.token) } });
-    if (!row)
-      throw new NotFoundException(
-        'This confirmation link was already used or is not one we sent: sign in, or sign up again.',
-      );
+    if (!row) throw new NotFoundException(say('auth.linkUnknown'));
     if (row.expiresAt.getTime() <= now.getTime()) {
       await this.pending.delete({ id: row.id });
-      throw new GoneException(`This confirmation link is more than ${REGISTRATION_HOURS} hours old: sign up again.`);
+      throw new GoneException(say('auth.linkOld', { hours: REGISTRATION_HOURS }));
     }
     if (await this.users.findByEmail(row.email)) {
       // Someone joined with this address another way (an invitation) since the link was sent.
       await this.pending.delete({ id: row.id });
-      throw new ConflictException('This address already has an account: sign in instead.');
+      throw new ConflictException(say('auth.alreadyHasAccount'));
     }
     const user = await this.users.create({
       email: row.email,

@@ -1,7 +1,8 @@
 import { createHash } from 'node:crypto';
 import { HttpException, HttpStatus, Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import type { ApiError } from '@homeground/shared';
+import type { ApiError, WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { IsNull, Not, Repository } from 'typeorm';
 import { SignInFailureRow } from './sign-in-failure.entity.js';
 
@@ -24,14 +25,14 @@ export class SignInBackoffService {
   constructor(@InjectRepository(SignInFailureRow) private readonly rows: Repository<SignInFailureRow>) {}
 
   /** Throws 429 with Retry-After while the address is held back. */
-  async assertAllowed(email: string, now = new Date()): Promise<void> {
+  async assertAllowed(email: string, now = new Date(), locale: WordLocale = 'en'): Promise<void> {
     const row = await this.rows.findOneBy({ emailKey: keyFor(email) });
     if (!row?.lockedUntil || row.lockedUntil <= now) return;
     const seconds = Math.ceil((row.lockedUntil.getTime() - now.getTime()) / 1000);
     const body: ApiError & { retryAfterSeconds: number } = {
       statusCode: 429,
       error: 'Too Many Requests',
-      message: `Too many wrong passwords for this e-mail address: wait ${Math.ceil(seconds / 60)} minute(s) and try again.`,
+      message: apiWords(locale)('auth.tooManyWrong', { count: Math.ceil(seconds / 60) }),
       retryAfterSeconds: seconds,
     };
     throw new HttpException(body, HttpStatus.TOO_MANY_REQUESTS);

@@ -1,4 +1,6 @@
 import type { ApiError } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
+import { negotiateLocale } from '../common/i18n/negotiate-locale.js';
 import type { RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import type { AppConfig } from '../config/app-config.js';
@@ -16,11 +18,12 @@ export function signInRateLimit(config: Pick<AppConfig, 'loginThrottle'>, multip
     legacyHeaders: false,
     // A forwarding header from an untrusted client is expected and ignored (see TRUST_PROXY), not a mistake.
     validate: { xForwardedForHeader: false },
-    handler: (_req, res) => {
+    // Said in the language the request asks for (Accept-Language), as every other sign-in answer.
+    handler: (req, res) => {
       const body: ApiError = {
         statusCode: 429,
         error: 'Too Many Requests',
-        message: 'Too many attempts: wait a minute and try again.',
+        message: apiWords(negotiateLocale(req.headers['accept-language']))('auth.tooManyAttempts'),
       };
       res.status(429).json(body);
     },

@@ -2,15 +2,18 @@ import {
   addDays,
   batchForecast,
   batchSchedule,
-  CAUTION_WORDS,
+  batchWordsFor,
   frostWarning,
   logTotals,
   seedsToSow,
   UNIT_OF,
   unitsFor,
   type Batch,
+  type BatchLogEntry,
   type BatchSchedule,
   type Species,
+  type WordLocale,
+  wordsFor,
 } from '@homeground/shared';
 import type { BatchLogEntryRow } from './batch-log-entry.entity.js';
 import type { BatchRow } from './batch.entity.js';
@@ -23,6 +26,8 @@ export interface BatchViewContext {
   /** The target's tested germination rate, if the organiser gave one. */
   targetGerminationPct: number | null;
   today: string;
+  /** The reader's language for titles, treatments, notes and cautions (English when absent). */
+  locale?: WordLocale;
 }
 
 /**
@@ -48,6 +53,7 @@ export function toBatch(row: BatchRow, log: readonly BatchLogEntryRow[], c: Batc
         lastFrost: c.season.lastFrost,
         plantShareDate: c.season.plantShareDate,
         today: c.today,
+        locale: c.locale,
       })
     : unknownSpeciesSchedule(row, c);
   const potUp = schedule.steps.find((s) => s.kind === 'pot-up')?.date;
@@ -77,18 +83,13 @@ export function toBatch(row: BatchRow, log: readonly BatchLogEntryRow[], c: Batc
       lastFrost: c.season.lastFrost,
       today: c.today,
       seedlingsUp: totals.alive > 0,
+      locale: c.locale,
     }),
-    cautions: (c.species?.cautions ?? []).map((x) => ({ title: CAUTION_WORDS[x.kind].title, text: x.text })),
-    log: entries.map((e) => ({
-      id: e.id,
-      kind: e.kind,
-      count: e.count,
-      date: e.date,
-      reason: e.reason,
-      note: e.note,
-      clientId: e.clientId,
-      createdAt: e.createdAt.toISOString(),
+    cautions: (c.species?.cautions ?? []).map((x) => ({
+      title: wordsFor(c.locale ?? 'en').caution[x.kind].title,
+      text: x.text,
     })),
+    log: entries.map(toLogEntry),
     totals,
     forecast: batchForecast({
       seedsToSow: seeds,
@@ -98,6 +99,20 @@ export function toBatch(row: BatchRow, log: readonly BatchLogEntryRow[], c: Batc
       readyAfterShare: schedule.readyAfterShare,
       stillSprouting: potUp === undefined || c.today < potUp,
     }),
+  };
+}
+
+/** One stored log line as the API answers it. */
+export function toLogEntry(e: BatchLogEntryRow): BatchLogEntry {
+  return {
+    id: e.id,
+    kind: e.kind,
+    count: e.count,
+    date: e.date,
+    reason: e.reason,
+    note: e.note,
+    clientId: e.clientId,
+    createdAt: e.createdAt.toISOString(),
   };
 }
 
@@ -118,17 +133,15 @@ function behindWords(
       lastFrost: c.season.lastFrost,
       plantShareDate: c.season.plantShareDate,
       today: addDays(c.season.lastFrost, -USUAL_PLAN_DAYS_BEFORE_FROST),
+      locale: c.locale,
     });
     const first = usual.steps.find(
       (s) => s.kind === 'start-warm' || s.kind === 'start-stratifying' || s.kind === 'sow',
     );
-    return first && first.date < c.today
-      ? `Not sown yet: the usual start (${first.title.toLowerCase()}) was ${first.date}. Start as soon as you can.`
-      : null;
+    return first && first.date < c.today ? batchWordsFor(c.locale).notSownYet(first.title, first.date) : null;
   }
   const sprouts = schedule.steps.find((s) => s.kind === 'pot-up');
-  if (germinated === 0 && sprouts && sprouts.date < c.today)
-    return `Nothing logged as up yet, though seedlings were expected before ${sprouts.date}.`;
+  if (germinated === 0 && sprouts && sprouts.date < c.today) return batchWordsFor(c.locale).nothingUpYet(sprouts.date);
   return null;
 }
 
@@ -140,6 +153,6 @@ function unknownSpeciesSchedule(row: BatchRow, c: BatchViewContext): BatchSchedu
     readyAfterShare: false,
     steps: [],
     treatments: [],
-    warnings: [`"${row.slug}" is no longer in the catalogue, so this batch has no dates.`],
+    warnings: [batchWordsFor(c.locale).noLongerInCatalogue(row.slug)],
   };
 }

@@ -1,10 +1,12 @@
 import { Controller, Get, Header, HttpCode, Post, Put } from '@nestjs/common';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { ApiTags } from '@nestjs/swagger';
 import {
   batchSchema,
   batchSplitProposalSchema,
   batchSplitRequestSchema,
   growerSetupRequestSchema,
+  logEntryAnswerSchema,
   logEntryRequestSchema,
   seasonBatchesSchema,
   seasonGrowerListSchema,
@@ -18,10 +20,12 @@ import {
   type BatchSplitProposalAnswer,
   type BatchSplitRequest,
   type GrowerSetupRequest,
+  type LogEntryAnswer,
   type LogEntryRequest,
   type SeasonBatches,
   type SeasonGrower,
   type SeasonProgress,
+  type WordLocale,
 } from '@homeground/shared';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
@@ -89,12 +93,14 @@ export class BatchesController {
 
   /** Batches with dates, logs and supplies: all for organisers, their own for a grower. */
   @Get('batches')
+  @AnswersInLanguage()
   @ZodResponse(seasonBatchesSchema)
   list(
     @ZodParam('slug', slugParamSchema) slug: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<SeasonBatches> {
-    return this.batches.list(slug, user, today());
+    return this.batches.list(slug, user, today(), locale);
   }
 
   /** The caller's own batches as an iCalendar file, each step an all-day event. */
@@ -110,24 +116,29 @@ export class BatchesController {
   }
 
   @Get('batches/:id')
+  @AnswersInLanguage()
   @ZodResponse(batchSchema)
   get(
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodParam('id', uuidParamSchema) id: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<Batch> {
-    return this.batches.get(slug, user, id, today());
+    return this.batches.get(slug, user, id, today(), locale);
   }
 
-  /** Adds an entry to the batch log (the batch's grower only); answers the batch as it now stands. */
+  /**
+   * Adds an entry to the batch log (the batch's grower only); answers the entry as stored and the
+   * batch's totals after it (GET the batch for its dates and forecast).
+   */
   @Post('batches/:id/log')
-  @ZodResponse(batchSchema, 201)
+  @ZodResponse(logEntryAnswerSchema, 201)
   log(
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodParam('id', uuidParamSchema) id: string,
     @ZodBody(logEntryRequestSchema) body: LogEntryRequest,
     @CurrentUser() user: AuthenticatedUser,
-  ): Promise<Batch> {
+  ): Promise<LogEntryAnswer> {
     return this.batches.log(slug, user, id, body, today());
   }
 

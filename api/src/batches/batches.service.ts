@@ -6,6 +6,10 @@ import {
   type GerminationBatch,
   logEntryProblems,
   logTotals,
+  logTotalsAfter,
+  type LogEntryAnswer,
+  type LogKind,
+  type LogTotals,
   proposeBatchSplit,
   sowMoreNudge,
   supplyList,
@@ -22,8 +26,9 @@ import {
   type SeasonGrower,
   type SeasonProgress,
   type SplitProposalRequest,
+  type WordLocale,
 } from '@homeground/shared';
-import { DataSource, In, Repository } from 'typeorm';
+import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { runSql } from '../common/database/dialect.js';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
@@ -31,7 +36,7 @@ import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SeasonsService, type SeasonContext } from '../seasons/seasons.service.js';
 import { BatchLogEntryRow } from './batch-log-entry.entity.js';
-import { toBatch } from './batch-view.js';
+import { toBatch, toLogEntry } from './batch-view.js';
 import { BatchRow } from './batch.entity.js';
 import { SeasonGrowerRow } from './season-grower.entity.js';
 import { seasonProgress } from './season-progress.js';
@@ -191,9 +196,10 @@ export class BatchesService {
   }
 
   /** The season's batches with supplies: all for organisers, their own for a grower. */
-  async list(slug: string, user: AuthenticatedUser, today: string): Promise<SeasonBatches> {
+  async list(slug: string, user: AuthenticatedUser, today: string, locale: WordLocale = 'en'): Promise<SeasonBatches> {
     const c = await this.growerOrOrganiser(slug, user);
-    const batches = await this.batchesOf(slug, user, c, today, c.role === 'organiser' ? undefined : user.id);
+    const growerId = c.role === 'organiser' ? undefined : user.id;
+    const batches = await this.batchesOf(slug, user, c, today, growerId, undefined, locale);
     const byGrower = new Map<string, Batch[]>();
     for (const b of batches) byGrower.set(b.growerId, [...(byGrower.get(b.growerId) ?? []), b]);
     const supplies = (list: Batch[]) =>
@@ -204,6 +210,7 @@ export class BatchesService {
           units: b.units,
           fridge: b.treatments.some((t) => t.where === 'refrigerator'),
         })),
+        locale,
       );
     return {
       groupSlug: c.group.slug,
@@ -228,28 +235,47 @@ export class BatchesService {
     return batchesToIcs(mine, { today, planId: `batches-${c.season.year}` });
   }
 
-  async get(slug: string, user: AuthenticatedUser, id: string, today: string): Promise<Batch> {
+  async get(
+    slug: string,
+    user: AuthenticatedUser,
+    id: string,
+    today: string,
+    locale: WordLocale = 'en',
+  ): Promise<Batch> {
     const c = await this.growerOrOrganiser(slug, user);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
     if (!row) throw new NotFoundException('No such batch in this season.');
     if (c.role !== 'organiser' && row.growerId !== user.id)
       throw new ForbiddenException('This batch belongs to another grower.');
-    return (await this.batchesOf(slug, user, c, today, undefined, [row]))[0];
+    return (await this.batchesOf(slug, user, c, today, undefined, [row], locale))[0];
   }
 
-  /** Adds a log entry to the grower's own batch; an entry sent again with the same clientId is kept once. */
-  async log(slug: string, user: AuthenticatedUser, id: string, req: LogEntryRequest, today: string): Promise<Batch> {
+  /**
+   * Adds a log entry to the grower's own batch; an entry sent again with the same clientId is kept
+   * once. A write reads only what the new entry needs, never the log itself: the clientId through its
+   * unique index and the totals as one SUM per kind, so its cost does not grow with the log's length
+   * in JavaScript, and the answer is the entry and the totals, not the whole batch.
+   */
+  async log(
+    slug: string,
+    user: AuthenticatedUser,
+    id: string,
+    req: LogEntryRequest,
+    today: string,
+  ): Promise<LogEntryAnswer> {
     const c = await this.growerOrOrganiser(slug, user);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
     if (!row) throw new NotFoundException('No such batch in this season.');
     if (row.growerId !== user.id) throw new ForbiddenException('Only the grower of this batch keeps its log.');
-    await this.db.transaction(async (tx) => {
-      if (req.clientId && (await tx.exists(BatchLogEntryRow, { where: { batchId: id, clientId: req.clientId } })))
-        return;
-      const totals = logTotals(await tx.find(BatchLogEntryRow, { where: { batchId: id } }));
-      const problems = logEntryProblems(totals, req, today);
+    return this.db.transaction(async (tx) => {
+      const sent = req.clientId
+        ? await tx.findOne(BatchLogEntryRow, { where: { batchId: id, clientId: req.clientId } })
+        : null;
+      if (sent) return { batchId: id, entry: toLogEntry(sent), totals: await this.totalsOf(tx, id) };
+      const before = await this.totalsOf(tx, id);
+      const problems = logEntryProblems(before, req, today);
       if (problems.length) throw badRequest(problems);
-      await tx.save(
+      const saved = await tx.save(
         BatchLogEntryRow,
         tx.create(BatchLogEntryRow, {
           batchId: id,
@@ -262,8 +288,20 @@ export class BatchesService {
           createdBy: user.id,
         }),
       );
+      return { batchId: id, entry: toLogEntry(saved), totals: logTotalsAfter(before, req) };
     });
-    return (await this.batchesOf(slug, user, c, today, undefined, [row]))[0];
+  }
+
+  /** A batch's totals from one aggregate per kind (the entries themselves are not loaded). */
+  private async totalsOf(tx: EntityManager, batchId: string): Promise<LogTotals> {
+    const sums = await tx
+      .createQueryBuilder(BatchLogEntryRow, 'e')
+      .select('e.kind', 'kind')
+      .addSelect('SUM(e.count)', 'count')
+      .where('e.batchId = :batchId', { batchId })
+      .groupBy('e.kind')
+      .getRawMany<{ kind: LogKind; count: number | string }>();
+    return logTotals(sums.map((s) => ({ kind: s.kind, count: Number(s.count) })));
   }
 
   /** The organiser's progress and ready forecast per species and grower. */
@@ -369,6 +407,7 @@ export class BatchesService {
     today: string,
     growerId?: string,
     only?: BatchRow[],
+    locale: WordLocale = 'en',
   ): Promise<Batch[]> {
     const rows =
       only ??
@@ -389,6 +428,7 @@ export class BatchesService {
           season: c.season,
           targetGerminationPct: c.targets.find((t) => t.slug === row.slug)?.germinationRatePct ?? null,
           today,
+          locale,
         },
       ),
     );

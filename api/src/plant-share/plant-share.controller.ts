@@ -1,4 +1,4 @@
-import { Controller, Get, Header, HttpCode, Patch, Post, Put } from '@nestjs/common';
+import { Controller, Delete, Get, Header, HttpCode, Patch, Post, Put } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   type AddStockRequest,
@@ -90,6 +90,17 @@ export class PlantShareController {
     @CurrentUser() user: AuthenticatedUser,
   ): Promise<PlantShare> {
     return this.shares.editSlot(slug, user, slotId, body);
+  }
+
+  /** Deletes a pickup slot nobody has reserved in (409 saying how many reservations it has otherwise). */
+  @Delete('slots/:slotId')
+  @ZodResponse(plantShareSchema)
+  deleteSlot(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @ZodParam('slotId', uuidParamSchema) slotId: string,
+    @CurrentUser() user: AuthenticatedUser,
+  ): Promise<PlantShare> {
+    return this.shares.deleteSlot(slug, user, slotId);
   }
 
   /** The printable pickup list of one slot: households, their plants, check boxes. */

@@ -13,6 +13,7 @@ import {
   type PickupSlotRequest,
   type PlantShare,
   type SetStockRequest,
+  type SharePlace,
   seasonReport,
   type ShareReport,
   shareReportToCsv,
@@ -31,6 +32,9 @@ import { BatchesService } from '../batches/batches.service.js';
 import { type SeasonPlan, SeasonsService } from '../seasons/seasons.service.js';
 import { Clock } from './clock.js';
 import { ShareDb } from './share-db.js';
+import { pickupChangeEmail, type PickupChange } from './share-emails.js';
+import { ShareMailQueue } from './share-mail-queue.js';
+import { newToken } from './share-tokens.js';
 import { type Released, ShareLedger, type WaitlistOfferMade } from './share-ledger.js';
 import type { LineRow, ReservationRow, SlotRow } from './share-rows.js';
 import { ShareViews } from './share-views.js';
@@ -47,6 +51,7 @@ export class PlantShareService {
     private readonly ctx: MixContextService,
     private readonly clock: Clock,
     private readonly batches: BatchesService,
+    private readonly mail: ShareMailQueue,
   ) {}
 
   /**
@@ -156,7 +161,16 @@ export class PlantShareService {
       if (started.length)
         throw badRequest([{ field: 'date', message: 'cannot move: a pickup slot on the old day has started' }]);
     }
-    this.db.atomically(() => {
+    // What every taker with a live reservation is told of: a new day or place (limits and the rest are not theirs).
+    const before = this.views.place(share);
+    const change: PickupChange = {
+      ...(moving && { day: { before: share.share_date, now: req.date! } }),
+      ...(req.place &&
+        !samePlace(before, req.place) && {
+          place: { before, now: req.place },
+        }),
+    };
+    const told = this.db.atomically(() => {
       if (moving) {
         const booked = this.db.get<{ n: number }>(
           `SELECT COUNT(*) AS n FROM share_reservations WHERE share_id = ? AND status = 'confirmed'`,
@@ -195,7 +209,9 @@ export class PlantShareService {
         now.toISOString(),
         share.id,
       );
+      return change.day || change.place ? this.newLinks(share.id, null) : [];
     });
+    this.mailChange(group, told, change);
     return this.views.organiserView(group, this.views.shareById(share.id));
   }
 
@@ -223,7 +239,7 @@ export class PlantShareService {
     const share = this.views.requireShare(group);
     const problems = slotProblems(req, share.share_date, this.clock.now(), '');
     if (problems.length) throw badRequest(problems);
-    this.db.atomically(() => {
+    const { slot, told } = this.db.atomically(() => {
       const slot = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ? AND share_id = ?', slotId, share.id);
       if (!slot) throw new NotFoundException('No such pickup slot in this share.');
       // Never below the households already booked: they were promised their place.
@@ -245,8 +261,81 @@ export class PlantShareService {
             message: `must be at least ${slot.booked}: that many households are booked in this slot`,
           },
         ]);
+      const moved = Date.parse(req.start) !== slot.starts_at_ms || Date.parse(req.end) !== slot.ends_at_ms;
+      return { slot, told: moved ? this.newLinks(share.id, slotId) : [] };
+    });
+    this.mailChange(group, told, {
+      slot: { before: { start: slot.starts_at, end: slot.ends_at }, now: { start: req.start, end: req.end } },
     });
     return this.views.organiserView(group, share);
+  }
+
+  /**
+   * Deletes a pickup slot nobody has reserved in. A slot with reservations (live, picked up or
+   * cancelled) stays: households were promised it and the report counts it (409 saying how many).
+   */
+  async deleteSlot(slug: string, user: AuthenticatedUser, slotId: string): Promise<PlantShare> {
+    const group = await this.managed(slug, user);
+    const share = this.views.requireShare(group);
+    this.db.atomically(() => {
+      const slot = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ? AND share_id = ?', slotId, share.id);
+      if (!slot) throw new NotFoundException('No such pickup slot in this share.');
+      const held = this.db.get<{ n: number; live: number }>(
+        `SELECT COUNT(*) AS n, COALESCE(SUM(status = 'confirmed'), 0) AS live FROM share_reservations WHERE slot_id = ?`,
+        slotId,
+      )!;
+      const n = Number(held.n);
+      if (n > 0)
+        throw new ConflictException({
+          message:
+            `This pickup slot has ${n} ${n === 1 ? 'reservation' : 'reservations'} (${Number(held.live)} still to pick up), ` +
+            'so it cannot be deleted: households were promised it. Change its times or households instead.',
+          fields: [{ field: 'slotId', message: 'has reservations' }],
+        });
+      this.db.run('DELETE FROM share_slots WHERE id = ?', slotId);
+    });
+    return this.views.organiserView(group, share);
+  }
+
+  /**
+   * Gives each live reservation of the share (or of one slot) a new private link, inside the caller's
+   * transaction: only a hash of a link is kept, so a change e-mail can carry a working link only by
+   * making a new one (the e-mail says it replaces the earlier one).
+   */
+  private newLinks(shareId: string, slotId: string | null): { row: ReservationRow; token: string }[] {
+    const rows = this.db.all<ReservationRow>(
+      `SELECT * FROM share_reservations WHERE share_id = ? AND status = 'confirmed'${slotId ? ' AND slot_id = ?' : ''}`,
+      ...(slotId ? [shareId, slotId] : [shareId]),
+    );
+    return rows.map((row) => {
+      const { token, hash } = newToken();
+      this.db.run('UPDATE share_reservations SET token_hash = ? WHERE id = ?', hash, row.id);
+      return { row, token };
+    });
+  }
+
+  /** Queues the change e-mail to each taker told, in their own language, after the change is written. */
+  private mailChange(group: Group, told: { row: ReservationRow; token: string }[], change: PickupChange): void {
+    for (const { row, token } of told) {
+      if (!row.email || !row.name) continue; // names and e-mails already purged after the share
+      const email = row.email;
+      const name = row.name;
+      this.mail.send(() => ({
+        to: email,
+        ...pickupChangeEmail({
+          locale: row.locale,
+          name,
+          groupName: group.name,
+          change,
+          lines: this.db
+            .all<LineRow>('SELECT slug, count FROM share_reservation_lines WHERE reservation_id = ?', row.id)
+            .map((l) => ({ commonName: this.ctx.get(l.slug)?.commonNames[0] ?? l.slug, count: l.count })),
+          link: `${this.views.publicUrl()}/plant-share/reservations/${token}`,
+        }),
+        kind: 'plant-share-change',
+        groupId: group.id,
+      }));
+    }
   }
 
   /** Sets the plants still on offer of each species listed; an increase goes to the waitlist first. */
@@ -505,6 +594,11 @@ export class PlantShareService {
       throw new ForbiddenException('Only an organiser of this group can run its plant share and see its takers.');
     return group;
   }
+}
+
+/** Whether a place edit changes what a taker needs to know (name, address or directions). */
+function samePlace(a: SharePlace, b: SharePlace): boolean {
+  return a.name === b.name && a.address === b.address && (a.directions ?? '') === (b.directions ?? '');
 }
 
 /** A slot must be on the share's day (by the organiser's own clock) and not have started. */

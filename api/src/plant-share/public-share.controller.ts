@@ -55,12 +55,14 @@ export class PublicShareController {
 
   /** What is on offer, with plants left and cautions; `sun` and `moisture` rank it by fit to the taker's yard. */
   @Get('plant-shares/:slug')
+  @AnswersInLanguage()
   @ZodResponse(publicPlantShareSchema)
   share(
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodQuery(shareFitQuerySchema) yard: ShareFitQuery,
+    @RequestLocale() locale: WordLocale,
   ): Promise<PublicPlantShare> {
-    return this.reservations.publicShare(slug, yard);
+    return this.reservations.publicShare(slug, yard, locale);
   }
 
   @Post('plant-shares/:slug/reservations')
@@ -88,10 +90,14 @@ export class PublicShareController {
   }
 
   @Get('reservations/:token')
+  @AnswersInLanguage()
   @forgedDoc
   @ZodResponse(takerReservationSchema)
-  get(@ZodParam('token', reservationTokenSchema) token: string): Promise<TakerReservation> {
-    return this.reservations.byToken(token);
+  get(
+    @ZodParam('token', reservationTokenSchema) token: string,
+    @RequestLocale() locale: WordLocale,
+  ): Promise<TakerReservation> {
+    return this.reservations.byToken(token, locale);
   }
 
   @Put('reservations/:token')

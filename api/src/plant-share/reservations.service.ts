@@ -19,12 +19,12 @@ import {
   type TakerReservation,
   type WaitlistJoined,
   type WaitlistOfferView,
-  bloomWords,
-  CAUTION_WORDS,
   wildlifeSummary,
+  wordsFor,
   type WordLocale,
 } from '@homeground/shared';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { PlacesService } from '../places/places.service.js';
@@ -38,11 +38,11 @@ import type { LineRow, ReservationRow, ShareRow, SlotRow, StockRow, WaitlistRow 
 import { hashToken, newToken } from './share-tokens.js';
 import { ShareViews } from './share-views.js';
 
-/** General words under the list of plants: the usual cautions, and local rules first. */
-const SHARE_NOTES = [
-  'Cautions are shown with each plant, as on its fact card: wear gloves for plants with irritating sap and wash your hands after handling them.',
-  'Before you dig, call 811 so buried lines are marked; your town’s rules for planting by streets, sidewalks and drains come first.',
-];
+/** General words under the list of plants, in the reader's language: the usual cautions, and local rules first. */
+function shareNotes(locale: WordLocale): string[] {
+  const say = apiWords(locale);
+  return [say('share.notes.cautions'), say('share.notes.dig')];
+}
 
 /** The taker's side: the public page, reservations by private link, and the waitlist. */
 @Injectable()
@@ -60,7 +60,7 @@ export class ReservationsService {
   ) {}
 
   /** The group's share as anyone sees it; with a yard, ranked by how well each plant fits it. */
-  async publicShare(slug: string, yard: ShareFitQuery): Promise<PublicPlantShare> {
+  async publicShare(slug: string, yard: ShareFitQuery, locale: WordLocale = 'en'): Promise<PublicPlantShare> {
     const group = await this.views.group(slug);
     const share = this.views.requireShare(group);
     const nowMs = this.clock.now().getTime();
@@ -86,14 +86,18 @@ export class ReservationsService {
         growthForm: record.growthForm,
         heightCm: { min: record.heightCm.min, max: record.heightCm.max },
         bloomMonths: record.bloomMonths,
-        bloomWords: bloomWords(record.bloomMonths),
+        bloomWords: wordsFor(locale).bloomWords(record.bloomMonths),
         flowerColours: record.flowerColours,
         sun: record.sun,
         moisture: record.moisture,
         isMilkweed: isNativeMilkweed(record),
         remaining: s.remaining,
         wildlife: { caterpillars: w.caterpillars, bees: w.bees, monarchs: w.monarchs, birds: w.birds },
-        cautions: record.cautions.map((c) => ({ kind: c.kind, title: CAUTION_WORDS[c.kind].title, text: c.text })),
+        cautions: record.cautions.map((c) => ({
+          kind: c.kind,
+          title: wordsFor(locale).caution[c.kind].title,
+          text: c.text,
+        })),
         fit: fits?.get(s.slug) ?? null,
       };
     });
@@ -116,7 +120,7 @@ export class ReservationsService {
       })),
       species,
       yard: site?.yard ?? null,
-      notes: SHARE_NOTES,
+      notes: shareNotes(locale),
       whatToBring: share.what_to_bring,
     };
   }
@@ -225,9 +229,10 @@ export class ReservationsService {
     return { ...view, manageUrl };
   }
 
-  async byToken(token: string): Promise<TakerReservation> {
+  /** The reservation a private link opens, its care sheet in `locale` (else the language it was made in). */
+  async byToken(token: string, locale?: WordLocale): Promise<TakerReservation> {
     const { group, share, row } = await this.open(token);
-    return this.views.takerView(group, share, row, this.clock.now().getTime());
+    return this.views.takerView(group, share, row, this.clock.now().getTime(), locale);
   }
 
   /** Changes the slot, the plants or both; all of it or nothing. */

@@ -116,3 +116,59 @@ export function waitlistOfferEmail(input: {
   });
   return { subject: say('mail.offer.subject', { plant: input.commonName, group }), text, html };
 }
+
+/** What the organiser changed about a taker's pickup, before and after. */
+export interface PickupChange {
+  day?: { before: string; now: string };
+  place?: { before: SharePlace; now: SharePlace };
+  slot?: { before: { start: string; end: string }; now: { start: string; end: string } };
+}
+
+/**
+ * The mail every taker with a live reservation gets when the organiser changes the share's day,
+ * place or their slot's times: each change in words (now and before), their plants, and a fresh
+ * private link to change or cancel.
+ */
+export function pickupChangeEmail(input: {
+  name: string;
+  groupName: string;
+  change: PickupChange;
+  lines: { commonName: string; count: number }[];
+  link: string;
+  /** The taker's language, kept with the reservation. */
+  locale?: WordLocale;
+}): { subject: string; text: string; html: string } {
+  const locale = input.locale ?? 'en';
+  const say = apiWords(locale);
+  const group = input.groupName;
+  const { day, place, slot } = input.change;
+  const dayWords = (iso: string) =>
+    new Intl.DateTimeFormat(LOCALE_TAGS[locale], { dateStyle: 'full', timeZone: 'UTC' }).format(
+      new Date(`${iso}T12:00:00Z`),
+    );
+  const { text, html } = renderEmail({
+    locale,
+    greeting: say('mail.greeting', { name: input.name }),
+    paragraphs: [
+      say('mail.shareChanged.intro', { group }),
+      ...(day ? [say('mail.shareChanged.day', { now: dayWords(day.now), before: dayWords(day.before) })] : []),
+      ...(place
+        ? [say('mail.shareChanged.place', { now: placeWords(place.now), before: placeWords(place.before) })]
+        : []),
+      ...(place?.now.directions ? [place.now.directions] : []),
+      ...(slot
+        ? [
+            say('mail.shareChanged.slot', {
+              now: slotWords(slot.now.start, slot.now.end, locale),
+              before: slotWords(slot.before.start, slot.before.end, locale),
+            }),
+          ]
+        : []),
+      say('mail.shareChanged.still', { plants: input.lines.map((l) => `${l.count} × ${l.commonName}`).join(', ') }),
+      say('mail.shareChanged.link'),
+    ],
+    action: { label: say('mail.shareChanged.action'), url: input.link },
+    footer: say('mail.reservation.footer', { group }),
+  });
+  return { subject: say('mail.shareChanged.subject', { group }), text, html };
+}

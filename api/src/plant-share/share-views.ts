@@ -275,7 +275,8 @@ export class ShareViews {
   }
 
   /** A reservation as its taker sees it. */
-  takerView(group: Group, share: ShareRow, r: ReservationRow, nowMs: number): TakerReservation {
+  /** A taker's reservation; its care sheet in `locale`, else in the language the reservation was made in. */
+  takerView(group: Group, share: ShareRow, r: ReservationRow, nowMs: number, locale?: WordLocale): TakerReservation {
     const slot = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', r.slot_id)!;
     const lines = this.linesOf([r.id]).get(r.id) ?? [];
     return {
@@ -295,7 +296,10 @@ export class ShareViews {
         whatToBring: share.what_to_bring,
       },
       canChange: r.status === 'confirmed' && share.status === 'open' && slot.starts_at_ms > nowMs,
-      careSheet: this.careSheet(lines.map((l) => l.slug)),
+      careSheet: this.careSheet(
+        lines.map((l) => l.slug),
+        locale ?? r.locale,
+      ),
     };
   }
 

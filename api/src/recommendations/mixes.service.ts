@@ -12,6 +12,7 @@ import {
   type RecommendationsResponse,
   type RegionContext,
   type Site,
+  type WordLocale,
 } from '@homeground/shared';
 import { AnswerCache } from './answer-cache.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
@@ -36,14 +37,20 @@ export class MixesService {
     };
   }
 
-  balance(site: Site, regionIn: RegionContext, options: PaletteOptions): MixResponse {
-    const key = JSON.stringify([this.ctx.version, site, regionIn, options]);
-    return this.mixes.getOrCompute(key, () => this.computeBalance(site, regionIn, options));
+  /** The rules' details and notices come back in `locale`; the reasons are translated by the controller. */
+  balance(site: Site, regionIn: RegionContext, options: PaletteOptions, locale: WordLocale = 'en'): MixResponse {
+    const key = JSON.stringify([this.ctx.version, site, regionIn, options, locale]);
+    return this.mixes.getOrCompute(key, () => this.computeBalance(site, regionIn, options, locale));
   }
 
-  private computeBalance(site: Site, regionIn: RegionContext, options: PaletteOptions): MixResponse {
+  private computeBalance(
+    site: Site,
+    regionIn: RegionContext,
+    options: PaletteOptions,
+    locale: WordLocale,
+  ): MixResponse {
     const region = this.ctx.region(regionIn);
-    const palette = balancePalette({ species: this.ctx.species(), site, region, options });
+    const palette = balancePalette({ species: this.ctx.species(), site, region, options, locale });
     const chosen = palette.chosen.map((c) => this.ctx.get(c.slug)!);
     return {
       site,

@@ -50,7 +50,7 @@ export class RecommendationsController {
     @ZodBody(paletteRequestSchema) body: Parsed<typeof paletteRequestSchema>,
     @RequestLocale() locale: WordLocale,
   ): MixResponse {
-    return mixIn(this.mixes.balance(body.site, body.region, body.options), locale);
+    return mixIn(this.mixes.balance(body.site, body.region, body.options, locale), locale);
   }
 
   /** The best replacements for one species of a mix, with how much each would change the mix's objective. */

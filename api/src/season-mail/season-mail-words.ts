@@ -115,9 +115,8 @@ export const WEEKLY_SUMMARY_WORDS = {
     lead: 'Esto es lo que sigue para tus lotes.',
     step: (plant: string, kind: BatchStepKind, date: string) => `${plant}: ${STEP_NAMES.es[kind]}, ${date}.`,
     allDone: (plant: string) => `${plant}: todos los pasos están hechos. ¡Gracias!`,
-    // The batch's own "behind" words are English for now; say it plainly and point to the batch page.
-    behind: (plant: string, _words: string) =>
-      `${plant}: va con retraso respecto al calendario; mira la página del lote para ver qué hacer.`,
+    // The batch's own "behind" words, which the service asks for in Spanish for a Spanish reader.
+    behind: (plant: string, words: string) => `${plant}: ${words}`,
     logReminder:
       'Cuando siembres, veas brotes, trasplantes o pierdas plantas, anótalo en el registro del lote: así el pronóstico sigue siendo fiel.',
     action: 'Abrir mis lotes',

@@ -105,7 +105,7 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
     for (const [growerId, list] of byGrower) {
       const person = people.find((p) => p.userId === growerId);
       if (!person?.email) continue;
-      const lang = this.languageOf(growerId);
+      const lang = await this.languageOf(person.email);
       const message = frostWarningEmail(
         {
           name: person.displayName,
@@ -149,11 +149,23 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
     const week = isoWeek(today);
     const all = await this.batches.batchesOf(slug, actor, c, today);
     const people = await this.groups.members(slug, actor);
+    // A grower who reads Spanish gets the batches' own words (a batch behind its dates) in Spanish too.
+    let spanish: Map<string, Batch[]> | undefined;
+    const batchesIn = async (lang: MailLanguage, growerId: string, english: Batch[]): Promise<Batch[]> => {
+      if (lang === 'en') return english;
+      spanish ??= groupBy(
+        await this.batches.batchesOf(slug, actor, c, today, undefined, undefined, 'es'),
+        (b) => b.growerId,
+      );
+      return spanish.get(growerId) ?? english;
+    };
     let sent = 0;
     let alreadySent = 0;
-    for (const [growerId, list] of groupBy(all, (b) => b.growerId)) {
+    for (const [growerId, english] of groupBy(all, (b) => b.growerId)) {
       const person = people.find((p) => p.userId === growerId);
       if (!person?.email) continue;
+      const lang = await this.languageOf(person.email);
+      const list = await batchesIn(lang, growerId, english);
       // Claim the week first: the unique key lets only one claim through, ever.
       if (!(await this.claim(c.group.id, growerId, week))) {
         alreadySent++;
@@ -166,7 +178,7 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
           batches: list,
           link: `${this.config.publicUrl}/my-batches`,
         },
-        this.languageOf(growerId),
+        lang,
       );
       try {
         await this.mail.send({ to: person.email, ...message, kind: 'weekly-summary', groupId: c.group.id });
@@ -193,11 +205,22 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
   }
 
   /**
-   * The language a grower reads e-mail in. English until the API keeps each person's language;
-   * the words are ready in every MailLanguage, so this is the one place to wire it.
+   * The language a grower reads e-mail in, from what the database already knows: the language of
+   * their latest plant-share reservation or waitlist place made with the same address (kept until
+   * the share's retention clears the address); English otherwise.
+   * TODO(users.locale): a per-person language column, set from the sign-up and settings pages, would
+   * be the better source; it waits for the migration rework.
    */
-  private languageOf(_userId: string): MailLanguage {
-    return 'en';
+  private async languageOf(email: string): Promise<MailLanguage> {
+    const rows: { locale: string }[] = await this.sentRows.query(
+      `SELECT locale FROM (
+         SELECT locale, created_at AS at FROM share_reservations WHERE lower(email) = lower(?)
+         UNION ALL
+         SELECT locale, created_at AS at FROM share_waitlist WHERE lower(email) = lower(?)
+       ) ORDER BY at DESC LIMIT 1`,
+      [email, email],
+    );
+    return rows[0]?.locale === 'es' ? 'es' : 'en';
   }
 }
 

@@ -13,10 +13,12 @@ import {
   seasonSchema,
   shareListSchema,
   seasonSeedListSchema,
+  type WordLocale,
 } from '@homeground/shared';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { FileResponse, ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { type SeasonSeedList, SeasonsService } from './seasons.service.js';
 
@@ -71,12 +73,14 @@ export class SeasonsController {
   }
 
   @Get('seed-list')
+  @AnswersInLanguage()
   @ZodResponse(seasonSeedListSchema)
   seedList(
     @ZodParam('slug', slugParamSchema) slug: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<SeasonSeedList> {
-    return this.seasons.seedList(slug, user);
+    return this.seasons.seedList(slug, user, locale);
   }
 
   @Get('seed-list.csv')

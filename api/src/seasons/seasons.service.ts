@@ -19,6 +19,7 @@ import {
   type TargetsRequest,
   type Group,
   type GroupRole,
+  type WordLocale,
 } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
@@ -177,7 +178,8 @@ export class SeasonsService {
     return out;
   }
 
-  async seedList(slug: string, user: AuthenticatedUser): Promise<SeasonSeedList> {
+  /** The seed list; its cautions and collecting notes in `locale`. */
+  async seedList(slug: string, user: AuthenticatedUser, locale: WordLocale = 'en'): Promise<SeasonSeedList> {
     const group = await this.readable(slug, user);
     const season = await this.latest(group);
     const targets = (await this.targetsOf(season)).flatMap((t) => {
@@ -191,6 +193,7 @@ export class SeasonsService {
       state: group.state as StateCode,
       lossFactor: season.lossFactor,
       seedsPerPacket: season.seedsPerPacket,
+      locale,
     });
     return { groupSlug: group.slug, year: season.year, ...list };
   }

@@ -18,6 +18,15 @@ export function logTotals(entries: readonly { kind: LogKind; count: number }[]):
   return { ...t, ready: sum('ready'), alive: Math.max(0, t.germinated - t.lost) };
 }
 
+/** The totals after one more entry, from the totals before it (no need to read the log again). */
+export function logTotalsAfter(before: LogTotals, entry: { kind: LogKind; count: number }): LogTotals {
+  const key = (
+    { sown: 'sown', germinated: 'germinated', 'potted-up': 'pottedUp', lost: 'lost', ready: 'ready' } as const
+  )[entry.kind];
+  const t = { ...before, [key]: before[key] + entry.count };
+  return { ...t, alive: Math.max(0, t.germinated - t.lost) };
+}
+
 export interface FieldProblem {
   field: string;
   message: string;

@@ -3,8 +3,12 @@ import type { CalendarEvent } from '../sowing-calendar/calendar-types.js';
 import type { IsoDate } from '../sowing-calendar/calendar-date.js';
 import type { GrowerMethod } from '../types/batch.js';
 import type { Species, TreatmentStep } from '../types/species.js';
-import { BATCH_STEP_WORDS, type BatchStepKind } from '../vocabulary/batch-words.js';
-import { treatmentHow, treatmentTitle, type TreatmentKind } from '../vocabulary/seed-words.js';
+import type { BatchStepKind } from '../vocabulary/batch-words.js';
+import type { TreatmentKind } from '../vocabulary/seed-words.js';
+import { stepDetailIn, warningIn } from './step-details-in.js';
+import { batchWordsFor } from '../vocabulary/locale/batch-words-in.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
+import { wordsFor } from '../vocabulary/locale/words-for.js';
 
 /** One dated step of a batch. */
 export interface BatchStep {
@@ -44,6 +48,10 @@ export interface BatchScheduleInput {
   lastFrost: IsoDate;
   plantShareDate: IsoDate;
   today: IsoDate;
+  /**
+   * The language of step titles, details, treatments and warnings (English when absent).
+   */
+  locale?: WordLocale;
 }
 
 const STEP_OF: Partial<Record<CalendarEvent['kind'], BatchStepKind>> = {
@@ -82,37 +90,34 @@ export function batchSchedule(input: BatchScheduleInput): BatchSchedule {
     if (!kind) continue;
     // Venting is for covered containers only; the frost watch concerns every batch with plants outdoors.
     if (kind === 'vent-containers' && input.method !== 'winter-sowing') continue;
-    steps.push({ kind, date: e.date, title: BATCH_STEP_WORDS[kind], detail: e.detail });
+    steps.push({
+      kind,
+      date: e.date,
+      title: batchWordsFor(input.locale).step[kind],
+      detail: stepDetailIn(e.detail, input.species, input.locale ?? 'en'),
+    });
   }
   const fridgeTopUp = schedule.events.some((e) => e.kind === 'cms-start') && outdoor;
-  const treatments = input.species.germination.treatments.map((t) => treatmentOf(t, outdoor, fridgeTopUp));
+  const treatments = input.species.germination.treatments.map((t) =>
+    treatmentOf(t, outdoor, fridgeTopUp, input.locale ?? 'en'),
+  );
   return {
     sowDate: schedule.sowDate,
     readyDate: schedule.readyDate,
     readyAfterShare: schedule.readyDate !== null && schedule.readyDate > input.plantShareDate,
     steps,
     treatments,
-    warnings: schedule.warnings.map((w) => w.message),
+    warnings: schedule.warnings.map((w) => warningIn(w.message, input.locale ?? 'en')),
   };
 }
 
-function treatmentOf(t: TreatmentStep, outdoor: boolean, fridgeTopUp: boolean): BatchTreatment {
+function treatmentOf(t: TreatmentStep, outdoor: boolean, fridgeTopUp: boolean, locale: WordLocale): BatchTreatment {
+  const w = wordsFor(locale);
+  const title = w.treatmentTitle(t);
   const moist = t.kind === 'cold-moist' || t.kind === 'warm-moist';
-  if (!moist) return { kind: t.kind, days: null, where: null, title: treatmentTitle(t), how: treatmentHow(t) };
+  if (!moist) return { kind: t.kind, days: null, where: null, title, how: w.treatmentHow(t) };
   const days = t.days ?? null;
   if (t.kind === 'cold-moist' && outdoor && !fridgeTopUp)
-    return {
-      kind: t.kind,
-      days,
-      where: 'outdoors',
-      title: treatmentTitle(t),
-      how: 'Winter does it: sown outdoors in late fall or winter, the seed gets its cold, moist days in the container.',
-    };
-  return {
-    kind: t.kind,
-    days,
-    where: t.kind === 'cold-moist' ? 'refrigerator' : null,
-    title: treatmentTitle(t),
-    how: treatmentHow(t),
-  };
+    return { kind: t.kind, days, where: 'outdoors', title, how: batchWordsFor(locale).winterStratifies };
+  return { kind: t.kind, days, where: t.kind === 'cold-moist' ? 'refrigerator' : null, title, how: w.treatmentHow(t) };
 }

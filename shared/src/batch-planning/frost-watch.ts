@@ -1,7 +1,8 @@
 import { addDays, type IsoDate } from '../sowing-calendar/calendar-date.js';
 import { DURATIONS } from '../sowing-calendar/durations.js';
 import type { GrowerMethod } from '../types/batch.js';
-import { FROST_NIGHT_WORDS } from '../vocabulary/batch-words.js';
+import { batchWordsFor } from '../vocabulary/locale/batch-words-in.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 
 /** Days before the average last frost that the watch starts: a frost that week is as likely (M, from memory). */
 export const FROST_WATCH_LEAD_DAYS = 7;
@@ -16,12 +17,11 @@ export function frostWarning(input: {
   lastFrost: IsoDate;
   today: IsoDate;
   seedlingsUp: boolean;
+  /** The language of the warning (English when absent). */
+  locale?: WordLocale;
 }): string | null {
   const from = addDays(input.lastFrost, -FROST_WATCH_LEAD_DAYS);
   const until = addDays(input.lastFrost, DURATIONS.frostWatchDays);
   if (!input.seedlingsUp || input.today < from || input.today > until) return null;
-  return (
-    `Frost watch until ${until}: a late frost is still possible. On clear, still nights when frost is forecast, ` +
-    `${FROST_NIGHT_WORDS[input.method]}. Check your local forecast.`
-  );
+  return batchWordsFor(input.locale).frostWatch(until, input.method);
 }

@@ -1,5 +1,6 @@
 import type { GrowerMethod } from '../types/batch.js';
-import { BATCH_CAUTIONS } from '../vocabulary/batch-words.js';
+import { batchWordsFor } from '../vocabulary/locale/batch-words-in.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 
 /** What growers need to buy or gather for their batches. */
 export const SUPPLY_ITEMS = [
@@ -64,9 +65,10 @@ const LITRES_PER_DRY_QUART = 1.101221;
 /**
  * The supply list for a set of batches (one grower's, or the whole group's): pots for outdoor pots
  * and for potting up winter-sown and indoor seedlings, cell trays, covered containers, potting mix,
- * soil-block mix, labels, vermiculite and bags, with the dust caution.
+ * soil-block mix, labels, vermiculite and bags, with the dust caution (in `locale`; the lines'
+ * names are still English).
  */
-export function supplyList(batches: readonly SupplyBatch[]): SupplyList {
+export function supplyList(batches: readonly SupplyBatch[], locale: WordLocale = 'en'): SupplyList {
   const sum = (f: (b: SupplyBatch) => number) => batches.reduce((a, b) => a + f(b), 0);
   const pots = sum((b) => (b.method === 'outdoor-pot-winter' ? b.units : b.method === 'soil-blocks' ? 0 : b.plants));
   const containers = sum((b) => (b.method === 'winter-sowing' ? b.units : 0));
@@ -116,5 +118,5 @@ export function supplyList(batches: readonly SupplyBatch[]): SupplyList {
     ),
     piece('bags', 'Sealable bags', fridgeBatches, 'One per batch stratified in the refrigerator.'),
   ];
-  return { lines: lines.filter((l) => (l.count ?? l.litres ?? 0) > 0), cautions: [...BATCH_CAUTIONS] };
+  return { lines: lines.filter((l) => (l.count ?? l.litres ?? 0) > 0), cautions: [...batchWordsFor(locale).cautions] };
 }

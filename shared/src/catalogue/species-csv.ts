@@ -1,3 +1,4 @@
+import type { z } from 'zod';
 import { formulaCellProblem } from '../csv/csv-cell.js';
 import type { CsvRowError } from '../types/species-query.js';
 import { type Species, speciesSchema, type TreatmentStep } from '../types/species.js';
@@ -57,8 +58,23 @@ export type SpeciesCsvColumn = (typeof SPECIES_CSV_COLUMNS)[number];
 export type SpeciesCsvRow = Record<SpeciesCsvColumn, string>;
 
 const list = (v: readonly (string | number)[]) => v.join(';');
-const treatmentText = (t: TreatmentStep) =>
-  (t.days ? `${t.kind}:${t.days}` : t.kind) + (t.note ? `:${t.note.replaceAll(';', ',')}` : '');
+const treatmentText = (t: TreatmentStep) => (t.days ? `${t.kind}:${t.days}` : t.kind) + (t.note ? `:${t.note}` : '');
+
+/**
+ * Treatments as `kind:days:note;…` a person can edit in a spreadsheet — unless that text would not read
+ * back the same (a note with ";", a note that is only digits, spaces at an end); then the steps are written
+ * as JSON, like the cautions column, so an export imported again changes nothing.
+ */
+function treatmentsCell(steps: readonly TreatmentStep[]): string {
+  const text = steps.map(treatmentText).join(';');
+  const readBack = parseTreatmentsCell(text);
+  return JSON.stringify(readBack) === JSON.stringify(steps.map(plainStep)) ? text : JSON.stringify(steps);
+}
+const plainStep = (t: TreatmentStep) => ({
+  kind: t.kind,
+  ...(t.days ? { days: t.days } : {}),
+  ...(t.note ? { note: t.note } : {}),
+});
 
 export function speciesToCsvRow(s: Species): SpeciesCsvRow {
   return {
@@ -96,7 +112,7 @@ export function speciesToCsvRow(s: Species): SpeciesCsvRow {
     commercialAvailability: s.commercialAvailability ?? '',
     protectedIn: list(s.protectedIn),
     deerResistance: s.deerResistance,
-    treatments: s.germination.treatments.map(treatmentText).join(';'),
+    treatments: treatmentsCell(s.germination.treatments),
     needsLight: String(s.germination.needsLight),
     sowingDepthMm: String(s.germination.sowingDepthMm),
     seedsPerPound: s.germination.seedsPerPound === null ? '' : String(s.germination.seedsPerPound),
@@ -123,6 +139,35 @@ function parseTreatment(text: string): unknown {
   const days = second !== undefined && /^\d+$/.test(second) ? Number(second) : undefined;
   const note = days === undefined ? [second, ...rest].filter(Boolean).join(':') : rest.join(':');
   return { kind, ...(days !== undefined ? { days } : {}), ...(note ? { note } : {}) };
+}
+
+/** A treatments cell: JSON when it starts with "[" (see treatmentsCell), otherwise `kind:days:note;…`. */
+function parseTreatmentsCell(cell: string | undefined): unknown {
+  const trimmed = (cell ?? '').trim();
+  if (trimmed.startsWith('[')) {
+    try {
+      return JSON.parse(trimmed);
+    } catch {
+      return trimmed; // the schema names the treatments column
+    }
+  }
+  return split(trimmed).map(parseTreatment);
+}
+
+/**
+ * A schema issue in words a curator acts on: string lengths as "Must be at least 10 characters" (the
+ * wording the web's forms translate), and for an entry of a JSON list (cautions, notes) which entry and
+ * part: "entry 4, text: Must be at least 10 characters".
+ */
+function issueMessage(issue: z.core.$ZodIssue): string {
+  let message = issue.message;
+  if (issue.code === 'too_small' && issue.origin === 'string') message = `Must be at least ${issue.minimum} characters`;
+  if (issue.code === 'too_big' && issue.origin === 'string') message = `Must be at most ${issue.maximum} characters`;
+  const at = issue.path.findIndex((p) => typeof p === 'number');
+  const listed = at > 0 && ['cautions', 'reconciliations'].includes(String(issue.path[0]));
+  if (!listed) return message;
+  const part = issue.path.slice(at + 1).join('.');
+  return `entry ${Number(issue.path[at]) + 1}${part ? `, ${part}` : ''}: ${message}`;
 }
 
 /** Maps a schema path back to the CSV column a person would fix. */
@@ -220,7 +265,7 @@ export function csvRowToSpecies(
     spreadHabit: row.spreadHabit,
     deerResistance: row.deerResistance,
     germination: {
-      treatments: split(row.treatments).map(parseTreatment),
+      treatments: parseTreatmentsCell(row.treatments),
       needsLight: bool(row.needsLight),
       sowingDepthMm: num(row.sowingDepthMm),
       seedsPerPound: row.seedsPerPound?.trim() ? Number(row.seedsPerPound) : null,
@@ -235,7 +280,7 @@ export function csvRowToSpecies(
   const parsed = speciesSchema.safeParse(candidate);
   if (!parsed.success) {
     for (const issue of parsed.error.issues)
-      errors.push({ row: line, field: columnFor(issue.path), message: issue.message });
+      errors.push({ row: line, field: columnFor(issue.path), message: issueMessage(issue) });
   }
   return errors.length > 0 || !parsed.success ? { errors } : { species: parsed.data, errors };
 }

@@ -131,6 +131,21 @@ describe('constraint report: native milkweed for monarchs', () => {
     );
   });
 
+  it('says the unmet rule and its near miss in Spanish when asked (words from the shared Spanish tables)', () => {
+    const noMilkweed = [F.swampMilkweed, ...pool.filter((s) => s.slug !== 'asclepias-tuberosa')];
+    const r = balancePalette({
+      species: noMilkweed,
+      site: monarchs,
+      region: LARKFIELD,
+      options: { size: 5 },
+      locale: 'es',
+    });
+    expect(constraint(r, 'monarch-milkweed').detail).toBe(
+      'Ningún algodoncillo nativo de tu región va bien con pleno sol y suelo seco en Wisconsin. La más cercana es swamp milkweed: Necesita suelo fresco o húmedo; tu suelo es seco.',
+    );
+    for (const c of r.constraints) expect(c.detail).not.toMatch(/\bThe mix\b|\bsuits?\b/);
+  });
+
   it('does not apply when monarchs are not a goal', () => {
     const r = balancePalette({
       species: pool,

@@ -12,6 +12,7 @@ import { optimiseSelection } from './optimiser.js';
 import { buildCandidates, type PaletteCandidates, type PaletteInput } from './palette-candidates.js';
 import { rolesOf } from './mix-roles.js';
 import { chooseWoodyLayer } from './woody-layer.js';
+import { mixWordsFor } from './mix-words.js';
 import { catalogueCoverage } from '../scoring/coverage.js';
 import { plantingMethodFor } from '../quantities/planting-method.js';
 
@@ -22,16 +23,16 @@ export function resolveSize(
 ): { size: number; reason: string; notices: string[] } {
   const fromArea = mixSizeForArea(input.site.areaSqFt);
   let size = input.options?.size ?? fromArea.size;
-  let reason = input.options?.size !== undefined ? `You asked for ${size} species.` : fromArea.reason;
+  const w = mixWordsFor(input.locale);
+  // The area's sentence stays English here: reasons-in.ts says it again in the reader's language.
+  let reason = input.options?.size !== undefined ? w.askedFor(size) : fromArea.reason;
   const notices: string[] = [];
   if (c.locked.length > size) {
     size = c.locked.length;
-    reason = `You kept ${size} species, so the mix holds ${size}.`;
+    reason = w.keptSoHolds(size);
   }
   if (c.items.length < size) {
-    notices.push(
-      `Only ${c.items.length} species suit your ground, so the mix has ${c.items.length} instead of ${size}.`,
-    );
+    notices.push(w.onlySuit(c.items.length, size));
     size = c.items.length;
   }
   return { size, reason, notices };
@@ -111,6 +112,7 @@ export function balancePalette(input: PaletteInput): PaletteResult {
       region: input.region,
       locked: c.locked,
       milkweedNearMisses,
+      locale: input.locale,
       // Withheld species passed the checks, so they are native; the best three name the case.
       protectedMilkweeds: c.withheld
         .filter(isNativeMilkweed)

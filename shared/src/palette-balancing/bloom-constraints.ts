@@ -1,9 +1,8 @@
 import { BLOOM_PERIODS, type BloomPeriod, type PaletteConstraint } from '../types/recommendation.js';
-import { joinWords } from '../vocabulary/join-words.js';
-import { monthName } from '../vocabulary/months.js';
+import { wordsFor } from '../vocabulary/locale/words-for.js';
 import { periodMonths } from '../scoring/bloom-periods.js';
 import type { PaletteItem } from './palette-item.js';
-import { groundWords, lostOut, names, onlyAvailable, type ConstraintInput } from './constraint-input.js';
+import { groundWords, namesOf, wordsOf, type ConstraintInput } from './constraint-input.js';
 import { OBJECTIVE_WEIGHTS, grassTargets } from './objective-weights.js';
 
 /** CP42 rules (CP42-IN, CHECK-VALUES §3, R): ≥ 3 flowering species per bloom period, ≥ 9 in all. */
@@ -11,10 +10,11 @@ const CP42 = 'nrcs-cp42-indiana-2012';
 const PER_PERIOD = OBJECTIVE_WEIGHTS.periodTarget;
 const FLOWERING = OBJECTIVE_WEIGHTS.floweringTarget;
 
-const PERIOD: Record<BloomPeriod, { words: string; part: string; one: string; many: string }> = {
-  early: { words: 'April to mid-June', part: 'Spring', one: 'early bloomer', many: 'early bloomers' },
-  mid: { words: 'mid-June to July', part: 'Early summer', one: 'midsummer bloomer', many: 'midsummer bloomers' },
-  late: { words: 'August to October', part: 'Late summer and fall', one: 'late bloomer', many: 'late bloomers' },
+// The rule's headline stays English here: reasons-in.ts says it again in the reader's language.
+const PERIOD: Record<BloomPeriod, { words: string; part: string }> = {
+  early: { words: 'April to mid-June', part: 'Spring' },
+  mid: { words: 'mid-June to July', part: 'Early summer' },
+  late: { words: 'August to October', part: 'Late summer and fall' },
 };
 
 /** Months of a period in the bloom chart's sense (whole months; June belongs to both early and mid). */
@@ -38,17 +38,23 @@ function periodConstraint(input: ConstraintInput, period: BloomPeriod): PaletteC
   for (const i of input.candidates) if (i.periods.includes(period)) available++;
   const thin = monthsOf(period).filter((m) => inFlower(input.chosen, m).length < PER_PERIOD);
   const met = inMix.length >= PER_PERIOD && thin.length === 0;
-  const has = inMix.length === 0 ? 'The mix has none' : `The mix has ${inMix.length}: ${joinWords(names(inMix))}`;
-  const thinWords = thin.map((m) => `${monthName(m)} has ${inFlower(input.chosen, m).length}`);
-  let detail =
-    thin.length > 0 && inMix.length >= PER_PERIOD ? `${has}, but ${joinWords(thinWords)} in flower.` : `${has}.`;
+  const w = wordsOf(input);
+  const list = namesOf(input, inMix);
+  const thinWords = wordsFor(input.locale ?? 'en').join(
+    thin.map((m) => w.monthHas(m, inFlower(input.chosen, m).length)),
+  );
+  let detail: string;
   if (!met && available < PER_PERIOD) {
-    const only = onlyAvailable(available, p.one, p.many, groundWords(input));
-    detail = `${has}. ${only}; a species from another part of the season may take its place.`;
+    detail = `${w.mixHas(inMix.length, list)} ${w.onlyAvailableInPeriod(period, available, groundWords(input))}`;
   } else if (!met && inMix.length < PER_PERIOD) {
-    detail = `${has}. ${lostOut(input, `${available - inMix.length} more ${p.many} suit your ground but`)}`;
-  } else if (!met) {
-    detail += ' Keep or add a species that flowers then, or choose a larger mix.';
+    const lost = w.lostOut(period, available - inMix.length, input.size, input.locked.length);
+    detail = `${w.mixHas(inMix.length, list)} ${lost}`;
+  } else {
+    const has =
+      thin.length > 0 && inMix.length >= PER_PERIOD
+        ? w.mixHasButThin(inMix.length, list, thinWords)
+        : w.mixHas(inMix.length, list);
+    detail = met ? has : `${has} ${w.keepOrAddBloomer}`;
   }
   return {
     id: `cp42-${period}`,
@@ -65,16 +71,17 @@ function floweringConstraint(input: ConstraintInput): PaletteConstraint {
   let available = 0;
   for (const i of input.candidates) if (i.flowering) available++;
   const met = inMix >= FLOWERING;
-  let detail = `The mix has ${inMix} flowering species.`;
+  const w = wordsOf(input);
+  const has = w.floweringCount(inMix);
+  let detail = has;
   if (!met && input.size < FLOWERING) {
-    detail += ` A mix of ${input.size} species cannot hold the ${FLOWERING} kinds of flowers of a full mix; choose ${FLOWERING} or more species to meet it.`;
+    detail = `${has} ${w.tooSmallForFlowers(input.size, FLOWERING)}`;
   } else if (!met && input.size - grassTargets(input.size).min < FLOWERING && available >= FLOWERING) {
-    const places = input.size - grassTargets(input.size).min;
-    detail += ` Grasses and sedges take their share of a ${input.size}-species mix, leaving about ${places} places for flowers; choose 11 or more species to have both.`;
+    detail = `${has} ${w.grassesTakeShare(input.size, input.size - grassTargets(input.size).min)}`;
   } else if (!met && available < FLOWERING) {
-    detail += ` ${onlyAvailable(available, 'flowering species', 'flowering species', groundWords(input))}.`;
+    detail = `${has} ${w.onlyAvailable('flowering', available, groundWords(input))}`;
   } else if (!met) {
-    detail += ` ${lostOut(input, `${available - inMix} more flowering species suit your ground but`)}`;
+    detail = `${has} ${w.lostOut('flowering', available - inMix, input.size, input.locked.length)}`;
   }
   return {
     id: 'cp42-flowering',

@@ -1,5 +1,7 @@
 import type { RegionContext, Site } from '../types/site.js';
-import { describeGround } from '../vocabulary/site-words.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
+import { wordsFor } from '../vocabulary/locale/words-for.js';
+import { mixWordsFor, type MixWords } from './mix-words.js';
 import type { PaletteItem } from './palette-item.js';
 
 /** What the constraint report looks at: the mix, and everything it could have been chosen from. */
@@ -15,23 +17,21 @@ export interface ConstraintInput {
   milkweedNearMisses: readonly { name: string; reason: string }[];
   /** Names of native milkweeds that suit the site but are protected, so never chosen automatically. */
   protectedMilkweeds?: readonly string[];
+  /** The language of the details (English when absent). */
+  locale?: WordLocale;
 }
 
-/** "dry shade" etc.: how reasons name the user's ground. */
+/** "dry shade" etc.: how reasons name the user's ground, in the report's language. */
 export function groundWords(input: ConstraintInput): string {
-  return describeGround(input.site.sun, input.site.moisture);
+  return wordsFor(input.locale ?? 'en').describeGround(input.site.sun, input.site.moisture);
 }
 
-/** "Only 1 late bloomer native to your region suits dry shade" / "No … suit …" / "Only 2 … suit …". */
-export function onlyAvailable(count: number, singular: string, plural: string, ground: string): string {
-  if (count === 0) return `No ${singular} native to your region suits ${ground}`;
-  return `Only ${count} ${count === 1 ? singular : plural} native to your region ${count === 1 ? 'suits' : 'suit'} ${ground}`;
+/** The report's sentences in its language. */
+export function wordsOf(input: ConstraintInput): MixWords {
+  return mixWordsFor(input.locale);
 }
 
-/** Why the optimiser left out species that were available: the mix was full or locks took places. */
-export function lostOut(input: ConstraintInput, what: string): string {
-  const locks = input.locked.length > 0 ? ` (${input.locked.length} of them kept by you)` : '';
-  return `${what} lost out to other needs in a mix of ${input.size} species${locks}; keep one in, or choose a larger mix.`;
+/** Species names joined in the report's language ("A, B and C" / "A, B y C"). */
+export function namesOf(input: ConstraintInput, items: readonly PaletteItem[]): string {
+  return wordsFor(input.locale ?? 'en').join(items.map((i) => i.name));
 }
-
-export const names = (items: readonly PaletteItem[]) => items.map((i) => i.name);

@@ -6,6 +6,9 @@ import { hardCheckOutcome } from '../scoring/hard-check-outcome.js';
 import { factsOf, type SpeciesFacts } from '../scoring/species-facts.js';
 import { compareScored, scorePoints, scoreSpecies, type ScorePoints } from '../scoring/score-species.js';
 import { paletteItemOf, toPaletteItem, type PaletteItem } from './palette-item.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
+import { reasonIn } from '../scoring/locale/reasons-in.js';
+import { mixWordsFor } from './mix-words.js';
 import { isProtectedSpecies, keptProtectedNotice, withheldProtectedNotice } from './protected-species.js';
 
 export interface PaletteInput {
@@ -13,6 +16,8 @@ export interface PaletteInput {
   site: Site;
   region: RegionContext;
   options?: PaletteOptions;
+  /** The language of the rules' details and the notices (English when absent). */
+  locale?: WordLocale;
 }
 
 export interface PaletteCandidates {
@@ -95,6 +100,8 @@ export function buildCandidates(input: PaletteInput): PaletteCandidates {
   const lockRequests = [...new Set(input.options?.locked ?? [])].sort();
   const lockSet = new Set(lockRequests);
   const notices: string[] = [];
+  const locale = input.locale ?? 'en';
+  const w = mixWordsFor(locale);
   const items: PaletteItem[] = [];
   const scored = new Map<string, ScoredSpecies>();
   const withheld: Withheld[] = [];
@@ -124,17 +131,17 @@ export function buildCandidates(input: PaletteInput): PaletteCandidates {
   for (const slug of lockRequests) {
     const s = species.get(slug);
     if (excludedSet.has(slug)) {
-      notices.push(`${s?.commonNames[0] ?? slug} is both kept and left out; it stays out.`);
+      notices.push(w.keptAndExcluded(s?.commonNames[0] ?? slug));
     } else if (!s) {
-      notices.push(`${slug} is not in the catalogue, so it cannot be kept in the mix.`);
+      notices.push(w.notInCatalogue(slug));
     } else if (!s.nativeStates.includes(region.state)) {
-      notices.push(`${s.commonNames[0]} is not native to your state, so it cannot be in the mix.`);
+      notices.push(w.notNativeHere(s.commonNames[0]));
     } else {
       locked.push(slug);
-      if (isProtectedSpecies(s)) notices.push(keptProtectedNotice(s));
+      if (isProtectedSpecies(s)) notices.push(keptProtectedNotice(s, locale));
       if (hardCheckOutcome(s, site, region) !== 'eligible') {
         const r = scoreSpecies(s, site, region);
-        notices.push(`You kept ${s.commonNames[0]} in the mix, though it is a poor fit: ${r.ineligibleReason}`);
+        notices.push(w.keptPoorFit(s.commonNames[0], reasonIn(r.ineligibleReason ?? '', locale)));
         scored.set(slug, r);
         items.push(toPaletteItem(s, r));
         poorFitKept = true;
@@ -142,7 +149,7 @@ export function buildCandidates(input: PaletteInput): PaletteCandidates {
     }
   }
   const withheldSpecies = withheld.sort(compareScored).map((w) => w.species);
-  if (withheldSpecies.length > 0) notices.push(withheldProtectedNotice(withheldSpecies));
+  if (withheldSpecies.length > 0) notices.push(withheldProtectedNotice(withheldSpecies, locale));
   // Slug order (slugs are unique here): canonical whatever the input order, what the optimiser
   // sorts by anyway (so its sort finds the list already in order), and searchable by slug.
   if (poorFitKept) items.sort(bySlug);

@@ -82,3 +82,21 @@ describe('protected species (caution kind "protected") are never chosen for a mi
       expect(alternativesFor(input, chosen, slot, 10).map((a) => a.slug)).not.toContain('asclepias-meadii');
   });
 });
+
+describe('protected-species notices in the reader language', () => {
+  it('says the withheld notice and the rule detail in Spanish when asked', () => {
+    const r = balancePalette({
+      species: [meadsMilkweed(true), ...others],
+      site,
+      region: LARKFIELD,
+      options: { size: 5 },
+      locale: 'es',
+    });
+    expect(r.constraints.find((c) => c.id === 'monarch-milkweed')?.detail).toBe(
+      "Mead's milkweed va bien con tu terreno, pero está protegida en la naturaleza, así que no la elegimos por ti; guárdala en la mezcla para cumplir esta regla, comprada en un vivero que la propague.",
+    );
+    expect(r.notices).toContain(
+      "Mead's milkweed va bien con tu terreno, pero está protegida en la naturaleza, así que Homeground no la elige por ti. Para cultivarla, guárdala en la mezcla y cómprala en un vivero que la propague; nunca la saques del campo.",
+    );
+  });
+});

@@ -1,6 +1,7 @@
 import type { Species } from '../types/species.js';
-import { countOf } from '../scoring/plain-words.js';
-import { joinWords } from '../vocabulary/join-words.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
+import { wordsFor } from '../vocabulary/locale/words-for.js';
+import { mixWordsFor } from './mix-words.js';
 
 /**
  * A species whose record carries a `protected` caution (federally or state listed, or dug from the
@@ -13,24 +14,18 @@ export function isProtectedSpecies(species: Pick<Species, 'cautions'>): boolean 
 }
 
 /** The notice for a protected species the user kept in the mix. */
-export function keptProtectedNotice(species: Species): string {
-  return `You kept ${species.commonNames[0]}, which is protected in the wild: buy it from a nursery that propagates it, and never dig it from the wild.`;
+export function keptProtectedNotice(species: Species, locale: WordLocale = 'en'): string {
+  return mixWordsFor(locale).keptProtected(species.commonNames[0]);
 }
 
 /** Names listed in the notice below; a big catalogue could otherwise make it a page long. */
 const NAMED = 3;
 
 /** The notice for protected species that suit the ground but were left out of the automatic mix (best first). */
-export function withheldProtectedNotice(species: readonly Species[]): string {
+export function withheldProtectedNotice(species: readonly Species[], locale: WordLocale = 'en'): string {
   const named = species.slice(0, NAMED).map((s) => s.commonNames[0]);
   const more = species.length - named.length;
-  const names =
-    more > 0
-      ? `${named.join(', ')} and ${countOf(more, 'other protected species', 'other protected species')}`
-      : joinWords(named);
-  const one = species.length === 1;
-  return (
-    `${names} ${one ? 'suits' : 'suit'} your ground but ${one ? 'is' : 'are'} protected in the wild, so Homeground does not choose ` +
-    `${one ? 'it' : 'them'} for you. To grow ${one ? 'it' : 'one'}, keep it in the mix and buy from a nursery that propagates it; never dig from the wild.`
-  );
+  // With more to come the three are a list's head ("A, B, C and 4 others"): commas only.
+  const names = more > 0 ? named.join(', ') : wordsFor(locale).join(named);
+  return mixWordsFor(locale).withheldProtected(species.length, names, more);
 }

@@ -9,11 +9,17 @@ import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 const list = (words: readonly string[]) =>
   words.length <= 1 ? (words[0] ?? '') : `${words.slice(0, -1).join(', ')} or ${words[words.length - 1]}`;
 
+/** "Savia irritante: Su savia puede irritar… En la ficha (en inglés): Milky sap irritates eyes…". */
+export function cautionInSpanish(words: { title: string; sentence: string }, recordText: string): string {
+  return `${words.title}: ${words.sentence} En la ficha (en inglés): ${recordText}`;
+}
+
 /**
  * A short care sheet for one species, in words: where to plant it, how far apart, and its cautions
  * with the record's own sentence. Spacing is the default the quantities use (common practice).
- * In Spanish the words come from the shared Spanish tables; the caution's own sentence is the
- * catalogue's, which is kept in English.
+ * In Spanish the words come from the shared Spanish tables, and each caution is said in Spanish
+ * (its title and general sentence); the record's own, more specific sentence is in English only, so
+ * it follows, marked as such, rather than being dropped: a caution is never made vaguer.
  */
 export function careSheetFor(species: Species, locale: WordLocale = 'en'): CareSheetEntry {
   const spacing = describeSpacing(defaultSpacingIn(species));
@@ -27,7 +33,7 @@ export function careSheetFor(species: Species, locale: WordLocale = 'en'): CareS
       sun: `Mejor a ${or(species.sunOptimum.map((s) => w.sun[s]))}; crece a ${or(species.sun.map((s) => w.sun[s]))}.`,
       moisture: `Mejor en suelo ${or(species.moistureOptimum.map((m) => w.moisture[m]))}; crece en suelo ${or(species.moisture.map((m) => w.moisture[m]))}.`,
       spacing: `Planta a ${spacing.spacingIn} in (${Math.round(spacing.spacingCm)} cm) de distancia.`,
-      cautions: species.cautions.map((c) => `${w.caution[c.kind].title}: ${c.text}`),
+      cautions: species.cautions.map((c) => cautionInSpanish(w.caution[c.kind], c.text)),
     };
   }
   const best = species.sunOptimum.map((s) => SUN_WORDS[s]);

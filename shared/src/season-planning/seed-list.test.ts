@@ -128,6 +128,26 @@ describe('packets, collecting and cautions', () => {
       { kind: 'sap-irritant', title: 'Irritating sap', text: 'Milky sap can injure the eye hours after contact.' },
     ]);
   });
+
+  // The same cautions in Spanish (Homeground's own wording, from memory): as many, each whole.
+  it('says the cautions and the collecting note in Spanish when asked', () => {
+    const s = sp({
+      slug: 'x-species',
+      scientificName: 'Zizia testa',
+      commercialAvailability: 'none-known',
+      protectedIn: ['WI'],
+    });
+    const en = seedList([{ species: s, targetPlants: 10 }], { state: 'WI' });
+    const es = seedList([{ species: s, targetPlants: 10 }], { state: 'WI', locale: 'es' });
+    expect(es.cautions).toHaveLength(SEED_LIST_CAUTIONS.length);
+    expect(es.cautions[0]).toBe(
+      'Recolecta semilla silvestre solo con permiso de quien es dueño del terreno, y respeta las normas de parques y reservas: muchas lo prohíben.',
+    );
+    expect(es.rows[0].collectNotes).toEqual([
+      'Nunca la recolectes en el campo: está protegida en Wisconsin. Compra la semilla en un vivero que la propague.',
+    ]);
+    expect(es.rows[0].seedsToSow).toBe(en.rows[0].seedsToSow);
+  });
 });
 
 describe('seedListToCsv', () => {

@@ -1,7 +1,8 @@
 import { DEFAULT_LOSS_FACTOR, seedWeight, seedsToSow } from '../quantities/seed-count.js';
 import type { Caution, Species, StateCode } from '../types/species.js';
 import { roundTo } from '../units/conversions.js';
-import { CAUTION_WORDS } from '../vocabulary/caution-words.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
+import { wordsFor } from '../vocabulary/locale/words-for.js';
 import { stateName } from '../scoring/plain-words.js';
 
 /**
@@ -25,6 +26,45 @@ export const SEED_LIST_CAUTIONS: readonly string[] = [
   "Check your state's noxious-weed and protected-plant lists and any local rules before you collect, sow or give plants away.",
 ];
 
+/** The seed list's own sentences in one language: the cautions above and each row's collecting note. */
+interface SeedListWords {
+  cautions: readonly string[];
+  neverWildInState(state: string): string;
+  neverWild: string;
+  seldomSold: string;
+  contractOnly: string;
+}
+
+const SEED_LIST_WORDS: Record<WordLocale, SeedListWords> = {
+  en: {
+    cautions: SEED_LIST_CAUTIONS,
+    neverWildInState: (state) =>
+      `Never collect it from the wild: it is protected in ${state}. Buy seed from a nursery that propagates it.`,
+    neverWild:
+      'Never collect it from the wild: it is protected in the wild. Buy seed from a nursery that propagates it.',
+    seldomSold:
+      "Seed is seldom sold (USDA PLANTS lists no routine supply): collect it locally, with the landowner's permission.",
+    contractOnly: 'Seed is mostly grown to order: collect it locally with permission, or order early.',
+  },
+  es: {
+    cautions: [
+      'Recolecta semilla silvestre solo con permiso de quien es dueño del terreno, y respeta las normas de parques y reservas: muchas lo prohíben.',
+      'Toma solo una pequeña parte de la semilla de cada población y deja el resto para que se resiembre y alimente a la fauna.',
+      'Nunca recolectes semillas ni plantas de una especie protegida en el campo; cómprala en un vivero que la propague.',
+      'La mezcla para macetas seca suelta polvo: humedécela antes de llenar las macetas, y trabaja al aire libre o ponte una mascarilla contra el polvo.',
+      'Revisa las listas de malezas nocivas y de plantas protegidas de tu estado y las normas locales antes de recolectar, sembrar o regalar plantas.',
+    ],
+    neverWildInState: (state) =>
+      `Nunca la recolectes en el campo: está protegida en ${state}. Compra la semilla en un vivero que la propague.`,
+    neverWild:
+      'Nunca la recolectes en el campo: está protegida en la naturaleza. Compra la semilla en un vivero que la propague.',
+    seldomSold:
+      'Casi nunca se vende semilla (USDA PLANTS no registra un suministro habitual): recoléctala cerca, con permiso de quien es dueño del terreno.',
+    contractOnly:
+      'La semilla se produce sobre todo por encargo: recoléctala cerca con permiso, o encárgala con tiempo.',
+  },
+};
+
 export interface SeedListTarget {
   species: Species;
   targetPlants: number;
@@ -38,6 +78,8 @@ export interface SeedListOptions {
   /** Seedlings lost between germination and planting out, 0–<1; default DEFAULT_LOSS_FACTOR. */
   lossFactor?: number;
   seedsPerPacket?: number;
+  /** The language of the cautions and collecting notes (English when absent). */
+  locale?: WordLocale;
 }
 
 export interface SeedListCaution {
@@ -87,7 +129,8 @@ export interface SeedList {
 export function seedList(targets: readonly SeedListTarget[], options: SeedListOptions): SeedList {
   const lossFactor = options.lossFactor ?? DEFAULT_LOSS_FACTOR;
   const seedsPerPacket = options.seedsPerPacket ?? DEFAULT_SEEDS_PER_PACKET;
-  const rows = targets.map((t) => rowOf(t, lossFactor, seedsPerPacket, options.state));
+  const locale = options.locale ?? 'en';
+  const rows = targets.map((t) => rowOf(t, lossFactor, seedsPerPacket, options.state, locale));
   const sum = (f: (r: SeedListRow) => number) => rows.reduce((a, r) => a + f(r), 0);
   return {
     lossFactor,
@@ -106,11 +149,17 @@ export function seedList(targets: readonly SeedListTarget[], options: SeedListOp
       ),
       packets: sum((r) => r.packets),
     },
-    cautions: SEED_LIST_CAUTIONS,
+    cautions: SEED_LIST_WORDS[locale].cautions,
   };
 }
 
-function rowOf(t: SeedListTarget, lossFactor: number, seedsPerPacket: number, state: StateCode): SeedListRow {
+function rowOf(
+  t: SeedListTarget,
+  lossFactor: number,
+  seedsPerPacket: number,
+  state: StateCode,
+  locale: WordLocale,
+): SeedListRow {
   const s = t.species;
   const germinationRatePct = t.germinationRatePct ?? s.germination.germinationRatePct;
   const seeds = seedsToSow(t.targetPlants, germinationRatePct, lossFactor);
@@ -118,7 +167,7 @@ function rowOf(t: SeedListTarget, lossFactor: number, seedsPerPacket: number, st
   const weight = perPound ? seedWeight(seeds, perPound) : null;
   const packets = Math.ceil(seeds / seedsPerPacket);
   const neverCollectWild = s.protectedIn.includes(state) || s.cautions.some((c) => c.kind === 'protected');
-  const { collectLocally, collectNotes } = collectAdvice(s, state, neverCollectWild);
+  const { collectLocally, collectNotes } = collectAdvice(s, state, neverCollectWild, SEED_LIST_WORDS[locale]);
   return {
     slug: s.slug,
     commonName: s.commonNames[0],
@@ -137,7 +186,7 @@ function rowOf(t: SeedListTarget, lossFactor: number, seedsPerPacket: number, st
     collectLocally,
     collectNotes,
     neverCollectWild,
-    cautions: s.cautions.map((c) => ({ kind: c.kind, title: CAUTION_WORDS[c.kind].title, text: c.text })),
+    cautions: s.cautions.map((c) => ({ kind: c.kind, title: wordsFor(locale).caution[c.kind].title, text: c.text })),
   };
 }
 
@@ -145,28 +194,18 @@ function collectAdvice(
   s: Species,
   state: StateCode,
   neverCollectWild: boolean,
+  w: SeedListWords,
 ): { collectLocally: boolean; collectNotes: string[] } {
   if (neverCollectWild) {
-    const where = s.protectedIn.includes(state) ? `protected in ${stateName(state)}` : 'protected in the wild';
-    return {
-      collectLocally: false,
-      collectNotes: [`Never collect it from the wild: it is ${where}. Buy seed from a nursery that propagates it.`],
-    };
+    const note = s.protectedIn.includes(state) ? w.neverWildInState(stateName(state)) : w.neverWild;
+    return { collectLocally: false, collectNotes: [note] };
   }
   switch (s.commercialAvailability) {
     case 'field-collection-only':
     case 'none-known':
-      return {
-        collectLocally: true,
-        collectNotes: [
-          "Seed is seldom sold (USDA PLANTS lists no routine supply): collect it locally, with the landowner's permission.",
-        ],
-      };
+      return { collectLocally: true, collectNotes: [w.seldomSold] };
     case 'contract-only':
-      return {
-        collectLocally: true,
-        collectNotes: ['Seed is mostly grown to order: collect it locally with permission, or order early.'],
-      };
+      return { collectLocally: true, collectNotes: [w.contractOnly] };
     default:
       return { collectLocally: false, collectNotes: [] };
   }

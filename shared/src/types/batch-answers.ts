@@ -95,6 +95,18 @@ export const batchSchema = z.object({
 }) satisfies z.ZodType<Pick<BatchSchedule, 'sowDate' | 'readyDate' | 'readyAfterShare'>>;
 export type Batch = z.infer<typeof batchSchema>;
 
+/**
+ * The answer to a new log entry: the entry as stored (the first one when the same clientId came
+ * before) and the batch's totals after it. Its size does not grow with the log; the whole batch is
+ * read with GET.
+ */
+export const logEntryAnswerSchema = z.object({
+  batchId: z.string(),
+  entry: batchLogEntrySchema,
+  totals,
+});
+export type LogEntryAnswer = z.infer<typeof logEntryAnswerSchema>;
+
 const supplyList = z.object({
   lines: z.array(
     z.object({

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Species } from './species.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 
 /**
  * Licences a species photo may carry. Identifiers are SPDX licence ids where one exists (an open
@@ -43,9 +44,22 @@ export const photoCreditSchema = z
   .strict();
 export type PhotoCredit = z.infer<typeof photoCreditSchema>;
 
-/** "Photo: Ada Moss, CC BY 4.0" — the words of a credit line (the source link goes beside it). */
-export function photoCreditLine(c: Pick<PhotoCredit, 'photographer' | 'licence'>): string {
-  return `Photo: ${c.photographer}, ${PHOTO_LICENCE_WORDS[c.licence]}`;
+/** The licences' names in Spanish: SPDX names stay as they are, the plain cases are said in words. */
+export const PHOTO_LICENCE_WORDS_ES = {
+  ...PHOTO_LICENCE_WORDS,
+  'public-domain': 'dominio público',
+  'with-permission': 'usada con permiso de quien la tomó',
+} as const satisfies Record<PhotoLicence, string>;
+
+/** A licence's name in a language ("public domain" / "dominio público"). */
+export function photoLicenceWords(licence: PhotoLicence, locale: WordLocale = 'en'): string {
+  return (locale === 'es' ? PHOTO_LICENCE_WORDS_ES : PHOTO_LICENCE_WORDS)[licence];
+}
+
+/** "Photo: Ada Moss, CC BY 4.0" / "Foto: Ada Moss, dominio público" — a credit line's words (the source link goes beside it). */
+export function photoCreditLine(c: Pick<PhotoCredit, 'photographer' | 'licence'>, locale: WordLocale = 'en'): string {
+  const licence = photoLicenceWords(c.licence, locale);
+  return locale === 'es' ? `Foto: ${c.photographer}, ${licence}` : `Photo: ${c.photographer}, ${licence}`;
 }
 
 /** A species record as `GET /api/species/:slug` answers it: the record, whether it has a photo, and the photo's credit. */

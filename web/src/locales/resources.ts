@@ -36,6 +36,10 @@ import { season as enSeason } from './en/season.js';
 import { season as esSeason } from './es/season.js';
 import { report as enReport } from './en/report.js';
 import { report as esReport } from './es/report.js';
+import { taker as enTaker } from './en/taker.js';
+import { taker as esTaker } from './es/taker.js';
+import { organiser as enOrganiser } from './en/organiser.js';
+import { organiser as esOrganiser } from './es/organiser.js';
 
 /** Every message catalogue by language and namespace (one namespace per area of the app). */
 export const resources = {
@@ -59,6 +63,8 @@ export const resources = {
     seasonBatches: enSeasonBatches,
     season: enSeason,
     report: enReport,
+    taker: enTaker,
+    organiser: enOrganiser,
   },
   es: {
     common: esCommon,
@@ -80,5 +86,7 @@ export const resources = {
     seasonBatches: esSeasonBatches,
     season: esSeason,
     report: esReport,
+    taker: esTaker,
+    organiser: esOrganiser,
   },
 } as const;

@@ -3,13 +3,15 @@ import { paths } from '../config/paths.js';
 import { PickupPage } from '../features/plant-share-organiser/index.js';
 import { useDocumentTitle } from '../lib/use-document-title.js';
 import { organisedGroup } from './plant-share-session.js';
+import { useTranslation } from 'react-i18next';
 import { SignedInGate } from './signed-in-gate.js';
 
 /** Pickup day (lists, check-in, walk-up) for the organiser's group; names are for organisers only. */
 export function PlantSharePickupRoute() {
-  useDocumentTitle('Pickup day');
+  const { t } = useTranslation('organiser');
+  useDocumentTitle(t('pickupDay'));
   return (
-    <SignedInGate loading="Loading the plant share">
+    <SignedInGate loading={t('loading')}>
       {(user) => {
         const group = organisedGroup(user);
         if (!group) return <Navigate to={paths.plantShare.build()} replace />;

@@ -3,6 +3,7 @@ import { useSession } from '../features/auth/index.js';
 import { OrganiserSharePage } from '../features/plant-share-organiser/index.js';
 import { ShareDirectory } from '../features/plant-share-taker/index.js';
 import { useDocumentTitle } from '../lib/use-document-title.js';
+import { useTranslation } from 'react-i18next';
 import { organisedGroup } from './plant-share-session.js';
 
 /**
@@ -11,12 +12,13 @@ import { organisedGroup } from './plant-share-session.js';
  */
 export function PlantShareRoute() {
   const session = useSession();
-  useDocumentTitle('Plant share');
-  if (session.status === 'loading') return <LoadingState label="Loading the plant share" />;
+  const { t } = useTranslation('organiser');
+  useDocumentTitle(t('title'));
+  if (session.status === 'loading') return <LoadingState label={t('loading')} />;
   if (session.status === 'signed-in' && !session.user) {
     return (
       <ErrorState
-        title="Your account details did not load."
+        title={t('account.loadError', { ns: 'forms' })}
         message={session.profileError?.message}
         onRetry={session.retryProfile}
       />

@@ -22,6 +22,10 @@ describe('reasonIn', () => {
       'Finales del verano y otoño (de agosto a octubre): al menos 3 especies en flor cada mes, para que siempre haya algo en flor de la primavera a las heladas',
     ],
     [
+      "Homeground's catalogue holds native plants of the eastern and central United States and does not cover your state yet, so it does not recommend plants there: eastern plants would be the wrong choice. A native-plant society or extension office near you can help.",
+      'El catálogo de Homeground reúne plantas nativas del este y el centro de Estados Unidos y todavía no cubre tu estado, así que no recomienda plantas allí: las plantas del este no serían una buena elección. Una sociedad de plantas nativas o la oficina de extensión más cercana pueden ayudarte.',
+    ],
+    [
       '200 ft² (18.6 m²) has room for about 7 species, each in a group of several plants.',
       'En 200 ft² (18.6 m²) caben unas 7 especies, cada una en un grupo de varias plantas.',
     ],

@@ -302,6 +302,12 @@ const RULES: Rule[] = [
     /^(.+) has room for about (\d+) species, each in a group of several plants\.$/,
     (area, n) => `En ${area} caben unas ${n} especies, cada una en un grupo de varias plantas.`,
   ],
+  // The catalogue's coverage: a place it does not cover yet.
+  [
+    /^Homeground's catalogue holds native plants of the eastern and central United States and does not cover (your state|your ecoregion \(EPA Level III (.+)\)) yet, so it does not recommend plants there: eastern plants would be the wrong choice\. A native-plant society or extension office near you can help\.$/,
+    (where, code) =>
+      `El catálogo de Homeground reúne plantas nativas del este y el centro de Estados Unidos y todavía no cubre ${where === 'your state' ? 'tu estado' : `tu ecorregión (nivel III de la EPA ${code})`}, así que no recomienda plantas allí: las plantas del este no serían una buena elección. Una sociedad de plantas nativas o la oficina de extensión más cercana pueden ayudarte.`,
+  ],
   // Roles in the mix.
   [/^the only one of the (.+)s$/, (noun) => (BLOOMERS[noun] ? BLOOMERS[noun][1] : undefined)],
   [
@@ -341,6 +347,11 @@ export function partsIn<P extends Pick<ScorePart, 'reason'>>(parts: readonly P[]
   return locale === 'en' ? [...parts] : parts.map((p) => ({ ...p, reason: reasonIn(p.reason, locale) }));
 }
 
+/** The coverage answer with its message in the reader's language. */
+function coverageIn<C extends { message?: string }>(coverage: C, locale: WordLocale): C {
+  return coverage.message === undefined ? coverage : { ...coverage, message: reasonIn(coverage.message, locale) };
+}
+
 /** A ranking's reasons, near misses' reasons included, in the reader's language. */
 export function recommendationsIn(answer: RecommendationsResponse, locale: WordLocale): RecommendationsResponse {
   if (locale === 'en') return answer;
@@ -350,7 +361,12 @@ export function recommendationsIn(answer: RecommendationsResponse, locale: WordL
       parts: partsIn(s.parts, locale),
       ...(s.ineligibleReason !== undefined ? { ineligibleReason: reasonIn(s.ineligibleReason, locale) } : {}),
     }));
-  return { ...answer, ranked: each(answer.ranked), alsoConsider: each(answer.alsoConsider) };
+  return {
+    ...answer,
+    ranked: each(answer.ranked),
+    alsoConsider: each(answer.alsoConsider),
+    coverage: coverageIn(answer.coverage, locale),
+  };
 }
 
 /** A balanced mix with each species' reasons and roles in the reader's language. */
@@ -361,10 +377,14 @@ export function mixIn(mix: MixResponse, locale: WordLocale): MixResponse {
     parts: partsIn(c.parts, locale),
     roles: c.roles.map((r) => reasonIn(r, locale)),
   }));
-  // The rules' headlines and the size sentence; their details name species and counts and stay as written.
+  // The rules' headlines and the size sentence; their details and the notices are written in the
+  // reader's language by the engine itself (palette-balancing/mix-words.ts, given the locale).
   const constraints = mix.palette.constraints.map((c) => ({ ...c, rule: reasonIn(c.rule, locale) }));
   const sizeReason = reasonIn(mix.palette.sizeReason, locale);
-  return { ...mix, palette: { ...mix.palette, chosen, constraints, sizeReason } };
+  // The engine writes the notices in the reader's language already, except the coverage sentence.
+  const notices = mix.palette.notices.map((n) => reasonIn(n, locale));
+  const coverage = coverageIn(mix.palette.coverage, locale);
+  return { ...mix, palette: { ...mix.palette, chosen, constraints, sizeReason, notices, coverage } };
 }
 
 /** The alternatives for one place in a mix, with their reasons in the reader's language. */

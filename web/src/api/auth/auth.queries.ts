@@ -1,5 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { isApiRequestError } from '../../lib/api-request-error.js';
+import { tokenOwner, withSavedCopy } from '../../lib/offline/saved-answers.js';
 import { getMe } from './auth.api.js';
 
 export const authKeys = {
@@ -12,7 +13,14 @@ export const authKeys = {
 export function meQueryOptions(token: string) {
   return queryOptions({
     queryKey: authKeys.me(token),
-    queryFn: ({ signal }) => getMe(token, signal),
+    // The profile is kept on the device, so a signed-in page opens with no signal (My batches in the garden).
+    queryFn: async ({ signal }) => {
+      const owner = await tokenOwner(token);
+      if (!owner) return getMe(token, signal);
+      return (await withSavedCopy(owner, 'me', () => getMe(token, signal))).data;
+    },
+    // Ask even when the browser says it is offline, so the kept copy answers instead of waiting.
+    networkMode: 'offlineFirst',
     staleTime: 5 * 60_000,
     // A 401 means the token is dead; asking again cannot help.
     retry: (failures, error) => !(isApiRequestError(error) && error.statusCode === 401) && failures < 2,

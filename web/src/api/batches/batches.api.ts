@@ -1,11 +1,11 @@
 import type {
-  Batch,
   BatchSplitProposalAnswer,
   BatchSplitRequest,
   FrostWarningAnswer,
   FrostWarningRequest,
   WeeklySummaryAnswer,
   GrowerSetupRequest,
+  LogEntryAnswer,
   LogEntryRequest,
   SeasonBatches,
   SeasonGrower,
@@ -41,9 +41,9 @@ export function putSplit(slug: string, body: BatchSplitRequest): Promise<SeasonB
   return httpClient.put<SeasonBatches>(`${seasonPath(slug)}/batches`, body);
 }
 
-/** Adds a batch-log entry (the batch's grower); answers the batch as it now stands. */
-export function postLogEntry(slug: string, batchId: string, body: LogEntryRequest): Promise<Batch> {
-  return httpClient.post<Batch>(`${seasonPath(slug)}/batches/${encodeURIComponent(batchId)}/log`, body);
+/** Adds a batch-log entry (the batch's grower); answers the entry as stored and the batch's totals. */
+export function postLogEntry(slug: string, batchId: string, body: LogEntryRequest): Promise<LogEntryAnswer> {
+  return httpClient.post<LogEntryAnswer>(`${seasonPath(slug)}/batches/${encodeURIComponent(batchId)}/log`, body);
 }
 
 /** Targets against sown, up and ready, with the ready forecast (organisers). */

@@ -113,6 +113,11 @@ export function editSlot(groupSlug: string, slotId: string, body: PickupSlotRequ
   return httpClient.put<PlantShare>(`${sharePath(groupSlug)}/slots/${enc(slotId)}`, body);
 }
 
+/** Deletes a pickup slot nobody has reserved in (a slot with reservations answers 409 saying so). */
+export function deleteSlot(groupSlug: string, slotId: string): Promise<PlantShare> {
+  return httpClient.delete<PlantShare>(`${sharePath(groupSlug)}/slots/${enc(slotId)}`);
+}
+
 /** The waitlist per species with names and e-mails (organisers only). */
 export function getShareWaitlist(groupSlug: string, signal?: AbortSignal): Promise<ShareWaitlist> {
   return httpClient.get<ShareWaitlist>(`${sharePath(groupSlug)}/waitlist`, { signal });

@@ -22,6 +22,7 @@ import {
   checkIn,
   claimWaitlistOffer,
   editShare,
+  deleteSlot,
   editSlot,
   joinWaitlist,
   openShare,
@@ -95,6 +96,8 @@ export const useAddStockMutation = (groupSlug: string) =>
   useShareWrite(groupSlug, (body: AddStockRequest) => addStock(groupSlug, body));
 export const useAddSlotMutation = (groupSlug: string) =>
   useShareWrite(groupSlug, (body: PickupSlotRequest) => addSlot(groupSlug, body));
+export const useDeleteSlotMutation = (groupSlug: string) =>
+  useShareWrite(groupSlug, (slotId: string) => deleteSlot(groupSlug, slotId));
 export const useEditSlotMutation = (groupSlug: string) =>
   useShareWrite(groupSlug, ({ slotId, body }: { slotId: string; body: PickupSlotRequest }) =>
     editSlot(groupSlug, slotId, body),

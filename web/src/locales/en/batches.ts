@@ -79,6 +79,9 @@ export const batches = {
     other: 'Something else',
   },
   offline: {
+    saved:
+      'No connection: this is your batches as this device saved them on {{when}}. New log entries wait here and go when the signal returns.',
+    savedLabel: 'Saved on this device',
     kept: 'Kept on this device, not yet sent. It goes by itself when you have a connection again.',
     notYetSent: 'Not yet sent',
     refused: 'Not accepted: {{reason}}',

@@ -46,6 +46,25 @@ export const editor = {
     json: 'Written as JSON, as in an exported CSV: a list of entries.',
     blank: 'Leave blank when not known.',
   },
+  entries: {
+    cautions: {
+      none: 'No cautions yet. Add one where the plant or the work with it can hurt someone.',
+      kind: 'Caution {{n}}: what kind',
+      text: 'Caution {{n}}: what to say',
+      textHint: 'Calm and specific, as it will read on the card (at least 10 characters).',
+      source: 'Caution {{n}}: source',
+      add: 'Add a caution',
+      remove: 'Remove caution {{n}}',
+    },
+    reconciliations: {
+      none: 'No notes yet. Add one where this record knowingly differs from the reference data.',
+      field: 'Note {{n}}: which fact',
+      chooseField: 'Choose the fact',
+      note: 'Note {{n}}: why the record differs',
+      add: 'Add a note',
+      remove: 'Remove note {{n}}',
+    },
+  },
   yesNo: { true: 'Yes', false: 'No', unknown: 'Not known' },
   facts: {
     usdaSymbol: 'the USDA symbol',

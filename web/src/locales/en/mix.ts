@@ -129,6 +129,22 @@ export const mix = {
     line_other: ' — {{count}} species for {{area}} in {{state}}',
   },
   bloom: {
+    legendItem: '{{label}}: {{colour}}',
+    // Two letters in each bloom cell beside its colour, so colour is never the only cue (one per colour, all different).
+    cellLabel: {
+      white: 'Wh',
+      cream: 'Cr',
+      yellow: 'Ye',
+      orange: 'Or',
+      red: 'Re',
+      pink: 'Pk',
+      magenta: 'Mg',
+      purple: 'Pu',
+      lavender: 'Lv',
+      blue: 'Bu',
+      green: 'Gn',
+      brown: 'Br',
+    },
     intro:
       'The months each species of your mix flowers. On a narrow screen, scroll the chart sideways to see every month.',
     caption: 'Bloom chart: the months each species of your mix flowers',

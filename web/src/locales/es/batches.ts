@@ -84,6 +84,9 @@ export const batches = {
     other: 'Otra cosa',
   },
   offline: {
+    saved:
+      'Sin conexión: estos son tus lotes tal como este dispositivo los guardó el {{when}}. Las anotaciones nuevas esperan aquí y se envían cuando vuelva la señal.',
+    savedLabel: 'Guardado en este dispositivo',
     kept: 'Guardado en este dispositivo, todavía sin enviar. Se envía solo cuando vuelvas a tener conexión.',
     notYetSent: 'Todavía sin enviar',
     refused: 'No se aceptó: {{reason}}',

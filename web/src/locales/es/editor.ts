@@ -49,6 +49,25 @@ export const editor = {
     json: 'En JSON, como en un CSV exportado: una lista de entradas.',
     blank: 'Déjalo en blanco si no se sabe.',
   },
+  entries: {
+    cautions: {
+      none: 'Aún no hay precauciones. Añade una si la planta o el trabajo con ella puede hacer daño.',
+      kind: 'Precaución {{n}}: de qué tipo',
+      text: 'Precaución {{n}}: qué decir',
+      textHint: 'Con calma y en concreto, como se leerá en la ficha (al menos 10 caracteres).',
+      source: 'Precaución {{n}}: fuente',
+      add: 'Añadir una precaución',
+      remove: 'Quitar la precaución {{n}}',
+    },
+    reconciliations: {
+      none: 'Aún no hay notas. Añade una si este registro difiere a sabiendas de los datos de referencia.',
+      field: 'Nota {{n}}: qué dato',
+      chooseField: 'Elige el dato',
+      note: 'Nota {{n}}: por qué difiere el registro',
+      add: 'Añadir una nota',
+      remove: 'Quitar la nota {{n}}',
+    },
+  },
   yesNo: { true: 'Sí', false: 'No', unknown: 'No se sabe' },
   facts: {
     usdaSymbol: 'el símbolo USDA',

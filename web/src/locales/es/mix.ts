@@ -133,6 +133,21 @@ export const mix = {
     line_other: ' — {{count}} especies para {{area}} en {{state}}',
   },
   bloom: {
+    legendItem: '{{label}}: {{colour}}',
+    cellLabel: {
+      white: 'Bl',
+      cream: 'Cr',
+      yellow: 'Am',
+      orange: 'Na',
+      red: 'Rj',
+      pink: 'Rs',
+      magenta: 'Mg',
+      purple: 'Mo',
+      lavender: 'Lv',
+      blue: 'Az',
+      green: 'Ve',
+      brown: 'Mr',
+    },
     intro:
       'Los meses en que florece cada especie de tu mezcla. En una pantalla angosta, desliza el calendario de lado para ver todos los meses.',
     caption: 'Calendario de floración: los meses en que florece cada especie de tu mezcla',

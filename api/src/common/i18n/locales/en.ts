@@ -23,6 +23,43 @@ export const en = {
       MP: 'The Northern Mariana Islands',
     },
   },
+  auth: {
+    wrongPassword: 'E-mail or password is wrong.',
+    switchedOff: 'This account is switched off: ask a Homeground admin.',
+    tooManyAttempts: 'Too many attempts: wait a minute and try again.',
+    tooManyWrong_one: 'Too many wrong passwords for this e-mail address: wait {{count}} minute and try again.',
+    tooManyWrong_other: 'Too many wrong passwords for this e-mail address: wait {{count}} minutes and try again.',
+    passwordPersonal: 'must not contain your e-mail name, your name or "Homeground"',
+    passwordWeak: 'is too easy to guess (a common password or a simple pattern): try three or four unrelated words',
+    linkUnknown: 'This confirmation link was already used or is not one we sent: sign in, or sign up again.',
+    linkOld: 'This confirmation link is more than {{hours}} hours old: sign up again.',
+    alreadyHasAccount: 'This address already has an account: sign in instead.',
+    confirmMail: {
+      thanks:
+        'Thank you for joining Homeground. Open the link below to confirm this is your address, and your account is ready.',
+      hours:
+        'The link works for {{hours}} hours. If you did not sign up, you can simply ignore this message: no account is made.',
+      action: 'Confirm my address',
+      subject: 'Confirm your address for Homeground',
+    },
+    alreadyMail: {
+      someone:
+        'Someone asked to make a Homeground account with this address, but you already have one, so nothing has changed.',
+      ifYou:
+        'If it was you, sign in with your password. If it was not, you can ignore this message: your account is as it was.',
+      action: 'Sign in',
+      subject: 'You already have a Homeground account',
+    },
+    mailFooter: 'You got this e-mail because someone entered your address on the Homeground sign-up page.',
+  },
+  share: {
+    /** General words under a plant share's list of plants: the usual cautions, and local rules first. */
+    notes: {
+      cautions:
+        'Cautions are shown with each plant, as on its fact card: wear gloves for plants with irritating sap and wash your hands after handling them.',
+      dig: 'Before you dig, call 811 so buried lines are marked; your town’s rules for planting by streets, sidewalks and drains come first.',
+    },
+  },
   mail: {
     openAddress: 'Or open this address: {{url}}',
     greeting: 'Hello {{name}},',
@@ -42,6 +79,16 @@ export const en = {
         "You got this e-mail because you reserved plants from {{group}} on Homeground. Your name and e-mail are seen only by the group's organisers and are deleted after the share.",
       subjectChanged: 'Your reservation at the {{group}} plant share has changed',
       subjectReserved: 'Your plants are reserved: {{group}} plant share, {{when}}',
+    },
+    shareChanged: {
+      intro: 'The organisers of the {{group}} plant share have changed something about your pickup.',
+      day: 'The plant share is now on {{now}} (it was {{before}}).',
+      place: 'The place is now {{now}} (it was {{before}}).',
+      slot: 'Your pickup slot is now {{now}} (it was {{before}}).',
+      still: 'Your plants are still reserved: {{plants}}.',
+      link: 'If the new time or place does not suit you, change your slot or cancel with your private link below, so someone on the waitlist gets the plants. This link replaces the one in your earlier e-mails.',
+      action: 'Change or cancel your reservation',
+      subject: 'A change to your pickup: {{group}} plant share',
     },
     offer: {
       free_one:

@@ -27,6 +27,45 @@ export const es = {
       MP: 'Las Islas Marianas del Norte',
     },
   },
+  auth: {
+    wrongPassword: 'El correo o la contraseña no son correctos.',
+    switchedOff: 'Esta cuenta está desactivada: pídele ayuda a una persona que administre Homeground.',
+    tooManyAttempts: 'Demasiados intentos: espera un minuto y vuelve a probar.',
+    tooManyWrong_one: 'Demasiadas contraseñas equivocadas para este correo: espera {{count}} minuto y vuelve a probar.',
+    tooManyWrong_other:
+      'Demasiadas contraseñas equivocadas para este correo: espera {{count}} minutos y vuelve a probar.',
+    passwordPersonal: 'no debe contener el nombre de tu correo, tu nombre ni "Homeground"',
+    passwordWeak:
+      'es demasiado fácil de adivinar (una contraseña común o un patrón sencillo): prueba con tres o cuatro palabras sin relación entre sí',
+    linkUnknown:
+      'Este enlace de confirmación ya se usó o no lo enviamos nosotros: inicia sesión o vuelve a registrarte.',
+    linkOld: 'Este enlace de confirmación tiene más de {{hours}} horas: vuelve a registrarte.',
+    alreadyHasAccount: 'Esta dirección ya tiene una cuenta: mejor inicia sesión.',
+    confirmMail: {
+      thanks:
+        'Gracias por unirte a Homeground. Abre el enlace de abajo para confirmar que esta es tu dirección, y tu cuenta quedará lista.',
+      hours:
+        'El enlace sirve durante {{hours}} horas. Si no te registraste, puedes ignorar este mensaje: no se crea ninguna cuenta.',
+      action: 'Confirmar mi dirección',
+      subject: 'Confirma tu dirección para Homeground',
+    },
+    alreadyMail: {
+      someone:
+        'Alguien pidió crear una cuenta de Homeground con esta dirección, pero ya tienes una, así que nada ha cambiado.',
+      ifYou:
+        'Si fuiste tú, inicia sesión con tu contraseña. Si no, puedes ignorar este mensaje: tu cuenta sigue como estaba.',
+      action: 'Iniciar sesión',
+      subject: 'Ya tienes una cuenta de Homeground',
+    },
+    mailFooter: 'Recibes este correo porque alguien escribió tu dirección en la página de registro de Homeground.',
+  },
+  share: {
+    notes: {
+      cautions:
+        'Las precauciones aparecen con cada planta, como en su ficha: usa guantes con las plantas de savia irritante y lávate las manos después de tocarlas.',
+      dig: 'Antes de cavar, llama al 811 para que marquen las líneas enterradas; las normas de tu pueblo para plantar junto a calles, aceras y desagües van primero.',
+    },
+  },
   mail: {
     openAddress: 'O abre esta dirección: {{url}}',
     greeting: 'Hola, {{name}}:',
@@ -46,6 +85,16 @@ export const es = {
         'Recibes este correo porque reservaste plantas de {{group}} en Homeground. Tu nombre y tu correo solo los ven quienes organizan el grupo y se borran después del reparto.',
       subjectChanged: 'Tu reserva en el reparto de plantas de {{group}} ha cambiado',
       subjectReserved: 'Tus plantas están reservadas: reparto de plantas de {{group}}, {{when}}',
+    },
+    shareChanged: {
+      intro: 'Quienes organizan el reparto de plantas de {{group}} han cambiado algo de tu recogida.',
+      day: 'El reparto de plantas ahora es el {{now}} (antes era el {{before}}).',
+      place: 'El lugar ahora es {{now}} (antes era {{before}}).',
+      slot: 'Tu horario de recogida ahora es {{now}} (antes era {{before}}).',
+      still: 'Tus plantas siguen reservadas: {{plants}}.',
+      link: 'Si el nuevo horario o lugar no te viene bien, cambia tu horario o cancela con tu enlace privado de abajo, para que las plantas pasen a alguien de la lista de espera. Este enlace sustituye al de tus correos anteriores.',
+      action: 'Cambiar o cancelar tu reserva',
+      subject: 'Un cambio en tu recogida: reparto de plantas de {{group}}',
     },
     offer: {
       free_one:

@@ -9,6 +9,7 @@ import {
   writeAccessToken,
 } from '../../../lib/access-token.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
+import { forgetSavedAnswers } from '../../../lib/offline/saved-answers.js';
 import { SessionContext, type Session, type SessionStatus } from '../hooks/session-context.js';
 
 /** Holds the signed-in person: token in localStorage, profile from GET /api/me. */
@@ -22,6 +23,8 @@ export function SessionProvider({ children }: { children: ReactNode }) {
     clearAccessToken();
     setToken(null);
     queryClient.clear();
+    // Answers kept for reading with no signal belong to this person: the next one on the device sees none.
+    void forgetSavedAnswers();
   }, [queryClient]);
 
   const signIn = useCallback(

@@ -1,12 +1,14 @@
+import { MessageBar, MessageBarBody } from '@fluentui/react-components';
 import type { SeasonBatches } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
-import { batchesQueryOptions } from '../../../api/batches/batches.queries.js';
+import { myBatchesQueryOptions } from '../../../api/batches/batches.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { QueryState } from '../../../components/states/index.js';
 import { SupplyTable } from '../../../components/supplies/supply-table.js';
 import { useTranslation } from 'react-i18next';
+import { useFormatters } from '../../../lib/i18n/index.js';
 import { localToday } from '../utils/my-batches-words.js';
 import { BatchCard } from './batch-card.js';
 import { CalendarDownload } from './calendar-download.js';
@@ -19,7 +21,7 @@ import { OutboxBar } from './outbox-bar.js';
 export function MyBatchesPage({ slug, userId }: { slug: string; userId: string }) {
   const styles = useMyBatchesStyles();
   const { t } = useTranslation('batches');
-  const batches = useQuery(batchesQueryOptions(slug));
+  const batches = useQuery(myBatchesQueryOptions(slug, userId));
   const outbox = useLogOutbox(slug, userId);
   return (
     <>
@@ -29,15 +31,31 @@ export function MyBatchesPage({ slug, userId }: { slug: string; userId: string }
         query={batches}
         loading={t('page.loading')}
         error={t('page.failed')}
-        isEmpty={(d) => d.batches.length === 0}
+        isEmpty={(d) => d.data.batches.length === 0}
         empty={t('page.none')}
       >
-        {(d) => <BatchList slug={slug} answer={d} outbox={outbox} />}
+        {(d) => (
+          <>
+            {d.savedAt ? <SavedCopyBar savedAt={d.savedAt} /> : null}
+            <BatchList slug={slug} answer={d.data} outbox={outbox} />
+          </>
+        )}
       </QueryState>
       <div className={styles.after}>
         <GrowerSetupCard slug={slug} userId={userId} />
       </div>
     </>
+  );
+}
+
+/** Says the page shows the copy kept on the device, and from when, because the server could not be reached. */
+function SavedCopyBar({ savedAt }: { savedAt: string }) {
+  const { t } = useTranslation('batches');
+  const { moment } = useFormatters();
+  return (
+    <MessageBar intent="info" aria-label={t('offline.savedLabel')}>
+      <MessageBarBody>{t('offline.saved', { when: moment(savedAt) })}</MessageBarBody>
+    </MessageBar>
   );
 }
 

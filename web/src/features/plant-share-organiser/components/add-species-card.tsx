@@ -17,7 +17,7 @@ import { speciesListQueryOptions } from '../../../api/species/species.queries.js
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { asSentence } from '../../../lib/forms/field-errors.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
 import { useOrganiserStyles } from './organiser.styles.js';
 
 /**
@@ -25,6 +25,7 @@ import { useOrganiserStyles } from './organiser.styles.js';
  * plants that got ready. Households waiting for it (none yet, usually) are offered them first.
  */
 export function AddSpeciesCard({ share }: { share: PlantShare }) {
+  const { t } = useTranslation('organiser');
   const styles = useOrganiserStyles();
   const addStock = useAddStockMutation(share.groupSlug);
   const [text, setText] = useState('');
@@ -42,7 +43,7 @@ export function AddSpeciesCard({ share }: { share: PlantShare }) {
 
   const submit = () => {
     setNote(null);
-    if (!slug) return setNote({ intent: 'error', text: W.addSpeciesPick });
+    if (!slug) return setNote({ intent: 'error', text: t('addSpeciesPick') });
     const parsed = addStockRequestSchema.safeParse({
       lines: [{ speciesSlug: slug, count: count.trim() === '' ? Number.NaN : Number(count) }],
     });
@@ -56,7 +57,7 @@ export function AddSpeciesCard({ share }: { share: PlantShare }) {
         setSlug('');
         setCount('');
         setText('');
-        setNote({ intent: 'success', text: W.stockAdded });
+        setNote({ intent: 'success', text: t('stockAdded') });
       },
       onError: (e) => setNote({ intent: 'error', text: e.message }),
     });
@@ -65,20 +66,24 @@ export function AddSpeciesCard({ share }: { share: PlantShare }) {
   return (
     <ContentCard aria-labelledby="add-species">
       <Heading level="section" id="add-species">
-        {W.addSpeciesHeading}
+        {t('addSpeciesHeading')}
       </Heading>
-      <p className={styles.lead}>{W.addSpeciesLead}</p>
-      <Field label={W.addSpeciesSlug}>
+      <p className={styles.lead}>{t('addSpeciesLead')}</p>
+      <Field label={t('addSpeciesSlug')}>
         <SearchBox value={text} onChange={(_, d) => setText(d.value)} />
       </Field>
       {items.length > 0 ? (
-        <RadioGroup value={slug} onChange={(_, d) => setSlug(d.value)} aria-label={W.addSpeciesSlug}>
+        <RadioGroup value={slug} onChange={(_, d) => setSlug(d.value)} aria-label={t('addSpeciesSlug')}>
           {items.map((s) => (
             <Radio key={s.slug} value={s.slug} label={`${s.commonName} (${s.scientificName})`} />
           ))}
         </RadioGroup>
       ) : null}
-      <Field label={W.addSpeciesCount} validationMessage={countError} validationState={countError ? 'error' : 'none'}>
+      <Field
+        label={t('addSpeciesCount')}
+        validationMessage={countError}
+        validationState={countError ? 'error' : 'none'}
+      >
         <Input className={styles.number} inputMode="numeric" value={count} onChange={(_, d) => setCount(d.value)} />
       </Field>
       {note ? (
@@ -88,7 +93,7 @@ export function AddSpeciesCard({ share }: { share: PlantShare }) {
       ) : null}
       <div className={styles.actions}>
         <Button icon={<AddRegular />} onClick={submit} disabled={addStock.isPending}>
-          {W.addSpeciesSubmit}
+          {t('addSpeciesSubmit')}
         </Button>
       </div>
     </ContentCard>

@@ -1,7 +1,7 @@
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import { CheckmarkRegular, DismissRegular } from '@fluentui/react-icons';
 import type { CheckInRequest, ReservationStatus } from '@homeground/shared';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   row: {
@@ -32,6 +32,7 @@ export interface CheckInRowProps {
 
 /** One household at check-in: who, what, and two big buttons (checked in / no-show) until one is tapped. */
 export function CheckInRow({ name, plantsLine, state, isPending, onMark }: CheckInRowProps) {
+  const { t } = useTranslation('organiser');
   const styles = useStyles();
   return (
     <li className={styles.row} aria-label={name}>
@@ -39,7 +40,7 @@ export function CheckInRow({ name, plantsLine, state, isPending, onMark }: Check
         <div className={styles.name}>{name}</div>
         <div className={styles.plants}>{plantsLine}</div>
         <div className={styles.state} aria-live="polite">
-          {W.stateWords[state]}
+          {t(`stateWords.${state}`)}
         </div>
       </div>
       <div className={styles.actions}>
@@ -49,20 +50,20 @@ export function CheckInRow({ name, plantsLine, state, isPending, onMark }: Check
               className={styles.big}
               appearance="primary"
               icon={<CheckmarkRegular />}
-              aria-label={W.checkInFor(name)}
+              aria-label={t('checkInFor', { name })}
               disabled={isPending}
               onClick={() => onMark('picked-up')}
             >
-              {W.checkedIn}
+              {t('checkedIn')}
             </Button>
             <Button
               className={styles.big}
               icon={<DismissRegular />}
-              aria-label={W.noShowFor(name)}
+              aria-label={t('noShowFor', { name })}
               disabled={isPending}
               onClick={() => onMark('no-show')}
             >
-              {W.noShow}
+              {t('noShow')}
             </Button>
           </>
         ) : null}

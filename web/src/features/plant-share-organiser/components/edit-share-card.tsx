@@ -8,14 +8,20 @@ import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { failureFromApi } from '../../../lib/forms/field-errors.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
 import { shareSettingsSchema, toEditShare } from '../utils/share-form.js';
 import { renameFields } from './open-share-form.js';
 import { useOrganiserStyles } from './organiser.styles.js';
 
 const useStyles = makeStyles({
   form: { display: 'grid', gap: tokens.spacingVerticalL, maxWidth: '40rem' },
-  pair: { display: 'grid', gridTemplateColumns: '1fr 1fr', gap: tokens.spacingHorizontalL },
+  pair: {
+    display: 'grid',
+    gridTemplateColumns: 'minmax(0, 1fr) minmax(0, 1fr)',
+    gap: tokens.spacingHorizontalL,
+    // On a phone the two limits stack: their labels are long (more so in Spanish) and the boxes need room.
+    '@media (max-width: 480px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
+  },
   submit: { justifySelf: 'start', minHeight: '44px' },
 });
 
@@ -25,6 +31,7 @@ const useStyles = makeStyles({
  * above the button); nothing is saved then.
  */
 export function EditShareCard({ share }: { share: PlantShare }) {
+  const { t } = useTranslation('organiser');
   const styles = useStyles();
   const organiser = useOrganiserStyles();
   const [editing, setEditing] = useState(false);
@@ -56,24 +63,24 @@ export function EditShareCard({ share }: { share: PlantShare }) {
   return (
     <ContentCard aria-labelledby="edit-share">
       <Heading level="section" id="edit-share">
-        {W.editHeading}
+        {t('editHeading')}
       </Heading>
-      <p className={organiser.lead}>{W.editLead}</p>
+      <p className={organiser.lead}>{t('editLead')}</p>
       {saved ? (
         <MessageBar intent="success">
-          <MessageBarBody>{W.saved}</MessageBarBody>
+          <MessageBarBody>{t('saved')}</MessageBarBody>
         </MessageBar>
       ) : null}
       {editing ? (
         <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-labelledby="edit-share">
-          <SchemaTextField form={form} name="date" label={W.date} type="date" required />
-          <SchemaTextField form={form} name="placeName" label={W.placeName} hint={W.placeHint} required />
-          <SchemaTextField form={form} name="address" label={W.address} required autoComplete="street-address" />
-          <SchemaTextField form={form} name="directions" label={W.directions} hint={W.directionsHint} />
-          <SchemaTextField form={form} name="whatToBring" label={W.whatToBring} hint={W.whatToBringHint} />
+          <SchemaTextField form={form} name="date" label={t('date')} type="date" required />
+          <SchemaTextField form={form} name="placeName" label={t('placeName')} hint={t('placeHint')} required />
+          <SchemaTextField form={form} name="address" label={t('address')} required autoComplete="street-address" />
+          <SchemaTextField form={form} name="directions" label={t('directions')} hint={t('directionsHint')} />
+          <SchemaTextField form={form} name="whatToBring" label={t('whatToBring')} hint={t('whatToBringHint')} />
           <div className={styles.pair}>
-            <SchemaTextField form={form} name="perSpecies" label={W.limitPerSpecies} required />
-            <SchemaTextField form={form} name="total" label={W.limitTotal} required />
+            <SchemaTextField form={form} name="perSpecies" label={t('limitPerSpecies')} required />
+            <SchemaTextField form={form} name="total" label={t('limitTotal')} required />
           </div>
           {form.failure ? (
             <MessageBar intent="error">
@@ -82,14 +89,14 @@ export function EditShareCard({ share }: { share: PlantShare }) {
           ) : null}
           <div className={organiser.actions}>
             <Button className={styles.submit} type="submit" appearance="primary" disabled={edit.isPending}>
-              {edit.isPending ? W.saving : W.save}
+              {edit.isPending ? t('saving') : t('save')}
             </Button>
-            <Button onClick={() => setEditing(false)}>{W.editHide}</Button>
+            <Button onClick={() => setEditing(false)}>{t('editHide')}</Button>
           </div>
         </form>
       ) : (
         <Button icon={<EditRegular />} onClick={() => (setEditing(true), setSaved(false))}>
-          {W.editShow}
+          {t('editShow')}
         </Button>
       )}
     </ContentCard>

@@ -8,12 +8,19 @@ import { Heading } from '../../../components/page/page-heading.js';
 import { ApiRequestError, isApiRequestError } from '../../../lib/api-request-error.js';
 import { asSentence, failureFromApi } from '../../../lib/forms/field-errors.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
+import { useSlotCheckWords } from '../hooks/use-slot-check-words.js';
 import { checkSlots, shareSettingsSchema, type SlotRow, type SlotRowErrors, toOpenShare } from '../utils/share-form.js';
 
 const useStyles = makeStyles({
   form: { display: 'grid', gap: tokens.spacingVerticalL, maxWidth: '40rem' },
-  pair: { display: 'grid', gridTemplateColumns: '1fr 1fr', gap: tokens.spacingHorizontalL },
+  pair: {
+    display: 'grid',
+    gridTemplateColumns: 'minmax(0, 1fr) minmax(0, 1fr)',
+    gap: tokens.spacingHorizontalL,
+    // On a phone the two limits stack: their labels are long (more so in Spanish) and the boxes need room.
+    '@media (max-width: 480px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
+  },
   slot: {
     display: 'grid',
     gridTemplateColumns: '1fr 1fr 1fr auto',
@@ -47,6 +54,8 @@ export function renameFields(error: unknown): unknown {
 
 /** Opens the season's plant share: the day, place, pickup slots and limits (stock comes from the season). */
 export function OpenShareForm({ groupSlug, defaultDate }: { groupSlug: string; defaultDate?: string }) {
+  const { t } = useTranslation('organiser');
+  const slotCheck = useSlotCheckWords();
   const styles = useStyles();
   const open = useOpenShareMutation(groupSlug);
   const form = useSchemaForm({
@@ -71,7 +80,7 @@ export function OpenShareForm({ groupSlug, defaultDate }: { groupSlug: string; d
   };
 
   const submit = (event: FormEvent) => {
-    const slots = checkSlots(form.values.date, rows);
+    const slots = checkSlots(form.values.date, rows, slotCheck);
     setRowErrors('errors' in slots ? slots.errors : []);
     setSlotsMessage('errors' in slots ? slots.message : undefined);
     form.handleSubmit((settings) => {
@@ -96,49 +105,49 @@ export function OpenShareForm({ groupSlug, defaultDate }: { groupSlug: string; d
   return (
     <ContentCard aria-labelledby="open-share">
       <Heading level="section" id="open-share">
-        {W.openHeading}
+        {t('openHeading')}
       </Heading>
       <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-labelledby="open-share">
-        <p className={styles.lead}>{W.noShareYet}</p>
-        <SchemaTextField form={form} name="date" label={W.date} type="date" required />
-        <SchemaTextField form={form} name="placeName" label={W.placeName} hint={W.placeHint} required />
-        <SchemaTextField form={form} name="address" label={W.address} required autoComplete="street-address" />
-        <SchemaTextField form={form} name="directions" label={W.directions} hint={W.directionsHint} />
-        <SchemaTextField form={form} name="whatToBring" label={W.whatToBring} hint={W.whatToBringHint} />
+        <p className={styles.lead}>{t('noShareYet')}</p>
+        <SchemaTextField form={form} name="date" label={t('date')} type="date" required />
+        <SchemaTextField form={form} name="placeName" label={t('placeName')} hint={t('placeHint')} required />
+        <SchemaTextField form={form} name="address" label={t('address')} required autoComplete="street-address" />
+        <SchemaTextField form={form} name="directions" label={t('directions')} hint={t('directionsHint')} />
+        <SchemaTextField form={form} name="whatToBring" label={t('whatToBring')} hint={t('whatToBringHint')} />
         <div className={styles.pair}>
-          <SchemaTextField form={form} name="perSpecies" label={W.limitPerSpecies} required />
-          <SchemaTextField form={form} name="total" label={W.limitTotal} required />
+          <SchemaTextField form={form} name="perSpecies" label={t('limitPerSpecies')} required />
+          <SchemaTextField form={form} name="total" label={t('limitTotal')} required />
         </div>
         <section aria-labelledby="slots-heading">
           <Heading level="card" id="slots-heading">
-            {W.slotsHeading}
+            {t('slotsHeading')}
           </Heading>
-          <p className={styles.lead}>{W.slotsLead}</p>
+          <p className={styles.lead}>{t('slotsLead')}</p>
           {rows.map((row, i) => (
             <div key={i} className={styles.slot}>
               <SlotInput
-                label={W.slotStart(i + 1)}
+                label={t('slotStart', { n: i + 1 })}
                 type="time"
                 value={row.start}
                 error={rowErrors[i]?.start}
                 onChange={(v) => setRow(i, { start: v })}
               />
               <SlotInput
-                label={W.slotEnd(i + 1)}
+                label={t('slotEnd', { n: i + 1 })}
                 type="time"
                 value={row.end}
                 error={rowErrors[i]?.end}
                 onChange={(v) => setRow(i, { end: v })}
               />
               <SlotInput
-                label={W.slotCapacity(i + 1)}
+                label={t('slotCapacity', { n: i + 1 })}
                 value={row.capacity}
                 error={rowErrors[i]?.capacity}
                 onChange={(v) => setRow(i, { capacity: v })}
               />
               <Button
                 icon={<DeleteRegular />}
-                aria-label={W.removeSlot(i + 1)}
+                aria-label={t('removeSlot', { n: i + 1 })}
                 disabled={rows.length === 1}
                 onClick={() => (setRows((r) => r.filter((_, j) => j !== i)), setRowErrors([]))}
               />
@@ -150,7 +159,7 @@ export function OpenShareForm({ groupSlug, defaultDate }: { groupSlug: string; d
             </MessageBar>
           ) : null}
           <Button icon={<AddRegular />} onClick={() => setRows((r) => [...r, nextSlot(r[r.length - 1])])}>
-            {W.addSlot}
+            {t('addSlot')}
           </Button>
         </section>
         {form.failure ? (
@@ -159,7 +168,7 @@ export function OpenShareForm({ groupSlug, defaultDate }: { groupSlug: string; d
           </MessageBar>
         ) : null}
         <Button className={styles.submit} type="submit" appearance="primary" disabled={open.isPending}>
-          {open.isPending ? W.saving : W.openSubmit}
+          {open.isPending ? t('saving') : t('openSubmit')}
         </Button>
       </form>
     </ContentCard>

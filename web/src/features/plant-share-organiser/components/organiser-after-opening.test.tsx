@@ -1,10 +1,10 @@
-import { screen, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import type { ShareWaitlist } from '@homeground/shared';
 import { describe, expect, it } from 'vitest';
 import { apiError, type FakeRoutes } from '../../../testing/fake-api.js';
 import { maraOrganiser } from '../../../testing/fixtures.js';
 import { renderApp } from '../../../testing/render-app.js';
-import { SHARE_PATH, SLOT_1, share } from '../testing/organiser-fixtures.js';
+import { SHARE_PATH, SLOT_1, SLOT_2, share } from '../testing/organiser-fixtures.js';
 
 // After opening, the organiser changes the day, place, limits and slots, never below what households
 // were promised: the plant-share API (api/src/plant-share/plant-share.service.ts) answers 400 naming
@@ -100,6 +100,25 @@ describe('the organiser’s plant share after opening', () => {
     expect(await screen.findByText('The slot is added.')).toBeInTheDocument();
     const added = api.callsTo('POST', `${SHARE_PATH}/slots`)[0].body as { start: string };
     expect(added.start.slice(0, 10)).toBe(share.date);
+  });
+
+  it('deletes an empty slot only after the organiser confirms, and offers no delete for a booked one', async () => {
+    const { user, api } = openPage({
+      [`DELETE ${SHARE_PATH}/slots/${SLOT_2}`]: { body: { ...share, slots: share.slots.slice(0, 1) } },
+    });
+    const remove = await screen.findByLabelText('Delete slot 2');
+    // Slot 1 has a household booked (fixtures): the API would answer 409, so there is no button for it.
+    expect(screen.queryByLabelText('Delete slot 1')).toBeNull();
+    await user.click(remove);
+    expect(await screen.findByText('Delete slot 2 (09:30–10:00)?')).toBeInTheDocument();
+    await user.click(screen.getByText('Keep the slot'));
+    expect(api.callsTo('DELETE', `${SHARE_PATH}/slots/${SLOT_2}`)).toHaveLength(0);
+    await user.click(screen.getByLabelText('Delete slot 2'));
+    await user.click(await screen.findByText('Delete the slot'));
+    // The card is drawn again from the API's answer, which no longer has the slot.
+    await waitFor(() => expect(screen.queryByLabelText('Delete slot 2')).toBeNull());
+    expect(api.callsTo('DELETE', `${SHARE_PATH}/slots/${SLOT_2}`)).toHaveLength(1);
+    expect(screen.queryByLabelText('Save slot 2')).toBeNull();
   });
 
   it('shows the waitlist per species in the order households joined, with what is held for them', async () => {

@@ -75,6 +75,29 @@ describe('the organiser’s plant share', () => {
     expect(screen.getByRole('button', { name: 'Open for reservations' })).toBeInTheDocument();
   });
 
+  it('speaks Spanish with the page: status, slots, dates, stock and the moves from here', async () => {
+    const { user } = renderApp({
+      path: '/plant-share',
+      token: 'token',
+      locale: 'es',
+      api: {
+        'GET /api/me': { body: maraOrganiser },
+        [`GET ${SHARE_PATH}`]: { body: share },
+        [`PUT ${SHARE_PATH}/status`]: { body: { ...share, status: 'paused' } },
+      },
+    });
+    expect(await screen.findByRole('heading', { name: 'Estado: Abierto a reservas' })).toBeInTheDocument();
+    // es-US writes the morning as "a.m." (CLDR via Intl); 1 of 12 households as the fixture says.
+    expect(screen.getByText('9:00 a.m. – 9:30 a.m.: 1 de 12 hogares')).toBeInTheDocument();
+    // The Spanish long date as CLDR writes it for es-US.
+    expect(screen.getByText(/se borran el lunes, 12 de julio de 2027/)).toBeInTheDocument();
+    const stock = within(screen.getByRole('region', { name: 'Tabla de plantas que se ofrecen' }));
+    expect(stock.getByRole('textbox', { name: 'Plantas de butterfly milkweed que se ofrecen' })).toHaveValue('50');
+    expect(screen.getByRole('heading', { name: 'Horarios de recogida' })).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Pausar las reservas' }));
+    expect(await screen.findByRole('heading', { name: 'Estado: En pausa' })).toBeInTheDocument();
+  });
+
   it('saves a changed count and adds plants that got ready, each checked first', async () => {
     const { user, api } = openPage(maraOrganiser, {
       [`GET ${SHARE_PATH}`]: { body: share },

@@ -5,7 +5,7 @@ import { PageIntro } from '../../../components/page/page-intro.js';
 import { ErrorState, QueryState } from '../../../components/states/index.js';
 import { paths } from '../../../config/paths.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
 import { OpenShareForm } from './open-share-form.js';
 import { useOrganiserStyles } from './organiser.styles.js';
 import { AddSpeciesCard } from './add-species-card.js';
@@ -22,19 +22,20 @@ import { WaitlistCard } from './waitlist-card.js';
  * species and plants that got ready), the waitlist, and the way to pickup day and the season report.
  */
 export function OrganiserSharePage({ groupSlug, groupName }: { groupSlug: string; groupName: string }) {
+  const { t } = useTranslation('organiser');
   const styles = useOrganiserStyles();
   const share = useQuery(shareQueryOptions(groupSlug));
   return (
     <>
-      <PageIntro title={W.title}>{W.lead(groupName)}</PageIntro>
+      <PageIntro title={t('title')}>{t('lead', { group: groupName })}</PageIntro>
       <QueryState
         query={share}
-        loading={W.loading}
+        loading={t('loading')}
         error={(error, retry) =>
           isApiRequestError(error) && error.statusCode === 404 ? (
             <OpenShareForm groupSlug={groupSlug} />
           ) : (
-            <ErrorState title={W.loadFailed} message={error.message} onRetry={retry} />
+            <ErrorState title={t('loadFailed')} message={error.message} onRetry={retry} />
           )
         }
       >
@@ -42,9 +43,9 @@ export function OrganiserSharePage({ groupSlug, groupName }: { groupSlug: string
           <div className={styles.stack}>
             <div className={styles.actions}>
               <RouterButton to={paths.plantSharePickup.build()} appearance="primary">
-                {W.pickupLink}
+                {t('pickupLink')}
               </RouterButton>
-              <RouterButton to={paths.plantShareReport.build()}>{W.reportLink}</RouterButton>
+              <RouterButton to={paths.plantShareReport.build()}>{t('reportLink')}</RouterButton>
             </div>
             <ShareStatusCard share={s} />
             <ShareDayCard share={s} publicHref={paths.shareAvailable.build(s.groupSlug)} />

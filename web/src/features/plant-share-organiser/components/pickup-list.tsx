@@ -1,8 +1,9 @@
 import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow } from '@fluentui/react-components';
 import { CheckmarkRegular } from '@fluentui/react-icons';
 import type { PickupList as PickupListAnswer } from '@homeground/shared';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
 import { plantsLine } from '../utils/plants-line.js';
+import { useLocale } from '../../../lib/i18n/index.js';
 import { slotWords } from '../utils/slot-time.js';
 import { useOrganiserStyles } from './organiser.styles.js';
 import './pickup-print.css';
@@ -12,17 +13,31 @@ import './pickup-print.css';
  * boxes are drawn, not inputs, so they print the same in every browser.
  */
 export function PickupListTable({ list }: { list: PickupListAnswer }) {
+  const { t } = useTranslation('organiser');
+  const { locale } = useLocale();
   const styles = useOrganiserStyles();
-  const caption = `${W.pickupHeading}, ${slotWords(list.slot)}: ${W.totalsLine(list.totals.households, list.totals.plants)}`;
+  const caption = t('pickupCaption', {
+    slot: slotWords(list.slot, locale),
+    totals: t('totalsLine', {
+      households: t('households', { count: list.totals.households }),
+      plants: t('plantsCount', { count: list.totals.plants }),
+    }),
+  });
   return (
-    <div className={styles.scroller} role="region" aria-label="Pickup list table" tabIndex={0} data-print-root="pickup">
+    <div
+      className={styles.scroller}
+      role="region"
+      aria-label={t('pickupTableLabel')}
+      tabIndex={0}
+      data-print-root="pickup"
+    >
       <p className="pickup-caption">{caption}</p>
       <Table className={styles.pickupTable}>
         <TableHeader>
           <TableRow>
-            <TableHeaderCell>{W.given}</TableHeaderCell>
-            <TableHeaderCell>{W.household}</TableHeaderCell>
-            <TableHeaderCell>{W.plants}</TableHeaderCell>
+            <TableHeaderCell>{t('given')}</TableHeaderCell>
+            <TableHeaderCell>{t('household')}</TableHeaderCell>
+            <TableHeaderCell>{t('plants')}</TableHeaderCell>
           </TableRow>
         </TableHeader>
         <TableBody>
@@ -31,11 +46,11 @@ export function PickupListTable({ list }: { list: PickupListAnswer }) {
             .map((h) => (
               <TableRow key={h.reservationId}>
                 <TableCell>
-                  <span className="pickup-box" aria-label={W.stateWords[h.status]} role="img">
+                  <span className="pickup-box" aria-label={t(`stateWords.${h.status}`)} role="img">
                     {h.status === 'picked-up' ? <CheckmarkRegular /> : null}
                   </span>
                 </TableCell>
-                <TableCell>{h.name ?? W.nameGone}</TableCell>
+                <TableCell>{h.name ?? t('nameGone')}</TableCell>
                 <TableCell>{plantsLine(h.lines)}</TableCell>
               </TableRow>
             ))}

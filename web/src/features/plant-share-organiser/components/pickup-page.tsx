@@ -9,8 +9,9 @@ import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { ErrorState, QueryState } from '../../../components/states/index.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
 import { plantsLine } from '../utils/plants-line.js';
+import { useLocale } from '../../../lib/i18n/index.js';
 import { shareDateWords, slotWords } from '../utils/slot-time.js';
 import { CheckInRow } from './check-in-row.js';
 import { useOrganiserStyles } from './organiser.styles.js';
@@ -19,46 +20,54 @@ import { WalkUpCard } from './walk-up-card.js';
 
 /** Pickup day for the group's organisers: one slot's printable list, check-in on a phone, and walk-up. */
 export function PickupPage({ groupSlug }: { groupSlug: string }) {
+  const { t } = useTranslation('organiser');
   const share = useQuery(shareQueryOptions(groupSlug));
   return (
-    <QueryState query={share} loading={W.loading} error={W.loadFailed}>
+    <QueryState query={share} loading={t('loading')} error={t('loadFailed')}>
       {(s) => <PickupDay share={s} />}
     </QueryState>
   );
 }
 
 function PickupDay({ share }: { share: PlantShare }) {
+  const { t } = useTranslation('organiser');
+  const { locale } = useLocale();
   const styles = useOrganiserStyles();
   const [slotId, setSlotId] = useState(share.slots[0]?.id ?? '');
   const list = useQuery({ ...pickupListQueryOptions(share.groupSlug, slotId), enabled: slotId !== '' });
   return (
     <>
       <div data-print="hide">
-        <PageIntro title={`${W.pickupDayTitle}: ${shareDateWords(share.date)}`}>{W.pickupLead}</PageIntro>
+        <PageIntro title={t('pickupDayTitle', { date: shareDateWords(share.date, locale) })}>
+          {t('pickupLead')}
+        </PageIntro>
       </div>
       <div className={styles.stack} data-pickup-cards>
         <ContentCard aria-labelledby="pickup-slot">
           <Heading level="section" id="pickup-slot">
-            {W.pickupHeading}
+            {t('pickupHeading')}
           </Heading>
           <div data-print="hide">
-            <Field label={W.slotChoice}>
+            <Field label={t('slotChoice')}>
               <Select value={slotId} onChange={(_, d) => setSlotId(d.value)}>
                 {share.slots.map((s) => (
                   <option key={s.id} value={s.id}>
-                    {slotWords(s)} ({W.slotLine(s.booked, s.capacity)})
+                    {t('slotChoiceLine', {
+                      slot: slotWords(s, locale),
+                      booked: t('slotLine', { booked: s.booked, count: s.capacity }),
+                    })}
                   </option>
                 ))}
               </Select>
             </Field>
           </div>
-          <QueryState query={list} loading={W.loading} error={W.loadFailed}>
+          <QueryState query={list} loading={t('loading')} error={t('loadFailed')}>
             {(l) => (
               <>
                 <PickupListTable list={l} />
                 <div className={styles.actions} data-print="hide">
                   <Button icon={<PrintRegular />} onClick={() => window.print()}>
-                    {W.print}
+                    {t('print')}
                   </Button>
                 </div>
               </>
@@ -74,6 +83,7 @@ function PickupDay({ share }: { share: PlantShare }) {
 
 /** The slot's households with big checked-in / no-show buttons, for a volunteer's phone. */
 function CheckInCard({ groupSlug, list }: { groupSlug: string; list: PickupList }) {
+  const { t } = useTranslation('organiser');
   const styles = useOrganiserStyles();
   const checkIn = useCheckInMutation(groupSlug);
   const [released, setReleased] = useState<number | null>(null);
@@ -81,23 +91,23 @@ function CheckInCard({ groupSlug, list }: { groupSlug: string; list: PickupList 
   return (
     <ContentCard aria-labelledby="check-in">
       <Heading level="section" id="check-in">
-        {W.checkInHeading}
+        {t('checkInHeading')}
       </Heading>
-      <p className={styles.lead}>{W.checkInLead}</p>
-      {checkIn.isError ? <ErrorState title={W.somethingWrong} message={checkIn.error.message} /> : null}
+      <p className={styles.lead}>{t('checkInLead')}</p>
+      {checkIn.isError ? <ErrorState title={t('somethingWrong')} message={checkIn.error.message} /> : null}
       {released !== null && released > 0 ? (
         <MessageBar intent="info">
-          <MessageBarBody>{W.released(released)}</MessageBarBody>
+          <MessageBarBody>{t('released', { count: released })}</MessageBarBody>
         </MessageBar>
       ) : null}
       {households.length === 0 ? (
-        <p>{W.noReservations}</p>
+        <p>{t('noReservations')}</p>
       ) : (
         <ul className={styles.rows}>
           {households.map((h) => (
             <CheckInRow
               key={h.reservationId}
-              name={h.name ?? W.nameGone}
+              name={h.name ?? t('nameGone')}
               plantsLine={plantsLine(h.lines)}
               state={h.status}
               isPending={checkIn.isPending && checkIn.variables?.reservationId === h.reservationId}

@@ -5,23 +5,24 @@ import { type ReactElement, useState } from 'react';
 import { useShareStatusMutation } from '../../../api/plant-share/plant-share.mutations.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
 import { useOrganiserStyles } from './organiser.styles.js';
 
-const ACTIONS: Record<ShareStatus, { to: ShareStatus; label: string; icon: ReactElement }[]> = {
+const ACTIONS: Record<ShareStatus, { to: ShareStatus; label: 'open' | 'pause' | 'close'; icon: ReactElement }[]> = {
   open: [
-    { to: 'paused', label: W.pause, icon: <PauseRegular /> },
-    { to: 'closed', label: W.close, icon: <StopRegular /> },
+    { to: 'paused', label: 'pause', icon: <PauseRegular /> },
+    { to: 'closed', label: 'close', icon: <StopRegular /> },
   ],
   paused: [
-    { to: 'open', label: W.open, icon: <PlayRegular /> },
-    { to: 'closed', label: W.close, icon: <StopRegular /> },
+    { to: 'open', label: 'open', icon: <PlayRegular /> },
+    { to: 'closed', label: 'close', icon: <StopRegular /> },
   ],
   closed: [],
 };
 
 /** Where the share stands (open, paused, closed), the households so far, and the moves from here. */
 export function ShareStatusCard({ share }: { share: PlantShare }) {
+  const { t } = useTranslation('organiser');
   const styles = useOrganiserStyles();
   const status = useShareStatusMutation(share.groupSlug);
   const [changed, setChanged] = useState(false);
@@ -29,10 +30,16 @@ export function ShareStatusCard({ share }: { share: PlantShare }) {
   return (
     <ContentCard aria-labelledby="share-status">
       <Heading level="section" id="share-status">
-        {W.statusHeading}: {W.status[share.status]}
+        {t('statusLine', { status: t(`status.${share.status}`) })}
       </Heading>
       <p className={styles.lead}>
-        {W.statusLead[share.status]} {W.householdsLine(h.confirmed, h['picked-up'], h['no-show'], share.walkUps)}
+        {t(`statusLead.${share.status}`)}{' '}
+        {t('householdsLine', {
+          confirmed: h.confirmed,
+          pickedUp: h['picked-up'],
+          noShow: h['no-show'],
+          walkUps: share.walkUps,
+        })}
       </p>
       {status.isError ? (
         <MessageBar intent="error">
@@ -41,7 +48,7 @@ export function ShareStatusCard({ share }: { share: PlantShare }) {
       ) : null}
       {changed && !status.isError ? (
         <MessageBar intent="success">
-          <MessageBarBody>{W.statusChanged}</MessageBarBody>
+          <MessageBarBody>{t('statusChanged')}</MessageBarBody>
         </MessageBar>
       ) : null}
       <div className={styles.actions}>
@@ -53,7 +60,7 @@ export function ShareStatusCard({ share }: { share: PlantShare }) {
             disabled={status.isPending}
             onClick={() => status.mutate(a.to, { onSuccess: () => setChanged(true) })}
           >
-            {a.label}
+            {t(a.label)}
           </Button>
         ))}
       </div>

@@ -18,7 +18,7 @@ import { useAddStockMutation, useSetStockMutation } from '../../../api/plant-sha
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { asSentence } from '../../../lib/forms/field-errors.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
 import { useOrganiserStyles } from './organiser.styles.js';
 
 type Drafts = Record<string, string>;
@@ -29,6 +29,7 @@ type Drafts = Record<string, string>;
  * first; a bad row is named beside itself and nothing is sent.
  */
 export function StockCard({ share }: { share: PlantShare }) {
+  const { t } = useTranslation('organiser');
   const styles = useOrganiserStyles();
   const setStock = useSetStockMutation(share.groupSlug);
   const addStock = useAddStockMutation(share.groupSlug);
@@ -64,7 +65,7 @@ export function StockCard({ share }: { share: PlantShare }) {
       );
     setErrors({});
     setStock.mutate(parsed.data, {
-      onSuccess: () => setNote({ intent: 'success', text: W.stockSaved }),
+      onSuccess: () => setNote({ intent: 'success', text: t('stockSaved') }),
       onError: (e) => setNote({ intent: 'error', text: e.message }),
     });
   };
@@ -72,7 +73,7 @@ export function StockCard({ share }: { share: PlantShare }) {
   const addPlants = () => {
     setNote(null);
     const listed = slugs.filter((slug) => (adds[slug] ?? '').trim() !== '');
-    if (listed.length === 0) return setNote({ intent: 'error', text: W.nothingToAdd });
+    if (listed.length === 0) return setNote({ intent: 'error', text: t('nothingToAdd') });
     const body = { lines: listed.map((slug) => ({ speciesSlug: slug, count: Number(adds[slug]) })) };
     const parsed = addStockRequestSchema.safeParse(body);
     if (!parsed.success)
@@ -88,7 +89,7 @@ export function StockCard({ share }: { share: PlantShare }) {
       onSuccess: (next) => {
         setAdds({});
         setCounts(Object.fromEntries(next.stock.map((s) => [s.speciesSlug, String(s.offered)])));
-        setNote({ intent: 'success', text: W.stockAdded });
+        setNote({ intent: 'success', text: t('stockAdded') });
       },
       onError: (e) => setNote({ intent: 'error', text: e.message }),
     });
@@ -97,20 +98,20 @@ export function StockCard({ share }: { share: PlantShare }) {
   return (
     <ContentCard aria-labelledby="share-stock">
       <Heading level="section" id="share-stock">
-        {W.stockHeading}
+        {t('stockHeading')}
       </Heading>
-      <p className={styles.lead}>{W.stockLead}</p>
-      <div className={styles.scroller} role="region" aria-label="Stock table" tabIndex={0}>
+      <p className={styles.lead}>{t('stockLead')}</p>
+      <div className={styles.scroller} role="region" aria-label={t('stockTableLabel')} tabIndex={0}>
         <Table className={styles.table} aria-labelledby="share-stock">
           <TableHeader>
             <TableRow>
-              <TableHeaderCell>{W.species}</TableHeaderCell>
-              <TableHeaderCell>{W.offered}</TableHeaderCell>
-              <TableHeaderCell>{W.remaining}</TableHeaderCell>
-              <TableHeaderCell>{W.reservedCol}</TableHeaderCell>
-              <TableHeaderCell>{W.givenCol}</TableHeaderCell>
-              <TableHeaderCell>{W.waitlistedCol}</TableHeaderCell>
-              <TableHeaderCell>{W.addCol}</TableHeaderCell>
+              <TableHeaderCell>{t('species')}</TableHeaderCell>
+              <TableHeaderCell>{t('offered')}</TableHeaderCell>
+              <TableHeaderCell>{t('remaining')}</TableHeaderCell>
+              <TableHeaderCell>{t('reservedCol')}</TableHeaderCell>
+              <TableHeaderCell>{t('givenCol')}</TableHeaderCell>
+              <TableHeaderCell>{t('waitlistedCol')}</TableHeaderCell>
+              <TableHeaderCell>{t('addCol')}</TableHeaderCell>
             </TableRow>
           </TableHeader>
           <TableBody>
@@ -128,7 +129,7 @@ export function StockCard({ share }: { share: PlantShare }) {
                     <Input
                       className={styles.number}
                       inputMode="numeric"
-                      aria-label={W.stockOf(s.commonName)}
+                      aria-label={t('stockOf', { name: s.commonName })}
                       value={counts[s.speciesSlug] ?? ''}
                       onChange={(_, d) => setCounts((c) => ({ ...c, [s.speciesSlug]: d.value }))}
                     />
@@ -146,7 +147,7 @@ export function StockCard({ share }: { share: PlantShare }) {
                     <Input
                       className={styles.number}
                       inputMode="numeric"
-                      aria-label={W.addOf(s.commonName)}
+                      aria-label={t('addOf', { name: s.commonName })}
                       value={adds[s.speciesSlug] ?? ''}
                       onChange={(_, d) => setAdds((a) => ({ ...a, [s.speciesSlug]: d.value }))}
                     />
@@ -164,10 +165,10 @@ export function StockCard({ share }: { share: PlantShare }) {
       ) : null}
       <div className={styles.actions}>
         <Button icon={<SaveRegular />} onClick={saveCounts} disabled={setStock.isPending}>
-          {W.saveStock}
+          {t('saveStock')}
         </Button>
         <Button icon={<AddRegular />} onClick={addPlants} disabled={addStock.isPending}>
-          {W.addStock}
+          {t('addStock')}
         </Button>
       </div>
     </ContentCard>

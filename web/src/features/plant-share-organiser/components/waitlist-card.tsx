@@ -4,11 +4,12 @@ import { shareWaitlistQueryOptions } from '../../../api/plant-share/plant-share.
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { QueryState } from '../../../components/states/index.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { LOCALE_TAGS, type Locale, useLocale } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
 import { useOrganiserStyles } from './organiser.styles.js';
 
-const heldWords = (iso: string) =>
-  new Intl.DateTimeFormat('en-US', {
+const heldWords = (iso: string, locale: Locale) =>
+  new Intl.DateTimeFormat(LOCALE_TAGS[locale], {
     weekday: 'short',
     month: 'short',
     day: 'numeric',
@@ -21,40 +22,42 @@ const heldWords = (iso: string) =>
  * e-mails are the group organisers' only (the API answers 403 to anyone else).
  */
 export function WaitlistCard({ groupSlug }: { groupSlug: string }) {
+  const { t } = useTranslation('organiser');
+  const { locale } = useLocale();
   const styles = useOrganiserStyles();
   const waitlist = useQuery(shareWaitlistQueryOptions(groupSlug));
   return (
     <ContentCard aria-labelledby="share-waitlist">
       <Heading level="section" id="share-waitlist">
-        {W.waitlistHeading}
+        {t('waitlistHeading')}
       </Heading>
-      <p className={styles.lead}>{W.waitlistLead}</p>
+      <p className={styles.lead}>{t('waitlistLead')}</p>
       <QueryState
         query={waitlist}
-        loading={W.waitlistLoading}
-        error={W.waitlistFailed}
+        loading={t('waitlistLoading')}
+        error={t('waitlistFailed')}
         isEmpty={(w) => w.species.length === 0}
-        empty={W.waitlistEmpty}
+        empty={t('waitlistEmpty')}
       >
         {(w) =>
           w.species.map((s) => (
             <section key={s.speciesSlug} aria-labelledby={`wait-${s.speciesSlug}`}>
               <Heading level="card" id={`wait-${s.speciesSlug}`}>
-                {W.waitlistSpecies(s.commonName, s.remaining)}
+                {t('waitlistSpecies', { name: s.commonName, count: s.remaining })}
               </Heading>
               <div
                 className={styles.scroller}
                 role="region"
-                aria-label={`${W.waitlistHeading}: ${s.commonName}`}
+                aria-label={t('waitlistFor', { name: s.commonName })}
                 tabIndex={0}
               >
                 <Table className={styles.table} aria-labelledby={`wait-${s.speciesSlug}`}>
                   <TableHeader>
                     <TableRow>
-                      <TableHeaderCell>{W.position}</TableHeaderCell>
-                      <TableHeaderCell>{W.household}</TableHeaderCell>
-                      <TableHeaderCell>{W.asked}</TableHeaderCell>
-                      <TableHeaderCell>{W.waitStatus}</TableHeaderCell>
+                      <TableHeaderCell>{t('position')}</TableHeaderCell>
+                      <TableHeaderCell>{t('household')}</TableHeaderCell>
+                      <TableHeaderCell>{t('asked')}</TableHeaderCell>
+                      <TableHeaderCell>{t('waitStatus')}</TableHeaderCell>
                     </TableRow>
                   </TableHeader>
                   <TableBody>
@@ -62,13 +65,15 @@ export function WaitlistCard({ groupSlug }: { groupSlug: string }) {
                       <TableRow key={i}>
                         <TableCell>{e.position > 0 ? e.position : '–'}</TableCell>
                         <TableCell>
-                          {e.name ?? W.nameGone}
+                          {e.name ?? t('nameGone')}
                           {e.email ? <span className={styles.scientific}>{e.email}</span> : null}
                         </TableCell>
                         <TableCell>{e.count}</TableCell>
                         <TableCell>
-                          {W.waitStatusWords[e.status]}
-                          {e.status === 'offered' && e.heldUntil ? `, ${W.heldUntil(heldWords(e.heldUntil))}` : ''}
+                          {t(`waitStatusWords.${e.status}`)}
+                          {e.status === 'offered' && e.heldUntil
+                            ? `, ${t('heldUntil', { when: heldWords(e.heldUntil, locale) })}`
+                            : ''}
                           {e.status === 'offered' ? ` (${e.held})` : ''}
                         </TableCell>
                       </TableRow>

@@ -5,7 +5,7 @@ import { useWalkUpMutation } from '../../../api/plant-share/plant-share.mutation
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { asSentence } from '../../../lib/forms/field-errors.js';
-import { ORGANISER_WORDS as W } from '../utils/organiser-words.js';
+import { useTranslation } from 'react-i18next';
 import { useOrganiserStyles } from './organiser.styles.js';
 import { CountStepper } from '../../../components/forms/count-stepper.js';
 
@@ -14,6 +14,7 @@ import { CountStepper } from '../../../components/forms/count-stepper.js';
  * counts and, if they say, a ZIP are kept (for the report's areas reached).
  */
 export function WalkUpCard({ share }: { share: PlantShare }) {
+  const { t } = useTranslation('organiser');
   const styles = useOrganiserStyles();
   const walkUp = useWalkUpMutation(share.groupSlug);
   const [counts, setCounts] = useState<Record<string, number>>({});
@@ -27,12 +28,12 @@ export function WalkUpCard({ share }: { share: PlantShare }) {
     const lines = Object.entries(counts)
       .filter(([, n]) => n > 0)
       .map(([speciesSlug, count]) => ({ speciesSlug, count }));
-    if (lines.length === 0) return setNote({ intent: 'error', text: W.walkUpNothing });
+    if (lines.length === 0) return setNote({ intent: 'error', text: t('walkUpNothing') });
     const parsed = walkUpRequestSchema.safeParse({ lines, ...(zip.trim() ? { zip: zip.trim() } : {}) });
     if (!parsed.success) {
       const zipIssue = parsed.error.issues.find((i) => i.path[0] === 'zip');
       setZipError(zipIssue ? asSentence(zipIssue.message) : undefined);
-      if (!zipIssue) setNote({ intent: 'error', text: parsed.error.issues[0]?.message ?? W.somethingWrong });
+      if (!zipIssue) setNote({ intent: 'error', text: parsed.error.issues[0]?.message ?? t('somethingWrong') });
       return;
     }
     walkUp.mutate(parsed.data, {
@@ -40,7 +41,7 @@ export function WalkUpCard({ share }: { share: PlantShare }) {
         const given = lines.reduce((n, l) => n + l.count, 0);
         setCounts({});
         setZip('');
-        setNote({ intent: 'success', text: W.walkUpRecorded(given) });
+        setNote({ intent: 'success', text: t('walkUpRecorded', { count: given }) });
       },
       onError: (e) => setNote({ intent: 'error', text: e.message }),
     });
@@ -49,17 +50,17 @@ export function WalkUpCard({ share }: { share: PlantShare }) {
   return (
     <ContentCard aria-labelledby="walk-up">
       <Heading level="section" id="walk-up">
-        {W.walkUpHeading}
+        {t('walkUpHeading')}
       </Heading>
-      <p className={styles.lead}>{W.walkUpLead}</p>
+      <p className={styles.lead}>{t('walkUpLead')}</p>
       <ul className={styles.rows}>
         {onOffer.map((s) => (
           <li key={s.speciesSlug} className={styles.row}>
             <span>
-              {s.commonName} <span className={styles.muted}>({W.remainingWords(s.remaining)})</span>
+              {s.commonName} <span className={styles.muted}>({t('remainingWords', { count: s.remaining })})</span>
             </span>
             <CountStepper
-              label={W.walkUpOf(s.commonName)}
+              label={t('walkUpOf', { name: s.commonName })}
               value={counts[s.speciesSlug] ?? 0}
               max={s.remaining}
               onChange={(n) => setCounts((c) => ({ ...c, [s.speciesSlug]: n }))}
@@ -67,7 +68,7 @@ export function WalkUpCard({ share }: { share: PlantShare }) {
           </li>
         ))}
       </ul>
-      <Field label={W.walkUpZip} validationMessage={zipError} validationState={zipError ? 'error' : 'none'}>
+      <Field label={t('walkUpZip')} validationMessage={zipError} validationState={zipError ? 'error' : 'none'}>
         <Input
           inputMode="numeric"
           value={zip}
@@ -82,7 +83,7 @@ export function WalkUpCard({ share }: { share: PlantShare }) {
       ) : null}
       <div className={styles.actions}>
         <Button className={styles.big} onClick={record} disabled={walkUp.isPending}>
-          {W.walkUpRecord}
+          {t('walkUpRecord')}
         </Button>
       </div>
     </ContentCard>

@@ -43,20 +43,31 @@ export interface SlotRow {
 
 export type SlotRowErrors = Partial<Record<keyof SlotRow, string>>;
 
+/** The messages `checkSlots` gives, in the page's language; `say` words a shared schema's message the same way. */
+export interface SlotCheckWords {
+  none: string;
+  tooMany: string;
+  start: string;
+  end: string;
+  capacity: string;
+  say: (message: string) => string;
+}
+
 /** The slot rows as the API's slots, or each bad row's messages (field by field) and nothing else. */
 export function checkSlots(
   date: string,
   rows: readonly SlotRow[],
+  words: SlotCheckWords,
 ): { slots: OpenShareRequest['slots'] } | { errors: SlotRowErrors[]; message?: string } {
-  if (rows.length === 0) return { errors: [], message: 'Add at least one pickup slot.' };
-  if (rows.length > MAX_SLOTS) return { errors: [], message: `A share may have at most ${MAX_SLOTS} slots.` };
+  if (rows.length === 0) return { errors: [], message: words.none };
+  if (rows.length > MAX_SLOTS) return { errors: [], message: words.tooMany };
   const slots: OpenShareRequest['slots'] = [];
   const errors: SlotRowErrors[] = rows.map((row) => {
     const start = slotTime(date, row.start);
     const end = slotTime(date, row.end);
     const out: SlotRowErrors = {};
-    if (!start) out.start = 'Enter a start time';
-    if (!end) out.end = 'Enter an end time';
+    if (!start) out.start = words.start;
+    if (!end) out.end = words.end;
     const parsed = pickupSlotRequestSchema.safeParse({
       start: start ?? '',
       end: end ?? '',
@@ -66,7 +77,7 @@ export function checkSlots(
     else
       for (const issue of parsed.error.issues) {
         const key = issue.path[0] as keyof SlotRow;
-        const text = key === 'capacity' && row.capacity.trim() === '' ? 'Enter a number of households' : issue.message;
+        const text = key === 'capacity' && row.capacity.trim() === '' ? words.capacity : words.say(issue.message);
         out[key] ??= text.charAt(0).toUpperCase() + text.slice(1);
       }
     return out;

@@ -1,3 +1,5 @@
+import { formattersFor, LOCALE_TAGS, type Locale } from '../../../lib/i18n/index.js';
+
 /**
  * A slot's clock time on the share's date as the API wants it: a moment with its UTC offset
  * ("2027-06-12T09:00:00-05:00"). The offset is the organiser's own browser's for that date, which is
@@ -13,27 +15,29 @@ export function slotTime(date: string, clock: string): string | null {
   return `${date}T${clock}:00${sign}${pad(minutes / 60)}:${pad(minutes % 60)}`;
 }
 
-/** "2027-06-12T09:00:00-05:00" → "9:00 am": the clock the organiser wrote, not the reader's zone. */
-export function clockWords(value: string): string {
+/**
+ * "2027-06-12T09:00:00-05:00" → "9:00 am" (English) or "9:00 a.m." (Spanish, by Intl): the clock the
+ * organiser wrote, not the reader's zone, so the digits are formatted as they are, never moved.
+ */
+export function clockWords(value: string, locale: Locale = 'en'): string {
   const m = /T(\d{2}):(\d{2})/.exec(value) ?? /^(\d{2}):(\d{2})/.exec(value);
   if (!m) return value;
   const hours = Number(m[1]);
+  if (locale !== 'en') {
+    return new Intl.DateTimeFormat(LOCALE_TAGS[locale], { hour: 'numeric', minute: '2-digit', timeZone: 'UTC' }).format(
+      new Date(Date.UTC(2000, 0, 1, hours, Number(m[2]))),
+    );
+  }
   const h12 = hours % 12 === 0 ? 12 : hours % 12;
   return `${h12}:${m[2]} ${hours < 12 ? 'am' : 'pm'}`;
 }
 
-export function slotWords(slot: { start: string; end: string }): string {
-  return `${clockWords(slot.start)} – ${clockWords(slot.end)}`;
+export function slotWords(slot: { start: string; end: string }, locale: Locale = 'en'): string {
+  return `${clockWords(slot.start, locale)} – ${clockWords(slot.end, locale)}`;
 }
 
-/** "2027-06-12" → "Saturday, June 12, 2027"; a calendar day, never shifted by time zone. */
-export function shareDateWords(day: string): string {
+/** "2027-06-12" → "Saturday, June 12, 2027" / "sábado, 12 de junio de 2027"; never shifted by time zone. */
+export function shareDateWords(day: string, locale: Locale = 'en'): string {
   if (!/^\d{4}-\d{2}-\d{2}$/.test(day)) return day;
-  return new Intl.DateTimeFormat('en-US', {
-    weekday: 'long',
-    month: 'long',
-    day: 'numeric',
-    year: 'numeric',
-    timeZone: 'UTC',
-  }).format(new Date(`${day}T00:00:00Z`));
+  return formattersFor(locale).date(day, { weekday: 'long', month: 'long', day: 'numeric', year: 'numeric' });
 }

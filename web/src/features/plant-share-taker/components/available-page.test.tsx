@@ -200,6 +200,24 @@ describe('what is available', () => {
     expect(api.callsTo('GET', SHARE_PATH).length).toBeGreaterThanOrEqual(2);
   });
 
+  it('speaks Spanish with the page: the lead, limits, what is left, slots and the reserve form', async () => {
+    renderApp({ path: `/share/${GROUP}`, locale: 'es', api: { [`GET ${SHARE_PATH}`]: shareAnswer } });
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Reparto de plantas: Larkfield Commons Growers' }),
+    ).toBeVisible();
+    // The Spanish long date as CLDR writes it for es-US (Intl.DateTimeFormat), not a hand-built string.
+    expect(screen.getByText(/Recogida el sábado, 12 de junio de 2027 en Larkfield Commons Hall/)).toBeInTheDocument();
+    expect(screen.getByText(/Hasta 3 de cada especie y 6 plantas en total por hogar\./)).toBeInTheDocument();
+    expect(card('Butterfly milkweed').getByText('Quedan 12')).toBeInTheDocument();
+    expect(card('Southern blue flag').getByText('No queda ninguna')).toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'Reservar plantas' })).toBeInTheDocument();
+    // es-US writes the morning as "a.m." (CLDR); the slot keeps the organiser's clock.
+    expect(screen.getByRole('radio', { name: /9:00 a\.m\. – 9:30 a\.m\./ })).toBeInTheDocument();
+    expect(screen.getByText('Quedan 4 lugares')).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Reservar estas plantas' })).toBeInTheDocument();
+    expect(screen.queryByText(/left|Reserve/)).not.toBeInTheDocument();
+  });
+
   it('says when there is no share at the address', async () => {
     renderApp({ path: '/share/no-such-group', api: {} });
     expect(await screen.findByText(/There is no plant share at this address/)).toBeInTheDocument();

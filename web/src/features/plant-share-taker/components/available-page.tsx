@@ -1,13 +1,14 @@
 import { MessageBar, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
 import {
-  describeGround,
   type PublicPlantShare,
   type ReservationCreated,
   type ShareSpecies,
   type ShareYard,
+  type Vocabulary,
 } from '@homeground/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
+import type { TFunction } from 'i18next';
 import type { Yard } from '../../../api/plant-share/plant-share.api.js';
 import { useReserveMutation, useWaitlistMutation } from '../../../api/plant-share/plant-share.mutations.js';
 import { publicShareQueryOptions } from '../../../api/plant-share/plant-share.queries.js';
@@ -15,13 +16,14 @@ import { Heading } from '../../../components/page/page-heading.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { EmptyState, ErrorState, QueryState } from '../../../components/states/index.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
+import { useLocale, useWords } from '../../../lib/i18n/index.js';
 import { rankByFit, wildlifeLines } from '../utils/rank-by-fit.js';
 import { shareDateWords } from '../utils/share-facts.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
 import { Confirmation } from './confirmation.js';
 import { FitFilter } from './fit-filter.js';
 import { OfferCard } from './offer-card.js';
 import { ReservePanel } from './reserve-panel.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalXL },
@@ -36,6 +38,7 @@ const useStyles = makeStyles({
 
 /** What a group's plant share offers, the "fits my yard" ranking, and reserving. Nobody needs to sign in. */
 export function AvailablePage({ groupSlug }: { groupSlug: string }) {
+  const { t } = useTranslation('taker');
   const [yard, setYard] = useState<Yard>(null);
   const [confirmed, setConfirmed] = useState<ReservationCreated | null>(null);
   const share = useQuery(publicShareQueryOptions(groupSlug, yard));
@@ -43,15 +46,15 @@ export function AvailablePage({ groupSlug }: { groupSlug: string }) {
   return (
     <QueryState
       query={share}
-      loading={W.loading}
+      loading={t('loading')}
       error={(error, retry) =>
         isApiRequestError(error) && error.statusCode === 404 ? (
-          <EmptyState title={W.notFound} />
+          <EmptyState title={t('notFound')} />
         ) : isApiRequestError(error) && error.statusCode === 400 && yard ? (
           // A ZIP or mix the API could not place: say why, and go back to the whole list.
-          <ErrorState title={W.fitRefused} message={error.message} onRetry={() => setYard(null)} />
+          <ErrorState title={t('fitRefused')} message={error.message} onRetry={() => setYard(null)} />
         ) : (
-          <ErrorState title={W.loadFailed} message={error.message} onRetry={retry} />
+          <ErrorState title={t('loadFailed')} message={error.message} onRetry={retry} />
         )
       }
     >
@@ -78,6 +81,9 @@ interface AvailableProps {
 }
 
 function Available({ share, yard, onYard, isRanking, onReserved }: AvailableProps) {
+  const { t } = useTranslation('taker');
+  const { locale } = useLocale();
+  const words = useWords();
   const styles = useStyles();
   const [counts, setCounts] = useState<Record<string, number>>({});
   const reserve = useReserveMutation(share.groupSlug);
@@ -97,7 +103,7 @@ function Available({ share, yard, onYard, isRanking, onReserved }: AvailableProp
       wildlife={wildlifeLines(s.wildlife)}
       cautions={s.cautions}
       left={s.remaining}
-      fit={s.fit ? { words: W.fitWords[s.fit.fit], why: s.fit.why } : null}
+      fit={s.fit ? { words: t(`fitWords.${s.fit.fit}`), why: s.fit.why } : null}
       count={
         isOpen
           ? {
@@ -113,31 +119,32 @@ function Available({ share, yard, onYard, isRanking, onReserved }: AvailableProp
 
   return (
     <>
-      <PageIntro title={W.availableTitle(share.groupName)}>
-        {W.availableLead(shareDateWords(share.date), place)} {W.limits(share.limits.perSpecies, share.limits.total)}
-        {share.whatToBring ? ` ${W.bringLine(share.whatToBring)}` : null}
+      <PageIntro title={t('availableTitle', { group: share.groupName })}>
+        {t('availableLead', { date: shareDateWords(share.date, locale), place })}{' '}
+        {t('limits', { perSpecies: share.limits.perSpecies, total: share.limits.total })}
+        {share.whatToBring ? ` ${t('bringLine', { what: share.whatToBring })}` : null}
       </PageIntro>
       <div className={styles.stack}>
         {share.status === 'open' ? null : (
           <MessageBar intent="info">
-            <MessageBarBody>{W.notOpen[share.status]}</MessageBarBody>
+            <MessageBarBody>{t(`notOpen.${share.status}`)}</MessageBarBody>
           </MessageBar>
         )}
         <FitFilter onApply={onYard} onClear={() => onYard(null)} isActive={yard !== null} isPending={isRanking} />
         <section aria-labelledby="on-offer" className={styles.stack} aria-busy={isRanking}>
           <Heading level="section" id="on-offer" className={styles.heading}>
-            {W.onOfferHeading}
+            {t('onOfferHeading')}
           </Heading>
-          {share.yard ? <p className={styles.heading}>{rankedFor(share.yard)}</p> : null}
+          {share.yard ? <p className={styles.heading}>{rankedFor(share.yard, words, t)}</p> : null}
           {rankByFit(share.species).map(({ group, species }) => (
             <div key={group} className={styles.stack}>
-              {group === 'less-suited' ? <Heading level="card">{W.notSuited}</Heading> : null}
+              {group === 'less-suited' ? <Heading level="card">{t('notSuited')}</Heading> : null}
               <div className={styles.grid}>{species.map(card)}</div>
             </div>
           ))}
           {share.notes.length > 0 ? (
             <div>
-              <Heading level="card">{W.safetyHeading}</Heading>
+              <Heading level="card">{t('safetyHeading')}</Heading>
               <ul className={styles.notes}>
                 {share.notes.map((n) => (
                   <li key={n}>{n}</li>
@@ -163,8 +170,8 @@ function Available({ share, yard, onYard, isRanking, onReserved }: AvailableProp
 }
 
 /** What the list is ranked for, in words: the spot, and the place (and the mix) it came from. */
-function rankedFor(yard: ShareYard): string {
-  const spot = describeGround(yard.sun, yard.moisture);
-  if (yard.from === 'mix' && yard.mixName) return W.fitForMix(yard.mixName, spot, yard.place);
-  return yard.from === 'zip' ? W.fitForPlace(spot, yard.place) : W.fitFor(spot);
+function rankedFor(yard: ShareYard, words: Vocabulary, t: TFunction<'taker'>): string {
+  const spot = words.describeGround(yard.sun, yard.moisture);
+  if (yard.from === 'mix' && yard.mixName) return t('fitForMix', { name: yard.mixName, spot, place: yard.place });
+  return yard.from === 'zip' ? t('fitForPlace', { spot, place: yard.place }) : t('fitFor', { spot });
 }

@@ -5,13 +5,14 @@ import { matchPath } from 'react-router-dom';
 import { RouterLink } from '../../../components/links/router-link.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { paths } from '../../../config/paths.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
 import { ReservationSummary } from './reservation-summary.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({ note: { marginBottom: tokens.spacingVerticalXL } });
 
 /** The page a taker sees right after reserving: pickup details, the care sheet and the e-mail note. */
 export function Confirmation({ reservation }: { reservation: ReservationCreated }) {
+  const { t } = useTranslation('taker');
   const styles = useStyles();
   const ref = useRef<HTMLDivElement>(null);
   const manageHref = manageHrefOf(reservation.manageUrl);
@@ -24,11 +25,11 @@ export function Confirmation({ reservation }: { reservation: ReservationCreated 
   }, []);
   return (
     <div ref={ref}>
-      <PageIntro title={W.confirmedTitle} />
+      <PageIntro title={t('confirmedTitle')} />
       <MessageBar intent="success" className={styles.note} layout="multiline">
         <MessageBarBody>
-          {W.confirmedEmail(reservation.email)}{' '}
-          {manageHref ? <RouterLink to={manageHref}>{W.manageLink}</RouterLink> : null}
+          {t('confirmedEmail', { email: reservation.email })}{' '}
+          {manageHref ? <RouterLink to={manageHref}>{t('manageLink')}</RouterLink> : null}
         </MessageBarBody>
       </MessageBar>
       <ReservationSummary reservation={reservation} />

@@ -9,21 +9,13 @@ import {
   RadioGroup,
   tokens,
 } from '@fluentui/react-components';
-import {
-  capitalise,
-  MOISTURE_LEVELS,
-  MOISTURE_WORDS,
-  type Moisture,
-  SUN_LEVELS,
-  SUN_WORDS,
-  type Sun,
-  zipSchema,
-} from '@homeground/shared';
+import { capitalise, MOISTURE_LEVELS, type Moisture, SUN_LEVELS, type Sun, zipSchema } from '@homeground/shared';
 import { type FormEvent, useState } from 'react';
 import type { Yard } from '../../../api/plant-share/plant-share.api.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
+import { useWords } from '../../../lib/i18n/index.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   grid: {
@@ -51,6 +43,8 @@ export interface FitFilterProps {
 
 /** "Fits my yard": two quick questions that rank the list by the engine's fit for that spot. */
 export function FitFilter({ onApply, onClear, isActive, isPending = false }: FitFilterProps) {
+  const { t } = useTranslation('taker');
+  const words = useWords();
   const styles = useStyles();
   const [sun, setSun] = useState<Sun | ''>('');
   const [moisture, setMoisture] = useState<Moisture | ''>('');
@@ -62,7 +56,7 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    if (!sun || !moisture) return setError(W.fitNeedsAnswer);
+    if (!sun || !moisture) return setError(t('fitNeedsAnswer'));
     if (zip.trim() === '') return onApply({ sun, moisture });
     // The same ZIP rule the API reads the query with.
     const parsed = zipSchema.safeParse(zip);
@@ -73,7 +67,7 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
   const useMix = (event: FormEvent) => {
     event.preventDefault();
     const id = MIX_ID.exec(mixLink.trim())?.[1];
-    if (!id) return setMixError(W.fitMixBad);
+    if (!id) return setMixError(t('fitMixBad'));
     onApply({ mix: id.toLowerCase() });
   };
 
@@ -88,32 +82,32 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
   return (
     <ContentCard aria-labelledby="fit-my-yard">
       <Heading level="section" id="fit-my-yard">
-        {W.fitTitle}
+        {t('fitTitle')}
       </Heading>
-      <p className={styles.lead}>{W.fitLead}</p>
+      <p className={styles.lead}>{t('fitLead')}</p>
       <form onSubmit={submit} noValidate aria-labelledby="fit-my-yard">
         <div className={styles.grid}>
-          <Field label={W.fitSun}>
+          <Field label={t('fitSun')}>
             <RadioGroup name="fit-sun" value={sun} onChange={(_, d) => (setSun(d.value as Sun), setError(null))}>
               {SUN_LEVELS.map((s) => (
-                <Radio key={s} value={s} label={capitalise(SUN_WORDS[s])} />
+                <Radio key={s} value={s} label={capitalise(words.sun[s])} />
               ))}
             </RadioGroup>
           </Field>
-          <Field label={W.fitMoisture}>
+          <Field label={t('fitMoisture')}>
             <RadioGroup
               name="fit-moisture"
               value={moisture}
               onChange={(_, d) => (setMoisture(d.value as Moisture), setError(null))}
             >
               {MOISTURE_LEVELS.map((m) => (
-                <Radio key={m} value={m} label={capitalise(MOISTURE_WORDS[m])} />
+                <Radio key={m} value={m} label={capitalise(words.moisture[m])} />
               ))}
             </RadioGroup>
           </Field>
           <Field
-            label={W.fitZip}
-            hint={W.fitZipHint}
+            label={t('fitZip')}
+            hint={t('fitZipHint')}
             validationMessage={zipError}
             validationState={zipError ? 'error' : 'none'}
           >
@@ -132,22 +126,22 @@ export function FitFilter({ onApply, onClear, isActive, isPending = false }: Fit
         ) : null}
         <div className={styles.actions}>
           <Button type="submit" disabled={isPending}>
-            {isPending ? W.fitting : W.fitApply}
+            {isPending ? t('fitting') : t('fitApply')}
           </Button>
-          {isActive ? <Button onClick={clear}>{W.fitClear}</Button> : null}
+          {isActive ? <Button onClick={clear}>{t('fitClear')}</Button> : null}
         </div>
       </form>
       <form onSubmit={useMix} noValidate aria-labelledby="fit-by-mix">
         <Heading level="card" id="fit-by-mix">
-          {W.fitOrMix}
+          {t('fitOrMix')}
         </Heading>
-        <p className={styles.lead}>{W.fitMixLead}</p>
-        <Field label={W.fitMixLink} validationMessage={mixError} validationState={mixError ? 'error' : 'none'}>
+        <p className={styles.lead}>{t('fitMixLead')}</p>
+        <Field label={t('fitMixLink')} validationMessage={mixError} validationState={mixError ? 'error' : 'none'}>
           <Input value={mixLink} onChange={(_, d) => (setMixLink(d.value), setMixError(undefined))} />
         </Field>
         <div className={styles.actions}>
           <Button type="submit" disabled={isPending}>
-            {W.fitMixApply}
+            {t('fitMixApply')}
           </Button>
         </div>
       </form>

@@ -12,10 +12,10 @@ import { Heading } from '../../../components/page/page-heading.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { EmptyState, ErrorState, QueryState } from '../../../components/states/index.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
 import { CountStepper } from '../../../components/forms/count-stepper.js';
 import { ReservationSummary } from './reservation-summary.js';
 import { SlotPicker } from './slot-picker.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalXL },
@@ -27,16 +27,17 @@ const useStyles = makeStyles({
 
 /** A reservation opened by the private link in its e-mail: see it, change counts or slot, or cancel. */
 export function MyReservation({ token }: { token: string }) {
+  const { t } = useTranslation('taker');
   const reservation = useQuery(reservationQueryOptions(token));
   return (
     <QueryState
       query={reservation}
-      loading={W.myReservationLoading}
+      loading={t('myReservationLoading')}
       error={(error, retry) =>
         isApiRequestError(error) && [403, 404].includes(error.statusCode) ? (
-          <EmptyState title={W.badLink} />
+          <EmptyState title={t('badLink')} />
         ) : (
-          <ErrorState title={W.myReservationFailed} message={error.message} onRetry={retry} />
+          <ErrorState title={t('myReservationFailed')} message={error.message} onRetry={retry} />
         )
       }
     >
@@ -46,30 +47,31 @@ export function MyReservation({ token }: { token: string }) {
 }
 
 function ReservationView({ token, reservation }: { token: string; reservation: TakerReservation }) {
+  const { t } = useTranslation('taker');
   const styles = useStyles();
   const share = useQuery({ ...publicShareQueryOptions(reservation.share.groupSlug), enabled: reservation.canChange });
   return (
     <>
-      <PageIntro title={W.myReservationTitle}>{reservation.share.groupName}</PageIntro>
+      <PageIntro title={t('myReservationTitle')}>{reservation.share.groupName}</PageIntro>
       <div className={styles.stack}>
         {reservation.status === 'cancelled' ? (
           <MessageBar intent="info">
-            <MessageBarBody>{W.cancelled}</MessageBarBody>
+            <MessageBarBody>{t('cancelled')}</MessageBarBody>
           </MessageBar>
         ) : null}
         {reservation.status === 'picked-up' ? (
           <MessageBar intent="success">
-            <MessageBarBody>{W.pickedUp}</MessageBarBody>
+            <MessageBarBody>{t('pickedUp')}</MessageBarBody>
           </MessageBar>
         ) : null}
         {reservation.status === 'no-show' ? (
           <MessageBar intent="info">
-            <MessageBarBody>{W.noShow}</MessageBarBody>
+            <MessageBarBody>{t('noShow')}</MessageBarBody>
           </MessageBar>
         ) : null}
         {reservation.status === 'confirmed' && !reservation.canChange ? (
           <MessageBar intent="info">
-            <MessageBarBody>{W.cannotChange}</MessageBarBody>
+            <MessageBarBody>{t('cannotChange')}</MessageBarBody>
           </MessageBar>
         ) : null}
         {reservation.status === 'cancelled' ? null : <ReservationSummary reservation={reservation} />}
@@ -89,6 +91,7 @@ interface ChangeProps {
 
 /** New counts and another slot, saved in one request; or cancel after saying yes twice. */
 function ChangeReservation({ token, reservation, share }: ChangeProps) {
+  const { t } = useTranslation('taker');
   const styles = useStyles();
   const change = useChangeReservationMutation(token, share.groupSlug);
   const cancel = useCancelReservationMutation(token, share.groupSlug);
@@ -111,7 +114,7 @@ function ChangeReservation({ token, reservation, share }: ChangeProps) {
   return (
     <ContentCard aria-labelledby="change-heading">
       <Heading level="section" id="change-heading">
-        {W.changeHeading}
+        {t('changeHeading')}
       </Heading>
       <div className={styles.stack}>
         <ul className={styles.rows}>
@@ -125,7 +128,7 @@ function ChangeReservation({ token, reservation, share }: ChangeProps) {
               <li key={s.slug} className={styles.row}>
                 <span>{s.commonName}</span>
                 <CountStepper
-                  label={W.countLabel(s.commonName)}
+                  label={t('countLabel', { name: s.commonName })}
                   value={value}
                   max={max}
                   onChange={(n) => setCounts((c) => ({ ...c, [s.slug]: n }))}
@@ -147,22 +150,22 @@ function ChangeReservation({ token, reservation, share }: ChangeProps) {
         ) : null}
         {saved ? (
           <MessageBar intent="success">
-            <MessageBarBody>{W.saved}</MessageBarBody>
+            <MessageBarBody>{t('saved')}</MessageBarBody>
           </MessageBar>
         ) : null}
         {asking ? (
           <MessageBar intent="warning" layout="multiline">
-            <MessageBarBody>{W.cancelQuestion}</MessageBarBody>
+            <MessageBarBody>{t('cancelQuestion')}</MessageBarBody>
           </MessageBar>
         ) : null}
         <div className={styles.actions}>
           {asking ? (
             <>
               <Button className={styles.big} onClick={() => cancel.mutate()} disabled={cancel.isPending}>
-                {W.cancelConfirm}
+                {t('cancelConfirm')}
               </Button>
               <Button className={styles.big} appearance="primary" onClick={() => setAsking(false)}>
-                {W.keep}
+                {t('keep')}
               </Button>
             </>
           ) : (
@@ -173,10 +176,10 @@ function ChangeReservation({ token, reservation, share }: ChangeProps) {
                 onClick={save}
                 disabled={change.isPending || total === 0}
               >
-                {W.saveChanges}
+                {t('saveChanges')}
               </Button>
               <Button className={styles.big} onClick={() => setAsking(true)}>
-                {W.cancel}
+                {t('cancel')}
               </Button>
             </>
           )}

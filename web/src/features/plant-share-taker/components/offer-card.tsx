@@ -2,9 +2,10 @@ import { makeStyles, tokens } from '@fluentui/react-components';
 import { CheckmarkCircle16Regular, Warning16Regular } from '@fluentui/react-icons';
 import { capitalise } from '@homeground/shared';
 import { Heading } from '../../../components/page/page-heading.js';
+import { useFormatters, useWords } from '../../../lib/i18n/index.js';
 import { type SummaryFacts, summaryLines } from '../utils/share-facts.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
 import { CountStepper } from '../../../components/forms/count-stepper.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   card: {
@@ -51,6 +52,9 @@ export interface OfferCardProps {
 
 /** One species on offer: its fact-card summary, wildlife value in words, cautions and how many are left. */
 export function OfferCard({ commonName, scientificName, facts, wildlife, cautions, left, fit, count }: OfferCardProps) {
+  const { t } = useTranslation('taker');
+  const words = useWords();
+  const { heightRange } = useFormatters();
   const styles = useStyles();
   return (
     <article className={styles.card} aria-label={commonName}>
@@ -59,15 +63,17 @@ export function OfferCard({ commonName, scientificName, facts, wildlife, caution
           {capitalise(commonName)}
           <span className={styles.scientific}>{scientificName}</span>
         </Heading>
-        <span className={left === 0 ? styles.none : styles.left}>{W.left(left)}</span>
+        <span className={left === 0 ? styles.none : styles.left}>
+          {left === 0 ? t('allGone') : t('left', { count: left })}
+        </span>
       </div>
       <ul className={styles.facts}>
-        {summaryLines(facts).map((line) => (
+        {summaryLines(facts, words, (min, max) => t('tall', { height: heightRange(min, max) })).map((line) => (
           <li key={line}>{line}</li>
         ))}
       </ul>
       {wildlife.length > 0 ? (
-        <ul className={styles.list} aria-label={W.wildlifeFor(commonName)}>
+        <ul className={styles.list} aria-label={t('wildlifeFor', { name: commonName })}>
           {wildlife.map((w) => (
             <li key={w} className={styles.words}>
               {w}
@@ -78,7 +84,7 @@ export function OfferCard({ commonName, scientificName, facts, wildlife, caution
       {fit ? (
         <div>
           <p className={styles.whyTitle}>{fit.words}</p>
-          <ul className={styles.list} aria-label={`${W.whyItFits}: ${commonName}`}>
+          <ul className={styles.list} aria-label={t('whyItFitsFor', { name: commonName })}>
             {fit.why.map((w) => (
               <li key={w} className={styles.item}>
                 <CheckmarkCircle16Regular className={styles.fit} aria-hidden />
@@ -89,19 +95,24 @@ export function OfferCard({ commonName, scientificName, facts, wildlife, caution
         </div>
       ) : null}
       {cautions.length > 0 ? (
-        <ul className={styles.list} aria-label={W.cautionsFor(commonName)}>
+        <ul className={styles.list} aria-label={t('cautionsFor', { name: commonName })}>
           {cautions.map((c) => (
             <li key={c.kind} className={styles.item}>
               <Warning16Regular className={styles.caution} aria-hidden />
               <span>
-                <strong>{W.cautionLabel}</strong> {c.text}
+                <strong>{t('cautionLabel')}</strong> {c.text}
               </span>
             </li>
           ))}
         </ul>
       ) : null}
       {count && left > 0 ? (
-        <CountStepper label={W.countLabel(commonName)} value={count.value} max={count.max} onChange={count.onChange} />
+        <CountStepper
+          label={t('countLabel', { name: commonName })}
+          value={count.value}
+          max={count.max}
+          onChange={count.onChange}
+        />
       ) : null}
     </article>
   );

@@ -2,8 +2,9 @@ import { makeStyles, tokens } from '@fluentui/react-components';
 import type { TakerReservation } from '@homeground/shared';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
+import { useLocale } from '../../../lib/i18n/index.js';
 import { shareDateWords, slotWords } from '../utils/share-facts.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalXL },
@@ -26,36 +27,38 @@ const useStyles = makeStyles({
 
 /** Pickup (when, where, how, what to bring), the plants, and a care sheet for each species. */
 export function ReservationSummary({ reservation }: { reservation: TakerReservation }) {
+  const { t } = useTranslation('taker');
+  const { locale } = useLocale();
   const styles = useStyles();
   const { share, slot } = reservation;
   return (
     <div className={styles.stack}>
       <ContentCard aria-labelledby="pickup-heading">
         <Heading level="section" id="pickup-heading">
-          {W.pickupHeading}
+          {t('pickupHeading')}
         </Heading>
         <dl className={styles.facts}>
-          <dt className={styles.term}>{W.whenWords}</dt>
+          <dt className={styles.term}>{t('whenWords')}</dt>
           <dd className={styles.value}>
-            {shareDateWords(share.date)}, {slotWords(slot)}
+            {t('whenLine', { date: shareDateWords(share.date, locale), slot: slotWords(slot, locale) })}
           </dd>
-          <dt className={styles.term}>{W.whereWords}</dt>
+          <dt className={styles.term}>{t('whereWords')}</dt>
           <dd className={styles.value}>
             {share.place.name}, {share.place.address}
           </dd>
           {share.place.directions ? (
             <>
-              <dt className={styles.term}>{W.howWords}</dt>
+              <dt className={styles.term}>{t('howWords')}</dt>
               <dd className={styles.value}>{share.place.directions}</dd>
             </>
           ) : null}
-          <dt className={styles.term}>{W.bringWords}</dt>
-          <dd className={styles.value}>{share.whatToBring ?? W.bringAdvice}</dd>
+          <dt className={styles.term}>{t('bringWords')}</dt>
+          <dd className={styles.value}>{share.whatToBring ?? t('bringAdvice')}</dd>
         </dl>
       </ContentCard>
       <ContentCard aria-labelledby="plants-heading">
         <Heading level="section" id="plants-heading">
-          {W.plantsHeading}
+          {t('plantsHeading')}
         </Heading>
         <ul className={styles.list}>
           {reservation.lines.map((l) => (
@@ -67,27 +70,27 @@ export function ReservationSummary({ reservation }: { reservation: TakerReservat
       </ContentCard>
       <ContentCard aria-labelledby="care-heading">
         <Heading level="section" id="care-heading">
-          {W.careHeading}
+          {t('careHeading')}
         </Heading>
         <div className={styles.care}>
           {reservation.careSheet.map((c) => (
-            <section key={c.speciesSlug} aria-label={`${W.careHeading}: ${c.commonName}`}>
+            <section key={c.speciesSlug} aria-label={t('careFor', { name: c.commonName })}>
               <Heading level="card" className={styles.careName}>
                 {c.commonName} <span className={styles.scientific}>{c.scientificName}</span>
               </Heading>
               <dl className={styles.facts}>
-                <dt className={styles.term}>{W.careSun}</dt>
+                <dt className={styles.term}>{t('careSun')}</dt>
                 <dd className={styles.value}>{c.sun}</dd>
-                <dt className={styles.term}>{W.careSoil}</dt>
+                <dt className={styles.term}>{t('careSoil')}</dt>
                 <dd className={styles.value}>{c.moisture}</dd>
-                <dt className={styles.term}>{W.careSpacing}</dt>
+                <dt className={styles.term}>{t('careSpacing')}</dt>
                 <dd className={styles.value}>{c.spacing}</dd>
               </dl>
               {c.cautions.length > 0 ? (
-                <ul className={styles.list} aria-label={W.cautionsFor(c.commonName)}>
+                <ul className={styles.list} aria-label={t('cautionsFor', { name: c.commonName })}>
                   {c.cautions.map((line) => (
                     <li key={line}>
-                      <strong>{W.cautionLabel}</strong> {line}
+                      <strong>{t('cautionLabel')}</strong> {line}
                     </li>
                   ))}
                 </ul>

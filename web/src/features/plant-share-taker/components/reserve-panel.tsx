@@ -1,14 +1,15 @@
 import { Button, MessageBar, MessageBarActions, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
-import { joinWords, type ReservationRequest, type WaitlistRequest } from '@homeground/shared';
+import { type ReservationRequest, type WaitlistRequest } from '@homeground/shared';
 import { type FormEvent, useState } from 'react';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { SchemaTextField } from '../../../components/forms/schema-text-field.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
+import { useWords } from '../../../lib/i18n/index.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
 import { takerDetailsSchema } from '../utils/taker-details.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
 import { type SlotChoice, SlotPicker } from './slot-picker.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   form: { display: 'grid', gap: tokens.spacingVerticalL },
@@ -40,6 +41,8 @@ export interface ReservePanelProps {
 
 /** The pickup slot and the taker's name, e-mail and ZIP, then one button to reserve. */
 export function ReservePanel({ slots, chosen, limitTotal, isPending, onReserve, onWaitlist }: ReservePanelProps) {
+  const { t } = useTranslation('taker');
+  const words = useWords();
   const styles = useStyles();
   const form = useSchemaForm({ schema: takerDetailsSchema, initial: { name: '', email: '', zip: '' } });
   const [slotId, setSlotId] = useState('');
@@ -52,8 +55,8 @@ export function ReservePanel({ slots, chosen, limitTotal, isPending, onReserve, 
   const submit = (event: FormEvent) => {
     const noPlants = total === 0;
     const noSlot = slotId === '';
-    setPlantsError(noPlants ? W.noPlantsChosen : total > limitTotal ? W.overTotal(limitTotal) : null);
-    setSlotError(noSlot ? W.noSlot : undefined);
+    setPlantsError(noPlants ? t('noPlantsChosen') : total > limitTotal ? t('overTotal', { count: limitTotal }) : null);
+    setSlotError(noSlot ? t('noSlot') : undefined);
     setWaitlist(null);
     form.handleSubmit((details) => {
       if (noPlants || noSlot || total > limitTotal) return;
@@ -86,11 +89,11 @@ export function ReservePanel({ slots, chosen, limitTotal, isPending, onReserve, 
   return (
     <ContentCard aria-labelledby="reserve-heading">
       <Heading level="section" id="reserve-heading">
-        {W.reserveHeading}
+        {t('reserveHeading')}
       </Heading>
       <form ref={form.formRef} className={styles.form} onSubmit={submit} noValidate aria-labelledby="reserve-heading">
         <p className={styles.chosen} aria-live="polite">
-          {W.chosen(total, limitTotal)}
+          {t('chosen', { chosen: total, count: limitTotal })}
         </p>
         {plantsError ? (
           <MessageBar intent="error">
@@ -104,11 +107,11 @@ export function ReservePanel({ slots, chosen, limitTotal, isPending, onReserve, 
           error={slotError}
         />
         <div className={styles.details}>
-          <Heading level="card">{W.yourDetails}</Heading>
-          <p className={styles.lead}>{W.detailsLead}</p>
-          <SchemaTextField form={form} name="name" label={W.name} required autoComplete="name" />
-          <SchemaTextField form={form} name="email" label={W.email} type="email" required autoComplete="email" />
-          <SchemaTextField form={form} name="zip" label={W.zip} required autoComplete="postal-code" />
+          <Heading level="card">{t('yourDetails')}</Heading>
+          <p className={styles.lead}>{t('detailsLead')}</p>
+          <SchemaTextField form={form} name="name" label={t('name')} required autoComplete="name" />
+          <SchemaTextField form={form} name="email" label={t('email')} type="email" required autoComplete="email" />
+          <SchemaTextField form={form} name="zip" label={t('zip')} required autoComplete="postal-code" />
         </div>
         {form.failure ? (
           <MessageBar intent="error">
@@ -118,20 +121,20 @@ export function ReservePanel({ slots, chosen, limitTotal, isPending, onReserve, 
         {waitlist ? (
           <MessageBar intent="warning" layout="multiline">
             <MessageBarBody>
-              {W.allTaken} {W.waitlistOffer(joinWords(waitlist.names))}
+              {t('allTaken')} {t('waitlistOffer', { names: words.join(waitlist.names) })}
             </MessageBarBody>
             <MessageBarActions>
-              <Button onClick={joinList}>{W.joinWaitlist}</Button>
+              <Button onClick={joinList}>{t('joinWaitlist')}</Button>
             </MessageBarActions>
           </MessageBar>
         ) : null}
         {waitlisted ? (
           <MessageBar intent="success">
-            <MessageBarBody>{W.joinedWaitlist}</MessageBarBody>
+            <MessageBarBody>{t('joinedWaitlist')}</MessageBarBody>
           </MessageBar>
         ) : null}
         <Button className={styles.submit} type="submit" appearance="primary" disabled={isPending}>
-          {isPending ? W.reserving : W.reserve}
+          {isPending ? t('reserving') : t('reserve')}
         </Button>
       </form>
     </ContentCard>

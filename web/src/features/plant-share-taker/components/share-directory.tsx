@@ -6,7 +6,7 @@ import { ContentCard } from '../../../components/page/content-card.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { QueryState } from '../../../components/states/index.js';
 import { paths } from '../../../config/paths.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, display: 'grid', gap: tokens.spacingVerticalS },
@@ -14,20 +14,21 @@ const useStyles = makeStyles({
 
 /** For someone who is not an organiser: each growing group's plant share page, to reserve from. */
 export function ShareDirectory() {
+  const { t } = useTranslation('taker');
   const styles = useStyles();
   const groups = useQuery(groupsQueryOptions());
   return (
     <>
-      <PageIntro title="Plant share">{W.directoryLead}</PageIntro>
+      <PageIntro title={t('directoryTitle')}>{t('directoryLead')}</PageIntro>
       <QueryState
         query={groups}
-        loading={W.loading}
-        error={W.loadFailed}
+        loading={t('loading')}
+        error={t('loadFailed')}
         isEmpty={(g) => g.length === 0}
-        empty={W.directoryEmpty}
+        empty={t('directoryEmpty')}
       >
         {(list) => (
-          <ContentCard aria-label={W.directoryLabel}>
+          <ContentCard aria-label={t('directoryLabel')}>
             <ul className={styles.list}>
               {list.map((g) => (
                 <li key={g.slug}>

@@ -1,6 +1,7 @@
 import { Field, makeStyles, Radio, RadioGroup, tokens } from '@fluentui/react-components';
+import { useLocale } from '../../../lib/i18n/index.js';
 import { slotWords } from '../utils/share-facts.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
+import { useTranslation } from 'react-i18next';
 
 const useStyles = makeStyles({
   label: { display: 'flex', flexDirection: 'column', paddingBlock: tokens.spacingVerticalXS },
@@ -30,9 +31,11 @@ export function SlotPicker({
   onChange: (id: string) => void;
   error?: string;
 }) {
+  const { t } = useTranslation('taker');
+  const { locale } = useLocale();
   const styles = useStyles();
   return (
-    <Field label={W.slotLegend} required validationMessage={error} validationState={error ? 'error' : 'none'}>
+    <Field label={t('slotLegend')} required validationMessage={error} validationState={error ? 'error' : 'none'}>
       <RadioGroup name="pickup-slot" value={value} onChange={(_, d) => onChange(d.value)}>
         {slots.map((s) => (
           <Radio
@@ -41,9 +44,9 @@ export function SlotPicker({
             disabled={s.left <= 0 || s.past === true}
             label={
               <span className={styles.label}>
-                <span className={styles.time}>{slotWords(s)}</span>
+                <span className={styles.time}>{slotWords(s, locale)}</span>
                 <span className={styles.line}>
-                  {s.past ? W.slotPast : s.left <= 0 ? W.slotFull : W.slotLeft(s.left)}
+                  {s.past ? t('slotPast') : s.left <= 0 ? t('slotFull') : t('slotLeft', { count: s.left })}
                 </span>
               </span>
             }

@@ -8,18 +8,20 @@ import { ContentCard } from '../../../components/page/content-card.js';
 import { PageIntro } from '../../../components/page/page-intro.js';
 import { EmptyState, ErrorState, QueryState } from '../../../components/states/index.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
+import { LOCALE_TAGS, useLocale } from '../../../lib/i18n/index.js';
 import { shareDateWords } from '../utils/share-facts.js';
-import { TAKER_WORDS as W } from '../utils/taker-words.js';
 import { Confirmation } from './confirmation.js';
 import { SlotPicker } from './slot-picker.js';
+import { useTranslation } from 'react-i18next';
 
-const HELD_UNTIL = new Intl.DateTimeFormat('en-US', {
+// When the hold ends, in the reader's own time zone and language: "Monday, June 7, 6:00 PM".
+const HELD_UNTIL: Intl.DateTimeFormatOptions = {
   weekday: 'long',
   month: 'long',
   day: 'numeric',
   hour: 'numeric',
   minute: '2-digit',
-});
+};
 
 const useStyles = makeStyles({
   form: { display: 'grid', gap: tokens.spacingVerticalL },
@@ -28,18 +30,19 @@ const useStyles = makeStyles({
 
 /** A waitlist offer opened by the link in its e-mail: the plants held, a pickup slot, one button. */
 export function WaitlistOffer({ token }: { token: string }) {
+  const { t } = useTranslation('taker');
   const offer = useQuery(waitlistOfferQueryOptions(token));
   const [claimed, setClaimed] = useState<ReservationCreated | null>(null);
   if (claimed) return <Confirmation reservation={claimed} />;
   return (
     <QueryState
       query={offer}
-      loading={W.offerLoading}
+      loading={t('offerLoading')}
       error={(error, retry) =>
         isApiRequestError(error) && [403, 404, 410].includes(error.statusCode) ? (
-          <EmptyState title={W.offerBadLink} />
+          <EmptyState title={t('offerBadLink')} />
         ) : (
-          <ErrorState title={W.offerFailed} message={error.message} onRetry={retry} />
+          <ErrorState title={t('offerFailed')} message={error.message} onRetry={retry} />
         )
       }
     >
@@ -57,6 +60,8 @@ function Offer({
   offer: WaitlistOfferView;
   onClaimed: (r: ReservationCreated) => void;
 }) {
+  const { t } = useTranslation('taker');
+  const { locale } = useLocale();
   const styles = useStyles();
   const claim = useClaimOfferMutation(token, offer.share.groupSlug);
   const open = offer.slots.filter((s) => !s.past && s.left > 0);
@@ -65,25 +70,36 @@ function Offer({
   const [slotError, setSlotError] = useState<string | undefined>();
 
   const take = () => {
-    if (!slotId) return setSlotError(W.noSlot);
+    if (!slotId) return setSlotError(t('noSlot'));
     claim.mutate({ slotId }, { onSuccess: onClaimed });
   };
 
   return (
     <>
-      <PageIntro title={W.offerTitle}>
-        {W.offerLead(offer.count, offer.commonName, offer.share.groupName, shareDateWords(offer.share.date))}
+      <PageIntro title={t('offerTitle')}>
+        {t('offerLead', {
+          count: offer.count,
+          name: offer.commonName,
+          group: offer.share.groupName,
+          date: shareDateWords(offer.share.date, locale),
+        })}
       </PageIntro>
-      <ContentCard aria-label={W.offerTitle}>
+      <ContentCard aria-label={t('offerTitle')}>
         {offer.status === 'claimed' ? (
-          <p>{W.offerClaimed}</p>
+          <p>{t('offerClaimed')}</p>
         ) : offer.status === 'expired' ? (
-          <p>{W.offerExpired}</p>
+          <p>{t('offerExpired')}</p>
         ) : (
           <div className={styles.form}>
-            {offer.heldUntil ? <p>{W.offerHeldUntil(HELD_UNTIL.format(new Date(offer.heldUntil)))}</p> : null}
+            {offer.heldUntil ? (
+              <p>
+                {t('offerHeldUntil', {
+                  when: new Intl.DateTimeFormat(LOCALE_TAGS[locale], HELD_UNTIL).format(new Date(offer.heldUntil)),
+                })}
+              </p>
+            ) : null}
             {offer.joinsReservation ? (
-              <p>{W.offerJoins}</p>
+              <p>{t('offerJoins')}</p>
             ) : (
               <SlotPicker
                 slots={open}
@@ -98,7 +114,7 @@ function Offer({
               </MessageBar>
             ) : null}
             <Button className={styles.submit} appearance="primary" onClick={take} disabled={claim.isPending}>
-              {claim.isPending ? W.offerClaiming : W.offerClaim}
+              {claim.isPending ? t('offerClaiming') : t('offerClaim')}
             </Button>
           </div>
         )}

@@ -1,9 +1,10 @@
 import { Button, makeStyles, tokens } from '@fluentui/react-components';
 import { AddRegular, CheckmarkRegular } from '@fluentui/react-icons';
-import { moisturePhrase, type ShareList, type ShareListProposal, sunPhrase } from '@homeground/shared';
+import type { ShareList } from '@homeground/shared';
+import { useTranslation } from 'react-i18next';
 import { Heading } from '../../../components/page/page-heading.js';
 import type { TargetDraft } from '../hooks/use-target-draft.js';
-import { countWords } from '../utils/season-words.js';
+import { useFormatters, useWords } from '../../../lib/i18n/index.js';
 import { useSeasonStyles } from './season.styles.js';
 
 const useStyles = makeStyles({
@@ -24,17 +25,15 @@ const useStyles = makeStyles({
   meta: { margin: 0, color: tokens.colorNeutralForeground2 },
 });
 
-/** Bloom periods as the trade says them (CP42's early / mid / late). */
-function bloomWords(p: ShareListProposal): string {
-  return p.bloomPeriods.length === 0 ? 'no early, mid or late bloom' : p.bloomPeriods.join(', ');
-}
-
 /** The proposals with why, each with a button that adds it to the (unsaved) targets. */
 export function ProposalList({ list, draft }: { list: ShareList; draft: TargetDraft }) {
+  const { t } = useTranslation('season');
+  const words = useWords();
+  const { number } = useFormatters();
   const styles = useStyles();
   const shared = useSeasonStyles();
   return (
-    <section aria-label="Proposed species">
+    <section aria-label={t('proposals.label')}>
       {list.notes.length > 0 ? (
         <ul className={shared.list}>
           {list.notes.map((n) => (
@@ -54,15 +53,28 @@ export function ProposalList({ list, draft }: { list: ShareList; draft: TargetDr
                 <Button
                   icon={isAdded ? <CheckmarkRegular /> : <AddRegular />}
                   disabled={isAdded}
-                  aria-label={isAdded ? `${p.commonName} is on your targets` : `Add ${p.commonName} to targets`}
+                  aria-label={
+                    isAdded
+                      ? t('proposals.onTargetsOf', { name: p.commonName })
+                      : t('proposals.addOf', { name: p.commonName })
+                  }
                   onClick={() => draft.add(p)}
                 >
-                  {isAdded ? 'On your targets' : `Add ${countWords(p.suggestedPlants)} plants`}
+                  {isAdded
+                    ? t('proposals.onTargets')
+                    : t('proposals.add', { count: p.suggestedPlants, formatted: number(p.suggestedPlants) })}
                 </Button>
               </div>
               <p className={styles.meta}>
-                Bloom period: {bloomWords(p)}. Suits: {sunPhrase(p.sunOptimum)};{' '}
-                {moisturePhrase(p.moistureOptimum).toLowerCase()}.
+                {t('proposals.meta', {
+                  // Bloom periods as the trade says them (CP42's early / mid / late).
+                  bloom:
+                    p.bloomPeriods.length === 0
+                      ? t('proposals.noBloom')
+                      : words.join(p.bloomPeriods.map((period) => t(`proposals.bloom.${period}`))),
+                  sun: words.sunPhrase(p.sunOptimum),
+                  soil: words.moisturePhrase(p.moistureOptimum).toLowerCase(),
+                })}
               </p>
               <ul className={shared.list}>
                 {p.why.map((w) => (

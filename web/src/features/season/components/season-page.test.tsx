@@ -35,6 +35,20 @@ describe('the season page', () => {
     expect(screen.getByRole('heading', { name: 'Fechas y métodos' })).toBeInTheDocument();
     expect(screen.getByText('lunes, 10 de mayo de 2027')).toBeInTheDocument(); // CLDR es-US via Intl
     expect(screen.getByText(/^25\s?%\s+de las plantas$/)).toBeInTheDocument();
+    // Targets and seed list in Spanish too, the numbers as the fixture gives them.
+    expect(screen.getByRole('heading', { name: 'Objetivos' })).toBeInTheDocument();
+    const targets = within(screen.getByRole('region', { name: 'Tabla de objetivos' }));
+    expect(targets.getByRole('textbox', { name: 'Plantas objetivo de Butterfly milkweed' })).toHaveValue('60');
+    expect(screen.getByRole('button', { name: 'Guardar los objetivos' })).toBeInTheDocument();
+    expect(await screen.findByRole('heading', { name: 'Lista de semillas' })).toBeInTheDocument();
+    // 0.2 of seedlings lost is "20 %" in es-US (CLDR percent pattern via Intl).
+    expect(
+      await screen.findByText(
+        /Calculada para 2027 contando un 20\s?% de plántulas perdidas y 100 semillas por sobre\./,
+      ),
+    ).toBeInTheDocument();
+    expect(screen.getByRole('region', { name: 'Tabla de la lista de semillas' })).toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'Antes de recolectar o sembrar' })).toBeInTheDocument();
   });
 
   it("shows an organiser the season's dates, targets and seed list with its cautions", async () => {

@@ -10,38 +10,35 @@ import {
 import { ArrowDownloadRegular, PrintRegular } from '@fluentui/react-icons';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
+import { useTranslation } from 'react-i18next';
 import { downloadSeedListCsv, type SeasonSeedList } from '../../../api/seasons/seasons.api.js';
 import { seedListQueryOptions } from '../../../api/seasons/seasons.queries.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { QueryState } from '../../../components/states/index.js';
-import { countWords } from '../utils/season-words.js';
+import { useFormatters } from '../../../lib/i18n/index.js';
 import { SeedListNotes } from './seed-list-notes.js';
 import { useSeasonStyles } from './season.styles.js';
 import './seed-list-print.css';
-
-/** "12.5 g / 0.441 oz", or words when the record gives no seeds per pound. */
-function weightWords(grams: number | null, ounces: number | null): string {
-  return grams === null || ounces === null ? 'no weight on record' : `${grams} g / ${ounces} oz`;
-}
 
 /**
  * The seed list: per target, seeds to sow (target ÷ (germination × (1 − losses))), their weight and
  * packets, and which to collect locally instead, with the collecting cautions. Prints black on white.
  */
 export function SeedListCard({ slug }: { slug: string }) {
+  const { t } = useTranslation('season');
   const seedList = useQuery(seedListQueryOptions(slug));
   return (
     <ContentCard aria-labelledby="season-seed-list">
       <Heading level="section" id="season-seed-list">
-        Seed list
+        {t('seedList.title')}
       </Heading>
       <QueryState
         query={seedList}
-        loading="Working out the seed list"
-        error="The seed list did not load."
+        loading={t('seedList.loading')}
+        error={t('seedList.failed')}
         isEmpty={(l) => l.rows.length === 0}
-        empty="The seed list fills in once the season has targets."
+        empty={t('seedList.empty')}
       >
         {(list) => <SeedListBody slug={slug} list={list} />}
       </QueryState>
@@ -50,24 +47,34 @@ export function SeedListCard({ slug }: { slug: string }) {
 }
 
 function SeedListBody({ slug, list }: { slug: string; list: SeasonSeedList }) {
+  const { t } = useTranslation('season');
+  const { number } = useFormatters();
   const styles = useSeasonStyles();
+  /** "12.5 g / 0.441 oz", or words when the record gives no seeds per pound. */
+  const weightWords = (grams: number | null, ounces: number | null) =>
+    grams === null || ounces === null
+      ? t('seedList.noWeight')
+      : t('seedList.weightLine', { grams: number(grams), ounces: number(ounces) });
   return (
     <div data-print-root="seed-list">
       <p className={styles.lead}>
-        Worked out for {list.year} with {Math.round(list.lossFactor * 100)}% of seedlings allowed for losses and{' '}
-        {list.seedsPerPacket} seeds in a packet.
+        {t('seedList.lead', {
+          year: list.year,
+          losses: number(list.lossFactor, { style: 'percent' }),
+          perPacket: number(list.seedsPerPacket),
+        })}
       </p>
-      <div className={styles.scroller} role="region" aria-label="Seed list table" tabIndex={0}>
+      <div className={styles.scroller} role="region" aria-label={t('seedList.tableLabel')} tabIndex={0}>
         <Table className={styles.table} aria-labelledby="season-seed-list">
           <TableHeader>
             <TableRow>
-              <TableHeaderCell>Species</TableHeaderCell>
-              <TableHeaderCell>Seeds to sow</TableHeaderCell>
-              <TableHeaderCell>Packets</TableHeaderCell>
-              <TableHeaderCell>Weight</TableHeaderCell>
-              <TableHeaderCell>Target plants</TableHeaderCell>
-              <TableHeaderCell>Germination</TableHeaderCell>
-              <TableHeaderCell>Get it by</TableHeaderCell>
+              <TableHeaderCell>{t('seedList.species')}</TableHeaderCell>
+              <TableHeaderCell>{t('seedList.seedsToSow')}</TableHeaderCell>
+              <TableHeaderCell>{t('seedList.packets')}</TableHeaderCell>
+              <TableHeaderCell>{t('seedList.weight')}</TableHeaderCell>
+              <TableHeaderCell>{t('seedList.targetPlants')}</TableHeaderCell>
+              <TableHeaderCell>{t('seedList.germination')}</TableHeaderCell>
+              <TableHeaderCell>{t('seedList.getItBy')}</TableHeaderCell>
             </TableRow>
           </TableHeader>
           <TableBody>
@@ -77,32 +84,34 @@ function SeedListBody({ slug, list }: { slug: string; list: SeasonSeedList }) {
                   {r.commonName}
                   <span className={styles.scientific}>{r.scientificName}</span>
                 </TableCell>
-                <TableCell>{countWords(r.seedsToSow)}</TableCell>
-                <TableCell>{countWords(r.packets)}</TableCell>
+                <TableCell>{number(r.seedsToSow)}</TableCell>
+                <TableCell>{number(r.packets)}</TableCell>
                 <TableCell>{weightWords(r.grams, r.ounces)}</TableCell>
-                <TableCell>{countWords(r.targetPlants)}</TableCell>
+                <TableCell>{number(r.targetPlants)}</TableCell>
                 <TableCell>
-                  {r.germinationRatePct}% {r.germinationFrom === 'yours' ? '(yours)' : '(record)'}
+                  {t(r.germinationFrom === 'yours' ? 'seedList.rateYours' : 'seedList.rateRecord', {
+                    pct: number(r.germinationRatePct),
+                  })}
                 </TableCell>
                 <TableCell>
                   {r.neverCollectWild
-                    ? 'Buy: never from the wild'
+                    ? t('seedList.neverWild')
                     : r.collectLocally
-                      ? 'Collect locally instead'
+                      ? t('seedList.collectLocally')
                       : r.buyBy === 'weight'
-                        ? 'Buy by weight'
-                        : 'Buy in packets'}
+                        ? t('seedList.buyByWeight')
+                        : t('seedList.buyInPackets')}
                 </TableCell>
               </TableRow>
             ))}
             <TableRow>
               <TableCell>
-                <strong>All targets</strong>
+                <strong>{t('seedList.allTargets')}</strong>
               </TableCell>
-              <TableCell>{countWords(list.totals.seedsToSow)}</TableCell>
-              <TableCell>{countWords(list.totals.packets)}</TableCell>
+              <TableCell>{number(list.totals.seedsToSow)}</TableCell>
+              <TableCell>{number(list.totals.packets)}</TableCell>
               <TableCell>{weightWords(list.totals.grams, list.totals.ounces)}</TableCell>
-              <TableCell>{countWords(list.totals.targetPlants)}</TableCell>
+              <TableCell>{number(list.totals.targetPlants)}</TableCell>
               <TableCell />
               <TableCell />
             </TableRow>
@@ -117,6 +126,7 @@ function SeedListBody({ slug, list }: { slug: string; list: SeasonSeedList }) {
 
 function SeedListActions({ slug, year }: { slug: string; year: number }) {
   const styles = useSeasonStyles();
+  const { t } = useTranslation('season');
   const [failure, setFailure] = useState<string | null>(null);
   const download = async () => {
     setFailure(null);
@@ -130,16 +140,16 @@ function SeedListActions({ slug, year }: { slug: string; year: number }) {
       link.click();
       URL.revokeObjectURL(url);
     } catch (error) {
-      setFailure(error instanceof Error ? error.message : 'The CSV did not download. Try again.');
+      setFailure(error instanceof Error ? error.message : t('seedList.csvFailed'));
     }
   };
   return (
     <div className={styles.actions} data-print="hide">
       <Button icon={<ArrowDownloadRegular />} onClick={() => void download()}>
-        Download the seed list (CSV)
+        {t('seedList.csv')}
       </Button>
       <Button icon={<PrintRegular />} onClick={() => window.print()}>
-        Print the seed list
+        {t('seedList.print')}
       </Button>
       {failure ? <span role="alert">{failure}</span> : null}
     </div>

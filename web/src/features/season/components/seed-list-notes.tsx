@@ -1,4 +1,5 @@
 import type { SeasonSeedList } from '../../../api/seasons/seasons.api.js';
+import { useTranslation } from 'react-i18next';
 import { Heading } from '../../../components/page/page-heading.js';
 import { useSeasonStyles } from './season.styles.js';
 
@@ -7,6 +8,7 @@ import { useSeasonStyles } from './season.styles.js';
  * wild) with their notes, each species' handling cautions, and the usual collecting cautions.
  */
 export function SeedListNotes({ list }: { list: SeasonSeedList }) {
+  const { t } = useTranslation('season');
   const styles = useSeasonStyles();
   const collect = list.rows.filter((r) => r.collectLocally || r.neverCollectWild || r.collectNotes.length > 0);
   const careful = list.rows.filter((r) => r.cautions.length > 0);
@@ -15,13 +17,15 @@ export function SeedListNotes({ list }: { list: SeasonSeedList }) {
       {collect.length > 0 ? (
         <section aria-labelledby="seed-list-collect">
           <Heading level="card" id="seed-list-collect">
-            Collect locally instead
+            {t('seedList.collectHeading')}
           </Heading>
           <ul className={styles.list}>
             {collect.map((r) => (
               <li key={r.slug}>
-                <strong>{r.commonName}</strong>
-                {r.neverCollectWild ? ' (never from the wild)' : ''}: {r.collectNotes.join(' ')}
+                {t(r.neverCollectWild ? 'seedList.collectNeverWild' : 'seedList.collectLine', {
+                  name: r.commonName,
+                  notes: r.collectNotes.join(' '),
+                })}
               </li>
             ))}
           </ul>
@@ -30,7 +34,7 @@ export function SeedListNotes({ list }: { list: SeasonSeedList }) {
       {careful.length > 0 ? (
         <section aria-labelledby="seed-list-handling">
           <Heading level="card" id="seed-list-handling">
-            Handle with care
+            {t('seedList.handleHeading')}
           </Heading>
           <ul className={styles.list}>
             {careful.map((r) => (
@@ -43,7 +47,7 @@ export function SeedListNotes({ list }: { list: SeasonSeedList }) {
       ) : null}
       <section aria-labelledby="seed-list-cautions">
         <Heading level="card" id="seed-list-cautions">
-          Before you collect or sow
+          {t('seedList.cautionsHeading')}
         </Heading>
         <ul className={styles.list}>
           {list.cautions.map((c) => (

@@ -14,13 +14,14 @@ import {
 import { DeleteRegular, SaveRegular } from '@fluentui/react-icons';
 import type { Season } from '@homeground/shared';
 import { type FormEvent, useState } from 'react';
+import { useTranslation } from 'react-i18next';
 import { useSaveTargetsMutation } from '../../../api/seasons/seasons.mutations.js';
 import { ContentCard } from '../../../components/page/content-card.js';
 import { Heading } from '../../../components/page/page-heading.js';
 import { isApiRequestError } from '../../../lib/api-request-error.js';
+import { useFormatters } from '../../../lib/i18n/index.js';
 import type { TargetDraft } from '../hooks/use-target-draft.js';
 import { rowErrorsFromApi, targetsBody } from '../utils/target-rows.js';
-import { countWords } from '../utils/season-words.js';
 import { useSeasonStyles } from './season.styles.js';
 
 /**
@@ -29,10 +30,11 @@ import { useSeasonStyles } from './season.styles.js';
  * else reads the saved list.
  */
 export function TargetsCard({ slug, season, draft }: { slug: string; season: Season; draft: TargetDraft | null }) {
+  const { t } = useTranslation('season');
   return (
     <ContentCard aria-labelledby="season-targets">
       <Heading level="section" id="season-targets">
-        Targets
+        {t('targets.title')}
       </Heading>
       {draft ? <TargetsEditor slug={slug} draft={draft} /> : <TargetsReadOnly season={season} />}
     </ContentCard>
@@ -50,27 +52,31 @@ function SpeciesName({ common, scientific }: { common: string; scientific: strin
 }
 
 function TargetsReadOnly({ season }: { season: Season }) {
+  const { t } = useTranslation('season');
+  const { number } = useFormatters();
   const styles = useSeasonStyles();
-  if (season.targets.length === 0) return <p>The organiser has not set any targets yet.</p>;
+  if (season.targets.length === 0) return <p>{t('targets.none')}</p>;
   return (
-    <div className={styles.scroller} role="region" aria-label="Targets table" tabIndex={0}>
+    <div className={styles.scroller} role="region" aria-label={t('targets.tableLabel')} tabIndex={0}>
       <Table className={styles.table} aria-labelledby="season-targets">
         <TableHeader>
           <TableRow>
-            <TableHeaderCell>Species</TableHeaderCell>
-            <TableHeaderCell>Target plants</TableHeaderCell>
-            <TableHeaderCell>Germination</TableHeaderCell>
+            <TableHeaderCell>{t('targets.species')}</TableHeaderCell>
+            <TableHeaderCell>{t('targets.targetPlants')}</TableHeaderCell>
+            <TableHeaderCell>{t('targets.germination')}</TableHeaderCell>
           </TableRow>
         </TableHeader>
         <TableBody>
-          {season.targets.map((t) => (
-            <TableRow key={t.slug}>
+          {season.targets.map((target) => (
+            <TableRow key={target.slug}>
               <TableCell>
-                <SpeciesName common={t.commonName} scientific={t.scientificName} />
+                <SpeciesName common={target.commonName} scientific={target.scientificName} />
               </TableCell>
-              <TableCell>{countWords(t.targetPlants)}</TableCell>
+              <TableCell>{number(target.targetPlants)}</TableCell>
               <TableCell>
-                {t.germinationRatePct === undefined ? "The species record's rate" : `${t.germinationRatePct}% (tested)`}
+                {target.germinationRatePct === undefined
+                  ? t('targets.recordRate')
+                  : t('targets.tested', { pct: number(target.germinationRatePct) })}
               </TableCell>
             </TableRow>
           ))}
@@ -82,6 +88,7 @@ function TargetsReadOnly({ season }: { season: Season }) {
 
 function TargetsEditor({ slug, draft }: { slug: string; draft: TargetDraft }) {
   const styles = useSeasonStyles();
+  const { t } = useTranslation('season');
   const save = useSaveTargetsMutation(slug);
   const [failure, setFailure] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
@@ -102,7 +109,7 @@ function TargetsEditor({ slug, draft }: { slug: string; draft: TargetDraft }) {
       },
       onError: (error) => {
         // Nothing was written: the draft stays as typed, with the API's words beside each row.
-        if (!isApiRequestError(error)) return setFailure('Something went wrong. Try again.');
+        if (!isApiRequestError(error)) return setFailure(t('targets.somethingWrong'));
         const { errors, loose } = rowErrorsFromApi(error.fields ?? []);
         draft.setErrors(errors);
         const hasRowErrors = Object.keys(errors).length > 0;
@@ -113,22 +120,19 @@ function TargetsEditor({ slug, draft }: { slug: string; draft: TargetDraft }) {
 
   return (
     <form onSubmit={submit} noValidate aria-labelledby="season-targets">
-      <p className={styles.lead}>
-        Plants you want ready for the plant share. Leave germination empty to use the species record&apos;s rate, or
-        enter your own from a germination test of this year&apos;s seed.
-      </p>
+      <p className={styles.lead}>{t('targets.lead')}</p>
       {draft.rows.length === 0 ? (
-        <p>No targets yet. Propose species below and add the ones you want to grow.</p>
+        <p>{t('targets.empty')}</p>
       ) : (
-        <div className={styles.scroller} role="region" aria-label="Targets table" tabIndex={0}>
+        <div className={styles.scroller} role="region" aria-label={t('targets.tableLabel')} tabIndex={0}>
           <Table className={styles.table} aria-labelledby="season-targets">
             <TableHeader>
               <TableRow>
-                <TableHeaderCell>Species</TableHeaderCell>
-                <TableHeaderCell>Target plants</TableHeaderCell>
-                <TableHeaderCell>Your germination (%)</TableHeaderCell>
+                <TableHeaderCell>{t('targets.species')}</TableHeaderCell>
+                <TableHeaderCell>{t('targets.targetPlants')}</TableHeaderCell>
+                <TableHeaderCell>{t('targets.yourGermination')}</TableHeaderCell>
                 <TableHeaderCell>
-                  <span className={styles.visuallyHidden}>Remove</span>
+                  <span className={styles.visuallyHidden}>{t('targets.remove')}</span>
                 </TableHeaderCell>
               </TableRow>
             </TableHeader>
@@ -143,7 +147,10 @@ function TargetsEditor({ slug, draft }: { slug: string; draft: TargetDraft }) {
                     </TableCell>
                     <TableCell>
                       <Field
-                        label={{ children: `Target plants of ${row.commonName}`, className: styles.visuallyHidden }}
+                        label={{
+                          children: t('targets.targetPlantsOf', { name: row.commonName }),
+                          className: styles.visuallyHidden,
+                        }}
                         validationMessage={errors.targetPlants}
                         validationState={errors.targetPlants ? 'error' : 'none'}
                       >
@@ -158,7 +165,7 @@ function TargetsEditor({ slug, draft }: { slug: string; draft: TargetDraft }) {
                     <TableCell>
                       <Field
                         label={{
-                          children: `Your germination rate for ${row.commonName}`,
+                          children: t('targets.germinationOf', { name: row.commonName }),
                           className: styles.visuallyHidden,
                         }}
                         validationMessage={errors.germinationRatePct}
@@ -167,7 +174,7 @@ function TargetsEditor({ slug, draft }: { slug: string; draft: TargetDraft }) {
                         <Input
                           className={styles.number}
                           inputMode="decimal"
-                          placeholder="record's rate"
+                          placeholder={t('targets.recordPlaceholder')}
                           value={row.germinationRatePct}
                           onChange={(_, d) => draft.change(i, 'germinationRatePct', d.value)}
                         />
@@ -177,7 +184,7 @@ function TargetsEditor({ slug, draft }: { slug: string; draft: TargetDraft }) {
                       <Button
                         appearance="subtle"
                         icon={<DeleteRegular />}
-                        aria-label={`Remove ${row.commonName}`}
+                        aria-label={t('targets.removeOf', { name: row.commonName })}
                         onClick={() => draft.remove(i)}
                       />
                     </TableCell>
@@ -195,11 +202,9 @@ function TargetsEditor({ slug, draft }: { slug: string; draft: TargetDraft }) {
       ) : null}
       <div className={styles.actions} data-print="hide">
         <Button type="submit" appearance="primary" icon={<SaveRegular />} disabled={save.isPending}>
-          {save.isPending ? 'Saving…' : 'Save targets'}
+          {save.isPending ? t('targets.saving') : t('targets.save')}
         </Button>
-        <span role="status">
-          {draft.isDirty ? 'You have changes that are not saved yet.' : saved ? 'Targets saved.' : ''}
-        </span>
+        <span role="status">{draft.isDirty ? t('targets.unsaved') : saved ? t('targets.saved') : ''}</span>
       </div>
     </form>
   );

@@ -45,6 +45,7 @@ import { isApiRequestError } from '../../../lib/api-request-error.js';
 import { asSentence, failureFromApi, type FormFailure } from '../../../lib/forms/field-errors.js';
 import { useSchemaForm } from '../../../lib/forms/use-schema-form.js';
 import { SECTIONS, type EditorField } from '../utils/editor-layout.js';
+import { EntryListField } from './entry-list-field.js';
 
 const useStyles = makeStyles({
   form: { display: 'grid', gap: tokens.spacingVerticalXL },
@@ -225,6 +226,17 @@ export function SpeciesEditorForm({
             ))}
           </Dropdown>
         </Field>
+      );
+    }
+    if (field === 'cautions' || field === 'reconciliations') {
+      return (
+        <EntryListField
+          kind={field}
+          value={v[field]}
+          onChange={(json) => form.change(field, json)}
+          sources={sources}
+          validationMessage={form.errors[field]}
+        />
       );
     }
     if (LONG.includes(field)) {

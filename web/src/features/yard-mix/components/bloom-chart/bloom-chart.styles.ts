@@ -21,8 +21,8 @@ export const useBloomChartStyles = makeStyles({
     padding: `2px ${tokens.spacingHorizontalS} 2px 0`,
     minWidth: '7rem',
     maxWidth: '14rem',
-    // At 390 px the twelve months fit beside the names without scrolling.
-    '@media (max-width: 480px)': { minWidth: '5.5rem', maxWidth: '7rem' },
+    // At 390 px the twelve months fit beside the names without scrolling, whichever language's cell labels.
+    '@media (max-width: 480px)': { minWidth: '5rem', maxWidth: '7rem' },
     lineHeight: tokens.lineHeightBase200,
   },
   notCounted: { display: 'block', color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase100 },

@@ -1,6 +1,7 @@
 import { FluentProvider } from '@fluentui/react-components';
 import { render, screen, within } from '@testing-library/react';
 import { wordsFor } from '@homeground/shared';
+import { I18nextProvider } from 'react-i18next';
 import { describe, expect, it } from 'vitest';
 import { createI18n } from '../../../../lib/i18n/index.js';
 import { homegroundTheme } from '../../../../theme/index.js';
@@ -63,5 +64,25 @@ describe('BloomChart', () => {
     expect(screen.getByRole('list', { name: 'Bloom chart legend' })).toHaveTextContent('Lv: lavender');
     // The sedge is drawn but not counted toward flowering.
     expect(within(table).getByRole('row', { name: /test sedge/ })).toHaveTextContent('not counted');
+  });
+
+  // Spanish words from the es catalogue (locales/es/mix.ts) and the shared Spanish colour names.
+  it('labels the bloom cells and the legend in Spanish for a Spanish page', () => {
+    render(
+      <I18nextProvider i18n={createI18n('es')}>
+        <FluentProvider theme={homegroundTheme}>
+          <BloomChart species={fixtureSpecies} />
+        </FluentProvider>
+      </I18nextProvider>,
+    );
+    const table = screen.getByRole('table', { name: /calendario de floración/i });
+    const phlox = within(table).getByRole('row', { name: /early test phlox/ });
+    expect(within(phlox).getAllByText('en flor, lavanda')).toHaveLength(4);
+    expect(within(phlox).getAllByText('Lv')).toHaveLength(4);
+    const legend = screen.getByRole('list', { name: /leyenda/i });
+    expect(legend).toHaveTextContent('Am: amarillo');
+    expect(legend).toHaveTextContent('Mo: morado');
+    expect(legend).toHaveTextContent('Bl: blanco');
+    expect(legend).not.toHaveTextContent(/Wh|Ye|Pu/);
   });
 });

@@ -61,7 +61,9 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
           <tbody>
             {species.map((s) => {
               const swatch = flowerSwatch(s.flowerColours[0]);
-              const colour = s.flowerColours[0] ? words.flowerColour[s.flowerColours[0]] : t('bloom.colourUnknown');
+              const first = s.flowerColours[0];
+              const colour = first ? words.flowerColour[first] : t('bloom.colourUnknown');
+              const label = first ? t(`bloom.cellLabel.${first}`) : swatch.label;
               const counted = isFloweringSpecies(s);
               return (
                 <tr key={s.slug}>
@@ -78,7 +80,7 @@ export function BloomChart({ species }: { species: readonly SpeciesSummary[] }) 
                         style={{ backgroundColor: swatch.fill, color: swatch.ink }}
                         data-bloom={swatch.name}
                       >
-                        <span aria-hidden>{swatch.label}</span>
+                        <span aria-hidden>{label}</span>
                         <span className={styles.visuallyHidden}>{t('bloom.inFlower', { colour })}</span>
                       </td>
                     ) : (

@@ -21,9 +21,12 @@ export function BloomLegend({ species }: { species: readonly SpeciesSummary[] })
       {[...seen.values()].map(({ swatch: sw, colour }) => (
         <li key={sw.name} className={styles.legendItem}>
           <span aria-hidden className={styles.swatch} style={{ backgroundColor: sw.fill, color: sw.ink }}>
-            {sw.label}
+            {colour ? t(`bloom.cellLabel.${colour}`) : sw.label}
           </span>
-          {sw.label}: {colour ? words.flowerColour[colour] : t('bloom.colourUnknown')}
+          {t('bloom.legendItem', {
+            label: colour ? t(`bloom.cellLabel.${colour}`) : sw.label,
+            colour: colour ? words.flowerColour[colour] : t('bloom.colourUnknown'),
+          })}
         </li>
       ))}
       <li className={styles.legendItem}>
