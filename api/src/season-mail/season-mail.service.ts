@@ -212,12 +212,13 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
    * be the better source; it waits for the migration rework.
    */
   private async languageOf(email: string): Promise<MailLanguage> {
-    const rows: { locale: string }[] = await this.sentRows.query(
+    const rows = await runSql<{ locale: string }>(
+      this.sentRows.manager,
       `SELECT locale FROM (
          SELECT locale, created_at AS at FROM share_reservations WHERE lower(email) = lower(?)
          UNION ALL
          SELECT locale, created_at AS at FROM share_waitlist WHERE lower(email) = lower(?)
-       ) ORDER BY at DESC LIMIT 1`,
+       ) AS latest ORDER BY at DESC LIMIT 1`,
       [email, email],
     );
     return rows[0]?.locale === 'es' ? 'es' : 'en';
