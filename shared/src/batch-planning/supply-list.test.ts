@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SUPPLY_RULES, supplyList } from './supply-list.js';
+import { SUPPLY_RULES, SUPPLY_WORDS, supplyList } from './supply-list.js';
 
 // Quantities are common practice (from memory, see SUPPLY_RULES); the block volume is geometry:
 // a 2 in cube is 8 in³ × 16.387 cm³/in³ (the inch's definition, X) = 131 cm³ ≈ 0.13 L.
@@ -28,5 +28,21 @@ describe('supplyList', () => {
   it('leaves out what nobody needs', () => {
     const list = supplyList([{ method: 'outdoor-pot-winter', plants: 10, units: 10, fridge: false }]);
     expect(list.lines.map((l) => l.item)).toEqual(['pots', 'potting-mix', 'labels']);
+  });
+
+  it('says every line in Spanish too, with the same amounts', () => {
+    const batches = [
+      { method: 'winter-sowing' as const, plants: 50, units: 5, fridge: true },
+      { method: 'soil-blocks' as const, plants: 40, units: 40, fridge: false },
+    ];
+    const en = supplyList(batches, 'en');
+    const es = supplyList(batches, 'es');
+    expect(es.lines.map((l) => [l.item, l.count, l.litres])).toEqual(en.lines.map((l) => [l.item, l.count, l.litres]));
+    expect(es.lines.find((l) => l.item === 'containers')?.note).toBe('Para la siembra de invierno.');
+    for (const item of Object.keys(SUPPLY_WORDS.en)) {
+      expect(SUPPLY_WORDS.es[item as keyof typeof SUPPLY_WORDS.es].name).not.toBe(
+        SUPPLY_WORDS.en[item as keyof typeof SUPPLY_WORDS.en].name,
+      );
+    }
   });
 });

@@ -62,11 +62,46 @@ export const SUPPLY_RULES = {
 
 const LITRES_PER_DRY_QUART = 1.101221;
 
+/** Each supply line's name and what it is for, in each language (sizes US first, metric in brackets). */
+export const SUPPLY_WORDS: Record<WordLocale, Record<SupplyItem, { name: string; note: string }>> = {
+  en: {
+    pots: { name: '4 in (10 cm) pots', note: 'One per plant: for outdoor pots, and for potting up seedlings.' },
+    'cell-trays': { name: '72-cell seed trays', note: 'For sowing indoors under lights.' },
+    containers: { name: 'Covered containers (gallon jugs or deep trays with lids)', note: 'For winter sowing.' },
+    'potting-mix': { name: 'Potting mix', note: 'Pots, cells and containers, with 10 % to spare.' },
+    'soil-block-mix': { name: 'Soil-block mix', note: '2 in (5 cm) blocks, with 10 % to spare.' },
+    labels: {
+      name: 'Plant labels',
+      note: 'One per pot, container and tray; write in pencil or paint pen, as marker fades in the sun.',
+    },
+    vermiculite: { name: 'Vermiculite', note: 'For stratifying seed in the refrigerator.' },
+    bags: { name: 'Sealable bags', note: 'One per batch stratified in the refrigerator.' },
+  },
+  es: {
+    pots: {
+      name: 'Macetas de 4 in (10 cm)',
+      note: 'Una por planta: para macetas al aire libre y para trasplantar las plántulas.',
+    },
+    'cell-trays': { name: 'Bandejas de 72 celdas', note: 'Para sembrar bajo techo con luces.' },
+    containers: {
+      name: 'Recipientes tapados (garrafas de un galón o bandejas hondas con tapa)',
+      note: 'Para la siembra de invierno.',
+    },
+    'potting-mix': { name: 'Sustrato para macetas', note: 'Macetas, celdas y recipientes, con un 10 % de sobra.' },
+    'soil-block-mix': { name: 'Mezcla para bloques de tierra', note: 'Bloques de 2 in (5 cm), con un 10 % de sobra.' },
+    labels: {
+      name: 'Etiquetas para plantas',
+      note: 'Una por maceta, recipiente y bandeja; escribe a lápiz o con rotulador de pintura, porque el marcador se borra al sol.',
+    },
+    vermiculite: { name: 'Vermiculita', note: 'Para estratificar la semilla en el refrigerador.' },
+    bags: { name: 'Bolsas con cierre', note: 'Una por cada tanda que se estratifica en el refrigerador.' },
+  },
+};
+
 /**
  * The supply list for a set of batches (one grower's, or the whole group's): pots for outdoor pots
  * and for potting up winter-sown and indoor seedlings, cell trays, covered containers, potting mix,
- * soil-block mix, labels, vermiculite and bags, with the dust caution (in `locale`; the lines'
- * names are still English).
+ * soil-block mix, labels, vermiculite and bags, with the dust caution, all in `locale`.
  */
 export function supplyList(batches: readonly SupplyBatch[], locale: WordLocale = 'en'): SupplyList {
   const sum = (f: (b: SupplyBatch) => number) => batches.reduce((a, b) => a + f(b), 0);
@@ -98,25 +133,21 @@ export function supplyList(batches: readonly SupplyBatch[], locale: WordLocale =
     quarts: Math.ceil(litres / LITRES_PER_DRY_QUART),
     note,
   });
+  const w = SUPPLY_WORDS[locale];
   const lines: SupplyLine[] = [
-    piece('pots', '4 in (10 cm) pots', pots, 'One per plant: for outdoor pots, and for potting up seedlings.'),
-    piece('cell-trays', '72-cell seed trays', cellTrays, 'For sowing indoors under lights.'),
-    piece('containers', 'Covered containers (gallon jugs or deep trays with lids)', containers, 'For winter sowing.'),
-    volume('potting-mix', 'Potting mix', mix, 'Pots, cells and containers, with 10 % to spare.'),
-    volume('soil-block-mix', 'Soil-block mix', blockMix, '2 in (5 cm) blocks, with 10 % to spare.'),
-    piece(
-      'labels',
-      'Plant labels',
-      pots + containers + cellTrays + blockTrays,
-      'One per pot, container and tray; write in pencil or paint pen, as marker fades in the sun.',
-    ),
+    piece('pots', w.pots.name, pots, w.pots.note),
+    piece('cell-trays', w['cell-trays'].name, cellTrays, w['cell-trays'].note),
+    piece('containers', w.containers.name, containers, w.containers.note),
+    volume('potting-mix', w['potting-mix'].name, mix, w['potting-mix'].note),
+    volume('soil-block-mix', w['soil-block-mix'].name, blockMix, w['soil-block-mix'].note),
+    piece('labels', w.labels.name, pots + containers + cellTrays + blockTrays, w.labels.note),
     volume(
       'vermiculite',
-      'Vermiculite',
+      w.vermiculite.name,
       fridgeBatches * SUPPLY_RULES.vermiculiteLitresPerBatch,
-      'For stratifying seed in the refrigerator.',
+      w.vermiculite.note,
     ),
-    piece('bags', 'Sealable bags', fridgeBatches, 'One per batch stratified in the refrigerator.'),
+    piece('bags', w.bags.name, fridgeBatches, w.bags.note),
   ];
   return { lines: lines.filter((l) => (l.count ?? l.litres ?? 0) > 0), cautions: [...batchWordsFor(locale).cautions] };
 }

@@ -3,6 +3,7 @@ import { LoadingState } from '../components/states/index.js';
 import { paths } from '../config/paths.js';
 import { useSession } from '../features/auth/index.js';
 import { AcceptInvitation } from '../features/invitation/index.js';
+import { useTranslation } from 'react-i18next';
 import { useDocumentTitle } from '../lib/use-document-title.js';
 
 /** The link in an invitation e-mail: accept, then land on the group's page signed in. */
@@ -10,8 +11,9 @@ export function InvitationRoute() {
   const { token = '' } = useParams();
   const session = useSession();
   const navigate = useNavigate();
-  useDocumentTitle('Your invitation');
-  if (session.status === 'loading') return <LoadingState label="Checking who is signed in" />;
+  const { t } = useTranslation('groups');
+  useDocumentTitle(t('invitation.pageTitle'));
+  if (session.status === 'loading') return <LoadingState label={t('invitation.checking')} />;
   return (
     <AcceptInvitation
       token={token}

@@ -1,5 +1,6 @@
 import { NoSeasonGroup, SeasonPage } from '../features/season/index.js';
 import { SeasonBatchesPanel } from '../features/season-batches/index.js';
+import { useTranslation } from 'react-i18next';
 import { useDocumentTitle } from '../lib/use-document-title.js';
 import { SignedInGate } from './signed-in-gate.js';
 
@@ -8,9 +9,10 @@ import { SignedInGate } from './signed-in-gate.js';
  * for or belong to (read only). Admins edit any group's plan, as the API allows.
  */
 export function SeasonRoute() {
-  useDocumentTitle('Season');
+  const { t } = useTranslation('season');
+  useDocumentTitle(t('page.title'));
   return (
-    <SignedInGate loading="Loading your season">
+    <SignedInGate loading={t('page.loading')}>
       {(user) => {
         const membership = user.groups.find((g) => g.role === 'organiser') ?? user.groups[0];
         if (!membership) return <NoSeasonGroup />;

@@ -26,6 +26,13 @@ export const common = {
     footer: 'Homeground: native plants for your ground, grown and shared by neighbours.',
     titleSuffix: '{{title}} · Homeground',
   },
+  supplies: {
+    none: 'Nothing to get yet: there are no batches.',
+    what: 'What',
+    howMuch: 'How much',
+    for: 'For',
+    cautions: 'Cautions',
+  },
   states: {
     tryAgain: 'Try again',
   },

@@ -1,6 +1,7 @@
 /** A growing group's page and the page an invitation link opens. */
 export const groups = {
   page: {
+    title: 'Growing group',
     loading: 'Loading the group',
     error: 'The group did not load.',
     intro_one: 'A community growing group in {{town}}, {{state}}{{ecoregion}}: {{count}} person.',
@@ -32,6 +33,8 @@ export const groups = {
     sent: 'Sent. {{email}} has {{days}} days to open the link.',
   },
   invitation: {
+    pageTitle: 'Your invitation',
+    checking: 'Checking who is signed in',
     loading: 'Opening your invitation',
     cannotUse: 'This invitation cannot be used.',
     title: 'Join {{group}}',

@@ -4,6 +4,7 @@
  * sentences come worded from the API.
  */
 export const report = {
+  pageTitle: 'Season report',
   title: 'Season report {{year}}',
   lead: 'What the plant share of {{group}} on {{date}} gave, in counts only.',
   loading: 'Loading the season report',

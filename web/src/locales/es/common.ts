@@ -29,6 +29,13 @@ export const common = {
     footer: 'Homeground: plantas nativas para tu terreno, cultivadas y compartidas entre vecinos.',
     titleSuffix: '{{title}} · Homeground',
   },
+  supplies: {
+    none: 'Aún no hay nada que conseguir: no hay tandas.',
+    what: 'Qué',
+    howMuch: 'Cuánto',
+    for: 'Para qué',
+    cautions: 'Precauciones',
+  },
   states: {
     tryAgain: 'Intentar de nuevo',
   },

@@ -4,6 +4,7 @@ import type { groups as en } from '../en/groups.js';
 /** La página de un grupo de cultivo y la que abre el enlace de una invitación. */
 export const groups = {
   page: {
+    title: 'Grupo de cultivo',
     loading: 'Cargando el grupo',
     error: 'El grupo no se cargó.',
     intro_one: 'Un grupo comunitario de cultivo en {{town}}, {{state}}{{ecoregion}}: {{count}} persona.',
@@ -35,6 +36,8 @@ export const groups = {
     sent: 'Enviada. {{email}} tiene {{days}} días para abrir el enlace.',
   },
   invitation: {
+    pageTitle: 'Tu invitación',
+    checking: 'Comprobando quién ha iniciado sesión',
     loading: 'Abriendo tu invitación',
     cannotUse: 'Esta invitación no se puede usar.',
     title: 'Únete a {{group}}',

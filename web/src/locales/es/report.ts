@@ -2,6 +2,7 @@ import type { Catalogue } from '../catalogue.js';
 import type { report as en } from '../en/report.js';
 
 export const report = {
+  pageTitle: 'Informe de la temporada',
   title: 'Informe de la temporada {{year}}',
   lead: 'Lo que dio el reparto de plantas de {{group}} el {{date}}, solo en cifras.',
   loading: 'Cargando el informe de la temporada',
