@@ -1,26 +1,19 @@
 import { useTranslation } from 'react-i18next';
-import { PageIntro } from '../components/page/page-intro.js';
-import { EmptyState } from '../components/states/index.js';
 import { SpeciesImportPanel } from '../features/species-import/index.js';
-import { useDocumentTitle } from '../lib/use-document-title.js';
-import { SignedInGate } from './signed-in-gate.js';
+import { CuratorPage } from './curator-page.js';
 
 /** Curators import species from a CSV file, previewed before anything is written. */
 export function SpeciesImportRoute() {
   const { t } = useTranslation('importer');
-  useDocumentTitle(t('page.title'));
+  const words = {
+    title: t('page.title'),
+    intro: t('page.intro'),
+    loading: t('page.loading'),
+    notCurator: t('page.notCurator'),
+  };
   return (
-    <SignedInGate loading={t('page.loading')}>
-      {(user) => (
-        <>
-          <PageIntro title={t('page.title')}>{t('page.intro')}</PageIntro>
-          {user.role === 'curator' || user.role === 'admin' ? (
-            <SpeciesImportPanel />
-          ) : (
-            <EmptyState title={t('page.notCurator')} />
-          )}
-        </>
-      )}
-    </SignedInGate>
+    <CuratorPage words={words}>
+      <SpeciesImportPanel />
+    </CuratorPage>
   );
 }
