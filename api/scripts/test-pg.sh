@@ -12,11 +12,10 @@ if [ -z "${HOMEGROUND_TEST_PG_URL:-}" ]; then
   echo "PostgreSQL e2e run skipped: HOMEGROUND_TEST_PG_URL is not set (eval \"\$(bash scripts/postgres-test-server.sh start)\" from the project root starts a throwaway server)"
   exit 0
 fi
-# Left out, with the reason printed: the plant share's writes are synchronous SQLite transactions (its routes
-# answer 503 on PostgreSQL until ported); the SQLite schema check, the online-backup test and the crash test
-# are about SQLite files only (the crash test starts the built API on a file of its own). Each file
-# migrates and loads the catalogue into its own new database over the network, so set-up hooks get longer.
-echo "PostgreSQL e2e run: leaving out plant-share*.e2e-spec.ts (plant share not yet ported: 503 on PostgreSQL) and sqlite-schema, backup, crash-recovery .e2e-spec.ts (SQLite files only)"
+# Left out, with the reason printed: the SQLite schema check, the online-backup test and the crash test are
+# about SQLite files only (the crash test starts the built API on a file of its own). Each file migrates and
+# loads the catalogue into its own new database over the network, so set-up hooks get longer.
+echo "PostgreSQL e2e run: every suite, the plant share's included, except sqlite-schema, backup, crash-recovery .e2e-spec.ts (SQLite files only)"
 exec env NODE_OPTIONS="--experimental-vm-modules --disable-warning=ExperimentalWarning" \
-  npx jest test/ --testTimeout=240000 --testPathIgnorePatterns '/test/plant-share[^/]*\.e2e-spec\.ts$' '/test/sqlite-schema\.e2e-spec\.ts$' \
+  npx jest test/ --testTimeout=240000 --testPathIgnorePatterns '/test/sqlite-schema\.e2e-spec\.ts$' \
   '/test/backup\.e2e-spec\.ts$' '/test/crash-recovery\.e2e-spec\.ts$' "$@"

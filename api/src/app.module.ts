@@ -2,7 +2,6 @@ import { existsSync } from 'node:fs';
 import { type DynamicModule, Module } from '@nestjs/common';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { ConditionalModule } from '@nestjs/config';
 import { AuthModule } from './auth/auth.module.js';
 import { APP_CONFIG, type AppConfig } from './config/app-config.js';
 import { AppConfigModule } from './config/config.module.js';
@@ -22,7 +21,6 @@ import { MailModule } from './mail/mail.module.js';
 import { InvitationsModule } from './invitations/invitations.module.js';
 import { SeasonsModule } from './seasons/seasons.module.js';
 import { PlantShareModule } from './plant-share/plant-share.module.js';
-import { PlantShareUnavailableModule } from './plant-share-unavailable/plant-share-unavailable.module.js';
 import { BatchesModule } from './batches/batches.module.js';
 import { SeasonMailModule } from './season-mail/season-mail.module.js';
 
@@ -60,9 +58,7 @@ function webApp(): DynamicModule[] {
     SavedMixesModule,
     PlanningModule,
     SeasonsModule,
-    // The plant share's writes are synchronous SQLite transactions: on PostgreSQL its routes answer 503 until ported.
-    ConditionalModule.registerWhen(PlantShareModule, (env) => !env.DATABASE_URL, { debug: false }),
-    ConditionalModule.registerWhen(PlantShareUnavailableModule, (env) => Boolean(env.DATABASE_URL), { debug: false }),
+    PlantShareModule,
     BatchesModule,
     SeasonMailModule,
     DemoModule,

@@ -5,10 +5,6 @@ import Papa from 'papaparse';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
 import { runSql } from '../src/common/database/dialect.js';
-import { TEST_PG_URL } from './support/postgres.js';
-
-/** The plant share's routes (organisers' and public), which answer 503 on PostgreSQL until it is ported. */
-const PLANT_SHARE_ROUTE = /\/plant-share|\/plant-shares\/|\/reservations\/|\/waitlist-offers\//;
 
 /** A photo's required credit (photographer from the invented demo scenario), so the photo cases test one thing. */
 const PHOTO_CREDIT = {
@@ -1083,15 +1079,6 @@ describe('malformed input on every writing route (e2e)', () => {
           });
       } else if (c.body !== undefined) req = req.send(c.body as object);
       const res = await req;
-      if (TEST_PG_URL && PLANT_SHARE_ROUTE.test(c.url)) {
-        // On PostgreSQL the plant share is not yet ported: its routes answer 503 in words and write nothing.
-        expect({ status: res.status, message: res.body.message }).toEqual({
-          status: 503,
-          message: expect.stringMatching(/PostgreSQL/),
-        });
-        expect(await snapshot()).toEqual(before);
-        return;
-      }
       expect({ status: res.status, body: res.body }).toMatchObject({
         status: 400,
         body: { statusCode: 400, error: 'Bad Request' },

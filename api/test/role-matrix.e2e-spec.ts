@@ -8,7 +8,6 @@ import { PUBLIC_KEY } from '../src/common/decorators/public.decorator.js';
 import { JwtAuthGuard } from '../src/common/guards/jwt-auth.guard.js';
 import { OptionalJwtAuthGuard } from '../src/common/guards/optional-jwt-auth.guard.js';
 import { signIn } from './support/plant-share.js';
-import { TEST_PG_URL } from './support/postgres.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
 
 type Persona = 'anonymous' | 'member' | 'grower' | 'organiser' | 'curator' | 'admin';
@@ -170,10 +169,8 @@ describe('role matrix generated from the controllers (e2e, demo data)', () => {
         else expected = 403;
         // A signed-in route may still answer 403 from a group check in its service (e.g. a member on an
         // organiser's page): only the guard's own decisions are asserted for those.
-        // The plant share's stand-in on PostgreSQL answers 503 to everyone by design; any other 5xx is a fault.
-        const designed = r.controller === 'PlantShareUnavailableController' && status === 503;
         const ok =
-          (status < 500 || designed) &&
+          status < 500 &&
           (expected === 'through'
             ? status !== 401 && (d.kind !== 'signed-in' || d.roles.length === 0 || status !== 403)
             : status === expected);
@@ -186,8 +183,7 @@ describe('role matrix generated from the controllers (e2e, demo data)', () => {
     // Group roles, for every group page read: the group's organiser and an admin are never refused; someone
     // outside the group (the curator) always is; and the roles nest, member ⊂ grower ⊂ organiser, so a
     // page a member may read a grower may too, and one a grower may read the organiser may too.
-    // On PostgreSQL the plant share's group pages are its 503 stand-in, so fewer group pages are read.
-    expect(groupReads.size).toBeGreaterThan(TEST_PG_URL ? 5 : 10);
+    expect(groupReads.size).toBeGreaterThan(10);
     for (const [url, by] of groupReads) {
       const through = (p: Persona) => by[p] !== 403 && by[p] !== 401;
       const line = `${url}: ${JSON.stringify(by)}`;
