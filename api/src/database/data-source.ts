@@ -19,6 +19,7 @@ import { AddAccountDisabled1765497600000 } from './migrations/1765497600000-add-
 import { CreateSpeciesChanges1765584000000 } from './migrations/1765584000000-create-species-changes.js';
 import { AddPhotoCredits1765670400000 } from './migrations/1765670400000-add-photo-credits.js';
 import { CreatePendingRegistrations1766300000000 } from './migrations/1766300000000-create-pending-registrations.js';
+import { AddReservationLinePosition1766400000000 } from './migrations/1766400000000-add-reservation-line-position.js';
 import { PendingRegistrationRow } from '../auth/pending-registration.entity.js';
 import { AddTakerLocale1765800000000 } from './migrations/1765800000000-add-taker-locale.js';
 import { AddShareWhatToBring1766000000000 } from './migrations/1766000000000-add-share-what-to-bring.js';
@@ -76,6 +77,7 @@ export const MIGRATIONS = [
   AddTakerLocale1765800000000,
   CreateWeeklySummariesSent1765900000000,
   AddShareWhatToBring1766000000000,
+  AddReservationLinePosition1766400000000,
 ];
 
 /**

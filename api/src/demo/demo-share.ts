@@ -105,12 +105,11 @@ export async function loadDemoShare(tx: EntityManager, groupId: string, seasonId
        VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?)`,
       [id, shareId, slotIds[r.slot], hash, r.name, r.email, r.zip, stamp, stamp],
     );
-    for (const l of r.lines)
-      await runSql(tx, 'INSERT INTO share_reservation_lines (id, reservation_id, slug, count) VALUES (?, ?, ?, ?)', [
-        randomUUID(),
-        id,
-        l.slug,
-        l.count,
-      ]);
+    for (const [position, l] of r.lines.entries())
+      await runSql(
+        tx,
+        'INSERT INTO share_reservation_lines (id, reservation_id, slug, count, position) VALUES (?, ?, ?, ?, ?)',
+        [randomUUID(), id, l.slug, l.count, position],
+      );
   }
 }

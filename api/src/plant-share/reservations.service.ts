@@ -707,14 +707,21 @@ export class ReservationsService {
     return (yield* this.views.linesOf([reservationId])).get(reservationId) ?? [];
   }
 
+  /** Adds lines after any the reservation has, in the order given (the order its views list them in). */
   private *insertLines(reservationId: string, lines: readonly PlantLine[]): ShareWork<void> {
+    const last = yield* tx.get<{ p: number | null }>(
+      'SELECT MAX(position) AS p FROM share_reservation_lines WHERE reservation_id = ?',
+      reservationId,
+    );
+    let position = Number(last?.p ?? -1);
     for (const l of lines)
       yield* tx.run(
-        'INSERT INTO share_reservation_lines (id, reservation_id, slug, count) VALUES (?, ?, ?, ?)',
+        'INSERT INTO share_reservation_lines (id, reservation_id, slug, count, position) VALUES (?, ?, ?, ?, ?)',
         randomUUID(),
         reservationId,
         l.speciesSlug,
         l.count,
+        ++position,
       );
   }
 }

@@ -1,5 +1,5 @@
 import type { DataSource, QueryRunner } from 'typeorm';
-import { type Dialect, dialectOf, placeholders } from '../common/database/dialect.js';
+import { dialectOf, placeholders } from '../common/database/dialect.js';
 
 /** One step a unit of plant-share work asks the database for. */
 export type ShareStep =
@@ -66,13 +66,10 @@ export function pgErrorCode(e: unknown): string | undefined {
 export class ShareTxRunner {
   private readonly statements = new Map<string, NativeStatement>();
   private readonly native: NativeDatabase | null;
-  /** The database the units run on, for the rare SQL word that differs (see ShareViews.linesOf). */
-  readonly dialect: Dialect;
 
   constructor(private readonly db: DataSource) {
-    this.dialect = dialectOf(db);
     this.native =
-      this.dialect === 'sqlite'
+      dialectOf(db) === 'sqlite'
         ? (db.driver as unknown as { databaseConnection: NativeDatabase }).databaseConnection
         : null;
   }

@@ -111,15 +111,11 @@ export class ShareViews {
   *linesOf(reservationIds: readonly string[]): ShareWork<Map<string, LineRow[]>> {
     const out = new Map<string, LineRow[]>();
     if (reservationIds.length === 0) return out;
-    // Lines list in the order they were written: the table has no column for it, so the row's place in
-    // the table says it (SQLite's rowid; PostgreSQL's ctid, where a line whose count a claimed offer
-    // raised moves to the end).
-    const order = this.runner.dialect === 'postgres' ? 'ctid' : 'rowid';
     // Chunks keep the statement under SQLite's 999-parameter limit.
     for (let i = 0; i < reservationIds.length; i += 500) {
       const chunk = reservationIds.slice(i, i + 500);
       const rows = yield* tx.all<LineRow>(
-        `SELECT reservation_id, slug, count FROM share_reservation_lines WHERE reservation_id IN (${chunk.map(() => '?').join(',')}) ORDER BY ${order}`,
+        `SELECT reservation_id, slug, count FROM share_reservation_lines WHERE reservation_id IN (${chunk.map(() => '?').join(',')}) ORDER BY position`,
         ...chunk,
       );
       for (const r of rows) out.set(r.reservation_id, [...(out.get(r.reservation_id) ?? []), r]);
