@@ -5,7 +5,7 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuthModule } from './auth/auth.module.js';
 import { APP_CONFIG, type AppConfig } from './config/app-config.js';
 import { AppConfigModule } from './config/config.module.js';
-import { databaseOptions } from './database/data-source.js';
+import { databaseOptions, openDataSource } from './database/data-source.js';
 import { DemoModule } from './demo/demo.module.js';
 import { GroupsModule } from './groups/groups.module.js';
 import { HealthModule } from './health/health.module.js';
@@ -38,7 +38,11 @@ function webApp(): DynamicModule[] {
 @Module({
   imports: [
     AppConfigModule,
-    TypeOrmModule.forRootAsync({ inject: [APP_CONFIG], useFactory: (config: AppConfig) => databaseOptions(config) }),
+    TypeOrmModule.forRootAsync({
+      inject: [APP_CONFIG],
+      useFactory: (config: AppConfig) => databaseOptions(config),
+      dataSourceFactory: (options) => openDataSource(options!),
+    }),
     ...webApp(),
     MailModule,
     AuthModule,

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
 import { createTestApp, registrationToken, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 /**
  * Sign-in and sign-up in the reader's language (Accept-Language, RFC 9110 §12.5.4): refusals, the
@@ -15,12 +16,11 @@ describe('auth answers and register e-mails in the reader language (e2e, demo da
   afterAll(() => t.close());
 
   const mails = async (email: string): Promise<{ subject: string; text: string; html: string }[]> =>
-    t.app
-      .get(DataSource)
-      .query(
-        `SELECT subject, text, html FROM outbox_messages WHERE kind = 'registration' AND "to" LIKE ? ORDER BY received_at DESC`,
-        [`%${email}%`],
-      );
+    runSql<{ subject: string; text: string; html: string }>(
+      t.app.get(DataSource),
+      `SELECT subject, text, html FROM outbox_messages WHERE kind = 'registration' AND "to" LIKE ? ORDER BY received_at DESC`,
+      [`%${email}%`],
+    );
 
   it('refuses a wrong password in Spanish, and in English by default', async () => {
     const wrong = { email: 'mara.ellsworth@example.org', password: 'not-her-password' };

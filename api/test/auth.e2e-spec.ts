@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, registrationToken, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 describe('sign-in and roles (e2e, throwaway SQLite)', () => {
   let t: TestApp;
@@ -54,7 +55,7 @@ describe('sign-in and roles (e2e, throwaway SQLite)', () => {
   it('stores the password as a salted scrypt hash, never as given', async () => {
     await registerUser(t, { email: 'hash.check@example.org', password: 'plain-text-never' });
     const db = t.app.get(DataSource);
-    const [row] = await db.query(`SELECT password_hash FROM users WHERE email = 'hash.check@example.org'`);
+    const [row] = await runSql(db, `SELECT password_hash FROM users WHERE email = 'hash.check@example.org'`);
     expect(row.password_hash).toMatch(/^scrypt\$131072\$8\$1\$[\w-]{22}\$[\w-]{86}$/);
     expect(row.password_hash).not.toContain('plain-text-never');
   });
@@ -157,7 +158,7 @@ describe('sign-in and roles (e2e, throwaway SQLite)', () => {
     expect(res.body.fields.find((f: { field: string }) => f.field === 'password').message).toMatch(
       /at least 10 characters/,
     );
-    const [{ n }] = await t.app.get(DataSource).query(`SELECT COUNT(*) AS n FROM users WHERE email = 'not-an-email'`);
+    const [{ n }] = await runSql(t.app.get(DataSource), `SELECT COUNT(*) AS n FROM users WHERE email = 'not-an-email'`);
     expect(n).toBe(0);
   });
 
@@ -188,7 +189,7 @@ describe('sign-in and roles (e2e, throwaway SQLite)', () => {
     expect(denied.body).toMatchObject({ statusCode: 403, error: 'Forbidden', message: expect.stringMatching(/admin/) });
 
     const admin = await registerUser(t, { email: 'wes.hollenbeck@example.org' });
-    await t.app.get(DataSource).query(`UPDATE users SET role = 'admin' WHERE id = ?`, [admin.id]);
+    await runSql(t.app.get(DataSource), `UPDATE users SET role = 'admin' WHERE id = ?`, [admin.id]);
     const list = await t.http.get('/api/users').set('Authorization', `Bearer ${admin.token}`).expect(200);
     expect(list.body.map((u: { email: string }) => u.email)).toContain('member.only@example.org');
 

@@ -5,6 +5,7 @@ import { BatchesService } from '../src/batches/batches.service.js';
 import { DEMO_GROWER_CAPACITY } from '../src/demo/demo-batches.js';
 import { DEMO_TARGETS } from '../src/demo/demo-season.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 const SEASON = '/api/groups/larkfield-commons-growers/season';
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
@@ -302,7 +303,10 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       expect(row.forecast.expected).toBeGreaterThanOrEqual(forecast.expected);
 
       // The plant share's starting stock: plants logged ready, per species.
-      const [{ id: seasonId }] = await t.app.get(DataSource).query(`SELECT id FROM seasons ORDER BY year DESC LIMIT 1`);
+      const [{ id: seasonId }] = await runSql<{ id: string }>(
+        t.app.get(DataSource),
+        `SELECT id FROM seasons ORDER BY year DESC LIMIT 1`,
+      );
       const counts = await t.app.get(BatchesService).readyCountsBySpecies(seasonId);
       expect(counts.find((c) => c.slug === 'monarda-fistulosa')?.readyPlants).toBe(10);
       // Showy goldenrod: Juniper's batch, nothing logged ready in the demo (demo-batches.ts).

@@ -70,7 +70,7 @@ describe('crash recovery: SIGKILL during writes, restart on the same SQLite file
 
   it('runs SQLite in WAL mode with a busy timeout (the settings the app opens its file with)', async () => {
     const probe = path.join(dataDir, 'probe', 'probe.sqlite');
-    const ds = new DataSource({ ...databaseOptions({ databasePath: probe }), migrationsRun: false });
+    const ds = new DataSource({ ...databaseOptions({ databasePath: probe, databaseUrl: null }), migrationsRun: false });
     await ds.initialize();
     try {
       expect(await ds.query('PRAGMA journal_mode')).toEqual([{ journal_mode: 'wal' }]);

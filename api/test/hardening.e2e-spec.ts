@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 const fieldsOf = (body: { fields?: { field: string }[] }) => (body.fields ?? []).map((f) => f.field);
 
@@ -14,12 +15,12 @@ describe('hardening: passwords, CSV cells and encodings, caps (e2e)', () => {
     t = await createTestApp({ LOGIN_THROTTLE_LIMIT: '100' });
     db = t.app.get(DataSource);
     const c = await registerUser(t, { email: 'ines.calder@example.org' });
-    await db.query(`UPDATE users SET role = 'curator' WHERE id = ?`, [c.id]);
+    await runSql(db, `UPDATE users SET role = 'curator' WHERE id = ?`, [c.id]);
     curator = c.token;
   });
   afterAll(() => t.close());
 
-  const userCount = async () => Number((await db.query(`SELECT COUNT(*) AS n FROM users`))[0].n);
+  const userCount = async () => Number((await runSql(db, `SELECT COUNT(*) AS n FROM users`))[0].n);
 
   // NIST SP 800-63B §5.1.1.2: refuse passwords from lists of common values and ones built from the
   // account's own context (the user name); length alone is not enough.
@@ -111,9 +112,9 @@ describe('hardening: passwords, CSV cells and encodings, caps (e2e)', () => {
       .set('Authorization', `Bearer ${priya.token}`)
       .send({ name: 'Front yard', request, chosen: ['asclepias-tuberosa'] });
     expect(first.status).toBe(201);
-    const [row] = await db.query(`SELECT request, chosen FROM saved_mixes WHERE id = ?`, [first.body.id]);
+    const [row] = await runSql(db, `SELECT request, chosen FROM saved_mixes WHERE id = ?`, [first.body.id]);
     for (let i = 1; i < 200; i++)
-      await db.query(`INSERT INTO saved_mixes (id, owner_id, name, request, chosen) VALUES (?, ?, ?, ?, ?)`, [
+      await runSql(db, `INSERT INTO saved_mixes (id, owner_id, name, request, chosen) VALUES (?, ?, ?, ?, ?)`, [
         randomUUID(),
         priya.id,
         `Bed ${i}`,
@@ -126,7 +127,7 @@ describe('hardening: passwords, CSV cells and encodings, caps (e2e)', () => {
       .send({ name: 'One too many', request, chosen: ['asclepias-tuberosa'] })
       .expect(409);
     expect(over.body.message).toMatch(/delete one/);
-    const [{ n }] = await db.query(`SELECT COUNT(*) AS n FROM saved_mixes WHERE owner_id = ?`, [priya.id]);
+    const [{ n }] = await runSql(db, `SELECT COUNT(*) AS n FROM saved_mixes WHERE owner_id = ?`, [priya.id]);
     expect(Number(n)).toBe(200);
   });
 });

@@ -4,6 +4,7 @@ import { loadCatalogue } from '@homeground/species-data';
 import Papa from 'papaparse';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 /** A photo's required credit (photographer from the invented demo scenario), so the photo cases test one thing. */
 const PHOTO_CREDIT = {
@@ -943,10 +944,12 @@ describe('malformed input on every writing route (e2e)', () => {
   /** What the routes could write: row counts, the catalogue's bytes, and everyone's role. */
   async function snapshot(): Promise<unknown> {
     const db = t.app.get(DataSource);
-    return db.query(`SELECT
+    return runSql(
+      db,
+      `SELECT
       (SELECT COUNT(*) FROM users) AS users,
       (SELECT COUNT(*) FROM pending_registrations) AS pendingRegistrations,
-      (SELECT group_concat(role) FROM (SELECT role FROM users ORDER BY id)) AS roles,
+      (SELECT string_agg(role, ',' ORDER BY id) FROM users) AS roles,
       (SELECT COUNT(*) FROM group_memberships) AS memberships,
       (SELECT COUNT(*) FROM saved_mixes) AS savedMixes,
       (SELECT COUNT(*) FROM species) AS species,
@@ -963,13 +966,14 @@ describe('malformed input on every writing route (e2e)', () => {
       (SELECT COUNT(*) FROM batches) AS batches,
       (SELECT COUNT(*) FROM batch_log_entries) AS batchLog,
       (SELECT COUNT(*) FROM weekly_summaries_sent) AS weeklySummaries,
-      (SELECT COUNT(*) FROM outbox_messages) AS outbox`);
+      (SELECT COUNT(*) FROM outbox_messages) AS outbox`,
+    );
   }
 
   beforeAll(async () => {
     t = await createTestApp({ LOGIN_THROTTLE_LIMIT: '1000' });
     const a = await registerUser(t, { email: 'wes.hollenbeck@example.org' });
-    await t.app.get(DataSource).query(`UPDATE users SET role = 'admin' WHERE id = ?`, [a.id]);
+    await runSql(t.app.get(DataSource), `UPDATE users SET role = 'admin' WHERE id = ?`, [a.id]);
     admin = a.token;
   });
   afterAll(() => t.close());

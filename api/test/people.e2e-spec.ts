@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 describe("the admin's people page (e2e)", () => {
   let t: TestApp;
@@ -12,9 +13,9 @@ describe("the admin's people page (e2e)", () => {
     t = await createTestApp({ LOGIN_THROTTLE_LIMIT: '100' });
     const db = t.app.get(DataSource);
     admin = await registerUser(t, { email: 'wes.hollenbeck@example.org', displayName: 'Wes Hollenbeck' });
-    await db.query(`UPDATE users SET role = 'admin' WHERE id = ?`, [admin.id]);
+    await runSql(db, `UPDATE users SET role = 'admin' WHERE id = ?`, [admin.id]);
     curator = await registerUser(t, { email: 'ines.calder@example.org', displayName: 'Ines Calder' });
-    await db.query(`UPDATE users SET role = 'curator' WHERE id = ?`, [curator.id]);
+    await runSql(db, `UPDATE users SET role = 'curator' WHERE id = ?`, [curator.id]);
     grower = await registerUser(t, {
       email: 'amara.reyes@example.org',
       password: 'lantern-gravel-oboe',
@@ -78,7 +79,7 @@ describe("the admin's people page (e2e)", () => {
     expect(off.status).toBe(409);
     const demote = await t.http.patch(`/api/users/${admin.id}/role`).set(as(admin.token)).send({ role: 'member' });
     expect(demote.status).toBe(409);
-    const [row] = await t.app.get(DataSource).query(`SELECT role, disabled_at FROM users WHERE id = ?`, [admin.id]);
+    const [row] = await runSql(t.app.get(DataSource), `SELECT role, disabled_at FROM users WHERE id = ?`, [admin.id]);
     expect(row).toEqual({ role: 'admin', disabled_at: null });
   });
 
@@ -94,7 +95,7 @@ describe("the admin's people page (e2e)", () => {
       .send({ disabled: 'yes' })
       .expect(400);
     expect(bad.body.fields.map((f: { field: string }) => f.field)).toEqual(['disabled']);
-    const [row] = await t.app.get(DataSource).query(`SELECT disabled_at FROM users WHERE id = ?`, [grower.id]);
+    const [row] = await runSql(t.app.get(DataSource), `SELECT disabled_at FROM users WHERE id = ?`, [grower.id]);
     expect(row.disabled_at).toBeNull();
   });
 });

@@ -7,6 +7,7 @@ import { DataSource } from 'typeorm';
 import zipcodes from 'zipcodes';
 import { REFERENCE_DIR, referenceAvailable } from './support/reference.js';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 type Region = Feature<Polygon | MultiPolygon, { US_L3CODE: string; US_L3NAME: string }>;
 const EPA_FILE = 'epa_us_eco_l3.geojson';
@@ -24,7 +25,7 @@ describe('place → your ground (e2e)', () => {
   beforeAll(async () => {
     t = await createTestApp({ LOGIN_THROTTLE_LIMIT: '100' });
     const a = await registerUser(t, { email: 'wes.hollenbeck@example.org' });
-    await t.app.get(DataSource).query(`UPDATE users SET role = 'admin' WHERE id = ?`, [a.id]);
+    await runSql(t.app.get(DataSource), `UPDATE users SET role = 'admin' WHERE id = ?`, [a.id]);
     admin = a.token;
     member = (await registerUser(t, { email: 'priya.vantongeren@example.org' })).token;
   });
@@ -42,8 +43,9 @@ describe('place → your ground (e2e)', () => {
 
   it('offers the other regions of a split county, largest share first', async () => {
     const db = t.app.get(DataSource);
-    const [split] = await db.query(
-      `SELECT c.fips, c.state, COUNT(*) AS n FROM counties c JOIN county_ecoregions e ON e.fips = c.fips GROUP BY c.fips HAVING n >= 2 AND MIN(e.share) > 0.2 ORDER BY c.fips LIMIT 1`,
+    const [split] = await runSql<{ fips: string; state: string }>(
+      db,
+      `SELECT c.fips, c.state, COUNT(*) AS n FROM counties c JOIN county_ecoregions e ON e.fips = c.fips GROUP BY c.fips, c.state HAVING COUNT(*) >= 2 AND MIN(e.share) > 0.2 ORDER BY c.fips LIMIT 1`,
     );
     // Walk the state's ZIPs until one lands in a split county: its alternatives must be offered.
     for (const z of zipcodes.lookupByState(split.state).slice(0, 400)) {
@@ -163,7 +165,7 @@ describe('place → your ground (e2e)', () => {
     const fields = res.body.fields.map((f: { field: string }) => f.field);
     expect(fields).toEqual(expect.arrayContaining(['features[0].properties.US_L3CODE', 'features[1].geometry']));
     await upload(admin, Buffer.alloc(40 * 1024 * 1024 + 10, ' ')).expect(413);
-    const [{ n }] = await t.app.get(DataSource).query(`SELECT COUNT(*) AS n FROM ecoregion_boundaries`);
+    const [{ n }] = await runSql(t.app.get(DataSource), `SELECT COUNT(*) AS n FROM ecoregion_boundaries`);
     expect(n).toBe(0);
   });
 

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
+import { runSql } from '../src/common/database/dialect.js';
 import { DEMO_RESERVATIONS, DEMO_SHARE } from '../src/demo/demo-share.js';
 import { ShareMailQueue } from '../src/plant-share/share-mail-queue.js';
 import {
@@ -113,7 +114,7 @@ describe('plant-share changes after opening (e2e, demo data)', () => {
     it("e-mails every live household a new place in the household's own language; limits alone tell no one", async () => {
       const sol = DEMO_RESERVATIONS[1];
       // Sol reserved in Spanish (the locale is kept with each reservation).
-      await t.app.get(DataSource).query(`UPDATE share_reservations SET locale = 'es' WHERE email = ?`, [sol.email]);
+      await runSql(t.app.get(DataSource), `UPDATE share_reservations SET locale = 'es' WHERE email = ?`, [sol.email]);
       const count = async () => {
         await t.app.get(ShareMailQueue).idle();
         return (await t.http.get('/api/outbox').query({ kind: CHANGE }).set(bearer(tokens.organiser)).expect(200)).body

@@ -1,6 +1,7 @@
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
+import { runSql } from '../src/common/database/dialect.js';
 import { ShareMailQueue } from '../src/plant-share/share-mail-queue.js';
 import { bearer, demoTokens, PUBLIC, PUBLIC_URL, SHARE } from './support/plant-share.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
@@ -58,10 +59,7 @@ describe('plant share under concurrent reservations (e2e, demo data)', () => {
   }
 
   const count = (sql: string, ...params: unknown[]) =>
-    t.app
-      .get(DataSource)
-      .query(sql, params)
-      .then((r: { n: number }[]) => Number(r[0].n));
+    runSql<{ n: number }>(t.app.get(DataSource), sql, params).then((r) => Number(r[0].n));
 
   it('gives 200 concurrent reservations for 50 plants exactly 50 confirmations; the rest "all taken" with the waitlist', async () => {
     await t.http

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
+import { runSql } from '../src/common/database/dialect.js';
 import { ShareMailQueue } from '../src/plant-share/share-mail-queue.js';
 import { bearer, demoTokens, GROUP_SLUG, mailTo, PUBLIC, PUBLIC_URL } from './support/plant-share.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
@@ -59,9 +60,11 @@ describe('plant-share and invitation e-mails in the reader language (e2e, demo d
     expect(mail!.text).not.toMatch(/Pickup slot|Care sheet|Best in/);
     expect(mail!.html).toContain('<html lang="es">');
 
-    const [row] = await t.app
-      .get(DataSource)
-      .query(`SELECT locale FROM share_reservations WHERE email = ?`, ['theo.lindqvist@example.org']);
+    const [row] = await runSql<{ locale: string }>(
+      t.app.get(DataSource),
+      `SELECT locale FROM share_reservations WHERE email = ?`,
+      ['theo.lindqvist@example.org'],
+    );
     expect(row.locale).toBe('es');
     expect(reserved.body.status).toBe('confirmed');
     // The answer's care sheet too: the caution said in Spanish (shared Spanish caution table), the

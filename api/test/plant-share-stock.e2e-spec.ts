@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
+import { runSql } from '../src/common/database/dialect.js';
 import { PlantShareService } from '../src/plant-share/plant-share.service.js';
 import { SeasonsService } from '../src/seasons/seasons.service.js';
 import { DEMO_TARGETS } from '../src/demo/demo-season.js';
@@ -38,7 +39,8 @@ describe("a new plant share's starting stock (e2e, demo data)", () => {
     const first = batches[0];
     const sameSpecies = batches.filter((b) => b.slug === first.slug);
     for (const [i, b] of sameSpecies.entries())
-      await db.query(
+      await runSql(
+        db,
         `INSERT INTO batch_log_entries (id, batch_id, kind, count, date, created_by) VALUES (?, ?, 'ready', ?, '2027-05-30', ?)`,
         [randomUUID(), b.id, 10 + i, b.grower_id],
       );

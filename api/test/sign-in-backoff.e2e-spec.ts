@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 // Its own file: the per-address limit is set high here so only the per-account back-off can answer 429.
 describe('sign-in back-off per account (e2e)', () => {
@@ -32,16 +33,16 @@ describe('sign-in back-off per account (e2e)', () => {
 
   it('lets the person in once the hold has passed, clears the count and notes the sign-in', async () => {
     const db = t.app.get(DataSource);
-    await db.query(`UPDATE sign_in_failures SET locked_until = ?`, [new Date(Date.now() - 1000).toISOString()]);
+    await runSql(db, `UPDATE sign_in_failures SET locked_until = ?`, [new Date(Date.now() - 1000).toISOString()]);
     expect((await login('ines.calder@example.org', 'right-password-1')).status).toBe(200);
-    const rows = await db.query(`SELECT COUNT(*) AS n FROM sign_in_failures`);
+    const rows = await runSql(db, `SELECT COUNT(*) AS n FROM sign_in_failures`);
     expect(Number(rows[0].n)).toBe(1); // only the address with no account is still counted
-    const [user] = await db.query(`SELECT last_sign_in_at FROM users WHERE email = 'ines.calder@example.org'`);
+    const [user] = await runSql(db, `SELECT last_sign_in_at FROM users WHERE email = 'ines.calder@example.org'`);
     expect(user.last_sign_in_at).not.toBeNull();
   });
 
   it('keeps only a hash of the address typed', async () => {
-    const keys = (await t.app.get(DataSource).query(`SELECT email_key FROM sign_in_failures`)) as {
+    const keys = (await runSql(t.app.get(DataSource), `SELECT email_key FROM sign_in_failures`)) as {
       email_key: string;
     }[];
     for (const k of keys) {

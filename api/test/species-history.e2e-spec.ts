@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 interface Change {
   id: string;
@@ -20,7 +21,7 @@ describe('species history: every change kept, read and undone (e2e)', () => {
   beforeAll(async () => {
     t = await createTestApp({ LOGIN_THROTTLE_LIMIT: '100' });
     const c = await registerUser(t, { email: 'ines.calder@example.org', displayName: 'Ines Calder' });
-    await t.app.get(DataSource).query(`UPDATE users SET role = 'curator' WHERE id = ?`, [c.id]);
+    await runSql(t.app.get(DataSource), `UPDATE users SET role = 'curator' WHERE id = ?`, [c.id]);
     curator = c.token;
     member = (await registerUser(t, { email: 'juniper.okafor@example.org' })).token;
   });

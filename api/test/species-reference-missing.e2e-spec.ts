@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 /** Its own file: the reference folder is a setting, read once when the app's config first loads. */
 describe('the reference page without the reference files (e2e)', () => {
@@ -14,7 +15,7 @@ describe('the reference page without the reference files (e2e)', () => {
   beforeAll(async () => {
     t = await createTestApp({ HOMEGROUND_REFERENCE_DIR: empty });
     const c = await registerUser(t, { email: 'ines.calder@example.org' });
-    await t.app.get(DataSource).query(`UPDATE users SET role = 'curator' WHERE id = ?`, [c.id]);
+    await runSql(t.app.get(DataSource), `UPDATE users SET role = 'curator' WHERE id = ?`, [c.id]);
     curator = c.token;
   });
   afterAll(async () => {

@@ -4,6 +4,7 @@ import path from 'node:path';
 import Papa from 'papaparse';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 /**
  * The curator's reference page against the open reference data, read in place (the folder beside the
@@ -56,7 +57,7 @@ const checkOf = (body: { comparison: { checks: Check[] } }, field: string) =>
   beforeAll(async () => {
     t = await createTestApp({ LOGIN_THROTTLE_LIMIT: '100' });
     const c = await registerUser(t, { email: 'ines.calder@example.org' });
-    await t.app.get(DataSource).query(`UPDATE users SET role = 'curator' WHERE id = ?`, [c.id]);
+    await runSql(t.app.get(DataSource), `UPDATE users SET role = 'curator' WHERE id = ?`, [c.id]);
     curator = c.token;
     member = (await registerUser(t, { email: 'priya.vantongeren@example.org' })).token;
   });

@@ -3,10 +3,11 @@ import path from 'node:path';
 import sharp from 'sharp';
 import { DataSource } from 'typeorm';
 import { createTestApp, registerUser, type TestApp } from './support/test-app.js';
+import { runSql } from '../src/common/database/dialect.js';
 
 async function tokenWithRole(t: TestApp, email: string, role: 'curator' | 'member'): Promise<string> {
   const u = await registerUser(t, { email });
-  if (role !== 'member') await t.app.get(DataSource).query(`UPDATE users SET role = ? WHERE id = ?`, [role, u.id]);
+  if (role !== 'member') await runSql(t.app.get(DataSource), `UPDATE users SET role = ? WHERE id = ?`, [role, u.id]);
   return u.token;
 }
 
@@ -23,7 +24,7 @@ describe('species catalogue API (e2e)', () => {
   afterAll(() => t.close());
 
   it('loads the curated catalogue into SQLite at start', async () => {
-    const [{ n }] = await t.app.get(DataSource).query(`SELECT COUNT(*) AS n FROM species`);
+    const [{ n }] = await runSql(t.app.get(DataSource), `SELECT COUNT(*) AS n FROM species`);
     const list = await t.http.get('/api/species?pageSize=1').expect(200);
     expect(list.body.total).toBe(n);
     expect(n).toBeGreaterThan(0);
@@ -297,9 +298,9 @@ describe('species catalogue API (e2e)', () => {
       'photographer',
       'sourceUrl',
     ]);
-    const [{ n }] = await t.app
-      .get(DataSource)
-      .query(`SELECT COUNT(*) AS n FROM species_photos WHERE slug = ?`, ['monarda-fistulosa']);
+    const [{ n }] = await runSql(t.app.get(DataSource), `SELECT COUNT(*) AS n FROM species_photos WHERE slug = ?`, [
+      'monarda-fistulosa',
+    ]);
     expect(Number(n)).toBe(0);
     const extra = await t.http
       .post('/api/species/monarda-fistulosa/photo')

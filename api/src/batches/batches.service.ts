@@ -30,6 +30,7 @@ import {
 } from '@homeground/shared';
 import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { runSql } from '../common/database/dialect.js';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
@@ -379,7 +380,8 @@ export class BatchesService {
     if (rows.length === 0) return [];
     const log = await this.logRows.find({ where: { batchId: In(rows.map((r) => r.id)) } });
     const growerIds = [...new Set(rows.map((r) => r.growerId))];
-    const people: { id: string; display_name: string }[] = await this.db.query(
+    const people = await runSql<{ id: string; display_name: string }>(
+      this.db,
       `SELECT id, display_name FROM users WHERE id IN (${growerIds.map(() => '?').join(', ')})`,
       growerIds,
     );

@@ -2,6 +2,7 @@ import { Logger } from '@nestjs/common';
 import type { Catalogue } from '@homeground/species-data';
 import type { DataSource } from 'typeorm';
 import { recordHash, withAddedFacts, writeEcoregions, writeSpecies } from './catalogue-writer.js';
+import { runSql } from '../common/database/dialect.js';
 
 export interface LoadReport {
   inserted: number;
@@ -21,7 +22,8 @@ export async function loadCatalogueIntoDatabase(db: DataSource, catalogue: Catal
   const report: LoadReport = { inserted: 0, updated: 0, keptCuratorEdits: 0, unchanged: 0, ecoregionsReloaded: false };
   const ecoHash = recordHash([catalogue.ecoregions, catalogue.counties]);
   await db.transaction(async (tx) => {
-    const rows: { slug: string; seed_hash: string | null; edited_by: string | null }[] = await tx.query(
+    const rows: { slug: string; seed_hash: string | null; edited_by: string | null }[] = await runSql(
+      tx,
       `SELECT slug, seed_hash, edited_by FROM species`,
     );
     const bySlug = new Map(rows.map((r) => [r.slug, r]));
@@ -34,20 +36,25 @@ export async function loadCatalogueIntoDatabase(db: DataSource, catalogue: Catal
       } else if (row.seed_hash === hash) {
         report.unchanged++;
       } else if (row.seed_hash === null) {
-        const [kept]: { record: string }[] = await tx.query(`SELECT record FROM species WHERE slug = ?`, [s.slug]);
+        const [kept]: { record: string }[] = await runSql(tx, `SELECT record FROM species WHERE slug = ?`, [s.slug]);
         const completed = kept ? withAddedFacts(JSON.parse(kept.record) as Record<string, unknown>, s) : null;
         if (completed)
-          await tx.query(`UPDATE species SET record = ? WHERE slug = ?`, [JSON.stringify(completed), s.slug]);
+          await runSql(tx, `UPDATE species SET record = ? WHERE slug = ?`, [JSON.stringify(completed), s.slug]);
         report.keptCuratorEdits++;
       } else {
         await writeSpecies(tx, s, { seedHash: hash, editedBy: null });
         report.updated++;
       }
     }
-    const [meta] = await tx.query(`SELECT value FROM catalogue_meta WHERE key = 'ecoregions_hash'`);
+    const [meta] = await runSql(tx, `SELECT value FROM catalogue_meta WHERE key = 'ecoregions_hash'`);
     if (meta?.value !== ecoHash) {
       await writeEcoregions(tx, catalogue.ecoregions, catalogue.counties);
-      await tx.query(`INSERT OR REPLACE INTO catalogue_meta (key, value) VALUES ('ecoregions_hash', ?)`, [ecoHash]);
+      await runSql(
+        tx,
+        `INSERT INTO catalogue_meta (key, value) VALUES ('ecoregions_hash', ?)
+           ON CONFLICT (key) DO UPDATE SET value = excluded.value`,
+        [ecoHash],
+      );
       report.ecoregionsReloaded = true;
     }
   });

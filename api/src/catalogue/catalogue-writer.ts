@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import type { CountyEcoregions, Ecoregion, Species } from '@homeground/shared';
 import type { EntityManager } from 'typeorm';
+import { runSql } from '../common/database/dialect.js';
 
 /** A stable hash of a record, to tell whether a species-data file changed since it was loaded. */
 export function recordHash(value: unknown): string {
@@ -65,32 +66,40 @@ export async function writeSpecies(
     meta.editedBy,
   ];
   const old = meta.previousSlug ?? s.slug;
-  const existing = await tx.query(`SELECT 1 FROM species WHERE slug = ?`, [old]);
+  const existing = await runSql(tx, `SELECT 1 FROM species WHERE slug = ?`, [old]);
   if (existing.length > 0) {
-    await tx.query(
+    await runSql(
+      tx,
       `UPDATE species SET slug = ?, scientific_name = ?, usda_symbol = ?, family = ?, growth_form = ?, height_max_cm = ?,
-         monarch_host = ?, record = ?, seed_hash = ?, edited_by = ?, updated_at = datetime('now') WHERE slug = ?`,
+         monarch_host = ?, record = ?, seed_hash = ?, edited_by = ?, updated_at = CURRENT_TIMESTAMP WHERE slug = ?`,
       [...values, old],
     );
   } else {
-    await tx.query(
+    await runSql(
+      tx,
       `INSERT INTO species (slug, scientific_name, usda_symbol, family, growth_form, height_max_cm, monarch_host, record, seed_hash, edited_by)
        VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
       values,
     );
   }
-  await tx.query(`DELETE FROM species_names WHERE slug = ?`, [s.slug]);
-  await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'scientific')`, [
-    s.slug,
-    s.scientificName,
-  ]);
-  for (const n of new Set(s.commonNames))
-    await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'common')`, [s.slug, n]);
-  for (const n of new Set(s.synonyms))
-    await tx.query(`INSERT INTO species_names (slug, name, kind) VALUES (?, ?, 'synonym')`, [s.slug, n]);
-  await tx.query(`DELETE FROM species_states WHERE slug = ?`, [s.slug]);
-  for (const st of new Set(s.nativeStates))
-    await tx.query(`INSERT INTO species_states (slug, state) VALUES (?, ?)`, [s.slug, st]);
+  await runSql(tx, `DELETE FROM species_names WHERE slug = ?`, [s.slug]);
+  await insertRows(
+    tx,
+    'species_names',
+    ['slug', 'name', 'kind'],
+    [
+      [s.slug, s.scientificName, 'scientific'],
+      ...[...new Set(s.commonNames)].map((n) => [s.slug, n, 'common']),
+      ...[...new Set(s.synonyms)].map((n) => [s.slug, n, 'synonym']),
+    ],
+  );
+  await runSql(tx, `DELETE FROM species_states WHERE slug = ?`, [s.slug]);
+  await insertRows(
+    tx,
+    'species_states',
+    ['slug', 'state'],
+    [...new Set(s.nativeStates)].map((st) => [s.slug, st]),
+  );
 }
 
 /** Replaces the ecoregion table, counties and the crosswalk, inside the caller's transaction. */
@@ -99,22 +108,41 @@ export async function writeEcoregions(
   ecoregions: Ecoregion[],
   counties: CountyEcoregions[],
 ): Promise<void> {
-  await tx.query(`DELETE FROM county_ecoregions`);
-  await tx.query(`DELETE FROM counties`);
-  await tx.query(`DELETE FROM ecoregions`);
-  for (const e of ecoregions) {
-    await tx.query(`INSERT INTO ecoregions (code, name, level2_code, level1_code, record) VALUES (?, ?, ?, ?, ?)`, [
-      e.code,
-      e.name,
-      e.level2.code,
-      e.level1.code,
-      JSON.stringify(e),
-    ]);
-  }
-  for (const c of counties) {
-    await tx.query(`INSERT INTO counties (fips, name, state) VALUES (?, ?, ?)`, [c.fips, c.name, c.state]);
-    for (const e of c.ecoregions) {
-      await tx.query(`INSERT INTO county_ecoregions (fips, code, share) VALUES (?, ?, ?)`, [c.fips, e.code, e.share]);
-    }
+  await runSql(tx, `DELETE FROM county_ecoregions`);
+  await runSql(tx, `DELETE FROM counties`);
+  await runSql(tx, `DELETE FROM ecoregions`);
+  await insertRows(
+    tx,
+    'ecoregions',
+    ['code', 'name', 'level2_code', 'level1_code', 'record'],
+    ecoregions.map((e) => [e.code, e.name, e.level2.code, e.level1.code, JSON.stringify(e)]),
+  );
+  await insertRows(
+    tx,
+    'counties',
+    ['fips', 'name', 'state'],
+    counties.map((c) => [c.fips, c.name, c.state]),
+  );
+  await insertRows(
+    tx,
+    'county_ecoregions',
+    ['fips', 'code', 'share'],
+    counties.flatMap((c) => c.ecoregions.map((e) => [c.fips, e.code, e.share])),
+  );
+}
+
+/** Rows per INSERT: well under SQLite's limit of bound values, and few round trips to a database server. */
+const ROWS_PER_INSERT = 200;
+
+/** Inserts rows with multi-row INSERTs: one statement per species' names, not one per name. */
+async function insertRows(tx: EntityManager, table: string, columns: string[], rows: unknown[][]): Promise<void> {
+  const row = `(${columns.map(() => '?').join(', ')})`;
+  for (let i = 0; i < rows.length; i += ROWS_PER_INSERT) {
+    const chunk = rows.slice(i, i + ROWS_PER_INSERT);
+    await runSql(
+      tx,
+      `INSERT INTO ${table} (${columns.join(', ')}) VALUES ${chunk.map(() => row).join(', ')}`,
+      chunk.flat(),
+    );
   }
 }

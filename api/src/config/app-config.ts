@@ -20,6 +20,10 @@ export interface AppConfig {
   port: number;
   dataDir: string;
   databasePath: string;
+  /** Uploaded species photos (DATA_DIR/photos unless PHOTOS_DIR says otherwise). */
+  photosDir: string;
+  /** A PostgreSQL server's address, or null for the embedded SQLite file at `databasePath`. */
+  databaseUrl: string | null;
   webDist: string;
   jwtSecret: string;
   jwtExpiresInSeconds: number;
@@ -66,6 +70,8 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     PORT: config.get('PORT', { infer: true }),
     DATA_DIR: config.get('DATA_DIR', { infer: true }),
     DATABASE: config.get('DATABASE', { infer: true }),
+    DATABASE_URL: config.get('DATABASE_URL', { infer: true }),
+    PHOTOS_DIR: config.get('PHOTOS_DIR', { infer: true }),
     JWT_SECRET: config.get('JWT_SECRET', { infer: true }),
     JWT_EXPIRES_IN_SECONDS: config.get('JWT_EXPIRES_IN_SECONDS', { infer: true }),
     JWT_PREVIOUS_SECRET: config.get('JWT_PREVIOUS_SECRET', { infer: true }),
@@ -90,6 +96,8 @@ export function buildAppConfig(config: ConfigService<Env, true>): AppConfig {
     port: env.PORT,
     dataDir,
     databasePath: env.DATABASE === ':memory:' ? ':memory:' : fromRoot(env.DATABASE),
+    databaseUrl: env.DATABASE_URL ?? null,
+    photosDir: env.PHOTOS_DIR ? fromRoot(env.PHOTOS_DIR) : path.join(dataDir, 'photos'),
     webDist: fromRoot(env.WEB_DIST),
     jwtSecret: resolveJwtSecret(env, dataDir),
     jwtExpiresInSeconds: env.JWT_EXPIRES_IN_SECONDS,

@@ -15,8 +15,20 @@ export const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   /** Folder for the database, the generated JWT secret and uploaded photos. Relative paths are from the project root. */
   DATA_DIR: z.string().min(1).default('data'),
-  /** SQLite file; relative paths are from the project root. */
+  /**
+   * Where uploaded species photos are kept (default: DATA_DIR/photos). With several API instances, a folder
+   * they all mount (NFS or similar), so a photo uploaded through one is served by every other.
+   */
+  PHOTOS_DIR: z.string().min(1).optional(),
+  /** SQLite file; relative paths are from the project root. Not used when DATABASE_URL is set. */
   DATABASE: z.string().min(1).default('data/homeground.sqlite'),
+  /**
+   * A PostgreSQL server instead of the embedded SQLite file, e.g. `postgres://homeground:secret@db:5432/homeground`:
+   * for several API instances behind a load balancer. The same migrations run on it at start.
+   */
+  DATABASE_URL: z
+    .url({ protocol: /^postgres(ql)?$/, error: 'must be a postgres:// or postgresql:// address' })
+    .optional(),
   /** When unset, a random secret is generated into DATA_DIR on first start and reused after. */
   JWT_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
   JWT_EXPIRES_IN_SECONDS: z.coerce.number().int().min(60).max(2_592_000).default(43_200),

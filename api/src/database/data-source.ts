@@ -1,6 +1,6 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import type { DataSourceOptions } from 'typeorm';
+import { DataSource, type DataSourceOptions } from 'typeorm';
 import type { AppConfig } from '../config/app-config.js';
 import { GroupMembership } from '../groups/group-membership.entity.js';
 import { Group } from '../groups/group.entity.js';
@@ -19,6 +19,7 @@ import { AddAccountDisabled1765497600000 } from './migrations/1765497600000-add-
 import { CreateSpeciesChanges1765584000000 } from './migrations/1765584000000-create-species-changes.js';
 import { AddPhotoCredits1765670400000 } from './migrations/1765670400000-add-photo-credits.js';
 import { CreatePendingRegistrations1766300000000 } from './migrations/1766300000000-create-pending-registrations.js';
+import { AddReservationLinePosition1766400000000 } from './migrations/1766400000000-add-reservation-line-position.js';
 import { PendingRegistrationRow } from '../auth/pending-registration.entity.js';
 import { AddTakerLocale1765800000000 } from './migrations/1765800000000-add-taker-locale.js';
 import { AddShareWhatToBring1766000000000 } from './migrations/1766000000000-add-share-what-to-bring.js';
@@ -76,10 +77,35 @@ export const MIGRATIONS = [
   AddTakerLocale1765800000000,
   CreateWeeklySummariesSent1765900000000,
   AddShareWhatToBring1766000000000,
+  AddReservationLinePosition1766400000000,
 ];
 
-/** SQLite through better-sqlite3 in WAL mode; the schema comes only from migrations, run at start. */
-export function databaseOptions(config: Pick<AppConfig, 'databasePath'>): DataSourceOptions {
+/**
+ * SQLite through better-sqlite3 in WAL mode with a busy timeout (the embedded default), or PostgreSQL when
+ * `DATABASE_URL` is set; the same entities and migrations on both, and the schema comes only from
+ * migrations, run at start.
+ */
+export function databaseOptions(config: Pick<AppConfig, 'databasePath' | 'databaseUrl'>): DataSourceOptions {
+  const common = {
+    entities: ENTITIES,
+    migrations: MIGRATIONS,
+    migrationsRun: true,
+    migrationsTransactionMode: 'each' as const,
+    synchronize: false,
+    logging: ['error' as const],
+  };
+  if (config.databaseUrl) {
+    return {
+      type: 'postgres',
+      url: config.databaseUrl,
+      // gen_random_uuid() is built into PostgreSQL 13+: no extension to install (which needs more rights).
+      installExtensions: false,
+      uuidExtension: 'pgcrypto',
+      // COUNT and SUM answer bigint, which pg hands over as text; every count here fits a JS number, as on SQLite.
+      parseInt8: true,
+      ...common,
+    };
+  }
   if (config.databasePath !== ':memory:') mkdirSync(path.dirname(config.databasePath), { recursive: true });
   return {
     type: 'better-sqlite3',
@@ -89,11 +115,26 @@ export function databaseOptions(config: Pick<AppConfig, 'databasePath'>): DataSo
       db.pragma('foreign_keys = ON');
       db.pragma('busy_timeout = 5000');
     },
-    entities: ENTITIES,
-    migrations: MIGRATIONS,
-    migrationsRun: true,
-    migrationsTransactionMode: 'each',
-    synchronize: false,
-    logging: ['error'],
+    ...common,
   };
+}
+
+/**
+ * Opens (and migrates) a data source. The entities' points in time are typed `datetime`, SQLite's word,
+ * which TypeORM's PostgreSQL driver reads and writes as timestamps (its value conversions name it) but
+ * leaves off the list its entity check accepts; the list is widened on this one driver instance, so
+ * the entities need no per-database types.
+ */
+export async function openDataSource(options: DataSourceOptions): Promise<DataSource> {
+  const db = new DataSource(options);
+  if (options.type === 'postgres') db.driver.supportedDataTypes.push('datetime');
+  return db.initialize();
+}
+
+/** Where the data lives, for the start-up message: the SQLite file, or the server without its password. */
+export function databaseLabel(config: Pick<AppConfig, 'databasePath' | 'databaseUrl'>): string {
+  if (!config.databaseUrl) return config.databasePath;
+  const url = new URL(config.databaseUrl);
+  if (url.password) url.password = '***';
+  return `PostgreSQL ${url.toString()}`;
 }

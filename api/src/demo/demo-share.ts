@@ -1,6 +1,7 @@
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import { DEMO_SEASON, DEMO_TARGETS } from './demo-season.js';
+import { runSql } from '../common/database/dialect.js';
 
 /**
  * The Larkfield Commons Growers' plant share, part of the invented demo scenario: the second Saturday
@@ -53,10 +54,11 @@ export const DEMO_RESERVATIONS = [
 
 /** Loads the demo share into the season when it has none (an organiser's own share is kept). */
 export async function loadDemoShare(tx: EntityManager, groupId: string, seasonId: string): Promise<void> {
-  const existing = (await tx.query('SELECT id FROM plant_shares WHERE season_id = ?', [seasonId])) as unknown[];
+  const existing = (await runSql(tx, 'SELECT id FROM plant_shares WHERE season_id = ?', [seasonId])) as unknown[];
   if (existing.length) return;
   const shareId = randomUUID();
-  await tx.query(
+  await runSql(
+    tx,
     `INSERT INTO plant_shares (id, group_id, season_id, share_date, place_name, place_address, place_directions, status,
        per_species_limit, total_limit, retention_days, what_to_bring) VALUES (?, ?, ?, ?, ?, ?, ?, 'open', ?, ?, ?, ?)`,
     [
@@ -76,7 +78,8 @@ export async function loadDemoShare(tx: EntityManager, groupId: string, seasonId
   const slotIds = DEMO_SHARE.slots.map(() => randomUUID());
   const booked = DEMO_SHARE.slots.map((_s, i) => DEMO_RESERVATIONS.filter((r) => r.slot === i).length);
   for (const [i, s] of DEMO_SHARE.slots.entries())
-    await tx.query(
+    await runSql(
+      tx,
       `INSERT INTO share_slots (id, share_id, starts_at, ends_at, starts_at_ms, ends_at_ms, capacity, booked)
        VALUES (?, ?, ?, ?, ?, ?, ?, ?)`,
       [slotIds[i], shareId, s.start, s.end, Date.parse(s.start), Date.parse(s.end), s.capacity, booked[i]],
@@ -86,7 +89,8 @@ export async function loadDemoShare(tx: EntityManager, groupId: string, seasonId
     for (const l of r.lines) reserved.set(l.slug, (reserved.get(l.slug) ?? 0) + l.count);
   // The stock starts from the season's targets, as a new share does until batches log ready counts.
   for (const [position, t] of DEMO_TARGETS.entries())
-    await tx.query(
+    await runSql(
+      tx,
       'INSERT INTO share_stock (id, share_id, slug, offered, remaining, position) VALUES (?, ?, ?, ?, ?, ?)',
       [randomUUID(), shareId, t.slug, t.targetPlants, t.targetPlants - (reserved.get(t.slug) ?? 0), position],
     );
@@ -95,17 +99,17 @@ export async function loadDemoShare(tx: EntityManager, groupId: string, seasonId
     const id = randomUUID();
     // Demo reservations were never e-mailed, so their links are random and unknown: organisers see them on the pickup list.
     const hash = createHash('sha256').update(randomBytes(32).toString('base64url')).digest('hex');
-    await tx.query(
+    await runSql(
+      tx,
       `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at)
        VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?)`,
       [id, shareId, slotIds[r.slot], hash, r.name, r.email, r.zip, stamp, stamp],
     );
-    for (const l of r.lines)
-      await tx.query('INSERT INTO share_reservation_lines (id, reservation_id, slug, count) VALUES (?, ?, ?, ?)', [
-        randomUUID(),
-        id,
-        l.slug,
-        l.count,
-      ]);
+    for (const [position, l] of r.lines.entries())
+      await runSql(
+        tx,
+        'INSERT INTO share_reservation_lines (id, reservation_id, slug, count, position) VALUES (?, ?, ?, ?, ?)',
+        [randomUUID(), id, l.slug, l.count, position],
+      );
   }
 }

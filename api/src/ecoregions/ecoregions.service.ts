@@ -5,6 +5,8 @@ import { simplify } from '@turf/turf';
 import { DataSource } from 'typeorm';
 import { parseBoundaryUpload } from '../geometry/boundary-upload.js';
 import { type AreaFeature, PolygonIndex } from '../geometry/polygon-index.js';
+import { runSql } from '../common/database/dialect.js';
+import { bumpCatalogueMark } from '../common/database/shared-version.js';
 
 export interface CountyRegions {
   fips: string;
@@ -107,20 +109,23 @@ export class EcoregionsService {
   async importBoundaries(text: string, userId: string): Promise<BoundaryImportResult> {
     const features = parseBoundaryUpload(text, new Map([...this.regions].map(([code, e]) => [code, e.name])));
     await this.db.transaction(async (tx) => {
-      await tx.query(`DELETE FROM ecoregion_boundaries`);
+      await runSql(tx, `DELETE FROM ecoregion_boundaries`);
       for (const f of features) {
-        await tx.query(
+        await runSql(
+          tx,
           `INSERT INTO ecoregion_boundaries (code, name, geometry, vertices, imported_by) VALUES (?, ?, ?, ?, ?)`,
           [f.code, f.name, JSON.stringify(f.geometry), f.vertices, userId],
         );
       }
     });
+    await bumpCatalogueMark(this.db);
     await this.reload();
     return { regions: features.length, vertices: features.reduce((n, f) => n + f.vertices, 0) };
   }
 
   async clearBoundaries(): Promise<void> {
     await this.db.query(`DELETE FROM ecoregion_boundaries`);
+    await bumpCatalogueMark(this.db);
     await this.reload();
   }
 }

@@ -15,6 +15,7 @@ import { API_VERSION, APP_CONFIG, type AppConfig } from '../config/app-config.js
 import { ZodResponse } from '../common/decorators/zod.decorators.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { Public } from '../common/decorators/public.decorator.js';
+import { tableExists } from '../common/database/dialect.js';
 
 const STARTED_AT = Date.now();
 
@@ -65,8 +66,7 @@ export class HealthController {
 
   /** Only the ecoregions the catalogue really covers (shared coverage.ts), not every row of the EPA table. */
   private async coveredEcoregions(): Promise<number> {
-    const exists = await this.db.query(`SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'ecoregions'`);
-    if (exists.length === 0) return 0;
+    if (!(await tableExists(this.db, 'ecoregions'))) return 0;
     const rows: { code: string }[] = await this.db.query(`SELECT code FROM ecoregions`);
     return coveredEcoregionCodes(
       this.ctx.species(),
@@ -75,8 +75,7 @@ export class HealthController {
   }
 
   private async countRows(table: string): Promise<number> {
-    const exists = await this.db.query(`SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = ?`, [table]);
-    if (exists.length === 0) return 0;
+    if (!(await tableExists(this.db, table))) return 0;
     const [row] = await this.db.query(`SELECT COUNT(*) AS n FROM "${table}"`);
     return Number(row.n);
   }

@@ -1,4 +1,6 @@
 import { Module } from '@nestjs/common';
+import { getDataSourceToken } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
 import { BatchesModule } from '../batches/batches.module.js';
 import { EcoregionsModule } from '../ecoregions/ecoregions.module.js';
 import { PlacesModule } from '../places/places.module.js';
@@ -11,9 +13,9 @@ import { PlantShareController } from './plant-share.controller.js';
 import { PlantShareService } from './plant-share.service.js';
 import { PublicShareController } from './public-share.controller.js';
 import { ReservationsService } from './reservations.service.js';
-import { ShareDb } from './share-db.js';
 import { ShareLedger } from './share-ledger.js';
 import { ShareMailQueue } from './share-mail-queue.js';
+import { ShareTxRunner } from './share-tx.js';
 import { SharePurgeService } from './share-purge.service.js';
 import { ShareViews } from './share-views.js';
 
@@ -31,7 +33,8 @@ import { ShareViews } from './share-views.js';
   controllers: [PlantShareController, PublicShareController],
   providers: [
     Clock,
-    ShareDb,
+    // One runner for the app's data source: on SQLite it keeps the prepared statements between requests.
+    { provide: ShareTxRunner, useFactory: (db: DataSource) => new ShareTxRunner(db), inject: [getDataSourceToken()] },
     ShareMailQueue,
     ShareLedger,
     ShareViews,
@@ -39,6 +42,6 @@ import { ShareViews } from './share-views.js';
     ReservationsService,
     SharePurgeService,
   ],
-  exports: [ShareDb, ShareLedger],
+  exports: [ShareTxRunner, ShareLedger],
 })
 export class PlantShareModule {}

@@ -30,12 +30,12 @@ import { MixContextService } from '../mix-context/mix-context.service.js';
 import { PlacesService } from '../places/places.service.js';
 import { SavedMixesService } from '../saved-mixes/saved-mixes.service.js';
 import { Clock } from './clock.js';
-import { ShareDb } from './share-db.js';
 import { ShareMailQueue } from './share-mail-queue.js';
 import { type Released, ShareLedger } from './share-ledger.js';
 import { reservationEmail } from './share-emails.js';
 import type { LineRow, ReservationRow, ShareRow, SlotRow, StockRow, WaitlistRow } from './share-rows.js';
-import { hashToken, newToken } from './share-tokens.js';
+import { hashToken, newToken, TokenSupply } from './share-tokens.js';
+import { type ShareWork, ShareTxRunner, tx } from './share-tx.js';
 import { ShareViews } from './share-views.js';
 
 /** General words under the list of plants, in the reader's language: the usual cautions, and local rules first. */
@@ -48,7 +48,7 @@ function shareNotes(locale: WordLocale): string[] {
 @Injectable()
 export class ReservationsService {
   constructor(
-    private readonly db: ShareDb,
+    private readonly runner: ShareTxRunner,
     private readonly ledger: ShareLedger,
     private readonly views: ShareViews,
     private readonly ctx: MixContextService,
@@ -62,9 +62,16 @@ export class ReservationsService {
   /** The group's share as anyone sees it; with a yard, ranked by how well each plant fits it. */
   async publicShare(slug: string, yard: ShareFitQuery, locale: WordLocale = 'en'): Promise<PublicPlantShare> {
     const group = await this.views.group(slug);
-    const share = this.views.requireShare(group);
+    const views = this.views;
+    const { share, stock, slots } = await views.read(function* () {
+      const share = yield* views.requireShare(group);
+      return {
+        share,
+        stock: (yield* views.stock(share.id)).filter((s) => s.offered > 0),
+        slots: yield* views.slots(share.id),
+      };
+    });
     const nowMs = this.clock.now().getTime();
-    const stock = this.views.stock(share.id).filter((s) => s.offered > 0);
     const records = stock.flatMap((s) => {
       const r = this.ctx.get(s.slug);
       return r ? [{ stock: s, record: r }] : [];
@@ -111,7 +118,7 @@ export class ReservationsService {
       place: this.views.place(share),
       status: share.status,
       limits: { perSpecies: share.per_species_limit, total: share.total_limit },
-      slots: this.views.slots(share.id).map((s) => ({
+      slots: slots.map((s) => ({
         id: s.id,
         start: s.starts_at,
         end: s.ends_at,
@@ -192,47 +199,76 @@ export class ReservationsService {
    */
   async reserve(slug: string, req: ParsedReservationRequest, locale: WordLocale = 'en'): Promise<ReservationCreated> {
     const group = await this.views.group(slug);
-    const share = this.views.requireShare(group);
-    assertOpen(share);
     const now = this.clock.now();
-    const stock = this.checkLines(share, req.lines);
-    const slot = this.slotOf(share, req.slotId, now.getTime(), 'slotId');
-    this.refuseEarly(share, group, slot, stock, req);
+    const { share, slot } = await this.runner.read(() => this.checkReservation(group, req, now.getTime()));
     const { token, hash } = newToken();
     const id = randomUUID();
     const stamp = now.toISOString();
-    this.db.atomically(() => {
-      assertOpen(this.views.shareById(share.id));
-      if (this.hasReservation(share.id, req.email)) throw alreadyReserved(req.email);
-      this.bookOrExplain(slot, now.getTime(), 'slotId');
-      this.takeOrExplain(share, group, req.lines);
-      this.db.run(
-        `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at, locale)
+    await this.runner.atomically(() =>
+      function* (this: ReservationsService) {
+        yield* tx.lockShare(share.id);
+        assertOpen(yield* this.views.shareById(share.id));
+        if (yield* this.hasReservation(share.id, req.email)) throw alreadyReserved(req.email);
+        yield* this.bookOrExplain(slot, now.getTime(), 'slotId');
+        yield* this.takeOrExplain(share, group, req.lines);
+        yield* tx.run(
+          `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at, locale)
          VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?, ?)`,
-        id,
-        share.id,
-        slot.id,
-        hash,
-        req.name,
-        req.email,
-        req.zip,
-        stamp,
-        stamp,
-        locale,
-      );
-      this.insertLines(id, req.lines);
-    });
-    const row = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', id)!;
-    const view = this.views.takerView(group, share, row, now.getTime());
+          id,
+          share.id,
+          slot.id,
+          hash,
+          req.name,
+          req.email,
+          req.zip,
+          stamp,
+          stamp,
+          locale,
+        );
+        yield* this.insertLines(id, req.lines);
+      }.call(this),
+    );
+    const { row, view } = await this.runner.read(() => this.viewOf(group, share, id, now.getTime()));
     const manageUrl = this.manageUrl(token);
     await this.sendConfirmation(group, view, manageUrl, false, row);
     return { ...view, manageUrl };
   }
 
+  /**
+   * What a reservation is checked against before its unit of work: the share open, the lines on
+   * offer and within the limits, the slot this share's and not started, and (refuseEarly) the answer
+   * for what is plainly gone.
+   */
+  private *checkReservation(
+    group: Group,
+    req: ParsedReservationRequest,
+    nowMs: number,
+  ): ShareWork<{ share: ShareRow; slot: SlotRow }> {
+    const share = yield* this.views.requireShare(group);
+    assertOpen(share);
+    const stock = yield* this.checkLines(share, req.lines);
+    const slot = yield* this.slotOf(share, req.slotId, nowMs, 'slotId');
+    yield* this.refuseEarly(share, group, slot, stock, req);
+    return { share, slot };
+  }
+
+  /** A reservation row and its taker's view, read after the unit that wrote it. */
+  private *viewOf(
+    group: Group,
+    share: ShareRow,
+    id: string,
+    nowMs: number,
+    locale?: WordLocale,
+  ): ShareWork<{ row: ReservationRow; view: TakerReservation }> {
+    const row = (yield* tx.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', id))!;
+    return { row, view: yield* this.views.takerView(group, share, row, nowMs, locale) };
+  }
+
   /** The reservation a private link opens, its care sheet in `locale` (else the language it was made in). */
   async byToken(token: string, locale?: WordLocale): Promise<TakerReservation> {
     const { group, share, row } = await this.open(token);
-    return this.views.takerView(group, share, row, this.clock.now().getTime(), locale);
+    const nowMs = this.clock.now().getTime();
+    return this.runner.read(() => this.views.takerView(group, share, row, nowMs, locale));
   }
 
   /** Changes the slot, the plants or both; all of it or nothing. */
@@ -240,55 +276,64 @@ export class ReservationsService {
     const { group, share, row } = await this.open(token);
     assertOpen(share);
     const now = this.clock.now();
-    const current = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', row.slot_id)!;
-    if (row.status !== 'confirmed')
-      throw new ConflictException(`This reservation is ${row.status}: it can no longer change.`);
-    if (current.starts_at_ms <= now.getTime())
-      throw new ConflictException('Your pickup slot has started: ask the volunteers at the share.');
-    if (req.lines) this.checkLines(share, req.lines);
-    const next =
-      req.slotId && req.slotId !== row.slot_id ? this.slotOf(share, req.slotId, now.getTime(), 'slotId') : null;
-    const released = this.db.atomically(() => {
-      const again = this.db.get<ReservationRow>('SELECT status FROM share_reservations WHERE id = ?', row.id)!;
-      if (again.status !== 'confirmed')
-        throw new ConflictException(`This reservation is ${again.status}: it can no longer change.`);
-      if (next) {
-        this.bookOrExplain(next, now.getTime(), 'slotId');
-        this.ledger.freeSlot(row.slot_id);
-      }
-      const out: Released[] = [];
-      if (req.lines) {
-        const old = new Map(this.linesOf(row.id).map((l) => [l.slug, l.count]));
-        const want = new Map(req.lines.map((l) => [l.speciesSlug, l.count]));
-        // Take the extra plants first: if any is short, nothing has been given back yet.
-        const more = req.lines
-          .map((l, i) => ({ ...l, index: i, count: l.count - (old.get(l.speciesSlug) ?? 0) }))
-          .filter((l) => l.count > 0);
-        this.takeOrExplain(share, group, more, (_l, i) => `lines.${more[i].index}.count`);
-        for (const [slug, had] of old) {
-          const fewer = had - (want.get(slug) ?? 0);
-          if (fewer > 0) out.push(this.ledger.release(share.id, slug, fewer, now.getTime()));
+    const next = await this.runner.read(() =>
+      function* (this: ReservationsService) {
+        const current = (yield* tx.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', row.slot_id))!;
+        if (row.status !== 'confirmed')
+          throw new ConflictException(`This reservation is ${row.status}: it can no longer change.`);
+        if (current.starts_at_ms <= now.getTime())
+          throw new ConflictException('Your pickup slot has started: ask the volunteers at the share.');
+        if (req.lines) yield* this.checkLines(share, req.lines);
+        return req.slotId && req.slotId !== row.slot_id
+          ? yield* this.slotOf(share, req.slotId, now.getTime(), 'slotId')
+          : null;
+      }.call(this),
+    );
+    const tokens = new TokenSupply();
+    const released = await this.runner.atomically(() =>
+      function* (this: ReservationsService) {
+        tokens.rewind();
+        yield* tx.lockShare(share.id);
+        const again = (yield* tx.get<ReservationRow>('SELECT status FROM share_reservations WHERE id = ?', row.id))!;
+        if (again.status !== 'confirmed')
+          throw new ConflictException(`This reservation is ${again.status}: it can no longer change.`);
+        if (next) {
+          yield* this.bookOrExplain(next, now.getTime(), 'slotId');
+          yield* this.ledger.freeSlot(row.slot_id);
         }
-        this.db.run('DELETE FROM share_reservation_lines WHERE reservation_id = ?', row.id);
-        this.insertLines(row.id, req.lines);
-      }
-      // The change e-mail goes out in the language the taker changed it in, and later ones too.
-      this.db.run(
-        'UPDATE share_reservations SET slot_id = ?, updated_at = ?, locale = ? WHERE id = ?',
-        next?.id ?? row.slot_id,
-        now.toISOString(),
-        locale,
-        row.id,
-      );
-      return out;
-    });
+        const out: Released[] = [];
+        if (req.lines) {
+          const old = new Map((yield* this.linesOf(row.id)).map((l) => [l.slug, l.count]));
+          const want = new Map(req.lines.map((l) => [l.speciesSlug, l.count]));
+          // Take the extra plants first: if any is short, nothing has been given back yet.
+          const more = req.lines
+            .map((l, i) => ({ ...l, index: i, count: l.count - (old.get(l.speciesSlug) ?? 0) }))
+            .filter((l) => l.count > 0);
+          yield* this.takeOrExplain(share, group, more, (_l, i) => `lines.${more[i].index}.count`);
+          for (const [slug, had] of old) {
+            const fewer = had - (want.get(slug) ?? 0);
+            if (fewer > 0) out.push(yield* this.ledger.release(share.id, slug, fewer, now.getTime(), tokens));
+          }
+          yield* tx.run('DELETE FROM share_reservation_lines WHERE reservation_id = ?', row.id);
+          yield* this.insertLines(row.id, req.lines);
+        }
+        // The change e-mail goes out in the language the taker changed it in, and later ones too.
+        yield* tx.run(
+          'UPDATE share_reservations SET slot_id = ?, updated_at = ?, locale = ? WHERE id = ?',
+          next?.id ?? row.slot_id,
+          now.toISOString(),
+          locale,
+          row.id,
+        );
+        return out;
+      }.call(this),
+    );
     await this.views.sendOffers(
       group,
       share,
       released.flatMap((r) => r.offers),
     );
-    const fresh = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', row.id)!;
-    const view = this.views.takerView(group, share, fresh, now.getTime());
+    const { row: fresh, view } = await this.runner.read(() => this.viewOf(group, share, row.id, now.getTime()));
     await this.sendConfirmation(group, view, this.manageUrl(token), true, fresh);
     return view;
   }
@@ -297,23 +342,31 @@ export class ReservationsService {
   async cancel(token: string): Promise<TakerReservation> {
     const { group, share, row } = await this.open(token);
     const now = this.clock.now();
-    const released = this.db.atomically(() => {
-      const changed = this.db.run(
-        `UPDATE share_reservations SET status = 'cancelled', updated_at = ? WHERE id = ? AND status = 'confirmed'`,
-        now.toISOString(),
-        row.id,
-      );
-      if (changed !== 1) throw new ConflictException(`This reservation is ${row.status}: there is nothing to cancel.`);
-      this.ledger.freeSlot(row.slot_id);
-      return this.linesOf(row.id).map((l) => this.ledger.release(share.id, l.slug, l.count, now.getTime()));
-    });
+    const tokens = new TokenSupply();
+    const released = await this.runner.atomically(() =>
+      function* (this: ReservationsService) {
+        tokens.rewind();
+        yield* tx.lockShare(share.id);
+        const changed = yield* tx.run(
+          `UPDATE share_reservations SET status = 'cancelled', updated_at = ? WHERE id = ? AND status = 'confirmed'`,
+          now.toISOString(),
+          row.id,
+        );
+        if (changed !== 1)
+          throw new ConflictException(`This reservation is ${row.status}: there is nothing to cancel.`);
+        yield* this.ledger.freeSlot(row.slot_id);
+        const out: Released[] = [];
+        for (const l of yield* this.linesOf(row.id))
+          out.push(yield* this.ledger.release(share.id, l.slug, l.count, now.getTime(), tokens));
+        return out;
+      }.call(this),
+    );
     await this.views.sendOffers(
       group,
       share,
       released.flatMap((r) => r.offers),
     );
-    const fresh = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', row.id)!;
-    return this.views.takerView(group, share, fresh, now.getTime());
+    return (await this.runner.read(() => this.viewOf(group, share, row.id, now.getTime()))).view;
   }
 
   /** Joins the waitlist of species that ran out; each line keeps its place in the order joined. */
@@ -323,60 +376,69 @@ export class ReservationsService {
     locale: WordLocale = 'en',
   ): Promise<WaitlistJoined> {
     const group = await this.views.group(slug);
-    const share = this.views.requireShare(group);
-    if (share.status === 'closed') throw new ConflictException('This plant share is closed.');
-    this.checkLines(share, req.lines);
+    const share = await this.runner.read(() =>
+      function* (this: ReservationsService) {
+        const share = yield* this.views.requireShare(group);
+        if (share.status === 'closed') throw new ConflictException('This plant share is closed.');
+        yield* this.checkLines(share, req.lines);
+        return share;
+      }.call(this),
+    );
     const stamp = this.clock.now().toISOString();
-    const entries = this.db.atomically(() =>
-      req.lines.map((l) => {
-        const seq = this.db.get<{ s: number | null }>(
-          'SELECT MAX(seq) AS s FROM share_waitlist WHERE share_id = ?',
-          share.id,
-        )!;
-        this.db.run(
-          `INSERT INTO share_waitlist (id, share_id, slug, count, held, status, token_hash, name, email, zip, seq, created_at, locale)
+    const ids = req.lines.map(() => randomUUID());
+    const entries = await this.runner.atomically(() =>
+      function* (this: ReservationsService) {
+        yield* tx.lockShare(share.id);
+        const out: WaitlistJoined['entries'] = [];
+        for (const [i, l] of req.lines.entries()) {
+          const seq = (yield* tx.get<{ s: number | null }>(
+            'SELECT MAX(seq) AS s FROM share_waitlist WHERE share_id = ?',
+            share.id,
+          ))!;
+          yield* tx.run(
+            `INSERT INTO share_waitlist (id, share_id, slug, count, held, status, token_hash, name, email, zip, seq, created_at, locale)
            VALUES (?, ?, ?, ?, 0, 'waiting', NULL, ?, ?, ?, ?, ?, ?)`,
-          randomUUID(),
-          share.id,
-          l.speciesSlug,
-          l.count,
-          req.name,
-          req.email,
-          req.zip,
-          (seq.s ?? 0) + 1,
-          stamp,
-          locale,
-        );
-        const ahead = this.db.get<{ n: number }>(
-          `SELECT COUNT(*) AS n FROM share_waitlist WHERE share_id = ? AND slug = ? AND status = 'waiting'`,
-          share.id,
-          l.speciesSlug,
-        )!;
-        return {
-          speciesSlug: l.speciesSlug,
-          commonName: this.views.names(l.speciesSlug).commonName,
-          count: l.count,
-          position: Number(ahead.n),
-        };
-      }),
+            ids[i],
+            share.id,
+            l.speciesSlug,
+            l.count,
+            req.name,
+            req.email,
+            req.zip,
+            (seq.s ?? 0) + 1,
+            stamp,
+            locale,
+          );
+          const ahead = (yield* tx.get<{ n: number }>(
+            `SELECT COUNT(*) AS n FROM share_waitlist WHERE share_id = ? AND slug = ? AND status = 'waiting'`,
+            share.id,
+            l.speciesSlug,
+          ))!;
+          out.push({
+            speciesSlug: l.speciesSlug,
+            commonName: this.views.names(l.speciesSlug).commonName,
+            count: l.count,
+            position: Number(ahead.n),
+          });
+        }
+        return out;
+      }.call(this),
     );
     return { entries };
   }
 
   /** What a waitlist offer's link shows: the plants held for the household and the slots left. */
   async offer(token: string): Promise<WaitlistOfferView> {
-    const entry = this.offerEntry(token);
-    const share = this.views.shareById(entry.share_id);
+    const { entry, share, joins, slots } = await this.runner.read(() =>
+      function* (this: ReservationsService) {
+        const entry = yield* this.offerEntry(token);
+        const share = yield* this.views.shareById(entry.share_id);
+        const joins = Boolean(entry.email && (yield* this.hasReservation(share.id, entry.email)));
+        return { entry, share, joins, slots: yield* this.views.slots(share.id) };
+      }.call(this),
+    );
     const group = await this.views.groupById(share.group_id);
     const nowMs = this.clock.now().getTime();
-    const joins = Boolean(
-      entry.email &&
-      this.db.get(
-        `SELECT id FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
-        share.id,
-        entry.email,
-      ),
-    );
     return {
       speciesSlug: entry.slug,
       ...this.views.names(entry.slug),
@@ -396,7 +458,7 @@ export class ReservationsService {
         place: this.views.place(share),
         status: share.status,
       },
-      slots: this.views.slots(share.id).map((s) => ({
+      slots: slots.map((s) => ({
         id: s.id,
         start: s.starts_at,
         end: s.ends_at,
@@ -407,8 +469,8 @@ export class ReservationsService {
   }
 
   /** The waitlist entry a private offer link opens; an unknown link is refused as forged. */
-  private offerEntry(token: string): WaitlistRow {
-    const entry = this.db.get<WaitlistRow>('SELECT * FROM share_waitlist WHERE token_hash = ?', hashToken(token));
+  private *offerEntry(token: string): ShareWork<WaitlistRow> {
+    const entry = yield* tx.get<WaitlistRow>('SELECT * FROM share_waitlist WHERE token_hash = ?', hashToken(token));
     if (!entry) throw new ForbiddenException('This link is not one we sent.');
     if (!entry.email || !entry.name) throw new GoneException('This offer was kept no longer than the share allows.');
     return entry;
@@ -419,72 +481,85 @@ export class ReservationsService {
    * a new reservation in the slot chosen (booked the same conditional way).
    */
   async claimOffer(token: string, req: ClaimOfferRequest, locale: WordLocale = 'en'): Promise<ReservationCreated> {
-    const entry = this.offerEntry(token);
-    if (entry.status === 'claimed') throw new GoneException('These plants have been claimed already.');
-    if (entry.status !== 'offered' || (entry.offered_until ?? 0) <= this.clock.now().getTime())
-      throw new GoneException('This offer has passed: the plants went to the next household on the list.');
-    const share = this.views.shareById(entry.share_id);
+    const before = this.clock.now().getTime();
+    const { entry, share } = await this.runner.read(() =>
+      function* (this: ReservationsService) {
+        const entry = yield* this.offerEntry(token);
+        if (entry.status === 'claimed') throw new GoneException('These plants have been claimed already.');
+        if (entry.status !== 'offered' || (entry.offered_until ?? 0) <= before)
+          throw new GoneException('This offer has passed: the plants went to the next household on the list.');
+        return { entry, share: yield* this.views.shareById(entry.share_id) };
+      }.call(this),
+    );
     const group = await this.views.groupById(share.group_id);
     assertOpen(share);
     const now = this.clock.now();
-    const existing = this.db.get<ReservationRow>(
-      `SELECT * FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
-      share.id,
-      entry.email,
-    );
-    const slot = existing ? null : this.slotOf(share, req.slotId, now.getTime(), 'slotId');
     const fresh = newToken();
-    const reservationId = this.db.atomically(() => {
-      if (
-        this.db.run(`UPDATE share_waitlist SET status = 'claimed' WHERE id = ? AND status = 'offered'`, entry.id) !== 1
-      )
-        throw new GoneException('These plants have been claimed already.');
-      if (existing) {
-        const had = this.db.get<{ count: number }>(
-          'SELECT count FROM share_reservation_lines WHERE reservation_id = ? AND slug = ?',
-          existing.id,
-          entry.slug,
+    const newId = randomUUID();
+    // The household's reservation is looked up inside the unit, behind the share's lock: one it made
+    // a moment ago on another instance is joined, not doubled.
+    const { reservationId, joined } = await this.runner.atomically(() =>
+      function* (this: ReservationsService) {
+        yield* tx.lockShare(share.id);
+        const existing = yield* tx.get<ReservationRow>(
+          `SELECT * FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
+          share.id,
+          entry.email,
         );
-        if (had)
-          this.db.run(
-            'UPDATE share_reservation_lines SET count = count + ? WHERE reservation_id = ? AND slug = ?',
-            entry.held,
+        const slot = existing ? null : yield* this.slotOf(share, req.slotId, now.getTime(), 'slotId');
+        if (
+          (yield* tx.run(
+            `UPDATE share_waitlist SET status = 'claimed' WHERE id = ? AND status = 'offered'`,
+            entry.id,
+          )) !== 1
+        )
+          throw new GoneException('These plants have been claimed already.');
+        if (existing) {
+          const had = yield* tx.get<{ count: number }>(
+            'SELECT count FROM share_reservation_lines WHERE reservation_id = ? AND slug = ?',
             existing.id,
             entry.slug,
           );
-        else this.insertLines(existing.id, [{ speciesSlug: entry.slug, count: entry.held }]);
-        // A new link for the household: the old one still works, this one is the one the e-mail carries.
-        this.db.run(
-          'UPDATE share_reservations SET token_hash = ?, updated_at = ? WHERE id = ?',
-          fresh.hash,
-          now.toISOString(),
-          existing.id,
-        );
-        return existing.id;
-      }
-      this.bookOrExplain(slot!, now.getTime(), 'slotId');
-      const id = randomUUID();
-      this.db.run(
-        `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at, locale)
+          if (had)
+            yield* tx.run(
+              'UPDATE share_reservation_lines SET count = count + ? WHERE reservation_id = ? AND slug = ?',
+              entry.held,
+              existing.id,
+              entry.slug,
+            );
+          else yield* this.insertLines(existing.id, [{ speciesSlug: entry.slug, count: entry.held }]);
+          // A new link for the household: the old one still works, this one is the one the e-mail carries.
+          yield* tx.run(
+            'UPDATE share_reservations SET token_hash = ?, updated_at = ? WHERE id = ?',
+            fresh.hash,
+            now.toISOString(),
+            existing.id,
+          );
+          return { reservationId: existing.id, joined: true };
+        }
+        yield* this.bookOrExplain(slot!, now.getTime(), 'slotId');
+        const id = newId;
+        yield* tx.run(
+          `INSERT INTO share_reservations (id, share_id, slot_id, token_hash, status, name, email, zip, created_at, updated_at, locale)
          VALUES (?, ?, ?, ?, 'confirmed', ?, ?, ?, ?, ?, ?)`,
-        id,
-        share.id,
-        slot!.id,
-        fresh.hash,
-        entry.name,
-        entry.email,
-        entry.zip,
-        now.toISOString(),
-        now.toISOString(),
-        locale,
-      );
-      this.insertLines(id, [{ speciesSlug: entry.slug, count: entry.held }]);
-      return id;
-    });
-    const row = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE id = ?', reservationId)!;
-    const view = this.views.takerView(group, share, row, now.getTime());
+          id,
+          share.id,
+          slot!.id,
+          fresh.hash,
+          entry.name,
+          entry.email,
+          entry.zip,
+          now.toISOString(),
+          now.toISOString(),
+          locale,
+        );
+        yield* this.insertLines(id, [{ speciesSlug: entry.slug, count: entry.held }]);
+        return { reservationId: id, joined: false };
+      }.call(this),
+    );
+    const { row, view } = await this.runner.read(() => this.viewOf(group, share, reservationId, now.getTime()));
     const manageUrl = this.manageUrl(fresh.token);
-    await this.sendConfirmation(group, view, manageUrl, Boolean(existing), row);
+    await this.sendConfirmation(group, view, manageUrl, joined, row);
     return { ...view, manageUrl };
   }
 
@@ -524,9 +599,15 @@ export class ReservationsService {
 
   /** The reservation a private link opens; an unknown link is refused as forged. */
   private async open(token: string): Promise<{ group: Group; share: ShareRow; row: ReservationRow }> {
-    const row = this.db.get<ReservationRow>('SELECT * FROM share_reservations WHERE token_hash = ?', hashToken(token));
-    if (!row) throw new ForbiddenException('This link is not one we sent: use the link in your confirmation e-mail.');
-    const share = this.views.shareById(row.share_id);
+    const views = this.views;
+    const { row, share } = await this.runner.read(function* () {
+      const row = yield* tx.get<ReservationRow>(
+        'SELECT * FROM share_reservations WHERE token_hash = ?',
+        hashToken(token),
+      );
+      if (!row) throw new ForbiddenException('This link is not one we sent: use the link in your confirmation e-mail.');
+      return { row, share: yield* views.shareById(row.share_id) };
+    });
     if (row.name === null) throw new GoneException('This reservation was kept no longer than the share allows.');
     const group = await this.views.groupById(share.group_id);
     return { group, share, row };
@@ -536,13 +617,8 @@ export class ReservationsService {
    * Each species must be on offer here, and the lines within the household limits (400 naming the line).
    * Answers the share's stock rows as read, by species.
    */
-  private checkLines(share: ShareRow, lines: readonly PlantLine[]): Map<string, StockRow> {
-    const stock = new Map(
-      this.views
-        .stock(share.id)
-        .filter((s) => s.offered > 0)
-        .map((s) => [s.slug, s]),
-    );
+  private *checkLines(share: ShareRow, lines: readonly PlantLine[]): ShareWork<Map<string, StockRow>> {
+    const stock = new Map((yield* this.views.stock(share.id)).filter((s) => s.offered > 0).map((s) => [s.slug, s]));
     const problems: FieldProblem[] = lines.flatMap((l, i) =>
       stock.has(l.speciesSlug) ? [] : [{ field: `lines.${i}.speciesSlug`, message: 'is not offered at this share' }],
     );
@@ -551,9 +627,9 @@ export class ReservationsService {
     return stock;
   }
 
-  private hasReservation(shareId: string, email: string): boolean {
+  private *hasReservation(shareId: string, email: string): ShareWork<boolean> {
     return Boolean(
-      this.db.get(
+      yield* tx.get(
         `SELECT id FROM share_reservations WHERE share_id = ? AND email = ? AND status = 'confirmed'`,
         shareId,
         email,
@@ -566,14 +642,14 @@ export class ReservationsService {
    * what was just read, before a link is made or a transaction begins, in the same order and words
    * the transaction would give. Passing here proves nothing: the transaction checks all of it again.
    */
-  private refuseEarly(
+  private *refuseEarly(
     share: ShareRow,
     group: Group,
     slot: SlotRow,
     stock: ReadonlyMap<string, StockRow>,
     req: ParsedReservationRequest,
-  ): void {
-    if (this.hasReservation(share.id, req.email)) throw alreadyReserved(req.email);
+  ): ShareWork<void> {
+    if (yield* this.hasReservation(share.id, req.email)) throw alreadyReserved(req.email);
     if (slot.booked >= slot.capacity) throw slotFull('slotId');
     const short = req.lines.flatMap((l, i) => {
       const left = stock.get(l.speciesSlug)?.remaining ?? 0;
@@ -582,37 +658,37 @@ export class ReservationsService {
     if (short.length) throw this.allTaken(group, short);
   }
 
-  private slotOf(share: ShareRow, slotId: string, nowMs: number, field: string): SlotRow {
-    const slot = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ? AND share_id = ?', slotId, share.id);
+  private *slotOf(share: ShareRow, slotId: string, nowMs: number, field: string): ShareWork<SlotRow> {
+    const slot = yield* tx.get<SlotRow>('SELECT * FROM share_slots WHERE id = ? AND share_id = ?', slotId, share.id);
     if (!slot) throw badRequest([{ field, message: 'is not a pickup slot of this share' }]);
     if (slot.starts_at_ms <= nowMs) throw badRequest([{ field, message: 'is in the past: choose a later slot' }]);
     return slot;
   }
 
-  private bookOrExplain(slot: SlotRow, nowMs: number, field: string): void {
-    if (this.ledger.bookSlot(slot.id, nowMs)) return;
-    const now = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', slot.id)!;
+  private *bookOrExplain(slot: SlotRow, nowMs: number, field: string): ShareWork<void> {
+    if (yield* this.ledger.bookSlot(slot.id, nowMs)) return;
+    const now = (yield* tx.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', slot.id))!;
     if (now.starts_at_ms <= nowMs) throw badRequest([{ field, message: 'is in the past: choose a later slot' }]);
     throw slotFull(field);
   }
 
   /** Takes every line or none; when any ran out, 409 names each short line and offers the waitlist. */
-  private takeOrExplain(
+  private *takeOrExplain(
     share: ShareRow,
     group: Group,
     lines: readonly (PlantLine & { index?: number })[],
     fieldOf: (l: PlantLine, i: number) => string = (_l, i) => `lines.${i}.count`,
-  ): void {
+  ): ShareWork<void> {
     const short: { field: string; slug: string; left: number }[] = [];
-    lines.forEach((l, i) => {
-      if (this.ledger.takeStock(share.id, l.speciesSlug, l.count)) return;
-      const row = this.db.get<StockRow>(
+    for (const [i, l] of lines.entries()) {
+      if (yield* this.ledger.takeStock(share.id, l.speciesSlug, l.count)) continue;
+      const row = yield* tx.get<StockRow>(
         'SELECT * FROM share_stock WHERE share_id = ? AND slug = ?',
         share.id,
         l.speciesSlug,
       );
       short.push({ field: fieldOf(l, i), slug: l.speciesSlug, left: row?.remaining ?? 0 });
-    });
+    }
     if (short.length === 0) return;
     throw this.allTaken(group, short);
   }
@@ -627,18 +703,25 @@ export class ReservationsService {
     });
   }
 
-  private linesOf(reservationId: string): LineRow[] {
-    return this.views.linesOf([reservationId]).get(reservationId) ?? [];
+  private *linesOf(reservationId: string): ShareWork<LineRow[]> {
+    return (yield* this.views.linesOf([reservationId])).get(reservationId) ?? [];
   }
 
-  private insertLines(reservationId: string, lines: readonly PlantLine[]): void {
+  /** Adds lines after any the reservation has, in the order given (the order its views list them in). */
+  private *insertLines(reservationId: string, lines: readonly PlantLine[]): ShareWork<void> {
+    const last = yield* tx.get<{ p: number | null }>(
+      'SELECT MAX(position) AS p FROM share_reservation_lines WHERE reservation_id = ?',
+      reservationId,
+    );
+    let position = Number(last?.p ?? -1);
     for (const l of lines)
-      this.db.run(
-        'INSERT INTO share_reservation_lines (id, reservation_id, slug, count) VALUES (?, ?, ?, ?)',
+      yield* tx.run(
+        'INSERT INTO share_reservation_lines (id, reservation_id, slug, count, position) VALUES (?, ?, ?, ?, ?)',
         randomUUID(),
         reservationId,
         l.speciesSlug,
         l.count,
+        ++position,
       );
   }
 }

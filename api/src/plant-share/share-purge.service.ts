@@ -1,8 +1,9 @@
 import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
 import { MailService } from '../mail/mail.service.js';
 import { Clock } from './clock.js';
-import { ShareDb } from './share-db.js';
 import { ShareLedger } from './share-ledger.js';
+import { TokenSupply } from './share-tokens.js';
+import { ShareTxRunner, tx } from './share-tx.js';
 import { addDays, ShareViews } from './share-views.js';
 
 /** How often the purge runs after the one at start: hourly is well inside a retention counted in days. */
@@ -21,7 +22,7 @@ export class SharePurgeService implements OnApplicationBootstrap, OnModuleDestro
   private timer: NodeJS.Timeout | null = null;
 
   constructor(
-    private readonly db: ShareDb,
+    private readonly runner: ShareTxRunner,
     private readonly mail: MailService,
     private readonly clock: Clock,
     private readonly ledger: ShareLedger,
@@ -47,10 +48,12 @@ export class SharePurgeService implements OnApplicationBootstrap, OnModuleDestro
 
   /** Waitlist offers not taken up in time move on to the next household, or back on offer. */
   async expireOffers(): Promise<number> {
-    const moved = this.db.atomically(() => this.ledger.expireOffers(this.clock.now().getTime()));
+    const nowMs = this.clock.now().getTime();
+    const tokens = new TokenSupply();
+    const moved = await this.runner.atomically(() => this.ledger.expireOffers(nowMs, tokens.rewind()));
     for (const m of moved) {
       if (m.offers.length === 0) continue;
-      const share = this.views.shareById(m.shareId);
+      const share = await this.runner.read(() => this.views.shareById(m.shareId));
       await this.views.sendOffers(await this.views.groupById(share.group_id), share, m.offers);
     }
     return moved.length;
@@ -58,28 +61,28 @@ export class SharePurgeService implements OnApplicationBootstrap, OnModuleDestro
 
   /** Purges every share whose retention has run out by now; answers how many shares were purged. */
   async purge(): Promise<number> {
-    const today = this.clock.now().toISOString().slice(0, 10);
-    const due = this.db
-      .all<{ id: string; group_id: string; share_date: string; retention_days: number }>(
-        'SELECT id, group_id, share_date, retention_days FROM plant_shares WHERE personal_data_purged_at IS NULL',
+    const now = this.clock.now();
+    const today = now.toISOString().slice(0, 10);
+    const due = (
+      await this.runner.read(() =>
+        tx.all<{ id: string; group_id: string; share_date: string; retention_days: number }>(
+          'SELECT id, group_id, share_date, retention_days FROM plant_shares WHERE personal_data_purged_at IS NULL',
+        ),
       )
-      .filter((s) => addDays(s.share_date, s.retention_days) < today);
+    ).filter((s) => addDays(s.share_date, s.retention_days) < today);
     for (const s of due) {
-      this.db.atomically(() => {
-        this.db.run(
+      await this.runner.atomically(function* () {
+        yield* tx.lockShare(s.id);
+        yield* tx.run(
           `UPDATE share_reservations SET name = NULL, email = NULL, zip = substr(zip, 1, 3),
              token_hash = 'purged:' || id WHERE share_id = ?`,
           s.id,
         );
-        this.db.run(
+        yield* tx.run(
           `UPDATE share_waitlist SET name = NULL, email = NULL, zip = substr(zip, 1, 3), token_hash = NULL WHERE share_id = ?`,
           s.id,
         );
-        this.db.run(
-          `UPDATE plant_shares SET personal_data_purged_at = ? WHERE id = ?`,
-          this.clock.now().toISOString(),
-          s.id,
-        );
+        yield* tx.run(`UPDATE plant_shares SET personal_data_purged_at = ? WHERE id = ?`, now.toISOString(), s.id);
       });
       await this.mail.forgetOutbox(s.group_id, 'plant-share-');
     }

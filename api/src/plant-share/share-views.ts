@@ -18,7 +18,7 @@ import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { ShareMailQueue } from './share-mail-queue.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
-import { ShareDb } from './share-db.js';
+import { type ShareWork, ShareTxRunner, tx } from './share-tx.js';
 import { waitlistOfferEmail } from './share-emails.js';
 import type { WaitlistOfferMade } from './share-ledger.js';
 import {
@@ -47,7 +47,7 @@ const GROUP_CACHE_MS = 5000;
 export class ShareViews {
   private readonly groupCache = new Map<string, { group: Group; until: number }>();
   constructor(
-    private readonly db: ShareDb,
+    private readonly runner: ShareTxRunner,
     private readonly ctx: MixContextService,
     private readonly mail: ShareMailQueue,
     private readonly groups: GroupsService,
@@ -75,42 +75,47 @@ export class ShareViews {
     return group;
   }
 
+  /** Runs read-only steps outside a transaction (see ShareTxRunner.read). */
+  read<T>(work: () => ShareWork<T>): Promise<T> {
+    return this.runner.read(work);
+  }
+
   /** The group's share for its newest season, or null. */
-  shareOf(groupId: string): ShareRow | null {
+  *shareOf(groupId: string): ShareWork<ShareRow | null> {
     return (
-      this.db.get<ShareRow>(
+      (yield* tx.get<ShareRow>(
         `SELECT ${SHARE_COLUMNS} FROM plant_shares WHERE group_id = ? ORDER BY share_date DESC LIMIT 1`,
         groupId,
-      ) ?? null
+      )) ?? null
     );
   }
 
-  requireShare(group: Group): ShareRow {
-    const share = this.shareOf(group.id);
+  *requireShare(group: Group): ShareWork<ShareRow> {
+    const share = yield* this.shareOf(group.id);
     if (!share) throw new NotFoundException(`${group.name} has no plant share yet.`);
     return share;
   }
 
-  shareById(id: string): ShareRow {
-    return this.db.get<ShareRow>(`SELECT ${SHARE_COLUMNS} FROM plant_shares WHERE id = ?`, id)!;
+  *shareById(id: string): ShareWork<ShareRow> {
+    return (yield* tx.get<ShareRow>(`SELECT ${SHARE_COLUMNS} FROM plant_shares WHERE id = ?`, id))!;
   }
 
-  slots(shareId: string): SlotRow[] {
-    return this.db.all<SlotRow>('SELECT * FROM share_slots WHERE share_id = ? ORDER BY starts_at_ms, id', shareId);
+  *slots(shareId: string): ShareWork<SlotRow[]> {
+    return yield* tx.all<SlotRow>('SELECT * FROM share_slots WHERE share_id = ? ORDER BY starts_at_ms, id', shareId);
   }
 
-  stock(shareId: string): StockRow[] {
-    return this.db.all<StockRow>('SELECT * FROM share_stock WHERE share_id = ? ORDER BY position', shareId);
+  *stock(shareId: string): ShareWork<StockRow[]> {
+    return yield* tx.all<StockRow>('SELECT * FROM share_stock WHERE share_id = ? ORDER BY position', shareId);
   }
 
-  linesOf(reservationIds: readonly string[]): Map<string, LineRow[]> {
+  *linesOf(reservationIds: readonly string[]): ShareWork<Map<string, LineRow[]>> {
     const out = new Map<string, LineRow[]>();
     if (reservationIds.length === 0) return out;
     // Chunks keep the statement under SQLite's 999-parameter limit.
     for (let i = 0; i < reservationIds.length; i += 500) {
       const chunk = reservationIds.slice(i, i + 500);
-      const rows = this.db.all<LineRow>(
-        `SELECT reservation_id, slug, count FROM share_reservation_lines WHERE reservation_id IN (${chunk.map(() => '?').join(',')}) ORDER BY rowid`,
+      const rows = yield* tx.all<LineRow>(
+        `SELECT reservation_id, slug, count FROM share_reservation_lines WHERE reservation_id IN (${chunk.map(() => '?').join(',')}) ORDER BY position`,
         ...chunk,
       );
       for (const r of rows) out.set(r.reservation_id, [...(out.get(r.reservation_id) ?? []), r]);
@@ -148,25 +153,25 @@ export class ShareViews {
   }
 
   /** The share as its organisers see it. */
-  organiserView(group: Group, share: ShareRow): PlantShare {
-    const season = this.db.get<{ year: number }>('SELECT year FROM seasons WHERE id = ?', share.season_id);
-    const counts = this.db.all<{ status: ReservationStatus; n: number }>(
+  *organiserView(group: Group, share: ShareRow): ShareWork<PlantShare> {
+    const season = yield* tx.get<{ year: number }>('SELECT year FROM seasons WHERE id = ?', share.season_id);
+    const counts = yield* tx.all<{ status: ReservationStatus; n: number }>(
       'SELECT status, COUNT(*) AS n FROM share_reservations WHERE share_id = ? GROUP BY status',
       share.id,
     );
     const households = Object.fromEntries(RESERVATION_STATUSES.map((s) => [s, 0])) as Record<ReservationStatus, number>;
     for (const c of counts) households[c.status] = Number(c.n);
-    const reserved = this.sumBySlug(
+    const reserved = yield* this.sumBySlug(
       `SELECT l.slug, SUM(l.count) AS n FROM share_reservation_lines l JOIN share_reservations r ON r.id = l.reservation_id
        WHERE r.share_id = ? AND r.status = 'confirmed' GROUP BY l.slug`,
       share.id,
     );
-    const given = this.givenBySlug(share.id);
-    const waitlisted = this.sumBySlug(
+    const given = yield* this.givenBySlug(share.id);
+    const waitlisted = yield* this.sumBySlug(
       `SELECT slug, SUM(count) AS n FROM share_waitlist WHERE share_id = ? AND status = 'waiting' GROUP BY slug`,
       share.id,
     );
-    const stock: ShareStockLine[] = this.stock(share.id).map((s) => ({
+    const stock: ShareStockLine[] = (yield* this.stock(share.id)).map((s) => ({
       speciesSlug: s.slug,
       ...this.names(s.slug),
       offered: s.offered,
@@ -175,7 +180,11 @@ export class ShareViews {
       given: given.get(s.slug) ?? 0,
       waitlisted: waitlisted.get(s.slug) ?? 0,
     }));
-    const walkUps = this.db.get<{ n: number }>('SELECT COUNT(*) AS n FROM share_walk_ups WHERE share_id = ?', share.id);
+    const walkUps = yield* tx.get<{ n: number }>(
+      'SELECT COUNT(*) AS n FROM share_walk_ups WHERE share_id = ?',
+      share.id,
+    );
+    const slots = yield* this.slots(share.id);
     return {
       id: share.id,
       groupSlug: group.slug,
@@ -187,7 +196,7 @@ export class ShareViews {
       limits: { perSpecies: share.per_species_limit, total: share.total_limit },
       retentionDays: share.retention_days,
       personalDataKeptUntil: addDays(share.share_date, share.retention_days),
-      slots: this.slots(share.id).map((s) => this.slot(s)),
+      slots: slots.map((s) => this.slot(s)),
       stock,
       households,
       walkUps: Number(walkUps?.n ?? 0),
@@ -199,13 +208,13 @@ export class ShareViews {
    * The waitlist per species in the order plants are offered (the order households joined), for the
    * group's organisers: names and e-mails included, as on the pickup list, until the retention ends.
    */
-  waitlist(share: ShareRow): ShareWaitlist {
-    const rows = this.db.all<WaitlistRow & { created_at: string }>(
+  *waitlist(share: ShareRow): ShareWork<ShareWaitlist> {
+    const rows = yield* tx.all<WaitlistRow & { created_at: string }>(
       `SELECT id, slug, count, held, status, offered_until, name, email, seq, created_at FROM share_waitlist
        WHERE share_id = ? ORDER BY seq`,
       share.id,
     );
-    const stock = this.stock(share.id);
+    const stock = yield* this.stock(share.id);
     const order = [...stock.map((s) => s.slug), ...rows.map((r) => r.slug)];
     const slugs = [...new Set(order)].filter((slug) => rows.some((r) => r.slug === slug));
     return {
@@ -235,13 +244,13 @@ export class ShareViews {
   }
 
   /** Plants handed over by species: picked-up reservations and walk-ups. */
-  givenBySlug(shareId: string): Map<string, number> {
-    const picked = this.sumBySlug(
+  *givenBySlug(shareId: string): ShareWork<Map<string, number>> {
+    const picked = yield* this.sumBySlug(
       `SELECT l.slug, SUM(l.count) AS n FROM share_reservation_lines l JOIN share_reservations r ON r.id = l.reservation_id
        WHERE r.share_id = ? AND r.status = 'picked-up' GROUP BY l.slug`,
       shareId,
     );
-    const walked = this.sumBySlug(
+    const walked = yield* this.sumBySlug(
       `SELECT l.slug, SUM(l.count) AS n FROM share_walk_up_lines l JOIN share_walk_ups w ON w.id = l.walk_up_id
        WHERE w.share_id = ? GROUP BY l.slug`,
       shareId,
@@ -250,8 +259,9 @@ export class ShareViews {
     return picked;
   }
 
-  private sumBySlug(sql: string, shareId: string): Map<string, number> {
-    return new Map(this.db.all<{ slug: string; n: number }>(sql, shareId).map((r) => [r.slug, Number(r.n)]));
+  private *sumBySlug(sql: string, shareId: string): ShareWork<Map<string, number>> {
+    const rows = yield* tx.all<{ slug: string; n: number }>(sql, shareId);
+    return new Map(rows.map((r) => [r.slug, Number(r.n)]));
   }
 
   place(share: ShareRow) {
@@ -274,11 +284,16 @@ export class ShareViews {
     };
   }
 
-  /** A reservation as its taker sees it. */
   /** A taker's reservation; its care sheet in `locale`, else in the language the reservation was made in. */
-  takerView(group: Group, share: ShareRow, r: ReservationRow, nowMs: number, locale?: WordLocale): TakerReservation {
-    const slot = this.db.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', r.slot_id)!;
-    const lines = this.linesOf([r.id]).get(r.id) ?? [];
+  *takerView(
+    group: Group,
+    share: ShareRow,
+    r: ReservationRow,
+    nowMs: number,
+    locale?: WordLocale,
+  ): ShareWork<TakerReservation> {
+    const slot = (yield* tx.get<SlotRow>('SELECT * FROM share_slots WHERE id = ?', r.slot_id))!;
+    const lines = (yield* this.linesOf([r.id])).get(r.id) ?? [];
     return {
       id: r.id,
       status: r.status,

@@ -18,6 +18,7 @@ import {
 } from '@homeground/shared';
 import { Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { runSql } from '../common/database/dialect.js';
 import { BatchesService } from '../batches/batches.service.js';
 import { badRequest } from '../common/validation/bad-request.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
@@ -194,7 +195,8 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
   /** Writes "this grower has this week's summary"; false when it was already written. */
   private async claim(groupId: string, userId: string, week: string): Promise<boolean> {
     // One statement, so two runs at once cannot both pass a check and both send.
-    const rows: unknown[] = await this.sentRows.query(
+    const rows = await runSql(
+      this.sentRows.manager,
       `INSERT INTO "weekly_summaries_sent" ("id", "group_id", "user_id", "week") VALUES (?, ?, ?, ?)
        ON CONFLICT ("group_id", "user_id", "week") DO NOTHING RETURNING "id"`,
       [randomUUID(), groupId, userId, week],
@@ -210,12 +212,13 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
    * be the better source; it waits for the migration rework.
    */
   private async languageOf(email: string): Promise<MailLanguage> {
-    const rows: { locale: string }[] = await this.sentRows.query(
+    const rows = await runSql<{ locale: string }>(
+      this.sentRows.manager,
       `SELECT locale FROM (
          SELECT locale, created_at AS at FROM share_reservations WHERE lower(email) = lower(?)
          UNION ALL
          SELECT locale, created_at AS at FROM share_waitlist WHERE lower(email) = lower(?)
-       ) ORDER BY at DESC LIMIT 1`,
+       ) AS latest ORDER BY at DESC LIMIT 1`,
       [email, email],
     );
     return rows[0]?.locale === 'es' ? 'es' : 'en';

@@ -23,6 +23,7 @@ import {
 } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { runSql } from '../common/database/dialect.js';
 import { badRequest } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
@@ -154,7 +155,8 @@ export class SeasonsService {
   private async reachedGermination(groupId: string, year: number): Promise<Map<string, number>> {
     // Only batches whose grower logged what came up count: a batch with seeds sown and nothing logged
     // since says nothing about germination.
-    const rows: { slug: string; sown: number; germinated: number }[] = await this.db.query(
+    const rows = await runSql<{ slug: string; sown: number; germinated: number }>(
+      this.db,
       `SELECT slug, SUM(sown) AS sown, SUM(germinated) AS germinated
          FROM (SELECT b.slug AS slug,
                       SUM(CASE WHEN e.kind = 'sown' THEN e.count ELSE 0 END) AS sown,
@@ -163,8 +165,8 @@ export class SeasonsService {
                  JOIN batches b ON b.id = e.batch_id
                  JOIN seasons s ON s.id = b.season_id
                 WHERE s.group_id = ? AND s.year < ?
-                GROUP BY b.id
-               HAVING germinated > 0)
+                GROUP BY b.id, b.slug
+               HAVING SUM(CASE WHEN e.kind = 'germinated' THEN e.count ELSE 0 END) > 0) AS per_batch
         GROUP BY slug`,
       [groupId, year],
     );

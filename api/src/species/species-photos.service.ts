@@ -35,7 +35,7 @@ export class SpeciesPhotosService {
     private readonly store: SpeciesStore,
     @Inject(APP_CONFIG) config: AppConfig,
   ) {
-    this.dir = path.join(config.dataDir, 'photos');
+    this.dir = config.photosDir;
   }
 
   /** Stores a photo after checking its real type from its bytes (the name and the browser's word are not trusted). */
@@ -86,7 +86,7 @@ export class SpeciesPhotosService {
       await this.makeVariants(slug, bytes, meta.width ?? 0);
       return saved;
     });
-    await this.store.reload();
+    await this.store.publish();
     return photo;
   }
 

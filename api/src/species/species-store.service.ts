@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import type { PhotoCredit, PhotoLicence, Species, SpeciesPage, SpeciesQuery } from '@homeground/shared';
 import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { DataSource } from 'typeorm';
+import { bumpCatalogueMark, readCatalogueMark } from '../common/database/shared-version.js';
 import { SpeciesSearchIndex, type NameEntry } from './search/species-search-index.js';
 import { matchesFilters, sortSpecies } from './species-filter.js';
 import { toSpeciesSummary } from './species-summary.mapper.js';
@@ -11,8 +12,10 @@ const MAX_CACHED_PAGES = 1000;
 
 /**
  * The catalogue's read model: every species record in memory with a search index, rebuilt from
- * SQLite at start and after each curator edit. List answers are cached as ready-to-send JSON; any
- * edit clears the cache, so readers never see stale data.
+ * the database at start and after each curator edit. List answers are cached as ready-to-send JSON; any
+ * edit clears the cache, so readers never see stale data. With several API instances on one PostgreSQL
+ * database, each write sets the shared catalogue mark (database/shared-version.ts) and every instance
+ * checks it per request (CatalogueSyncMiddleware), rebuilding when another instance has written.
  */
 @Injectable()
 export class SpeciesStore {
@@ -22,6 +25,10 @@ export class SpeciesStore {
   private credits = new Map<string, PhotoCredit>();
   private index = new SpeciesSearchIndex([]);
   private generation = 0;
+  /** The shared catalogue mark these records were read at. */
+  private mark: string | null = null;
+  /** A rebuild after another instance's write, shared by the requests that noticed it at once. */
+  private syncing: Promise<void> | null = null;
   /** List answers keyed by the raw request URL, as bytes, for the fast path in species-list-cache.middleware. */
   private readonly rawPages = new Map<string, Buffer>();
 
@@ -32,6 +39,8 @@ export class SpeciesStore {
   ) {}
 
   async reload(): Promise<void> {
+    // The mark first: a write landing while the rows are read leaves an older mark, so the next check rebuilds again.
+    const mark = await readCatalogueMark(this.db);
     const [rows, photoRows] = await Promise.all([
       this.db.query(`SELECT record FROM species ORDER BY slug`),
       this.db.query(`SELECT slug, photographer, licence, source_url FROM species_photos`),
@@ -53,6 +62,27 @@ export class SpeciesStore {
           : [],
       ),
     );
+    this.mark = mark;
+  }
+
+  /** After a write to the catalogue has committed: tells the other instances, and rebuilds this one. */
+  async publish(): Promise<void> {
+    await bumpCatalogueMark(this.db);
+    await this.reload();
+  }
+
+  /** Rebuilds the ecoregions and the records when another instance has written since they were read. */
+  async syncWithDatabase(): Promise<void> {
+    if ((await readCatalogueMark(this.db)) === this.mark) return;
+    this.syncing ??= (async () => {
+      try {
+        await this.ecoregions.reload();
+        await this.reload();
+      } finally {
+        this.syncing = null;
+      }
+    })();
+    await this.syncing;
   }
 
   /** Swaps in a new set of records (also used by benchmarks with synthetic species). */

@@ -11,6 +11,7 @@ import { EcoregionsModule } from '../ecoregions/ecoregions.module.js';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { SpeciesChangeRow } from './species-change.entity.js';
 import { SpeciesHistoryService } from './species-history.service.js';
+import { CatalogueSyncMiddleware } from './catalogue-sync.middleware.js';
 import { SpeciesListCacheMiddleware } from './species-list-cache.middleware.js';
 import { SpeciesPhotosService } from './species-photos.service.js';
 import { SpeciesReferenceController } from './species-reference.controller.js';
@@ -32,6 +33,7 @@ import { SpeciesService } from './species.service.js';
     SpeciesStore,
     SpeciesPhotosService,
     SpeciesListCacheMiddleware,
+    CatalogueSyncMiddleware,
   ],
   exports: [SpeciesStore],
 })
@@ -46,8 +48,12 @@ export class SpeciesModule implements OnModuleInit, NestModule {
     return this.store.reload();
   }
 
-  /** Repeated list pages are answered from memory; module middleware runs after the app-wide headers. */
+  /**
+   * Every request first catches up with other instances' catalogue writes (PostgreSQL only); then repeated
+   * list pages are answered from memory. Module middleware runs after the app-wide headers.
+   */
   configure(consumer: MiddlewareConsumer): void {
+    consumer.apply(CatalogueSyncMiddleware).forRoutes({ path: '*path', method: RequestMethod.ALL });
     consumer.apply(SpeciesListCacheMiddleware).forRoutes({ path: 'species', method: RequestMethod.GET });
   }
 }

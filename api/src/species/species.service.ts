@@ -11,12 +11,13 @@ import {
   speciesToCsvRow,
 } from '@homeground/shared';
 import Papa from 'papaparse';
-import { DataSource } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { writeSpecies } from '../catalogue/catalogue-writer.js';
 import { badRequest } from '../common/validation/bad-request.js';
 import { recordChange } from './species-change-recorder.js';
 import { SpeciesSourcesService } from './species-sources.service.js';
 import { SpeciesStore } from './species-store.service.js';
+import { runSql } from '../common/database/dialect.js';
 
 /** At most this many bad rows are listed in one answer; the count says how many there were. */
 const MAX_REPORTED_ROW_ERRORS = 500;
@@ -44,7 +45,7 @@ export class SpeciesService {
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId });
       await recordChange(tx, { kind: 'create', before: null, after: record, userId });
     });
-    await this.store.reload();
+    await this.store.publish();
     return this.get(record.slug);
   }
 
@@ -64,7 +65,7 @@ export class SpeciesService {
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId, previousSlug: slug });
       await recordChange(tx, { kind: how.kind, before, after: record, userId, revertOf: how.revertOf });
     });
-    await this.store.reload();
+    await this.store.publish();
     return this.get(record.slug);
   }
 
@@ -132,7 +133,7 @@ export class SpeciesService {
         await recordChange(tx, { kind: 'import', before, after: r, userId, fileName });
       }
     });
-    await this.store.reload();
+    await this.store.publish();
     return { created, updated: records.length - created, dryRun: false, preview };
   }
 
@@ -145,8 +146,9 @@ export class SpeciesService {
   }
 
   /** A symbol or scientific name may belong to one species only (other than the one being replaced). */
-  private async assertUnique(tx: { query: DataSource['query'] }, r: Species, ownSlug: string | null): Promise<void> {
-    const clash = await tx.query(
+  private async assertUnique(tx: EntityManager, r: Species, ownSlug: string | null): Promise<void> {
+    const clash = await runSql<{ slug: string }>(
+      tx,
       `SELECT slug FROM species WHERE (usda_symbol = ? OR scientific_name = ?) AND slug <> ? AND slug <> ?`,
       [r.usdaSymbol, r.scientificName, r.slug, ownSlug ?? r.slug],
     );

@@ -1,5 +1,6 @@
 import { expect } from '@jest/globals';
 import { DataSource } from 'typeorm';
+import { runSql } from '../../src/common/database/dialect.js';
 import { ShareMailQueue } from '../../src/plant-share/share-mail-queue.js';
 import type { TestApp } from './test-app.js';
 
@@ -49,18 +50,25 @@ export function linkSecret(text: string, kind: 'reservations' | 'offers'): strin
   return m![1];
 }
 
-/** Everything the plant-share routes could write, to prove a refused request wrote nothing. */
+/** Everything the plant-share routes could write, to prove a refused request wrote nothing (on either database). */
 export async function shareSnapshot(t: TestApp): Promise<unknown> {
-  return t.app.get(DataSource).query(`SELECT
-    (SELECT COUNT(*) FROM plant_shares) AS shares,
-    (SELECT group_concat(status || retention_days || per_species_limit || total_limit) FROM plant_shares) AS settings,
-    (SELECT COUNT(*) FROM share_slots) AS slots,
-    (SELECT SUM(booked) FROM share_slots) AS booked,
-    (SELECT group_concat(slug || ':' || offered || ':' || remaining) FROM (SELECT * FROM share_stock ORDER BY id)) AS stock,
-    (SELECT COUNT(*) FROM share_reservations) AS reservations,
-    (SELECT group_concat(status) FROM (SELECT status FROM share_reservations ORDER BY id)) AS statuses,
-    (SELECT COUNT(*) FROM share_reservation_lines) AS lines,
-    (SELECT SUM(count) FROM share_reservation_lines) AS plants,
-    (SELECT COUNT(*) FROM share_waitlist) AS waitlist,
-    (SELECT COUNT(*) FROM share_walk_ups) AS walkUps`);
+  const db = t.app.get(DataSource);
+  const rows = (sql: string) => runSql<Record<string, unknown>>(db, sql);
+  const n = async (sql: string) => Number((await rows(sql))[0].n ?? 0);
+  const joined = async (sql: string) => (await rows(sql)).map((r) => Object.values(r).join(':')).join(',');
+  return {
+    shares: await n('SELECT COUNT(*) AS n FROM plant_shares'),
+    settings: await joined(
+      'SELECT status, retention_days, per_species_limit, total_limit FROM plant_shares ORDER BY id',
+    ),
+    slots: await n('SELECT COUNT(*) AS n FROM share_slots'),
+    booked: await n('SELECT SUM(booked) AS n FROM share_slots'),
+    stock: await joined('SELECT slug, offered, remaining FROM share_stock ORDER BY id'),
+    reservations: await n('SELECT COUNT(*) AS n FROM share_reservations'),
+    statuses: await joined('SELECT status FROM share_reservations ORDER BY id'),
+    lines: await n('SELECT COUNT(*) AS n FROM share_reservation_lines'),
+    plants: await n('SELECT SUM(count) AS n FROM share_reservation_lines'),
+    waitlist: await n('SELECT COUNT(*) AS n FROM share_waitlist'),
+    walkUps: await n('SELECT COUNT(*) AS n FROM share_walk_ups'),
+  };
 }

@@ -4,6 +4,7 @@ import path from 'node:path';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { Test } from '@nestjs/testing';
 import request from 'supertest';
+import { createTestDatabase, TEST_PG_URL } from './postgres.js';
 
 export interface TestApp {
   app: NestExpressApplication;
@@ -13,12 +14,14 @@ export interface TestApp {
 }
 
 /**
- * Boots the real AppModule against a throwaway SQLite file in a temp folder, with migrations run
- * as at start. Environment variables are set before the app's modules are imported, because the
+ * Boots the real AppModule against a throwaway SQLite file in a temp folder (or, in the PostgreSQL
+ * run, a fresh database on the test server), with migrations run as at start. Environment variables are set before the app's modules are imported, because the
  * config module validates the environment when it is first loaded.
  */
 export async function createTestApp(env: Record<string, string> = {}): Promise<TestApp> {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'homeground-e2e-'));
+  const database = TEST_PG_URL && !('DATABASE_URL' in env) ? await createTestDatabase(TEST_PG_URL) : null;
+  if (database) process.env.DATABASE_URL = database.url;
   Object.assign(process.env, {
     NODE_ENV: 'test',
     DATA_DIR: dataDir,
@@ -40,6 +43,7 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
     dataDir,
     async close() {
       await app.close();
+      await database?.drop();
       rmSync(dataDir, { recursive: true, force: true });
     },
   };
@@ -51,11 +55,12 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
  */
 export async function registrationToken(t: TestApp, email: string): Promise<string | null> {
   const { DataSource } = await import('typeorm');
-  const rows: { text: string }[] = await t.app
-    .get(DataSource)
-    .query(`SELECT text FROM outbox_messages WHERE kind = 'registration' AND "to" LIKE ? ORDER BY received_at DESC`, [
-      `%${email.toLowerCase()}%`,
-    ]);
+  const { runSql } = await import('../../src/common/database/dialect.js');
+  const rows = await runSql<{ text: string }>(
+    t.app.get(DataSource),
+    `SELECT text FROM outbox_messages WHERE kind = 'registration' AND "to" LIKE ? ORDER BY received_at DESC`,
+    [`%${email.toLowerCase()}%`],
+  );
   for (const row of rows) {
     const match = /\/register\/confirm\/([A-Za-z0-9_-]{43})/.exec(row.text);
     if (match) return match[1];

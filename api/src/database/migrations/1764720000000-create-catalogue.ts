@@ -1,4 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /**
  * The species catalogue: one row per species holding the full record as JSON (the shared schema),
@@ -9,18 +10,19 @@ export class CreateCatalogue1764720000000 implements MigrationInterface {
   name = 'CreateCatalogue1764720000000';
 
   async up(q: QueryRunner): Promise<void> {
+    const t = schemaWords(q);
     await q.query(`CREATE TABLE "species" (
       "slug" text PRIMARY KEY NOT NULL,
       "scientific_name" text NOT NULL UNIQUE,
       "usda_symbol" text NOT NULL UNIQUE,
       "family" text NOT NULL,
       "growth_form" text NOT NULL,
-      "height_max_cm" real NOT NULL,
+      "height_max_cm" ${t.real} NOT NULL,
       "monarch_host" boolean NOT NULL,
       "record" text NOT NULL,
       "seed_hash" text,
       "edited_by" text REFERENCES "users" ("id") ON DELETE SET NULL,
-      "updated_at" datetime NOT NULL DEFAULT (datetime('now'))
+      "updated_at" ${t.datetime} NOT NULL DEFAULT ${t.now}
     )`);
     await q.query(`CREATE TABLE "species_names" (
       "slug" text NOT NULL REFERENCES "species" ("slug") ON DELETE CASCADE ON UPDATE CASCADE,
@@ -49,7 +51,7 @@ export class CreateCatalogue1764720000000 implements MigrationInterface {
     await q.query(`CREATE TABLE "county_ecoregions" (
       "fips" text NOT NULL REFERENCES "counties" ("fips") ON DELETE CASCADE,
       "code" text NOT NULL REFERENCES "ecoregions" ("code") ON DELETE CASCADE,
-      "share" real NOT NULL CHECK ("share" > 0 AND "share" <= 1),
+      "share" ${t.real} NOT NULL CHECK ("share" > 0 AND "share" <= 1),
       PRIMARY KEY ("fips", "code")
     )`);
     await q.query(`CREATE TABLE "species_photos" (
@@ -60,7 +62,7 @@ export class CreateCatalogue1764720000000 implements MigrationInterface {
       "width" integer NOT NULL,
       "height" integer NOT NULL,
       "uploaded_by" text REFERENCES "users" ("id") ON DELETE SET NULL,
-      "uploaded_at" datetime NOT NULL DEFAULT (datetime('now'))
+      "uploaded_at" ${t.datetime} NOT NULL DEFAULT ${t.now}
     )`);
     await q.query(`CREATE TABLE "catalogue_meta" ("key" text PRIMARY KEY NOT NULL, "value" text NOT NULL)`);
   }

@@ -1,4 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /**
  * Level III boundary polygons an admin has imported (GeoJSON as the EPA publishes it). When present,
@@ -8,13 +9,14 @@ export class CreateEcoregionBoundaries1764806400000 implements MigrationInterfac
   name = 'CreateEcoregionBoundaries1764806400000';
 
   async up(q: QueryRunner): Promise<void> {
+    const t = schemaWords(q);
     await q.query(`CREATE TABLE "ecoregion_boundaries" (
       "code" text PRIMARY KEY NOT NULL REFERENCES "ecoregions" ("code") ON DELETE CASCADE,
       "name" text NOT NULL,
       "geometry" text NOT NULL,
       "vertices" integer NOT NULL,
       "imported_by" text REFERENCES "users" ("id") ON DELETE SET NULL,
-      "imported_at" datetime NOT NULL DEFAULT (datetime('now'))
+      "imported_at" ${t.datetime} NOT NULL DEFAULT ${t.now}
     )`);
   }
 

@@ -1,17 +1,24 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { dialectOf } from '../../common/database/dialect.js';
 
 /**
  * A group's people now include plain members (who reserve plants) beside growers and organisers.
- * SQLite cannot change a CHECK constraint in place, so the table is rebuilt with its rows.
+ * SQLite cannot change a CHECK constraint in place, so the table is rebuilt with its rows; PostgreSQL
+ * swaps the constraint (its name is the one PostgreSQL gave the column's CHECK in the first migration).
  */
 export class AllowGroupMembers1765022400000 implements MigrationInterface {
   name = 'AllowGroupMembers1765022400000';
 
   async up(q: QueryRunner): Promise<void> {
+    if (dialectOf(q.connection) === 'postgres') return replaceCheck(q, `'member', 'grower', 'organiser'`);
     await rebuild(q, `'member', 'grower', 'organiser'`, `SELECT * FROM "group_memberships"`);
   }
 
   async down(q: QueryRunner): Promise<void> {
+    if (dialectOf(q.connection) === 'postgres') {
+      await q.query(`DELETE FROM "group_memberships" WHERE "role" = 'member'`);
+      return replaceCheck(q, `'organiser', 'grower'`);
+    }
     await rebuild(q, `'organiser', 'grower'`, `SELECT * FROM "group_memberships" WHERE "role" <> 'member'`);
   }
 }
@@ -30,4 +37,11 @@ async function rebuild(q: QueryRunner, roles: string, rows: string): Promise<voi
   await q.query(`DROP TABLE "group_memberships"`);
   await q.query(`ALTER TABLE "group_memberships_new" RENAME TO "group_memberships"`);
   await q.query(`CREATE INDEX "ix_group_memberships_group" ON "group_memberships" ("group_id")`);
+}
+
+async function replaceCheck(q: QueryRunner, roles: string): Promise<void> {
+  await q.query(`ALTER TABLE "group_memberships" DROP CONSTRAINT "group_memberships_role_check"`);
+  await q.query(
+    `ALTER TABLE "group_memberships" ADD CONSTRAINT "group_memberships_role_check" CHECK ("role" IN (${roles}))`,
+  );
 }

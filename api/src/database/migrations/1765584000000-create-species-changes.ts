@@ -1,4 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /**
  * The history of every change to a species: who, when, how (edit, import, revert), and both versions
@@ -8,11 +9,12 @@ export class CreateSpeciesChanges1765584000000 implements MigrationInterface {
   name = 'CreateSpeciesChanges1765584000000';
 
   async up(q: QueryRunner): Promise<void> {
+    const t = schemaWords(q);
     await q.query(`CREATE TABLE "species_changes" (
-      "id" varchar PRIMARY KEY NOT NULL,
+      "id" ${t.uuidKey},
       "slug" text NOT NULL,
       "kind" text NOT NULL,
-      "changed_at" datetime NOT NULL,
+      "changed_at" ${t.datetime} NOT NULL,
       "changed_by" text REFERENCES "users" ("id") ON DELETE SET NULL,
       "file_name" text,
       "revert_of" text,

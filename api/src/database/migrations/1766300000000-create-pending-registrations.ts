@@ -1,4 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { schemaWords } from '../../common/database/dialect.js';
 
 /**
  * Sign-ups waiting for their e-mail to be confirmed (register answers the same whether or not an account
@@ -8,15 +9,16 @@ export class CreatePendingRegistrations1766300000000 implements MigrationInterfa
   name = 'CreatePendingRegistrations1766300000000';
 
   async up(q: QueryRunner): Promise<void> {
+    const t = schemaWords(q);
     await q.query(`CREATE TABLE "pending_registrations" (
-      "id" varchar PRIMARY KEY NOT NULL,
+      "id" ${t.uuidKey},
       "email" text NOT NULL,
       "display_name" text NOT NULL,
       "password_hash" text NOT NULL,
       "token_hash" text NOT NULL,
       "return_path" text,
-      "expires_at" datetime NOT NULL,
-      "created_at" datetime NOT NULL
+      "expires_at" ${t.datetime} NOT NULL,
+      "created_at" ${t.datetime} NOT NULL
     )`);
     await q.query(`CREATE UNIQUE INDEX "uq_pending_registrations_token" ON "pending_registrations" ("token_hash")`);
     await q.query(`CREATE INDEX "ix_pending_registrations_email" ON "pending_registrations" ("email")`);
