@@ -30,6 +30,7 @@ import {
 } from '@homeground/shared';
 import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
@@ -60,8 +61,8 @@ export class BatchesService {
   ) {}
 
   /** Organisers: every grower of the season; a grower: themself. */
-  async growers(slug: string, user: AuthenticatedUser): Promise<SeasonGrower[]> {
-    const c = await this.growerOrOrganiser(slug, user);
+  async growers(slug: string, user: AuthenticatedUser, locale: WordLocale = 'en'): Promise<SeasonGrower[]> {
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const all = await this.growerList(slug, user, c);
     return c.role === 'organiser' ? all : all.filter((g) => g.userId === user.id);
   }
@@ -72,14 +73,14 @@ export class BatchesService {
     user: AuthenticatedUser,
     userId: string,
     req: GrowerSetupRequest,
+    locale: WordLocale = 'en',
   ): Promise<SeasonGrower> {
-    const c = await this.growerOrOrganiser(slug, user);
-    if (c.role !== 'organiser' && userId !== user.id)
-      throw new ForbiddenException("Growers set their own methods and capacity, not someone else's.");
+    const say = apiWords(locale);
+    const c = await this.growerOrOrganiser(slug, user, locale);
+    if (c.role !== 'organiser' && userId !== user.id) throw new ForbiddenException(say('refusals.batches.ownMethods'));
     const people = await this.people(slug, user);
     const person = people.get(userId);
-    if (!person || person.role === 'member')
-      throw new NotFoundException('That person is not a grower or organiser of this group.');
+    if (!person || person.role === 'member') throw new NotFoundException(say('refusals.batches.notAGrower'));
     // Capacity may not drop below what the batches already take.
     const used = await this.unitsUsed(c.season.id);
     const problems: FieldProblem[] = [];
@@ -112,8 +113,13 @@ export class BatchesService {
   }
 
   /** Proposes a split of the targets over the growers' stated capacity; writes nothing. */
-  async propose(slug: string, user: AuthenticatedUser, req: SplitProposalRequest): Promise<BatchSplitProposalAnswer> {
-    const c = await this.organiser(slug, user);
+  async propose(
+    slug: string,
+    user: AuthenticatedUser,
+    req: SplitProposalRequest,
+    locale: WordLocale = 'en',
+  ): Promise<BatchSplitProposalAnswer> {
+    const c = await this.organiser(slug, user, locale);
     const growers = (await this.growerList(slug, user, c)).filter(
       (g) => g.methods.length > 0 && (!req.growerIds || req.growerIds.includes(g.userId)),
     );
@@ -134,8 +140,14 @@ export class BatchesService {
   }
 
   /** Replaces the season's split. Batches with log entries must stay (listed by id). */
-  async setSplit(slug: string, user: AuthenticatedUser, req: BatchSplitRequest, today: string): Promise<SeasonBatches> {
-    const c = await this.organiser(slug, user);
+  async setSplit(
+    slug: string,
+    user: AuthenticatedUser,
+    req: BatchSplitRequest,
+    today: string,
+    locale: WordLocale = 'en',
+  ): Promise<SeasonBatches> {
+    const c = await this.organiser(slug, user, locale);
     const existing = await this.batchRows.find({ where: { seasonId: c.season.id } });
     const growers = new Map((await this.growerList(slug, user, c)).map((g) => [g.userId, g]));
     const targets = new Set(c.targets.map((t) => t.slug));
@@ -196,7 +208,7 @@ export class BatchesService {
 
   /** The season's batches with supplies: all for organisers, their own for a grower. */
   async list(slug: string, user: AuthenticatedUser, today: string, locale: WordLocale = 'en'): Promise<SeasonBatches> {
-    const c = await this.growerOrOrganiser(slug, user);
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const growerId = c.role === 'organiser' ? undefined : user.id;
     const batches = await this.batchesOf(slug, user, c, today, growerId, undefined, locale);
     const byGrower = new Map<string, Batch[]>();
@@ -230,7 +242,7 @@ export class BatchesService {
   /** The caller's own batches as iCalendar (a grower's, or an organiser's who also grows). */
   /** The caller's batches as iCalendar, steps and warnings in the reader's language. */
   async myBatchesIcs(slug: string, user: AuthenticatedUser, today: string, locale: WordLocale = 'en'): Promise<string> {
-    const c = await this.growerOrOrganiser(slug, user);
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const mine = await this.batchesOf(slug, user, c, today, user.id, undefined, locale);
     return batchesToIcs(mine, { today, planId: `batches-${c.season.year}`, locale });
   }
@@ -242,11 +254,12 @@ export class BatchesService {
     today: string,
     locale: WordLocale = 'en',
   ): Promise<Batch> {
-    const c = await this.growerOrOrganiser(slug, user);
+    const say = apiWords(locale);
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
-    if (!row) throw new NotFoundException('No such batch in this season.');
+    if (!row) throw new NotFoundException(say('refusals.batches.noBatch'));
     if (c.role !== 'organiser' && row.growerId !== user.id)
-      throw new ForbiddenException('This batch belongs to another grower.');
+      throw new ForbiddenException(say('refusals.batches.anotherGrower'));
     return (await this.batchesOf(slug, user, c, today, undefined, [row], locale))[0];
   }
 
@@ -262,11 +275,13 @@ export class BatchesService {
     id: string,
     req: LogEntryRequest,
     today: string,
+    locale: WordLocale = 'en',
   ): Promise<LogEntryAnswer> {
-    const c = await this.growerOrOrganiser(slug, user);
+    const say = apiWords(locale);
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
-    if (!row) throw new NotFoundException('No such batch in this season.');
-    if (row.growerId !== user.id) throw new ForbiddenException('Only the grower of this batch keeps its log.');
+    if (!row) throw new NotFoundException(say('refusals.batches.noBatch'));
+    if (row.growerId !== user.id) throw new ForbiddenException(say('refusals.batches.ownLog'));
     return this.db.transaction(async (tx) => {
       const sent = req.clientId
         ? await tx.findOne(BatchLogEntryRow, { where: { batchId: id, clientId: req.clientId } })
@@ -311,7 +326,7 @@ export class BatchesService {
     today: string,
     locale: WordLocale = 'en',
   ): Promise<SeasonProgress> {
-    const c = await this.organiser(slug, user);
+    const c = await this.organiser(slug, user, locale);
     const batches = await this.batchesOf(slug, user, c, today);
     return seasonProgress(
       c,
@@ -392,15 +407,15 @@ export class BatchesService {
   }
 
   /** The season and the caller's role, for organisers only. */
-  async organiser(slug: string, user: AuthenticatedUser): Promise<SeasonContext> {
-    const c = await this.seasons.context(slug, user);
-    if (c.role !== 'organiser') throw new ForbiddenException('Only an organiser of this group can do this.');
+  async organiser(slug: string, user: AuthenticatedUser, locale: WordLocale = 'en'): Promise<SeasonContext> {
+    const c = await this.seasons.context(slug, user, locale);
+    if (c.role !== 'organiser') throw new ForbiddenException(apiWords(locale)('refusals.batches.organiserOnly'));
     return c;
   }
 
-  private async growerOrOrganiser(slug: string, user: AuthenticatedUser): Promise<SeasonContext> {
-    const c = await this.seasons.context(slug, user);
-    if (c.role === 'member') throw new ForbiddenException('Batches are for the growers and organisers of this group.');
+  private async growerOrOrganiser(slug: string, user: AuthenticatedUser, locale: WordLocale): Promise<SeasonContext> {
+    const c = await this.seasons.context(slug, user, locale);
+    if (c.role === 'member') throw new ForbiddenException(apiWords(locale)('refusals.batches.growersOnly'));
     return c;
   }
 

@@ -15,8 +15,11 @@ import { MixContextService } from '../mix-context/mix-context.service.js';
 export class CalendarService {
   constructor(private readonly ctx: MixContextService) {}
 
-  build(req: CalendarRequest): SowingCalendar {
-    this.ctx.assertKnown(req.plans.map((p, i) => ({ field: `plans.${i}.slug`, slug: p.slug })));
+  build(req: CalendarRequest, locale: WordLocale = 'en'): SowingCalendar {
+    this.ctx.assertKnown(
+      req.plans.map((p, i) => ({ field: `plans.${i}.slug`, slug: p.slug })),
+      locale,
+    );
     const today = this.today(req);
     return buildSowingCalendar({
       lastFrost: req.lastFrost,

@@ -37,6 +37,52 @@ export const en = {
       MP: 'The Northern Mariana Islands',
     },
   },
+  /** Refusals of the areas people meet first (403/404/409): one whole sentence each. */
+  refusals: {
+    savedMixes: {
+      tooMany: 'You already keep {{max}} saved mixes: delete one you no longer need, then save this one.',
+      noLink: 'No saved mix with that link: it may have been deleted.',
+      noId: 'No saved mix with that id.',
+      notYours: 'Only the person who saved a mix can delete it.',
+    },
+    catalogue: {
+      ecoregionField: 'is not in the catalogue',
+      ecoregion: 'region.ecoregionCode is not in the catalogue',
+      slugField: '"{{slug}}" is not in the catalogue',
+      slugs: 'Not in the catalogue: {{slugs}}',
+    },
+    groups: {
+      noSlug: 'No group called "{{slug}}".',
+      noId: 'No such group.',
+      membersOnly: 'Only members of this group can see who is in it.',
+      organiserAdds: 'Only an organiser of this group can add people to it.',
+      noAccount: 'No account uses {{email}}: ask them to register first.',
+      organiserRemoves: 'Only an organiser of this group can remove people from it.',
+      notInGroup: 'That person is not in this group.',
+      lastOrganiser: "This is the group's only organiser: make someone else an organiser first.",
+    },
+    seasons: {
+      noEcoregion: 'This group has no ecoregion yet: set its place first.',
+      seasonMembersOnly: 'Only people in this group can see its season.',
+      planMembersOnly: 'Only people in this group can see its season plan.',
+      organiserChanges: 'Only an organiser of this group can change its season plan.',
+      noPlan: '{{group}} has no season plan yet: an organiser sets its dates first.',
+    },
+    batches: {
+      ownMethods: "Growers set their own methods and capacity, not someone else's.",
+      notAGrower: 'That person is not a grower or organiser of this group.',
+      noBatch: 'No such batch in this season.',
+      anotherGrower: 'This batch belongs to another grower.',
+      ownLog: 'Only the grower of this batch keeps its log.',
+      organiserOnly: 'Only an organiser of this group can do this.',
+      growersOnly: 'Batches are for the growers and organisers of this group.',
+    },
+    invitations: {
+      organiserInvites: 'Only an organiser of this group can invite people to it.',
+      alreadyIn: '{{email}} is already in {{group}}: change their role in the member list instead.',
+      organiserSees: 'Only an organiser of this group can see its invitations.',
+    },
+  },
   auth: {
     wrongPassword: 'E-mail or password is wrong.',
     switchedOff: 'This account is switched off: ask a Homeground admin.',

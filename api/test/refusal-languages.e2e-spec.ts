@@ -1,0 +1,96 @@
+import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import { createTestApp, type TestApp } from './support/test-app.js';
+
+/**
+ * Refusals (403, 404, 409 and the catalogue's 400) in the reader's language, chosen by
+ * Accept-Language (RFC 9110 §12.5.4): the same status for `es` and `en`, one whole Spanish sentence
+ * for `es`, and for `en` (or a language Homeground does not speak) the English sentence exactly as
+ * it was before the catalogue, since the web shows some of them as they come. Demo data only.
+ */
+const GROUP = '/api/groups/larkfield-commons-growers';
+const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
+/** A well-formed id no saved mix has (RFC 9562 version-4 layout). */
+const UNKNOWN_ID = '4f1c2a3b-5d6e-4f70-8a9b-0c1d2e3f4a5b';
+
+async function signIn(t: TestApp, email: string, password: string): Promise<string> {
+  return (await t.http.post('/api/auth/login').send({ email, password }).expect(200)).body.accessToken;
+}
+
+describe('refusals answer in the reader language (e2e, demo data)', () => {
+  let t: TestApp;
+  const tokens: Record<string, string> = {};
+  beforeAll(async () => {
+    t = await createTestApp({ DEMO_DATA: 'true', LOGIN_THROTTLE_LIMIT: '100' });
+    tokens.grower = await signIn(t, 'juniper.okafor@example.org', 'larkfield-juniper');
+    tokens.member = await signIn(t, 'priya.vantongeren@example.org', 'larkfield-priya');
+    tokens.outsider = await signIn(t, 'sol.marchetti@example.org', 'larkfield-sol');
+  });
+  afterAll(() => t.close());
+
+  it('a saved-mix link that leads nowhere: 404 in Spanish for es, the same English sentence otherwise', async () => {
+    const es = await t.http.get(`/api/mixes/${UNKNOWN_ID}`).set('Accept-Language', 'es-MX,es;q=0.9').expect(404);
+    expect(es.body.message).toBe('No hay ninguna mezcla guardada con ese enlace: quizá se borró.');
+    for (const language of ['en', 'de']) {
+      const other = await t.http.get(`/api/mixes/${UNKNOWN_ID}`).set('Accept-Language', language).expect(404);
+      expect(other.body.message).toBe('No saved mix with that link: it may have been deleted.');
+    }
+  });
+
+  it('an unknown group: 404 naming the slug in both languages', async () => {
+    const es = await t.http.get('/api/groups/no-such-group').set('Accept-Language', 'es').expect(404);
+    expect(es.body.message).toBe('No hay ningún grupo llamado "no-such-group".');
+    const en = await t.http.get('/api/groups/no-such-group').expect(404);
+    expect(en.body.message).toBe('No group called "no-such-group".');
+  });
+
+  it('the member list for someone outside the group: 403 in Spanish', async () => {
+    const es = await t.http
+      .get(`${GROUP}/members`)
+      .set(bearer(tokens.outsider))
+      .set('Accept-Language', 'es')
+      .expect(403);
+    expect(es.body.message).toBe('Solo quienes están en este grupo pueden ver quién lo forma.');
+    const en = await t.http.get(`${GROUP}/members`).set(bearer(tokens.outsider)).expect(403);
+    expect(en.body.message).toBe('Only members of this group can see who is in it.');
+  });
+
+  it('a season plan for someone outside the group, and batches for a member who does not grow: 403 in Spanish', async () => {
+    const season = await t.http
+      .get(`${GROUP}/season`)
+      .set(bearer(tokens.outsider))
+      .set('Accept-Language', 'es')
+      .expect(403);
+    expect(season.body.message).toBe('Solo quienes están en este grupo pueden ver su plan de temporada.');
+    const batches = await t.http
+      .get(`${GROUP}/season/batches`)
+      .set(bearer(tokens.member))
+      .set('Accept-Language', 'es')
+      .expect(403);
+    expect(batches.body.message).toBe('Los lotes son para quienes cultivan y organizan en este grupo.');
+    const english = await t.http.get(`${GROUP}/season/batches`).set(bearer(tokens.member)).expect(403);
+    expect(english.body.message).toBe('Batches are for the growers and organisers of this group.');
+  });
+
+  it("a group's invitations for a grower: 403 in Spanish", async () => {
+    const es = await t.http
+      .get(`${GROUP}/invitations`)
+      .set(bearer(tokens.grower))
+      .set('Accept-Language', 'es')
+      .expect(403);
+    expect(es.body.message).toBe('Solo quien organiza este grupo puede ver sus invitaciones.');
+  });
+
+  it('a sowing calendar with a species not in the catalogue: 400 naming the field, in Spanish', async () => {
+    const body = {
+      lastFrost: '2027-05-10',
+      today: '2027-01-25',
+      plans: [{ slug: 'no-such-plant', method: 'winter-sowing' }],
+    };
+    const es = await t.http.post('/api/calendar').set('Accept-Language', 'es').send(body).expect(400);
+    expect(es.body.fields).toEqual([{ field: 'plans.0.slug', message: '"no-such-plant" no está en el catálogo' }]);
+    expect(es.body.message).toBe('No están en el catálogo: no-such-plant');
+    const en = await t.http.post('/api/calendar').send(body).expect(400);
+    expect(en.body.fields).toEqual([{ field: 'plans.0.slug', message: '"no-such-plant" is not in the catalogue' }]);
+    expect(en.body.message).toBe('Not in the catalogue: no-such-plant');
+  });
+});
