@@ -22,6 +22,7 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
   beforeAll(async () => {
     t = await createTestApp({ DEMO_DATA: 'true', LOGIN_THROTTLE_LIMIT: '100' });
     tokens.grower = await signIn(t, 'juniper.okafor@example.org', 'larkfield-juniper');
+    tokens.admin = await signIn(t, 'wes.hollenbeck@example.org', 'larkfield-wes');
     tokens.member = await signIn(t, 'priya.vantongeren@example.org', 'larkfield-priya');
     tokens.outsider = await signIn(t, 'sol.marchetti@example.org', 'larkfield-sol');
   });
@@ -78,6 +79,32 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
       .set('Accept-Language', 'es')
       .expect(403);
     expect(es.body.message).toBe('Solo quien organiza este grupo puede ver sus invitaciones.');
+  });
+
+  it('a fact card for a species the catalogue does not hold: 404 in Spanish, the same English otherwise', async () => {
+    const es = await t.http.get('/api/species/no-such-plant').set('Accept-Language', 'es').expect(404);
+    expect(es.body.message).toBe('No hay ninguna especie "no-such-plant" en el catálogo.');
+    const en = await t.http.get('/api/species/no-such-plant').expect(404);
+    expect(en.body.message).toBe('No species "no-such-plant" in the catalogue.');
+  });
+
+  it('the outbox for a member who organises nothing, and an admin switching off their own account: Spanish', async () => {
+    const outbox = await t.http.get('/api/outbox').set(bearer(tokens.member)).set('Accept-Language', 'es').expect(403);
+    expect(outbox.body.message).toBe('Solo quienes organizan y administran pueden leer el buzón de salida.');
+    const me = (await t.http.get('/api/me').set(bearer(tokens.admin)).expect(200)).body as { id: string };
+    const own = await t.http
+      .patch(`/api/users/${me.id}/access`)
+      .set(bearer(tokens.admin))
+      .set('Accept-Language', 'es')
+      .send({ disabled: true })
+      .expect(409);
+    expect(own.body.message).toBe('No puedes desactivar tu propia cuenta.');
+    const english = await t.http
+      .patch(`/api/users/${me.id}/access`)
+      .set(bearer(tokens.admin))
+      .send({ disabled: true })
+      .expect(409);
+    expect(english.body.message).toBe('You cannot switch off your own account.');
   });
 
   it('a sowing calendar with a species not in the catalogue: 400 naming the field, in Spanish', async () => {

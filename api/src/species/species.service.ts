@@ -9,7 +9,9 @@ import {
   SPECIES_CSV_COLUMNS,
   type Species,
   speciesToCsvRow,
+  type WordLocale,
 } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import Papa from 'papaparse';
 import { DataSource } from 'typeorm';
 import { writeSpecies } from '../catalogue/catalogue-writer.js';
@@ -29,16 +31,16 @@ export class SpeciesService {
     private readonly sources: SpeciesSourcesService,
   ) {}
 
-  get(slug: string): Species {
+  get(slug: string, locale: WordLocale = 'en'): Species {
     const s = this.store.get(slug);
-    if (!s) throw new NotFoundException(`No species "${slug}" in the catalogue.`);
+    if (!s) throw new NotFoundException(apiWords(locale)('refusals.species.noSpecies', { slug }));
     return s;
   }
 
-  async create(record: Species, userId: string): Promise<Species> {
+  async create(record: Species, userId: string, locale: WordLocale = 'en'): Promise<Species> {
     this.sources.assertKnown(record);
     if (this.store.get(record.slug))
-      throw new ConflictException(`Species "${record.slug}" already exists: edit it instead.`);
+      throw new ConflictException(apiWords(locale)('refusals.species.existsEdit', { slug: record.slug }));
     await this.db.transaction(async (tx) => {
       await this.assertUnique(tx, record, null);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId });
@@ -54,11 +56,12 @@ export class SpeciesService {
     record: Species,
     userId: string,
     how: { kind: 'edit' | 'revert'; revertOf?: string } = { kind: 'edit' },
+    locale: WordLocale = 'en',
   ): Promise<Species> {
-    const before = this.get(slug);
+    const before = this.get(slug, locale);
     this.sources.assertKnown(record);
     if (record.slug !== slug && this.store.get(record.slug))
-      throw new ConflictException(`Species "${record.slug}" already exists.`);
+      throw new ConflictException(apiWords(locale)('refusals.species.exists', { slug: record.slug }));
     await this.db.transaction(async (tx) => {
       await this.assertUnique(tx, record, slug);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId, previousSlug: slug });

@@ -82,6 +82,27 @@ export const en = {
       alreadyIn: '{{email}} is already in {{group}}: change their role in the member list instead.',
       organiserSees: 'Only an organiser of this group can see its invitations.',
     },
+    species: {
+      noSpecies: 'No species "{{slug}}" in the catalogue.',
+      noPhoto: 'No photo for "{{slug}}" yet.',
+      existsEdit: 'Species "{{slug}}" already exists: edit it instead.',
+      exists: 'Species "{{slug}}" already exists.',
+      noChange: 'No change {{changeId}} in the history of "{{slug}}".',
+      firstVersion: 'This change added the species: there is no earlier version to go back to.',
+    },
+    ecoregions: {
+      noRegion: 'No EPA Level III ecoregion "{{code}}".',
+    },
+    people: {
+      noPerson: 'No such person.',
+      ownRole: 'You cannot change your own role: ask another admin to do it.',
+      ownAccess: 'You cannot switch off your own account.',
+    },
+    outbox: {
+      readersOnly: 'Only organisers and admins can read the outbox.',
+      noMessage: 'No message with that id in the outbox.',
+      messageReaders: 'Only organisers of its group and admins can read this message.',
+    },
   },
   auth: {
     wrongPassword: 'E-mail or password is wrong.',

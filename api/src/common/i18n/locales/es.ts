@@ -84,6 +84,27 @@ export const es = {
       alreadyIn: '{{email}} ya está en {{group}}: cambia su papel en la lista de miembros.',
       organiserSees: 'Solo quien organiza este grupo puede ver sus invitaciones.',
     },
+    species: {
+      noSpecies: 'No hay ninguna especie "{{slug}}" en el catálogo.',
+      noPhoto: '"{{slug}}" aún no tiene foto.',
+      existsEdit: 'La especie "{{slug}}" ya existe: edítala en lugar de crearla.',
+      exists: 'La especie "{{slug}}" ya existe.',
+      noChange: 'No hay ningún cambio {{changeId}} en el historial de "{{slug}}".',
+      firstVersion: 'Este cambio añadió la especie: no hay una versión anterior a la que volver.',
+    },
+    ecoregions: {
+      noRegion: 'No existe la ecorregión de nivel III de la EPA "{{code}}".',
+    },
+    people: {
+      noPerson: 'No existe esa persona.',
+      ownRole: 'No puedes cambiar tu propio papel: pídeselo a otra persona administradora.',
+      ownAccess: 'No puedes desactivar tu propia cuenta.',
+    },
+    outbox: {
+      readersOnly: 'Solo quienes organizan y administran pueden leer el buzón de salida.',
+      noMessage: 'No hay ningún mensaje con ese id en el buzón de salida.',
+      messageReaders: 'Solo quienes organizan su grupo y quienes administran pueden leer este mensaje.',
+    },
   },
   auth: {
     wrongPassword: 'El correo o la contraseña no son correctos.',
