@@ -29,11 +29,17 @@ export class CalendarService {
     });
   }
 
-  toCsv(calendar: SowingCalendar): string {
-    return calendarToCsv(calendar, (slug) => {
-      const s = this.ctx.get(slug);
-      return s && { commonName: s.commonNames[0], scientificName: s.scientificName };
-    });
+  /** One row per event and warning; header, step titles, details and warnings in the reader's language. */
+  toCsv(calendar: SowingCalendar, locale: WordLocale = 'en'): string {
+    const words = calendarIn(calendar, locale, (slug) => this.ctx.get(slug));
+    return calendarToCsv(
+      words,
+      (slug) => {
+        const s = this.ctx.get(slug);
+        return s && { commonName: s.commonNames[0], scientificName: s.scientificName };
+      },
+      locale,
+    );
   }
 
   /**

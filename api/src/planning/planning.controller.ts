@@ -64,7 +64,7 @@ export class PlanningController {
   @Header('Content-Disposition', 'attachment; filename="homeground-sowing-calendar.csv"')
   @AnswersInLanguage()
   csv(@ZodBody(calendarRequestSchema) body: CalendarRequest, @RequestLocale() locale: WordLocale): string {
-    return this.calendar.toCsv(this.calendar.build(body, locale));
+    return this.calendar.toCsv(this.calendar.build(body, locale), locale);
   }
 
   @Post('calendar.ics')
