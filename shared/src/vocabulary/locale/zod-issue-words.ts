@@ -51,7 +51,9 @@ const spanish: IssueWords = (issue) => {
     case 'too_small': {
       const n = issue.minimum;
       if (issue.origin === 'string')
-        return Number(n) === 1 ? 'no puede estar vacío' : `debe tener al menos ${counted(n, 'carácter', 'caracteres')}`;
+        return Number(n) === 1
+          ? 'no puede quedar vacío'
+          : `debe tener al menos ${counted(n, 'carácter', 'caracteres')}`;
       if (isSized(issue.origin)) return `debe tener al menos ${counted(n, 'elemento', 'elementos')}`;
       if (issue.origin === 'date') return `debe ser el ${String(n)} o después`;
       return issue.inclusive === false ? `debe ser mayor que ${count(n)}` : `debe ser ${count(n)} o más`;
@@ -92,7 +94,7 @@ const ES_SCHEMA_SENTENCES: readonly [RegExp, string][] = [
   [/^must be at least 1 characters?$/, 'debe tener al menos 1 carácter'],
   [/^must be at least (\d+) characters$/, 'debe tener al menos $1 caracteres'],
   [/^must be at most (\d+) characters$/, 'debe tener como máximo $1 caracteres'],
-  [/^must not be empty$/, 'no puede estar vacío'],
+  [/^must not be empty$/, 'no puede quedar vacío'],
   [/^must be a whole number$/, 'debe ser un número entero'],
   [/^must be at least (-?[\d.]+)$/, 'debe ser al menos $1'],
   [/^must be at most (-?[\d.]+)$/, 'debe ser como máximo $1'],
