@@ -23,6 +23,7 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
     t = await createTestApp({ DEMO_DATA: 'true', LOGIN_THROTTLE_LIMIT: '100' });
     tokens.grower = await signIn(t, 'juniper.okafor@example.org', 'larkfield-juniper');
     tokens.admin = await signIn(t, 'wes.hollenbeck@example.org', 'larkfield-wes');
+    tokens.organiser = await signIn(t, 'mara.ellsworth@example.org', 'larkfield-mara');
     tokens.member = await signIn(t, 'priya.vantongeren@example.org', 'larkfield-priya');
     tokens.outsider = await signIn(t, 'sol.marchetti@example.org', 'larkfield-sol');
   });
@@ -105,6 +106,38 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
       .send({ disabled: true })
       .expect(409);
     expect(english.body.message).toBe('You cannot switch off your own account.');
+  });
+
+  // Reasons of shared checks run after parsing (a past plant share, a frost night out of range):
+  // Spanish through the shared sentence table, the date kept as ISO 8601; nothing is written.
+  it("an organiser's past plant share and out-of-range frost night: 400 naming the field, in Spanish", async () => {
+    const today = new Date().toISOString().slice(0, 10);
+    const season = await t.http
+      .put(`${GROUP}/season`)
+      .set(bearer(tokens.organiser))
+      .set('Accept-Language', 'es')
+      .send({ year: 2020, lastFrost: '2020-05-10', plantShareDate: '2020-06-13' })
+      .expect(400);
+    expect(season.body.fields).toEqual([
+      { field: 'plantShareDate', message: `no puede estar en el pasado (hoy es ${today})` },
+    ]);
+    expect(season.body.message).toBe(`Revisa esto: plantShareDate no puede estar en el pasado (hoy es ${today})`);
+    const english = await t.http
+      .put(`${GROUP}/season`)
+      .set(bearer(tokens.organiser))
+      .send({ year: 2020, lastFrost: '2020-05-10', plantShareDate: '2020-06-13' })
+      .expect(400);
+    expect(english.body.fields).toEqual([
+      { field: 'plantShareDate', message: `must not be in the past (today is ${today})` },
+    ]);
+    const frost = await t.http
+      .post(`${GROUP}/season/frost-warning`)
+      .set(bearer(tokens.organiser))
+      .set('Accept-Language', 'es')
+      .send({ night: '2020-01-01' })
+      .expect(400);
+    expect(frost.body.fields[0].field).toBe('night');
+    expect(frost.body.fields[0].message).toMatch(/^debe estar entre el \d{4}-\d{2}-\d{2} y el \d{4}-\d{2}-\d{2}$/);
   });
 
   it('a sowing calendar with a species not in the catalogue: 400 naming the field, in Spanish', async () => {

@@ -14,7 +14,6 @@ import {
   sowMoreNudge,
   supplyList,
   unitsFor,
-  UNIT_WORDS,
   UNIT_OF,
   type Batch,
   type BatchSplitProposalAnswer,
@@ -31,7 +30,7 @@ import {
 import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { apiWords } from '../common/i18n/api-i18n.js';
-import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
+import { badRequest, badRequestIn, type FieldProblem, pleaseCheck } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SeasonsService, type SeasonContext } from '../seasons/seasons.service.js';
@@ -87,19 +86,19 @@ export class BatchesService {
     req.methods.forEach((m, i) => {
       const taken = used.get(`${userId}|${m.method}`) ?? 0;
       if (m.capacity < taken) {
-        const unit = UNIT_WORDS[UNIT_OF[m.method]].many;
+        const unit = say(`refusals.batches.units.${UNIT_OF[m.method]}`);
         problems.push({
           field: `methods.${i}.capacity`,
-          message: `must be at least ${taken}: the batches already take ${taken} ${unit}`,
+          message: say('refusals.batches.capacityBelowUsed', { taken, unit }),
         });
       }
     });
     for (const [key, taken] of used) {
       const [id, method] = key.split('|');
       if (id === userId && taken > 0 && !req.methods.some((m) => m.method === method))
-        problems.push({ field: 'methods', message: `must keep ${method}: batches use it` });
+        problems.push({ field: 'methods', message: say('refusals.batches.keepMethod', { method }) });
     }
-    if (problems.length) throw badRequest(problems);
+    if (problems.length) throw badRequest(problems, pleaseCheck(problems, locale));
     await this.db.transaction(async (tx) => {
       const existing = await tx.findOne(SeasonGrowerRow, { where: { seasonId: c.season.id, userId } });
       await tx.save(
@@ -147,6 +146,7 @@ export class BatchesService {
     today: string,
     locale: WordLocale = 'en',
   ): Promise<SeasonBatches> {
+    const say = apiWords(locale);
     const c = await this.organiser(slug, user, locale);
     const existing = await this.batchRows.find({ where: { seasonId: c.season.id } });
     const growers = new Map((await this.growerList(slug, user, c)).map((g) => [g.userId, g]));
@@ -156,23 +156,31 @@ export class BatchesService {
     req.batches.forEach((b, i) => {
       const at = `batches.${i}`;
       if (b.id && !existing.some((e) => e.id === b.id))
-        problems.push({ field: `${at}.id`, message: 'is not a batch of this season' });
+        problems.push({ field: `${at}.id`, message: say('refusals.batches.notThisSeason') });
       if (!targets.has(b.slug))
-        problems.push({ field: `${at}.slug`, message: `"${b.slug}" is not on the season's targets` });
+        problems.push({ field: `${at}.slug`, message: say('refusals.batches.notOnTargets', { slug: b.slug }) });
       const grower = growers.get(b.growerId);
       const stated = grower?.methods.find((m) => m.method === b.method);
-      if (!grower) problems.push({ field: `${at}.growerId`, message: 'is not a grower of this group' });
+      if (!grower) problems.push({ field: `${at}.growerId`, message: say('refusals.batches.notAGrowerField') });
       else if (!stated)
-        problems.push({ field: `${at}.method`, message: `${grower.displayName} does not use this method` });
+        problems.push({
+          field: `${at}.method`,
+          message: say('refusals.batches.methodNotUsed', { name: grower.displayName }),
+        });
       else {
         const key = `${b.growerId}|${b.method}`;
         const total = (used.get(key) ?? 0) + unitsFor(b.method, b.plants);
         used.set(key, total);
         if (total > stated.capacity) {
-          const unit = UNIT_WORDS[UNIT_OF[b.method]].many;
+          const unit = say(`refusals.batches.units.${UNIT_OF[b.method]}`);
           problems.push({
             field: `${at}.plants`,
-            message: `takes ${grower.displayName} to ${total} ${unit}, over the ${stated.capacity} they can tend`,
+            message: say('refusals.batches.overCapacity', {
+              name: grower.displayName,
+              total,
+              unit,
+              capacity: stated.capacity,
+            }),
           });
         }
       }
@@ -184,10 +192,10 @@ export class BatchesService {
       if (logged > 0)
         problems.push({
           field: 'batches',
-          message: 'must keep every batch that has log entries (list it with its id)',
+          message: say('refusals.batches.keepLogged'),
         });
     }
-    if (problems.length) throw badRequest(problems);
+    if (problems.length) throw badRequest(problems, pleaseCheck(problems, locale));
     await this.db.transaction(async (tx) => {
       if (dropped.length) await tx.delete(BatchRow, { id: In(dropped) });
       for (const [position, b] of req.batches.entries()) {
@@ -289,7 +297,7 @@ export class BatchesService {
       if (sent) return { batchId: id, entry: toLogEntry(sent), totals: await this.totalsOf(tx, id) };
       const before = await this.totalsOf(tx, id);
       const problems = logEntryProblems(before, req, today);
-      if (problems.length) throw badRequest(problems);
+      if (problems.length) throw badRequestIn(locale, problems);
       const saved = await tx.save(
         BatchLogEntryRow,
         tx.create(BatchLogEntryRow, {

@@ -24,7 +24,7 @@ import {
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { apiWords } from '../common/i18n/api-i18n.js';
-import { badRequest } from '../common/validation/bad-request.js';
+import { badRequestIn } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SeasonTargetRow } from './season-target.entity.js';
@@ -84,7 +84,7 @@ export class SeasonsService {
   ): Promise<Season> {
     const group = await this.managed(slug, user, locale);
     const past = pastSeasonDateFields(req, today);
-    if (past.length) throw badRequest(past);
+    if (past.length) throw badRequestIn(locale, past);
     const saved = await this.db.transaction(async (tx) => {
       const existing = await tx.findOne(SeasonRow, { where: { groupId: group.id, year: req.year } });
       const row =

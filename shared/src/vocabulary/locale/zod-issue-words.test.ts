@@ -99,5 +99,12 @@ describe('zod issue words', () => {
     expect(schemaSentenceIn('es', '"monarda-fistulosa" is listed twice')).toBe('"monarda-fistulosa" aparece dos veces');
     expect(schemaSentenceIn('es', 'must list at most 60 species')).toBe('debe tener como máximo 60 especies');
     expect(schemaSentenceIn('es', 'must be 1–12')).toBe('debe estar entre 1 y 12');
+    // The shared checks the API runs after parsing (season-dates.ts, batch-log.ts) use the same table.
+    expect(schemaSentenceIn('es', 'must not be in the past (today is 2027-01-25)')).toBe(
+      'no puede estar en el pasado (hoy es 2027-01-25)',
+    );
+    expect(schemaSentenceIn('es', 'is more than the 14 seedlings alive in this batch')).toBe(
+      'es más que las 14 plántulas vivas de este lote',
+    );
   });
 });

@@ -189,6 +189,19 @@ const ES_SCHEMA_SENTENCES: readonly [RegExp, string][] = [
   [/^must name at least one species$/, 'debe indicar al menos una especie'],
   [/^only a loss has a reason$/, 'solo una pérdida lleva motivo'],
   [/^say why the plants were lost$/, 'di por qué se perdieron las plantas'],
+  // Reasons of the shared checks the API runs after parsing (season dates, batch log, frost night).
+  [/^must not be in the past \(today is (.+)\)$/, 'no puede estar en el pasado (hoy es $1)'],
+  [/^must not be after today \((.+)\)$/, 'no puede ser posterior a hoy ($1)'],
+  [/^must be from (\S+) to (\S+)$/, 'debe estar entre el $1 y el $2'],
+  [
+    /^would make more seedlings \((\d+)\) than seeds sown \((\d+)\)$/,
+    'daría más plántulas ($1) que semillas sembradas ($2)',
+  ],
+  [/^is more than the (\d+) seedlings alive in this batch$/, 'es más que las $1 plántulas vivas de este lote'],
+  [
+    /^would make more potted up \((\d+)\) than seedlings alive \((\d+)\)$/,
+    'daría más plantas pasadas a maceta ($1) que plántulas vivas ($2)',
+  ],
 ];
 
 /**

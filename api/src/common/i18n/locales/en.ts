@@ -76,6 +76,16 @@ export const en = {
       ownLog: 'Only the grower of this batch keeps its log.',
       organiserOnly: 'Only an organiser of this group can do this.',
       growersOnly: 'Batches are for the growers and organisers of this group.',
+      capacityBelowUsed: 'must be at least {{taken}}: the batches already take {{taken}} {{unit}}',
+      keepMethod: 'must keep {{method}}: batches use it',
+      notThisSeason: 'is not a batch of this season',
+      notOnTargets: '"{{slug}}" is not on the season\'s targets',
+      notAGrowerField: 'is not a grower of this group',
+      methodNotUsed: '{{name}} does not use this method',
+      overCapacity: 'takes {{name}} to {{total}} {{unit}}, over the {{capacity}} they can tend',
+      keepLogged: 'must keep every batch that has log entries (list it with its id)',
+      /** The unit each method counts in, as the reasons above say it (always more than one). */
+      units: { pot: 'pots', container: 'covered containers', block: 'soil blocks' },
     },
     invitations: {
       organiserInvites: 'Only an organiser of this group can invite people to it.',
