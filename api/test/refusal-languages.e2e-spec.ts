@@ -140,6 +140,14 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
     expect(frost.body.fields[0].message).toMatch(/^debe estar entre el \d{4}-\d{2}-\d{2} y el \d{4}-\d{2}-\d{2}$/);
   });
 
+  it("a curator's page for a grower: 403 with the role's Spanish title, the role code in English", async () => {
+    const path = '/api/species/monarda-fistulosa/history';
+    const es = await t.http.get(path).set(bearer(tokens.grower)).set('Accept-Language', 'es').expect(403);
+    expect(es.body.message).toBe('Esto necesita el rol Curador/a.');
+    const en = await t.http.get(path).set(bearer(tokens.grower)).expect(403);
+    expect(en.body.message).toBe('This needs the curator role.');
+  });
+
   it('a sowing calendar with a species not in the catalogue: 400 naming the field, in Spanish', async () => {
     const body = {
       lastFrost: '2027-05-10',

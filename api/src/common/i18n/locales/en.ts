@@ -108,6 +108,11 @@ export const en = {
       ownRole: 'You cannot change your own role: ask another admin to do it.',
       ownAccess: 'You cannot switch off your own account.',
     },
+    roles: {
+      /** `roles`: the role codes in English, the role titles elsewhere, joined by `or`. */
+      needs: 'This needs the {{roles}} role.',
+      or: ' or ',
+    },
     outbox: {
       readersOnly: 'Only organisers and admins can read the outbox.',
       noMessage: 'No message with that id in the outbox.',

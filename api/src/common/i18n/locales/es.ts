@@ -109,6 +109,10 @@ export const es = {
       ownRole: 'No puedes cambiar tu propio papel: pídeselo a otra persona administradora.',
       ownAccess: 'No puedes desactivar tu propia cuenta.',
     },
+    roles: {
+      needs: 'Esto necesita el rol {{roles}}.',
+      or: ' o ',
+    },
     outbox: {
       readersOnly: 'Solo quienes organizan y administran pueden leer el buzón de salida.',
       noMessage: 'No hay ningún mensaje con ese id en el buzón de salida.',
