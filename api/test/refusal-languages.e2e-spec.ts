@@ -24,6 +24,7 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
     tokens.grower = await signIn(t, 'juniper.okafor@example.org', 'larkfield-juniper');
     tokens.admin = await signIn(t, 'wes.hollenbeck@example.org', 'larkfield-wes');
     tokens.organiser = await signIn(t, 'mara.ellsworth@example.org', 'larkfield-mara');
+    tokens.curator = await signIn(t, 'ines.calder@example.org', 'larkfield-ines');
     tokens.member = await signIn(t, 'priya.vantongeren@example.org', 'larkfield-priya');
     tokens.outsider = await signIn(t, 'sol.marchetti@example.org', 'larkfield-sol');
   });
@@ -146,6 +147,30 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
     expect(es.body.message).toBe('Esto necesita el rol Curador/a.');
     const en = await t.http.get(path).set(bearer(tokens.grower)).expect(403);
     expect(en.body.message).toBe('This needs the curator role.');
+  });
+
+  it('a curator adding a species the catalogue holds, and citing a source it does not: Spanish, nothing written', async () => {
+    const detail = (await t.http.get('/api/species/monarda-fistulosa').expect(200)).body as Record<string, unknown>;
+    const { hasPhoto: _hasPhoto, photoCredit: _photoCredit, ...record } = detail;
+    const again = await t.http
+      .post('/api/species')
+      .set(bearer(tokens.curator))
+      .set('Accept-Language', 'es')
+      .send(record)
+      .expect(409);
+    expect(again.body.message).toBe('La especie "monarda-fistulosa" ya existe: edítala en lugar de crearla.');
+    const sources = { ...(record.sources as Record<string, string>), heightCm: 'no-such-source' };
+    const unknown = await t.http
+      .put('/api/species/monarda-fistulosa')
+      .set(bearer(tokens.curator))
+      .set('Accept-Language', 'es')
+      .send({ ...record, sources })
+      .expect(400);
+    expect(unknown.body.fields).toEqual([
+      { field: 'sources.heightCm', message: '"no-such-source" no está en el registro de fuentes' },
+    ]);
+    const unchanged = (await t.http.get('/api/species/monarda-fistulosa').expect(200)).body as Record<string, unknown>;
+    expect(unchanged).toEqual(detail);
   });
 
   it('a sowing calendar with a species not in the catalogue: 400 naming the field, in Spanish', async () => {

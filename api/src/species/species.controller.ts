@@ -130,10 +130,15 @@ export class SpeciesController {
     @ZodFile('file', MAX_CSV_BYTES, "CSV with the export's columns") file: UploadedBlob,
     @ZodQuery(csvImportQuerySchema) query: CsvImportQuery,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<CsvImportResult> {
-    return this.species.importCsv(utf8Text(file.buffer, 'file'), user.id, displayFileName(file.originalname), {
-      dryRun: query.dryRun ?? false,
-    });
+    return this.species.importCsv(
+      utf8Text(file.buffer, 'file'),
+      user.id,
+      displayFileName(file.originalname),
+      { dryRun: query.dryRun ?? false },
+      locale,
+    );
   }
 
   /** Every change to the record, newest first: who, when, how, and each field before and after. */

@@ -38,11 +38,11 @@ export class SpeciesService {
   }
 
   async create(record: Species, userId: string, locale: WordLocale = 'en'): Promise<Species> {
-    this.sources.assertKnown(record);
+    this.sources.assertKnown(record, locale);
     if (this.store.get(record.slug))
       throw new ConflictException(apiWords(locale)('refusals.species.existsEdit', { slug: record.slug }));
     await this.db.transaction(async (tx) => {
-      await this.assertUnique(tx, record, null);
+      await this.assertUnique(tx, record, null, locale);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId });
       await recordChange(tx, { kind: 'create', before: null, after: record, userId });
     });
@@ -59,11 +59,11 @@ export class SpeciesService {
     locale: WordLocale = 'en',
   ): Promise<Species> {
     const before = this.get(slug, locale);
-    this.sources.assertKnown(record);
+    this.sources.assertKnown(record, locale);
     if (record.slug !== slug && this.store.get(record.slug))
       throw new ConflictException(apiWords(locale)('refusals.species.exists', { slug: record.slug }));
     await this.db.transaction(async (tx) => {
-      await this.assertUnique(tx, record, slug);
+      await this.assertUnique(tx, record, slug, locale);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId, previousSlug: slug });
       await recordChange(tx, { kind: how.kind, before, after: record, userId, revertOf: how.revertOf });
     });
@@ -81,6 +81,7 @@ export class SpeciesService {
     userId: string,
     fileName: string | null = null,
     { dryRun = false }: { dryRun?: boolean } = {},
+    locale: WordLocale = 'en',
   ): Promise<CsvImportResult> {
     const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
       header: true,
@@ -114,9 +115,10 @@ export class SpeciesService {
     });
     if (errors.length === 0) errors.push(...this.crossRowConflicts(records));
     if (errors.length > 0) {
+      const say = apiWords(locale);
       throw badRequest(
-        [...new Set(errors.map((e) => e.field))].map((field) => ({ field, message: 'see rows' })),
-        `The file has ${errors.length} problem(s); nothing was imported.`,
+        [...new Set(errors.map((e) => e.field))].map((field) => ({ field, message: say('refusals.species.seeRows') })),
+        say('refusals.species.fileProblems', { count: errors.length }),
         { rows: errors.slice(0, MAX_REPORTED_ROW_ERRORS) },
       );
     }
@@ -148,14 +150,23 @@ export class SpeciesService {
   }
 
   /** A symbol or scientific name may belong to one species only (other than the one being replaced). */
-  private async assertUnique(tx: { query: DataSource['query'] }, r: Species, ownSlug: string | null): Promise<void> {
+  private async assertUnique(
+    tx: { query: DataSource['query'] },
+    r: Species,
+    ownSlug: string | null,
+    locale: WordLocale,
+  ): Promise<void> {
     const clash = await tx.query(
       `SELECT slug FROM species WHERE (usda_symbol = ? OR scientific_name = ?) AND slug <> ? AND slug <> ?`,
       [r.usdaSymbol, r.scientificName, r.slug, ownSlug ?? r.slug],
     );
     if (clash.length)
       throw new ConflictException(
-        `USDA symbol ${r.usdaSymbol} or name ${r.scientificName} is already used by "${clash[0].slug}".`,
+        apiWords(locale)('refusals.species.clash', {
+          symbol: r.usdaSymbol,
+          name: r.scientificName,
+          slug: clash[0].slug,
+        }),
       );
   }
 

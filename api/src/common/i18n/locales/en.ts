@@ -99,6 +99,10 @@ export const en = {
       exists: 'Species "{{slug}}" already exists.',
       noChange: 'No change {{changeId}} in the history of "{{slug}}".',
       firstVersion: 'This change added the species: there is no earlier version to go back to.',
+      clash: 'USDA symbol {{symbol}} or name {{name}} is already used by "{{slug}}".',
+      unknownSource: '"{{source}}" is not in the sources registry',
+      seeRows: 'see rows',
+      fileProblems: 'The file has {{count}} problem(s); nothing was imported.',
     },
     ecoregions: {
       noRegion: 'No EPA Level III ecoregion "{{code}}".',

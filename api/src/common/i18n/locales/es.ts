@@ -100,6 +100,10 @@ export const es = {
       exists: 'La especie "{{slug}}" ya existe.',
       noChange: 'No hay ningún cambio {{changeId}} en el historial de "{{slug}}".',
       firstVersion: 'Este cambio añadió la especie: no hay una versión anterior a la que volver.',
+      clash: 'El símbolo USDA {{symbol}} o el nombre {{name}} ya los usa "{{slug}}".',
+      unknownSource: '"{{source}}" no está en el registro de fuentes',
+      seeRows: 'mira las filas',
+      fileProblems: 'El archivo tiene {{count}} problema(s); no se importó nada.',
     },
     ecoregions: {
       noRegion: 'No existe la ecorregión de nivel III de la EPA "{{code}}".',
