@@ -173,6 +173,20 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
     expect(unchanged).toEqual(detail);
   });
 
+  // A UTF-16 file starts with the byte-order mark FF FE (Unicode Standard §23.8); the import refuses it.
+  it('a species CSV saved as UTF-16: 400 naming the file, in Spanish', async () => {
+    const utf16 = Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from('slug\r\n', 'utf16le')]);
+    const es = await t.http
+      .post('/api/species/import')
+      .set(bearer(tokens.curator))
+      .set('Accept-Language', 'es')
+      .attach('file', utf16, 'species.csv')
+      .expect(400);
+    expect(es.body.fields).toEqual([
+      { field: 'file', message: 'es texto UTF-16: guárdalo como "CSV UTF-8" y súbelo otra vez' },
+    ]);
+  });
+
   it('a sowing calendar with a species not in the catalogue: 400 naming the field, in Spanish', async () => {
     const body = {
       lastFrost: '2027-05-10',

@@ -133,7 +133,7 @@ export class SpeciesController {
     @RequestLocale() locale: WordLocale,
   ): Promise<CsvImportResult> {
     return this.species.importCsv(
-      utf8Text(file.buffer, 'file'),
+      utf8Text(file.buffer, 'file', locale),
       user.id,
       displayFileName(file.originalname),
       { dryRun: query.dryRun ?? false },

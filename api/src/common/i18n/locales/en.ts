@@ -13,6 +13,8 @@ export const en = {
     /** A 400's sentence listing each bad field and its reason ("name must be …; zip must be …"). */
     pleaseCheck: 'Please check: {{problems}}',
     notAField: 'is not a field this request accepts',
+    utf16: 'is UTF-16 text: save it as "CSV UTF-8" and upload it again',
+    notUtf8: 'is not UTF-8 text (another encoding, or not text): save it as "CSV UTF-8" and upload it again',
   },
   places: {
     unknownZipField: '{{zip}} is not a US ZIP code we know',

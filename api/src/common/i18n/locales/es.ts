@@ -15,6 +15,8 @@ export const es = {
   validation: {
     pleaseCheck: 'Revisa esto: {{problems}}',
     notAField: 'no es un campo que esta petición acepte',
+    utf16: 'es texto UTF-16: guárdalo como "CSV UTF-8" y súbelo otra vez',
+    notUtf8: 'no es texto UTF-8 (otra codificación, o no es texto): guárdalo como "CSV UTF-8" y súbelo otra vez',
   },
   places: {
     unknownZipField: '{{zip}} no es un código postal de EE. UU. que conozcamos',
