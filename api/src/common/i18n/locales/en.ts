@@ -110,6 +110,8 @@ export const en = {
       noRegion: 'No EPA Level III ecoregion "{{code}}".',
     },
     people: {
+      noUser: 'No such user.',
+      emailTaken: 'An account with this e-mail already exists: sign in instead.',
       noPerson: 'No such person.',
       ownRole: 'You cannot change your own role: ask another admin to do it.',
       ownAccess: 'You cannot switch off your own account.',

@@ -111,6 +111,8 @@ export const es = {
       noRegion: 'No existe la ecorregión de nivel III de la EPA "{{code}}".',
     },
     people: {
+      noUser: 'No existe esa cuenta.',
+      emailTaken: 'Ya existe una cuenta con este correo: mejor entra con ella.',
       noPerson: 'No existe esa persona.',
       ownRole: 'No puedes cambiar tu propio papel: pídeselo a otra persona administradora.',
       ownAccess: 'No puedes desactivar tu propia cuenta.',
