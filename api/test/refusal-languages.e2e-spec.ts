@@ -187,6 +187,26 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
     ]);
   });
 
+  // The type is sniffed from the bytes (file-type), not the name: a text file named .jpg is refused.
+  it('a photo that is not an image: 415 in Spanish, the same English otherwise', async () => {
+    const send = (language: string) =>
+      t.http
+        .post('/api/species/asclepias-tuberosa/photo')
+        .set(bearer(tokens.curator))
+        .set('Accept-Language', language)
+        .field('photographer', 'Ines Calder')
+        .field('licence', 'CC-BY-4.0')
+        .field('sourceUrl', 'https://example.org/photos/asclepias-tuberosa')
+        .attach('photo', Buffer.from('this is not an image at all'), { filename: 'x.jpg', contentType: 'image/jpeg' })
+        .expect(415);
+    expect((await send('es')).body.message).toBe(
+      'Las fotos deben ser JPEG, PNG o WebP; este archivo no es una imagen que reconozcamos.',
+    );
+    expect((await send('en')).body.message).toBe(
+      'Photos must be JPEG, PNG or WebP; this file is not an image we recognise.',
+    );
+  });
+
   it('a sowing calendar with a species not in the catalogue: 400 naming the field, in Spanish', async () => {
     const body = {
       lastFrost: '2027-05-10',

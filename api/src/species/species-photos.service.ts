@@ -50,21 +50,26 @@ export class SpeciesPhotosService {
     if (!this.store.get(slug)) throw new NotFoundException(apiWords(locale)('refusals.species.noSpecies', { slug }));
     const type = await fileTypeFromBuffer(bytes);
     const ext = type && ACCEPTED.get(type.mime);
+    const say = apiWords(locale);
     if (!type || !ext) {
       throw new UnsupportedMediaTypeException(
-        `Photos must be JPEG, PNG or WebP; this file is ${type ? type.mime : 'not an image we recognise'}.`,
+        type ? say('refusals.species.photoType', { mime: type.mime }) : say('refusals.species.photoUnknownType'),
       );
     }
     let meta: Metadata;
     try {
       meta = await sharp(bytes).metadata();
     } catch {
-      throw new UnsupportedMediaTypeException('The photo could not be read: the file may be damaged.');
+      throw new UnsupportedMediaTypeException(say('refusals.species.photoUnreadable'));
     }
     const pixels = (meta.width ?? 0) * (meta.height ?? 0);
     if (pixels > MAX_PHOTO_PIXELS) {
       throw new TooLargeWithReason(
-        `The photo is ${meta.width} × ${meta.height} pixels; photos may have at most ${MAX_PHOTO_PIXELS / 1_000_000} megapixels. Please make it smaller and try again.`,
+        say('refusals.species.photoTooLarge', {
+          width: meta.width,
+          height: meta.height,
+          megapixels: MAX_PHOTO_PIXELS / 1_000_000,
+        }),
       );
     }
     mkdirSync(this.dir, { recursive: true });

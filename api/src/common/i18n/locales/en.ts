@@ -97,6 +97,11 @@ export const en = {
     species: {
       noSpecies: 'No species "{{slug}}" in the catalogue.',
       noPhoto: 'No photo for "{{slug}}" yet.',
+      photoType: 'Photos must be JPEG, PNG or WebP; this file is {{mime}}.',
+      photoUnknownType: 'Photos must be JPEG, PNG or WebP; this file is not an image we recognise.',
+      photoUnreadable: 'The photo could not be read: the file may be damaged.',
+      photoTooLarge:
+        'The photo is {{width}} × {{height}} pixels; photos may have at most {{megapixels}} megapixels. Please make it smaller and try again.',
       existsEdit: 'Species "{{slug}}" already exists: edit it instead.',
       exists: 'Species "{{slug}}" already exists.',
       noChange: 'No change {{changeId}} in the history of "{{slug}}".',

@@ -98,6 +98,11 @@ export const es = {
     species: {
       noSpecies: 'No hay ninguna especie "{{slug}}" en el catálogo.',
       noPhoto: '"{{slug}}" aún no tiene foto.',
+      photoType: 'Las fotos deben ser JPEG, PNG o WebP; este archivo es {{mime}}.',
+      photoUnknownType: 'Las fotos deben ser JPEG, PNG o WebP; este archivo no es una imagen que reconozcamos.',
+      photoUnreadable: 'No pudimos leer la foto: puede que el archivo esté dañado.',
+      photoTooLarge:
+        'La foto mide {{width}} × {{height}} píxeles; las fotos pueden tener como máximo {{megapixels}} megapíxeles. Hazla más pequeña y vuelve a intentarlo.',
       existsEdit: 'La especie "{{slug}}" ya existe: edítala en lugar de crearla.',
       exists: 'La especie "{{slug}}" ya existe.',
       noChange: 'No hay ningún cambio {{changeId}} en el historial de "{{slug}}".',
