@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import ICAL from 'ical.js';
+import Papa from 'papaparse';
 import { createTestApp, type TestApp } from './support/test-app.js';
 
 /** Events as a widely used RFC 5545 parser (ical.js) reads them, independent of our writer. */
@@ -95,6 +96,25 @@ describe('sowing calendar exports (e2e)', () => {
     expect(lines[0]).toBe('date,species,scientificName,kind,title,detail');
     expect(lines.filter((l) => l.includes(',warning:')).length).toBe(json.body.warnings.length);
     expect(lines.length - 1).toBe(json.body.events.length + json.body.warnings.length);
+  });
+
+  // Read back with a widely used RFC 4180 parser (papaparse), independent of our writer: the same
+  // rows, dates and kind codes in both languages; header, step titles and warnings in Spanish for es.
+  it('.csv in Spanish for Accept-Language es: same rows, dates and kinds, Spanish header and steps', async () => {
+    const read = (text: string) => Papa.parse<string[]>(text, { skipEmptyLines: true }).data;
+    const en = read((await t.http.post('/api/calendar.csv').send(body).expect(200)).text);
+    const es = read((await t.http.post('/api/calendar.csv').set('Accept-Language', 'es').send(body).expect(200)).text);
+    expect(en[0]).toEqual(['date', 'species', 'scientificName', 'kind', 'title', 'detail']);
+    expect(es[0]).toEqual(['fecha', 'especie', 'nombre científico', 'tipo', 'título', 'detalle']);
+    const codes = (rows: string[][]) => rows.slice(1).map((r) => [r[0], r[2], r[3]]);
+    expect(codes(es)).toEqual(codes(en));
+    const titles = es.slice(1).map((r) => r[4]);
+    expect(titles).toContain('Wild bergamot: Siembra');
+    expect(titles).toContain('Reparto de plantas');
+    expect(titles.filter((x) => x.startsWith('Ten en cuenta')).length).toBe(
+      en.slice(1).filter((r) => r[4].startsWith('Please note')).length,
+    );
+    expect(es.flat().join('\n')).not.toContain('Please note');
   });
 
   it('a bad plan id is a 400 naming the field', async () => {

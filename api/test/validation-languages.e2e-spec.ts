@@ -70,4 +70,14 @@ describe('request validation answers in the reader language (e2e)', () => {
     expect(unexpected.body.fields).toEqual([{ field: 'role', message: 'no es un campo que esta petición acepte' }]);
     expect(unexpected.body.message).toBe('Revisa esto: role no es un campo que esta petición acepte');
   });
+
+  // A less common sentence of a shared schema (ecoregion.ts's state code) has its Spanish line too.
+  it("says a schema's less common sentence in Spanish, and the same English otherwise", async () => {
+    const es = await t.http.get('/api/ecoregions').query({ state: 'XX' }).set('Accept-Language', 'es').expect(400);
+    expect(es.body.fields).toEqual([
+      { field: 'state', message: 'debe ser el código USPS de uno de los 48 estados contiguos o de DC' },
+    ]);
+    const en = await t.http.get('/api/ecoregions').query({ state: 'XX' }).expect(400);
+    expect(en.body.fields).toEqual([{ field: 'state', message: 'must be a USPS code of the 48 states or DC' }]);
+  });
 });

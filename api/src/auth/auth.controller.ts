@@ -82,7 +82,8 @@ export class AuthController {
   @Get('me')
   @ZodResponse(userResponseSchema)
   @Auth()
-  me(@CurrentUser() user: AuthenticatedUser): Promise<User> {
-    return this.users.getDto(user.id);
+  @AnswersInLanguage()
+  me(@CurrentUser() user: AuthenticatedUser, @RequestLocale() locale: WordLocale): Promise<User> {
+    return this.users.getDto(user.id, locale);
   }
 }

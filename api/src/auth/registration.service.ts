@@ -100,11 +100,10 @@ export class RegistrationService {
       await this.pending.delete({ id: row.id });
       throw new ConflictException(say('auth.alreadyHasAccount'));
     }
-    const user = await this.users.create({
-      email: row.email,
-      displayName: row.displayName,
-      passwordHash: row.passwordHash,
-    });
+    const user = await this.users.create(
+      { email: row.email, displayName: row.displayName, passwordHash: row.passwordHash },
+      locale,
+    );
     await this.pending.delete({ id: row.id });
     return { ...(await this.auth.tokenFor(user.id)), next: row.returnPath };
   }

@@ -41,6 +41,7 @@ const today = () => new Date().toISOString().slice(0, 10);
  * targets and watch progress; each grower states their methods and logs their own batches.
  */
 @ApiTags('batches')
+@AnswersInLanguage()
 @Controller('groups/:slug/season')
 @Auth()
 export class BatchesController {
@@ -52,8 +53,9 @@ export class BatchesController {
   growers(
     @ZodParam('slug', slugParamSchema) slug: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<SeasonGrower[]> {
-    return this.batches.growers(slug, user);
+    return this.batches.growers(slug, user, locale);
   }
 
   /** A grower's methods and capacity (the grower themself, or an organiser). */
@@ -64,8 +66,9 @@ export class BatchesController {
     @ZodParam('userId', uuidParamSchema) userId: string,
     @ZodBody(growerSetupRequestSchema) body: GrowerSetupRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<SeasonGrower> {
-    return this.batches.setGrower(slug, user, userId, body);
+    return this.batches.setGrower(slug, user, userId, body, locale);
   }
 
   /** Proposes a split of the targets into batches by method and capacity; writes nothing. */
@@ -76,8 +79,9 @@ export class BatchesController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(splitProposalRequestSchema) body: SplitProposalRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<BatchSplitProposalAnswer> {
-    return this.batches.propose(slug, user, body);
+    return this.batches.propose(slug, user, body, locale);
   }
 
   /** Replaces the split (organisers). */
@@ -87,8 +91,9 @@ export class BatchesController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(batchSplitRequestSchema) body: BatchSplitRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<SeasonBatches> {
-    return this.batches.setSplit(slug, user, body, today());
+    return this.batches.setSplit(slug, user, body, today(), locale);
   }
 
   /** Batches with dates, logs and supplies: all for organisers, their own for a grower. */
@@ -140,8 +145,9 @@ export class BatchesController {
     @ZodParam('id', uuidParamSchema) id: string,
     @ZodBody(logEntryRequestSchema) body: LogEntryRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<LogEntryAnswer> {
-    return this.batches.log(slug, user, id, body, today());
+    return this.batches.log(slug, user, id, body, today(), locale);
   }
 
   /** Targets against sown, up and ready per species and grower, with the ready forecast (organisers). */

@@ -14,7 +14,6 @@ import {
   sowMoreNudge,
   supplyList,
   unitsFor,
-  UNIT_WORDS,
   UNIT_OF,
   type Batch,
   type BatchSplitProposalAnswer,
@@ -31,7 +30,8 @@ import {
 import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { runSql } from '../common/database/dialect.js';
-import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
+import { apiWords } from '../common/i18n/api-i18n.js';
+import { badRequest, badRequestIn, type FieldProblem, pleaseCheck } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SeasonsService, type SeasonContext } from '../seasons/seasons.service.js';
@@ -61,8 +61,8 @@ export class BatchesService {
   ) {}
 
   /** Organisers: every grower of the season; a grower: themself. */
-  async growers(slug: string, user: AuthenticatedUser): Promise<SeasonGrower[]> {
-    const c = await this.growerOrOrganiser(slug, user);
+  async growers(slug: string, user: AuthenticatedUser, locale: WordLocale = 'en'): Promise<SeasonGrower[]> {
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const all = await this.growerList(slug, user, c);
     return c.role === 'organiser' ? all : all.filter((g) => g.userId === user.id);
   }
@@ -73,33 +73,33 @@ export class BatchesService {
     user: AuthenticatedUser,
     userId: string,
     req: GrowerSetupRequest,
+    locale: WordLocale = 'en',
   ): Promise<SeasonGrower> {
-    const c = await this.growerOrOrganiser(slug, user);
-    if (c.role !== 'organiser' && userId !== user.id)
-      throw new ForbiddenException("Growers set their own methods and capacity, not someone else's.");
+    const say = apiWords(locale);
+    const c = await this.growerOrOrganiser(slug, user, locale);
+    if (c.role !== 'organiser' && userId !== user.id) throw new ForbiddenException(say('refusals.batches.ownMethods'));
     const people = await this.people(slug, user);
     const person = people.get(userId);
-    if (!person || person.role === 'member')
-      throw new NotFoundException('That person is not a grower or organiser of this group.');
+    if (!person || person.role === 'member') throw new NotFoundException(say('refusals.batches.notAGrower'));
     // Capacity may not drop below what the batches already take.
     const used = await this.unitsUsed(c.season.id);
     const problems: FieldProblem[] = [];
     req.methods.forEach((m, i) => {
       const taken = used.get(`${userId}|${m.method}`) ?? 0;
       if (m.capacity < taken) {
-        const unit = UNIT_WORDS[UNIT_OF[m.method]].many;
+        const unit = say(`refusals.batches.units.${UNIT_OF[m.method]}`);
         problems.push({
           field: `methods.${i}.capacity`,
-          message: `must be at least ${taken}: the batches already take ${taken} ${unit}`,
+          message: say('refusals.batches.capacityBelowUsed', { taken, unit }),
         });
       }
     });
     for (const [key, taken] of used) {
       const [id, method] = key.split('|');
       if (id === userId && taken > 0 && !req.methods.some((m) => m.method === method))
-        problems.push({ field: 'methods', message: `must keep ${method}: batches use it` });
+        problems.push({ field: 'methods', message: say('refusals.batches.keepMethod', { method }) });
     }
-    if (problems.length) throw badRequest(problems);
+    if (problems.length) throw badRequest(problems, pleaseCheck(problems, locale));
     await this.db.transaction(async (tx) => {
       const existing = await tx.findOne(SeasonGrowerRow, { where: { seasonId: c.season.id, userId } });
       await tx.save(
@@ -113,8 +113,13 @@ export class BatchesService {
   }
 
   /** Proposes a split of the targets over the growers' stated capacity; writes nothing. */
-  async propose(slug: string, user: AuthenticatedUser, req: SplitProposalRequest): Promise<BatchSplitProposalAnswer> {
-    const c = await this.organiser(slug, user);
+  async propose(
+    slug: string,
+    user: AuthenticatedUser,
+    req: SplitProposalRequest,
+    locale: WordLocale = 'en',
+  ): Promise<BatchSplitProposalAnswer> {
+    const c = await this.organiser(slug, user, locale);
     const growers = (await this.growerList(slug, user, c)).filter(
       (g) => g.methods.length > 0 && (!req.growerIds || req.growerIds.includes(g.userId)),
     );
@@ -135,8 +140,15 @@ export class BatchesService {
   }
 
   /** Replaces the season's split. Batches with log entries must stay (listed by id). */
-  async setSplit(slug: string, user: AuthenticatedUser, req: BatchSplitRequest, today: string): Promise<SeasonBatches> {
-    const c = await this.organiser(slug, user);
+  async setSplit(
+    slug: string,
+    user: AuthenticatedUser,
+    req: BatchSplitRequest,
+    today: string,
+    locale: WordLocale = 'en',
+  ): Promise<SeasonBatches> {
+    const say = apiWords(locale);
+    const c = await this.organiser(slug, user, locale);
     const existing = await this.batchRows.find({ where: { seasonId: c.season.id } });
     const growers = new Map((await this.growerList(slug, user, c)).map((g) => [g.userId, g]));
     const targets = new Set(c.targets.map((t) => t.slug));
@@ -145,23 +157,31 @@ export class BatchesService {
     req.batches.forEach((b, i) => {
       const at = `batches.${i}`;
       if (b.id && !existing.some((e) => e.id === b.id))
-        problems.push({ field: `${at}.id`, message: 'is not a batch of this season' });
+        problems.push({ field: `${at}.id`, message: say('refusals.batches.notThisSeason') });
       if (!targets.has(b.slug))
-        problems.push({ field: `${at}.slug`, message: `"${b.slug}" is not on the season's targets` });
+        problems.push({ field: `${at}.slug`, message: say('refusals.batches.notOnTargets', { slug: b.slug }) });
       const grower = growers.get(b.growerId);
       const stated = grower?.methods.find((m) => m.method === b.method);
-      if (!grower) problems.push({ field: `${at}.growerId`, message: 'is not a grower of this group' });
+      if (!grower) problems.push({ field: `${at}.growerId`, message: say('refusals.batches.notAGrowerField') });
       else if (!stated)
-        problems.push({ field: `${at}.method`, message: `${grower.displayName} does not use this method` });
+        problems.push({
+          field: `${at}.method`,
+          message: say('refusals.batches.methodNotUsed', { name: grower.displayName }),
+        });
       else {
         const key = `${b.growerId}|${b.method}`;
         const total = (used.get(key) ?? 0) + unitsFor(b.method, b.plants);
         used.set(key, total);
         if (total > stated.capacity) {
-          const unit = UNIT_WORDS[UNIT_OF[b.method]].many;
+          const unit = say(`refusals.batches.units.${UNIT_OF[b.method]}`);
           problems.push({
             field: `${at}.plants`,
-            message: `takes ${grower.displayName} to ${total} ${unit}, over the ${stated.capacity} they can tend`,
+            message: say('refusals.batches.overCapacity', {
+              name: grower.displayName,
+              total,
+              unit,
+              capacity: stated.capacity,
+            }),
           });
         }
       }
@@ -173,10 +193,10 @@ export class BatchesService {
       if (logged > 0)
         problems.push({
           field: 'batches',
-          message: 'must keep every batch that has log entries (list it with its id)',
+          message: say('refusals.batches.keepLogged'),
         });
     }
-    if (problems.length) throw badRequest(problems);
+    if (problems.length) throw badRequest(problems, pleaseCheck(problems, locale));
     await this.db.transaction(async (tx) => {
       if (dropped.length) await tx.delete(BatchRow, { id: In(dropped) });
       for (const [position, b] of req.batches.entries()) {
@@ -197,7 +217,7 @@ export class BatchesService {
 
   /** The season's batches with supplies: all for organisers, their own for a grower. */
   async list(slug: string, user: AuthenticatedUser, today: string, locale: WordLocale = 'en'): Promise<SeasonBatches> {
-    const c = await this.growerOrOrganiser(slug, user);
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const growerId = c.role === 'organiser' ? undefined : user.id;
     const batches = await this.batchesOf(slug, user, c, today, growerId, undefined, locale);
     const byGrower = new Map<string, Batch[]>();
@@ -231,7 +251,7 @@ export class BatchesService {
   /** The caller's own batches as iCalendar (a grower's, or an organiser's who also grows). */
   /** The caller's batches as iCalendar, steps and warnings in the reader's language. */
   async myBatchesIcs(slug: string, user: AuthenticatedUser, today: string, locale: WordLocale = 'en'): Promise<string> {
-    const c = await this.growerOrOrganiser(slug, user);
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const mine = await this.batchesOf(slug, user, c, today, user.id, undefined, locale);
     return batchesToIcs(mine, { today, planId: `batches-${c.season.year}`, locale });
   }
@@ -243,11 +263,12 @@ export class BatchesService {
     today: string,
     locale: WordLocale = 'en',
   ): Promise<Batch> {
-    const c = await this.growerOrOrganiser(slug, user);
+    const say = apiWords(locale);
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
-    if (!row) throw new NotFoundException('No such batch in this season.');
+    if (!row) throw new NotFoundException(say('refusals.batches.noBatch'));
     if (c.role !== 'organiser' && row.growerId !== user.id)
-      throw new ForbiddenException('This batch belongs to another grower.');
+      throw new ForbiddenException(say('refusals.batches.anotherGrower'));
     return (await this.batchesOf(slug, user, c, today, undefined, [row], locale))[0];
   }
 
@@ -263,11 +284,13 @@ export class BatchesService {
     id: string,
     req: LogEntryRequest,
     today: string,
+    locale: WordLocale = 'en',
   ): Promise<LogEntryAnswer> {
-    const c = await this.growerOrOrganiser(slug, user);
+    const say = apiWords(locale);
+    const c = await this.growerOrOrganiser(slug, user, locale);
     const row = await this.batchRows.findOne({ where: { id, seasonId: c.season.id } });
-    if (!row) throw new NotFoundException('No such batch in this season.');
-    if (row.growerId !== user.id) throw new ForbiddenException('Only the grower of this batch keeps its log.');
+    if (!row) throw new NotFoundException(say('refusals.batches.noBatch'));
+    if (row.growerId !== user.id) throw new ForbiddenException(say('refusals.batches.ownLog'));
     return this.db.transaction(async (tx) => {
       const sent = req.clientId
         ? await tx.findOne(BatchLogEntryRow, { where: { batchId: id, clientId: req.clientId } })
@@ -275,7 +298,7 @@ export class BatchesService {
       if (sent) return { batchId: id, entry: toLogEntry(sent), totals: await this.totalsOf(tx, id) };
       const before = await this.totalsOf(tx, id);
       const problems = logEntryProblems(before, req, today);
-      if (problems.length) throw badRequest(problems);
+      if (problems.length) throw badRequestIn(locale, problems);
       const saved = await tx.save(
         BatchLogEntryRow,
         tx.create(BatchLogEntryRow, {
@@ -312,7 +335,7 @@ export class BatchesService {
     today: string,
     locale: WordLocale = 'en',
   ): Promise<SeasonProgress> {
-    const c = await this.organiser(slug, user);
+    const c = await this.organiser(slug, user, locale);
     const batches = await this.batchesOf(slug, user, c, today);
     return seasonProgress(
       c,
@@ -394,15 +417,15 @@ export class BatchesService {
   }
 
   /** The season and the caller's role, for organisers only. */
-  async organiser(slug: string, user: AuthenticatedUser): Promise<SeasonContext> {
-    const c = await this.seasons.context(slug, user);
-    if (c.role !== 'organiser') throw new ForbiddenException('Only an organiser of this group can do this.');
+  async organiser(slug: string, user: AuthenticatedUser, locale: WordLocale = 'en'): Promise<SeasonContext> {
+    const c = await this.seasons.context(slug, user, locale);
+    if (c.role !== 'organiser') throw new ForbiddenException(apiWords(locale)('refusals.batches.organiserOnly'));
     return c;
   }
 
-  private async growerOrOrganiser(slug: string, user: AuthenticatedUser): Promise<SeasonContext> {
-    const c = await this.seasons.context(slug, user);
-    if (c.role === 'member') throw new ForbiddenException('Batches are for the growers and organisers of this group.');
+  private async growerOrOrganiser(slug: string, user: AuthenticatedUser, locale: WordLocale): Promise<SeasonContext> {
+    const c = await this.seasons.context(slug, user, locale);
+    if (c.role === 'member') throw new ForbiddenException(apiWords(locale)('refusals.batches.growersOnly'));
     return c;
   }
 

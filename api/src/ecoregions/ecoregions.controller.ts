@@ -10,7 +10,9 @@ import {
   ecoregionListQuerySchema,
   ecoregionListSchema,
   ecoregionSchema,
+  type WordLocale,
 } from '@homeground/shared';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
@@ -36,16 +38,21 @@ export class EcoregionsController {
   @Public()
   @Get(':code')
   @ZodResponse(ecoregionSchema)
-  get(@ZodParam('code', ecoregionCodeParamSchema) code: string): Ecoregion {
-    return this.ecoregions.get(code);
+  @AnswersInLanguage()
+  get(@ZodParam('code', ecoregionCodeParamSchema) code: string, @RequestLocale() locale: WordLocale): Ecoregion {
+    return this.ecoregions.get(code, locale);
   }
 
   /** The region's EPA outline for the map, simplified; null until an admin has imported the boundaries. */
   @Public()
   @Get(':code/outline')
   @ZodResponse(ecoregionOutlineSchema)
-  outline(@ZodParam('code', ecoregionCodeParamSchema) code: string): EcoregionOutline {
-    return this.ecoregions.outline(code);
+  @AnswersInLanguage()
+  outline(
+    @ZodParam('code', ecoregionCodeParamSchema) code: string,
+    @RequestLocale() locale: WordLocale,
+  ): EcoregionOutline {
+    return this.ecoregions.outline(code, locale);
   }
 
   /** Admins import EPA Level III polygons (GeoJSON FeatureCollection with US_L3CODE / US_L3NAME) for exact lookups. */

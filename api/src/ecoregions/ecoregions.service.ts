@@ -1,6 +1,7 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { Ecoregion, EcoregionOutline, OutlineGeometry } from '@homeground/shared';
+import type { Ecoregion, EcoregionOutline, OutlineGeometry, WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { simplify } from '@turf/turf';
 import { DataSource } from 'typeorm';
 import { parseBoundaryUpload } from '../geometry/boundary-upload.js';
@@ -71,9 +72,9 @@ export class EcoregionsService {
     return this.regions.get(code);
   }
 
-  get(code: string): Ecoregion {
+  get(code: string, locale: WordLocale = 'en'): Ecoregion {
     const e = this.regions.get(code);
-    if (!e) throw new NotFoundException(`No EPA Level III ecoregion "${code}".`);
+    if (!e) throw new NotFoundException(apiWords(locale)('refusals.ecoregions.noRegion', { code }));
     return e;
   }
 
@@ -94,8 +95,8 @@ export class EcoregionsService {
    * The region's imported outline, simplified to about 1 km (0.01°) for a map a few hundred pixels
    * wide, or null when no boundaries are loaded. An unknown code answers 404.
    */
-  outline(code: string): EcoregionOutline {
-    this.get(code);
+  outline(code: string, locale: WordLocale = 'en'): EcoregionOutline {
+    this.get(code, locale);
     const cached = this.outlines.get(code);
     if (cached) return { code, outline: cached };
     const f = this.boundaries.find((p) => p.code === code);

@@ -8,6 +8,7 @@ import {
   setMemberRequestSchema,
   slugParamSchema,
   uuidParamSchema,
+  type WordLocale,
 } from '@homeground/shared';
 import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
@@ -16,8 +17,10 @@ import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { GroupsService, type GroupMemberDto } from './groups.service.js';
 import { Public } from '../common/decorators/public.decorator.js';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 
 @ApiTags('groups')
+@AnswersInLanguage()
 @Controller('groups')
 export class GroupsController {
   constructor(private readonly groups: GroupsService) {}
@@ -32,8 +35,8 @@ export class GroupsController {
   @Public()
   @Get(':slug')
   @ZodResponse(groupResponseSchema)
-  get(@ZodParam('slug', slugParamSchema) slug: string): Promise<Group> {
-    return this.groups.getDto(slug);
+  get(@ZodParam('slug', slugParamSchema) slug: string, @RequestLocale() locale: WordLocale): Promise<Group> {
+    return this.groups.getDto(slug, locale);
   }
 
   @Get(':slug/members')
@@ -42,8 +45,9 @@ export class GroupsController {
   members(
     @ZodParam('slug', slugParamSchema) slug: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<GroupMemberDto[]> {
-    return this.groups.members(slug, user);
+    return this.groups.members(slug, user, locale);
   }
 
   @Put(':slug/members')
@@ -53,8 +57,9 @@ export class GroupsController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @CurrentUser() user: AuthenticatedUser,
     @ZodBody(setMemberRequestSchema) dto: SetMemberRequest,
+    @RequestLocale() locale: WordLocale,
   ): Promise<GroupMemberDto> {
-    return this.groups.setMember(slug, user, dto.email, dto.role);
+    return this.groups.setMember(slug, user, dto.email, dto.role, locale);
   }
 
   @Delete(':slug/members/:userId')
@@ -65,7 +70,8 @@ export class GroupsController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodParam('userId', uuidParamSchema) userId: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<void> {
-    return this.groups.removeMember(slug, user, userId);
+    return this.groups.removeMember(slug, user, userId, locale);
   }
 }

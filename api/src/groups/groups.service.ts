@@ -1,8 +1,9 @@
 import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import type { Group as GroupDto, GroupMemberResponse, GroupRole } from '@homeground/shared';
+import type { Group as GroupDto, GroupMemberResponse, GroupRole, WordLocale } from '@homeground/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { UsersService } from '../users/users.service.js';
 import { GroupMembership } from './group-membership.entity.js';
 import { Group } from './group.entity.js';
@@ -34,21 +35,21 @@ export class GroupsService {
   }
 
   /** The group entity; stays inside this module (other modules get the shared `Group` from getDto). */
-  private async get(slug: string): Promise<Group> {
+  private async get(slug: string, locale: WordLocale = 'en'): Promise<Group> {
     const group = await this.groups.findOne({ where: { slug } });
-    if (!group) throw new NotFoundException(`No group called "${slug}".`);
+    if (!group) throw new NotFoundException(apiWords(locale)('refusals.groups.noSlug', { slug }));
     return group;
   }
 
-  async getDto(slug: string): Promise<GroupDto> {
-    const group = await this.get(slug);
+  async getDto(slug: string, locale: WordLocale = 'en'): Promise<GroupDto> {
+    const group = await this.get(slug, locale);
     return this.toDto(group, await this.memberships.count({ where: { groupId: group.id } }));
   }
 
   /** The shared `Group` by its id (for records that name their group by id, e.g. a plant share). */
-  async getDtoById(id: string): Promise<GroupDto> {
+  async getDtoById(id: string, locale: WordLocale = 'en'): Promise<GroupDto> {
     const group = await this.groups.findOne({ where: { id } });
-    if (!group) throw new NotFoundException('No such group.');
+    if (!group) throw new NotFoundException(apiWords(locale)('refusals.groups.noId'));
     return this.toDto(group, await this.memberships.count({ where: { groupId: group.id } }));
   }
 
@@ -59,10 +60,10 @@ export class GroupsService {
     return m?.role ?? null;
   }
 
-  async members(slug: string, caller: AuthenticatedUser): Promise<GroupMemberDto[]> {
-    const group = await this.get(slug);
+  async members(slug: string, caller: AuthenticatedUser, locale: WordLocale = 'en'): Promise<GroupMemberDto[]> {
+    const group = await this.get(slug, locale);
     const role = await this.roleOf(caller, group.id);
-    if (!role) throw new ForbiddenException('Only members of this group can see who is in it.');
+    if (!role) throw new ForbiddenException(apiWords(locale)('refusals.groups.membersOnly'));
     const rows = await this.memberships.find({
       where: { groupId: group.id },
       relations: { user: true },
@@ -79,13 +80,20 @@ export class GroupsService {
   }
 
   /** Adds or changes a person's role in the group; organisers of that group (or admins) only. */
-  async setMember(slug: string, caller: AuthenticatedUser, email: string, role: GroupRole): Promise<GroupMemberDto> {
-    const group = await this.get(slug);
+  async setMember(
+    slug: string,
+    caller: AuthenticatedUser,
+    email: string,
+    role: GroupRole,
+    locale: WordLocale = 'en',
+  ): Promise<GroupMemberDto> {
+    const say = apiWords(locale);
+    const group = await this.get(slug, locale);
     if ((await this.roleOf(caller, group.id)) !== 'organiser') {
-      throw new ForbiddenException('Only an organiser of this group can add people to it.');
+      throw new ForbiddenException(say('refusals.groups.organiserAdds'));
     }
     const account = await this.users.findByEmail(email);
-    if (!account) throw new NotFoundException(`No account uses ${email}: ask them to register first.`);
+    if (!account) throw new NotFoundException(say('refusals.groups.noAccount', { email }));
     const user = await this.users.getDto(account.id);
     return this.db.transaction(async (tx) => {
       const existing = await tx.findOne(GroupMembership, { where: { groupId: group.id, userId: user.id } });
@@ -98,19 +106,25 @@ export class GroupsService {
   }
 
   /** Takes a person out of the group; organisers only, and never the group's last organiser. */
-  async removeMember(slug: string, caller: AuthenticatedUser, userId: string): Promise<void> {
-    const group = await this.get(slug);
+  async removeMember(
+    slug: string,
+    caller: AuthenticatedUser,
+    userId: string,
+    locale: WordLocale = 'en',
+  ): Promise<void> {
+    const say = apiWords(locale);
+    const group = await this.get(slug, locale);
     if ((await this.roleOf(caller, group.id)) !== 'organiser') {
-      throw new ForbiddenException('Only an organiser of this group can remove people from it.');
+      throw new ForbiddenException(say('refusals.groups.organiserRemoves'));
     }
     await this.db.transaction(async (tx) => {
       const m = await tx.findOne(GroupMembership, { where: { groupId: group.id, userId } });
-      if (!m) throw new NotFoundException('That person is not in this group.');
+      if (!m) throw new NotFoundException(say('refusals.groups.notInGroup'));
       if (
         m.role === 'organiser' &&
         (await tx.count(GroupMembership, { where: { groupId: group.id, role: 'organiser' } })) === 1
       ) {
-        throw new ConflictException("This is the group's only organiser: make someone else an organiser first.");
+        throw new ConflictException(say('refusals.groups.lastOrganiser'));
       }
       await tx.delete(GroupMembership, { id: m.id });
     });

@@ -48,8 +48,13 @@ export class InvitationsController {
   @Get('groups/:slug/invitations')
   @Auth()
   @ZodResponse(z.array(invitationSchema))
-  list(@ZodParam('slug', slugParamSchema) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<Invitation[]> {
-    return this.invitations.list(slug, user);
+  @AnswersInLanguage()
+  list(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
+  ): Promise<Invitation[]> {
+    return this.invitations.list(slug, user, locale);
   }
 
   /** What the link offers, for the page the invited person lands on. */

@@ -55,18 +55,17 @@ export class InvitationsService {
     now = new Date(),
     locale: WordLocale = 'en',
   ): Promise<Invitation> {
-    const group = await this.groups.getDto(slug);
+    const say = apiWords(locale);
+    const group = await this.groups.getDto(slug, locale);
     if ((await this.groups.roleOf(caller, group.id)) !== 'organiser') {
-      throw new ForbiddenException('Only an organiser of this group can invite people to it.');
+      throw new ForbiddenException(say('refusals.invitations.organiserInvites'));
     }
     const existingUser = await this.users.findOne({ where: { email: req.email } });
     if (
       existingUser &&
       (await this.db.getRepository(GroupMembership).exists({ where: { groupId: group.id, userId: existingUser.id } }))
     ) {
-      throw new ConflictException(
-        `${req.email} is already in ${group.name}: change their role in the member list instead.`,
-      );
+      throw new ConflictException(say('refusals.invitations.alreadyIn', { email: req.email, group: group.name }));
     }
     const inviter = await this.users.findOneOrFail({ where: { id: caller.id } });
     const token = randomBytes(32).toString('base64url');
@@ -100,10 +99,10 @@ export class InvitationsService {
   }
 
   /** Pending and accepted invitations of a group, newest first, for its organisers. */
-  async list(slug: string, caller: AuthenticatedUser): Promise<Invitation[]> {
-    const group = await this.groups.getDto(slug);
+  async list(slug: string, caller: AuthenticatedUser, locale: WordLocale = 'en'): Promise<Invitation[]> {
+    const group = await this.groups.getDto(slug, locale);
     if ((await this.groups.roleOf(caller, group.id)) !== 'organiser') {
-      throw new ForbiddenException('Only an organiser of this group can see its invitations.');
+      throw new ForbiddenException(apiWords(locale)('refusals.invitations.organiserSees'));
     }
     const rows = await this.invitations.find({ where: { groupId: group.id }, order: { createdAt: 'DESC' } });
     return rows.map(toInvitation);

@@ -6,7 +6,9 @@ import {
   type OutboxQuery,
   outboxQuerySchema,
   uuidParamSchema,
+  type WordLocale,
 } from '@homeground/shared';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
@@ -16,6 +18,7 @@ import { OutboxService } from './outbox.service.js';
 
 /** What the local mail server received: organisers read their group's mail, admins all of it. */
 @ApiTags('outbox')
+@AnswersInLanguage()
 @Controller('outbox')
 export class OutboxController {
   constructor(private readonly outbox: OutboxService) {}
@@ -26,14 +29,19 @@ export class OutboxController {
   list(
     @ZodQuery(outboxQuerySchema) query: OutboxQuery,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<OutboxMessage[]> {
-    return this.outbox.list(user, query);
+    return this.outbox.list(user, query, locale);
   }
 
   @Get(':id')
   @Auth()
   @ZodResponse(outboxMessageSchema)
-  get(@ZodParam('id', uuidParamSchema) id: string, @CurrentUser() user: AuthenticatedUser): Promise<OutboxMessage> {
-    return this.outbox.get(user, id);
+  get(
+    @ZodParam('id', uuidParamSchema) id: string,
+    @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
+  ): Promise<OutboxMessage> {
+    return this.outbox.get(user, id, locale);
   }
 }

@@ -1,6 +1,7 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import type { OutboxMessage } from '@homeground/shared';
+import type { OutboxMessage, WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { In, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { GroupMembership } from '../groups/group-membership.entity.js';
@@ -45,10 +46,14 @@ export class OutboxService {
   }
 
   /** Admins read every message; organisers read the messages about the groups they organise. */
-  async list(caller: AuthenticatedUser, filter: { kind?: string; to?: string } = {}): Promise<OutboxMessage[]> {
+  async list(
+    caller: AuthenticatedUser,
+    filter: { kind?: string; to?: string } = {},
+    locale: WordLocale = 'en',
+  ): Promise<OutboxMessage[]> {
     const groups = await this.readableGroups(caller);
     if (groups !== 'all' && groups.length === 0) {
-      throw new ForbiddenException('Only organisers and admins can read the outbox.');
+      throw new ForbiddenException(apiWords(locale)('refusals.outbox.readersOnly'));
     }
     const where = {
       ...(groups === 'all' ? {} : { groupId: In(groups) }),
@@ -59,12 +64,13 @@ export class OutboxService {
     return rows.filter((r) => !to || r.to.includes(to)).map(toOutboxMessage);
   }
 
-  async get(caller: AuthenticatedUser, id: string): Promise<OutboxMessage> {
+  async get(caller: AuthenticatedUser, id: string, locale: WordLocale = 'en'): Promise<OutboxMessage> {
+    const say = apiWords(locale);
     const row = await this.rows.findOne({ where: { id } });
-    if (!row) throw new NotFoundException('No message with that id in the outbox.');
+    if (!row) throw new NotFoundException(say('refusals.outbox.noMessage'));
     const groups = await this.readableGroups(caller);
     if (groups !== 'all' && !(row.groupId && groups.includes(row.groupId))) {
-      throw new ForbiddenException('Only organisers of its group and admins can read this message.');
+      throw new ForbiddenException(say('refusals.outbox.messageReaders'));
     }
     return toOutboxMessage(row);
   }

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { badRequest } from '../common/validation/bad-request.js';
-import type { RegionContext, Species, SpeciesSummary } from '@homeground/shared';
+import type { RegionContext, Species, SpeciesSummary, WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { EcoregionsService } from '../ecoregions/ecoregions.service.js';
 import { SpeciesStore } from '../species/species-store.service.js';
 import { toSpeciesSummary } from '../species/species-summary.mapper.js';
@@ -35,24 +36,27 @@ export class MixContextService {
   }
 
   /** Fills the ecoregion's plant communities (clients send only the code) and checks the code exists. */
-  region(region: RegionContext): RegionContext {
+  region(region: RegionContext, locale: WordLocale = 'en'): RegionContext {
     if (!region.ecoregionCode || region.ecoregionPlantCommunities) return region;
     const e = this.ecoregions.list().find((x) => x.code === region.ecoregionCode);
-    if (!e)
+    if (!e) {
+      const say = apiWords(locale);
       throw badRequest(
-        [{ field: 'region.ecoregionCode', message: 'is not in the catalogue' }],
-        'region.ecoregionCode is not in the catalogue',
+        [{ field: 'region.ecoregionCode', message: say('refusals.catalogue.ecoregionField') }],
+        say('refusals.catalogue.ecoregion'),
       );
+    }
     return { ...region, ecoregionPlantCommunities: e.plantCommunities };
   }
 
   /** Slugs that are not in the catalogue, as 400 fields. */
-  assertKnown(slugs: { field: string; slug: string }[]): void {
+  assertKnown(slugs: { field: string; slug: string }[], locale: WordLocale = 'en'): void {
     const unknown = slugs.filter((s) => !this.store.get(s.slug));
     if (unknown.length) {
+      const say = apiWords(locale);
       throw badRequest(
-        unknown.map((u) => ({ field: u.field, message: `"${u.slug}" is not in the catalogue` })),
-        `Not in the catalogue: ${unknown.map((u) => u.slug).join(', ')}`,
+        unknown.map((u) => ({ field: u.field, message: say('refusals.catalogue.slugField', { slug: u.slug }) })),
+        say('refusals.catalogue.slugs', { slugs: unknown.map((u) => u.slug).join(', ') }),
       );
     }
   }

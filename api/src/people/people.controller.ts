@@ -8,7 +8,9 @@ import {
   type SetRoleRequest,
   setRoleRequestSchema,
   uuidParamSchema,
+  type WordLocale,
 } from '@homeground/shared';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
@@ -18,6 +20,7 @@ import { PeopleService } from './people.service.js';
 
 /** Admins manage people: global roles, switching accounts off and on, sign-in activity. */
 @ApiTags('people')
+@AnswersInLanguage()
 @Controller('users')
 @Auth('admin')
 export class PeopleController {
@@ -36,8 +39,9 @@ export class PeopleController {
     @ZodParam('id', uuidParamSchema) id: string,
     @ZodBody(setRoleRequestSchema) dto: SetRoleRequest,
     @CurrentUser() admin: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<PersonAccount> {
-    return this.people.setRole(admin, id, dto.role);
+    return this.people.setRole(admin, id, dto.role, locale);
   }
 
   @Patch(':id/access')
@@ -47,7 +51,8 @@ export class PeopleController {
     @ZodParam('id', uuidParamSchema) id: string,
     @ZodBody(setAccessRequestSchema) dto: SetAccessRequest,
     @CurrentUser() admin: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<PersonAccount> {
-    return this.people.setAccess(admin, id, dto.disabled);
+    return this.people.setAccess(admin, id, dto.disabled, undefined, locale);
   }
 }

@@ -15,8 +15,11 @@ import { MixContextService } from '../mix-context/mix-context.service.js';
 export class CalendarService {
   constructor(private readonly ctx: MixContextService) {}
 
-  build(req: CalendarRequest): SowingCalendar {
-    this.ctx.assertKnown(req.plans.map((p, i) => ({ field: `plans.${i}.slug`, slug: p.slug })));
+  build(req: CalendarRequest, locale: WordLocale = 'en'): SowingCalendar {
+    this.ctx.assertKnown(
+      req.plans.map((p, i) => ({ field: `plans.${i}.slug`, slug: p.slug })),
+      locale,
+    );
     const today = this.today(req);
     return buildSowingCalendar({
       lastFrost: req.lastFrost,
@@ -26,11 +29,17 @@ export class CalendarService {
     });
   }
 
-  toCsv(calendar: SowingCalendar): string {
-    return calendarToCsv(calendar, (slug) => {
-      const s = this.ctx.get(slug);
-      return s && { commonName: s.commonNames[0], scientificName: s.scientificName };
-    });
+  /** One row per event and warning; header, step titles, details and warnings in the reader's language. */
+  toCsv(calendar: SowingCalendar, locale: WordLocale = 'en'): string {
+    const words = calendarIn(calendar, locale, (slug) => this.ctx.get(slug));
+    return calendarToCsv(
+      words,
+      (slug) => {
+        const s = this.ctx.get(slug);
+        return s && { commonName: s.commonNames[0], scientificName: s.scientificName };
+      },
+      locale,
+    );
   }
 
   /**

@@ -32,8 +32,15 @@ export class PlanningController {
   @Post('quantities')
   @ZodResponse(z.array(mixQuantitySchema))
   @HttpCode(200)
-  quantities(@ZodBody(quantitiesRequestSchema) body: QuantitiesRequest): MixQuantity[] {
-    this.ctx.assertKnown(body.species.map((s, i) => ({ field: `species.${i}.slug`, slug: s.slug })));
+  @AnswersInLanguage()
+  quantities(
+    @ZodBody(quantitiesRequestSchema) body: QuantitiesRequest,
+    @RequestLocale() locale: WordLocale,
+  ): MixQuantity[] {
+    this.ctx.assertKnown(
+      body.species.map((s, i) => ({ field: `species.${i}.slug`, slug: s.slug })),
+      locale,
+    );
     const spacingIn = Object.fromEntries(body.species.filter((s) => s.spacingIn).map((s) => [s.slug, s.spacingIn!]));
     return mixQuantities(
       body.species.map((s) => this.ctx.get(s.slug)!),
@@ -45,8 +52,9 @@ export class PlanningController {
   @Post('calendar')
   @ZodResponse(sowingCalendarSchema)
   @HttpCode(200)
-  json(@ZodBody(calendarRequestSchema) body: CalendarRequest): CalendarResponse {
-    return this.calendar.build(body);
+  @AnswersInLanguage()
+  json(@ZodBody(calendarRequestSchema) body: CalendarRequest, @RequestLocale() locale: WordLocale): CalendarResponse {
+    return this.calendar.build(body, locale);
   }
 
   @Post('calendar.csv')
@@ -54,8 +62,9 @@ export class PlanningController {
   @HttpCode(200)
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="homeground-sowing-calendar.csv"')
-  csv(@ZodBody(calendarRequestSchema) body: CalendarRequest): string {
-    return this.calendar.toCsv(this.calendar.build(body));
+  @AnswersInLanguage()
+  csv(@ZodBody(calendarRequestSchema) body: CalendarRequest, @RequestLocale() locale: WordLocale): string {
+    return this.calendar.toCsv(this.calendar.build(body, locale), locale);
   }
 
   @Post('calendar.ics')
@@ -65,6 +74,6 @@ export class PlanningController {
   @Header('Content-Disposition', 'attachment; filename="homeground-sowing-calendar.ics"')
   @AnswersInLanguage()
   ics(@ZodBody(calendarRequestSchema) body: CalendarRequest, @RequestLocale() locale: WordLocale): string {
-    return this.calendar.toIcs(this.calendar.build(body), body, locale);
+    return this.calendar.toIcs(this.calendar.build(body, locale), body, locale);
   }
 }

@@ -24,8 +24,8 @@ export class MixesService {
 
   constructor(private readonly ctx: MixContextService) {}
 
-  recommend(site: Site, regionIn: RegionContext): RecommendationsResponse {
-    const region = this.ctx.region(regionIn);
+  recommend(site: Site, regionIn: RegionContext, locale: WordLocale = 'en'): RecommendationsResponse {
+    const region = this.ctx.region(regionIn, locale);
     const r = recommend(this.ctx.species(), site, region, {}, RECOMMENDATION_LIST_LIMITS);
     const withSpecies = <T extends { slug: string }>(list: T[]) =>
       list.map((x) => ({ ...x, species: this.ctx.summary(x.slug) }));
@@ -49,7 +49,7 @@ export class MixesService {
     options: PaletteOptions,
     locale: WordLocale,
   ): MixResponse {
-    const region = this.ctx.region(regionIn);
+    const region = this.ctx.region(regionIn, locale);
     const palette = balancePalette({ species: this.ctx.species(), site, region, options, locale });
     const chosen = palette.chosen.map((c) => this.ctx.get(c.slug)!);
     return {
@@ -68,9 +68,13 @@ export class MixesService {
     chosen: string[],
     slot: string,
     acrossForms = false,
+    locale: WordLocale = 'en',
   ): AlternativesResponse {
-    this.ctx.assertKnown([...chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })), { field: 'slot', slug: slot }]);
-    const region = this.ctx.region(regionIn);
+    this.ctx.assertKnown(
+      [...chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })), { field: 'slot', slug: slot }],
+      locale,
+    );
+    const region = this.ctx.region(regionIn, locale);
     const list = alternativesFor({ species: this.ctx.species(), site, region, options }, chosen, slot, 5, {
       acrossForms,
     });

@@ -38,7 +38,7 @@ export class RecommendationsController {
     @ZodBody(recommendRequestSchema) body: Parsed<typeof recommendRequestSchema>,
     @RequestLocale() locale: WordLocale,
   ): RecommendationsResponse {
-    return recommendationsIn(this.mixes.recommend(body.site, body.region), locale);
+    return recommendationsIn(this.mixes.recommend(body.site, body.region, locale), locale);
   }
 
   /** A balanced mix for the site, honouring locks and exclusions, with quantities and the design rules met or not. */
@@ -63,7 +63,7 @@ export class RecommendationsController {
     @RequestLocale() locale: WordLocale,
   ): AlternativesResponse {
     return alternativesIn(
-      this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot, body.acrossForms),
+      this.mixes.alternatives(body.site, body.region, body.options, body.chosen, body.slot, body.acrossForms, locale),
       locale,
     );
   }

@@ -1,6 +1,12 @@
 import { Controller, Delete, Get, HttpCode, Post } from '@nestjs/common';
 import { ApiNoContentResponse, ApiTags } from '@nestjs/swagger';
-import { type SavedMix, savedMixSchema, saveMixRequestSchema, uuidParamSchema } from '@homeground/shared';
+import {
+  type SavedMix,
+  savedMixSchema,
+  saveMixRequestSchema,
+  uuidParamSchema,
+  type WordLocale,
+} from '@homeground/shared';
 import { z } from 'zod';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
@@ -8,10 +14,12 @@ import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { ZodBody, ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { SavedMixesService } from './saved-mixes.service.js';
 import { Public } from '../common/decorators/public.decorator.js';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 
 type Parsed<S extends z.ZodType> = z.infer<S>;
 
 @ApiTags('mixes')
+@AnswersInLanguage()
 @Controller()
 export class SavedMixesController {
   constructor(private readonly saved: SavedMixesService) {}
@@ -22,8 +30,9 @@ export class SavedMixesController {
   save(
     @ZodBody(saveMixRequestSchema) body: Parsed<typeof saveMixRequestSchema>,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<SavedMix> {
-    return this.saved.save(user, { ...body, request: body.request as unknown as SavedMix['request'] });
+    return this.saved.save(user, { ...body, request: body.request as unknown as SavedMix['request'] }, locale);
   }
 
   @Get('mixes')
@@ -37,15 +46,19 @@ export class SavedMixesController {
   @Public()
   @Get('mixes/:id')
   @ZodResponse(savedMixSchema)
-  get(@ZodParam('id', uuidParamSchema) id: string): Promise<SavedMix> {
-    return this.saved.get(id);
+  get(@ZodParam('id', uuidParamSchema) id: string, @RequestLocale() locale: WordLocale): Promise<SavedMix> {
+    return this.saved.get(id, locale);
   }
 
   @Delete('mixes/:id')
   @ApiNoContentResponse({ description: 'Deleted' })
   @HttpCode(204)
   @Auth()
-  remove(@ZodParam('id', uuidParamSchema) id: string, @CurrentUser() user: AuthenticatedUser): Promise<void> {
-    return this.saved.remove(user, id);
+  remove(
+    @ZodParam('id', uuidParamSchema) id: string,
+    @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
+  ): Promise<void> {
+    return this.saved.remove(user, id, locale);
   }
 }

@@ -1,8 +1,9 @@
 import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { firstName, type SavedMix } from '@homeground/shared';
+import { firstName, type SavedMix, type WordLocale } from '@homeground/shared';
 import { Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SavedMixRow } from './saved-mix.entity.js';
 
@@ -18,22 +19,23 @@ export class SavedMixesService {
     private readonly ctx: MixContextService,
   ) {}
 
-  async save(user: AuthenticatedUser, input: SaveInput): Promise<SavedMix> {
-    this.ctx.assertKnown(input.chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })));
+  async save(user: AuthenticatedUser, input: SaveInput, locale: WordLocale = 'en'): Promise<SavedMix> {
+    this.ctx.assertKnown(
+      input.chosen.map((slug, i) => ({ field: `chosen.${i}`, slug })),
+      locale,
+    );
     const kept = await this.mixes.count({ where: { ownerId: user.id } });
     if (kept >= MAX_SAVED_MIXES_PER_PERSON)
-      throw new ConflictException(
-        `You already keep ${MAX_SAVED_MIXES_PER_PERSON} saved mixes: delete one you no longer need, then save this one.`,
-      );
+      throw new ConflictException(apiWords(locale)('refusals.savedMixes.tooMany', { max: MAX_SAVED_MIXES_PER_PERSON }));
     const row = await this.mixes.save(
       this.mixes.create({ ownerId: user.id, name: input.name, request: input.request, chosen: input.chosen }),
     );
-    return this.get(row.id);
+    return this.get(row.id, locale);
   }
 
-  async get(id: string): Promise<SavedMix> {
+  async get(id: string, locale: WordLocale = 'en'): Promise<SavedMix> {
     const row = await this.mixes.findOne({ where: { id }, relations: { owner: true } });
-    if (!row) throw new NotFoundException('No saved mix with that link: it may have been deleted.');
+    if (!row) throw new NotFoundException(apiWords(locale)('refusals.savedMixes.noLink'));
     return toDto(row);
   }
 
@@ -46,11 +48,12 @@ export class SavedMixesService {
     return rows.map(toDto);
   }
 
-  async remove(user: AuthenticatedUser, id: string): Promise<void> {
+  async remove(user: AuthenticatedUser, id: string, locale: WordLocale = 'en'): Promise<void> {
+    const say = apiWords(locale);
     const row = await this.mixes.findOne({ where: { id } });
-    if (!row) throw new NotFoundException('No saved mix with that id.');
+    if (!row) throw new NotFoundException(say('refusals.savedMixes.noId'));
     if (row.ownerId !== user.id && user.role !== 'admin')
-      throw new ForbiddenException('Only the person who saved a mix can delete it.');
+      throw new ForbiddenException(say('refusals.savedMixes.notYours'));
     await this.mixes.delete({ id });
   }
 }

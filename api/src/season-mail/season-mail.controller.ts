@@ -10,7 +10,9 @@ import {
   type FrostWarningRequest,
   type WeeklySummaryAnswer,
   type WeeklySummaryRequest,
+  type WordLocale,
 } from '@homeground/shared';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
@@ -22,6 +24,7 @@ const today = () => new Date().toISOString().slice(0, 10);
 
 /** E-mail an organiser sends to the season's growers. */
 @ApiTags('batches')
+@AnswersInLanguage()
 @Controller('groups/:slug/season')
 @Auth()
 export class SeasonMailController {
@@ -35,8 +38,9 @@ export class SeasonMailController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(frostWarningRequestSchema) body: FrostWarningRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<FrostWarningAnswer> {
-    return this.seasonMail.frostWarning(slug, user, body, today());
+    return this.seasonMail.frostWarning(slug, user, body, today(), locale);
   }
 
   /** Sends this week's summary now to each grower who has not had it this week (organisers). */
@@ -47,7 +51,8 @@ export class SeasonMailController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(weeklySummaryRequestSchema) _body: WeeklySummaryRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<WeeklySummaryAnswer> {
-    return this.seasonMail.sendWeeklyNow(slug, user, today());
+    return this.seasonMail.sendWeeklyNow(slug, user, today(), locale);
   }
 }

@@ -15,12 +15,13 @@ import {
   type FrostWarningAnswer,
   type FrostWarningRequest,
   type WeeklySummaryAnswer,
+  type WordLocale,
 } from '@homeground/shared';
 import { Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { runSql } from '../common/database/dialect.js';
 import { BatchesService } from '../batches/batches.service.js';
-import { badRequest } from '../common/validation/bad-request.js';
+import { badRequestIn } from '../common/validation/bad-request.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MailService } from '../mail/mail.service.js';
@@ -89,11 +90,13 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
     user: AuthenticatedUser,
     req: FrostWarningRequest,
     today: string,
+    locale: WordLocale = 'en',
   ): Promise<FrostWarningAnswer> {
-    const c = await this.batches.organiser(slug, user);
+    // The locale words refusals only: each e-mail goes in its own words (see the mail builders).
+    const c = await this.batches.organiser(slug, user, locale);
     const latest = addDays(today, FROST_WARNING_DAYS_AHEAD);
     if (req.night < today || req.night > latest)
-      throw badRequest([{ field: 'night', message: `must be from ${today} to ${latest}` }]);
+      throw badRequestIn(locale, [{ field: 'night', message: `must be from ${today} to ${latest}` }]);
     const all = await this.batches.batchesOf(slug, user, c, today);
     const people = await this.groups.members(slug, user);
     const organiser = people.find((p) => p.userId === user.id)?.displayName ?? c.group.name;
@@ -125,8 +128,13 @@ export class SeasonMailService implements OnApplicationBootstrap, OnModuleDestro
   }
 
   /** An organiser's "send now": this week's summary to each grower of the group who has not had it. */
-  async sendWeeklyNow(slug: string, user: AuthenticatedUser, today: string): Promise<WeeklySummaryAnswer> {
-    await this.batches.organiser(slug, user);
+  async sendWeeklyNow(
+    slug: string,
+    user: AuthenticatedUser,
+    today: string,
+    locale: WordLocale = 'en',
+  ): Promise<WeeklySummaryAnswer> {
+    await this.batches.organiser(slug, user, locale);
     return this.sendWeekly(slug, user, today);
   }
 

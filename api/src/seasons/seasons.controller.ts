@@ -27,6 +27,7 @@ import { type SeasonSeedList, SeasonsService } from './seasons.service.js';
  * with the shared zod schemas, one pipe per body/param, so a change of validation mechanism is mechanical.
  */
 @ApiTags('seasons')
+@AnswersInLanguage()
 @Controller('groups/:slug/season')
 @Auth()
 export class SeasonsController {
@@ -34,8 +35,12 @@ export class SeasonsController {
 
   @Get()
   @ZodResponse(seasonSchema)
-  get(@ZodParam('slug', slugParamSchema) slug: string, @CurrentUser() user: AuthenticatedUser): Promise<Season> {
-    return this.seasons.get(slug, user);
+  get(
+    @ZodParam('slug', slugParamSchema) slug: string,
+    @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
+  ): Promise<Season> {
+    return this.seasons.get(slug, user, locale);
   }
 
   @Put()
@@ -44,9 +49,10 @@ export class SeasonsController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(seasonRequestSchema) body: SeasonRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<Season> {
     // The API reads the clock; shared code never does.
-    return this.seasons.put(slug, user, body, new Date().toISOString().slice(0, 10));
+    return this.seasons.put(slug, user, body, new Date().toISOString().slice(0, 10), locale);
   }
 
   /** Proposes species for the season with why; writes nothing. */
@@ -57,8 +63,9 @@ export class SeasonsController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(shareListRequestSchema) body: ShareListRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<ShareList> {
-    return this.seasons.propose(slug, user, body);
+    return this.seasons.propose(slug, user, body, locale);
   }
 
   /** Replaces the whole target list. */
@@ -68,8 +75,9 @@ export class SeasonsController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(targetsRequestSchema) body: TargetsRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<Season> {
-    return this.seasons.setTargets(slug, user, body);
+    return this.seasons.setTargets(slug, user, body, locale);
   }
 
   @Get('seed-list')

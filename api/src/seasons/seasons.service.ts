@@ -24,7 +24,8 @@ import {
 import { DataSource, Repository } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
 import { runSql } from '../common/database/dialect.js';
-import { badRequest } from '../common/validation/bad-request.js';
+import { apiWords } from '../common/i18n/api-i18n.js';
+import { badRequestIn } from '../common/validation/bad-request.js';
 import { GroupsService } from '../groups/groups.service.js';
 import { MixContextService } from '../mix-context/mix-context.service.js';
 import { SeasonTargetRow } from './season-target.entity.js';
@@ -68,17 +69,23 @@ export class SeasonsService {
     private readonly ctx: MixContextService,
   ) {}
 
-  async get(slug: string, user: AuthenticatedUser): Promise<Season> {
-    const group = await this.readable(slug, user);
-    const season = await this.latest(group);
+  async get(slug: string, user: AuthenticatedUser, locale: WordLocale = 'en'): Promise<Season> {
+    const group = await this.readable(slug, user, locale);
+    const season = await this.latest(group, locale);
     return this.toDto(group, season, await this.targetsOf(season));
   }
 
   /** Sets the season's dates and settings (creates the season for that year if new). `today` is the server's date. */
-  async put(slug: string, user: AuthenticatedUser, req: SeasonRequest, today: string): Promise<Season> {
-    const group = await this.managed(slug, user);
+  async put(
+    slug: string,
+    user: AuthenticatedUser,
+    req: SeasonRequest,
+    today: string,
+    locale: WordLocale = 'en',
+  ): Promise<Season> {
+    const group = await this.managed(slug, user, locale);
     const past = pastSeasonDateFields(req, today);
-    if (past.length) throw badRequest(past);
+    if (past.length) throw badRequestIn(locale, past);
     const saved = await this.db.transaction(async (tx) => {
       const existing = await tx.findOne(SeasonRow, { where: { groupId: group.id, year: req.year } });
       const row =
@@ -106,9 +113,14 @@ export class SeasonsService {
   }
 
   /** Proposes a share list for the group's ecoregion; writes nothing. */
-  async propose(slug: string, user: AuthenticatedUser, req: ShareListRequest): Promise<ShareList> {
-    const group = await this.managed(slug, user);
-    if (!group.ecoregionCode) throw new ConflictException('This group has no ecoregion yet: set its place first.');
+  async propose(
+    slug: string,
+    user: AuthenticatedUser,
+    req: ShareListRequest,
+    locale: WordLocale = 'en',
+  ): Promise<ShareList> {
+    const group = await this.managed(slug, user, locale);
+    if (!group.ecoregionCode) throw new ConflictException(apiWords(locale)('refusals.seasons.noEcoregion'));
     const season = await this.seasons.findOne({ where: { groupId: group.id }, order: { year: 'DESC' } });
     return proposeShareList({
       species: this.ctx.species(),
@@ -122,10 +134,18 @@ export class SeasonsService {
   }
 
   /** Replaces the season's targets with the list given, in its order. */
-  async setTargets(slug: string, user: AuthenticatedUser, req: TargetsRequest): Promise<Season> {
-    const group = await this.managed(slug, user);
-    const season = await this.latest(group);
-    this.ctx.assertKnown(req.targets.map((t, i) => ({ field: `targets.${i}.slug`, slug: t.slug })));
+  async setTargets(
+    slug: string,
+    user: AuthenticatedUser,
+    req: TargetsRequest,
+    locale: WordLocale = 'en',
+  ): Promise<Season> {
+    const group = await this.managed(slug, user, locale);
+    const season = await this.latest(group, locale);
+    this.ctx.assertKnown(
+      req.targets.map((t, i) => ({ field: `targets.${i}.slug`, slug: t.slug })),
+      locale,
+    );
     const reached = await this.reachedGermination(group.id, season.year);
     const rows = await this.db.transaction(async (tx) => {
       await tx.delete(SeasonTargetRow, { seasonId: season.id });
@@ -180,8 +200,8 @@ export class SeasonsService {
 
   /** The seed list; its cautions and collecting notes in `locale`. */
   async seedList(slug: string, user: AuthenticatedUser, locale: WordLocale = 'en'): Promise<SeasonSeedList> {
-    const group = await this.readable(slug, user);
-    const season = await this.latest(group);
+    const group = await this.readable(slug, user, locale);
+    const season = await this.latest(group, locale);
     const targets = (await this.targetsOf(season)).flatMap((t) => {
       const species = this.ctx.get(t.slug);
       // A target renamed away in the catalogue has no record to count from; the season page still lists it.
@@ -202,11 +222,11 @@ export class SeasonsService {
    * The group's newest season for another module (batches), when the caller has a role in the group;
    * 403 otherwise, 404 when the group or its season does not exist.
    */
-  async context(slug: string, user: AuthenticatedUser): Promise<SeasonContext> {
-    const group = await this.groups.getDto(slug);
+  async context(slug: string, user: AuthenticatedUser, locale: WordLocale = 'en'): Promise<SeasonContext> {
+    const group = await this.groups.getDto(slug, locale);
     const role = await this.groups.roleOf(user, group.id);
-    if (!role) throw new ForbiddenException('Only people in this group can see its season.');
-    const season = await this.latest(group);
+    if (!role) throw new ForbiddenException(apiWords(locale)('refusals.seasons.seasonMembersOnly'));
+    const season = await this.latest(group, locale);
     const targets = await this.targetsOf(season);
     return {
       group,
@@ -268,26 +288,25 @@ export class SeasonsService {
   }
 
   /** The group, when the caller has any role in it (member, grower, organiser; admins act as organisers). */
-  private async readable(slug: string, user: AuthenticatedUser): Promise<Group> {
-    const group = await this.groups.getDto(slug);
+  private async readable(slug: string, user: AuthenticatedUser, locale: WordLocale): Promise<Group> {
+    const group = await this.groups.getDto(slug, locale);
     if (!(await this.groups.roleOf(user, group.id)))
-      throw new ForbiddenException('Only people in this group can see its season plan.');
+      throw new ForbiddenException(apiWords(locale)('refusals.seasons.planMembersOnly'));
     return group;
   }
 
-  private async managed(slug: string, user: AuthenticatedUser): Promise<Group> {
-    const group = await this.groups.getDto(slug);
+  private async managed(slug: string, user: AuthenticatedUser, locale: WordLocale): Promise<Group> {
+    const group = await this.groups.getDto(slug, locale);
     if ((await this.groups.roleOf(user, group.id)) !== 'organiser') {
-      throw new ForbiddenException('Only an organiser of this group can change its season plan.');
+      throw new ForbiddenException(apiWords(locale)('refusals.seasons.organiserChanges'));
     }
     return group;
   }
 
   /** The group's newest season. */
-  private async latest(group: Group): Promise<SeasonRow> {
+  private async latest(group: Group, locale: WordLocale): Promise<SeasonRow> {
     const season = await this.seasons.findOne({ where: { groupId: group.id }, order: { year: 'DESC' } });
-    if (!season)
-      throw new NotFoundException(`${group.name} has no season plan yet: an organiser sets its dates first.`);
+    if (!season) throw new NotFoundException(apiWords(locale)('refusals.seasons.noPlan', { group: group.name }));
     return season;
   }
 

@@ -1,6 +1,7 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import type { Species, SpeciesChange } from '@homeground/shared';
+import type { Species, SpeciesChange, WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { Repository } from 'typeorm';
 import { SpeciesChangeRow } from './species-change.entity.js';
 import { SpeciesService } from './species.service.js';
@@ -25,12 +26,12 @@ export class SpeciesHistoryService {
   }
 
   /** Puts back the record as it was before the change, as a new "revert" change. */
-  async revert(slug: string, changeId: string, userId: string): Promise<Species> {
+  async revert(slug: string, changeId: string, userId: string, locale: WordLocale = 'en'): Promise<Species> {
+    const say = apiWords(locale);
     const row = await this.rows.findOneBy({ id: changeId, slug });
-    if (!row) throw new NotFoundException(`No change ${changeId} in the history of "${slug}".`);
-    if (!row.beforeRecord)
-      throw new ConflictException('This change added the species: there is no earlier version to go back to.');
-    return this.species.replace(slug, row.beforeRecord, userId, { kind: 'revert', revertOf: row.id });
+    if (!row) throw new NotFoundException(say('refusals.species.noChange', { changeId, slug }));
+    if (!row.beforeRecord) throw new ConflictException(say('refusals.species.firstVersion'));
+    return this.species.replace(slug, row.beforeRecord, userId, { kind: 'revert', revertOf: row.id }, locale);
   }
 }
 

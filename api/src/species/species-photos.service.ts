@@ -2,7 +2,8 @@ import { existsSync, mkdirSync } from 'node:fs';
 import { rename, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { Inject, Injectable, NotFoundException, UnsupportedMediaTypeException } from '@nestjs/common';
-import { PHOTO_WIDTHS, type PhotoCredit } from '@homeground/shared';
+import { PHOTO_WIDTHS, type PhotoCredit, type WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp, { type Metadata } from 'sharp';
@@ -39,25 +40,36 @@ export class SpeciesPhotosService {
   }
 
   /** Stores a photo after checking its real type from its bytes (the name and the browser's word are not trusted). */
-  async save(slug: string, bytes: Buffer, credit: PhotoCredit, userId: string): Promise<SpeciesPhoto> {
-    if (!this.store.get(slug)) throw new NotFoundException(`No species "${slug}" in the catalogue.`);
+  async save(
+    slug: string,
+    bytes: Buffer,
+    credit: PhotoCredit,
+    userId: string,
+    locale: WordLocale = 'en',
+  ): Promise<SpeciesPhoto> {
+    if (!this.store.get(slug)) throw new NotFoundException(apiWords(locale)('refusals.species.noSpecies', { slug }));
     const type = await fileTypeFromBuffer(bytes);
     const ext = type && ACCEPTED.get(type.mime);
+    const say = apiWords(locale);
     if (!type || !ext) {
       throw new UnsupportedMediaTypeException(
-        `Photos must be JPEG, PNG or WebP; this file is ${type ? type.mime : 'not an image we recognise'}.`,
+        type ? say('refusals.species.photoType', { mime: type.mime }) : say('refusals.species.photoUnknownType'),
       );
     }
     let meta: Metadata;
     try {
       meta = await sharp(bytes).metadata();
     } catch {
-      throw new UnsupportedMediaTypeException('The photo could not be read: the file may be damaged.');
+      throw new UnsupportedMediaTypeException(say('refusals.species.photoUnreadable'));
     }
     const pixels = (meta.width ?? 0) * (meta.height ?? 0);
     if (pixels > MAX_PHOTO_PIXELS) {
       throw new TooLargeWithReason(
-        `The photo is ${meta.width} × ${meta.height} pixels; photos may have at most ${MAX_PHOTO_PIXELS / 1_000_000} megapixels. Please make it smaller and try again.`,
+        say('refusals.species.photoTooLarge', {
+          width: meta.width,
+          height: meta.height,
+          megapixels: MAX_PHOTO_PIXELS / 1_000_000,
+        }),
       );
     }
     mkdirSync(this.dir, { recursive: true });
@@ -91,9 +103,9 @@ export class SpeciesPhotosService {
   }
 
   /** The photo file to send, resized to one of PHOTO_WIDTHS (cached on disk) or as stored. */
-  async file(slug: string, width?: number): Promise<PhotoFile> {
+  async file(slug: string, width?: number, locale: WordLocale = 'en'): Promise<PhotoFile> {
     const photo = await this.db.getRepository(SpeciesPhoto).findOne({ where: { slug } });
-    if (!photo) throw new NotFoundException(`No photo for "${slug}" yet.`);
+    if (!photo) throw new NotFoundException(apiWords(locale)('refusals.species.noPhoto', { slug }));
     const original = path.join(this.dir, photo.file);
     if (!width || width >= photo.width) return { path: original, mime: photo.mime };
     const resized = path.join(this.dir, `${slug}-w${width}.webp`);

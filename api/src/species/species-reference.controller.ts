@@ -6,7 +6,9 @@ import {
   slugParamSchema,
   type UnexplainedDisagreements,
   unexplainedDisagreementsSchema,
+  type WordLocale,
 } from '@homeground/shared';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { Auth } from '../common/decorators/auth.decorator.js';
 import { ZodParam, ZodResponse } from '../common/decorators/zod.decorators.js';
 import { SpeciesReferenceService } from './species-reference.service.js';
@@ -29,7 +31,8 @@ export class SpeciesReferenceController {
   @Get(':slug')
   @ZodResponse(recordReferenceAnswerSchema)
   @Auth('curator')
-  record(@ZodParam('slug', slugParamSchema) slug: string): RecordReferenceAnswer {
-    return this.reference.record(slug);
+  @AnswersInLanguage()
+  record(@ZodParam('slug', slugParamSchema) slug: string, @RequestLocale() locale: WordLocale): RecordReferenceAnswer {
+    return this.reference.record(slug, locale);
   }
 }

@@ -4,7 +4,9 @@ import {
   type RecordReferenceAnswer,
   type ReferenceComparison,
   type UnexplainedDisagreements,
+  type WordLocale,
 } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import {
   type CatalogueNotes,
   compareWithReference,
@@ -43,9 +45,9 @@ export class SpeciesReferenceService {
   }
 
   /** One record beside the reference; 404 for a slug the catalogue does not hold. */
-  record(slug: string): RecordReferenceAnswer {
+  record(slug: string, locale: WordLocale = 'en'): RecordReferenceAnswer {
     const s = this.store.get(slug);
-    if (!s) throw new NotFoundException(`No species "${slug}" in the catalogue.`);
+    if (!s) throw new NotFoundException(apiWords(locale)('refusals.species.noSpecies', { slug }));
     const { missingFiles, tables } = this.reference();
     return {
       available: tables !== null,

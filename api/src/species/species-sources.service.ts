@@ -1,7 +1,8 @@
 import { Injectable } from '@nestjs/common';
-import { type Source, SOURCED_FIELDS, type Species } from '@homeground/shared';
+import { type Source, SOURCED_FIELDS, type Species, type WordLocale } from '@homeground/shared';
 import { loadCatalogue } from '@homeground/species-data';
-import { badRequest } from '../common/validation/bad-request.js';
+import { apiWords } from '../common/i18n/api-i18n.js';
+import { badRequest, pleaseCheck } from '../common/validation/bad-request.js';
 
 /** The sources registry (`species-data/sources.json`), read once; curators cite its keys. */
 @Injectable()
@@ -20,13 +21,15 @@ export class SpeciesSourcesService {
   }
 
   /** A record may only cite sources the registry holds, so every fact's citation can be shown. */
-  assertKnown(record: Species): void {
+  assertKnown(record: Species, locale: WordLocale = 'en'): void {
     const given = record.sources as Partial<Record<(typeof SOURCED_FIELDS)[number], string>>;
     const unknown = SOURCED_FIELDS.filter((f) => given[f] !== undefined && !this.keys.has(given[f]!));
     if (unknown.length > 0) {
-      throw badRequest(
-        unknown.map((f) => ({ field: `sources.${f}`, message: `"${given[f]}" is not in the sources registry` })),
-      );
+      const fields = unknown.map((f) => ({
+        field: `sources.${f}`,
+        message: apiWords(locale)('refusals.species.unknownSource', { source: given[f] }),
+      }));
+      throw badRequest(fields, pleaseCheck(fields, locale));
     }
   }
 }

@@ -23,7 +23,9 @@ import {
   speciesQuerySchema,
   speciesSchema,
   uuidParamSchema,
+  type WordLocale,
 } from '@homeground/shared';
+import { AnswersInLanguage, RequestLocale } from '../common/decorators/request-locale.decorator.js';
 import { z } from 'zod';
 import type { Request, Response } from 'express';
 import { createReadStream } from 'node:fs';
@@ -50,6 +52,7 @@ import { Public } from '../common/decorators/public.decorator.js';
 const MAX_CSV_BYTES = 10 * 1024 * 1024;
 
 @ApiTags('species')
+@AnswersInLanguage()
 @Controller('species')
 export class SpeciesController {
   constructor(
@@ -83,9 +86,9 @@ export class SpeciesController {
   @Public()
   @Get(':slug')
   @ZodResponse(speciesDetailSchema)
-  get(@ZodParam('slug', slugParamSchema) slug: string): SpeciesDetail {
+  get(@ZodParam('slug', slugParamSchema) slug: string, @RequestLocale() locale: WordLocale): SpeciesDetail {
     return {
-      ...this.species.get(slug),
+      ...this.species.get(slug, locale),
       hasPhoto: this.store.hasPhoto(slug),
       photoCredit: this.store.photoCredit(slug),
     };
@@ -94,8 +97,12 @@ export class SpeciesController {
   @Post()
   @ZodResponse(speciesSchema, 201)
   @Auth('curator')
-  create(@ZodBody(speciesSchema) record: Species, @CurrentUser() user: AuthenticatedUser): Promise<Species> {
-    return this.species.create(record, user.id);
+  create(
+    @ZodBody(speciesSchema) record: Species,
+    @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
+  ): Promise<Species> {
+    return this.species.create(record, user.id, locale);
   }
 
   @Put(':slug')
@@ -105,8 +112,9 @@ export class SpeciesController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodBody(speciesSchema) record: Species,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<Species> {
-    return this.species.replace(slug, record, user.id);
+    return this.species.replace(slug, record, user.id, undefined, locale);
   }
 
   /**
@@ -122,10 +130,15 @@ export class SpeciesController {
     @ZodFile('file', MAX_CSV_BYTES, "CSV with the export's columns") file: UploadedBlob,
     @ZodQuery(csvImportQuerySchema) query: CsvImportQuery,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<CsvImportResult> {
-    return this.species.importCsv(utf8Text(file.buffer, 'file'), user.id, displayFileName(file.originalname), {
-      dryRun: query.dryRun ?? false,
-    });
+    return this.species.importCsv(
+      utf8Text(file.buffer, 'file', locale),
+      user.id,
+      displayFileName(file.originalname),
+      { dryRun: query.dryRun ?? false },
+      locale,
+    );
   }
 
   /** Every change to the record, newest first: who, when, how, and each field before and after. */
@@ -146,8 +159,9 @@ export class SpeciesController {
     @ZodParam('changeId', uuidParamSchema) changeId: string,
     @ZodBody(revertChangeRequestSchema) _body: RevertChangeRequest,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<Species> {
-    return this.history_.revert(slug, changeId, user.id);
+    return this.history_.revert(slug, changeId, user.id, locale);
   }
 
   @Post(':slug/photo')
@@ -164,8 +178,9 @@ export class SpeciesController {
     file: UploadedBlob,
     @ZodFormFields(photoCreditSchema) credit: PhotoCredit,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ) {
-    const p = await this.photos.save(slug, file.buffer, credit, user.id);
+    const p = await this.photos.save(slug, file.buffer, credit, user.id, locale);
     return {
       slug: p.slug,
       photographer: credit.photographer,
@@ -185,8 +200,9 @@ export class SpeciesController {
     @ZodParam('slug', slugParamSchema) slug: string,
     @ZodQuery(photoQuerySchema) query: PhotoQuery,
     @Res({ passthrough: true }) res: Response,
+    @RequestLocale() locale: WordLocale,
   ): Promise<StreamableFile> {
-    const file = await this.photos.file(slug, query.w);
+    const file = await this.photos.file(slug, query.w, locale);
     res.setHeader('Cache-Control', 'public, max-age=3600');
     return new StreamableFile(createReadStream(file.path), { type: file.mime });
   }

@@ -9,7 +9,9 @@ import {
   SPECIES_CSV_COLUMNS,
   type Species,
   speciesToCsvRow,
+  type WordLocale,
 } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import Papa from 'papaparse';
 import { DataSource, type EntityManager } from 'typeorm';
 import { writeSpecies } from '../catalogue/catalogue-writer.js';
@@ -30,18 +32,18 @@ export class SpeciesService {
     private readonly sources: SpeciesSourcesService,
   ) {}
 
-  get(slug: string): Species {
+  get(slug: string, locale: WordLocale = 'en'): Species {
     const s = this.store.get(slug);
-    if (!s) throw new NotFoundException(`No species "${slug}" in the catalogue.`);
+    if (!s) throw new NotFoundException(apiWords(locale)('refusals.species.noSpecies', { slug }));
     return s;
   }
 
-  async create(record: Species, userId: string): Promise<Species> {
-    this.sources.assertKnown(record);
+  async create(record: Species, userId: string, locale: WordLocale = 'en'): Promise<Species> {
+    this.sources.assertKnown(record, locale);
     if (this.store.get(record.slug))
-      throw new ConflictException(`Species "${record.slug}" already exists: edit it instead.`);
+      throw new ConflictException(apiWords(locale)('refusals.species.existsEdit', { slug: record.slug }));
     await this.db.transaction(async (tx) => {
-      await this.assertUnique(tx, record, null);
+      await this.assertUnique(tx, record, null, locale);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId });
       await recordChange(tx, { kind: 'create', before: null, after: record, userId });
     });
@@ -55,13 +57,14 @@ export class SpeciesService {
     record: Species,
     userId: string,
     how: { kind: 'edit' | 'revert'; revertOf?: string } = { kind: 'edit' },
+    locale: WordLocale = 'en',
   ): Promise<Species> {
-    const before = this.get(slug);
-    this.sources.assertKnown(record);
+    const before = this.get(slug, locale);
+    this.sources.assertKnown(record, locale);
     if (record.slug !== slug && this.store.get(record.slug))
-      throw new ConflictException(`Species "${record.slug}" already exists.`);
+      throw new ConflictException(apiWords(locale)('refusals.species.exists', { slug: record.slug }));
     await this.db.transaction(async (tx) => {
-      await this.assertUnique(tx, record, slug);
+      await this.assertUnique(tx, record, slug, locale);
       await writeSpecies(tx, record, { seedHash: null, editedBy: userId, previousSlug: slug });
       await recordChange(tx, { kind: how.kind, before, after: record, userId, revertOf: how.revertOf });
     });
@@ -79,6 +82,7 @@ export class SpeciesService {
     userId: string,
     fileName: string | null = null,
     { dryRun = false }: { dryRun?: boolean } = {},
+    locale: WordLocale = 'en',
   ): Promise<CsvImportResult> {
     const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
       header: true,
@@ -112,9 +116,10 @@ export class SpeciesService {
     });
     if (errors.length === 0) errors.push(...this.crossRowConflicts(records));
     if (errors.length > 0) {
+      const say = apiWords(locale);
       throw badRequest(
-        [...new Set(errors.map((e) => e.field))].map((field) => ({ field, message: 'see rows' })),
-        `The file has ${errors.length} problem(s); nothing was imported.`,
+        [...new Set(errors.map((e) => e.field))].map((field) => ({ field, message: say('refusals.species.seeRows') })),
+        say('refusals.species.fileProblems', { count: errors.length }),
         { rows: errors.slice(0, MAX_REPORTED_ROW_ERRORS) },
       );
     }
@@ -146,7 +151,7 @@ export class SpeciesService {
   }
 
   /** A symbol or scientific name may belong to one species only (other than the one being replaced). */
-  private async assertUnique(tx: EntityManager, r: Species, ownSlug: string | null): Promise<void> {
+  private async assertUnique(tx: EntityManager, r: Species, ownSlug: string | null, locale: WordLocale): Promise<void> {
     const clash = await runSql<{ slug: string }>(
       tx,
       `SELECT slug FROM species WHERE (usda_symbol = ? OR scientific_name = ?) AND slug <> ? AND slug <> ?`,
@@ -154,7 +159,11 @@ export class SpeciesService {
     );
     if (clash.length)
       throw new ConflictException(
-        `USDA symbol ${r.usdaSymbol} or name ${r.scientificName} is already used by "${clash[0].slug}".`,
+        apiWords(locale)('refusals.species.clash', {
+          symbol: r.usdaSymbol,
+          name: r.scientificName,
+          slug: clash[0].slug,
+        }),
       );
   }
 

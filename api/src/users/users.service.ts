@@ -1,6 +1,7 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import type { GlobalRole, User as UserDto } from '@homeground/shared';
+import type { GlobalRole, User as UserDto, WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { Repository } from 'typeorm';
 import { User } from './user.entity.js';
 import { toUserCredentials, toUserDto, type UserCredentials } from './users.mapper.js';
@@ -26,22 +27,24 @@ export class UsersService {
     return user && toUserCredentials(user);
   }
 
-  async getDto(id: string): Promise<UserDto> {
+  async getDto(id: string, locale: WordLocale = 'en'): Promise<UserDto> {
     const user = await this.users.findOne({ where: { id }, relations: { memberships: { group: true } } });
-    if (!user) throw new NotFoundException('No such user.');
+    if (!user) throw new NotFoundException(apiWords(locale)('refusals.people.noUser'));
     return toUserDto(user);
   }
 
-  async create(input: {
-    email: string;
-    displayName: string;
-    passwordHash: string;
-    role?: GlobalRole;
-    isDemo?: boolean;
-  }): Promise<UserDto> {
+  async create(
+    input: {
+      email: string;
+      displayName: string;
+      passwordHash: string;
+      role?: GlobalRole;
+      isDemo?: boolean;
+    },
+    locale: WordLocale = 'en',
+  ): Promise<UserDto> {
     const email = input.email.toLowerCase();
-    if (await this.findByEmail(email))
-      throw new ConflictException('An account with this e-mail already exists: sign in instead.');
+    if (await this.findByEmail(email)) throw new ConflictException(apiWords(locale)('refusals.people.emailTaken'));
     const saved = await this.users.save(
       this.users.create({ ...input, email, role: input.role ?? 'member', isDemo: input.isDemo ?? false }),
     );

@@ -101,6 +101,17 @@ describe('CSV export (RFC 4180)', () => {
     for (const w of c.warnings) expect(csv).toContain(csvField(w.message));
   });
 
+  it('words the header and warning titles in Spanish for es, the same rows and kind codes otherwise', () => {
+    const c = build(base);
+    const en = calendarToCsv(c, names).split('\r\n');
+    const es = calendarToCsv(c, names, 'es').split('\r\n');
+    expect(es[0]).toBe('fecha,especie,nombre científico,tipo,título,detalle');
+    expect(es).toHaveLength(en.length);
+    expect(es.filter((l) => l.includes(',warning:'))).toHaveLength(c.warnings.length);
+    expect(es.join('\n')).not.toContain('Please note');
+    expect(es.filter((l) => l.includes('Ten en cuenta'))).toHaveLength(c.warnings.length);
+  });
+
   it('quotes commas, quotes and line breaks', () => {
     expect(csvField('plain')).toBe('plain');
     expect(csvField('a, "b"')).toBe('"a, ""b"""');

@@ -1,6 +1,8 @@
 import { type CanActivate, type ExecutionContext, ForbiddenException, Injectable } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
-import type { GlobalRole } from '@homeground/shared';
+import { type GlobalRole, type WordLocale, wordsFor } from '@homeground/shared';
+import { apiWords } from '../i18n/api-i18n.js';
+import { negotiateLocale } from '../i18n/negotiate-locale.js';
 import type { AuthenticatedUser } from '../../auth/authenticated-user.js';
 import { ROLES_KEY } from '../decorators/roles.decorator.js';
 
@@ -15,8 +17,18 @@ export class RolesGuard implements CanActivate {
       context.getClass(),
     ]);
     if (!roles || roles.length === 0) return true;
-    const user = context.switchToHttp().getRequest<{ user?: AuthenticatedUser }>().user;
+    const request = context
+      .switchToHttp()
+      .getRequest<{ user?: AuthenticatedUser; headers: Record<string, string | string[] | undefined> }>();
+    const user = request.user;
     if (user && (user.role === 'admin' || roles.includes(user.role))) return true;
-    throw new ForbiddenException(`This needs the ${roles.join(' or ')} role.`);
+    throw new ForbiddenException(needsRole(roles, negotiateLocale(request.headers['accept-language'])));
   }
+}
+
+/** "This needs the curator role." in the reader's language: English keeps the role codes, others their titles. */
+function needsRole(roles: readonly GlobalRole[], locale: WordLocale): string {
+  const say = apiWords(locale);
+  const names = locale === 'en' ? roles : roles.map((r) => wordsFor(locale).globalRole[r].title);
+  return say('refusals.roles.needs', { roles: names.join(say('refusals.roles.or')) });
 }

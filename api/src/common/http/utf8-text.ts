@@ -1,4 +1,6 @@
-import { badRequest } from '../validation/bad-request.js';
+import type { WordLocale } from '@homeground/shared';
+import { apiWords } from '../i18n/api-i18n.js';
+import { badRequest, pleaseCheck } from '../validation/bad-request.js';
 
 const decoder = new TextDecoder('utf-8', { fatal: true });
 
@@ -7,17 +9,16 @@ const decoder = new TextDecoder('utf-8', { fatal: true });
  * Windows-1252 or UTF-16, say) instead of silently storing replacement characters. A leading byte-order
  * mark is dropped.
  */
-export function utf8Text(bytes: Uint8Array, field: string): string {
+export function utf8Text(bytes: Uint8Array, field: string, locale: WordLocale = 'en'): string {
+  const refuse = (key: 'validation.utf16' | 'validation.notUtf8') => {
+    const fields = [{ field, message: apiWords(locale)(key) }];
+    return badRequest(fields, pleaseCheck(fields, locale));
+  };
   if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)))
-    throw badRequest([{ field, message: 'is UTF-16 text: save it as "CSV UTF-8" and upload it again' }]);
+    throw refuse('validation.utf16');
   try {
     return decoder.decode(bytes).replace(/^\uFEFF/, '');
   } catch {
-    throw badRequest([
-      {
-        field,
-        message: 'is not UTF-8 text (another encoding, or not text): save it as "CSV UTF-8" and upload it again',
-      },
-    ]);
+    throw refuse('validation.notUtf8');
   }
 }

@@ -1,5 +1,5 @@
 import { BadRequestException } from '@nestjs/common';
-import type { ApiError, WordLocale } from '@homeground/shared';
+import { schemaSentenceIn, type ApiError, type WordLocale } from '@homeground/shared';
 import { apiWords } from '../i18n/api-i18n.js';
 
 /** One bad field of a request and the reason, as the 400 lists it. */
@@ -9,6 +9,15 @@ export type FieldProblem = NonNullable<ApiError['fields']>[number];
 export function pleaseCheck(fields: readonly FieldProblem[], locale: WordLocale = 'en'): string {
   const problems = fields.map((f) => `${f.field} ${f.message}`).join('; ');
   return apiWords(locale)('validation.pleaseCheck', { problems });
+}
+
+/**
+ * A 400 from the reasons of a shared check (season dates, batch log), each reason and the sentence
+ * in the reader's language through the shared sentence table; English reasons stay as they are.
+ */
+export function badRequestIn(locale: WordLocale, fields: readonly FieldProblem[]): BadRequestException {
+  const said = fields.map((f) => ({ ...f, message: schemaSentenceIn(locale, f.message) }));
+  return badRequest(said, pleaseCheck(said, locale));
 }
 
 /**

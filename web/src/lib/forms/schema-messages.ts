@@ -1,11 +1,13 @@
 import { useCallback } from 'react';
 import { useTranslation } from 'react-i18next';
+import { schemaSentenceIn } from '@homeground/shared';
 import { forms } from '../../locales/en/forms.js';
 import { useLocale } from '../i18n/index.js';
+import { asSentence } from './field-errors.js';
 
 type MessageKey = keyof typeof forms.messages;
 
-/** Each English message as a pattern; `{{count}}` matches the number the schema put there. */
+/** Each of the API's own English form messages as a pattern; `{{count}}` matches a number there. */
 const RULES = (Object.keys(forms.messages) as MessageKey[]).map((key) => {
   const escaped = forms.messages[key].replace(/[.*+?^${}()|[\]\\]/g, '\\$&').replace('\\{\\{count\\}\\}', '(\\d+)');
   return { key, pattern: new RegExp(`^${escaped}$`) };
@@ -13,7 +15,9 @@ const RULES = (Object.keys(forms.messages) as MessageKey[]).map((key) => {
 
 /**
  * The shared schemas and the API word their checks in English ("Must be at least 12 characters");
- * this says a known one in the page's language and leaves any other as it came. English passes
+ * this says a known one in the page's language and leaves any other as it came. A schema's field
+ * reason goes through the shared sentence table (`schemaSentenceIn`), the same one the API answers
+ * with, so a field says the same words whether the browser or the API caught it. English passes
  * through untouched.
  */
 export function useSchemaMessage(): (message: string) => string {
@@ -26,7 +30,11 @@ export function useSchemaMessage(): (message: string) => string {
         const match = pattern.exec(message);
         if (match) return t(`messages.${key}`, { count: Number(match[1] ?? 0) });
       }
-      return message;
+      // Beside a field the reason starts the sentence ("Must …"); the table holds the API's "must …".
+      const reason = message.charAt(0).toLowerCase() + message.slice(1);
+      const said = schemaSentenceIn(locale, reason);
+      if (said === reason) return message;
+      return message.charAt(0) === reason.charAt(0) ? said : asSentence(said);
     },
     [locale, t],
   );

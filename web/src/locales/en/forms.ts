@@ -1,14 +1,11 @@
 /**
- * Words of the forms: sign-in, register, and the messages the shared schemas and the API give. The
- * `messages` are the schemas' English sentences as a field shows them; other languages translate them
- * by matching these (see lib/forms/schema-messages.ts).
+ * Words of the forms: sign-in, register, and the API's own form-wide messages. The `messages` are the
+ * API's English sentences as the form shows them; other languages translate them by matching these
+ * (see lib/forms/schema-messages.ts). The schemas' field reasons ("must be at least 10 characters")
+ * come from the shared sentence table instead, so the web and the API say them the same way.
  */
 export const forms = {
   messages: {
-    empty: 'Must not be empty',
-    tooShort: 'Must be at least {{count}} characters',
-    tooLong: 'Must be at most {{count}} characters',
-    email: 'Must be an e-mail address',
     wrongCredentials: 'E-mail or password is wrong',
     throttled: 'Too many attempts: wait a minute and try again',
     emailTaken: 'An account with this e-mail already exists. Sign in instead.',

@@ -3,10 +3,6 @@ import type { forms as en } from '../en/forms.js';
 
 export const forms = {
   messages: {
-    empty: 'No puede quedar vacío',
-    tooShort: 'Escribe al menos {{count}} caracteres',
-    tooLong: 'Escribe como máximo {{count}} caracteres',
-    email: 'Escribe una dirección de correo electrónico, como nombre@example.org',
     wrongCredentials: 'El correo o la contraseña no son correctos',
     throttled: 'Demasiados intentos: espera un minuto y vuelve a intentarlo',
     emailTaken: 'Ya existe una cuenta con este correo. Mejor entra con ella.',

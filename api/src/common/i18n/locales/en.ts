@@ -13,6 +13,8 @@ export const en = {
     /** A 400's sentence listing each bad field and its reason ("name must be …; zip must be …"). */
     pleaseCheck: 'Please check: {{problems}}',
     notAField: 'is not a field this request accepts',
+    utf16: 'is UTF-16 text: save it as "CSV UTF-8" and upload it again',
+    notUtf8: 'is not UTF-8 text (another encoding, or not text): save it as "CSV UTF-8" and upload it again',
   },
   places: {
     unknownZipField: '{{zip}} is not a US ZIP code we know',
@@ -35,6 +37,99 @@ export const en = {
       GU: 'Guam',
       AS: 'American Samoa',
       MP: 'The Northern Mariana Islands',
+    },
+  },
+  /** Refusals of the areas people meet first (403/404/409): one whole sentence each. */
+  refusals: {
+    savedMixes: {
+      tooMany: 'You already keep {{max}} saved mixes: delete one you no longer need, then save this one.',
+      noLink: 'No saved mix with that link: it may have been deleted.',
+      noId: 'No saved mix with that id.',
+      notYours: 'Only the person who saved a mix can delete it.',
+    },
+    catalogue: {
+      ecoregionField: 'is not in the catalogue',
+      ecoregion: 'region.ecoregionCode is not in the catalogue',
+      slugField: '"{{slug}}" is not in the catalogue',
+      slugs: 'Not in the catalogue: {{slugs}}',
+    },
+    groups: {
+      noSlug: 'No group called "{{slug}}".',
+      noId: 'No such group.',
+      membersOnly: 'Only members of this group can see who is in it.',
+      organiserAdds: 'Only an organiser of this group can add people to it.',
+      noAccount: 'No account uses {{email}}: ask them to register first.',
+      organiserRemoves: 'Only an organiser of this group can remove people from it.',
+      notInGroup: 'That person is not in this group.',
+      lastOrganiser: "This is the group's only organiser: make someone else an organiser first.",
+    },
+    seasons: {
+      noEcoregion: 'This group has no ecoregion yet: set its place first.',
+      seasonMembersOnly: 'Only people in this group can see its season.',
+      planMembersOnly: 'Only people in this group can see its season plan.',
+      organiserChanges: 'Only an organiser of this group can change its season plan.',
+      noPlan: '{{group}} has no season plan yet: an organiser sets its dates first.',
+    },
+    batches: {
+      ownMethods: "Growers set their own methods and capacity, not someone else's.",
+      notAGrower: 'That person is not a grower or organiser of this group.',
+      noBatch: 'No such batch in this season.',
+      anotherGrower: 'This batch belongs to another grower.',
+      ownLog: 'Only the grower of this batch keeps its log.',
+      organiserOnly: 'Only an organiser of this group can do this.',
+      growersOnly: 'Batches are for the growers and organisers of this group.',
+      capacityBelowUsed: 'must be at least {{taken}}: the batches already take {{taken}} {{unit}}',
+      keepMethod: 'must keep {{method}}: batches use it',
+      notThisSeason: 'is not a batch of this season',
+      notOnTargets: '"{{slug}}" is not on the season\'s targets',
+      notAGrowerField: 'is not a grower of this group',
+      methodNotUsed: '{{name}} does not use this method',
+      overCapacity: 'takes {{name}} to {{total}} {{unit}}, over the {{capacity}} they can tend',
+      keepLogged: 'must keep every batch that has log entries (list it with its id)',
+      /** The unit each method counts in, as the reasons above say it (always more than one). */
+      units: { pot: 'pots', container: 'covered containers', block: 'soil blocks' },
+    },
+    invitations: {
+      organiserInvites: 'Only an organiser of this group can invite people to it.',
+      alreadyIn: '{{email}} is already in {{group}}: change their role in the member list instead.',
+      organiserSees: 'Only an organiser of this group can see its invitations.',
+    },
+    species: {
+      noSpecies: 'No species "{{slug}}" in the catalogue.',
+      noPhoto: 'No photo for "{{slug}}" yet.',
+      photoType: 'Photos must be JPEG, PNG or WebP; this file is {{mime}}.',
+      photoUnknownType: 'Photos must be JPEG, PNG or WebP; this file is not an image we recognise.',
+      photoUnreadable: 'The photo could not be read: the file may be damaged.',
+      photoTooLarge:
+        'The photo is {{width}} × {{height}} pixels; photos may have at most {{megapixels}} megapixels. Please make it smaller and try again.',
+      existsEdit: 'Species "{{slug}}" already exists: edit it instead.',
+      exists: 'Species "{{slug}}" already exists.',
+      noChange: 'No change {{changeId}} in the history of "{{slug}}".',
+      firstVersion: 'This change added the species: there is no earlier version to go back to.',
+      clash: 'USDA symbol {{symbol}} or name {{name}} is already used by "{{slug}}".',
+      unknownSource: '"{{source}}" is not in the sources registry',
+      seeRows: 'see rows',
+      fileProblems: 'The file has {{count}} problem(s); nothing was imported.',
+    },
+    ecoregions: {
+      noRegion: 'No EPA Level III ecoregion "{{code}}".',
+    },
+    people: {
+      noUser: 'No such user.',
+      emailTaken: 'An account with this e-mail already exists: sign in instead.',
+      noPerson: 'No such person.',
+      ownRole: 'You cannot change your own role: ask another admin to do it.',
+      ownAccess: 'You cannot switch off your own account.',
+    },
+    roles: {
+      /** `roles`: the role codes in English, the role titles elsewhere, joined by `or`. */
+      needs: 'This needs the {{roles}} role.',
+      or: ' or ',
+    },
+    outbox: {
+      readersOnly: 'Only organisers and admins can read the outbox.',
+      noMessage: 'No message with that id in the outbox.',
+      messageReaders: 'Only organisers of its group and admins can read this message.',
     },
   },
   auth: {

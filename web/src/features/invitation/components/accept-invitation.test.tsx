@@ -118,7 +118,7 @@ describe('accepting an invitation', () => {
     await user.type(screen.getByLabelText(/Tu nombre/), 'Juniper Okafor');
     await user.type(screen.getByLabelText(/^Contraseña/), 'corta');
     await user.click(screen.getByRole('button', { name: 'Crear mi cuenta y unirme' }));
-    expect(await screen.findByText('Escribe al menos 10 caracteres')).toBeInTheDocument();
+    expect(await screen.findByText('Debe tener al menos 10 caracteres')).toBeInTheDocument();
     expect(api.callsTo('POST', `${PREVIEW_PATH}/accept`)).toHaveLength(0);
 
     await user.clear(screen.getByLabelText(/^Contraseña/));
