@@ -229,6 +229,21 @@ describe('season plans (e2e, demo data)', () => {
       ]);
       expect(res.text).toContain("landowner's permission");
     });
+
+    it('exports the seed list CSV in Spanish when asked in Spanish: header, notes and cautions, same numbers', async () => {
+      const en = (await t.http.get(`${SEASON}/seed-list.csv`).set(bearer(tokens.member)).expect(200)).text;
+      const es = (
+        await t.http.get(`${SEASON}/seed-list.csv`).set(bearer(tokens.member)).set('Accept-Language', 'es').expect(200)
+      ).text;
+      const [enLines, esLines] = [en.split('\r\n'), es.split('\r\n')];
+      expect(esLines[0].split(',')[0]).toBe('especie');
+      expect(esLines).toHaveLength(enLines.length);
+      // Row by row the species and numbers match; the words around them are Spanish.
+      expect(esLines[1].split(',').slice(0, 11)).toEqual(enLines[1].split(',').slice(0, 11));
+      expect(es).toContain('Ten en cuenta');
+      expect(es).not.toContain('Please note');
+      expect(es).not.toContain("landowner's permission");
+    });
   });
 
   describe('bad input: 400 naming the field, and nothing written', () => {

@@ -98,7 +98,8 @@ export class SeasonsController {
   seedListCsv(
     @ZodParam('slug', slugParamSchema) slug: string,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<string> {
-    return this.seasons.seedListCsv(slug, user);
+    return this.seasons.seedListCsv(slug, user, locale);
   }
 }

@@ -267,8 +267,8 @@ export class SeasonsService {
     };
   }
 
-  async seedListCsv(slug: string, user: AuthenticatedUser): Promise<string> {
-    return seedListToCsv(await this.seedList(slug, user));
+  async seedListCsv(slug: string, user: AuthenticatedUser, locale: WordLocale = 'en'): Promise<string> {
+    return seedListToCsv(await this.seedList(slug, user, locale), locale);
   }
 
   /**

@@ -169,4 +169,25 @@ describe('seedListToCsv', () => {
       'butterfly milkweed,Asclepias tuberosa,,,,,,,,,,,,"Irritating sap: Milky sap, ""hours later"", hurts eyes."',
     );
   });
+
+  it('words the header, yes/no and caution rows in Spanish for es, with the same rows, numbers and codes', () => {
+    const s = sp({
+      slug: 'asclepias-tuberosa',
+      scientificName: 'Asclepias tuberosa',
+      commonNames: ['butterfly milkweed'],
+      germination: { seedsPerPound: 70_000, germinationRatePct: 60 },
+      cautions: [{ kind: 'sap-irritant', text: 'Milky sap hurts eyes.', source: 'x' }],
+    });
+    const targets = [{ species: s, targetPlants: 10 }];
+    const en = seedListToCsv(seedList(targets, { state: 'WI' })).split('\r\n');
+    const es = seedListToCsv(seedList(targets, { state: 'WI', locale: 'es' }), 'es').split('\r\n');
+    expect(es[0]).toBe(
+      'especie,nombre científico,meta de plantas,germinación %,germinación según,pérdida %,semillas a sembrar,semillas por libra,gramos,onzas,sobres,comprar por,recoger localmente,notas',
+    );
+    expect(es).toHaveLength(en.length);
+    // The numbers and the germination code are the same; only yes/no is worded.
+    expect(es[1]).toBe('butterfly milkweed,Asclepias tuberosa,10,60,record,20,21,70000,0.14,0.005,1,packets,no,');
+    expect(es.slice(2, 2 + SEED_LIST_CAUTIONS.length).every((l) => l.startsWith('Ten en cuenta,'))).toBe(true);
+    expect(es.join('\n')).not.toContain('Please note');
+  });
 });
