@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import Papa from 'papaparse';
 import { createTestApp, type TestApp } from './support/test-app.js';
 
 /**
@@ -185,6 +186,43 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
     expect(es.body.fields).toEqual([
       { field: 'file', message: 'es texto UTF-16: guárdalo como "CSV UTF-8" y súbelo otra vez' },
     ]);
+  });
+
+  // CSV injection (OWASP "CSV Injection"): a cell starting with "=" is refused on import, with its row.
+  it("a species CSV's row reasons in Spanish: a formula cell and a repeated slug, nothing written", async () => {
+    const csv = (await t.http.get('/api/species/export.csv').expect(200)).text;
+    const [header, first, second] = Papa.parse<string[]>(csv, { skipEmptyLines: true }).data;
+    const formula = [...first];
+    formula[header.indexOf('commonNames')] = '=HYPERLINK(x)';
+    const file = Papa.unparse([header, formula, second, second], { newline: '\r\n' });
+    const send = (language: string) =>
+      t.http
+        .post('/api/species/import')
+        .set(bearer(tokens.curator))
+        .set('Accept-Language', language)
+        .attach('file', Buffer.from(file), { filename: 'species.csv', contentType: 'text/csv' })
+        .expect(400);
+    const es = (await send('es')).body;
+    expect(es.message).toBe('El archivo tiene 2 problema(s); no se importó nada.');
+    expect(es.rows).toEqual([
+      {
+        row: 2,
+        field: 'commonNames',
+        message: 'empieza con "=", y las hojas de cálculo lo ejecutan como fórmula; quítalo',
+      },
+      { row: 4, field: 'slug', message: 'repite la línea 3' },
+    ]);
+    const en = (await send('en')).body;
+    expect(en.rows).toEqual([
+      {
+        row: 2,
+        field: 'commonNames',
+        message: 'starts with "=", which spreadsheet programs run as a formula; remove it',
+      },
+      { row: 4, field: 'slug', message: 'repeats line 3' },
+    ]);
+    const kept = (await t.http.get(`/api/species/${first[header.indexOf('slug')]}`).expect(200)).body;
+    expect(kept.commonNames).not.toContain('=HYPERLINK(x)');
   });
 
   // The type is sniffed from the bytes (file-type), not the name: a text file named .jpg is refused.

@@ -88,35 +88,37 @@ export class SpeciesService {
       header: true,
       skipEmptyLines: 'greedy',
     });
+    const say = apiWords(locale);
     const errors: CsvRowError[] = parsed.errors.map((e) => ({
       row: (e.row ?? 0) + 2,
       field: 'row',
-      message: e.message,
+      message: say('refusals.species.csvUnreadable', { reason: e.message }),
     }));
     const missing = SPECIES_CSV_COLUMNS.filter((c) => !(parsed.meta.fields ?? []).includes(c));
-    if (missing.length) errors.push({ row: 1, field: missing.join(', '), message: 'column missing from the header' });
-    if (parsed.data.length === 0) errors.push({ row: 2, field: 'row', message: 'the file has no species rows' });
+    if (missing.length)
+      errors.push({ row: 1, field: missing.join(', '), message: say('refusals.species.columnMissing') });
+    if (parsed.data.length === 0) errors.push({ row: 2, field: 'row', message: say('refusals.species.noRows') });
     const records: Species[] = [];
     const seen = new Map<string, number>();
     parsed.data.forEach((row, i) => {
       const line = i + 2;
-      const { species, errors: rowErrors } = csvRowToSpecies(row, line);
+      const { species, errors: rowErrors } = csvRowToSpecies(row, line, locale);
       errors.push(...rowErrors);
       if (!species) return;
       for (const f of this.sources.unknownKeys(species))
         errors.push({
           row: line,
           field: 'sources',
-          message: `${f}: "${species.sources[f]}" is not in the sources registry`,
+          message: `${f}: ${say('refusals.species.unknownSource', { source: species.sources[f] })}`,
         });
       const first = seen.get(species.slug);
-      if (first) errors.push({ row: line, field: 'slug', message: `repeats line ${first}` });
+      if (first)
+        errors.push({ row: line, field: 'slug', message: say('refusals.species.repeatsLine', { line: first }) });
       seen.set(species.slug, line);
       records.push(species);
     });
-    if (errors.length === 0) errors.push(...this.crossRowConflicts(records));
+    if (errors.length === 0) errors.push(...this.crossRowConflicts(records, locale));
     if (errors.length > 0) {
-      const say = apiWords(locale);
       throw badRequest(
         [...new Set(errors.map((e) => e.field))].map((field) => ({ field, message: say('refusals.species.seeRows') })),
         say('refusals.species.fileProblems', { count: errors.length }),
@@ -168,13 +170,17 @@ export class SpeciesService {
   }
 
   /** Rows that would clash with another species in the catalogue (same symbol or name, other slug). */
-  private crossRowConflicts(records: Species[]): CsvRowError[] {
+  private crossRowConflicts(records: Species[], locale: WordLocale): CsvRowError[] {
     const bySymbol = new Map(this.store.all().map((s) => [s.usdaSymbol, s.slug]));
     const out: CsvRowError[] = [];
     records.forEach((r, i) => {
       const owner = bySymbol.get(r.usdaSymbol);
       if (owner && owner !== r.slug)
-        out.push({ row: i + 2, field: 'usdaSymbol', message: `is already used by "${owner}"` });
+        out.push({
+          row: i + 2,
+          field: 'usdaSymbol',
+          message: apiWords(locale)('refusals.species.usedBy', { slug: owner }),
+        });
     });
     return out;
   }

@@ -2,6 +2,8 @@ import type { z } from 'zod';
 import { formulaCellProblem } from '../csv/csv-cell.js';
 import type { CsvRowError } from '../types/species-query.js';
 import { type Species, speciesSchema, type TreatmentStep } from '../types/species.js';
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
+import { schemaSentenceIn, zodIssueWordsFor } from '../vocabulary/locale/zod-issue-words.js';
 
 /**
  * The catalogue as CSV: one row per species, lists joined with ";", nested facts in their own
@@ -159,15 +161,18 @@ function parseTreatmentsCell(cell: string | undefined): unknown {
  * wording the web's forms translate), and for an entry of a JSON list (cautions, notes) which entry and
  * part: "entry 4, text: Must be at least 10 characters".
  */
-function issueMessage(issue: z.core.$ZodIssue): string {
-  let message = issue.message;
-  if (issue.code === 'too_small' && issue.origin === 'string') message = `Must be at least ${issue.minimum} characters`;
-  if (issue.code === 'too_big' && issue.origin === 'string') message = `Must be at most ${issue.maximum} characters`;
+function issueMessage(issue: z.core.$ZodIssue, locale: WordLocale): string {
+  let message = schemaSentenceIn(locale, issue.message);
+  if (locale === 'en' && issue.code === 'too_small' && issue.origin === 'string')
+    message = `Must be at least ${issue.minimum} characters`;
+  if (locale === 'en' && issue.code === 'too_big' && issue.origin === 'string')
+    message = `Must be at most ${issue.maximum} characters`;
   const at = issue.path.findIndex((p) => typeof p === 'number');
   const listed = at > 0 && ['cautions', 'reconciliations'].includes(String(issue.path[0]));
   if (!listed) return message;
   const part = issue.path.slice(at + 1).join('.');
-  return `entry ${Number(issue.path[at]) + 1}${part ? `, ${part}` : ''}: ${message}`;
+  const entry = locale === 'es' ? 'entrada' : 'entry';
+  return `${entry} ${Number(issue.path[at]) + 1}${part ? `, ${part}` : ''}: ${message}`;
 }
 
 /** Maps a schema path back to the CSV column a person would fix. */
@@ -205,17 +210,18 @@ export function columnFor(path: readonly PropertyKey[]): string {
 }
 
 /**
- * One CSV row → a checked species record, or the row's errors (line number, column, reason).
- * `line` is the row's line in the file, the header being line 1.
+ * One CSV row → a checked species record, or the row's errors (line number, column, reason in
+ * `locale`). `line` is the row's line in the file, the header being line 1.
  */
 export function csvRowToSpecies(
   row: Partial<Record<string, string>>,
   line: number,
+  locale: WordLocale = 'en',
 ): { species?: Species; errors: CsvRowError[] } {
   const errors: CsvRowError[] = [];
   // Refused before anything else: a formula-like cell is never stored, whatever the column.
   for (const column of SPECIES_CSV_COLUMNS) {
-    const problem = formulaCellProblem(row[column] ?? '');
+    const problem = formulaCellProblem(row[column] ?? '', locale);
     if (problem) errors.push({ row: line, field: column, message: problem });
   }
   const json = (column: SpeciesCsvColumn, fallback: unknown) => {
@@ -224,7 +230,7 @@ export function csvRowToSpecies(
     try {
       return JSON.parse(cell);
     } catch {
-      errors.push({ row: line, field: column, message: 'is not valid JSON' });
+      errors.push({ row: line, field: column, message: locale === 'es' ? 'no es JSON válido' : 'is not valid JSON' });
       return fallback;
     }
   };
@@ -277,10 +283,11 @@ export function csvRowToSpecies(
     sources: json('sources', {}),
     reconciliations: json('reconciliations', []),
   };
-  const parsed = speciesSchema.safeParse(candidate);
+  const words = zodIssueWordsFor(locale);
+  const parsed = speciesSchema.safeParse(candidate, words ? { error: words } : undefined);
   if (!parsed.success) {
     for (const issue of parsed.error.issues)
-      errors.push({ row: line, field: columnFor(issue.path), message: issueMessage(issue) });
+      errors.push({ row: line, field: columnFor(issue.path), message: issueMessage(issue, locale) });
   }
   return errors.length > 0 || !parsed.success ? { errors } : { species: parsed.data, errors };
 }

@@ -1,3 +1,5 @@
+import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
+
 /**
  * CSV cells that are safe to open in a spreadsheet.
  *
@@ -24,11 +26,15 @@ export function csvField(value: string | number | null | undefined): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
-/** Why an imported cell is refused, or null when it is fine. */
-export function formulaCellProblem(cell: string): string | null {
+/** Why an imported cell is refused (in `locale`), or null when it is fine. */
+export function formulaCellProblem(cell: string, locale: WordLocale = 'en'): string | null {
   const text = cell.replace(/^ +/, '');
   if (!startsLikeFormula(text)) return null;
   const first = text[0];
+  if (locale === 'es') {
+    const shown = first === '\t' ? 'un tabulador' : first === '\r' ? 'un salto de línea' : `"${first}"`;
+    return `empieza con ${shown}, y las hojas de cálculo lo ejecutan como fórmula; quítalo`;
+  }
   const shown = first === '\t' ? 'a tab' : first === '\r' ? 'a line break' : `"${first}"`;
   return `starts with ${shown}, which spreadsheet programs run as a formula; remove it`;
 }

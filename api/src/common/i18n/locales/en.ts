@@ -110,6 +110,11 @@ export const en = {
       unknownSource: '"{{source}}" is not in the sources registry',
       seeRows: 'see rows',
       fileProblems: 'The file has {{count}} problem(s); nothing was imported.',
+      csvUnreadable: '{{reason}}',
+      columnMissing: 'column missing from the header',
+      noRows: 'the file has no species rows',
+      repeatsLine: 'repeats line {{line}}',
+      usedBy: 'is already used by "{{slug}}"',
     },
     ecoregions: {
       noRegion: 'No EPA Level III ecoregion "{{code}}".',

@@ -111,6 +111,11 @@ export const es = {
       unknownSource: '"{{source}}" no está en el registro de fuentes',
       seeRows: 'mira las filas',
       fileProblems: 'El archivo tiene {{count}} problema(s); no se importó nada.',
+      csvUnreadable: 'esta fila no se puede leer como CSV ({{reason}})',
+      columnMissing: 'falta esta columna en la cabecera',
+      noRows: 'el archivo no tiene filas de especies',
+      repeatsLine: 'repite la línea {{line}}',
+      usedBy: 'ya lo usa "{{slug}}"',
     },
     ecoregions: {
       noRegion: 'No existe la ecorregión de nivel III de la EPA "{{code}}".',
