@@ -426,5 +426,25 @@ describe('growers, batches and batch logs (e2e, demo data)', () => {
       expect(res.body.fields.map((f: { field: string }) => f.field)).toContain(field);
       expect(await snapshot()).toEqual(before);
     });
+
+    it("grower: dropping a method their batches use → 400 saying the method in the reader's words, not its code", async () => {
+      const before = await snapshot();
+      const send = (language: string) =>
+        t.http
+          .put(`${SEASON}/growers/${who.juniper.id}`)
+          .set(bearer(who.juniper.token))
+          .set('Accept-Language', language)
+          .send({ methods: [{ method: 'outdoor-pot-winter', capacity: 50 }] })
+          .expect(400);
+      expect((await send('en')).body.fields).toContainEqual({
+        field: 'methods',
+        message: 'must keep winter sowing in covered containers: batches use it',
+      });
+      expect((await send('es')).body.fields).toContainEqual({
+        field: 'methods',
+        message: 'debe conservar siembra de invierno en recipientes tapados: hay lotes que lo usan',
+      });
+      expect(await snapshot()).toEqual(before);
+    });
   });
 });

@@ -25,7 +25,9 @@ import {
   type SeasonGrower,
   type SeasonProgress,
   type SplitProposalRequest,
+  type SowingMethod,
   type WordLocale,
+  wordsFor,
 } from '@homeground/shared';
 import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user.js';
@@ -97,7 +99,13 @@ export class BatchesService {
     for (const [key, taken] of used) {
       const [id, method] = key.split('|');
       if (id === userId && taken > 0 && !req.methods.some((m) => m.method === method))
-        problems.push({ field: 'methods', message: say('refusals.batches.keepMethod', { method }) });
+        problems.push({
+          field: 'methods',
+          // The method as growers read it ("outdoor pots over winter"), never its code.
+          message: say('refusals.batches.keepMethod', {
+            method: wordsFor(locale).sowingMethod[method as SowingMethod].phrase,
+          }),
+        });
     }
     if (problems.length) throw badRequest(problems, pleaseCheck(problems, locale));
     await this.db.transaction(async (tx) => {
