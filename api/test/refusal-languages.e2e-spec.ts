@@ -225,6 +225,22 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
     expect(kept.commonNames).not.toContain('=HYPERLINK(x)');
   });
 
+  it('an import without its file: 400 naming the form field, in Spanish for es and the same English otherwise', async () => {
+    const send = (language: string) =>
+      t.http
+        .post('/api/species/import')
+        .set(bearer(tokens.curator))
+        .set('Accept-Language', language)
+        .send({})
+        .expect(400);
+    const es = (await send('es')).body;
+    expect(es.fields).toEqual([{ field: 'file', message: 'es obligatorio' }]);
+    expect(es.message).toBe('Adjunta el archivo en el campo "file".');
+    const en = (await send('en')).body;
+    expect(en.fields).toEqual([{ field: 'file', message: 'is required' }]);
+    expect(en.message).toBe('Attach the file in the "file" field.');
+  });
+
   // The type is sniffed from the bytes (file-type), not the name: a text file named .jpg is refused.
   it('a photo that is not an image: 415 in Spanish, the same English otherwise', async () => {
     const send = (language: string) =>

@@ -462,7 +462,7 @@ export class BatchesService {
         log.filter((e) => e.batchId === row.id),
         {
           species: this.ctx.get(row.slug),
-          growerName: people.get(row.growerId)?.displayName ?? 'A former grower',
+          growerName: people.get(row.growerId)?.displayName ?? apiWords(locale)('refusals.batches.formerGrower'),
           season: c.season,
           targetGerminationPct: c.targets.find((t) => t.slug === row.slug)?.germinationRatePct ?? null,
           today,

@@ -1,16 +1,11 @@
-import {
-  createParamDecorator,
-  type ExecutionContext,
-  UploadedFile,
-  UseInterceptors,
-  type PipeTransform,
-} from '@nestjs/common';
+import { createParamDecorator, type ExecutionContext, UseInterceptors } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import { apiErrorSchema } from '@homeground/shared';
 import { ApiBadRequestResponse, ApiBody, ApiConsumes, ApiParam, ApiQuery, ApiResponse } from '@nestjs/swagger';
 import type { z } from 'zod';
 import { badRequest } from '../validation/bad-request.js';
 import { openApiProperties, openApiSchema } from '../validation/openapi-schema.js';
+import { apiWords } from '../i18n/api-i18n.js';
 import { negotiateLocale } from '../i18n/negotiate-locale.js';
 import { parseRequestPart } from '../validation/zod-validation.pipe.js';
 
@@ -111,19 +106,22 @@ export interface UploadedBlob {
   originalname?: string;
 }
 
-/** Refuses a request without the file, naming the form field. */
-class RequiredFilePipe implements PipeTransform<UploadedBlob | undefined, UploadedBlob> {
-  constructor(private readonly field: string) {}
-
-  transform(file: UploadedBlob | undefined): UploadedBlob {
-    if (!file || file.size === 0)
-      throw badRequest(
-        [{ field: this.field, message: 'is required' }],
-        `Attach the file in the "${this.field}" field.`,
-      );
-    return file;
+/**
+ * The uploaded file multer kept for the route (it runs as an interceptor, before parameters are read);
+ * a request without it is refused naming the form field, in the reader's `Accept-Language`.
+ */
+const RequiredFile = createParamDecorator((field: string, ctx: ExecutionContext): UploadedBlob => {
+  const req = ctx.switchToHttp().getRequest<{
+    file?: UploadedBlob;
+    headers: Record<string, string | string[] | undefined>;
+  }>();
+  const file = req.file;
+  if (!file || file.size === 0) {
+    const say = apiWords(negotiateLocale(req.headers['accept-language']));
+    throw badRequest([{ field, message: say('validation.fileRequired') }], say('validation.attachFile', { field }));
   }
-}
+  return file;
+});
 
 /**
  * One uploaded file in a multipart form field (at most `maxBytes`), required; documents the form
@@ -137,7 +135,7 @@ export function ZodFile(
   fields?: z.ZodObject,
 ): ParameterDecorator {
   return (target, key, index) => {
-    UploadedFile(new RequiredFilePipe(name))(target, key!, index);
+    RequiredFile(name)(target, key!, index);
     markReads(target, key, 'body');
     const extra = fields ? openApiProperties(fields) : [];
     onMethod(

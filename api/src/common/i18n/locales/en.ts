@@ -15,6 +15,8 @@ export const en = {
     notAField: 'is not a field this request accepts',
     utf16: 'is UTF-16 text: save it as "CSV UTF-8" and upload it again',
     notUtf8: 'is not UTF-8 text (another encoding, or not text): save it as "CSV UTF-8" and upload it again',
+    fileRequired: 'is required',
+    attachFile: 'Attach the file in the "{{field}}" field.',
   },
   places: {
     unknownZipField: '{{zip}} is not a US ZIP code we know',
@@ -71,6 +73,7 @@ export const en = {
       noPlan: '{{group}} has no season plan yet: an organiser sets its dates first.',
     },
     batches: {
+      formerGrower: 'A former grower',
       ownMethods: "Growers set their own methods and capacity, not someone else's.",
       notAGrower: 'That person is not a grower or organiser of this group.',
       noBatch: 'No such batch in this season.',

@@ -17,6 +17,8 @@ export const es = {
     notAField: 'no es un campo que esta petición acepte',
     utf16: 'es texto UTF-16: guárdalo como "CSV UTF-8" y súbelo otra vez',
     notUtf8: 'no es texto UTF-8 (otra codificación, o no es texto): guárdalo como "CSV UTF-8" y súbelo otra vez',
+    fileRequired: 'es obligatorio',
+    attachFile: 'Adjunta el archivo en el campo "{{field}}".',
   },
   places: {
     unknownZipField: '{{zip}} no es un código postal de EE. UU. que conozcamos',
@@ -73,6 +75,7 @@ export const es = {
       noPlan: '{{group}} aún no tiene plan de temporada: primero alguien que lo organiza fija sus fechas.',
     },
     batches: {
+      formerGrower: 'Alguien que ya no cultiva con el grupo',
       ownMethods: 'Quien cultiva fija sus propios métodos y capacidad, no los de otra persona.',
       notAGrower: 'Esa persona no cultiva ni organiza en este grupo.',
       noBatch: 'No existe ese lote en esta temporada.',
