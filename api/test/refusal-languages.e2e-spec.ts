@@ -241,6 +241,40 @@ describe('refusals answer in the reader language (e2e, demo data)', () => {
     expect(en.message).toBe('Attach the file in the "file" field.');
   });
 
+  // RFC 7946 §3.1.6: a linear ring is closed (its first and last positions are the same).
+  it("an admin's boundary file: each GeoJSON problem in Spanish for es, the same English otherwise", async () => {
+    const open = [
+      [-90, 44],
+      [-89, 44],
+      [-89, 45],
+      [-90, 45],
+    ];
+    const file = JSON.stringify({
+      type: 'FeatureCollection',
+      features: [
+        { type: 'Feature', properties: { US_L3CODE: '51' }, geometry: { type: 'Polygon', coordinates: [open] } },
+      ],
+    });
+    const send = (language: string) =>
+      t.http
+        .post('/api/ecoregions/boundaries')
+        .set(bearer(tokens.admin))
+        .set('Accept-Language', language)
+        .attach('file', Buffer.from(file), { filename: 'regions.geojson', contentType: 'application/geo+json' })
+        .expect(400);
+    const es = (await send('es')).body;
+    expect(es.message).toBe('El archivo tiene 2 problema(s); no se importó nada.');
+    expect(es.fields).toEqual([
+      { field: 'features[0].properties.US_L3NAME', message: 'es obligatorio' },
+      { field: 'features[0].geometry.coordinates[0]', message: 'un anillo debe terminar donde empieza' },
+    ]);
+    const en = (await send('en')).body;
+    expect(en.fields).toEqual([
+      { field: 'features[0].properties.US_L3NAME', message: 'is required' },
+      { field: 'features[0].geometry.coordinates[0]', message: 'a ring must end where it starts' },
+    ]);
+  });
+
   // The type is sniffed from the bytes (file-type), not the name: a text file named .jpg is refused.
   it('a photo that is not an image: 415 in Spanish, the same English otherwise', async () => {
     const send = (language: string) =>

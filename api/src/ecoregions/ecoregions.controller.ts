@@ -64,8 +64,9 @@ export class EcoregionsController {
     @ZodFile('file', MAX_BOUNDARY_BYTES, 'GeoJSON FeatureCollection with US_L3CODE and US_L3NAME properties')
     file: UploadedBlob,
     @CurrentUser() user: AuthenticatedUser,
+    @RequestLocale() locale: WordLocale,
   ): Promise<BoundaryImportResult> {
-    return this.ecoregions.importBoundaries(file.buffer.toString('utf8'), user.id);
+    return this.ecoregions.importBoundaries(file.buffer.toString('utf8'), user.id, locale);
   }
 
   @Delete('boundaries')

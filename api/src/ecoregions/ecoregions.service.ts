@@ -107,8 +107,8 @@ export class EcoregionsService {
   }
 
   /** Replaces all boundary polygons in one transaction; a bad file changes nothing. */
-  async importBoundaries(text: string, userId: string): Promise<BoundaryImportResult> {
-    const features = parseBoundaryUpload(text, new Map([...this.regions].map(([code, e]) => [code, e.name])));
+  async importBoundaries(text: string, userId: string, locale: WordLocale = 'en'): Promise<BoundaryImportResult> {
+    const features = parseBoundaryUpload(text, new Map([...this.regions].map(([code, e]) => [code, e.name])), locale);
     await this.db.transaction(async (tx) => {
       await runSql(tx, `DELETE FROM ecoregion_boundaries`);
       for (const f of features) {

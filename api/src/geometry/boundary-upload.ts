@@ -1,4 +1,6 @@
 import { assertJsonDepth, MAX_JSON_DEPTH } from '../common/http/json-depth.js';
+import type { WordLocale } from '@homeground/shared';
+import { apiWords } from '../common/i18n/api-i18n.js';
 import { badRequest, type FieldProblem } from '../common/validation/bad-request.js';
 import { geometryProblems, vertexCount } from './boundary-geometry.js';
 import type { MultiPolygon, Polygon } from 'geojson';
@@ -13,21 +15,29 @@ export interface BoundaryFeature {
 /**
  * Checks an uploaded GeoJSON FeatureCollection of Level III regions (properties US_L3CODE and
  * US_L3NAME, as the EPA publishes them; RFC 7946 lon/lat) and returns its features, or answers 400
- * naming every problem. `knownCodes` are the regions in the catalogue.
+ * naming every problem (in `locale`). `knownCodes` are the regions in the catalogue.
  */
-export function parseBoundaryUpload(text: string, knownCodes: Map<string, string>): BoundaryFeature[] {
+export function parseBoundaryUpload(
+  text: string,
+  knownCodes: Map<string, string>,
+  locale: WordLocale = 'en',
+): BoundaryFeature[] {
+  const say = apiWords(locale);
   // Checked on the raw text first, as JSON bodies are: no upload can make the parser recurse without bound.
   assertJsonDepth(text, MAX_JSON_DEPTH, 'file');
   let doc: { type?: unknown; features?: unknown };
   try {
     doc = JSON.parse(text);
   } catch {
-    throw badRequest([{ field: 'file', message: 'is not valid JSON' }], 'The file is not valid JSON.');
+    throw badRequest(
+      [{ field: 'file', message: say('validation.geojson.notJson') }],
+      say('validation.geojson.notJsonSentence'),
+    );
   }
   if (doc?.type !== 'FeatureCollection' || !Array.isArray(doc.features) || doc.features.length === 0) {
     throw badRequest(
-      [{ field: 'file', message: 'must be a GeoJSON FeatureCollection' }],
-      'Expected a GeoJSON FeatureCollection with features.',
+      [{ field: 'file', message: say('validation.geojson.notCollection') }],
+      say('validation.geojson.notCollectionSentence'),
     );
   }
   const problems: FieldProblem[] = [];
@@ -46,19 +56,20 @@ export function parseBoundaryUpload(text: string, knownCodes: Map<string, string
     if (!knownCodes.has(code))
       problems.push({
         field: `${at}.properties.US_L3CODE`,
-        message: `"${code.slice(0, 20)}" is not an EPA Level III code (1–85)`,
+        message: say('validation.geojson.notRegionCode', { code: code.slice(0, 20) }),
       });
-    if (!name) problems.push({ field: `${at}.properties.US_L3NAME`, message: 'is required' });
-    if (seen.has(code)) problems.push({ field: `${at}.properties.US_L3CODE`, message: `${code} appears twice` });
+    if (!name) problems.push({ field: `${at}.properties.US_L3NAME`, message: say('validation.geojson.required') });
+    if (seen.has(code))
+      problems.push({ field: `${at}.properties.US_L3CODE`, message: say('validation.geojson.twice', { code }) });
     seen.add(code);
-    const geometryIssues = geometryProblems(f.geometry, `${at}.geometry`);
+    const geometryIssues = geometryProblems(f.geometry, `${at}.geometry`, say);
     problems.push(...geometryIssues);
     if (geometryIssues.length) return;
     const g = f.geometry as Polygon | MultiPolygon;
     out.push({ code, name, geometry: g, vertices: vertexCount(g) });
   });
   if (problems.length) {
-    throw badRequest(problems.slice(0, 200), `The file has ${problems.length} problem(s); nothing was imported.`);
+    throw badRequest(problems.slice(0, 200), say('validation.geojson.problems', { count: problems.length }));
   }
   return out;
 }

@@ -17,6 +17,23 @@ export const en = {
     notUtf8: 'is not UTF-8 text (another encoding, or not text): save it as "CSV UTF-8" and upload it again',
     fileRequired: 'is required',
     attachFile: 'Attach the file in the "{{field}}" field.',
+    /** An uploaded GeoJSON file of ecoregion outlines (RFC 7946). */
+    geojson: {
+      notJson: 'is not valid JSON',
+      notJsonSentence: 'The file is not valid JSON.',
+      notCollection: 'must be a GeoJSON FeatureCollection',
+      notCollectionSentence: 'Expected a GeoJSON FeatureCollection with features.',
+      notRegionCode: '"{{code}}" is not an EPA Level III code (1–85)',
+      required: 'is required',
+      twice: '{{code}} appears twice',
+      problems: 'The file has {{count}} problem(s); nothing was imported.',
+      notPolygon: 'must be a Polygon or MultiPolygon',
+      emptyCoordinates: 'must be a non-empty array',
+      notRings: 'must be a polygon: a non-empty array of rings',
+      shortRing: 'a ring needs at least 4 positions',
+      notPosition: 'must be [longitude, latitude] in degrees (WGS84)',
+      openRing: 'a ring must end where it starts',
+    },
   },
   places: {
     unknownZipField: '{{zip}} is not a US ZIP code we know',
