@@ -3,7 +3,8 @@
 #   eval "$(bash scripts/postgres-test-server.sh start)"   starts it and exports HOMEGROUND_TEST_PG_URL
 #   bash scripts/postgres-test-server.sh stop "$DIR"        stops it and deletes its data folder
 # The cluster runs as the postgres user in a temporary folder; the test role may create databases, so
-# each e2e file gets a fresh database of its own.
+# each e2e file gets a fresh database of its own. Autovacuum is off: the databases live for one file, and
+# a vacuum worker (the superuser's) connected to one would stop the test role from dropping it.
 set -euo pipefail
 bin=$(ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -1)
 if [ -z "$bin" ]; then
@@ -19,7 +20,7 @@ case "${1:-}" in
     chown postgres "$dir"
     as_postgres "$bin/initdb" -D "$dir/data" -U postgres --auth-local=trust --auth-host=scram-sha-256 -E UTF8 --locale=C.UTF-8 >/dev/null
     as_postgres "$bin/pg_ctl" -D "$dir/data" -l "$dir/server.log" -w \
-      -o "-c listen_addresses=127.0.0.1 -c port=$port -c unix_socket_directories=$dir -c fsync=off" start >/dev/null
+      -o "-c listen_addresses=127.0.0.1 -c port=$port -c unix_socket_directories=$dir -c fsync=off -c autovacuum=off" start >/dev/null
     password=$(head -c 18 /dev/urandom | base64 | tr -dc 'A-Za-z0-9')
     as_postgres "$bin/psql" -h "$dir" -p "$port" -U postgres -q -v ON_ERROR_STOP=1 \
       -c "CREATE ROLE homeground LOGIN CREATEDB PASSWORD '$password'" \

@@ -16,7 +16,18 @@ export async function createTestDatabase(adminUrl: string): Promise<{ url: strin
   return {
     url: url.toString(),
     drop: async () => {
-      await withClient(adminUrl, (c) => c.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`));
+      // FORCE ends the app's own connections; a server process of another role (a vacuum worker, on a
+      // server that runs them) cannot be ended by the test role, so wait for it and try again.
+      for (let attempt = 1; ; attempt++) {
+        try {
+          await withClient(adminUrl, (c) => c.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`));
+          return;
+        } catch (e) {
+          const code = (e as { code?: string }).code;
+          if (attempt >= 20 || (code !== '42501' && code !== '55006')) throw e;
+          await new Promise((r) => setTimeout(r, 250));
+        }
+      }
     },
   };
 }
