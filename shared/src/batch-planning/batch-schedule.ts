@@ -54,7 +54,8 @@ export interface BatchScheduleInput {
   locale?: WordLocale;
 }
 
-const STEP_OF: Partial<Record<CalendarEvent['kind'], BatchStepKind>> = {
+/** The batch step a sowing-calendar event is (events without one are not a batch's step). */
+export const STEP_OF: Partial<Record<CalendarEvent['kind'], BatchStepKind>> = {
   'warm-moist-start': 'start-warm',
   'cms-start': 'start-stratifying',
   'check-sprouts': 'check-sprouts',

@@ -1,23 +1,9 @@
 import type { CalendarEvent, CalendarEventKind, SowingCalendar } from '../sowing-calendar/calendar-types.js';
 import type { Species } from '../types/species.js';
-import type { BatchStepKind } from '../vocabulary/batch-words.js';
 import { batchWordsFor } from '../vocabulary/locale/batch-words-in.js';
 import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
+import { STEP_OF } from './batch-schedule.js';
 import { calendarTextIn, stepDetailIn, warningIn } from './step-details-in.js';
-
-/** The batch step a species event is, so its title is the batch page's own words. */
-const STEP_OF: Partial<Record<CalendarEventKind, BatchStepKind>> = {
-  'warm-moist-start': 'start-warm',
-  'cms-start': 'start-stratifying',
-  'check-sprouts': 'check-sprouts',
-  sow: 'sow',
-  'vent-containers': 'vent-containers',
-  'sprouts-expected': 'sprouts-expected',
-  'pot-up': 'pot-up',
-  'harden-off': 'harden-off',
-  'frost-watch': 'frost-watch',
-  'plant-out': 'ready',
-};
 
 /** Titles of the events that concern the whole calendar, and of holding a plant until the share. */
 const ES_WHOLE: Partial<Record<CalendarEventKind, string>> = {
