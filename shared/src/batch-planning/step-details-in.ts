@@ -3,6 +3,7 @@ import { SOWING_METHOD_WORDS } from '../vocabulary/seed-words.js';
 import { sowingDepthSentence } from '../vocabulary/sowing-depth.js';
 import type { WordLocale } from '../vocabulary/locale/vocabulary.js';
 import { wordsFor } from '../vocabulary/locale/words-for.js';
+import { type SentenceRule, sentenceTable } from '../vocabulary/locale/sentence-table.js';
 
 /**
  * A batch step's "what to do" in the reader's language.
@@ -79,10 +80,8 @@ const FIXED: Record<string, string> = {
     'Criada al aire libre, así que ya aclimatada, en su segunda primavera y con raíces que sostienen el cepellón: plántala o entrégala en el reparto de plantas.',
 };
 
-type Rule = [RegExp, (...groups: string[]) => string];
-
 /** Sentences with values in them: the English pattern and its Spanish. */
-const RULES: Rule[] = [
+const RULES: SentenceRule[] = [
   [
     /^Keep the seed in damp sand or vermiculite in a sealed, labelled bag at room temperature for (\d+) days, then move it to the refrigerator\.$/,
     (days) =>
@@ -123,15 +122,8 @@ const RULES: Rule[] = [
   ],
 ];
 
-function sentenceIn(sentence: string): string | undefined {
-  const fixed = FIXED[sentence];
-  if (fixed !== undefined) return fixed;
-  for (const [pattern, say] of RULES) {
-    const m = pattern.exec(sentence);
-    if (m) return say(...m.slice(1));
-  }
-  return undefined;
-}
+/** One sentence in Spanish, or undefined when it has no twin. */
+const sentenceIn = sentenceTable(FIXED, RULES);
 
 /**
  * A calendar text with no species of its own (the frost date, the winter-sowing window, the share)

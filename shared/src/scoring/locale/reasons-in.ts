@@ -5,6 +5,7 @@ import { HABITAT_WORDS, MOISTURE_WORDS, SOIL_TEXTURE_WORDS, SUN_WORDS } from '..
 import { SPANISH_WORDS as W } from '../../vocabulary/locale/spanish-words.js';
 import { wordsFor } from '../../vocabulary/locale/words-for.js';
 import type { WordLocale } from '../../vocabulary/locale/vocabulary.js';
+import { type SentenceRule, sentenceTable } from '../../vocabulary/locale/sentence-table.js';
 
 /**
  * "Why it fits" and a mix's roles in the reader's language.
@@ -154,10 +155,8 @@ const WETLAND: Record<string, string> = {
   'almost never found in wetlands': 'casi nunca está en humedales',
 };
 
-type Rule = [RegExp, (...groups: string[]) => string | undefined];
-
 /** Sentences with values in them: the English pattern and its Spanish, in Spanish word order. */
-const RULES: Rule[] = [
+const RULES: SentenceRule[] = [
   [/^Native to (.+)\.$/, (state) => `Nativa de ${state}.`],
   [/^Not native to (.+)\.$/, (state) => `No es nativa de ${state}.`],
   [
@@ -316,16 +315,8 @@ const RULES: Rule[] = [
   ],
 ];
 
-/** One sentence of the engine's in Spanish, or undefined when it has no twin. */
-function sentenceIn(sentence: string): string | undefined {
-  const fixed = FIXED[sentence];
-  if (fixed !== undefined) return fixed;
-  for (const [pattern, say] of RULES) {
-    const m = pattern.exec(sentence);
-    if (m) return say(...m.slice(1));
-  }
-  return undefined;
-}
+/** One sentence in Spanish, or undefined when it has no twin. */
+const sentenceIn = sentenceTable(FIXED, RULES);
 
 /**
  * One engine reason in the reader's language. A reason of several sentences (a near miss's
